@@ -1,0 +1,30 @@
+import Link from "next/link";
+
+export const DATA_LICENCE = { name: "CC BY 4.0", url: "https://creativecommons.org/licenses/by/4.0/" } as const;
+
+export function SiteFooter() {
+  return (
+    <footer className="mt-16 border-t border-ink/10 py-8 text-sm dark:border-night-line">
+      <div className="mx-auto grid max-w-page gap-4 px-4 sm:grid-cols-[2fr_1fr]">
+        <div className="space-y-2">
+          <p>
+            Data on Sagline is published under{" "}
+            <a href={DATA_LICENCE.url} rel="license">{DATA_LICENCE.name}</a> — credit “Sagline contributors”. The
+            code is MIT-licensed (see LICENSE).
+          </p>
+          <p className="muted">
+            Sagline reports measurements; it does not certify packs. Charging and high-current use of lithium
+            packs can start fires: follow the maker’s instructions, never charge unattended, and retire swollen
+            packs. <Link href="/methods#safety">Safety notes</Link>.
+          </p>
+        </div>
+        <nav aria-label="Footer" className="flex flex-wrap gap-x-4 gap-y-1 sm:justify-end">
+          <Link href="/methods">Methods</Link>
+          <Link href="/data">Open data &amp; API</Link>
+          <Link href="/charts">Charts</Link>
+          <Link href="/account">Account</Link>
+        </nav>
+      </div>
+    </footer>
+  );
+}

@@ -1,0 +1,62 @@
+// What readers and journalists leave behind: flags on published results, watches, saved charts.
+import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp } from "drizzle-orm/pg-core";
+import { users } from "./auth";
+import { packs } from "./catalogue";
+import { results } from "./results";
+
+export const flagReasons = ["wrong-figures", "wrong-pack", "duplicate", "not-a-measurement", "unsafe", "other"] as const;
+export const flagReason = pgEnum("flag_reason", flagReasons);
+export const flagStatuses = ["open", "kept", "corrected", "withdrawn"] as const;
+export const flagStatus = pgEnum("flag_status", flagStatuses);
+
+export const readerFlags = pgTable(
+  "reader_flags",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    resultId: integer("result_id")
+      .notNull()
+      .references(() => results.id),
+    reporterId: text("reporter_id").references(() => users.id, { onDelete: "set null" }),
+    reporterHash: text("reporter_hash"),
+    reason: flagReason("reason").notNull(),
+    note: text("note"),
+    status: flagStatus("status").notNull().default("open"),
+    resolvedById: text("resolved_by_id").references(() => users.id, { onDelete: "set null" }),
+    resolutionNote: text("resolution_note"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    resolvedAt: timestamp("resolved_at", { withTimezone: true }),
+  },
+  (t) => [index("reader_flags_result_idx").on(t.resultId), index("reader_flags_status_idx").on(t.status)],
+);
+
+export const watches = pgTable(
+  "watches",
+  {
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    packId: integer("pack_id")
+      .notNull()
+      .references(() => packs.id, { onDelete: "cascade" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.userId, t.packId] }), index("watches_pack_idx").on(t.packId)],
+);
+
+export const chartKinds = ["label-check", "curves", "maker-ranking"] as const;
+export const chartKind = pgEnum("chart_kind", chartKinds);
+
+/** A saved chart keeps its full state, so later changes of defaults never change a published chart. */
+export const savedCharts = pgTable(
+  "saved_charts",
+  {
+    id: text("id").primaryKey(),
+    kind: chartKind("kind").notNull(),
+    title: text("title").notNull(),
+    note: text("note"),
+    state: jsonb("state").$type<Record<string, unknown>>().notNull(),
+    createdById: text("created_by_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("saved_charts_created_idx").on(t.createdAt)],
+);

@@ -1,0 +1,6 @@
+export * from "./auth";
+export * from "./catalogue";
+export * from "./results";
+export * from "./community";
+export * from "./system";
+export * from "./relations";

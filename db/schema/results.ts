@@ -1,0 +1,132 @@
+// Results (one test of one pack) with their method card, stored files, computed figures and review
+// state, plus bench profiles (a contributor's equipment) and the review audit log.
+import { sql } from "drizzle-orm";
+import {
+  check, date, index, integer, jsonb, pgEnum, pgTable, real, text, timestamp, uniqueIndex,
+} from "drizzle-orm/pg-core";
+import { users } from "./auth";
+import { packs } from "./catalogue";
+
+export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn", "disputed"] as const;
+export type ReviewStatus = (typeof reviewStatuses)[number];
+export const reviewStatus = pgEnum("review_status", reviewStatuses);
+
+export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
+export type LoadMode = (typeof loadModes)[number];
+export const loadMode = pgEnum("load_mode", loadModes);
+
+/** What the tester states they used to measure resistance (the computed method is in the figures). */
+export const resistanceMethods = ["iec-61960-two-level", "dc-step", "ac-1khz", "charger-readout"] as const;
+export type ResistanceMethod = (typeof resistanceMethods)[number];
+export const resistanceMethod = pgEnum("resistance_method", resistanceMethods);
+
+export type PlausibilityFlag = { code: string; message: string };
+
+export const benchProfiles = pgTable(
+  "bench_profiles",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    loadEquipment: text("load_equipment").notNull(),
+    logger: text("logger"),
+    resistanceMeter: text("resistance_meter"),
+    resistanceMethod: resistanceMethod("resistance_method").notNull(),
+    calibratedOn: date("calibrated_on", { mode: "string" }),
+    notes: text("notes"),
+    defaultAmbientC: real("default_ambient_c"),
+    defaultLoadMode: loadMode("default_load_mode"),
+    defaultCutoffVPerCell: real("default_cutoff_v_per_cell"),
+    defaultStopTemperatureC: real("default_stop_temperature_c"),
+    defaultSampleRateHz: real("default_sample_rate_hz"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("bench_profiles_user_idx").on(t.userId)],
+);
+
+export const results = pgTable(
+  "results",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    packId: integer("pack_id")
+      .notNull()
+      .references(() => packs.id),
+    contributorId: text("contributor_id")
+      .notNull()
+      .references(() => users.id),
+    benchProfileId: integer("bench_profile_id").references(() => benchProfiles.id, { onDelete: "set null" }),
+    status: reviewStatus("status").notNull().default("pending"),
+    // Method card
+    ambientTemperatureC: real("ambient_temperature_c").notNull(),
+    packStartTemperatureC: real("pack_start_temperature_c"),
+    loadMode: loadMode("load_mode").notNull(),
+    loadCurrentA: real("load_current_a").notNull(),
+    cutoffVPerCell: real("cutoff_v_per_cell").notNull(),
+    stopTemperatureC: real("stop_temperature_c").notNull(),
+    resistanceMethod: resistanceMethod("resistance_method").notNull(),
+    equipment: text("equipment").notNull(),
+    sampleRateHz: real("sample_rate_hz"),
+    cyclesBeforeTest: integer("cycles_before_test").notNull().default(0),
+    testedOn: date("tested_on", { mode: "string" }),
+    notes: text("notes"),
+    // Stored files (keys in the upload bucket)
+    logKey: text("log_key").notNull(),
+    logSha256: text("log_sha256").notNull(),
+    logBytes: integer("log_bytes").notNull(),
+    logFilename: text("log_filename").notNull(),
+    photoKeys: jsonb("photo_keys").$type<string[]>().notNull().default([]),
+    // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
+    figures: jsonb("figures").$type<Record<string, unknown>>().notNull(),
+    curve: jsonb("curve").$type<Record<string, unknown>[]>().notNull(),
+    capacityMah: real("capacity_mah"),
+    energyWh: real("energy_wh"),
+    dcResistanceMohm: real("dc_resistance_mohm"),
+    resistanceAt25CMohm: real("resistance_at_25c_mohm"),
+    holdVoltagePerCellV: real("hold_voltage_per_cell_v"),
+    temperatureRiseC: real("temperature_rise_c"),
+    sagLimitedC: real("sag_limited_c"),
+    labelRatio: real("label_ratio"),
+    capacityRatio: real("capacity_ratio"),
+    loadRateC: real("load_rate_c").notNull(),
+    groupKey: text("group_key").notNull(),
+    flags: jsonb("flags").$type<PlausibilityFlag[]>().notNull().default([]),
+    idempotencyKey: text("idempotency_key"),
+    submittedAt: timestamp("submitted_at", { withTimezone: true }).notNull().defaultNow(),
+    publishedAt: timestamp("published_at", { withTimezone: true }),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("results_status_idx").on(t.status, t.submittedAt),
+    index("results_pack_idx").on(t.packId, t.status),
+    index("results_group_idx").on(t.groupKey, t.status),
+    index("results_contributor_idx").on(t.contributorId),
+    index("results_log_sha_idx").on(t.logSha256),
+    uniqueIndex("results_idempotency_idx").on(t.contributorId, t.idempotencyKey),
+    check("results_ambient_range", sql`${t.ambientTemperatureC} between -20 and 60`),
+    check("results_cutoff_range", sql`${t.cutoffVPerCell} between 2.5 and 4.2`),
+    check("results_stop_temp_range", sql`${t.stopTemperatureC} <= 80`),
+    check("results_load_positive", sql`${t.loadCurrentA} > 0`),
+    check("results_cycles_nonneg", sql`${t.cyclesBeforeTest} >= 0`),
+  ],
+);
+
+/** The audit log of review transitions. actorId null means the system did it. */
+export const reviewEvents = pgTable(
+  "review_events",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    resultId: integer("result_id")
+      .notNull()
+      .references(() => results.id),
+    actorId: text("actor_id").references(() => users.id, { onDelete: "set null" }),
+    fromStatus: reviewStatus("from_status"),
+    toStatus: reviewStatus("to_status").notNull(),
+    reason: text("reason"),
+    note: text("note"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("review_events_result_idx").on(t.resultId, t.createdAt)],
+);

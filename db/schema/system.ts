@@ -1,0 +1,41 @@
+// Plumbing: a general audit trail (role changes, catalogue merges), the outgoing mail queue (so a mail
+// outage never loses a message), and rate-limit counters shared by every server process.
+import { index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { users } from "./auth";
+
+export const auditEvents = pgTable(
+  "audit_events",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    actorId: text("actor_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    entityType: text("entity_type").notNull(),
+    entityId: text("entity_id").notNull(),
+    data: jsonb("data").$type<Record<string, unknown>>().notNull().default({}),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId)],
+);
+
+export const mailOutbox = pgTable(
+  "mail_outbox",
+  {
+    id: integer("id").primaryKey().generatedAlwaysAsIdentity(),
+    to: text("to").notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html"),
+    attempts: integer("attempts").notNull().default(0),
+    lastError: text("last_error"),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("mail_outbox_due_idx").on(t.sentAt, t.nextAttemptAt)],
+);
+
+export const rateLimitHits = pgTable("rate_limit_hits", {
+  key: text("key").primaryKey(),
+  count: integer("count").notNull(),
+  resetAt: timestamp("reset_at", { withTimezone: true }).notNull(),
+});

@@ -1,0 +1,26 @@
+// Apply the committed drizzle-kit migrations to DATABASE_URL (or the local default).
+import { drizzle } from "drizzle-orm/node-postgres";
+import { migrate } from "drizzle-orm/node-postgres/migrator";
+import { Pool } from "pg";
+import path from "node:path";
+import { parseEnv } from "../lib/env";
+
+export async function runMigrations(databaseUrl: string): Promise<void> {
+  const pool = new Pool({ connectionString: databaseUrl, max: 1 });
+  try {
+    await migrate(drizzle(pool), { migrationsFolder: path.resolve(__dirname, "../db/migrations") });
+  } finally {
+    await pool.end();
+  }
+}
+
+if (require.main === module) {
+  const { DATABASE_URL } = parseEnv(process.env);
+  runMigrations(DATABASE_URL).then(
+    () => console.log("sagline: database migrated"),
+    (err: unknown) => {
+      console.error(`sagline: error: migration failed: ${err instanceof Error ? err.message : String(err)}`);
+      process.exit(1);
+    },
+  );
+}

@@ -1,0 +1,18 @@
+#!/usr/bin/env bash
+# npm start: install what is missing, start local services, migrate, seed when empty, build, serve.
+source "$(dirname "$0")/lib.sh"
+ensure_postgres_installed
+ensure_node_modules
+ensure_env_file
+export SAGLINE_DEV_TOOLS="${SAGLINE_DEV_TOOLS:-1}"
+export APP_URL="${APP_URL:-http://localhost:$PORT}"
+node_modules/.bin/tsx scripts/check-env.ts
+port_in_use "$PORT" && fail "port $PORT is taken (is Sagline already running?); run npm run stop or set PORT"
+services_start
+$TSX scripts/migrate.ts
+$TSX db/seed/index.ts --if-empty
+say "building (next build)"
+node_modules/.bin/next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; fail "next build failed (full log in .run/build.log)"; }
+say "serving on http://localhost:$PORT  (open this address; npm run stop stops everything)"
+echo $$ >"$RUN_DIR/app.pid"
+exec node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"

@@ -1,0 +1,22 @@
+import { expect, test } from "@playwright/test";
+
+test("home page lists seeded packs that link to their pages", async ({ page }) => {
+  await page.goto("/");
+  await expect(page.getByRole("link", { name: "Sagline home" })).toBeVisible();
+  const links = page.getByTestId("pack-list").getByRole("link");
+  expect(await links.count()).toBeGreaterThanOrEqual(40);
+  const first = links.first();
+  const name = (await first.textContent())?.trim() ?? "";
+  const href = await first.getAttribute("href");
+  expect(href).toMatch(/^\/packs\/[a-z0-9-]+$/);
+  await first.click();
+  await expect(page).toHaveURL(new RegExp(`${href}$`));
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText(name);
+  // The data licence is stated on every page.
+  await expect(page.getByRole("contentinfo")).toContainText("CC BY 4.0");
+});
+
+test("an unknown pack is a 404 page, not an error", async ({ page }) => {
+  const response = await page.goto("/packs/no-such-pack");
+  expect(response?.status()).toBe(404);
+});
