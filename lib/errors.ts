@@ -1,0 +1,75 @@
+// One error type for the whole app, with codes mapped to HTTP statuses. Unknown errors are logged and
+// shown as a plain message without internals.
+import { ZodError } from "zod";
+
+export const errorStatus = {
+  bad_request: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
+  validation: 422,
+  rate_limited: 429,
+  internal: 500,
+  unavailable: 503,
+} as const;
+export type ErrorCode = keyof typeof errorStatus;
+export type FieldErrors = Record<string, string[]>;
+
+export class AppError extends Error {
+  constructor(
+    public readonly code: ErrorCode,
+    message: string,
+    public readonly fieldErrors?: FieldErrors,
+    public readonly retryAfterS?: number,
+  ) {
+    super(message);
+    this.name = "AppError";
+  }
+  get status(): number {
+    return errorStatus[this.code];
+  }
+}
+
+export function fieldErrorsOf(err: ZodError): FieldErrors {
+  const out: FieldErrors = {};
+  for (const issue of err.issues) {
+    const key = issue.path.length ? issue.path.join(".") : "_form";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+/** Normalise anything thrown into an AppError; unknown errors are logged here, once. */
+export function toAppError(err: unknown): AppError {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) return new AppError("validation", "Some values are not valid.", fieldErrorsOf(err));
+  const pgCode = typeof err === "object" && err !== null && "code" in err ? String((err as { code: unknown }).code) : "";
+  if (pgCode === "ECONNREFUSED" || pgCode === "57P01" || pgCode === "57P03" || pgCode === "08006" || pgCode === "08001") {
+    return new AppError("unavailable", "The database is not reachable right now. Nothing was saved; please try again in a moment.");
+  }
+  console.error("[sagline] unexpected error:", err);
+  return new AppError("internal", "Something went wrong on our side. Nothing was saved; please try again.");
+}
+
+export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: FieldErrors } };
+
+export function errorResponse(err: unknown, headers: HeadersInit = {}): Response {
+  const e = toAppError(err);
+  const h = new Headers(headers);
+  if (e.retryAfterS !== undefined) h.set("Retry-After", String(Math.max(1, Math.ceil(e.retryAfterS))));
+  const body: ErrorBody = { error: { code: e.code, message: e.message, ...(e.fieldErrors ? { fieldErrors: e.fieldErrors } : {}) } };
+  return Response.json(body, { status: e.status, headers: h });
+}
+
+/** What every server action returns, for useActionState. */
+export type ActionResult<T = undefined> =
+  | { ok: true; data: T; error?: undefined; fieldErrors?: undefined }
+  | { ok: false; error: string; code: ErrorCode; fieldErrors?: FieldErrors };
+
+export function actionError(err: unknown): ActionResult<never> {
+  const e = toAppError(err);
+  return { ok: false, error: e.message, code: e.code, ...(e.fieldErrors ? { fieldErrors: e.fieldErrors } : {}) };
+}
