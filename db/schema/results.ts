@@ -4,6 +4,7 @@ import { sql } from "drizzle-orm";
 import {
   check, date, index, integer, jsonb, pgEnum, pgTable, real, text, timestamp, uniqueIndex,
 } from "drizzle-orm/pg-core";
+import type { CurvePoint, Figures } from "@/lib/analysis";
 import { users } from "./auth";
 import { packs } from "./catalogue";
 
@@ -79,8 +80,8 @@ export const results = pgTable(
     logFilename: text("log_filename").notNull(),
     photoKeys: jsonb("photo_keys").$type<string[]>().notNull().default([]),
     // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
-    figures: jsonb("figures").$type<Record<string, unknown>>().notNull(),
-    curve: jsonb("curve").$type<Record<string, unknown>[]>().notNull(),
+    figures: jsonb("figures").$type<Figures>().notNull(),
+    curve: jsonb("curve").$type<CurvePoint[]>().notNull(),
     capacityMah: real("capacity_mah"),
     energyWh: real("energy_wh"),
     dcResistanceMohm: real("dc_resistance_mohm"),

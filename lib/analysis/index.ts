@@ -1,0 +1,23 @@
+/**
+ * Sagline's measurement core: pure TypeScript, no I/O, no framework. Parse a log, compute
+ * figures, like-for-like keys and group statistics. Used by the server, the CLI and tests.
+ */
+export {
+  analyseLog, analyseText, resolveOptions,
+  DEFAULT_CURVE_POINTS, DEFAULT_FLOOR_V_PER_CELL, DEFAULT_HOLD_DELAY_S, DEFAULT_LOAD_THRESHOLD_A, DEFAULT_NOMINAL_V_PER_CELL,
+} from "./analyse";
+export type { AnalyseOptions, Analysis, AnalysisParameters, CurvePoint, Figures } from "./types";
+export type { ColumnMapping, ColumnRef } from "./columns";
+export { LogError, isLogError, type LogErrorCode } from "./errors";
+export { DEFAULT_MAX_BYTES, readRows, textChunks, type ChunkSource, type RowHandler } from "./reader";
+export type { Dialect } from "./dialect";
+export {
+  ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL, ACTIVATION_ENERGY_INTERFACE_KJ_PER_MOL, DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL,
+  arrheniusFactor, resistanceAtTemperature,
+} from "./arrhenius";
+export { sagLimitedC, sagLimitedCurrentA, twoLevelResistanceOhm } from "./resistance";
+export { groupKey, ambientBand, ageBand, cutoffBand, rateBand, RESISTANCE_METHODS, type GroupKey, type MethodCardForKey, type ResistanceMethod } from "./group-key";
+export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summarise, MODIFIED_Z_THRESHOLD } from "./statistics";
+export { retentionTrend, END_OF_LIFE_RETAINED, type RetentionTrend } from "./cycles";
+export { lttb } from "./downsample";
+export { inferCells } from "./cells";

@@ -1,0 +1,138 @@
+/**
+ * Benchmark of the log analysis (run: npm run bench:analyse).
+ * Writes a 1,000,000-sample synthetic log (≈31 MB) to .bench/, then measures in this one run:
+ *   floor    — a bare byte scan of the file (read it, count newlines): the I/O floor;
+ *   parse    — papaparse alone, streaming the file with the same reader and config as the analysis;
+ *   analysis — the full analysis (parse + numbers + figures + curve);
+ *   memory   — the analysis's peak memory above a baseline taken after a forced GC, sampled every
+ *              5 ms as heapUsed + external + arrayBuffers (RSS shown beside it).
+ * Targets: analysis ≤ 1.2 × parse, peak memory ≤ 5 × file size.
+ */
+import { once } from "node:events";
+import fs from "node:fs";
+import path from "node:path";
+import Papa from "papaparse";
+import { DEFAULT_MAX_BYTES, analyseLog, readRows } from "../lib/analysis";
+import { csvChunks } from "../lib/synthetic/equivalent-circuit";
+
+const SAMPLES = 1_000_000;
+const ROUNDS = 5;
+const dir = path.resolve(__dirname, "..", ".bench");
+const file = path.join(dir, "bench-1m.csv");
+const gc = (globalThis as { gc?: () => void }).gc ?? (() => undefined);
+
+async function writeLog(): Promise<number> {
+  fs.mkdirSync(dir, { recursive: true });
+  const out = fs.createWriteStream(file);
+  const chunks = csvChunks(
+    { seed: 7, cells: 6, capacityMah: 5000, cRate: 0.25, sampleIntervalS: 0.0125, iecPrelude: true, maxSamples: SAMPLES, noise: { voltageV: 0.002, currentA: 0.005, temperatureC: 0.05 } },
+    { decimals: { time: 4 } },
+    4096,
+  );
+  for (const chunk of chunks) if (!out.write(chunk)) await once(out, "drain");
+  out.end();
+  await once(out, "finish");
+  return fs.statSync(file).size;
+}
+
+async function byteScan(): Promise<number> {
+  let lines = 0;
+  for await (const chunk of fs.createReadStream(file) as AsyncIterable<Buffer>) {
+    for (let i = chunk.indexOf(10); i !== -1; i = chunk.indexOf(10, i + 1)) lines++;
+  }
+  return lines;
+}
+
+async function parseOnly(): Promise<number> {
+  let rows = 0;
+  await readRows(fs.createReadStream(file), { begin() {}, rows(_r, count) { rows += count; }, end() {} }, DEFAULT_MAX_BYTES);
+  return rows;
+}
+
+/** papaparse's own Node streaming entry point, for reference only. */
+function papaNodeStream(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    let rows = 0;
+    Papa.parse(fs.createReadStream(file), {
+      delimiter: ",",
+      newline: "\n",
+      chunk: (r: Papa.ParseResult<string[]>) => { rows += r.data.length; },
+      complete: () => resolve(rows),
+      error: reject,
+    });
+  });
+}
+
+async function analyse(): Promise<{ samples: number; peakHeapB: number; peakRssB: number }> {
+  gc();
+  const base = process.memoryUsage();
+  const baseHeap = base.heapUsed + base.external + base.arrayBuffers;
+  let peakHeap = 0;
+  let peakRss = 0;
+  const sample = () => {
+    const m = process.memoryUsage();
+    peakHeap = Math.max(peakHeap, m.heapUsed + m.external + m.arrayBuffers - baseHeap);
+    peakRss = Math.max(peakRss, m.rss - base.rss);
+  };
+  const timer = setInterval(sample, 5);
+  try {
+    const result = await analyseLog(fs.createReadStream(file), { cells: 6, ratedMah: 5000 });
+    sample();
+    return { samples: result.figures.samples, peakHeapB: peakHeap, peakRssB: peakRss };
+  } finally {
+    clearInterval(timer);
+  }
+}
+
+async function timed<T>(fn: () => Promise<T>): Promise<{ ms: number; value: T }> {
+  gc();
+  const t0 = process.hrtime.bigint();
+  const value = await fn();
+  return { ms: Number(process.hrtime.bigint() - t0) / 1e6, value };
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)] as number;
+}
+
+async function main(): Promise<void> {
+  if (!(globalThis as { gc?: unknown }).gc) console.log("note: run with --expose-gc (npm run bench:analyse) for a clean memory baseline");
+  const t0 = Date.now();
+  const bytes = await writeLog();
+  console.log(`log: ${file} — ${(bytes / 1e6).toFixed(1)} MB, ${SAMPLES.toLocaleString("en")} samples (written in ${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+  const scan: number[] = [];
+  const parse: number[] = [];
+  const papa: number[] = [];
+  const full: number[] = [];
+  let peakHeapB = 0;
+  let peakRssB = 0;
+  await timed(analyse); // warm-up: JIT and file cache
+  await timed(parseOnly);
+  for (let round = 0; round < ROUNDS; round++) {
+    scan.push((await timed(byteScan)).ms);
+    parse.push((await timed(parseOnly)).ms);
+    papa.push((await timed(papaNodeStream)).ms);
+    const a = await timed(analyse);
+    full.push(a.ms);
+    if (a.value.samples !== SAMPLES) throw new Error(`analysis read ${a.value.samples} samples, expected ${SAMPLES}`);
+    peakHeapB = Math.max(peakHeapB, a.value.peakHeapB);
+    peakRssB = Math.max(peakRssB, a.value.peakRssB);
+  }
+  const [fScan, fParse, fPapa, fFull] = [median(scan), median(parse), median(papa), median(full)];
+  const row = (name: string, ms: number, xs: number[]) => console.log(`${name.padEnd(44)} ${ms.toFixed(0).padStart(6)} ms  (runs: ${xs.map((x) => x.toFixed(0)).join(", ")})`);
+  console.log(`medians of ${ROUNDS} rounds:`);
+  row("bare byte scan (floor)", fScan, scan);
+  row("papaparse alone, same reader and config", fParse, parse);
+  row("papaparse's own Node stream API (reference)", fPapa, papa);
+  row("full analysis", fFull, full);
+  console.log(`peak memory above post-GC baseline: heapUsed+external+arrayBuffers ${(peakHeapB / 1e6).toFixed(1)} MB, RSS ${(peakRssB / 1e6).toFixed(1)} MB; file ${(bytes / 1e6).toFixed(1)} MB`);
+  const ratio = fFull / fParse;
+  console.log(`targets: analysis ≤ 1.2 × parse (${ratio <= 1.2 ? "met" : "NOT met"}), peak memory ≤ 5 × file (${peakHeapB / bytes <= 5 ? "met" : "NOT met"}; memory figure is heapUsed+external+arrayBuffers)`);
+  console.log(`analyse/parse ratio: ${ratio.toFixed(2)}, floor ratio: ${(fFull / fScan).toFixed(2)}, peak memory: ${(peakHeapB / bytes).toFixed(2)} x file`);
+}
+
+main().catch((error: unknown) => {
+  console.error(error instanceof Error ? error.message : String(error));
+  process.exit(1);
+});
