@@ -88,7 +88,11 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
           iecPrelude: campaign.method === "iec-61960-two-level",
           initialRestS: 5,
           finalRestS: 5,
-          noise: { voltageV: 0.002 * pack.cellsInSeries, currentA: 0.02, temperatureC: 0.1 },
+          // The two-level campaign uses a 4-wire sense and a quiet load, so its readings are far less
+          // noisy: at 1 It the step is only a few mV per cell.
+          noise: campaign.method === "iec-61960-two-level"
+            ? { voltageV: 0.0005 * pack.cellsInSeries, currentA: 0.005, temperatureC: 0.05 }
+            : { voltageV: 0.002 * pack.cellsInSeries, currentA: 0.006, temperatureC: 0.1 },
         });
         const csv = toCsv(rows, campaign.dialect);
         const analysis = await analyseText(csv, {

@@ -13,7 +13,7 @@ export class SampleBatch {
   voltageV = new Float64Array(0);
   currentA = new Float64Array(0);
   temperatureC = new Float64Array(0);
-  minCellV = new Float64Array(0);
+  minCellVoltageV = new Float64Array(0);
 
   reserve(size: number): void {
     if (this.timeS.length >= size) return;
@@ -22,7 +22,7 @@ export class SampleBatch {
     this.voltageV = new Float64Array(n);
     this.currentA = new Float64Array(n);
     this.temperatureC = new Float64Array(n);
-    this.minCellV = new Float64Array(n);
+    this.minCellVoltageV = new Float64Array(n);
   }
 }
 
@@ -30,9 +30,9 @@ export class SampleBatch {
 export class DirectionTotals {
   chargeAs = 0;
   energyWs = 0;
-  minV = Number.POSITIVE_INFINITY;
-  minCellV = Number.POSITIVE_INFINITY;
-  peakI = 0;
+  minVoltageV = Number.POSITIVE_INFINITY;
+  minCellVoltageV = Number.POSITIVE_INFINITY;
+  peakCurrentA = 0;
   loadSamples = 0;
   open: Stretch | null = null;
   /** The longest stretch so far (by time from onset to last load sample). */
@@ -44,10 +44,10 @@ export class DirectionTotals {
 
 export class Accumulator {
   samples = 0;
-  firstT = Number.NaN;
-  lastT = Number.NaN;
-  firstV = Number.NaN;
-  maxRestV = Number.NEGATIVE_INFINITY;
+  firstTimeS = Number.NaN;
+  lastTimeS = Number.NaN;
+  firstVoltageV = Number.NaN;
+  maxRestVoltageV = Number.NEGATIVE_INFINITY;
   restSamples = 0;
   temperatureSamples = 0;
   duplicateTimes = 0;
@@ -61,14 +61,15 @@ export class Accumulator {
   readonly negative = new DirectionTotals();
   readonly curve: CurveBuckets;
 
-  private lastV = 0;
-  private lastI = 0;
-  private lastTemp = Number.NaN;
+  private lastVoltageV = 0;
+  private lastCurrentA = 0;
+  private lastTemperatureC = Number.NaN;
   private lastSign = 0;
+  private lastIntervalS = 0;
   /** Lowest temperature that could change a watched stretch (−∞: check every sample). */
   private watchFromC = Number.NEGATIVE_INFINITY;
 
-  constructor(private readonly settings: StretchSettings, curveBuckets = 1024) {
+  constructor(private readonly settings: StretchSettings, curveBuckets = 512) {
     this.curve = new CurveBuckets(curveBuckets);
   }
 
@@ -78,17 +79,22 @@ export class Accumulator {
     const V = batch.voltageV;
     const I = batch.currentA;
     const TEMP = batch.temperatureC;
-    const CELL = batch.minCellV;
+    const CELL = batch.minCellVoltageV;
     const thr = this.settings.loadThresholdA;
     const pos = this.positive;
     const neg = this.negative;
     const curve = this.curve;
     let samples = this.samples;
-    let lastT = this.lastT;
-    let lastV = this.lastV;
-    let lastI = this.lastI;
-    let lastTemp = this.lastTemp;
+    let lastT = this.lastTimeS;
+    let lastV = this.lastVoltageV;
+    let lastI = this.lastCurrentA;
+    let lastTemp = this.lastTemperatureC;
     let lastSign = this.lastSign;
+    let lastDt = this.lastIntervalS;
+    let duplicates = this.duplicateTimes;
+    let maxGapS = this.maxGapS;
+    let restSamples = this.restSamples;
+    let maxRestV = this.maxRestVoltageV;
     let qPos = pos.chargeAs;
     let qNeg = neg.chargeAs;
     let ePos = pos.energyWs;
@@ -105,8 +111,9 @@ export class Accumulator {
       if (samples > 0 && sign === lastSign) {
         // The common case: still in the same stretch (or still at rest).
         const dt = t - lastT;
-        if (dt === 0) this.duplicateTimes++;
-        else if (dt > this.maxGapS) this.maxGapS = dt;
+        if (dt === 0) duplicates++;
+        else if (dt > maxGapS) maxGapS = dt;
+        lastDt = dt;
         const di = i - lastI;
         if (di > thr || di < -thr) {
           const s = (v - lastV) * di;
@@ -114,8 +121,8 @@ export class Accumulator {
           stepAbs += s < 0 ? -s : s;
         }
         if (sign === 0) {
-          this.restSamples++;
-          if (v > this.maxRestV) this.maxRestV = v;
+          restSamples++;
+          if (v > maxRestV) maxRestV = v;
         } else {
           const half = 0.5 * dt;
           const dq = sign * (lastI + i) * half;
@@ -137,14 +144,17 @@ export class Accumulator {
         let dq = 0;
         let de = 0;
         if (samples === 0) {
-          this.firstT = t;
-          this.firstV = v;
+          this.firstTimeS = t;
+          this.firstVoltageV = v;
         } else {
           const dt = t - lastT;
-          if (dt === 0) this.duplicateTimes++;
-          else if (dt > this.maxGapS) this.maxGapS = dt;
-          const half = 0.5 * dt;
-          // Trapezoid per direction; the rest end of an interval counts as zero current.
+          if (dt === 0) duplicates++;
+          else if (dt > maxGapS) maxGapS = dt;
+          // Trapezoid per direction; the rest end of an interval counts as zero current. At a
+          // stretch's edge the ramp counts at most one sampling interval (the one before): a
+          // logger that writes rest rows once a minute must not stretch a discharge into its rest.
+          const half = 0.5 * (lastDt > 0 && lastDt < dt ? lastDt : dt);
+          lastDt = dt;
           const a = lastSign === 1 ? lastI : 0;
           const b = sign === 1 ? i : 0;
           const c = lastSign === -1 ? -lastI : 0;
@@ -177,8 +187,8 @@ export class Accumulator {
           de = sign === 1 ? dePos : deNeg;
         }
         if (sign === 0) {
-          this.restSamples++;
-          if (v > this.maxRestV) this.maxRestV = v;
+          restSamples++;
+          if (v > maxRestV) maxRestV = v;
         } else {
           const side = sign === 1 ? pos : neg;
           const prev = samples > 0 ? { t: lastT, v: lastV, i: sign * lastI, temp: lastTemp, rest: lastSign === 0 } : null;
@@ -204,11 +214,16 @@ export class Accumulator {
       lastSign = sign;
     }
     this.samples = samples;
-    this.lastT = lastT;
-    this.lastV = lastV;
-    this.lastI = lastI;
-    this.lastTemp = lastTemp;
+    this.lastTimeS = lastT;
+    this.lastVoltageV = lastV;
+    this.lastCurrentA = lastI;
+    this.lastTemperatureC = lastTemp;
     this.lastSign = lastSign;
+    this.lastIntervalS = lastDt;
+    this.duplicateTimes = duplicates;
+    this.maxGapS = maxGapS;
+    this.restSamples = restSamples;
+    this.maxRestVoltageV = maxRestV;
     pos.chargeAs = qPos;
     pos.energyWs = ePos;
     neg.chargeAs = qNeg;
@@ -238,7 +253,7 @@ export class Accumulator {
   /** The curve's kept samples, the log's last sample included. */
   curvePoints(): RawCurvePoint[] {
     const last: RawCurvePoint | null = this.samples > 0
-      ? { timeS: this.lastT, voltageV: this.lastV, currentA: this.lastI, temperatureC: this.lastTemp, positiveChargeAs: this.positive.chargeAs, negativeChargeAs: this.negative.chargeAs }
+      ? { timeS: this.lastTimeS, voltageV: this.lastVoltageV, currentA: this.lastCurrentA, temperatureC: this.lastTemperatureC, positiveChargeAs: this.positive.chargeAs, negativeChargeAs: this.negative.chargeAs }
       : null;
     return this.curve.points(last);
   }
@@ -255,9 +270,9 @@ export class Accumulator {
     side.open = null;
     this.watchFromC = Number.NEGATIVE_INFINITY;
     side.loadSamples += stretch.samples;
-    if (stretch.minV < side.minV) side.minV = stretch.minV;
-    if (stretch.minCellV < side.minCellV) side.minCellV = stretch.minCellV;
-    if (stretch.peakI > side.peakI) side.peakI = stretch.peakI;
+    if (stretch.minVoltageV < side.minVoltageV) side.minVoltageV = stretch.minVoltageV;
+    if (stretch.minCellVoltageV < side.minCellVoltageV) side.minCellVoltageV = stretch.minCellVoltageV;
+    if (stretch.peakCurrentA > side.peakCurrentA) side.peakCurrentA = stretch.peakCurrentA;
     if (!side.best || stretch.durationS > side.best.durationS) side.best = stretch;
     if (!side.twoLevel && stretch.twoLevel) side.twoLevel = stretch;
   }

@@ -13,7 +13,8 @@ import type { AnalyseOptions, Analysis, CurvePoint, ResolvedOptions } from "./ty
 
 export const DEFAULT_HOLD_DELAY_S = 10;
 export const DEFAULT_CURVE_POINTS = 400;
-export const MAX_CURVE_POINTS = 5000;
+/** The chart curve never ships more than this many points, whatever the caller asks. */
+export const MAX_CURVE_POINTS = 500;
 export const DEFAULT_LOAD_THRESHOLD_A = 0.02;
 /** Nominal LiPo cell voltage (common practice: the figure printed on packs, 3.7 V). */
 export const DEFAULT_NOMINAL_V_PER_CELL = 3.7;

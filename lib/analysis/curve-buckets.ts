@@ -26,7 +26,7 @@ export class CurveBuckets {
   private current = 0;
   private currentEndS = Number.NEGATIVE_INFINITY;
 
-  constructor(bucketCount = 1024) {
+  constructor(bucketCount = 512) {
     this.bucketCount = bucketCount;
     this.data = new Float64Array(bucketCount * SLOTS * FIELDS);
     this.filled = new Uint8Array(bucketCount);

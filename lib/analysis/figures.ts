@@ -13,6 +13,8 @@ import type { Stretch } from "./stretch";
 import type { Figures, ResolvedOptions } from "./types";
 
 export const MIN_SAMPLES = 10;
+/** How far above the stated cut-off (per cell) a discharge may stop and still count as reaching it. */
+export const CUTOFF_TOLERANCE_V_PER_CELL = 0.01;
 
 function num(x: number): number | null {
   return Number.isFinite(x) ? x : null;
@@ -64,17 +66,17 @@ function dcResistance(side: DirectionTotals, main: Stretch, sign: number, opts: 
     warnings.push("The main discharge does not start from rest, so no DC resistance can be read from its first second.");
     return null;
   }
-  if (!Number.isFinite(main.stepV)) {
+  if (!Number.isFinite(main.stepVoltageV)) {
     warnings.push("No sample within 2 s of the start of the main discharge: sampling is too coarse for a DC resistance.");
     return null;
   }
-  const ohm = twoLevelResistanceOhm(main.restV, main.restI, main.stepV, main.stepI);
+  const ohm = twoLevelResistanceOhm(main.restVoltageV, main.restCurrentA, main.stepVoltageV, main.stepCurrentA);
   if (!(ohm > 0)) {
     warnings.push("The rest→load step gave a resistance of zero or less (noise or a logging fault); it is not reported.");
     return null;
   }
-  if (main.stepLate) warnings.push("The first load sample came later than 1 s after the step; the step resistance uses it and reads a little high.");
-  return { ohm, method: "step", temperatureC: main.stepTemp };
+  if (main.stepSampledLate) warnings.push("The first load sample came later than 1 s after the step; the step resistance uses it and reads a little high.");
+  return { ohm, method: "step", temperatureC: main.stepTemperatureC };
 }
 
 export function computeFigures(acc: Accumulator, sink: SampleSink, opts: ResolvedOptions): { figures: Figures; sign: 1 | -1 } {
@@ -93,7 +95,7 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
   if (sign === -1) warnings.push("Discharge current is logged as negative; figures use it as positive.");
 
   const plan = sink.plan;
-  const restV = acc.restSamples > 0 ? acc.maxRestV : acc.firstV;
+  const restVoltageV = acc.restSamples > 0 ? acc.maxRestVoltageV : acc.firstVoltageV;
   let cells: number | null = opts.cells ?? null;
   let cellsSource: Figures["cellsSource"] = cells !== null ? "given" : null;
   if (cells === null && plan && plan.cells.length > 0) {
@@ -101,42 +103,46 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
     cellsSource = "cell-columns";
   }
   if (cells === null) {
-    const guess = inferCells(restV, side.minV);
+    const guess = inferCells(restVoltageV, side.minVoltageV);
     cells = guess.cells;
     cellsSource = cells !== null ? "rest-voltage" : null;
-    if (cells === null) warnings.push(`Cells in series could not be inferred from the rest voltage ${restV.toFixed(2)} V: give the cell count.`);
+    if (cells === null) warnings.push(`Cells in series could not be inferred from the rest voltage ${restVoltageV.toFixed(2)} V: give the cell count.`);
     else {
       if (acc.restSamples === 0) warnings.push("The log never rests, so the cell count was inferred from its first voltage.");
-      if (guess.wide && guess.alternatives.length === 0) warnings.push(`The rest voltage ${restV.toFixed(2)} V is low for a charged pack; cells in series taken as ${cells} (${(restV / cells).toFixed(2)} V per cell): give the cell count to be sure.`);
+      if (guess.wide && guess.alternatives.length === 0) warnings.push(`The rest voltage ${restVoltageV.toFixed(2)} V is low for a charged pack; cells in series taken as ${cells} (${(restVoltageV / cells).toFixed(2)} V per cell): give the cell count to be sure.`);
       if (guess.alternatives.length > 0) {
-        warnings.push(`Cells in series inferred as ${cells} from the rest voltage ${restV.toFixed(2)} V (${(restV / cells).toFixed(2)} V per cell); ${guess.alternatives.map((n) => `${n} (${(restV / n).toFixed(2)} V)`).join(", ")} would also fit: give the cell count to be sure.`);
+        warnings.push(`Cells in series inferred as ${cells} from the rest voltage ${restVoltageV.toFixed(2)} V (${(restVoltageV / cells).toFixed(2)} V per cell); ${guess.alternatives.map((n) => `${n} (${(restVoltageV / n).toFixed(2)} V)`).join(", ")} would also fit: give the cell count to be sure.`);
       }
     }
-  } else if (acc.restSamples > 0 && (restV / cells > 4.45 || restV / cells < 2.5)) {
-    warnings.push(`The rest voltage ${restV.toFixed(2)} V is ${(restV / cells).toFixed(2)} V per cell for ${cells} cells, outside the LiPo range: check the cell count.`);
+  } else if (acc.restSamples > 0 && (restVoltageV / cells > 4.45 || restVoltageV / cells < 2.5)) {
+    warnings.push(`The rest voltage ${restVoltageV.toFixed(2)} V is ${(restVoltageV / cells).toFixed(2)} V per cell for ${cells} cells, outside the LiPo range: check the cell count.`);
   }
 
   const capacityMah = side.chargeAs / 3.6;
   const energyWh = side.energyWs / 3600;
   const meanVoltageV = side.chargeAs > 0 ? side.energyWs / side.chargeAs : Number.NaN;
-  const minVoltageV = side.minV;
+  const minVoltageV = side.minVoltageV;
   const perCell = (x: number | null) => (cells ? div(x, cells) : null);
 
-  const startTemperatureC = num(main.startTemp);
-  const peakTemperatureC = num(main.peakTemp);
+  const startTemperatureC = num(main.startTemperatureC);
+  const peakTemperatureC = num(main.peakTemperatureC);
   const temperatureRiseC = startTemperatureC !== null && peakTemperatureC !== null ? peakTemperatureC - startTemperatureC : null;
   if (acc.temperatureSamples === 0 && plan?.temperature !== null && plan !== null) warnings.push("The temperature column holds no usable value.");
 
   let timeToCutoffS: number | null = main.durationS;
   if (opts.cutoffVPerCell !== undefined) {
     timeToCutoffS = cells ? num(main.timeToVoltageS(opts.cutoffVPerCell * cells)) : null;
-    if (cells && timeToCutoffS === null) warnings.push(`The main discharge never reached the cut-off of ${opts.cutoffVPerCell} V per cell.`);
+    // Equipment stops at the cut-off by its own meter; a log that ends a few mV short counts as reaching it.
+    if (cells && timeToCutoffS === null && main.minVoltageV <= (opts.cutoffVPerCell + CUTOFF_TOLERANCE_V_PER_CELL) * cells) {
+      timeToCutoffS = num(main.timeToVoltageS(main.minVoltageV));
+      warnings.push(`The main discharge stopped within ${CUTOFF_TOLERANCE_V_PER_CELL * 1000} mV per cell of the ${opts.cutoffVPerCell} V cut-off; its lowest voltage is taken as the cut-off.`);
+    } else if (cells && timeToCutoffS === null) warnings.push(`The main discharge never reached the cut-off of ${opts.cutoffVPerCell} V per cell.`);
   }
-  const timeToStopTemperatureS = opts.stopTemperatureC !== undefined ? num(main.stopTempT - main.onsetT) : null;
+  const timeToStopTemperatureS = opts.stopTemperatureC !== undefined ? num(main.stopTemperatureTimeS - main.onsetTimeS) : null;
 
-  let holdVoltagePerCellV = perCell(num(main.holdV));
+  let holdVoltagePerCellV = perCell(num(main.holdVoltageV));
   if (holdVoltagePerCellV === null && main.durationS < opts.holdDelayS) warnings.push(`The main discharge is shorter than the hold delay of ${opts.holdDelayS} s, so there is no hold voltage.`);
-  if (main.holdLate && holdVoltagePerCellV !== null) warnings.push(`No sample fell exactly ${opts.holdDelayS} s into the main discharge; the next one was used for the hold voltage.`);
+  if (main.holdSampledLate && holdVoltagePerCellV !== null) warnings.push(`No sample fell exactly ${opts.holdDelayS} s into the main discharge; the next one was used for the hold voltage.`);
   if (holdVoltagePerCellV !== null && !cells) holdVoltagePerCellV = null;
 
   const r = dcResistance(side, main, sign, opts, warnings);
@@ -156,7 +162,7 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
   const figures: Figures = {
     samples: acc.samples,
     skippedLines: sink.blankLines + sink.brokenLines + sink.preambleLines + sink.skippedBackwards,
-    durationS: num(acc.lastT - acc.firstT) ?? 0,
+    durationS: num(acc.lastTimeS - acc.firstTimeS) ?? 0,
     cells,
     capacityMah: num(capacityMah),
     energyWh: num(energyWh),
@@ -164,7 +170,7 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
     meanVoltagePerCellV: perCell(num(meanVoltageV)),
     minVoltageV: num(minVoltageV),
     minVoltagePerCellV: perCell(num(minVoltageV)),
-    peakCurrentA: num(side.peakI),
+    peakCurrentA: num(side.peakCurrentA),
     startTemperatureC,
     peakTemperatureC,
     temperatureRiseC: temperatureRiseC === null ? null : num(temperatureRiseC),
@@ -185,8 +191,8 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
     mainDischargeDurationS: num(mainDurationS),
     mainDischargeCapacityMah: num(main.chargeAs / 3.6),
     mainDischargeEnergyWh: num(main.energyWs / 3600),
-    restVoltageV: num(restV),
-    minCellVoltageV: num(side.minCellV),
+    restVoltageV: num(restVoltageV),
+    minCellVoltageV: num(side.minCellVoltageV),
     dischargeCurrentSign: sign === 1 ? "positive" : "negative",
     cellsSource,
     warnings,

@@ -34,44 +34,49 @@ export const TWO_LEVEL_MAX_LOW_S = 60;
 export const TWO_LEVEL_RATIO_MIN = 3;
 export const TWO_LEVEL_RATIO_MAX = 8;
 
+function levelTolerance(currentA: number, thresholdA: number): number {
+  return Math.max(0.25 * Math.abs(currentA), 2 * thresholdA);
+}
+
 type Pending = { lowStartT: number; stepT: number; u1: number; i1: number; pT: number; pV: number; pI: number; pTemp: number; hasPrev: boolean };
 
 /**
  * Watches the samples of one load stretch for a low current level held at least 5 s followed
  * by a level 3–8 times higher (a low step of 5–60 s) (nominally 0.2 It → 1 It, a ratio of 5), and reads U1, I1, U2, I2.
- * A level is a run of samples within ±5 % (at least the load threshold) of its first current.
+ * A level is a run of samples within ±25 % (at least twice the load threshold) of its first
+ * current: wide enough for a noisy logger at 0.2 It, narrow enough that the ×5 step always leaves it.
  * IEC 61960-3 starts the low step from rest, so only the start of a stretch is searched: the
  * detector finishes at the first level of 1 s or more that is not followed by a valid high step
  * (shorter levels are taken as the load settling).
  */
 export class TwoLevelDetector {
   private n = 0;
-  private sum = 0;
-  private low = Number.POSITIVE_INFINITY;
-  private high = Number.NEGATIVE_INFINITY;
-  private levelStartT: number;
-  private lastT = Number.NaN;
-  private lastV = Number.NaN;
-  private lastI = Number.NaN;
+  private sumA = 0;
+  private lowA = Number.POSITIVE_INFINITY;
+  private highA = Number.NEGATIVE_INFINITY;
+  private levelStartS: number;
+  private lastTimeS = Number.NaN;
+  private lastVoltageV = Number.NaN;
+  private lastCurrentA = Number.NaN;
   private pending: Pending | null = null;
-  private pendingLow = 0;
-  private pendingHigh = 0;
+  private pendingLowA = 0;
+  private pendingHighA = 0;
   /** Nothing more to look for in this stretch. */
   finished = false;
 
-  constructor(private readonly thresholdA: number, onsetT: number) {
-    this.levelStartT = onsetT;
+  constructor(private readonly thresholdA: number, onsetTimeS: number) {
+    this.levelStartS = onsetTimeS;
   }
 
   add(t: number, v: number, i: number, temp: number): TwoLevelReading | null {
-    if (this.pending === null && i >= this.low && i <= this.high) {
-      if (t - this.levelStartT > TWO_LEVEL_MAX_LOW_S) this.finished = true;
+    if (this.pending === null && i >= this.lowA && i <= this.highA) {
+      if (t - this.levelStartS > TWO_LEVEL_MAX_LOW_S) this.finished = true;
       // The common case, once per sample: still on the same level.
       this.n++;
-      this.sum += i;
-      this.lastT = t;
-      this.lastV = v;
-      this.lastI = i;
+      this.sumA += i;
+      this.lastTimeS = t;
+      this.lastVoltageV = v;
+      this.lastCurrentA = i;
       return null;
     }
     return this.addSlow(t, v, i, temp);
@@ -81,40 +86,40 @@ export class TwoLevelDetector {
     let reading: TwoLevelReading | null = null;
     const p = this.pending;
     if (p) {
-      if (i < this.pendingLow || i > this.pendingHigh) {
+      if (i < this.pendingLowA || i > this.pendingHighA) {
         this.pending = null;
         this.finished = true;
       } else reading = this.readHigh(p, t, v, i, temp);
     }
-    if (this.n > 0 && i >= this.low && i <= this.high) {
+    if (this.n > 0 && i >= this.lowA && i <= this.highA) {
       this.n++;
-      this.sum += i;
-      this.lastT = t;
-      this.lastV = v;
-      this.lastI = i;
+      this.sumA += i;
+      this.lastTimeS = t;
+      this.lastVoltageV = v;
+      this.lastCurrentA = i;
       return reading;
     }
     if (this.n > 0) {
-      const lowS = this.lastT - this.levelStartT;
-      const ratio = i / (this.sum / this.n);
+      const lowS = this.lastTimeS - this.levelStartS;
+      const ratio = i / (this.sumA / this.n);
       if (lowS >= TWO_LEVEL_MIN_LOW_S - 0.1 && lowS <= TWO_LEVEL_MAX_LOW_S && ratio >= TWO_LEVEL_RATIO_MIN && ratio <= TWO_LEVEL_RATIO_MAX) {
-        const fresh: Pending = { lowStartT: this.levelStartT, stepT: this.lastT, u1: this.lastV, i1: this.lastI, pT: t, pV: v, pI: i, pTemp: temp, hasPrev: false };
-        const tol = Math.max(0.05 * i, this.thresholdA);
+        const fresh: Pending = { lowStartT: this.levelStartS, stepT: this.lastTimeS, u1: this.lastVoltageV, i1: this.lastCurrentA, pT: t, pV: v, pI: i, pTemp: temp, hasPrev: false };
+        const tol = levelTolerance(i, this.thresholdA);
         this.pending = fresh;
-        this.pendingLow = i - tol;
-        this.pendingHigh = i + tol;
+        this.pendingLowA = i - tol;
+        this.pendingHighA = i + tol;
         reading = this.readHigh(fresh, t, v, i, temp) ?? reading;
       } else if (lowS >= 1) this.finished = true;
-      this.levelStartT = this.lastT;
+      this.levelStartS = this.lastTimeS;
     }
-    const tol = Math.max(0.05 * i, this.thresholdA);
+    const tol = levelTolerance(i, this.thresholdA);
     this.n = 1;
-    this.sum = i;
-    this.low = i - tol;
-    this.high = i + tol;
-    this.lastT = t;
-    this.lastV = v;
-    this.lastI = i;
+    this.sumA = i;
+    this.lowA = i - tol;
+    this.highA = i + tol;
+    this.lastTimeS = t;
+    this.lastVoltageV = v;
+    this.lastCurrentA = i;
     return reading;
   }
 

@@ -41,7 +41,7 @@ export class SampleSink implements RowHandler {
   private buffered: SampleRow[] = [];
   private voltageScale = 1;
   private readonly batch = new SampleBatch();
-  private lastT = Number.NEGATIVE_INFINITY;
+  private lastTimeS = Number.NEGATIVE_INFINITY;
   private lastGoodLine = 0;
   private backwardsRun = 0;
 
@@ -131,7 +131,7 @@ export class SampleSink implements RowHandler {
     const V = batch.voltageV;
     const I = batch.currentA;
     const TEMP = batch.temperatureC;
-    const CELL = batch.minCellV;
+    const CELL = batch.minCellVoltageV;
     const dc = this.decimalComma;
     const width = plan.width;
     const ti = plan.time;
@@ -144,7 +144,8 @@ export class SampleSink implements RowHandler {
     const vScale = this.voltageScale;
     const tempScale = plan.temperatureUnit.scale;
     const tempOffset = plan.temperatureUnit.offset;
-    let lastT = this.lastT;
+    let lastT = this.lastTimeS;
+    let lastGood = -1;
     let n = 0;
     for (let k = from; k < to; k++) {
       const fields = rows[k] as string[];
@@ -180,11 +181,15 @@ export class SampleSink implements RowHandler {
         continue;
       }
       if (t < lastT) {
+        if (lastGood >= 0) {
+          this.lastGoodLine = firstLine + lastGood - from;
+          this.backwardsRun = 0;
+          lastGood = -1;
+        }
         this.backwards(firstLine + k - from, t, lastT);
         continue;
       }
-      this.backwardsRun = 0;
-      this.lastGoodLine = firstLine + k - from;
+      lastGood = k;
       lastT = t;
       let temp = Number.NaN;
       if (tempi >= 0) {
@@ -198,7 +203,11 @@ export class SampleSink implements RowHandler {
       CELL[n] = minCell;
       n++;
     }
-    this.lastT = lastT;
+    this.lastTimeS = lastT;
+    if (lastGood >= 0) {
+      this.lastGoodLine = firstLine + lastGood - from;
+      this.backwardsRun = 0;
+    }
     if (n > 0) this.accumulator.pushBatch(batch, n);
   }
 

@@ -12,39 +12,39 @@ export type StretchSettings = { holdDelayS: number; stopTemperatureC: number; lo
 const STEP_LATE_S = 1;
 
 export class Stretch {
-  readonly onsetT: number;
+  readonly onsetTimeS: number;
   readonly restValid: boolean;
-  readonly restV: number;
-  readonly restI: number;
-  lastT: number;
+  readonly restVoltageV: number;
+  readonly restCurrentA: number;
+  lastTimeS: number;
   samples = 0;
   chargeAs = 0;
   energyWs = 0;
-  minV = Number.POSITIVE_INFINITY;
-  minCellV = Number.POSITIVE_INFINITY;
-  peakI = 0;
-  holdV = Number.NaN;
-  holdLate = false;
-  stepV = Number.NaN;
-  stepI = Number.NaN;
-  stepTemp = Number.NaN;
-  stepLate = false;
-  startTemp: number;
-  peakTemp: number;
-  stopTempT = Number.NaN;
+  minVoltageV = Number.POSITIVE_INFINITY;
+  minCellVoltageV = Number.POSITIVE_INFINITY;
+  peakCurrentA = 0;
+  holdVoltageV = Number.NaN;
+  holdSampledLate = false;
+  stepVoltageV = Number.NaN;
+  stepCurrentA = Number.NaN;
+  stepTemperatureC = Number.NaN;
+  stepSampledLate = false;
+  startTemperatureC: number;
+  peakTemperatureC: number;
+  stopTemperatureTimeS = Number.NaN;
   twoLevel: TwoLevelReading | null = null;
   /** Where the running minimum voltage fell: [prevT, prevV, t, v] per entry, so a cut-off crossing can be found later for any threshold. */
   readonly minTrail: number[] = [];
-  private trailMin = Number.POSITIVE_INFINITY;
-  private readonly trailStep: number;
+  private trailMinVoltageV = Number.POSITIVE_INFINITY;
+  private readonly trailStepV: number;
   private holdDone = false;
   private stepDone = false;
   /** Earliest time at which a hold or step reading is due; skips both checks on most samples. */
-  private nextCaptureT: number;
-  private pT: number;
-  private pV: number;
-  private pI: number;
-  private pTemp: number;
+  private nextCaptureTimeS: number;
+  private prevTimeS: number;
+  private prevVoltageV: number;
+  private prevCurrentA: number;
+  private prevTemperatureC: number;
   private readonly detector: TwoLevelDetector;
   private detecting = true;
 
@@ -53,51 +53,51 @@ export class Stretch {
     prev: { t: number; v: number; i: number; temp: number; rest: boolean } | null,
     first: { t: number; v: number },
   ) {
-    this.onsetT = prev ? prev.t : first.t;
+    this.onsetTimeS = prev ? prev.t : first.t;
     this.restValid = prev !== null && prev.rest;
-    this.restV = prev ? prev.v : Number.NaN;
-    this.restI = prev ? prev.i : Number.NaN;
-    this.startTemp = prev ? prev.temp : Number.NaN;
-    this.peakTemp = this.startTemp;
-    this.pT = prev ? prev.t : first.t;
-    this.pV = prev ? prev.v : first.v;
-    this.pI = prev ? prev.i : 0;
-    this.pTemp = this.startTemp;
-    this.lastT = first.t;
-    this.trailStep = Math.max(0.0005, 5e-5 * Math.abs(first.v));
-    this.detector = new TwoLevelDetector(settings.loadThresholdA, this.onsetT);
-    this.nextCaptureT = this.onsetT + Math.min(1, settings.holdDelayS);
-    if (this.startTemp === this.startTemp) this.watchTemperature(this.onsetT, this.startTemp);
+    this.restVoltageV = prev ? prev.v : Number.NaN;
+    this.restCurrentA = prev ? prev.i : Number.NaN;
+    this.startTemperatureC = prev ? prev.temp : Number.NaN;
+    this.peakTemperatureC = this.startTemperatureC;
+    this.prevTimeS = prev ? prev.t : first.t;
+    this.prevVoltageV = prev ? prev.v : first.v;
+    this.prevCurrentA = prev ? prev.i : 0;
+    this.prevTemperatureC = this.startTemperatureC;
+    this.lastTimeS = first.t;
+    this.trailStepV = Math.max(0.0005, 5e-5 * Math.abs(first.v));
+    this.detector = new TwoLevelDetector(settings.loadThresholdA, this.onsetTimeS);
+    this.nextCaptureTimeS = this.onsetTimeS + Math.min(1, settings.holdDelayS);
+    if (this.startTemperatureC === this.startTemperatureC) this.watchTemperature(this.onsetTimeS, this.startTemperatureC);
   }
 
   get durationS(): number {
-    return this.lastT - this.onsetT;
+    return this.lastTimeS - this.onsetTimeS;
   }
 
   /** A load sample of this stretch; `i` is positive in the stretch's frame. Runs once per sample. */
-  add(t: number, v: number, i: number, temp: number, minCellV: number): void {
+  add(t: number, v: number, i: number, temp: number, minCellVoltageV: number): void {
     this.samples++;
-    this.lastT = t;
-    if (i > this.peakI) this.peakI = i;
-    if (minCellV < this.minCellV) this.minCellV = minCellV;
-    if (v < this.minV) {
-      this.minV = v;
-      if (v < this.trailMin - this.trailStep) {
-        this.minTrail.push(this.pT, this.pV, t, v);
-        this.trailMin = v;
+    this.lastTimeS = t;
+    if (i > this.peakCurrentA) this.peakCurrentA = i;
+    if (minCellVoltageV < this.minCellVoltageV) this.minCellVoltageV = minCellVoltageV;
+    if (v < this.minVoltageV) {
+      this.minVoltageV = v;
+      if (v < this.trailMinVoltageV - this.trailStepV) {
+        this.minTrail.push(this.prevTimeS, this.prevVoltageV, t, v);
+        this.trailMinVoltageV = v;
       }
     }
-    if (t >= this.nextCaptureT) this.capture(t, v, i, temp);
-    if (this.startTemp !== this.startTemp && temp === temp) this.startTemp = temp;
+    if (t >= this.nextCaptureTimeS) this.capture(t, v, i, temp);
+    if (this.startTemperatureC !== this.startTemperatureC && temp === temp) this.startTemperatureC = temp;
     if (this.detecting) {
       const reading = this.detector.add(t, v, i, temp);
       if (reading !== null && this.twoLevel === null) this.twoLevel = reading;
       if (this.detector.finished) this.detecting = false;
     }
-    this.pT = t;
-    this.pV = v;
-    this.pI = i;
-    this.pTemp = temp;
+    this.prevTimeS = t;
+    this.prevVoltageV = v;
+    this.prevCurrentA = i;
+    this.prevTemperatureC = temp;
   }
 
   private capture(t: number, v: number, i: number, temp: number): void {
@@ -106,49 +106,49 @@ export class Stretch {
       if (this.restValid) this.captureStep(t, v, i, temp);
       else this.stepDone = true;
     }
-    const hold = this.holdDone ? Number.POSITIVE_INFINITY : this.onsetT + this.settings.holdDelayS;
-    const step = this.stepDone ? Number.POSITIVE_INFINITY : this.onsetT + 1;
-    this.nextCaptureT = Math.min(hold, step);
+    const hold = this.holdDone ? Number.POSITIVE_INFINITY : this.onsetTimeS + this.settings.holdDelayS;
+    const step = this.stepDone ? Number.POSITIVE_INFINITY : this.onsetTimeS + 1;
+    this.nextCaptureTimeS = Math.min(hold, step);
   }
 
   /** Temperature is followed from the onset to the end of the log, after the stretch closes too. */
   /** Below this temperature a sample changes nothing here (−∞ before any temperature is known). */
   watchFromC(): number {
-    if (this.peakTemp !== this.peakTemp) return Number.NEGATIVE_INFINITY;
-    const stop = this.stopTempT !== this.stopTempT ? this.settings.stopTemperatureC : Number.POSITIVE_INFINITY;
-    return Math.min(this.peakTemp + Number.EPSILON * Math.abs(this.peakTemp), stop);
+    if (this.peakTemperatureC !== this.peakTemperatureC) return Number.NEGATIVE_INFINITY;
+    const stop = this.stopTemperatureTimeS !== this.stopTemperatureTimeS ? this.settings.stopTemperatureC : Number.POSITIVE_INFINITY;
+    return Math.min(this.peakTemperatureC + Number.EPSILON * Math.abs(this.peakTemperatureC), stop);
   }
 
   watchTemperature(t: number, temp: number): void {
-    if (!(this.peakTemp >= temp)) this.peakTemp = temp; // also when no peak yet (NaN)
-    if (this.stopTempT !== this.stopTempT && temp >= this.settings.stopTemperatureC) this.stopTempT = t;
+    if (!(this.peakTemperatureC >= temp)) this.peakTemperatureC = temp; // also when no peak yet (NaN)
+    if (this.stopTemperatureTimeS !== this.stopTemperatureTimeS && temp >= this.settings.stopTemperatureC) this.stopTemperatureTimeS = t;
   }
 
   private captureHold(t: number, v: number): void {
-    const target = this.onsetT + this.settings.holdDelayS;
+    const target = this.onsetTimeS + this.settings.holdDelayS;
     if (t < target) return;
     this.holdDone = true;
-    if (this.samples > 1 && this.pT < target) this.holdV = lerp(this.pT, this.pV, t, v, target);
-    else if (t === target || this.samples > 1) this.holdV = v;
+    if (this.samples > 1 && this.prevTimeS < target) this.holdVoltageV = lerp(this.prevTimeS, this.prevVoltageV, t, v, target);
+    else if (t === target || this.samples > 1) this.holdVoltageV = v;
     else if (t - target <= STEP_LATE_S) {
-      this.holdV = v;
-      this.holdLate = true;
+      this.holdVoltageV = v;
+      this.holdSampledLate = true;
     }
   }
 
   private captureStep(t: number, v: number, i: number, temp: number): void {
-    const target = this.onsetT + 1;
+    const target = this.onsetTimeS + 1;
     if (t < target) return;
     this.stepDone = true;
-    if (this.samples > 1 && this.pT < target) {
-      this.stepV = lerp(this.pT, this.pV, t, v, target);
-      this.stepI = lerp(this.pT, this.pI, t, i, target);
-      this.stepTemp = this.pTemp === this.pTemp ? lerp(this.pT, this.pTemp, t, temp, target) : temp;
+    if (this.samples > 1 && this.prevTimeS < target) {
+      this.stepVoltageV = lerp(this.prevTimeS, this.prevVoltageV, t, v, target);
+      this.stepCurrentA = lerp(this.prevTimeS, this.prevCurrentA, t, i, target);
+      this.stepTemperatureC = this.prevTemperatureC === this.prevTemperatureC ? lerp(this.prevTimeS, this.prevTemperatureC, t, temp, target) : temp;
     } else if (t - target <= STEP_LATE_S) {
-      this.stepV = v;
-      this.stepI = i;
-      this.stepTemp = temp;
-      this.stepLate = t - target > 0.25;
+      this.stepVoltageV = v;
+      this.stepCurrentA = i;
+      this.stepTemperatureC = temp;
+      this.stepSampledLate = t - target > 0.25;
     }
   }
 
@@ -162,7 +162,7 @@ export class Stretch {
       const pV = trail[k + 1] as number;
       const t = trail[k + 2] as number;
       const at = pV > thresholdV && pV !== v ? pT + ((pV - thresholdV) / (pV - v)) * (t - pT) : t;
-      return at - this.onsetT;
+      return at - this.onsetTimeS;
     }
     return Number.NaN;
   }

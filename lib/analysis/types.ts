@@ -13,7 +13,7 @@ export type AnalyseOptions = {
   /** Refuse logs larger than this many bytes (default 50 MB). Text input counts characters. */
   maxBytes?: number;
   mapping?: ColumnMapping;
-  /** Points in the returned chart curve (default 400). */
+  /** Points in the returned chart curve (default 400, at most 500). */
   curvePoints?: number;
   /** Pack temperature from the method card, used for the 25 °C estimate when the log has none. */
   packStartTemperatureC?: number;

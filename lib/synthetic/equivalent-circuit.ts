@@ -178,7 +178,7 @@ export class EcmSimulator {
     const v1Mid = this.v1 * Math.exp(-dt / (2 * o.tau1S)) + currentA * r1 * (1 - Math.exp(-dt / (2 * o.tau1S)));
     const socMid = this.soc - (currentA * dt) / 2 / 3.6 / o.capacityMah;
     const vMid = (ocvPerCellV(socMid) - currentA * r0 - v1Mid) * o.cells;
-    const heatW = currentA * currentA * r0 + (this.v1 * this.v1) / r1;
+    const heatW = currentA * currentA * r0 + (r1 > 0 ? (this.v1 * this.v1) / r1 : 0);
     this.v1 = this.v1 * decay + currentA * r1 * (1 - decay);
     this.soc -= (currentA * dt) / 3.6 / o.capacityMah;
     const cth = o.heatCapacityJPerKPerCell;
@@ -272,7 +272,8 @@ export class EcmSimulator {
     for (let k = 0; k < o.cells; k++) row.cellVoltagesV[k] = v / o.cells + (this.offsets[k] as number);
     truth.samples++;
     truth.durationS = this.t;
-    if (phase?.toCutoff && v <= o.cutoffVPerCell * o.cells) {
+    // Past empty (or a voltage that never falls) ends the discharge too, so a log always ends.
+    if (phase?.toCutoff && (v <= o.cutoffVPerCell * o.cells || !(this.soc > -0.2))) {
       truth.reachedCutoff = true;
       truth.mainDurationS = this.t - truth.mainStartS;
       this.phaseEndS = this.t;

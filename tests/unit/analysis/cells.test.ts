@@ -5,8 +5,8 @@ import { inferCells } from "@/lib/analysis/cells";
 describe("cells in series from the rest voltage", () => {
   it.each([
     [4.2, 1], [8.4, 2], [12.6, 3], [16.8, 4], [21.0, 5], [25.2, 6], [11.4, 3], [22.8, 6], [26.1, 6], [50.4, 12],
-  ])("%f V at rest → %iS", (restV, cells) => {
-    expect(inferCells(restV, 0).cells).toBe(cells);
+  ])("%f V at rest → %iS", (restVoltageV, cells) => {
+    expect(inferCells(restVoltageV, 0).cells).toBe(cells);
   });
 
   it("reports the other counts that would fit so the caller can warn (29.4 V: 7S full or 8S at 3.68 V)", () => {
