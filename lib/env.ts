@@ -23,6 +23,8 @@ export const envSchema = z.object({
   AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters (npm start writes one to .env.local)").optional(),
   // Local tools (the caught-mail page); the project's scripts switch this on, hosted deployments leave it off.
   SAGLINE_DEV_TOOLS: z.enum(["0", "1"]).default("0").transform((v) => v === "1"),
+  // Only for load benchmarks on loopback (scripts/bench-load.mjs): switches the request limits off.
+  SAGLINE_RATE_LIMITS: z.enum(["on", "off"]).default("on"),
   LOG_MAX_BYTES: z.coerce.number().int().min(1024).max(500 * 1024 * 1024).default(50 * 1024 * 1024),
   PHOTO_MAX_BYTES: z.coerce.number().int().min(1024).max(50 * 1024 * 1024).default(5 * 1024 * 1024),
 });

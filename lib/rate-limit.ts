@@ -1,6 +1,7 @@
 // Fixed-window rate limits kept in PostgreSQL, so every app instance sees the same counts.
 import "server-only";
 import { hitRateLimit } from "@/db/mutations/rate-limits";
+import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 
 export type Limit = { limit: number; windowS: number };
@@ -16,6 +17,7 @@ export const limits = {
 
 /** Counts one hit; throws a 429 AppError with Retry-After once the window is full. */
 export async function enforceRateLimit(key: string, { limit, windowS }: Limit): Promise<void> {
+  if (env().SAGLINE_RATE_LIMITS === "off") return;
   const { count, resetAt } = await hitRateLimit(key, windowS);
   if (count > limit) {
     throw new AppError("rate_limited", "Too many requests — please wait a little and try again.", undefined, (resetAt.getTime() - Date.now()) / 1000);
