@@ -42,7 +42,7 @@ export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height:
   const legend = (
     <ul className="flex flex-wrap gap-x-4 gap-y-1" aria-label="Legend">
       <li className="flex items-center gap-1"><svg width="14" height="14" aria-hidden="true"><Marker shape={MEETS_STYLE.shape} x={7} y={7} size={9} color={MEETS_STYLE.color} /></svg>meets or beats its label</li>
-      <li className="flex items-center gap-1"><svg width="14" height="14" aria-hidden="true"><Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} /></svg>falls short (below the line)</li>
+      <li className="flex items-center gap-1"><svg width="14" height="14" aria-hidden="true"><Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} filled={false} /></svg>falls short (below the line)</li>
       <li className="flex items-center gap-1"><svg width="22" height="10" aria-hidden="true"><line x1="0" y1="5" x2="22" y2="5" stroke="currentColor" strokeDasharray="4 3" /></svg>parity: measured = labelled</li>
     </ul>
   );
