@@ -19,8 +19,9 @@ try {
       for (const scheme of ["light", "dark"]) {
         await page.emulateMedia({ colorScheme: scheme });
         await page.setViewportSize({ width, height: 900 });
-        await page.goto(base + p, { waitUntil: "networkidle", timeout: 120_000 });
-        await page.waitForTimeout(300);
+        // Not "networkidle": link prefetches of routes other branches own can stay open.
+        await page.goto(base + p, { waitUntil: "load", timeout: 120_000 });
+        await page.waitForTimeout(1500);
         const name = `${p.replace(/[^a-z0-9]+/gi, "_").replace(/^_|_$/g, "") || "home"}-${width}-${scheme}.png`;
         // Narrow pages are long: save them in 1400 px slices so each stays readable at full size.
         const total = await page.evaluate(() => document.documentElement.scrollHeight);
