@@ -1,6 +1,7 @@
 // p95 of the maker-ranking query (db/queries/groups.ts rankMakersInGroup) over 100,000 results in a
 // throwaway database (DATABASE_URL, created and dropped by scripts/bench-pages.sh). Results are spread
 // over 20 like-for-like groups with a skew like the demo's: the ranked group holds 30 % of them.
+import { loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
 import { sql } from "drizzle-orm";
 import { closeDb, db } from "@/db";
@@ -56,7 +57,7 @@ async function main() {
   const [{ n } = { n: 0 }] = (await db.execute<{ n: number }>(sql`select count(*)::int as n from results where group_key = ${key} and status in ('approved','disputed')`)).rows;
   console.log(
     `maker ranking over ${RESULTS.toLocaleString("en-GB")} results (${n.toLocaleString("en-GB")} published in the ranked group, ${makers} makers): ` +
-      `p50 ${q(0.5).toFixed(1)} ms, p95 ${q(0.95).toFixed(1)} ms, max ${q(1).toFixed(1)} ms over ${RUNS} runs (target p95 ≤ 50 ms; seeded in ${(seeded / 1000).toFixed(1)} s)`,
+      `p50 ${q(0.5).toFixed(1)} ms, p95 ${q(0.95).toFixed(1)} ms, max ${q(1).toFixed(1)} ms over ${RUNS} runs (target p95 ≤ 50 ms; seeded in ${(seeded / 1000).toFixed(1)} s; machine load ${loadavg()[0]?.toFixed(1)})`,
   );
   await closeDb();
 }
