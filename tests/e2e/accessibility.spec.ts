@@ -1,0 +1,27 @@
+// Automated accessibility scan of the main pages with axe-core (WCAG 2.1 A/AA rules): zero serious or
+// critical violations. (A scan finds a subset of problems; the keyboard walks in other specs cover more.)
+import AxeBuilder from "@axe-core/playwright";
+import { expect, test } from "@playwright/test";
+
+const pages = ["/", "/packs", "/compare", "/methods", "/sign-in", "/analyse", "/data", "/charts"];
+
+for (const path of pages) {
+  test(`no serious accessibility violations on ${path}`, async ({ page }) => {
+    const response = await page.goto(path);
+    expect(response?.status(), `${path} should load`).toBeLessThan(400);
+    await page.waitForTimeout(500);
+    const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
+    const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+    expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")})`)).toEqual([]);
+  });
+}
+
+test("no serious accessibility violations on a pack page", async ({ page }) => {
+  await page.goto("/packs");
+  const href = await page.locator('a[href^="/packs/"]').first().getAttribute("href");
+  expect(href).toBeTruthy();
+  await page.goto(href ?? "/");
+  const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze();
+  const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
+});
