@@ -10,7 +10,7 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   typedRoutes: false,
-  serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser"],
+  serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser", "@resvg/resvg-js"],
   experimental: { serverActions: { bodySizeLimit: "60mb" } },
   async headers() {
     return [

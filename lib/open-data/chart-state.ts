@@ -21,15 +21,30 @@ export const chartState = z.object({
 });
 export type ChartState = z.infer<typeof chartState>;
 
+// Isomorphic base64url (the builder encodes in the browser, the server decodes).
+function toBase64Url(text: string): string {
+  let bin = "";
+  for (const byte of new TextEncoder().encode(text)) bin += String.fromCharCode(byte);
+  return btoa(bin).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
+}
+
+function fromBase64Url(text: string): string {
+  const bin = atob(text.replace(/-/g, "+").replace(/_/g, "/"));
+  return new TextDecoder("utf-8", { fatal: true }).decode(Uint8Array.from(bin, (c) => c.charCodeAt(0)));
+}
+
+/** Keys in a fixed order, so one state always gives one URL. */
 export function encodeChartState(state: ChartState): string {
-  return Buffer.from(JSON.stringify(chartState.parse(state)), "utf8").toString("base64url");
+  const s = chartState.parse(state);
+  const ordered = { v: s.v, kind: s.kind, group: s.group, maker: s.maker, cells: s.cells, title: s.title, note: s.note || undefined };
+  return toBase64Url(JSON.stringify(ordered));
 }
 
 /** null when the text is not a valid encoded state. */
 export function decodeChartState(encoded: string): ChartState | null {
   if (!/^[A-Za-z0-9_-]{1,4000}$/.test(encoded)) return null;
   try {
-    const parsed = chartState.safeParse(JSON.parse(Buffer.from(encoded, "base64url").toString("utf8")));
+    const parsed = chartState.safeParse(JSON.parse(fromBase64Url(encoded)));
     return parsed.success ? parsed.data : null;
   } catch {
     return null;

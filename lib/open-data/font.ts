@@ -2,7 +2,6 @@
 // ships WOFF 1.0, so we unwrap WOFF into a plain sfnt (W3C "WOFF File Format 1.0": each table is
 // zlib-compressed unless compLength == origLength).
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
-import { createRequire } from "node:module";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { inflateSync } from "node:zlib";
@@ -50,12 +49,11 @@ let cached: string[] | null = null;
  * fonts are written once per process into the temp directory. */
 export function chartFontFiles(): string[] {
   if (!cached) {
-    const req = createRequire(import.meta.url);
     const dir = path.join(tmpdir(), "sagline-chart-fonts");
     mkdirSync(dir, { recursive: true });
     cached = ["400", "700"].map((w) => {
       const file = path.join(dir, `inter-latin-${w}.ttf`);
-      writeFileSync(file, woffToSfnt(readFileSync(req.resolve(`@fontsource/inter/files/inter-latin-${w}-normal.woff`))));
+      writeFileSync(file, woffToSfnt(readFileSync(path.join(process.cwd(), "node_modules/@fontsource/inter/files", `inter-latin-${w}-normal.woff`))));
       return file;
     });
   }

@@ -4,6 +4,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { PackFilters } from "@/lib/validations/open-data";
+import { groupLabel as groupLabelOf } from "@/lib/open-data/aggregate";
 import { packConditions } from "./packs";
 
 export type GroupRow = { key: string; resultCount: number; packCount: number };
@@ -39,4 +40,21 @@ export async function listGroupSamples(groupKey: string, f: PackFilters = {}): P
     .from(results).innerJoin(packs, eq(packs.id, results.packId)).innerJoin(makers, eq(makers.id, packs.makerId))
     .where(and(eq(results.status, "approved"), eq(results.groupKey, groupKey), ...packConditions(f)))
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
+}
+
+export type GroupOption = GroupRow & { label: string | null };
+
+/** Groups with a human label (from one result's method card), most results first — for the chart builder. */
+export async function listGroupOptions(minResults = 3): Promise<GroupOption[]> {
+  const groups = await listGroups(minResults);
+  const cards = await db
+    .selectDistinctOn([results.groupKey], {
+      key: results.groupKey, resistanceMethod: results.resistanceMethod, ambientTemperatureC: results.ambientTemperatureC,
+      cutoffVPerCell: results.cutoffVPerCell, loadCurrentA: results.loadCurrentA, cyclesBeforeTest: results.cyclesBeforeTest,
+      ratedCapacityMah: packs.ratedCapacityMah,
+    })
+    .from(results).innerJoin(packs, eq(packs.id, results.packId))
+    .where(eq(results.status, "approved")).orderBy(results.groupKey, asc(results.id));
+  const byKey = new Map(cards.map((c) => [c.key, c]));
+  return groups.map((g) => ({ ...g, label: groupLabelOf(byKey.get(g.key)) }));
 }
