@@ -5,9 +5,10 @@ import { listGroupSamples } from "@/db/queries/open-data/groups";
 import { listGroupCurves } from "@/db/queries/open-data/results";
 import { aggregateByMaker, aggregateByPack, groupLabel } from "./aggregate";
 import type { ChartState } from "./chart-state";
+import { plural } from "./chart-svg";
 
 export type LabelPoint = { label: string; labelledC: number; measuredC: number; n: number };
-export type CurveLine = { label: string; points: { capacityMah: number; voltagePerCellV: number }[] };
+export type CurveLine = { label: string; points: { capacityPercent: number; voltagePerCellV: number }[] };
 export type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };
 
 export type ChartData = {
@@ -33,7 +34,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
       const m = p.figures.sagLimitedC;
       return m ? [{ label: `${p.makerName} ${p.model}`, labelledC: p.labelledContinuousC, measuredC: m.median, n: m.n }] : [];
     });
-    if (points.length < packs.length) base.leftOut.push(`${packs.length - points.length} packs without a sag-limited C left out.`);
+    if (points.length < packs.length) base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a sag-limited C left out.`);
     return { ...base, labelCheck: points };
   }
   if (state.kind === "maker-ranking") {
@@ -47,13 +48,17 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     if (seen.has(s.packSlug)) continue;
     seen.add(s.packSlug);
     if (curves.length < MAX_CURVES) {
+      // Only samples under the main load: rest and recovery at the ends would draw spikes.
+      const peakA = Math.max(0, ...s.curve.map((p) => p.currentA));
       curves.push({
         label: `${s.makerName} ${s.model}`,
-        points: s.curve.filter((p) => p.currentA > 0).map((p) => ({ capacityMah: p.capacityMah, voltagePerCellV: p.voltageV / s.cellsInSeries })),
+        points: s.curve
+          .filter((p) => p.currentA >= peakA * 0.5)
+          .map((p) => ({ capacityPercent: (p.capacityMah / s.ratedCapacityMah) * 100, voltagePerCellV: p.voltageV / s.cellsInSeries })),
       });
     }
   }
-  if (seen.size > MAX_CURVES) base.leftOut.push(`${seen.size - MAX_CURVES} more packs not drawn (at most ${MAX_CURVES} curves, first result of each pack).`);
+  if (seen.size > MAX_CURVES) base.leftOut.push(`${plural(seen.size - MAX_CURVES, "more pack")} not drawn (at most ${MAX_CURVES} curves, first result of each pack).`);
   else base.leftOut.push("One curve per pack: its first approved result in the group.");
   return { ...base, curves };
 }

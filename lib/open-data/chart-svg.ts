@@ -17,6 +17,8 @@ const PALETTE = ["#0072B2", "#D55E00", "#009E73", "#CC79A7", "#E69F00", "#56B4E9
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "", "6 3", "2 3", "8 3 2 3"];
 const FONT = "Inter, 'Inter Variable', system-ui, sans-serif";
 
+export const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
+
 export function escapeXml(text: string): string {
   return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
 }
@@ -48,7 +50,9 @@ export function niceTicks(min: number, max: number, count = 5): number[] {
   const mag = 10 ** Math.floor(Math.log10(raw));
   const step = ([1, 2, 2.5, 5, 10].find((s) => s * mag >= raw) ?? 10) * mag;
   const ticks: number[] = [];
-  for (let v = Math.floor(min / step) * step; v <= max + step * 1e-6; v += step) ticks.push(Number(v.toFixed(10)));
+  let v = Math.floor(min / step) * step;
+  for (; v < max - step * 1e-6; v += step) ticks.push(Number(v.toFixed(10)));
+  ticks.push(Number(v.toFixed(10))); // the last tick covers max
   return ticks;
 }
 
@@ -79,8 +83,8 @@ function labelCheck(data: ChartData, box: Box): string {
   const parity = `<line x1="${x(0)}" y1="${y(0)}" x2="${x(top).toFixed(1)}" y2="${y(top).toFixed(1)}" stroke="${CHARGE}" stroke-width="2" stroke-dasharray="7 4"/>`;
   const dots = pts.map((p) => `<circle cx="${x(p.labelledC).toFixed(1)}" cy="${y(p.measuredC).toFixed(1)}" r="5" fill="${CELL}" fill-opacity="0.8" stroke="#ffffff"><title>${escapeXml(`${p.label}: labelled ${p.labelledC}C, measured ${p.measuredC.toFixed(1)}C (median of ${p.n})`)}</title></circle>`);
   const legend = [
-    `<circle cx="${box.left + 10}" cy="${box.top + 8}" r="5" fill="${CELL}"/>`, text(box.left + 20, box.top + 12, "Pack (median sag-limited C)", `font-size="12" fill="${INK}"`),
-    `<line x1="${box.left + 210}" x2="${box.left + 236}" y1="${box.top + 8}" y2="${box.top + 8}" stroke="${CHARGE}" stroke-width="2" stroke-dasharray="7 4"/>`, text(box.left + 242, box.top + 12, "Parity: measured = labelled", `font-size="12" fill="${INK}"`),
+    `<circle cx="${box.left + 10}" cy="${box.top - 16}" r="5" fill="${CELL}"/>`, text(box.left + 20, box.top - 12, "Pack (median sag-limited C)", `font-size="12" fill="${INK}"`),
+    `<line x1="${box.left + 210}" x2="${box.left + 236}" y1="${box.top - 16}" y2="${box.top - 16}" stroke="${CHARGE}" stroke-width="2" stroke-dasharray="7 4"/>`, text(box.left + 242, box.top - 12, "Parity: measured = labelled", `font-size="12" fill="${INK}"`),
   ];
   return axes(box, ticks, ticks, x, y, "Labelled continuous C", "Measured C (sag-limited)") + parity + dots.join("") + legend.join("");
 }
@@ -88,7 +92,7 @@ function labelCheck(data: ChartData, box: Box): string {
 function curves(data: ChartData, box: Box): string {
   const lines = data.curves ?? [];
   const all = lines.flatMap((l) => l.points);
-  const maxX = Math.max(100, ...all.map((p) => p.capacityMah));
+  const maxX = Math.max(100, ...all.map((p) => p.capacityPercent));
   const vs = all.map((p) => p.voltagePerCellV);
   const minY = vs.length ? Math.floor(Math.min(...vs) * 10) / 10 : 3;
   const maxY = vs.length ? Math.ceil(Math.max(...vs) * 10) / 10 : 4.2;
@@ -97,17 +101,17 @@ function curves(data: ChartData, box: Box): string {
   const x = linear(0, xTicks[xTicks.length - 1] ?? maxX, box.left, box.right);
   const y = linear(yTicks[0] ?? minY, yTicks[yTicks.length - 1] ?? maxY, box.bottom, box.top);
   const paths = lines.map((l, i) => {
-    const d = l.points.map((p, j) => `${j ? "L" : "M"}${x(p.capacityMah).toFixed(1)} ${y(p.voltagePerCellV).toFixed(1)}`).join("");
+    const d = l.points.map((p, j) => `${j ? "L" : "M"}${x(p.capacityPercent).toFixed(1)} ${y(p.voltagePerCellV).toFixed(1)}`).join("");
     return `<path d="${d}" fill="none" stroke="${PALETTE[i % PALETTE.length]}" stroke-width="2" stroke-dasharray="${DASHES[i % DASHES.length]}"><title>${escapeXml(l.label)}</title></path>`;
   });
   const legend = lines.map((l, i) => {
     const col = i % 2;
     const row = Math.floor(i / 2);
     const lx = box.left + col * 340;
-    const ly = box.bottom + 56 + row * 16;
+    const ly = box.bottom + 56 + row * 17;
     return `<line x1="${lx}" x2="${lx + 24}" y1="${ly - 4}" y2="${ly - 4}" stroke="${PALETTE[i % PALETTE.length]}" stroke-width="2" stroke-dasharray="${DASHES[i % DASHES.length]}"/>` + text(lx + 30, ly, l.label.slice(0, 44), `font-size="11" fill="${INK}"`);
   });
-  return axes(box, xTicks, yTicks, x, y, "Capacity delivered (mAh)", "Voltage per cell under load (V)") + paths.join("") + legend.join("");
+  return axes(box, xTicks, yTicks, x, y, "Capacity delivered (% of rated mAh)", "Voltage per cell under load (V)") + paths.join("") + legend.join("");
 }
 
 function ranking(data: ChartData, box: Box): string {
@@ -125,7 +129,7 @@ function ranking(data: ChartData, box: Box): string {
     out.push(`<rect x="${x(0).toFixed(1)}" y="${(yy + 4).toFixed(1)}" width="${(x(b.labelRatio) - x(0)).toFixed(1)}" height="${(rowH - 8).toFixed(1)}" fill="${CELL}"><title>${escapeXml(`${b.label}: ${b.labelRatio.toFixed(2)} (${b.packCount} packs, ${b.resultCount} results)`)}</title></rect>`);
     out.push(text(x(b.labelRatio) + 6, yy + rowH / 2 + 4, `${b.labelRatio.toFixed(2)} · ${b.packCount} packs`, `font-size="11" fill="${SOFT}"`));
   });
-  out.push(`<line x1="${x(1).toFixed(1)}" x2="${x(1).toFixed(1)}" y1="${box.top - 6}" y2="${box.bottom}" stroke="${CHARGE}" stroke-width="2" stroke-dasharray="7 4"/>`, text(x(1) + 4, box.top - 8, "label met (1.0)", `font-size="11" fill="${CHARGE}"`));
+  out.push(`<line x1="${x(1).toFixed(1)}" x2="${x(1).toFixed(1)}" y1="${box.top - 6}" y2="${box.bottom}" stroke="${CHARGE}" stroke-width="2" stroke-dasharray="7 4"/>`, text(x(1) - 4, box.top - 10, "label met (1.0)", `text-anchor="end" font-size="11" fill="${CHARGE}"`));
   out.push(text((x(0) + box.right) / 2, box.bottom + 38, "Median label ratio (measured C ÷ labelled C) of the maker's packs", `text-anchor="middle" font-size="13" fill="${INK}"`));
   return out.join("");
 }
@@ -134,15 +138,15 @@ export function renderChartSvg(data: ChartData): string {
   const { state } = data;
   const title = wrapText(state.title, W - 40, 20, 2);
   const note = state.note ? wrapText(state.note, W - 40, 13, 2) : [];
-  const top = 28 + title.length * 24 + note.length * 17 + 24;
+  const top = 28 + title.length * 24 + note.length * 17 + 36;
   const legendRows = state.kind === "curves" ? Math.ceil((data.curves?.length ?? 0) / 2) : 0;
-  const box: Box = { left: 80, top, right: W - 30, bottom: H - 104 - legendRows * 16 };
+  const box: Box = { left: 80, top, right: W - 30, bottom: H - 110 - legendRows * 17 };
   const empty = data.counts.results === 0;
   const body = empty
     ? text(W / 2, (box.top + box.bottom) / 2, "No approved results match this chart yet.", `text-anchor="middle" font-size="15" fill="${SOFT}"`)
     : state.kind === "label-check" ? labelCheck(data, box) : state.kind === "curves" ? curves(data, box) : ranking(data, box);
   const footer = [
-    `Group: ${data.groupLabel} · ${data.counts.packs} packs, ${data.counts.results} approved results. ${data.leftOut.join(" ")}`,
+    `Group: ${data.groupLabel} · ${plural(data.counts.packs, "pack")}, ${plural(data.counts.results, "approved result")}. ${data.leftOut.join(" ")}`,
     `Source: Sagline · Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_SHORT}`,
   ];
   const footLines = wrapText(footer[0] ?? "", W - 40, 11, 2);

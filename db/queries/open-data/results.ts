@@ -80,12 +80,12 @@ export async function listAllResults(f: ResultFilters = {}): Promise<ResultRow[]
   return (await listResultsPage(f, { page: 1, perPage: 1_000_000 })).rows;
 }
 
-export type CurveSeries = { resultId: number; packSlug: string; makerName: string; model: string; cellsInSeries: number; loadRateC: number; curve: CurvePoint[] };
+export type CurveSeries = { resultId: number; packSlug: string; makerName: string; model: string; cellsInSeries: number; ratedCapacityMah: number; loadRateC: number; curve: CurvePoint[] };
 
 /** Discharge curves of approved results in one like-for-like group (for the curves chart). */
 export async function listGroupCurves(groupKey: string, f: ResultFilters = {}): Promise<CurveSeries[]> {
   return db
-    .select({ resultId: results.id, packSlug: packs.slug, makerName: makers.name, model: packs.model, cellsInSeries: packs.cellsInSeries, loadRateC: results.loadRateC, curve: results.curve })
+    .select({ resultId: results.id, packSlug: packs.slug, makerName: makers.name, model: packs.model, cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, loadRateC: results.loadRateC, curve: results.curve })
     .from(results).innerJoin(packs, eq(packs.id, results.packId)).innerJoin(makers, eq(makers.id, packs.makerId))
     .where(and(...conditions({ ...f, group: groupKey }))).orderBy(asc(makers.name), asc(packs.model), asc(results.id));
 }

@@ -6,7 +6,7 @@ import { loadChartData } from "@/lib/open-data/chart-data";
 import { chartLinks, embedSnippet } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
-import { ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 
 // The URL carries the whole chart; pages are generated on first request and revalidated (no cookies).
@@ -42,12 +42,11 @@ export default async function ChartPage({ params }: Props) {
       <div className="space-y-1">
         <p className="muted text-sm"><Link href="/charts">Charts</Link> · {CHART_KIND_LABELS[state.kind]}</p>
         <h1>{state.title}</h1>
-        {state.note ? <p className="max-w-3xl">{state.note}</p> : null}
       </div>
       <figure className="card overflow-hidden p-2">
         <div className="[&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
         <figcaption className="muted px-2 pt-2 text-sm">
-          {ATTRIBUTION_TEXT.replace(`(${DATA_LICENCE_URL}).`, "")}<a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
+          Data: {ATTRIBUTION}, licensed <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
           one like-for-like group are compared. {data.leftOut.join(" ")}
         </figcaption>
       </figure>
