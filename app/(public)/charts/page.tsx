@@ -31,7 +31,7 @@ export default async function ChartsPage() {
               <img src={c.links.svg} alt={`Chart: ${c.title}`} width={800} height={500} loading="lazy" className="h-auto w-full rounded border border-ink/10" />
             </Link>
             <h2 className="text-base"><Link href={c.links.permalink}>{c.title}</Link></h2>
-            <p className="muted text-sm">{CHART_KIND_LABELS[c.kind]}{c.note ? ` — ${c.note}` : ""}</p>
+            <p className="muted text-sm">{CHART_KIND_LABELS[c.kind]}</p>
           </li>
         ))}
       </ul>

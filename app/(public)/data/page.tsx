@@ -49,7 +49,7 @@ export default async function DataPage() {
           The data is published under <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_TITLE} ({DATA_LICENCE_SHORT})</a>.
           You may copy, adapt and publish it, commercially too, if you credit <strong>{ATTRIBUTION}</strong> and link the licence.
         </p>
-        <p className="muted text-sm">Suggested credit: <q className="num">{ATTRIBUTION_TEXT}</q></p>
+        <p className="muted break-words text-sm">Suggested credit: <q>{ATTRIBUTION_TEXT}</q></p>
       </section>
 
       <section aria-labelledby="downloads-heading" className="space-y-4">
