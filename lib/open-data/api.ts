@@ -64,13 +64,13 @@ export function apiOptions(): Response {
 }
 
 /** `meta` and `links` for one page of a list. */
-export function pageEnvelope(req: Request, page: number, perPage: number, total: number) {
+export function pageEnvelope(req: Request, page: number, size: number, total: number) {
   const url = new URL(req.url);
-  const at = (p: number) => { const u = new URL(url); u.searchParams.set("page", String(p)); u.searchParams.set("perPage", String(perPage)); return `${u.pathname}${u.search}`; };
-  const lastPage = Math.max(1, Math.ceil(total / perPage));
+  const at = (p: number) => { const u = new URL(url); u.searchParams.set("page", String(p)); u.searchParams.set("size", String(size)); return `${u.pathname}${u.search}`; };
+  const pageCount = Math.max(1, Math.ceil(total / size));
   return {
-    meta: { page, perPage, total, lastPage },
-    links: { self: at(page), first: at(1), last: at(lastPage), next: page < lastPage ? at(page + 1) : null, prev: page > 1 ? at(Math.min(page - 1, lastPage)) : null },
+    meta: { page, pageSize: size, pageCount, total },
+    links: { self: at(page), first: at(1), last: at(pageCount), next: page < pageCount ? at(page + 1) : null, prev: page > 1 ? at(Math.min(page - 1, pageCount)) : null },
     headers: { "X-Total-Count": String(total) },
   };
 }

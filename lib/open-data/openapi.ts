@@ -30,14 +30,25 @@ const RESULT_TOP = new Set(["id", "packId", "groupKey", "testedOn", "publishedAt
 
 const pageParams = [
   { name: "page", in: "query", schema: { type: "integer", minimum: 1, default: 1 } },
-  { name: "perPage", in: "query", schema: { type: "integer", minimum: 1, maximum: 200, default: 50 } },
+  { name: "size", in: "query", schema: { type: "integer", minimum: 1, maximum: 200, default: 50 } },
+];
+const packPageParams = [
+  { name: "page", in: "query", schema: { type: "integer", minimum: 1, default: 1 } },
+  { name: "size", in: "query", schema: { type: "integer", enum: [10, 25, 50, 100], default: 25 } },
+  { name: "sort", in: "query", schema: { type: "string" } },
+  { name: "dir", in: "query", schema: { type: "string", enum: ["asc", "desc"] } },
+  { name: "group", in: "query", description: "Like-for-like group key: adds per-pack medians in that group.", schema: { type: "string" } },
 ];
 const packFilterParams = [
   { name: "maker", in: "query", description: "Maker slug.", schema: { type: "string" } },
   { name: "cells", in: "query", description: "Cells in series (S).", schema: { type: "integer", minimum: 1, maximum: 14 } },
   { name: "connector", in: "query", schema: { type: "string" } },
-  { name: "minCapacityMah", in: "query", schema: { type: "integer" } },
-  { name: "maxCapacityMah", in: "query", schema: { type: "integer" } },
+  { name: "minMah", in: "query", description: "Rated capacity from, mAh.", schema: { type: "number" } },
+  { name: "maxMah", in: "query", description: "Rated capacity up to, mAh.", schema: { type: "number" } },
+  { name: "minC", in: "query", description: "Labelled continuous C from.", schema: { type: "number" } },
+  { name: "maxC", in: "query", description: "Labelled continuous C up to.", schema: { type: "number" } },
+  { name: "minG", in: "query", description: "Weight from, g.", schema: { type: "number" } },
+  { name: "maxG", in: "query", description: "Weight up to, g.", schema: { type: "number" } },
   { name: "q", in: "query", description: "Text search in maker and model.", schema: { type: "string" } },
 ];
 const listOf = (ref: string) => ({
@@ -72,7 +83,7 @@ export function openApiDocument(serverUrl: string) {
     paths: {
       "/api/v1/makers": get("Makers", pageParams, listOf("Maker")),
       "/api/v1/makers/{slug}": get("One maker", [pathParam("slug")], data("Maker")),
-      "/api/v1/packs": get("Packs, filtered like the packs table", [...pageParams, ...packFilterParams], listOf("Pack")),
+      "/api/v1/packs": get("Packs, filtered, searched and sorted like the packs table", [...packPageParams, ...packFilterParams], { type: "object", properties: { data: { type: "array", items: { type: "object" } }, page: { type: "integer" }, pageSize: { type: "integer" }, pageCount: { type: "integer" }, total: { type: "integer" }, licence: { type: "object" } } }),
       "/api/v1/packs/{slug}": get("One pack", [pathParam("slug")], data("Pack")),
       "/api/v1/results": get("Approved results with method cards and figures", [...pageParams, ...packFilterParams, { name: "pack", in: "query", schema: { type: "string" } }, { name: "group", in: "query", description: "Like-for-like group key.", schema: { type: "string" } }], listOf("Result")),
       "/api/v1/results/{id}": get("One approved result", [pathParam("id", "integer")], data("Result")),
@@ -102,7 +113,7 @@ export function openApiDocument(serverUrl: string) {
           },
         },
         Chart: { type: "object", properties: { id: { type: "string" }, kind: { type: "string", enum: ["label-check", "curves", "maker-ranking"] }, title: { type: "string" }, note: { type: ["string", "null"] }, state: { type: "object" }, links: { type: ["object", "null"] } } },
-        PageMeta: { type: "object", properties: { page: { type: "integer" }, perPage: { type: "integer" }, total: { type: "integer" }, lastPage: { type: "integer" }, licence: { type: "object" } } },
+        PageMeta: { type: "object", properties: { page: { type: "integer" }, pageSize: { type: "integer" }, pageCount: { type: "integer" }, total: { type: "integer" }, licence: { type: "object" } } },
         Error: { type: "object", properties: { error: { type: "object", properties: { code: { type: "string" }, message: { type: "string" }, fieldErrors: { type: "object" } } } } },
       },
     },

@@ -7,17 +7,23 @@ const intParam = (min: number, max: number) => z.coerce.number().int().min(min).
 
 export const pageQuery = z.object({
   page: intParam(1, 100_000).default(1),
-  perPage: intParam(1, 200).default(50),
+  size: intParam(1, 200).default(50),
 });
 
-/** The filters of the packs table. */
+const num = (min: number, max: number) => z.coerce.number().min(min).max(max).optional();
+
+/** The filters of the packs table (same names as GET /api/v1/packs and the /packs page). */
 export const packFilters = z.object({
+  q: z.string().trim().min(1).max(100).optional(),
   maker: slug.optional(),
   cells: intParam(1, 14).optional(),
-  connector: z.string().trim().min(1).max(40).optional(),
-  minCapacityMah: intParam(1, 100_000).optional(),
-  maxCapacityMah: intParam(1, 100_000).optional(),
-  q: z.string().trim().min(1).max(80).optional(),
+  connector: z.string().trim().min(1).max(30).optional(),
+  minMah: num(0, 100_000),
+  maxMah: num(0, 100_000),
+  minC: num(0, 1000),
+  maxC: num(0, 1000),
+  minG: num(0, 100_000),
+  maxG: num(0, 100_000),
 });
 export type PackFilters = z.infer<typeof packFilters>;
 

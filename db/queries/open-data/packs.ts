@@ -5,7 +5,7 @@ import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { PackFilters } from "@/lib/validations/open-data";
 
-export type Page = { page: number; perPage: number };
+export type Page = { page: number; size: number };
 export type Paged<T> = { rows: T[]; total: number };
 
 export type MakerRow = { id: number; slug: string; name: string; packCount: number };
@@ -32,8 +32,12 @@ export function packConditions(f: PackFilters): SQL[] {
   if (f.maker) where.push(eq(makers.slug, f.maker));
   if (f.cells !== undefined) where.push(eq(packs.cellsInSeries, f.cells));
   if (f.connector) where.push(sql`lower(${packs.connector}) = lower(${f.connector})`);
-  if (f.minCapacityMah !== undefined) where.push(gte(packs.ratedCapacityMah, f.minCapacityMah));
-  if (f.maxCapacityMah !== undefined) where.push(lte(packs.ratedCapacityMah, f.maxCapacityMah));
+  if (f.minMah !== undefined) where.push(gte(packs.ratedCapacityMah, f.minMah));
+  if (f.maxMah !== undefined) where.push(lte(packs.ratedCapacityMah, f.maxMah));
+  if (f.minC !== undefined) where.push(gte(packs.labelledContinuousC, f.minC));
+  if (f.maxC !== undefined) where.push(lte(packs.labelledContinuousC, f.maxC));
+  if (f.minG !== undefined) where.push(gte(packs.weightG, f.minG));
+  if (f.maxG !== undefined) where.push(lte(packs.weightG, f.maxG));
   if (f.q) {
     const like = `%${escapeLike(f.q)}%`;
     const match = or(ilike(packs.model, like), ilike(makers.name, like));
@@ -42,7 +46,7 @@ export function packConditions(f: PackFilters): SQL[] {
   return where;
 }
 
-export async function listMakersPage({ page, perPage }: Page): Promise<Paged<MakerRow>> {
+export async function listMakersPage({ page, size }: Page): Promise<Paged<MakerRow>> {
   const where = eq(makers.status, "active");
   const rows = await db
     .select({
@@ -50,7 +54,7 @@ export async function listMakersPage({ page, perPage }: Page): Promise<Paged<Mak
       packCount: sql<number>`(select count(*)::int from ${packs} where ${packs.makerId} = ${makers.id} and ${packs.status} = 'active')`,
     })
     .from(makers).where(where).orderBy(asc(makers.name), asc(makers.id))
-    .limit(perPage).offset((page - 1) * perPage);
+    .limit(size).offset((page - 1) * size);
   const [total] = await db.select({ n: count() }).from(makers).where(where);
   return { rows, total: total?.n ?? 0 };
 }
@@ -70,12 +74,12 @@ async function listMakersPageWhere(slug: string): Promise<Paged<MakerRow>> {
   return { rows, total: rows.length };
 }
 
-export async function listPacksPage(f: PackFilters, { page, perPage }: Page): Promise<Paged<PackRow>> {
+export async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRow>> {
   const where = and(...packConditions(f));
   const rows = await db
     .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where)
     .orderBy(asc(makers.name), asc(packs.model), asc(packs.id))
-    .limit(perPage).offset((page - 1) * perPage);
+    .limit(size).offset((page - 1) * size);
   const [total] = await db.select({ n: count() }).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where);
   return { rows, total: total?.n ?? 0 };
 }
@@ -89,10 +93,10 @@ export async function getApiPackBySlug(slug: string): Promise<PackRow | null> {
 
 /** Every active maker (downloads and the Data Package). */
 export async function listAllMakers(): Promise<MakerRow[]> {
-  return (await listMakersPage({ page: 1, perPage: 1_000_000 })).rows;
+  return (await listMakersPage({ page: 1, size: 1_000_000 })).rows;
 }
 
 /** Every active pack matching the filters (downloads). */
 export async function listAllPacks(f: PackFilters = {}): Promise<PackRow[]> {
-  return (await listPacksPage(f, { page: 1, perPage: 1_000_000 })).rows;
+  return (await listPacksPage(f, { page: 1, size: 1_000_000 })).rows;
 }

@@ -55,10 +55,10 @@ function conditions(f: ResultFilters): SQL[] {
   return where;
 }
 
-export async function listResultsPage(f: ResultFilters, { page, perPage }: Page): Promise<Paged<ResultRow>> {
+export async function listResultsPage(f: ResultFilters, { page, size }: Page): Promise<Paged<ResultRow>> {
   const where = and(...conditions(f));
   const rows = await baseQuery()
-    .where(where).orderBy(asc(results.id)).limit(perPage).offset((page - 1) * perPage);
+    .where(where).orderBy(asc(results.id)).limit(size).offset((page - 1) * size);
   const [total] = await db
     .select({ n: count() }).from(results).innerJoin(packs, eq(packs.id, results.packId)).innerJoin(makers, eq(makers.id, packs.makerId))
     .where(where);
@@ -77,7 +77,7 @@ async function listResultsPageById(id: number): Promise<Paged<ResultRow>> {
 }
 
 export async function listAllResults(f: ResultFilters = {}): Promise<ResultRow[]> {
-  return (await listResultsPage(f, { page: 1, perPage: 1_000_000 })).rows;
+  return (await listResultsPage(f, { page: 1, size: 1_000_000 })).rows;
 }
 
 export type CurveSeries = { resultId: number; packSlug: string; makerName: string; model: string; cellsInSeries: number; ratedCapacityMah: number; loadRateC: number; curve: CurvePoint[] };

@@ -18,10 +18,10 @@ export function DownloadForm({ makers }: { makers: MakerRow[] }) {
           <input name="cells" type="number" min={1} max={14} inputMode="numeric" className={inputClass} />
         </label>
         <label className="text-sm">Rated capacity from (mAh)
-          <input name="minCapacityMah" type="number" min={1} inputMode="numeric" className={inputClass} />
+          <input name="minMah" type="number" min={1} inputMode="numeric" className={inputClass} />
         </label>
         <label className="text-sm">Rated capacity up to (mAh)
-          <input name="maxCapacityMah" type="number" min={1} inputMode="numeric" className={inputClass} />
+          <input name="maxMah" type="number" min={1} inputMode="numeric" className={inputClass} />
         </label>
         <label className="text-sm">Connector
           <input name="connector" type="text" maxLength={40} className={inputClass} />

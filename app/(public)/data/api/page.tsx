@@ -46,15 +46,15 @@ export default function ApiGuidePage() {
       </div>
       <h2>Paging, caching and limits</h2>
       <ul>
-        <li><code>page</code> (from 1) and <code>perPage</code> (up to 200, default 50); <code>meta.total</code>, <code>links.next</code> and the <code>X-Total-Count</code> header tell you how far to go.</li>
-        <li>Filters are those of the packs table: <code>maker</code>, <code>cells</code>, <code>connector</code>, <code>minCapacityMah</code>, <code>maxCapacityMah</code>, <code>q</code>; results add <code>pack</code> and <code>group</code>. A bad value answers <code>422</code> with <code>error.fieldErrors</code>.</li>
+        <li><code>page</code> (from 1) and <code>size</code> (up to 200, default 50; the packs list takes 10, 25, 50 or 100 and adds <code>sort</code> and <code>dir</code>); <code>total</code>, <code>links.next</code> and the <code>X-Total-Count</code> header tell you how far to go.</li>
+        <li>Filters are those of the packs table: <code>maker</code>, <code>cells</code>, <code>connector</code>, <code>minMah</code>/<code>maxMah</code> (rated capacity), <code>minC</code>/<code>maxC</code> (labelled C), <code>minG</code>/<code>maxG</code> (weight), <code>q</code>; results add <code>pack</code> and <code>group</code>. A bad value answers <code>422</code> with <code>error.fieldErrors</code>.</li>
         <li>Responses carry an <code>ETag</code>; send it back in <code>If-None-Match</code> and an unchanged answer is a bodiless <code>304</code>. They may be cached for a minute.</li>
         <li>CORS is open for GET, so a browser page on any site can read the API.</li>
         <li>600 requests a minute per IP address; beyond that, <code>429</code> with <code>Retry-After</code> in seconds.</li>
         <li>Only approved results are served. Figures are medians only where the name says so; units are in the field names.</li>
       </ul>
       <h2>Example</h2>
-      <pre className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk"><code>{`curl -s '${base}/api/v1/packs?cells=4&perPage=2'\ncurl -s '${base}/api/v1/results?pack=SLUG'`}</code></pre>
+      <pre className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk"><code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'`}</code></pre>
       <h2>Fields</h2>
       <h3>Maker</h3>
       <FieldTable fields={makerFields} />

@@ -4,10 +4,10 @@ import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/lib/ope
 import { groupListQuery } from "@/lib/validations/open-data";
 
 export const GET = apiGet(async (req) => {
-  const { page, perPage, minResults } = parseQuery(req, groupListQuery);
+  const { page, size, minResults } = parseQuery(req, groupListQuery);
   const all = await listGroups(minResults);
-  const rows = all.slice((page - 1) * perPage, page * perPage).map((g) => ({ ...g, links: { self: `/api/v1/groups/${g.key}` } }));
-  const env = pageEnvelope(req, page, perPage, all.length);
+  const rows = all.slice((page - 1) * size, page * size).map((g) => ({ ...g, links: { self: `/api/v1/groups/${g.key}` } }));
+  const env = pageEnvelope(req, page, size, all.length);
   return apiJson(req, { data: rows, meta: env.meta, links: env.links }, env.headers);
 });
 export const OPTIONS = apiOptions;

@@ -6,7 +6,7 @@ import { pageQuery } from "@/lib/validations/open-data";
 export const GET = apiGet(async (req) => {
   const q = parseQuery(req, pageQuery);
   const { rows, total } = await listMakersPage(q);
-  const env = pageEnvelope(req, q.page, q.perPage, total);
+  const env = pageEnvelope(req, q.page, q.size, total);
   return apiJson(req, { data: rows, meta: env.meta, links: env.links }, env.headers);
 });
 export const OPTIONS = apiOptions;

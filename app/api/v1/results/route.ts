@@ -4,9 +4,9 @@ import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/lib/ope
 import { resultListQuery } from "@/lib/validations/open-data";
 
 export const GET = apiGet(async (req) => {
-  const { page, perPage, ...filters } = parseQuery(req, resultListQuery);
-  const { rows, total } = await listResultsPage(filters, { page, perPage });
-  const env = pageEnvelope(req, page, perPage, total);
+  const { page, size, ...filters } = parseQuery(req, resultListQuery);
+  const { rows, total } = await listResultsPage(filters, { page, size });
+  const env = pageEnvelope(req, page, size, total);
   return apiJson(req, { data: rows, meta: { ...env.meta, filters }, links: env.links }, env.headers);
 });
 export const OPTIONS = apiOptions;
