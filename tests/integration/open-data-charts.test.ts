@@ -70,3 +70,30 @@ describe("GET /api/v1/charts", () => {
     expect(one?.links?.embed).toMatch(/^\/embed\/chart\//);
   });
 });
+
+describe("POST /api/v1/charts (curated list, chart.save)", () => {
+  const post = (body: unknown, headers: Record<string, string> = {}) =>
+    import("@/app/api/v1/charts/route").then(({ POST }) =>
+      POST(new Request("http://localhost:3000/api/v1/charts", { method: "POST", headers: { "content-type": "application/json", host: "localhost:3000", ...headers }, body: JSON.stringify(body) }), noParams),
+    );
+
+  it("needs a signed-in role: anonymous journalists publish permalinks instead (401)", async () => {
+    expect((await post({ state })).status).toBe(401);
+  });
+
+  it("saves for a signed-in contributor, refuses other origins and invalid states", async () => {
+    const { sessions, users } = await import("@/db/schema");
+    const [u] = await db.insert(users).values({ email: `${P}-saver@example.test` }).returning();
+    if (!u) throw new Error("no user");
+    await db.insert(sessions).values({ sessionToken: `${P}-token`, userId: u.id, expires: new Date(Date.now() + 3_600_000) });
+    const cookie = { cookie: `authjs.session-token=${P}-token` };
+    const res = await post({ state: { ...state, title: "Saved by a contributor" } }, cookie);
+    expect(res.status).toBe(201);
+    const saved = ((await res.json()) as { data: { id: string } }).data;
+    expect(saved.id).toMatch(/^saved-by-a-contributor-[0-9a-f]{8}$/);
+    const list = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as { data: { id: string }[] };
+    expect(list.data.map((c) => c.id)).toContain(saved.id);
+    expect((await post({ state }, { ...cookie, origin: "https://elsewhere.example" })).status).toBe(403);
+    expect((await post({ state: { ...state, kind: "pie" } }, cookie)).status).toBe(422);
+  });
+});

@@ -8,6 +8,7 @@ import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
+import { SaveChart } from "../../_components/save-chart-client";
 
 // The URL carries the whole chart; pages are generated on first request and revalidated (no cookies).
 export const revalidate = 3600;
@@ -60,6 +61,7 @@ export default async function ChartPage({ params }: Props) {
             <li><a href={`/data/download/results.csv?group=${state.group}${state.maker ? `&maker=${state.maker}` : ""}${state.cells ? `&cells=${state.cells}` : ""}`}>The results behind it (CSV)</a></li>
           </ul>
           <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>
+          <SaveChart state={state} />
           <p><Link href={`/charts/new?from=${encodeURIComponent((await params).state)}`}>Change this chart</Link> · <a href={links.embed}>Open the embed</a></p>
         </div>
       </section>
