@@ -86,6 +86,11 @@ test("the open-data page offers downloads, the licence and Dataset markup", asyn
   const csv = await page.request.get((await page.getByRole("link", { name: "results.csv" }).getAttribute("href")) ?? "");
   expect(csv.headers()["content-type"]).toContain("text/csv");
   expect((await csv.text()).split("\r\n").length).toBeGreaterThan(100);
+  // A filtered download: one like-for-like group, as CSV with a dated, versioned file name.
+  await page.getByLabel("Like-for-like group (results only)").selectOption({ index: 1 });
+  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Download results.csv" }).click()]);
+  expect(download.suggestedFilename()).toMatch(/^sagline-results-\d{4}-\d{2}-\d{2}-v\d+\.\d+\.\d+\.csv$/);
+  expect(download.url()).toContain("group=");
   await page.getByRole("link", { name: "API guide" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("API guide");
 });

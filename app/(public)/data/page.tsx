@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { listGroupOptions } from "@/db/queries/open-data/groups";
 import { listAllMakers } from "@/db/queries/open-data/packs";
 import { env } from "@/lib/env";
 import { DATASETS, dataPackageDescriptor } from "@/lib/open-data/datapackage";
@@ -12,7 +13,7 @@ export const metadata: Metadata = { title: "Open data and API", description: `Do
 const descriptions = { makers: "Makers (brands on labels)", packs: "Packs as labelled", results: "Approved results: method card and figures" } as const;
 
 export default async function DataPage() {
-  const makers = await listAllMakers();
+  const [makers, groups] = await Promise.all([listAllMakers(), listGroupOptions(1)]);
   const base = env().APP_URL;
   const desc = dataPackageDescriptor(base, new Date());
   const jsonLd = {
@@ -79,7 +80,7 @@ export default async function DataPage() {
           The <a href="/data/datapackage.json">Data Package descriptor (datapackage.json)</a> describes the complete dump: a
           Table Schema for each file with types, units, constraints, primary and foreign keys.
         </p>
-        <DownloadForm makers={makers} />
+        <DownloadForm makers={makers} groups={groups} />
       </section>
 
       <section aria-labelledby="api-heading" className="space-y-2">

@@ -1,9 +1,10 @@
 // Filtered downloads: a plain GET form (works without JavaScript); each button names its file.
+import type { GroupOption } from "@/db/queries/open-data/groups";
 import type { MakerRow } from "@/db/queries/open-data/packs";
 
 const inputClass = "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
 
-export function DownloadForm({ makers }: { makers: MakerRow[] }) {
+export function DownloadForm({ makers, groups }: { makers: MakerRow[]; groups: GroupOption[] }) {
   return (
     <form method="get" action="/data/download/results.csv" className="card space-y-4" aria-labelledby="filtered-heading">
       <h3 id="filtered-heading">Filtered download</h3>
@@ -29,8 +30,11 @@ export function DownloadForm({ makers }: { makers: MakerRow[] }) {
         <label className="text-sm">Search maker or model
           <input name="q" type="search" maxLength={80} className={inputClass} />
         </label>
-        <label className="text-sm sm:col-span-2">Like-for-like group key (results only)
-          <input name="group" type="text" maxLength={160} pattern="[a-z0-9._\-]+" className={`${inputClass} num`} />
+        <label className="text-sm sm:col-span-2">Like-for-like group (results only)
+          <select name="group" className={inputClass} defaultValue="">
+            <option value="">Every group</option>
+            {groups.map((g) => <option key={g.key} value={g.key}>{g.label ?? g.key} ({g.resultCount} results)</option>)}
+          </select>
         </label>
       </div>
       <div className="flex flex-wrap gap-2">
