@@ -36,7 +36,7 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   typedRoutes: false,
-  serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser"],
+  serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser", "@resvg/resvg-js"],
   // authInterrupts: forbidden() renders app/forbidden.tsx with a real 403 status.
   experimental: { serverActions: { bodySizeLimit: "60mb" }, authInterrupts: true },
   async headers() {

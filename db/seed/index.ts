@@ -8,6 +8,7 @@ import { parseEnv } from "@/lib/env";
 import * as schema from "@/db/schema";
 import { buildPacks, demoMakers, demoUsers } from "./scenario";
 import { seedResults } from "./results";
+import { seedCharts } from "./charts";
 
 export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?: (s: string) => void } = {}) {
   const log = opts.log ?? (() => {});
@@ -41,7 +42,8 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
       )
       .onConflictDoNothing();
     const made = await seedResults(db, packs, log);
-    log(`sagline: demo scenario seeded (${demoMakers.length} makers, ${packs.length} packs, ${made} results)`);
+    const charts = await seedCharts(db);
+    log(`sagline: demo scenario seeded (${demoMakers.length} makers, ${packs.length} packs, ${made} results, ${charts} charts)`);
   } finally {
     await pool.end();
   }

@@ -1,0 +1,31 @@
+"use client";
+// Adds the chart to the curated list on /charts. Needs a signed-in role ("chart.save", checked on the
+// server); the permalink works for everyone without it.
+import { useState } from "react";
+import type { ChartState } from "@/lib/open-data/chart-state";
+
+export function SaveChart({ state }: { state: ChartState }) {
+  const [message, setMessage] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  async function save() {
+    setBusy(true);
+    try {
+      const res = await fetch("/api/v1/charts", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ state }) });
+      if (res.status === 201) setMessage("Added to the published charts.");
+      else if (res.status === 401) setMessage("Sign in to add charts to the published list. The permalink works without it.");
+      else setMessage("Could not add the chart; the permalink still works.");
+    } catch {
+      setMessage("Could not reach Sagline; the permalink still works.");
+    } finally {
+      setBusy(false);
+    }
+  }
+  return (
+    <div className="space-y-1">
+      <button type="button" onClick={save} disabled={busy} className="rounded border border-ink/20 px-3 py-1 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk">
+        Add to published charts
+      </button>
+      {message ? <p className="muted text-xs" role="status">{message}</p> : null}
+    </div>
+  );
+}

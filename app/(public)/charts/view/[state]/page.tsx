@@ -1,0 +1,70 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { env } from "@/lib/env";
+import { loadChartData } from "@/lib/open-data/chart-data";
+import { chartLinks, embedSnippet } from "@/lib/open-data/chart-links";
+import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state";
+import { renderChartSvg } from "@/lib/open-data/chart-svg";
+import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { EmbedSnippet } from "../../_components/embed-snippet-client";
+import { SaveChart } from "../../_components/save-chart-client";
+
+// The URL carries the whole chart; pages are generated on first request and revalidated (no cookies).
+export const revalidate = 3600;
+export async function generateStaticParams(): Promise<{ state: string }[]> {
+  return [];
+}
+
+type Props = { params: Promise<{ state: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const state = decodeChartState((await params).state);
+  if (!state) return { title: "Chart not found" };
+  const base = env().APP_URL;
+  const links = chartLinks(state);
+  const oembed = `${base}/api/oembed?format=json&url=${encodeURIComponent(`${base}${links.permalink}`)}`;
+  return {
+    title: state.title,
+    description: state.note ?? `${CHART_KIND_LABELS[state.kind]} from Sagline open data.`,
+    alternates: { canonical: links.permalink, types: { "application/json+oembed": oembed } },
+    openGraph: { title: state.title, images: [{ url: `${base}${links.png}`, width: 1600, height: 1000 }] },
+  };
+}
+
+export default async function ChartPage({ params }: Props) {
+  const state = decodeChartState((await params).state);
+  if (!state) notFound();
+  const data = await loadChartData(state);
+  const links = chartLinks(state);
+  const base = env().APP_URL;
+  return (
+    <div className="space-y-6">
+      <div className="space-y-1">
+        <p className="muted text-sm"><Link href="/charts">Charts</Link> · {CHART_KIND_LABELS[state.kind]}</p>
+        <h1>{state.title}</h1>
+      </div>
+      <figure className="card overflow-hidden p-2">
+        <div className="[&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
+        <figcaption className="muted px-2 pt-2 text-sm">
+          Data: {ATTRIBUTION}, licensed <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
+          one like-for-like group are compared. {data.leftOut.join(" ")}
+        </figcaption>
+      </figure>
+      <section className="grid gap-6 lg:grid-cols-[2fr_1fr]" aria-label="Use this chart">
+        <EmbedSnippet snippet={embedSnippet(state, base)} />
+        <div className="space-y-2 text-sm">
+          <h2 className="text-base">Download</h2>
+          <ul className="space-y-1">
+            <li><a href={`${links.png}?download=1`} download>PNG image (1600 × 1000)</a></li>
+            <li><a href={`${links.svg}?download=1`} download>SVG image</a></li>
+            <li><a href={`/data/download/results.csv?group=${state.group}${state.maker ? `&maker=${state.maker}` : ""}${state.cells ? `&cells=${state.cells}` : ""}`}>The results behind it (CSV)</a></li>
+          </ul>
+          <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>
+          <SaveChart state={state} />
+          <p><Link href={`/charts/new?from=${encodeURIComponent((await params).state)}`}>Change this chart</Link> · <a href={links.embed}>Open the embed</a></p>
+        </div>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,39 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { loadChartData } from "@/lib/open-data/chart-data";
+import { chartLinks } from "@/lib/open-data/chart-links";
+import { decodeChartState } from "@/lib/open-data/chart-state";
+import { renderChartSvg } from "@/lib/open-data/chart-svg";
+import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+
+export const revalidate = 3600;
+export async function generateStaticParams(): Promise<{ state: string }[]> {
+  return [];
+}
+
+type Props = { params: Promise<{ state: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const state = decodeChartState((await params).state);
+  return { title: state?.title ?? "Chart not found", robots: { index: false } };
+}
+
+// Tells the embedding page our height; embed-resize.js checks that the message comes from this frame.
+const RESIZE_SCRIPT = `(function(){var el=document.getElementById("sagline-embed");if(!el||window.parent===window)return;var last=0;function send(){var h=Math.ceil(el.getBoundingClientRect().height);if(h&&h!==last){last=h;window.parent.postMessage({type:"sagline:embed-height",height:h},"*");}}if(window.ResizeObserver){new ResizeObserver(send).observe(el);}window.addEventListener("load",send);send();})();`;
+
+export default async function EmbedChartPage({ params }: Props) {
+  const state = decodeChartState((await params).state);
+  if (!state) notFound();
+  const data = await loadChartData(state);
+  const links = chartLinks(state);
+  return (
+    <div id="sagline-embed" className="p-1">
+      <div className="[&>svg]:block [&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
+      <p className="px-1 pt-1 text-xs text-ink-soft">
+        <a href={links.permalink} target="_blank" rel="noopener">View on Sagline</a> · Data{" "}
+        <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">{DATA_LICENCE_SHORT}</a>
+      </p>
+      <script dangerouslySetInnerHTML={{ __html: RESIZE_SCRIPT }} />
+    </div>
+  );
+}

@@ -1,0 +1,66 @@
+// Per-pack aggregates inside one like-for-like group: the median of approved results with n and spread
+// (pure; fed by db/queries/open-data/groups.ts).
+import { groupKey as computeGroupKey, summarise } from "@/lib/analysis";
+
+export const AGGREGATE_FIGURES = [
+  "capacityMah", "dcResistanceMohm", "resistanceAt25CMohm", "holdVoltagePerCellV", "temperatureRiseC", "sagLimitedC", "labelRatio", "capacityRatio",
+] as const;
+export type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
+
+export type Summary = { median: number; n: number; min: number; max: number } | null;
+
+type Sample = {
+  packId: number; packSlug: string; makerSlug: string; makerName: string; model: string; cellsInSeries: number;
+  ratedCapacityMah: number; labelledContinuousC: number;
+} & Record<AggregateFigure, number | null>;
+
+export type PackAggregate = {
+  packSlug: string; makerSlug: string; makerName: string; model: string; cellsInSeries: number; ratedCapacityMah: number;
+  labelledContinuousC: number; resultCount: number; figures: Record<AggregateFigure, Summary>;
+};
+
+function summary(values: (number | null)[]): Summary {
+  const s = summarise(values.filter((v): v is number => v !== null && Number.isFinite(v)));
+  return s ? { median: s.median, n: s.n, min: s.min, max: s.max } : null;
+}
+
+export function aggregateByPack(samples: Sample[]): PackAggregate[] {
+  const byPack = new Map<number, Sample[]>();
+  for (const s of samples) byPack.set(s.packId, [...(byPack.get(s.packId) ?? []), s]);
+  return [...byPack.values()].map((list) => {
+    const first = list[0] as Sample;
+    const figures = Object.fromEntries(AGGREGATE_FIGURES.map((f) => [f, summary(list.map((s) => s[f]))])) as Record<AggregateFigure, Summary>;
+    return {
+      packSlug: first.packSlug, makerSlug: first.makerSlug, makerName: first.makerName, model: first.model,
+      cellsInSeries: first.cellsInSeries, ratedCapacityMah: first.ratedCapacityMah, labelledContinuousC: first.labelledContinuousC,
+      resultCount: list.length, figures,
+    };
+  });
+}
+
+export type MakerAggregate = { makerSlug: string; makerName: string; packCount: number; resultCount: number; labelRatio: Summary };
+
+/** Maker ranking: the median over a maker's packs of each pack's median label ratio. */
+export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
+  const byMaker = new Map<string, PackAggregate[]>();
+  for (const p of packsAgg) byMaker.set(p.makerSlug, [...(byMaker.get(p.makerSlug) ?? []), p]);
+  return [...byMaker.values()]
+    .map((list) => {
+      const first = list[0] as PackAggregate;
+      return {
+        makerSlug: first.makerSlug, makerName: first.makerName, packCount: list.length,
+        resultCount: list.reduce((n, p) => n + p.resultCount, 0),
+        labelRatio: summary(list.map((p) => p.figures.labelRatio?.median ?? null)),
+      };
+    })
+    .sort((a, b) => (b.labelRatio?.median ?? -1) - (a.labelRatio?.median ?? -1));
+}
+
+/** A human label for a group key, recomputed from one of its results' method card. */
+export function groupLabel(sample: { resistanceMethod: string; ambientTemperatureC: number; cutoffVPerCell: number; loadCurrentA: number; ratedCapacityMah: number; cyclesBeforeTest: number } | undefined): string | null {
+  if (!sample) return null;
+  return computeGroupKey({
+    resistanceMethod: sample.resistanceMethod, ambientC: sample.ambientTemperatureC, cutoffVPerCell: sample.cutoffVPerCell,
+    loadCurrentA: sample.loadCurrentA, ratedMah: sample.ratedCapacityMah, cyclesBeforeTest: sample.cyclesBeforeTest,
+  }).label;
+}

@@ -1,0 +1,14 @@
+// PNG from the chart SVG, rendered on the server with resvg and the shipped Inter font (no system fonts,
+// so every server draws the same picture).
+import "server-only";
+import { Resvg } from "@resvg/resvg-js";
+import { chartFontFiles } from "./font";
+
+export function svgToPng(svg: string, scale = 2): Buffer {
+  const resvg = new Resvg(svg, {
+    fitTo: { mode: "zoom", value: scale },
+    font: { fontFiles: chartFontFiles(), loadSystemFonts: false, defaultFontFamily: "Inter" },
+    background: "#ffffff",
+  });
+  return resvg.render().asPng();
+}

@@ -1,0 +1,56 @@
+// A chart's full state travels in its URL (base64url JSON), so a published chart never changes when
+// defaults change later. Version 1 of the state; a new version gets a new literal and its own reader.
+import { z } from "zod";
+
+export const CHART_KINDS = ["label-check", "curves", "maker-ranking"] as const;
+export type ChartKind = (typeof CHART_KINDS)[number];
+export const CHART_KIND_LABELS: Record<ChartKind, string> = {
+  "label-check": "Label check (labelled C against measured C)",
+  curves: "Discharge curves overlay",
+  "maker-ranking": "Maker ranking (median label ratio)",
+};
+
+export const chartState = z.object({
+  v: z.literal(1),
+  kind: z.enum(CHART_KINDS),
+  group: z.string().regex(/^[a-z0-9._-]{1,160}$/, "Choose a like-for-like group."),
+  maker: z.string().regex(/^[a-z0-9-]{1,80}$/).optional(),
+  cells: z.number().int().min(1).max(14).optional(),
+  title: z.string().trim().min(1, "Give the chart a title.").max(120),
+  note: z.string().trim().max(400).optional(),
+});
+export type ChartState = z.infer<typeof chartState>;
+
+// Isomorphic base64url (the builder encodes in the browser, the server decodes).
+function toBase64Url(text: string): string {
+  let bin = "";
+  for (const byte of new TextEncoder().encode(text)) bin += String.fromCharCode(byte);
+  return btoa(bin).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
+}
+
+function fromBase64Url(text: string): string {
+  const bin = atob(text.replace(/-/g, "+").replace(/_/g, "/"));
+  return new TextDecoder("utf-8", { fatal: true }).decode(Uint8Array.from(bin, (c) => c.charCodeAt(0)));
+}
+
+/** Keys in a fixed order, so one state always gives one URL. */
+export function encodeChartState(state: ChartState): string {
+  const s = chartState.parse(state);
+  const ordered = { v: s.v, kind: s.kind, group: s.group, maker: s.maker, cells: s.cells, title: s.title, note: s.note || undefined };
+  return toBase64Url(JSON.stringify(ordered));
+}
+
+/** null when the text is not a valid encoded state. */
+export function decodeChartState(encoded: string): ChartState | null {
+  if (!/^[A-Za-z0-9_-]{1,4000}$/.test(encoded)) return null;
+  try {
+    const parsed = chartState.safeParse(JSON.parse(fromBase64Url(encoded)));
+    return parsed.success ? parsed.data : null;
+  } catch {
+    return null;
+  }
+}
+
+/** Chart dimensions in CSS pixels. */
+export const CHART_WIDTH = 800;
+export const CHART_HEIGHT = 500;

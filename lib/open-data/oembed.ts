@@ -1,0 +1,57 @@
+// oEmbed (https://oembed.com) for chart pages: type "rich", honouring maxwidth/maxheight.
+import { z } from "zod";
+import { escapeHtmlAttr, chartLinks } from "./chart-links";
+import { CHART_HEIGHT, CHART_WIDTH, decodeChartState } from "./chart-state";
+import { ATTRIBUTION, DATA_LICENCE_NAME, DATA_LICENCE_URL } from "./licence";
+
+export const oembedQuery = z.object({
+  url: z.string().min(1).max(5000),
+  format: z.string().optional(),
+  maxwidth: z.coerce.number().int().positive().max(10_000).optional(),
+  maxheight: z.coerce.number().int().positive().max(10_000).optional(),
+});
+
+/** Height of the embed frame for a width: the chart keeps its aspect ratio, plus a line for the credit. */
+const FOOTER_PX = 32;
+const frameHeight = (width: number) => Math.round((width * CHART_HEIGHT) / CHART_WIDTH) + FOOTER_PX;
+
+/** The chart state behind a Sagline URL (permalink or embed), or null when it is not one of ours. */
+export function chartStateFromUrl(url: string, baseUrl: string) {
+  let u: URL;
+  try {
+    u = new URL(url);
+  } catch {
+    return null;
+  }
+  if (u.origin !== new URL(baseUrl).origin) return null;
+  const m = /^\/(?:charts\/view|embed\/chart)\/([A-Za-z0-9_-]+)\/?$/.exec(u.pathname);
+  return m?.[1] ? decodeChartState(m[1]) : null;
+}
+
+export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, maxheight?: number) {
+  const state = chartStateFromUrl(url, baseUrl);
+  if (!state) return null;
+  let width = Math.min(CHART_WIDTH, maxwidth ?? CHART_WIDTH);
+  let height = frameHeight(width);
+  if (maxheight !== undefined && height > maxheight) {
+    height = maxheight;
+    width = Math.min(width, Math.max(1, Math.floor(((maxheight - FOOTER_PX) * CHART_WIDTH) / CHART_HEIGHT)));
+  }
+  const links = chartLinks(state);
+  const html = `<iframe src="${baseUrl}${links.embed}" title="${escapeHtmlAttr(state.title)}" loading="lazy" width="${width}" height="${height}" style="max-width:100%;border:0" data-sagline-embed></iframe><script async src="${baseUrl}/embed-resize.js"></script>`;
+  return {
+    version: "1.0",
+    type: "rich",
+    title: state.title,
+    author_name: ATTRIBUTION,
+    author_url: `${baseUrl}/data`,
+    provider_name: "Sagline",
+    provider_url: baseUrl,
+    cache_age: 3600,
+    html,
+    width,
+    height,
+    license: DATA_LICENCE_NAME,
+    license_url: DATA_LICENCE_URL,
+  };
+}

@@ -1,0 +1,96 @@
+import { createServer, type Server } from "node:http";
+import type { AddressInfo } from "node:net";
+import { expect, test } from "@playwright/test";
+
+// A journalist's page on another origin (127.0.0.1 on its own port, the app is on localhost).
+let server: Server;
+let otherOrigin = "";
+const pages = new Map<string, string>();
+
+test.beforeAll(async () => {
+  server = createServer((req, res) => {
+    const body = pages.get(req.url ?? "/");
+    res.writeHead(body ? 200 : 404, { "Content-Type": "text/html; charset=utf-8" });
+    res.end(body ?? "not found");
+  });
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  otherOrigin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+});
+test.afterAll(async () => {
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+});
+
+test("a journalist builds a chart, embeds it on another site, and it renders and resizes", async ({ page, baseURL }) => {
+  await page.goto("/charts/new");
+  await page.getByLabel("Maker ranking (median label ratio)").check();
+  await page.getByLabel("Title", { exact: true }).fill("Makers against their labels");
+  await page.getByLabel("Note (shown under the title)").fill("One like-for-like group, medians.");
+  await expect(page.getByTestId("chart-preview")).toHaveAttribute("src", /\/charts\/image\/.+\/chart\.svg$/);
+  await page.getByRole("button", { name: "Publish and get the permalink" }).click();
+  await expect(page).toHaveURL(/\/charts\/view\/[A-Za-z0-9_-]+$/);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Makers against their labels");
+  // oEmbed discovery link on the chart page.
+  await expect(page.locator('link[rel="alternate"][type="application/json+oembed"]')).toHaveAttribute("href", /\/api\/oembed\?format=json&url=/);
+  const png = await page.request.get(await page.getByRole("link", { name: /PNG image/ }).getAttribute("href") ?? "");
+  expect(png.headers()["content-type"]).toBe("image/png");
+
+  const snippet = await page.getByLabel("Embed snippet").inputValue();
+  expect(snippet).toContain(`${baseURL}/embed/chart/`);
+  expect(snippet).toContain('loading="lazy"');
+  expect(snippet).toMatch(/title="[^"]+"/);
+  pages.set("/article", `<!doctype html><html><body style="margin:0"><main style="width:600px"><h1>An article</h1>${snippet}<p>After the chart.</p></main></body></html>`);
+
+  await page.goto(`${otherOrigin}/article`);
+  const frame = page.frameLocator("iframe[data-sagline-embed]");
+  await expect(frame.locator("svg title").first()).toHaveText("Makers against their labels");
+  await expect(frame.locator("svg")).toContainText("Source: Sagline");
+  await expect(frame.locator("svg")).toContainText("CC BY 4.0");
+  // The resize script sets the frame to the chart's height (600 px wide → about 375 px of chart plus the credit line).
+  const iframe = page.locator("iframe[data-sagline-embed]");
+  await expect.poll(async () => Number((await iframe.getAttribute("height")) ?? 0)).toBeLessThan(500);
+  const height = Number(await iframe.getAttribute("height"));
+  expect(height).toBeGreaterThan(350);
+  const box = await iframe.boundingBox();
+  expect(Math.round(box?.width ?? 0)).toBe(600);
+});
+
+test("embeds are cacheable, cookie-free and frameable; the rest of the site is not", async ({ page, request, baseURL }) => {
+  const charts = (await (await request.get("/api/v1/charts")).json()) as { data: { links: { embed: string; permalink: string } }[] };
+  const first = charts.data[0]?.links;
+  if (!first) throw new Error("the demo seed has charts");
+  const embed = await request.get(first.embed);
+  expect(embed.status()).toBe(200);
+  expect(embed.headers()["set-cookie"]).toBeUndefined();
+  expect(embed.headers()["cache-control"]).toMatch(/s-maxage=\d+/);
+  expect(embed.headers()["content-security-policy"]).toContain("frame-ancestors *");
+  expect(embed.headers()["x-frame-options"]).toBeUndefined();
+  const main = await request.get(first.permalink);
+  expect(main.headers()["x-frame-options"]).toBe("DENY");
+  expect(main.headers()["content-security-policy"]).toContain("frame-ancestors 'none'");
+
+  pages.set("/framing", `<!doctype html><html><body><iframe id="site" src="${baseURL}/charts" width="800" height="400"></iframe><iframe id="embed" src="${baseURL}${first.embed}" width="800" height="400"></iframe></body></html>`);
+  await page.goto(`${otherOrigin}/framing`);
+  await expect(page.frameLocator("#embed").locator("svg")).toContainText("Source: Sagline");
+  // The browser refuses to show the main site inside the other origin's page.
+  await page.waitForTimeout(1000);
+  await expect(page.frameLocator("#site").getByRole("heading", { name: "Charts" })).toHaveCount(0);
+});
+
+test("the open-data page offers downloads, the licence and Dataset markup", async ({ page }) => {
+  await page.goto("/data");
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Open data");
+  await expect(page.getByRole("heading", { name: "Licence and how to credit us" })).toBeVisible();
+  const ld = JSON.parse((await page.locator('script[type="application/ld+json"]').textContent()) ?? "{}") as { "@type": string; license: string };
+  expect(ld["@type"]).toBe("Dataset");
+  expect(ld.license).toBe("https://creativecommons.org/licenses/by/4.0/");
+  const csv = await page.request.get((await page.getByRole("link", { name: "results.csv" }).getAttribute("href")) ?? "");
+  expect(csv.headers()["content-type"]).toContain("text/csv");
+  expect((await csv.text()).split("\r\n").length).toBeGreaterThan(100);
+  // A filtered download: one like-for-like group, as CSV with a dated, versioned file name.
+  await page.getByLabel("Like-for-like group (results only)").selectOption({ index: 1 });
+  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Download results.csv" }).click()]);
+  expect(download.suggestedFilename()).toMatch(/^sagline-results-\d{4}-\d{2}-\d{2}-v\d+\.\d+\.\d+\.csv$/);
+  expect(download.url()).toContain("group=");
+  await page.getByRole("link", { name: "API guide" }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("API guide");
+});
