@@ -29,7 +29,7 @@ export function ChartFrame({ title, children, table, notes, legend, headingLevel
       </div>
       {legend && !asTable ? <div className="text-sm">{legend}</div> : null}
       {asTable ? (
-        <div className="max-h-[28rem] overflow-auto">
+        <div className="max-h-[28rem] overflow-auto" tabIndex={0} role="region" aria-label="Chart data as a table">
           <table className="w-full border-collapse text-sm">
             <caption className="muted pb-2 text-left text-xs">{table.caption}</caption>
             <thead>

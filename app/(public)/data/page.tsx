@@ -61,7 +61,7 @@ export default async function DataPage() {
           free-text cells that could start a spreadsheet formula begin with a <code>&apos;</code>. File names carry the date
           of export and the schema version.
         </p>
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Downloads">
           <table className="w-full min-w-[28rem] text-sm">
             <thead><tr className="border-b border-ink/10 text-left"><th className="py-1 pr-3">Table</th><th className="py-1 pr-3">CSV</th><th className="py-1 pr-3">JSON</th><th className="py-1">Fields</th></tr></thead>
             <tbody>

@@ -32,7 +32,7 @@ export default async function MethodsPage() {
         </ul>
       </nav>
       {/* Our own Markdown from content/, rendered at build time. */}
-      <div className="prose-sagline overflow-x-auto" dangerouslySetInnerHTML={{ __html: parts.join("\n") }} />
+      <div className="prose-sagline [&_table]:block [&_table]:overflow-x-auto" dangerouslySetInnerHTML={{ __html: parts.join("\n") }} />
     </article>
   );
 }

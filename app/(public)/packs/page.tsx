@@ -29,7 +29,8 @@ export default async function PacksPage() {
         Measured columns appear when you choose a like-for-like group: figures are only compared between results taken the same way
         (<Link href="/methods#like-for-like">why</Link>). The same data is at <code>/api/v1/packs</code>.
       </p>
-      <Suspense fallback={<PacksView params={DEFAULT_PACK_PARAMS} page={initial} options={options} />}>
+      {/* Until the client reads the URL the rows are the unfiltered first page, so say they are loading. */}
+      <Suspense fallback={<PacksView params={DEFAULT_PACK_PARAMS} page={initial} options={options} loading />}>
         <PacksClient initial={initial} options={options} />
       </Suspense>
     </div>

@@ -29,7 +29,7 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
   const cell = "border-b border-ink/5 px-3 py-2 align-top dark:border-night-line/60";
   const head = "sticky left-0 z-10 bg-paper-raised text-left font-normal dark:bg-night-raised";
   return (
-    <div className="card -mx-4 overflow-x-auto p-0 sm:mx-0">
+    <div className="card -mx-4 overflow-x-auto p-0 sm:mx-0" tabIndex={0} role="region" aria-label="Comparison table">
       <table className="w-full min-w-[40rem] border-collapse text-sm" data-testid="compare-table">
         <caption className="sr-only">Figures of the compared packs in one like-for-like group. ★ marks the best value of a row.</caption>
         <thead>

@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "API guide", description: "Sagline's 
 
 function FieldTable<R>({ fields }: { fields: Field<R>[] }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="API endpoints">
       <table className="w-full min-w-[32rem]">
         <thead><tr><th>Field</th><th>Type</th><th>Meaning and unit</th></tr></thead>
         <tbody>{fields.map((f) => <tr key={f.name}><td><code>{f.name}</code></td><td>{f.type}</td><td>{f.description}</td></tr>)}</tbody>
@@ -30,7 +30,7 @@ export default function ApiGuidePage() {
         is the <a href="/api/v1/openapi.json">OpenAPI document</a>.
       </p>
       <h2>Endpoints</h2>
-      <div className="overflow-x-auto">
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="API endpoints">
         <table className="w-full min-w-[32rem]">
           <thead><tr><th>GET</th><th>What</th><th>Parameters</th></tr></thead>
           <tbody>
@@ -54,7 +54,7 @@ export default function ApiGuidePage() {
         <li>Only approved results are served. Figures are medians only where the name says so; units are in the field names.</li>
       </ul>
       <h2>Example</h2>
-      <pre className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk"><code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'`}</code></pre>
+      <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk"><code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'`}</code></pre>
       <h2>Fields</h2>
       <h3>Maker</h3>
       <FieldTable fields={makerFields} />

@@ -69,7 +69,7 @@ export function PackTable({ page, params, loading, onChange }: { page: ApiPackPa
           </fieldset>
         </details>
       </div>
-      <div className={`-mx-4 overflow-x-auto px-4 transition-opacity ${loading ? "opacity-50" : ""}`} aria-busy={loading}>
+      <div className={`-mx-4 overflow-x-auto px-4 transition-opacity ${loading ? "opacity-50" : ""}`} aria-busy={loading} tabIndex={0} role="region" aria-label="Packs table">
         <table className="w-full min-w-[52rem] border-collapse text-sm" data-testid="packs-table">
           <caption className="sr-only">Packs{hasGroup ? ", with medians in the chosen like-for-like group" : ""}. Column headers sort the table.</caption>
           <thead>

@@ -12,7 +12,7 @@ export function GroupFiguresTable({ groups, labelledC, ratedMah }: { groups: Gro
             Label: {fmt(labelledC)}C continuous, {fmt(ratedMah)} mAh. Each row is one like-for-like group; values are medians of its published results
             (n, and min–max underneath).
           </p>
-      <div className="-mx-4 overflow-x-auto px-4">
+      <div className="-mx-4 overflow-x-auto px-4" tabIndex={0} role="region" aria-label="Figures by like-for-like group">
         <table className="w-full min-w-[60rem] border-collapse text-sm" data-testid="group-figures">
           <caption className="sr-only">Label against measured figures by like-for-like group</caption>
           <thead>
