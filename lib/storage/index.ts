@@ -1,5 +1,4 @@
 // Upload storage through the S3 API only (locally the s3rver stand-in; hosted, any S3-compatible bucket).
-import { randomUUID } from "node:crypto";
 import type { Readable } from "node:stream";
 import {
   CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, PutObjectCommand, S3Client,
@@ -7,6 +6,8 @@ import {
 import { Upload } from "@aws-sdk/lib-storage";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+
+export * from "./keys";
 
 let client: S3Client | undefined;
 
@@ -54,11 +55,6 @@ export async function storageReachable(): Promise<boolean> {
   }
 }
 
-/** Logs are stored under their content hash, so the same file is stored once. */
-export function logKey(sha256: string): string {
-  return `logs/${sha256.slice(0, 2)}/${sha256}.csv`;
-}
-
 function notFound(err: unknown): boolean {
   if (!err || typeof err !== "object") return false;
   const e = err as { name?: string; $metadata?: { httpStatusCode?: number } };
@@ -77,13 +73,19 @@ export function startStreamUpload(key: string, body: Readable, contentType: stri
     partSize: 5 * 1024 * 1024,
     leavePartsOnError: false,
   });
+  let aborted = false;
   const done = upload.done().then(
     () => undefined,
     (err: unknown) => {
-      throw unavailable(err);
+      // An abort we asked for (a bad log) is not a storage fault worth logging.
+      throw aborted ? new AppError("bad_request", "Upload stopped.") : unavailable(err);
     },
   );
-  return { done, abort: () => upload.abort().catch(() => undefined) };
+  const abort = async () => {
+    aborted = true;
+    await upload.abort().catch(() => undefined);
+  };
+  return { done, abort };
 }
 
 /** The stored object's size, or null when there is none. */
@@ -101,7 +103,15 @@ export async function objectBytes(key: string): Promise<number | null> {
 export async function getObjectChunks(key: string): Promise<AsyncIterable<Uint8Array> | null> {
   try {
     const out = await storageClient().send(new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
-    return (out.Body as (Readable & AsyncIterable<Uint8Array>) | undefined) ?? null;
+    const body = out.Body as (Readable & AsyncIterable<Uint8Array>) | undefined;
+    if (!body) return null;
+    return (async function* () {
+      try {
+        for await (const chunk of body) yield chunk;
+      } catch (err) {
+        throw unavailable(err);
+      }
+    })();
   } catch (err) {
     if (notFound(err)) return null;
     throw unavailable(err);
@@ -122,27 +132,4 @@ export async function deleteObject(key: string): Promise<void> {
   } catch (err) {
     if (!notFound(err)) throw unavailable(err);
   }
-}
-
-// Uploads made while filling in the form land under the contributor's own prefix, so a submission can
-// only use files its contributor uploaded. Abandoned drafts' files expire by a bucket lifecycle rule
-// on the incoming/ prefix (hosted deployments; the local stand-in keeps them).
-const UUID = "[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}";
-export const PHOTO_EXTENSIONS = ["jpg", "png", "webp"] as const;
-export type PhotoExtension = (typeof PHOTO_EXTENSIONS)[number];
-
-export function incomingLogKey(userId: string): string {
-  return `incoming/${userId}/${randomUUID()}.csv`;
-}
-
-export function isOwnIncomingLogKey(key: string, userId: string): boolean {
-  return key.startsWith(`incoming/${userId}/`) && new RegExp(`^incoming/[^/]+/${UUID}\\.csv$`).test(key);
-}
-
-export function photoKey(userId: string, ext: PhotoExtension): string {
-  return `photos/${userId}/${randomUUID()}.${ext}`;
-}
-
-export function isOwnPhotoKey(key: string, userId: string): boolean {
-  return key.startsWith(`photos/${userId}/`) && new RegExp(`^photos/[^/]+/${UUID}\\.(${PHOTO_EXTENSIONS.join("|")})$`).test(key);
 }

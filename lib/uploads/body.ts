@@ -23,20 +23,20 @@ export function tooLarge(maxBytes: number, field = "file"): AppError {
 }
 
 /** 415 unless the body is a CSV-like raw body or multipart form data; 413 when Content-Length already says too much. */
-export function logBodyKind(req: Request, maxBytes: number, allowMultipart = true): LogBodyKind {
+export function logBodyKind(req: Request, maxBytes: number, allowMultipart = true, field = "file"): LogBodyKind {
   const type = (req.headers.get("content-type") ?? "").split(";")[0]?.trim().toLowerCase() ?? "";
   const length = Number(req.headers.get("content-length") ?? "");
-  if (Number.isFinite(length) && length > maxBytes + (allowMultipart ? 64 * 1024 : 0)) throw tooLarge(maxBytes);
+  if (Number.isFinite(length) && length > maxBytes + (allowMultipart ? 64 * 1024 : 0)) throw tooLarge(maxBytes, field);
   if (RAW_LOG_TYPES.has(type)) return "raw";
   if (allowMultipart && type === "multipart/form-data") return "multipart";
   const accepted = allowMultipart ? "text/csv as the raw body, or multipart/form-data with a field named file" : "text/csv";
   throw new AppError("unsupported_media_type", `Send the log as ${accepted} (got ${type || "no content type"}).`, {
-    file: ["This is not a CSV log. Export the log from your logger as CSV (comma, semicolon or tab separated)."],
+    [field]: ["This is not a CSV log. Export the log from your logger as CSV (comma, semicolon or tab separated)."],
   });
 }
 
 /** The raw request body as chunks; throws 413 as soon as it passes maxBytes. */
-export async function* requestChunks(req: Request, maxBytes: number): AsyncGenerator<Uint8Array> {
+export async function* requestChunks(req: Request, maxBytes: number, field = "file"): AsyncGenerator<Uint8Array> {
   if (!req.body) return;
   const reader = req.body.getReader();
   let bytes = 0;
@@ -45,12 +45,36 @@ export async function* requestChunks(req: Request, maxBytes: number): AsyncGener
       const { done, value } = await reader.read();
       if (done) return;
       bytes += value.byteLength;
-      if (bytes > maxBytes) throw tooLarge(maxBytes);
+      if (bytes > maxBytes) throw tooLarge(maxBytes, field);
       yield value;
     }
   } finally {
     reader.releaseLock();
   }
+}
+
+/** A small body (a photo) read whole, refused with 413 as soon as it passes maxBytes. */
+export async function readLimited(req: Request, maxBytes: number, field: string, message: string): Promise<Uint8Array> {
+  const length = Number(req.headers.get("content-length") ?? "");
+  if (Number.isFinite(length) && length > maxBytes) throw new AppError("payload_too_large", message, { [field]: [message] });
+  const parts: Uint8Array[] = [];
+  let total = 0;
+  try {
+    for await (const chunk of requestChunks(req, maxBytes)) {
+      parts.push(chunk);
+      total += chunk.byteLength;
+    }
+  } catch (err) {
+    if (err instanceof AppError && err.code === "payload_too_large") throw new AppError("payload_too_large", message, { [field]: [message] });
+    throw err;
+  }
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const p of parts) {
+    out.set(p, at);
+    at += p.byteLength;
+  }
+  return out;
 }
 
 /** The multipart field `file` as chunks (other fields are ignored); 422 when there is none, 413 past maxBytes. */
