@@ -2,7 +2,7 @@
 // a bad log is a 422 on the file field (with the line), a log past the limit a 413.
 import "server-only";
 import { analyseLog, checkAgainstCard, isLogError, toPublicFigures, warningsBesideChecks } from "@/lib/analysis";
-import type { AnalyseOptions, Analysis, CardCheck, CurvePoint, PublicFigures, StatedCard } from "@/lib/analysis";
+import type { AnalyseOptions, Analysis, LogPreview, StatedCard } from "@/lib/analysis";
 import { AppError } from "@/lib/errors";
 import { tooLarge } from "./body";
 
@@ -32,9 +32,6 @@ export async function analyseChunks(chunks: AsyncIterable<Uint8Array>, options: 
     throw sourceError ?? logErrorToAppError(err, maxBytes, field);
   }
 }
-
-/** What the contributor sees before confirming, and what the API answers with curve included. */
-export type LogPreview = { figures: PublicFigures; curve: CurvePoint[]; checks: CardCheck[] };
 
 export function previewOf(analysis: Analysis, card?: StatedCard): LogPreview {
   const figures = toPublicFigures(analysis);
