@@ -1,9 +1,9 @@
 // Reads for the submission flow: the catalogue as the pack picker sees it, one pack or maker by id,
 // a contributor's own result for withdrawal or resubmission, and earlier results with the same log.
 import "server-only";
-import { and, asc, eq, or } from "drizzle-orm";
+import { and, asc, desc, eq, or } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results } from "@/db/schema";
+import { makers, packs, results, reviewEvents } from "@/db/schema";
 
 export type PackChoice = {
   id: number;
@@ -127,4 +127,15 @@ export async function getResultForEdit(resultId: number): Promise<OwnResult | nu
     logFilename: row.logFilename,
     photoKeys: row.photoKeys,
   };
+}
+
+/** The reason given with the latest change request on a result (moderators' internal notes stay out). */
+export async function getLatestChangeRequest(resultId: number): Promise<{ reason: string | null; createdAt: Date } | null> {
+  const rows = await db
+    .select({ reason: reviewEvents.reason, createdAt: reviewEvents.createdAt })
+    .from(reviewEvents)
+    .where(and(eq(reviewEvents.resultId, resultId), eq(reviewEvents.toStatus, "changes_requested")))
+    .orderBy(desc(reviewEvents.createdAt), desc(reviewEvents.id))
+    .limit(1);
+  return rows[0] ?? null;
 }

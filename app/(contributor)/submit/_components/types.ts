@@ -29,9 +29,5 @@ export type BenchProfileOption = {
 export type PackFactsClient = { cells: number; ratedMah: number; labelledC: number; weightG: number | null; title: string };
 export type Limits = { logMaxMb: number; photoMaxMb: number };
 
-/** The form's API as the steps receive it: typed values in, parsed values out. */
-export type SubmitFormApi = import("react-hook-form").UseFormReturn<
-  import("@/lib/validations/result").SubmitResultValues,
-  unknown,
-  import("@/lib/validations/result").SubmitResultInput
->;
+/** The form's API as the steps receive it (the submit and the resubmit forms hold the same values). */
+export type SubmitFormApi = import("react-hook-form").UseFormReturn<import("@/lib/validations/result").SubmitResultValues, unknown, unknown>;
