@@ -27,7 +27,8 @@ export function PackStep({ form, packs, makers }: Props) {
   const packId = watch("pack.packId");
   const makerId = watch("pack.makerId");
   const fuse = useMemo(
-    () => new Fuse(packs.map((p) => ({ ...p, spec: labelSpec(p) })), { keys: ["makerName", "model", "spec", "connector"], threshold: 0.4, ignoreLocation: true }),
+    // Extended search: each word is matched fuzzily and all must match, anywhere in the pack's label text.
+    () => new Fuse(packs.map((p) => ({ ...p, label: `${p.makerName} ${p.model} ${labelSpec(p)} ${p.connector}` })), { keys: ["label"], threshold: 0.4, ignoreLocation: true, useExtendedSearch: true }),
     [packs],
   );
   const hits = query.trim() ? fuse.search(query.trim(), { limit: 8 }).map((r) => r.item) : [];
