@@ -37,12 +37,18 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       },
     }),
   ],
-  pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
+  // Our own pages; GET /api/auth/signout goes to the account page, whose button signs out.
+  pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in", signOut: "/account" },
   trustHost: true, // STACK.md gotchas 4–5: opened at http://localhost:PORT, behind our own host header
   secret: env().AUTH_SECRET,
   // One line per problem in the server log (expired links, missing CSRF tokens are routine), no stacks.
   logger: {
-    error: (error) => console.error(`[auth] ${error.name}: ${error.message.split("\n")[0]}`),
+    error: (error) => {
+      // AuthError subclasses carry a stable `type` ("Verification", "MissingCSRF"…); class names are minified.
+      const type = "type" in error && typeof error.type === "string" ? error.type : error.name;
+      const detail = error.message.split("\n")[0]?.replace(/\s*Read more at \S+/, "");
+      console.error(`[auth] ${type}${detail ? `: ${detail}` : ""}`);
+    },
     warn: (code) => console.warn(`[auth] warning: ${code}`),
   },
   callbacks: {

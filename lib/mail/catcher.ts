@@ -20,7 +20,7 @@ const caughtMail = z.object({
 export type CaughtMail = z.infer<typeof caughtMail>;
 
 export function catcherDir(): string {
-  return path.resolve(process.cwd(), env().MAIL_CATCHER_DIR);
+  return path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().MAIL_CATCHER_DIR);
 }
 
 async function readOne(dir: string, file: string): Promise<CaughtMail | null> {

@@ -1,6 +1,9 @@
 import type { Metadata } from "next";
 import { z } from "zod";
+import Link from "next/link";
 import { Alert } from "@/components/ui/form";
+import { getCurrentUser } from "@/lib/session";
+import { publicName } from "@/lib/user-name";
 import { callbackPath } from "@/lib/validations/sign-in";
 import { SignInForm } from "./sign-in-client";
 
@@ -21,6 +24,7 @@ const errorText: Record<string, string> = {
 export default async function SignInPage(props: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const sp = params.parse(await props.searchParams);
   const error = sp.error ? (errorText[sp.error] ?? "Something went wrong while signing in. Please ask for a new link.") : null;
+  const current = await getCurrentUser();
   return (
     <div className="space-y-6">
       <div className="space-y-2">
@@ -31,6 +35,12 @@ export default async function SignInPage(props: { searchParams: Promise<Record<s
         </p>
       </div>
       {error ? <Alert tone="error">{error}</Alert> : null}
+      {current ? (
+        <Alert tone="info">
+          You are already signed in as {publicName(current)}. <Link href={sp.callbackUrl ?? "/account"}>Continue</Link>, or ask
+          for a link for another address below.
+        </Alert>
+      ) : null}
       <div className="card">
         <SignInForm callbackUrl={sp.callbackUrl ?? "/account"} />
       </div>

@@ -19,11 +19,11 @@ export function RoleForm({ userId, email, role }: { userId: string; email: strin
             <option key={r} value={r}>{roleLabels[r]}</option>
           ))}
         </select>
-        <button type="submit" className={buttonClass("secondary")} disabled={pending}>
+        <button type="submit" className={buttonClass("secondary", "whitespace-nowrap")} disabled={pending}>
           {pending ? "Saving…" : "Change role"}
         </button>
       </div>
-      <p aria-live="polite" className="min-h-[1.25rem] text-sm">
+      <p aria-live="polite" className="text-sm">
         {state && !state.ok ? <span className="text-warn dark:text-red-300">{state.error}</span> : null}
         {state?.ok ? <span className="text-cell-600 dark:text-cell-400">{state.data.changed ? `Now ${roleLabels[state.data.to].toLowerCase()}.` : "No change."}</span> : null}
       </p>

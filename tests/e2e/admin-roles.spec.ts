@@ -1,0 +1,51 @@
+import { expect, test, type Page } from "@playwright/test";
+import { signIn } from "./sign-in-helpers";
+
+async function setRole(admin: Page, email: string, role: "Contributor" | "Moderator" | "Admin") {
+  const row = admin.locator(`[data-testid="user-row"][data-email="${email}"]`);
+  await row.getByLabel(`Role for ${email}`).selectOption({ label: role });
+  await row.getByRole("button", { name: "Change role" }).click();
+  await expect(row.getByText(`Now ${role.toLowerCase()}.`)).toBeVisible();
+}
+
+// An admin changes a contributor's role; the contributor's access follows on their very next request,
+// without signing in again.
+test("an admin changes roles, and a contributor sees the admin area only while they are admin", async ({ page, browser }) => {
+  const contributor = "ridgeline@sagline.localhost";
+  await signIn(page, contributor);
+  const denied = await page.goto("/admin/users");
+  expect(denied?.status()).toBe(403);
+  await expect(page.getByTestId("forbidden")).toContainText("This page is not open to your role");
+
+  const adminContext = await browser.newContext();
+  const admin = await adminContext.newPage();
+  await signIn(admin, "admin@sagline.localhost");
+  await admin.goto("/admin/users");
+  await expect(admin.getByRole("heading", { name: "Users and roles" })).toBeVisible();
+
+  await setRole(admin, contributor, "Moderator");
+  expect((await page.goto("/admin/users"))?.status()).toBe(403); // moderators do not manage roles
+
+  await setRole(admin, contributor, "Admin");
+  expect((await page.goto("/admin/users"))?.status()).toBe(200);
+  await expect(page.getByRole("heading", { name: "Users and roles" })).toBeVisible();
+
+  await setRole(admin, contributor, "Contributor");
+  expect((await page.goto("/admin/users"))?.status()).toBe(403);
+
+  // The role shown after a reload is the stored one.
+  await admin.reload();
+  await expect(admin.getByLabel(`Role for ${contributor}`)).toHaveValue("contributor");
+  await adminContext.close();
+});
+
+test("the last admin cannot demote themselves", async ({ page }) => {
+  await signIn(page, "admin@sagline.localhost");
+  await page.goto("/admin/users");
+  const row = page.locator('[data-testid="user-row"][data-email="admin@sagline.localhost"]');
+  await row.getByLabel("Role for admin@sagline.localhost").selectOption({ label: "Moderator" });
+  await row.getByRole("button", { name: "Change role" }).click();
+  await expect(row.getByText("This is the last admin. Make someone else an admin first.")).toBeVisible();
+  await page.reload();
+  await expect(row.getByLabel("Role for admin@sagline.localhost")).toHaveValue("admin");
+});

@@ -1,0 +1,33 @@
+// Sign in as a person would: ask for a link on /sign-in, then open the link the local mail catcher caught
+// (read from MAIL_CATCHER_DIR, relative to the repo root).
+import { expect, type Page } from "@playwright/test";
+import { caughtFor, firstLink } from "../helpers/mail";
+
+export async function requestLink(page: Page, email: string, from = "/sign-in"): Promise<number> {
+  await page.goto(from);
+  await expect(page).toHaveURL(/\/sign-in/);
+  const since = Date.now() - 1000;
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByRole("button", { name: "E-mail me a sign-in link" }).click();
+  await expect(page).toHaveURL(/\/sign-in\/check-email$/);
+  await expect(page.getByRole("heading", { name: "Check your e-mail" })).toBeVisible();
+  return since;
+}
+
+export async function linkFromCatcher(email: string, since: number): Promise<string> {
+  let link = "";
+  await expect
+    .poll(() => {
+      const m = caughtFor(email).find((x) => Date.parse(x.receivedAt) >= since);
+      link = m ? firstLink(m.text) : "";
+      return link;
+    })
+    .not.toBe("");
+  return link;
+}
+
+export async function signIn(page: Page, email: string, from = "/sign-in"): Promise<void> {
+  const since = await requestLink(page, email, from);
+  await page.goto(await linkFromCatcher(email, since));
+  await expect(page.getByTestId("account-menu")).toContainText("Account");
+}
