@@ -83,7 +83,7 @@ describe("submission role matrix", () => {
 
     it(`POST /api/v1/uploads/log and /photo as ${who} → ${allowed ? 201 : 401}`, async () => {
       const me = await as(role);
-      const cookie = me ? { cookie: `authjs.session-token=${me.token}` } : {};
+      const cookie: Record<string, string> = me ? { cookie: `authjs.session-token=${me.token}` } : {};
       const log = await logRoute.POST(postRequest("/api/v1/uploads/log?filename=m.csv", sampleLog().csv, { "content-type": "text/csv", ...cookie }), undefined);
       expect(log.status).toBe(allowed ? 201 : 401);
       const photo = await photoRoute.POST(postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", ...cookie }), undefined);
