@@ -22,32 +22,52 @@ export function readDraft(key: string): Draft | null {
   }
 }
 
-/** Saves the draft (debounced) whenever `save` is called; `clear` removes it. */
+/** Saves the draft (debounced, and at once when the page is hidden or unloaded); `clear` removes it. */
 export function useDraftStorage(key: string) {
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const pending = useRef<Draft | null>(null);
+  const write = useCallback(() => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    const draft = pending.current;
+    pending.current = null;
+    if (!draft) return;
+    try {
+      window.localStorage.setItem(key, JSON.stringify({ version: 1, ...draft, savedAt: new Date().toISOString() }));
+    } catch {
+      // storage full or blocked: the form still works, only the draft is not kept
+    }
+  }, [key]);
   const save = useCallback(
     (draft: Draft) => {
+      pending.current = draft;
       if (timer.current) clearTimeout(timer.current);
-      timer.current = setTimeout(() => {
-        try {
-          window.localStorage.setItem(key, JSON.stringify({ version: 1, ...draft, savedAt: new Date().toISOString() }));
-        } catch {
-          // storage full or blocked: the form still works, only the draft is not kept
-        }
-      }, 300);
+      timer.current = setTimeout(write, 300);
     },
-    [key],
+    [write],
   );
   const clear = useCallback(() => {
     if (timer.current) clearTimeout(timer.current);
+    pending.current = null;
     try {
       window.localStorage.removeItem(key);
     } catch {
       // nothing to clear
     }
   }, [key]);
-  useEffect(() => () => {
-    if (timer.current) clearTimeout(timer.current);
-  }, []);
+  useEffect(() => {
+    // A reload or a closed tab right after a change (an upload finishing) must not lose it.
+    const flush = () => write();
+    const hidden = () => {
+      if (document.visibilityState === "hidden") write();
+    };
+    window.addEventListener("pagehide", flush);
+    document.addEventListener("visibilitychange", hidden);
+    return () => {
+      window.removeEventListener("pagehide", flush);
+      document.removeEventListener("visibilitychange", hidden);
+      write();
+    };
+  }, [write]);
   return { save, clear };
 }
