@@ -1,11 +1,10 @@
 "use client";
 // A small preview of a log: pack voltage (left axis, solid) and current (right axis, dashed) against
 // time, with a "show as table" toggle. Colours are Okabe–Ito and always paired with a dash pattern.
-import { useId, useMemo, useState } from "react";
+import { useCallback, useId, useMemo, useRef, useState } from "react";
 import { AxisBottom, AxisLeft, AxisRight } from "@visx/axis";
 import { GridRows } from "@visx/grid";
 import { Group } from "@visx/group";
-import { useParentSize } from "@visx/responsive";
 import { scaleLinear } from "@visx/scale";
 import { LinePath } from "@visx/shape";
 import type { CurvePoint } from "@/lib/analysis/types";
@@ -15,6 +14,24 @@ const MARGIN = { top: 12, right: 52, bottom: 40, left: 52 };
 const HEIGHT = 260;
 
 type Props = { points: CurvePoint[]; title?: string };
+
+/** The width of an element, kept up to date; a callback ref, so a re-mounted element is observed too. */
+function useWidth(initial: number): [(el: HTMLDivElement | null) => void, number] {
+  const [width, setWidth] = useState(initial);
+  const observer = useRef<ResizeObserver | null>(null);
+  const ref = useCallback((el: HTMLDivElement | null) => {
+    observer.current?.disconnect();
+    observer.current = null;
+    if (!el) return;
+    setWidth(el.getBoundingClientRect().width);
+    observer.current = new ResizeObserver((entries) => {
+      const w = entries[0]?.contentRect.width;
+      if (w !== undefined && w > 0) setWidth(w);
+    });
+    observer.current.observe(el);
+  }, []);
+  return [ref, width];
+}
 
 function extent(values: number[]): [number, number] {
   let lo = Number.POSITIVE_INFINITY;
@@ -31,7 +48,7 @@ function extent(values: number[]): [number, number] {
 
 export function LogCurveChart({ points, title = "Voltage and current over time" }: Props) {
   const [asTable, setAsTable] = useState(false);
-  const { parentRef, width } = useParentSize({ debounceTime: 50, initialSize: { width: 640, height: HEIGHT } });
+  const [parentRef, width] = useWidth(320);
   const tableId = useId();
   const durationS = points.length > 0 ? (points[points.length - 1]?.timeS ?? 0) - (points[0]?.timeS ?? 0) : 0;
   const inMinutes = durationS > 300;

@@ -95,8 +95,8 @@ export function multipartFile(req: Request, maxBytes: number, field = "file"): P
       resolve({
         filename: info.filename ?? "log.csv",
         chunks: (async function* () {
-          for await (const chunk of stream as AsyncIterable<Uint8Array>) yield chunk;
-          if ((stream as Readable & { truncated?: boolean }).truncated) throw tooLarge(maxBytes);
+          for await (const chunk of stream) if (chunk instanceof Uint8Array) yield chunk; // Buffers, never strings (no encoding set)
+          if (stream.truncated) throw tooLarge(maxBytes);
         })(),
       });
     });

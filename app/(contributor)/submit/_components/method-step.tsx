@@ -20,6 +20,8 @@ const NUMBERS: { name: NumberField; label: string; unit: string; hint: string; o
   { name: "cyclesBeforeTest", label: "Cycles before this test", unit: "cycles", hint: "0 for a new pack." },
 ];
 
+const PROFILE_FIELDS = ["benchProfileId", "equipment", "resistanceMethod", "ambientTemperatureC", "loadMode", "cutoffVPerCell", "stopTemperatureC", "sampleRateHz"] as const;
+
 /** The method-card values a bench profile fills in (only what it holds). */
 export function methodFromProfile(p: BenchProfileOption): Partial<MethodCardValues> {
   const s = (n: number | null) => (n === null ? undefined : String(n));
@@ -43,8 +45,10 @@ export function MethodStep({ form, profiles, ratedMah, idPrefix = "method" }: Pr
     const p = profiles.find((x) => String(x.id) === value);
     setValue("method.benchProfileId", value, { shouldDirty: true });
     if (!p) return;
-    for (const [k, v] of Object.entries(methodFromProfile(p))) {
-      setValue(`method.${k as keyof MethodCardValues}`, v as string, { shouldDirty: true, shouldValidate: false });
+    const values = methodFromProfile(p);
+    for (const k of PROFILE_FIELDS) {
+      const v = values[k];
+      if (v !== undefined) setValue(`method.${k}`, v, { shouldDirty: true, shouldValidate: false });
     }
   };
 

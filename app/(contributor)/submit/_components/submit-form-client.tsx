@@ -168,7 +168,7 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
       else void form.handleSubmit(submit, (errs) => setStep(Math.min(...Object.keys(errs).map(stepOf), STEPS.length - 1)))();
     }}>
       <StepList steps={STEPS} current={step} onGo={go} />
-      <fieldset className="card space-y-4" disabled={!restored}>
+      <fieldset className="card min-w-0 space-y-4" disabled={!restored}>
         <legend className="px-1 text-base font-semibold">{`Step ${step + 1} of ${STEPS.length}: ${STEPS[step]}`}</legend>
         {step === 0 && <PackStep form={form} packs={packs} makers={makers} />}
         {step === 1 && <MethodStep form={form} profiles={profiles} ratedMah={facts?.ratedMah ?? null} />}

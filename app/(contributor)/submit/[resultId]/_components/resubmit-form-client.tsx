@@ -83,11 +83,11 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
 
   return (
     <form noValidate onSubmit={form.handleSubmit(send)} className="space-y-6" aria-busy={pending}>
-      <fieldset className="card space-y-4">
+      <fieldset className="card min-w-0 space-y-4">
         <legend className="px-1 text-base font-semibold">Method card</legend>
         <MethodStep form={form} profiles={profiles} ratedMah={p.ratedCapacityMah} />
       </fieldset>
-      <fieldset className="card space-y-4">
+      <fieldset className="card min-w-0 space-y-4">
         <legend className="px-1 text-base font-semibold">Log</legend>
         <p className="text-sm">
           Stored log: <span className="num">{result.logFilename}</span>. It is analysed again with the edited method card when you resubmit; upload a
@@ -95,7 +95,7 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
         </p>
         <LogStep form={form} facts={facts} limits={limits} preview={preview} previewState="idle" onPreview={setPreview} onRecheck={() => undefined} optional />
       </fieldset>
-      <fieldset className="card space-y-4">
+      <fieldset className="card min-w-0 space-y-4">
         <legend className="px-1 text-base font-semibold">Photos, answer and declaration</legend>
         <PhotosStep form={form} limits={limits} existingPhotos={result.photoKeys.length}>
           <Field id="resubmit-note" label="Your answer to the moderator" error={noteError ?? undefined} hint="What you changed, and why.">
