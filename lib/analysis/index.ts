@@ -21,3 +21,5 @@ export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summa
 export { retentionTrend, END_OF_LIFE_RETAINED, type RetentionTrend } from "./cycles";
 export { lttb } from "./downsample";
 export { inferCells } from "./cells";
+export { toPublicFigures, type LogPreview, type PublicFigures } from "./public-figures";
+export { checkAgainstCard, warningsBesideChecks, type CardCheck, type StatedCard } from "./card-checks";

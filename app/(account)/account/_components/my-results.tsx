@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { ContributorResult } from "@/db/queries/results-by-contributor";
 import { fmt } from "@/lib/format";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
+import { ResultActions } from "./result-actions-client";
 
 const date = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
@@ -25,7 +26,7 @@ export function MyResults({ results }: { results: ContributorResult[] }) {
   return (
     <ul className="space-y-2" data-testid="my-results">
       {results.map((r) => (
-        <li key={r.id} className="card space-y-2">
+        <li key={r.id} className="card space-y-2" data-testid={`my-result-${r.id}`}>
           <div className="flex flex-wrap items-baseline justify-between gap-2">
             <Link href={`/results/${r.id}`} className="font-medium">
               {r.makerName} {r.model}
@@ -36,6 +37,7 @@ export function MyResults({ results }: { results: ContributorResult[] }) {
             {fmt(r.loadCurrentA, 1, "A")} · ambient {fmt(r.ambientTemperatureC, 0, "°C")} · submitted {date(r.submittedAt)}
             {r.publishedAt ? ` · published ${date(r.publishedAt)}` : ""}
           </p>
+          <ResultActions resultId={r.id} status={r.status} />
           {r.events.length > 0 ? (
             <details className="text-sm">
               <summary className="cursor-pointer">Review history ({r.events.length})</summary>

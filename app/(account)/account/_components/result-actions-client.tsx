@@ -1,0 +1,44 @@
+"use client";
+// What a contributor can do with their own result while it waits: withdraw it (pending or changes
+// requested), or answer a change request. The server checks ownership and state again.
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState, useTransition } from "react";
+import { buttonClass } from "@/components/ui/form";
+import type { ReviewStatus } from "@/db/schema/enums";
+import { withdrawResult } from "../actions/withdraw-result";
+
+export function ResultActions({ resultId, status }: { resultId: number; status: ReviewStatus }) {
+  const router = useRouter();
+  const [confirming, setConfirming] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const [pending, startTransition] = useTransition();
+  if (status !== "pending" && status !== "changes_requested") return null;
+
+  const withdraw = () =>
+    startTransition(async () => {
+      const res = await withdrawResult(null, { resultId: String(resultId) });
+      if (res.ok) {
+        setConfirming(false);
+        router.refresh();
+      } else setError(res.error);
+    });
+
+  return (
+    <div className="flex flex-wrap items-center gap-2 text-sm">
+      {status === "changes_requested" && (
+        <Link href={`/submit/${resultId}`} className={buttonClass("primary")}>Answer the change request</Link>
+      )}
+      {confirming ? (
+        <>
+          <span>Withdraw this result? It will not be reviewed or published.</span>
+          <button type="button" className={buttonClass("danger")} onClick={withdraw} disabled={pending}>{pending ? "Withdrawing…" : "Yes, withdraw"}</button>
+          <button type="button" className={buttonClass("secondary")} onClick={() => setConfirming(false)} disabled={pending}>Keep it</button>
+        </>
+      ) : (
+        <button type="button" className={buttonClass("secondary")} onClick={() => setConfirming(true)}>Withdraw</button>
+      )}
+      {error && <p role="alert" className="w-full text-warn dark:text-red-300">{error}</p>}
+    </div>
+  );
+}

@@ -1,0 +1,84 @@
+// A contributor's journey: sign in through the mailed link (read from the local mail catcher), keep a
+// bench profile, submit a result with a log upload, and find it waiting for review in /account.
+import { expect, test, type Page } from "@playwright/test";
+import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
+
+function log4s(): Buffer {
+  const { rows } = generateLog({
+    seed: 4242, cells: 4, capacityMah: 1300, r0PerCellMohm: 3, r1PerCellMohm: 1, loadCurrentA: 13, cutoffVPerCell: 3.3,
+    ambientC: 22, sampleIntervalS: 1, initialRestS: 5, finalRestS: 5, noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
+  });
+  return Buffer.from(toCsv(rows));
+}
+
+async function signInByMail(page: Page, email: string, from: string) {
+  await page.goto(from);
+  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=/);
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByRole("button", { name: "E-mail me a sign-in link" }).click();
+  await expect(page).toHaveURL(/\/sign-in\/check-email/);
+  await page.goto("/dev/mail");
+  await page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(email.replace(/[.@+]/g, "\\$&")) }).first().click();
+  await page.getByTestId("mail-body").getByRole("link").first().click();
+}
+
+test("a new contributor signs in by e-mail, picks a bench profile, submits a result with a log, and sees it pending", async ({ page }) => {
+  const email = `e2e-${Date.now()}@test.sagline.localhost`;
+  await signInByMail(page, email, "/submit");
+  await expect(page).toHaveURL(/\/submit$/);
+
+  // A bench profile first, so the method card can be filled from it.
+  await page.goto("/account/bench-profiles/new");
+  await page.getByLabel("Profile name").fill("Shed bench");
+  await page.getByLabel("Load equipment").fill("300 W electronic load");
+  await page.getByLabel("Resistance method").selectOption("dc-step");
+  await page.getByLabel("Ambient temperature (°C)").fill("21");
+  await page.getByLabel("Cut-off voltage (V per cell)").fill("3.3");
+  await page.getByLabel("Stop temperature (°C)").fill("60");
+  await page.getByRole("button", { name: "Create bench profile" }).click();
+  await expect(page).toHaveURL(/\/account\/bench-profiles$/);
+
+  await page.goto("/submit");
+  await page.evaluate(() => localStorage.clear());
+  await page.reload();
+  // Step 1: the pack, by fuzzy search (a typo on purpose).
+  await page.getByLabel("Search packs").fill("1300 4S Fellrunerr");
+  await page.getByTestId("pack-hits").getByRole("button").first().click();
+  await expect(page.getByTestId("chosen-pack")).toContainText("4S 1,300 mAh");
+  await page.getByRole("button", { name: "Next: Method card" }).click();
+
+  // Step 2: the method card from the bench profile, then what differed.
+  await page.getByLabel("Bench profile").selectOption({ label: "Shed bench" });
+  await expect(page.getByLabel(/^Ambient temperature/)).toHaveValue("21");
+  await expect(page.getByLabel(/^Equipment/)).toHaveValue("300 W electronic load");
+  await page.getByLabel(/^Load current/).fill("13");
+  await page.getByLabel(/^Stop temperature/).fill("90");
+  await page.getByRole("button", { name: "Next: Log" }).click();
+  await expect(page.getByText("Stop temperature must be at most 80 °C.")).toBeVisible();
+  await page.getByLabel(/^Stop temperature/).fill("60");
+  await page.getByRole("button", { name: "Next: Log" }).click();
+
+  // Step 3: the log, uploaded with progress and analysed.
+  await page.getByTestId("log-file").setInputFiles({ name: "shed-run-1.csv", mimeType: "text/csv", buffer: log4s() });
+  await expect(page.getByTestId("log-figures")).toContainText("Delivered capacity");
+  await expect(page.getByTestId("log-figures")).toContainText("mAh");
+  await expect(page.getByRole("img", { name: /Voltage and current over time/ })).toBeVisible();
+  // A reload keeps the draft and the stored log.
+  await page.reload();
+  await expect(page.getByTestId("stored-log")).toContainText("shed-run-1.csv");
+  await expect(page.getByTestId("log-figures")).toContainText("Delivered capacity");
+  await page.getByRole("button", { name: "Next: Photos and submit" }).click();
+
+  // Step 4: declaration and submit (a double click still makes one result).
+  await page.getByLabel(/I declare that these are honest measurements/).check();
+  await page.getByRole("button", { name: "Submit the result" }).dblclick();
+  await expect(page.getByTestId("submit-done")).toContainText("waiting for review");
+
+  await page.getByRole("link", { name: "Go to your account" }).click();
+  const mine = page.getByTestId("my-results").getByRole("listitem").filter({ hasText: "Pending review" });
+  await expect(mine).toHaveCount(1);
+
+  // The receipt went through the mail catcher.
+  await page.goto("/dev/mail");
+  await expect(page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) })).toBeVisible();
+});
