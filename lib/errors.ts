@@ -42,12 +42,25 @@ export function fieldErrorsOf(err: ZodError): FieldErrors {
   return out;
 }
 
+// Connection refused/reset, server shutting down or starting, connection failures (PostgreSQL SQLSTATE
+// classes 57P and 08), and pg's own "Connection terminated" — looked for through Drizzle's wrapping `cause`.
+const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "57P01", "57P02", "57P03", "08000", "08001", "08003", "08006"]);
+
+export function isDatabaseDown(err: unknown): boolean {
+  for (let e: unknown = err, depth = 0; e && typeof e === "object" && depth < 5; e = (e as { cause?: unknown }).cause, depth++) {
+    const code = "code" in e ? String((e as { code: unknown }).code) : "";
+    if (DOWN_CODES.has(code)) return true;
+    const message = e instanceof Error ? e.message : "";
+    if (/Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/i.test(message)) return true;
+  }
+  return false;
+}
+
 /** Normalise anything thrown into an AppError; unknown errors are logged here, once. */
 export function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return new AppError("validation", "Some values are not valid.", fieldErrorsOf(err));
-  const pgCode = typeof err === "object" && err !== null && "code" in err ? String((err as { code: unknown }).code) : "";
-  if (pgCode === "ECONNREFUSED" || pgCode === "57P01" || pgCode === "57P03" || pgCode === "08006" || pgCode === "08001") {
+  if (isDatabaseDown(err)) {
     return new AppError("unavailable", "The database is not reachable right now. Nothing was saved; please try again in a moment.");
   }
   console.error("[sagline] unexpected error:", err);
