@@ -11,7 +11,8 @@ const nextConfig = {
   poweredByHeader: false,
   typedRoutes: false,
   serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser"],
-  experimental: { serverActions: { bodySizeLimit: "60mb" } },
+  // authInterrupts: forbidden() renders app/forbidden.tsx with a real 403 status.
+  experimental: { serverActions: { bodySizeLimit: "60mb" }, authInterrupts: true },
   async headers() {
     return [
       // Embeds are the only routes other sites may frame.

@@ -23,6 +23,9 @@ export default defineConfig({
           globalSetup: ["tests/helpers/integration-global-setup.ts"],
           setupFiles: ["tests/helpers/integration-setup.ts"],
           fileParallelism: false,
+          // next-auth imports "next/server" without an extension (Next has no exports map); letting Vite
+          // transform it resolves that the way Next's bundler does.
+          server: { deps: { inline: ["next-auth"] } },
           testTimeout: 60_000,
           hookTimeout: 60_000,
         },

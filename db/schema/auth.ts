@@ -1,9 +1,9 @@
 // Users and the tables Auth.js (Drizzle adapter) expects. The role lives on the user row and is read
 // fresh on every request (database sessions), so a demotion takes effect at once.
 import { boolean, integer, pgEnum, pgTable, primaryKey, text, timestamp, index } from "drizzle-orm/pg-core";
+import { userRoles, type UserRole } from "./enums";
 
-export const userRoles = ["contributor", "moderator", "admin"] as const;
-export type UserRole = (typeof userRoles)[number];
+export { userRoles, type UserRole };
 export const userRole = pgEnum("user_role", userRoles);
 
 export const users = pgTable(

@@ -7,18 +7,11 @@ import {
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import { users } from "./auth";
 import { packs } from "./catalogue";
+import { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus } from "./enums";
 
-export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn", "disputed"] as const;
-export type ReviewStatus = (typeof reviewStatuses)[number];
+export { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus };
 export const reviewStatus = pgEnum("review_status", reviewStatuses);
-
-export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
-export type LoadMode = (typeof loadModes)[number];
 export const loadMode = pgEnum("load_mode", loadModes);
-
-/** What the tester states they used to measure resistance (the computed method is in the figures). */
-export const resistanceMethods = ["iec-61960-two-level", "dc-step", "ac-1khz", "charger-readout"] as const;
-export type ResistanceMethod = (typeof resistanceMethods)[number];
 export const resistanceMethod = pgEnum("resistance_method", resistanceMethods);
 
 export type PlausibilityFlag = { code: string; message: string };

@@ -1,6 +1,6 @@
 // Plumbing: a general audit trail (role changes, catalogue merges), the outgoing mail queue (so a mail
 // outage never loses a message), and rate-limit counters shared by every server process.
-import { index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { users } from "./auth";
 
 export const auditEvents = pgTable(
@@ -25,6 +25,9 @@ export const mailOutbox = pgTable(
     subject: text("subject").notNull(),
     text: text("text").notNull(),
     html: text("html"),
+    // Sensitive messages (sign-in links) have their body wiped once sent: the verification token is stored
+    // hashed, so a readable copy of the link must not outlive its delivery.
+    sensitive: boolean("sensitive").notNull().default(false),
     attempts: integer("attempts").notNull().default(0),
     lastError: text("last_error"),
     nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }).notNull().defaultNow(),

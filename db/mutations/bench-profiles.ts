@@ -1,0 +1,48 @@
+// Bench profile writes. Every write names the owner explicitly and puts it in the WHERE clause, so a user
+// can only change their own profiles; when nothing matched we say whether the profile is missing (404)
+// or someone else's (403).
+import "server-only";
+import { and, count, eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { benchProfiles } from "@/db/schema";
+import { AppError } from "@/lib/errors";
+import type { BenchProfileInput } from "@/lib/validations/bench-profile";
+
+export const MAX_BENCH_PROFILES_PER_USER = 50;
+
+async function missingOrForeign(id: number): Promise<never> {
+  const rows = await db.select({ id: benchProfiles.id }).from(benchProfiles).where(eq(benchProfiles.id, id)).limit(1);
+  if (rows.length === 0) throw new AppError("not_found", "That bench profile does not exist (any more).");
+  throw new AppError("forbidden", "That bench profile belongs to someone else.");
+}
+
+export async function createBenchProfile(userId: string, input: BenchProfileInput): Promise<{ id: number }> {
+  return db.transaction(async (tx) => {
+    // Serialise creates per user so the cap holds under concurrent submits.
+    await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`bench-profiles:${userId}`}))`);
+    const [c] = await tx.select({ n: count() }).from(benchProfiles).where(eq(benchProfiles.userId, userId));
+    if ((c?.n ?? 0) >= MAX_BENCH_PROFILES_PER_USER) {
+      throw new AppError("conflict", `You already have ${MAX_BENCH_PROFILES_PER_USER} bench profiles; delete one you no longer use first.`);
+    }
+    const [row] = await tx.insert(benchProfiles).values({ ...input, userId }).returning({ id: benchProfiles.id });
+    if (!row) throw new Error("bench profile insert returned nothing");
+    return row;
+  });
+}
+
+export async function updateBenchProfile(userId: string, id: number, input: BenchProfileInput): Promise<{ id: number }> {
+  const [row] = await db
+    .update(benchProfiles)
+    .set({ ...input, updatedAt: new Date() })
+    .where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId)))
+    .returning({ id: benchProfiles.id });
+  return row ?? missingOrForeign(id);
+}
+
+export async function deleteBenchProfile(userId: string, id: number): Promise<{ id: number }> {
+  const [row] = await db
+    .delete(benchProfiles)
+    .where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId)))
+    .returning({ id: benchProfiles.id });
+  return row ?? missingOrForeign(id);
+}

@@ -1,0 +1,14 @@
+// The value lists behind the schema's enums, with no Drizzle import, so client components (forms,
+// labels) can use them without pulling the ORM into the browser bundle. The pgEnums are built from these.
+export const userRoles = ["contributor", "moderator", "admin"] as const;
+export type UserRole = (typeof userRoles)[number];
+
+export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn", "disputed"] as const;
+export type ReviewStatus = (typeof reviewStatuses)[number];
+
+export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
+export type LoadMode = (typeof loadModes)[number];
+
+/** What the tester states they used to measure resistance (the computed method is in the figures). */
+export const resistanceMethods = ["iec-61960-two-level", "dc-step", "ac-1khz", "charger-readout"] as const;
+export type ResistanceMethod = (typeof resistanceMethods)[number];

@@ -1,0 +1,3 @@
+export { sendMail, flushOutbox, retryDelayS, MAX_ATTEMPTS } from "./outbox";
+export { mailTransport } from "./transport";
+export * from "./templates";

@@ -1,0 +1,63 @@
+// A bench profile: a contributor's equipment and the method-card defaults they usually test with. One
+// schema for the form (react-hook-form + zodResolver) and the server action. Ranges match the method card
+// (and the results table's checks): ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C.
+import { z } from "zod";
+import { loadModes, resistanceMethods } from "@/db/schema/enums";
+import { optionalEnum, optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
+
+export const benchProfileSchema = z
+  .object({
+    name: requiredText("Profile name", 80),
+    loadEquipment: requiredText("Load equipment", 120),
+    logger: optionalText("Logger", 120),
+    resistanceMeter: optionalText("Resistance meter", 120),
+    resistanceMethod: z.string({ error: "Choose how you measure resistance." }).pipe(z.enum(resistanceMethods, { error: "Choose how you measure resistance." })),
+    calibratedOn: optionalPastDate("Calibration date"),
+    notes: optionalText("Notes", 2000),
+    defaultAmbientC: optionalNumber("Ambient temperature", (n) =>
+      n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C."),
+    ),
+    defaultLoadMode: optionalEnum(loadModes, "Choose a load mode."),
+    defaultCutoffVPerCell: optionalNumber("Cut-off voltage", (n) =>
+      n.min(2.5, "Cut-off must be at least 2.5 V per cell.").max(4.2, "Cut-off must be at most 4.2 V per cell."),
+    ),
+    defaultStopTemperatureC: optionalNumber("Stop temperature", (n) =>
+      n.min(0, "Stop temperature must be at least 0 °C.").max(80, "Stop temperature must be at most 80 °C."),
+    ),
+    defaultSampleRateHz: optionalNumber("Sample rate", (n) =>
+      n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz."),
+    ),
+  })
+  .superRefine((v, ctx) => {
+    if (v.defaultAmbientC !== null && v.defaultStopTemperatureC !== null && v.defaultStopTemperatureC <= v.defaultAmbientC) {
+      ctx.addIssue({ code: "custom", path: ["defaultStopTemperatureC"], message: "Stop temperature must be above the ambient temperature." });
+    }
+  });
+
+/** What the form holds (all strings, as inputs give them). */
+export type BenchProfileFormValues = z.input<typeof benchProfileSchema>;
+/** What the database layer receives. */
+export type BenchProfileInput = z.output<typeof benchProfileSchema>;
+
+export const emptyBenchProfile: BenchProfileFormValues = {
+  name: "",
+  loadEquipment: "",
+  logger: "",
+  resistanceMeter: "",
+  resistanceMethod: "",
+  calibratedOn: "",
+  notes: "",
+  defaultAmbientC: "",
+  defaultLoadMode: "",
+  defaultCutoffVPerCell: "",
+  defaultStopTemperatureC: "",
+  defaultSampleRateHz: "",
+};
+
+export const benchProfileId = z.coerce.number({ error: "Not a bench profile id." }).int().positive().max(2_147_483_647);
+
+/** The save action's input: a profile, plus the id when editing one. */
+export const saveBenchProfileSchema = benchProfileSchema.and(
+  z.object({ id: z.union([z.literal(""), benchProfileId]).optional().transform((v) => (v === "" || v === undefined ? null : v)) }),
+);
+export const deleteBenchProfileSchema = z.object({ id: benchProfileId });

@@ -1,0 +1,49 @@
+// Stand-ins for next/headers and next/cache in integration tests, so server actions run outside Next.js
+// with a real session: `requestState.token` holds a session token inserted into the sessions table, and
+// lib/session.ts really looks it up. Use in a test file with:
+//   vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
+//   vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
+export const requestState = {
+  token: null as string | null,
+  ip: "203.0.113.10",
+  host: "localhost:3011",
+  cookiesSet: [] as { name: string; value: string }[],
+  revalidated: [] as string[],
+};
+
+const SESSION_COOKIE = "authjs.session-token";
+
+export const nextHeaders = {
+  cookies: async () => ({
+    get: (name: string) => (name === SESSION_COOKIE && requestState.token ? { name, value: requestState.token } : undefined),
+    getAll: () => (requestState.token ? [{ name: SESSION_COOKIE, value: requestState.token }] : []),
+    has: (name: string) => name === SESSION_COOKIE && !!requestState.token,
+    set: (name: string, value: string) => {
+      requestState.cookiesSet.push({ name, value });
+    },
+    delete: () => undefined,
+  }),
+  headers: async () =>
+    new Headers({
+      host: requestState.host,
+      "x-forwarded-proto": "http",
+      "x-forwarded-for": requestState.ip,
+      ...(requestState.token ? { cookie: `${SESSION_COOKIE}=${requestState.token}` } : {}),
+    }),
+};
+
+export const nextCache = {
+  revalidatePath: (path: string) => {
+    requestState.revalidated.push(path);
+  },
+  revalidateTag: (tag: string) => {
+    requestState.revalidated.push(`tag:${tag}`);
+  },
+};
+
+/** Thrown by redirect() from next/navigation; its digest carries the target. */
+export function redirectTarget(err: unknown): string | null {
+  const digest = typeof err === "object" && err !== null && "digest" in err ? String((err as { digest: unknown }).digest) : "";
+  if (!digest.startsWith("NEXT_REDIRECT")) return null;
+  return digest.split(";")[2] ?? null;
+}

@@ -1,0 +1,126 @@
+// Bench profiles: create, update, delete through the server actions, with ownership enforced in the
+// mutations' WHERE clauses (someone else's profile → 403, a missing one → 404).
+import { beforeEach, describe, expect, it, vi } from "vitest";
+import { eq } from "drizzle-orm";
+import { db } from "@/db";
+import { benchProfiles } from "@/db/schema";
+import { deleteBenchProfile as deleteRow, updateBenchProfile } from "@/db/mutations/bench-profiles";
+import { benchProfileSchema } from "@/lib/validations/bench-profile";
+import { requestState } from "../helpers/next-mocks";
+import { signedIn } from "../helpers/users";
+
+vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
+vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
+
+const { saveBenchProfile } = await import("@/app/(account)/account/bench-profiles/actions/save-bench-profile");
+const { deleteBenchProfile } = await import("@/app/(account)/account/bench-profiles/actions/delete-bench-profile");
+
+function form(values: Record<string, string>): FormData {
+  const fd = new FormData();
+  for (const [k, v] of Object.entries(values)) fd.set(k, v);
+  return fd;
+}
+
+const valid = {
+  name: "Winter garage bench",
+  loadEquipment: "400 W electronic load",
+  logger: "4-channel USB logger",
+  resistanceMeter: "",
+  resistanceMethod: "iec-61960-two-level",
+  calibratedOn: "2025-11-03",
+  notes: "",
+  defaultAmbientC: "-5",
+  defaultLoadMode: "constant-current",
+  defaultCutoffVPerCell: "3,3",
+  defaultStopTemperatureC: "60",
+  defaultSampleRateHz: "10",
+};
+
+describe("bench profiles", () => {
+  beforeEach(() => {
+    requestState.token = null;
+  });
+
+  it("creates a profile from form data, storing numbers and nulls, owned by the signed-in user", async () => {
+    const me = await signedIn("contributor");
+    requestState.token = me.token;
+    const res = await saveBenchProfile(null, form(valid));
+    expect(res.ok).toBe(true);
+    if (!res.ok) return;
+    const [row] = await db.select().from(benchProfiles).where(eq(benchProfiles.id, res.data.id));
+    expect(row).toMatchObject({
+      userId: me.id,
+      name: "Winter garage bench",
+      resistanceMethod: "iec-61960-two-level",
+      resistanceMeter: null,
+      notes: null,
+      calibratedOn: "2025-11-03",
+      defaultAmbientC: -5,
+      defaultCutoffVPerCell: 3.3, // a decimal comma is accepted
+      defaultStopTemperatureC: 60,
+      defaultSampleRateHz: 10,
+    });
+    expect(requestState.revalidated).toContain("/account/bench-profiles");
+  });
+
+  it("refuses out-of-range method-card defaults with one message per field", async () => {
+    const me = await signedIn("contributor");
+    requestState.token = me.token;
+    const res = await saveBenchProfile(null, form({ ...valid, resistanceMethod: "", defaultAmbientC: "75", defaultCutoffVPerCell: "2.4", defaultStopTemperatureC: "81", defaultSampleRateHz: "0", calibratedOn: "2999-01-01" }));
+    expect(res).toMatchObject({ ok: false, code: "validation" });
+    if (res.ok) return;
+    expect(Object.keys(res.fieldErrors ?? {}).sort()).toEqual(
+      ["calibratedOn", "defaultAmbientC", "defaultCutoffVPerCell", "defaultSampleRateHz", "defaultStopTemperatureC", "resistanceMethod"].sort(),
+    );
+    expect(res.fieldErrors?.defaultStopTemperatureC?.[0]).toMatch(/80 °C/);
+    expect(await db.select().from(benchProfiles).where(eq(benchProfiles.userId, me.id))).toHaveLength(0);
+  });
+
+  it("requires the stop temperature to be above the ambient temperature", () => {
+    const r = benchProfileSchema.safeParse({ ...valid, defaultAmbientC: "40", defaultStopTemperatureC: "35" });
+    expect(r.success).toBe(false);
+    expect(r.error?.issues[0]?.path).toEqual(["defaultStopTemperatureC"]);
+  });
+
+  it("updates only the owner's profile: another user gets 403, a missing id 404", async () => {
+    const owner = await signedIn("contributor", "owner");
+    const other = await signedIn("contributor", "other");
+    requestState.token = owner.token;
+    const created = await saveBenchProfile(null, form(valid));
+    if (!created.ok) throw new Error(created.error);
+    const id = created.data.id;
+
+    const renamed = await saveBenchProfile(null, form({ ...valid, id: String(id), name: "Summer bench" }));
+    expect(renamed).toMatchObject({ ok: true, data: { id } });
+
+    requestState.token = other.token;
+    const hijack = await saveBenchProfile(null, form({ ...valid, id: String(id), name: "Not mine" }));
+    expect(hijack).toMatchObject({ ok: false, code: "forbidden" });
+    const missing = await saveBenchProfile(null, form({ ...valid, id: "99999999" }));
+    expect(missing).toMatchObject({ ok: false, code: "not_found" });
+
+    const [row] = await db.select().from(benchProfiles).where(eq(benchProfiles.id, id));
+    expect(row?.name).toBe("Summer bench");
+    // The mutation itself enforces ownership, whoever calls it.
+    await expect(updateBenchProfile(other.id, id, benchProfileSchema.parse(valid))).rejects.toMatchObject({ code: "forbidden" });
+  });
+
+  it("deletes only the owner's profile", async () => {
+    const owner = await signedIn("contributor", "owner");
+    const other = await signedIn("moderator", "other");
+    requestState.token = owner.token;
+    const created = await saveBenchProfile(null, form(valid));
+    if (!created.ok) throw new Error(created.error);
+    const id = created.data.id;
+
+    requestState.token = other.token;
+    expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: false, code: "forbidden" });
+    await expect(deleteRow(other.id, id)).rejects.toMatchObject({ code: "forbidden" });
+    expect(await db.select().from(benchProfiles).where(eq(benchProfiles.id, id))).toHaveLength(1);
+
+    requestState.token = owner.token;
+    expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: true, data: { id } });
+    expect(await db.select().from(benchProfiles).where(eq(benchProfiles.id, id))).toHaveLength(0);
+    expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: false, code: "not_found" });
+  });
+});
