@@ -21,3 +21,7 @@ export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summa
 export { retentionTrend, END_OF_LIFE_RETAINED, type RetentionTrend } from "./cycles";
 export { lttb } from "./downsample";
 export { inferCells } from "./cells";
+export {
+  plausibilityFlags, groupModifiedZ, plausibilityCodes, plausibilityLabels,
+  type PlausibilityCode, type PlausibilityInput,
+} from "./plausibility";
