@@ -3,7 +3,7 @@
 // same result. Revalidation and e-mail run only after the commit (db/mutations/review-effects.ts).
 import "server-only";
 import { and, eq, ne } from "drizzle-orm";
-import { db, type Transaction } from "@/db";
+import { db, type Executor, type Transaction } from "@/db";
 import { getPlausibilityInput } from "@/db/queries/review";
 import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import type { PlausibilityFlag } from "@/db/schema/results";
@@ -17,11 +17,11 @@ import { notifyDecision, revalidateResult, type ResultContext } from "./review-e
  * Computes the automatic plausibility flags of a result and stores them on it (results.flags). The
  * submission flow calls this right after inserting a result; it is safe to call again.
  */
-export async function computeAndStoreFlags(resultId: number): Promise<PlausibilityFlag[]> {
-  const input = await getPlausibilityInput(resultId);
+export async function computeAndStoreFlags(resultId: number, exec: Executor = db): Promise<PlausibilityFlag[]> {
+  const input = await getPlausibilityInput(resultId, exec);
   if (!input) throw new AppError("not_found", "That result does not exist.");
   const flags = plausibilityFlags(input);
-  await db.update(results).set({ flags }).where(eq(results.id, resultId));
+  await exec.update(results).set({ flags }).where(eq(results.id, resultId));
   return flags;
 }
 

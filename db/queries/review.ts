@@ -3,7 +3,7 @@
 // after approval) and the review history shown publicly.
 import "server-only";
 import { and, asc, count, desc, eq, inArray, ne, sql, type SQL } from "drizzle-orm";
-import { db } from "@/db";
+import { db, type Executor } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import { summarise, type PlausibilityInput } from "@/lib/analysis";
 import type { PlausibilityFlag } from "@/db/schema/results";
@@ -12,8 +12,8 @@ import type { ReviewQueueFilter } from "@/lib/validations/review";
 const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !== null && Number.isFinite(x));
 
 /** Everything lib/analysis/plausibility needs about one result, gathered from the database. */
-export async function getPlausibilityInput(resultId: number): Promise<PlausibilityInput | null> {
-  const [r] = await db
+export async function getPlausibilityInput(resultId: number, exec: Executor = db): Promise<PlausibilityInput | null> {
+  const [r] = await exec
     .select({
       figures: results.figures, ambientTemperatureC: results.ambientTemperatureC, cutoffVPerCell: results.cutoffVPerCell,
       groupKey: results.groupKey, logSha256: results.logSha256,
@@ -24,11 +24,11 @@ export async function getPlausibilityInput(resultId: number): Promise<Plausibili
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .where(eq(results.id, resultId));
   if (!r) return null;
-  const group = await db
+  const group = await exec
     .select({ labelRatio: results.labelRatio, sagLimitedC: results.sagLimitedC, capacityRatio: results.capacityRatio })
     .from(results)
     .where(and(eq(results.groupKey, r.groupKey), eq(results.status, "approved"), ne(results.id, resultId)));
-  const dupes = await db
+  const dupes = await exec
     .select({ id: results.id })
     .from(results)
     .where(and(eq(results.logSha256, r.logSha256), ne(results.id, resultId)))
