@@ -57,6 +57,7 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
           Result #{r.id} · <span data-testid="result-status">{reviewStatusLabels[r.status]}</span> · submitted {when(r.submittedAt)} by{" "}
           {d.contributor.displayName ?? d.contributor.email} · label {labelSpec(d.pack)}
           {d.pack.status === "proposed" || d.makerStatus === "proposed" ? " · proposed catalogue entry" : ""}
+          {d.pack.status === "active" ? <> · <Link href={`/packs/${d.pack.slug}`} data-testid="pack-link">public pack page</Link></> : null}
         </p>
       </div>
 
@@ -145,7 +146,10 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
             {own ? (
               <p className="text-sm">You submitted this result, so another moderator has to review it.</p>
             ) : r.status !== "pending" ? (
-              <p className="text-sm">This result is {reviewStatusLabels[r.status].toLowerCase()}; only pending results are decided here.</p>
+              <div className="space-y-2 text-sm" data-testid="decision-done">
+                <p>Decided: {reviewStatusLabels[r.status].toLowerCase()}. Only pending results are decided here; the history below says who decided and why.</p>
+                <Link href="/review">Back to the queue</Link>
+              </div>
             ) : (
               <DecisionPanel resultId={r.id} />
             )}
