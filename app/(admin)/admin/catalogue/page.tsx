@@ -36,7 +36,7 @@ export default async function AdminCataloguePage() {
               <details className="group px-4 py-3">
                 <summary className="flex cursor-pointer flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
                   <span className="font-medium">{p.makerName} {p.model}{p.status === "proposed" ? <span className="muted text-sm font-normal"> · proposed</span> : null}</span>
-                  <span className="num muted text-sm">{labelSpec(p)} · {fmt(p.weightG, 0, "g")} · {p.connector} · {p.results} results</span>
+                  <span className="num muted text-sm">{labelSpec(p)} · {fmt(p.weightG, 0, "g")} · {p.connector} · {p.results} results · <span className="font-sans text-cell-600 dark:text-cell-400">Edit</span></span>
                 </summary>
                 <div className="pt-3"><PackLabelForm pack={p} /></div>
               </details>

@@ -18,13 +18,13 @@ export const dynamic = "force-dynamic";
 const params = z.object({ id: z.coerce.number().int().positive() });
 const when = (d: Date) => d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
 
-function Dl({ rows }: { rows: [string, React.ReactNode][] }) {
+function Dl({ rows }: { rows: [string, React.ReactNode, "text"?][] }) {
   return (
-    <dl className="grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 gap-y-1 text-sm">
-      {rows.map(([k, v]) => (
+    <dl className="grid grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)] gap-x-4 gap-y-1.5 text-sm">
+      {rows.map(([k, v, kind]) => (
         <div key={k} className="contents">
           <dt className="muted">{k}</dt>
-          <dd className="num text-right">{v}</dd>
+          <dd className={`break-words text-right ${kind === "text" ? "" : "num"}`}>{v}</dd>
         </div>
       ))}
     </dl>
@@ -59,6 +59,7 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
           {d.pack.status === "proposed" || d.makerStatus === "proposed" ? " · proposed catalogue entry" : ""}
           {d.pack.status === "active" ? <> · <Link href={`/packs/${d.pack.slug}`} data-testid="pack-link">public pack page</Link></> : null}
         </p>
+        <p className="text-sm lg:hidden"><a href="#decide-h">Go to the decision ↓</a></p>
       </div>
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
@@ -88,9 +89,9 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
                   {compare.map(([label, mine, key, digits, unit]) => (
                     <tr key={key} className="border-t border-ink/10 dark:border-night-line">
                       <td className="py-1 pr-3 font-sans">{label}</td>
-                      <td className="py-1 pr-3 text-right">{fmt(mine, digits, unit)}</td>
-                      <td className="py-1 pr-3 text-right">{fmt(d.groupNow[key], digits, unit)}</td>
-                      <td className="py-1 text-right">{fmt(d.groupAfterApproval[key], digits, unit)}</td>
+                      <td className="whitespace-nowrap py-1 pr-3 text-right">{fmt(mine, digits, unit)}</td>
+                      <td className="whitespace-nowrap py-1 pr-3 text-right">{fmt(d.groupNow[key], digits, unit)}</td>
+                      <td className="whitespace-nowrap py-1 text-right">{fmt(d.groupAfterApproval[key], digits, unit)}</td>
                     </tr>
                   ))}
                 </tbody>
@@ -109,14 +110,14 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
               <Dl rows={[
                 ["Ambient", fmt(r.ambientTemperatureC, 1, "°C")],
                 ["Pack start", fmt(r.packStartTemperatureC, 1, "°C")],
-                ["Load", `${loadModeLabels[r.loadMode]}, ${fmt(r.loadCurrentA, 1, "A")} (${fmt(r.loadRateC, 1, "C")})`],
+                ["Load", `${loadModeLabels[r.loadMode]}, ${fmt(r.loadCurrentA, 1, "A")} (${fmt(r.loadRateC, 1, "C")})`, "text"],
                 ["Cut-off per cell", fmt(r.cutoffVPerCell, 2, "V")],
                 ["Stop temperature", fmt(r.stopTemperatureC, 0, "°C")],
-                ["Resistance method", resistanceMethodLabels[r.resistanceMethod]],
-                ["Equipment", r.equipment],
+                ["Resistance method", resistanceMethodLabels[r.resistanceMethod], "text"],
+                ["Equipment", r.equipment, "text"],
                 ["Sample rate", fmt(r.sampleRateHz, 1, "Hz")],
                 ["Cycles before test", fmt(r.cyclesBeforeTest)],
-                ["Log", `${r.logFilename} · sha256 ${r.logSha256.slice(0, 12)}…`],
+                ["Log", `${r.logFilename} · sha256 ${r.logSha256.slice(0, 12)}…`, "text"],
               ]} />
               {r.notes ? <p className="text-sm">{r.notes}</p> : null}
             </section>

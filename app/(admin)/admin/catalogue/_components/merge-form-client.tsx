@@ -29,6 +29,10 @@ export function MergeForm({ kind, options }: { kind: "makers" | "packs"; options
           </select>
         </Field>
       </div>
+      <label className="flex items-start gap-2 text-sm">
+        <input type="checkbox" required className="mt-1" />
+        <span>I checked that these are the same {word}. A merge moves every result and cannot be undone from this page.</span>
+      </label>
       {err && !err.fieldErrors ? <Alert tone="error">{err.error}</Alert> : null}
       {state?.ok ? (
         <Alert tone="success">
