@@ -8,6 +8,7 @@ import { fmt, labelSpec, packTitle } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
 import { requirePageUser } from "@/lib/page-auth";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
+import { flagReasonLabels } from "@/lib/validations/review";
 import { FlagChips } from "../_components/flag-chips";
 import { CurveSvg } from "./_components/curve-svg";
 import { DecisionPanel } from "./_components/decision-panel-client";
@@ -155,6 +156,21 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
               <DecisionPanel resultId={r.id} />
             )}
           </section>
+          {d.readerFlags.length ? (
+            <section className="card space-y-3" aria-labelledby="reader-flags-h">
+              <h2 id="reader-flags-h">Reader flags</h2>
+              <ul className="space-y-2 text-sm">
+                {d.readerFlags.map((fl) => (
+                  <li key={fl.id}>
+                    <span className="font-medium">{flagReasonLabels[fl.reason]}</span> · {fl.status}
+                    {fl.note ? <span className="muted block">{fl.note}</span> : null}
+                    {fl.resolutionNote ? <span className="block">Resolution: {fl.resolutionNote}</span> : null}
+                  </li>
+                ))}
+              </ul>
+              {d.readerFlags.some((fl) => fl.status === "open") ? <Link href="/review/flags">Resolve open flags</Link> : null}
+            </section>
+          ) : null}
           <section className="card space-y-3" aria-labelledby="contributor-h">
             <h2 id="contributor-h">Contributor’s history</h2>
             <p className="text-sm">
