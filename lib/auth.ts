@@ -40,6 +40,11 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
   trustHost: true, // STACK.md gotchas 4–5: opened at http://localhost:PORT, behind our own host header
   secret: env().AUTH_SECRET,
+  // One line per problem in the server log (expired links, missing CSRF tokens are routine), no stacks.
+  logger: {
+    error: (error) => console.error(`[auth] ${error.name}: ${error.message.split("\n")[0]}`),
+    warn: (code) => console.warn(`[auth] warning: ${code}`),
+  },
   callbacks: {
     // Only our own pages as destinations after sign-in or sign-out.
     redirect({ url, baseUrl }) {

@@ -6,7 +6,7 @@
  * COL is a header name or a column number from 0. Bad input: exit code 2 and one line on stderr.
  */
 import fs from "node:fs";
-import { type AnalyseOptions, type Analysis, type ColumnMapping, LogError, analyseLog } from "../lib/analysis";
+import { type AnalyseOptions, type Analysis, type ColumnMapping, LogError, analyseLog, toPublicFigures } from "../lib/analysis";
 
 const USAGE =
   "usage: npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W] [--cutoff-v V] [--stop-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL] [--no-header] [--json]";
@@ -91,9 +91,9 @@ function table(a: Analysis): string {
   return lines.join("\n");
 }
 
-/** All figures at the top level (the agreed fields among them), then the parameters used. */
+/** The public JSON shape (lib/analysis/public-figures.ts), the same as POST /api/v1/analyse answers. */
 function json(a: Analysis): string {
-  return JSON.stringify({ ...a.figures, parameters: a.parameters }, null, 2);
+  return JSON.stringify(toPublicFigures(a), null, 2);
 }
 
 async function main(): Promise<number> {

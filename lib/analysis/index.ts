@@ -25,3 +25,5 @@ export {
   plausibilityFlags, groupModifiedZ, plausibilityCodes, plausibilityLabels,
   type PlausibilityCode, type PlausibilityInput,
 } from "./plausibility";
+export { toPublicFigures, type PublicFigures } from "./public-figures";
+export { checkAgainstCard, warningsBesideChecks, type CardCheck, type StatedCard } from "./card-checks";

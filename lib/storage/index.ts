@@ -1,7 +1,13 @@
 // Upload storage through the S3 API only (locally the s3rver stand-in; hosted, any S3-compatible bucket).
-import { GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import type { Readable } from "node:stream";
+import {
+  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, PutObjectCommand, S3Client,
+} from "@aws-sdk/client-s3";
+import { Upload } from "@aws-sdk/lib-storage";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+
+export * from "./keys";
 
 let client: S3Client | undefined;
 
@@ -17,7 +23,7 @@ export function storageClient(): S3Client {
   return client;
 }
 
-function unavailable(err: unknown): AppError {
+export function unavailable(err: unknown): AppError {
   console.error("[storage]", err instanceof Error ? err.message : err);
   return new AppError("unavailable", "File storage is not reachable right now. Nothing was saved; please try again shortly.");
 }
@@ -49,7 +55,81 @@ export async function storageReachable(): Promise<boolean> {
   }
 }
 
-/** Logs are stored under their content hash, so the same file is stored once. */
-export function logKey(sha256: string): string {
-  return `logs/${sha256.slice(0, 2)}/${sha256}.csv`;
+function notFound(err: unknown): boolean {
+  if (!err || typeof err !== "object") return false;
+  const e = err as { name?: string; $metadata?: { httpStatusCode?: number } };
+  return e.name === "NoSuchKey" || e.name === "NotFound" || e.$metadata?.httpStatusCode === 404;
+}
+
+/**
+ * Streams a body of unknown length to storage in parts (multipart upload), never holding more than
+ * a couple of parts in memory. `abort()` stops it and removes what was sent.
+ */
+export function startStreamUpload(key: string, body: Readable, contentType: string): { done: Promise<void>; abort: () => Promise<void> } {
+  const upload = new Upload({
+    client: storageClient(),
+    params: { Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType },
+    queueSize: 2,
+    partSize: 5 * 1024 * 1024,
+    leavePartsOnError: false,
+  });
+  let aborted = false;
+  const done = upload.done().then(
+    () => undefined,
+    (err: unknown) => {
+      // An abort we asked for (a bad log) is not a storage fault worth logging.
+      throw aborted ? new AppError("bad_request", "Upload stopped.") : unavailable(err);
+    },
+  );
+  const abort = async () => {
+    aborted = true;
+    await upload.abort().catch(() => undefined);
+  };
+  return { done, abort };
+}
+
+/** The stored object's size, or null when there is none. */
+export async function objectBytes(key: string): Promise<number | null> {
+  try {
+    const out = await storageClient().send(new HeadObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
+    return out.ContentLength ?? 0;
+  } catch (err) {
+    if (notFound(err)) return null;
+    throw unavailable(err);
+  }
+}
+
+/** The stored object as a stream of bytes, or null when there is none. */
+export async function getObjectChunks(key: string): Promise<AsyncIterable<Uint8Array> | null> {
+  try {
+    const out = await storageClient().send(new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
+    const body = out.Body as (Readable & AsyncIterable<Uint8Array>) | undefined;
+    if (!body) return null;
+    return (async function* () {
+      try {
+        for await (const chunk of body) yield chunk;
+      } catch (err) {
+        throw unavailable(err);
+      }
+    })();
+  } catch (err) {
+    if (notFound(err)) return null;
+    throw unavailable(err);
+  }
+}
+
+export async function copyObject(fromKey: string, toKey: string): Promise<void> {
+  try {
+    await storageClient().send(new CopyObjectCommand({ Bucket: env().S3_BUCKET, CopySource: `${env().S3_BUCKET}/${fromKey}`, Key: toKey }));
+  } catch (err) {
+    throw unavailable(err);
+  }
+}
+
+export async function deleteObject(key: string): Promise<void> {
+  try {
+    await storageClient().send(new DeleteObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
+  } catch (err) {
+    if (!notFound(err)) throw unavailable(err);
+  }
 }

@@ -178,7 +178,8 @@ export class EcmSimulator {
     const v1Mid = this.v1 * Math.exp(-dt / (2 * o.tau1S)) + currentA * r1 * (1 - Math.exp(-dt / (2 * o.tau1S)));
     const socMid = this.soc - (currentA * dt) / 2 / 3.6 / o.capacityMah;
     const vMid = (ocvPerCellV(socMid) - currentA * r0 - v1Mid) * o.cells;
-    const heatW = currentA * currentA * r0 + (this.v1 * this.v1) / r1;
+    // With no RC pair (r1 = 0) its voltage is 0 too; 0/0 would poison the temperature with NaN.
+    const heatW = currentA * currentA * r0 + (r1 > 0 ? (this.v1 * this.v1) / r1 : 0);
     this.v1 = this.v1 * decay + currentA * r1 * (1 - decay);
     this.soc -= (currentA * dt) / 3.6 / o.capacityMah;
     const cth = o.heatCapacityJPerKPerCell;

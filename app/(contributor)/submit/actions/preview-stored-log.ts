@@ -1,0 +1,14 @@
+"use server";
+import { authedAction } from "@/lib/authed-action";
+import { analyseForCard, checkFiles, resolvePack } from "@/lib/submissions/prepare";
+import { previewOf } from "@/lib/uploads/analyse";
+import { previewStoredLogSchema } from "@/lib/validations/result";
+
+/** The figures of an uploaded (not yet submitted) log with the current pack and method card. */
+export const previewStoredLog = authedAction("upload.create", previewStoredLogSchema, async (input, user) => {
+  const { facts } = await resolvePack(input.pack, user.id);
+  await checkFiles(input.log.key, [], user.id);
+  const { analysis } = await analyseForCard(input.log.key, facts, input.method);
+  const m = input.method;
+  return previewOf(analysis, { packCells: facts.cells, cutoffVPerCell: m.cutoffVPerCell, loadCurrentA: m.loadCurrentA, loadMode: m.loadMode, stopTemperatureC: m.stopTemperatureC });
+});
