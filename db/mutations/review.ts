@@ -20,7 +20,14 @@ import { notifyDecision, revalidateResult, type ResultContext } from "./review-e
 export async function computeAndStoreFlags(resultId: number, exec: Executor = db): Promise<PlausibilityFlag[]> {
   const input = await getPlausibilityInput(resultId, exec);
   if (!input) throw new AppError("not_found", "That result does not exist.");
-  const flags = plausibilityFlags(input);
+  const mine = plausibilityFlags(input);
+  // The submission's own checks against the method card (and its duplicate check) stay; a code raised here
+  // replaces the same code already stored, so running this again is safe. The card check
+  // "cutoff-not-reached" says the same as our cutoff-mismatch.
+  const [row] = await exec.select({ flags: results.flags }).from(results).where(eq(results.id, resultId));
+  const ours = new Set<string>(mine.map((f) => f.code));
+  if (mine.some((f) => f.code === "cutoff-mismatch")) ours.add("cutoff-not-reached");
+  const flags = [...(row?.flags ?? []).filter((f) => !ours.has(f.code)), ...mine];
   await exec.update(results).set({ flags }).where(eq(results.id, resultId));
   return flags;
 }

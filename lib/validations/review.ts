@@ -1,7 +1,7 @@
 // Inputs of the moderation actions and the reader-flag endpoint. Shared by forms and server.
 import { z } from "zod";
 import { flagReasons } from "@/db/schema/enums";
-import { plausibilityCodes } from "@/lib/analysis/plausibility";
+import { flagCodes } from "@/lib/flag-labels";
 
 export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;
 export type RejectReason = (typeof rejectReasons)[number];
@@ -46,7 +46,7 @@ export const resolveFlagSchema = z
 
 /** /review search params: filters by flag, maker and group; anything unknown falls back to "all". */
 export const reviewQueueFilterSchema = z.object({
-  flag: z.enum([...plausibilityCodes, "none"]).optional().catch(undefined),
+  flag: z.enum([...flagCodes, "none"]).optional().catch(undefined),
   maker: z.string().regex(/^[a-z0-9-]{1,120}$/).optional().catch(undefined),
   group: z.string().max(200).optional().catch(undefined),
 });

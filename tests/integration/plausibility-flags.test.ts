@@ -103,3 +103,16 @@ describe("computeAndStoreFlags", () => {
     await expect(computeAndStoreFlags(999_999_999)).rejects.toMatchObject({ code: "not_found" });
   });
 });
+
+describe("computeAndStoreFlags beside the submission's card checks", () => {
+  it("keeps the card checks stored at submission, replaces its own codes, and is idempotent", async () => {
+    const { u, pack } = await setup();
+    const r = await makeResult({ packId: pack.id, contributorId: u.id, figures: { cells: 3 } });
+    await db.update(results).set({ flags: [{ code: "load-mismatch", message: "card" }, { code: "cells-mismatch", message: "card says 3S" }] }).where(eq(results.id, r.id));
+    await computeAndStoreFlags(r.id);
+    const once = await storedCodes(r.id);
+    await computeAndStoreFlags(r.id);
+    expect(await storedCodes(r.id)).toEqual(once);
+    expect(once).toEqual(["load-mismatch", "cells-mismatch"]);
+  });
+});

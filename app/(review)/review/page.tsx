@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { buttonClass, inputClass } from "@/components/ui/form";
 import { listReviewQueue } from "@/db/queries/review";
-import { plausibilityCodes, plausibilityLabels } from "@/lib/analysis/plausibility";
+import { flagCodes, flagLabels } from "@/lib/flag-labels";
 import { fmt } from "@/lib/format";
 import { requirePageUser } from "@/lib/page-auth";
 import { reviewQueueFilterSchema } from "@/lib/validations/review";
@@ -40,8 +40,8 @@ export default async function ReviewQueuePage(props: { searchParams: Promise<Rec
           <select id="filter-flag" name="flag" defaultValue={filter.flag ?? ""} className={inputClass}>
             <option value="">All ({total})</option>
             <option value="none">No flags ({counts.unflagged})</option>
-            {plausibilityCodes.map((c) => (
-              <option key={c} value={c}>{plausibilityLabels[c]} ({counts.flags[c] ?? 0})</option>
+            {flagCodes.map((c) => (
+              <option key={c} value={c}>{flagLabels[c]} ({counts.flags[c] ?? 0})</option>
             ))}
           </select>
         </label>

@@ -1,7 +1,6 @@
-import { plausibilityLabels, type PlausibilityCode } from "@/lib/analysis/plausibility";
+import { flagLabel } from "@/lib/flag-labels";
 
 type Flag = { code: string; message: string };
-const label = (code: string) => plausibilityLabels[code as PlausibilityCode] ?? code;
 
 /** Plausibility flags as short chips; the full explanation is in the title and on the review page. */
 export function FlagChips({ flags }: { flags: Flag[] }) {
@@ -11,7 +10,7 @@ export function FlagChips({ flags }: { flags: Flag[] }) {
       {flags.map((f, i) => (
         <li key={`${f.code}-${i}`} title={f.message}
           className="rounded-full border border-charge-400/60 bg-charge-50 px-2 py-0.5 text-xs text-charge-700 dark:border-charge-400/40 dark:bg-charge-700/20 dark:text-charge-100">
-          {label(f.code)}
+          {flagLabel(f.code)}
         </li>
       ))}
     </ul>
