@@ -149,6 +149,7 @@ describe("submitResult", () => {
     const [m] = await db.select().from(makers).where(eq(makers.id, p?.makerId ?? -1));
     expect(m).toMatchObject({ name: "Brightcell Works", status: "proposed", proposedById: me.id });
     expect(row?.labelRatio).not.toBeNull(); // the proposal's labelled C is used for the figures
+    expect(row?.flags.map((f) => f.code)).toContain("proposed-catalogue"); // computeAndStoreFlags ran in the same transaction
   });
 
   it("keeps the card checks as plausibility flags (a 6S log on a 4S pack)", async () => {
