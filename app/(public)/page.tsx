@@ -1,31 +1,65 @@
 import Link from "next/link";
-import { listActivePacks } from "@/db/queries/packs";
-import { labelSpec, packTitle } from "@/lib/format";
+import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/lib/public-data";
+import { HomeLabelCheck, type HomeGroup } from "./_components/home-label-check-client";
 
-export const revalidate = 300;
+// Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.
+export const revalidate = 3600;
+/** Groups offered by the switcher: those with at least this many packs, most populated first. */
+const MIN_PACKS_FOR_CHART = 3;
 
 export default async function HomePage() {
-  const packs = await listActivePacks();
+  const [groups, newest] = await Promise.all([cachedGroups(), cachedNewestResults(8)]);
+  const shown = groups.filter((g) => g.packCount >= MIN_PACKS_FOR_CHART).slice(0, 8);
+  const homeGroups: HomeGroup[] = await Promise.all(
+    shown.map(async (g) => {
+      const [packs, ranking] = await Promise.all([cachedPacksInGroup(g.key), cachedMakerRanking(g.key)]);
+      return {
+        key: g.key,
+        label: g.label,
+        packCount: g.packCount,
+        points: packs.flatMap((p) => (p.measuredC ? [{ packSlug: p.packSlug, label: p.model, makerName: p.makerName, labelledC: p.labelledC, measuredC: Math.round(p.measuredC.median * 10) / 10, n: p.measuredC.n }] : [])),
+        ranking: ranking.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }) => ({ makerSlug, makerName, medianLabelRatio, packs: n, results })),
+      };
+    }),
+  );
   return (
-    <div className="space-y-8">
-      <section className="space-y-3">
+    <div className="space-y-10">
+      <section className="space-y-4">
         <h1>What the label says, and what the bench measured</h1>
         <p className="muted max-w-3xl">
-          Independent testers log discharges of lithium-polymer packs; Sagline computes the figures from their raw
-          logs by published methods, moderators vet every result, and packs are compared only with results taken
-          the same way.
+          Independent testers log discharges of lithium-polymer packs; Sagline computes the figures from their raw logs by published
+          methods, moderators vet every result, and packs are compared only with results taken the same way.
         </p>
+        <form action="/packs" method="get" role="search" className="flex max-w-xl gap-2">
+          <label htmlFor="home-q" className="sr-only">Search packs by maker or model</label>
+          <input id="home-q" name="q" type="search" placeholder="Search packs, e.g. ridge 1300" autoComplete="off"
+            className="flex-1 rounded-md border border-ink/20 bg-paper-raised px-3 py-2 dark:border-night-line dark:bg-night-sunk" />
+          <button type="submit" className="rounded-md bg-charge-500 px-4 py-2 font-medium text-night hover:bg-charge-400">Search</button>
+        </form>
       </section>
-      <section aria-labelledby="packs-heading" className="space-y-3">
-        <h2 id="packs-heading">Packs in the catalogue</h2>
-        <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3" data-testid="pack-list">
-          {packs.map((p) => (
-            <li key={p.id} className="card">
-              <Link href={`/packs/${p.slug}`} className="font-medium">{packTitle(p)}</Link>
-              <p className="muted num text-sm">{labelSpec(p)}</p>
+
+      <section aria-labelledby="label-check-h" className="space-y-3">
+        <h2 id="label-check-h">Label check</h2>
+        <p className="muted max-w-3xl text-sm">
+          Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited C) up. Points
+          below the dashed line fall short of their label. <Link href="/methods#sag-limited-c">How sag-limited C is computed</Link>.
+        </p>
+        <HomeLabelCheck groups={homeGroups} />
+      </section>
+
+      <section aria-labelledby="newest-h" className="space-y-3">
+        <h2 id="newest-h">Newest approved results</h2>
+        <ul className="grid gap-2 sm:grid-cols-2" data-testid="newest-results">
+          {newest.map((r) => (
+            <li key={r.id} className="card space-y-1">
+              <Link href={`/packs/${r.packSlug}`} className="font-medium">{r.makerName} {r.packModel}</Link>
+              <p className="num text-sm">{fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio {fmtRatio(r.labelRatio)}</p>
+              <p className="muted text-xs"><Link href={`/results/${r.id}`}>Result #{r.id}</Link> · {fmtDate(r.publishedAt)}</p>
             </li>
           ))}
         </ul>
+        <p className="text-sm"><Link href="/packs">All packs →</Link></p>
       </section>
     </div>
   );

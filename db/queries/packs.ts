@@ -1,7 +1,9 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs } from "@/db/schema";
+import { makers, packs, results } from "@/db/schema";
+import { listPacksInGroup } from "./groups";
+import { isPublic } from "./results";
 
 export type PackSummary = {
   id: number;
@@ -49,4 +51,55 @@ export async function getPackBySlug(slug: string): Promise<PackSummary | null> {
     .where(and(eq(packs.slug, slug), eq(packs.status, "active")))
     .limit(1);
   return rows[0] ?? null;
+}
+
+/** A row of the packs table: the label, how many published results, and (for a chosen group) medians. */
+export type PackRow = PackSummary & {
+  resultCount: number;
+  groupCount: number;
+  /** Medians inside the chosen like-for-like group; null without a group or without results in it. */
+  measuredC: number | null;
+  labelRatio: number | null;
+  capacityRatio: number | null;
+  groupN: number;
+};
+
+/** Every active pack with its published-result counts; with a group, the pack's medians in it. */
+export async function listPackRows(groupKey: string | null): Promise<PackRow[]> {
+  const [list, counts, inGroup] = await Promise.all([
+    listActivePacks(),
+    db
+      .select({ packId: results.packId, n: sql<number>`count(*)::int`, groups: sql<number>`count(distinct ${results.groupKey})::int` })
+      .from(results)
+      .where(isPublic)
+      .groupBy(results.packId),
+    groupKey ? listPacksInGroup(groupKey) : Promise.resolve([]),
+  ]);
+  const countBy = new Map(counts.map((c) => [c.packId, c]));
+  const groupBy = new Map(inGroup.map((g) => [g.packId, g]));
+  return list.map((p) => {
+    const c = countBy.get(p.id);
+    const g = groupBy.get(p.id);
+    return {
+      ...p,
+      resultCount: c?.n ?? 0,
+      groupCount: c?.groups ?? 0,
+      measuredC: g?.measuredC?.median ?? null,
+      labelRatio: g?.labelRatio ?? null,
+      capacityRatio: g?.capacityRatio ?? null,
+      groupN: g?.n ?? 0,
+    };
+  });
+}
+
+/** Active packs by slug, in the order asked (unknown slugs are skipped). */
+export async function getPacksBySlugs(slugs: string[]): Promise<PackSummary[]> {
+  if (slugs.length === 0) return [];
+  const rows = await db
+    .select(packColumns)
+    .from(packs)
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(and(inArray(packs.slug, slugs), eq(packs.status, "active")));
+  const bySlug = new Map(rows.map((r) => [r.slug, r]));
+  return slugs.map((s) => bySlug.get(s)).filter((p): p is PackSummary => p !== undefined);
 }

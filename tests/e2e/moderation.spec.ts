@@ -37,7 +37,7 @@ test("a moderator approves one flagged result, rejects another, and the approved
   const packHref = await page.getByTestId("pack-link").getAttribute("href");
   expect(packHref).toMatch(/^\/packs\//);
   await page.goto(packHref ?? "/");
-  await expect(page.locator(`[data-result-id="${approveId}"]`)).toHaveCount(0);
+  await expect(page.getByRole("link", { name: `Result #${approveId}`, exact: true })).toHaveCount(0);
   await page.goto(`/review/${approveId}`);
   await page.getByLabel("Note (optional, sent to the contributor)").fill("Checked against the log.");
   await page.getByRole("button", { name: "Approve and publish" }).click();
@@ -60,7 +60,24 @@ test("a moderator approves one flagged result, rejects another, and the approved
 
   // The approved result is on the public pack page.
   await page.goto(packHref ?? "/");
-  await expect(page.getByTestId("pack-results").locator(`[data-result-id="${approveId}"]`)).toBeVisible();
+  await expect(page.getByTestId("pack-results").getByRole("link", { name: `Result #${approveId}`, exact: true })).toBeVisible();
+});
+
+test("a reader flags a published result and everyone sees it as disputed", async ({ page }) => {
+  await page.goto("/packs");
+  const packLink = page.locator('a[href^="/packs/"]').first();
+  await page.goto((await packLink.getAttribute("href")) ?? "/");
+  const resultLink = page.getByTestId("pack-results").getByRole("link", { name: /^Result #\d+$/ }).first();
+  const href = (await resultLink.getAttribute("href")) ?? "";
+  await page.goto(href);
+  await expect(page.getByText("Disputed: a reader flagged this result")).toHaveCount(0);
+  await page.getByRole("button", { name: "Flag this result" }).click();
+  await page.getByLabel("What is wrong?").selectOption("wrong-figures");
+  await page.getByLabel("Note for the moderators (optional)").fill("The capacity is above the label.");
+  await page.getByRole("button", { name: "Send flag" }).click();
+  await expect(page.getByRole("status")).toContainText("now shows as disputed");
+  await page.reload();
+  await expect(page.getByText("Disputed: a reader flagged this result")).toBeVisible();
 });
 
 test("a contributor opening the review queue gets the 403 page", async ({ page }) => {

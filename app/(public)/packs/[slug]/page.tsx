@@ -1,56 +1,81 @@
-import { unstable_cache } from "next/cache";
+import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { getPackBySlug } from "@/db/queries/packs";
-import { listPublishedResultsForPack } from "@/db/queries/published-results";
-import { cacheTags } from "@/lib/cache-tags";
+import { LineChart } from "@/components/charts/line-chart";
+import { WatchSlot } from "@/components/watch-slot";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
+import { cachedPackDetail } from "@/lib/public-data";
+import { CyclesSection } from "./_components/cycles-section";
+import { GroupFiguresTable } from "./_components/group-figures";
+import { ResultsList } from "./_components/results-list";
 
-export const revalidate = 300;
+// Generated on first request, then served statically; moderation revalidates the `pack:<slug>` tag.
+export const revalidate = 3600;
 export async function generateStaticParams() {
   return [];
 }
 
 const params = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
+type Props = { params: Promise<{ slug: string }> };
 
-// Tagged reads: approving, flagging or merging revalidates `pack:<slug>` and the page refreshes at once.
-const loadPack = (slug: string) =>
-  unstable_cache(
-    async () => {
-      const pack = await getPackBySlug(slug);
-      return pack ? { pack, results: await listPublishedResultsForPack(pack.id) } : null;
-    },
-    ["pack-page", slug],
-    { tags: [cacheTags.pack(slug), cacheTags.packs, cacheTags.results], revalidate: 300 },
-  )();
+export async function generateMetadata(props: Props): Promise<Metadata> {
+  const parsed = params.safeParse(await props.params);
+  const detail = parsed.success ? await cachedPackDetail(parsed.data.slug) : null;
+  return detail ? { title: packTitle(detail.pack), description: `${labelSpec(detail.pack)}: measured figures from independent tests, method attached.` } : {};
+}
 
-export default async function PackPage(props: { params: Promise<{ slug: string }> }) {
+export default async function PackPage(props: Props) {
   const parsed = params.safeParse(await props.params);
   if (!parsed.success) notFound();
-  const data = await loadPack(parsed.data.slug);
-  if (!data) notFound();
-  const { pack, results } = data;
+  const detail = await cachedPackDetail(parsed.data.slug);
+  if (!detail) notFound();
+  const { pack, groups, sustained, cycles, curves, results } = detail;
+  const title = packTitle(pack);
   return (
-    <article className="space-y-6">
-      <div className="space-y-1">
-        <h1>{packTitle(pack)}</h1>
-        <p className="num muted">{labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}</p>
-      </div>
-      <section className="space-y-2" aria-labelledby="results-h">
-        <h2 id="results-h">Published results ({results.length})</h2>
-        {results.length === 0 ? <p className="muted">No published result yet.</p> : (
-          <ul className="divide-y divide-ink/10 rounded-lg border border-ink/10 dark:divide-night-line dark:border-night-line" data-testid="pack-results">
-            {results.map((r) => (
-              <li key={r.id} className="flex flex-wrap items-baseline justify-between gap-x-4 px-4 py-2 text-sm" data-result-id={r.id}>
-                <span>
-                  Result #{r.id}
-                  {r.status === "disputed" ? <span className="ml-2 rounded-full bg-warn-soft px-2 py-0.5 text-xs text-warn">Disputed</span> : null}
-                </span>
-                <span className="num muted">{fmt(r.capacityMah, 0, "mAh")} · {fmt(r.loadRateC, 1, "C")} load · label ratio {fmt(r.labelRatio, 2)}</span>
-              </li>
-            ))}
-          </ul>
+    <article className="space-y-10">
+      <header className="flex flex-wrap items-start justify-between gap-3">
+        <div className="space-y-1">
+          <h1>{title}</h1>
+          <p className="num muted">{labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}</p>
+        </div>
+        <div className="flex gap-2">
+          <WatchSlot packSlug={pack.slug} packTitle={title} />
+          <Link href={`/compare?packs=${pack.slug}`} className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk">Compare…</Link>
+        </div>
+      </header>
+
+      <section aria-labelledby="measured" className="space-y-3">
+        <h2 id="measured">Label vs measured</h2>
+        <p className="text-sm">
+          <strong>Sustained C:</strong>{" "}
+          {sustained ? (
+            <><span className="num" data-testid="sustained-c">{fmt(sustained.rateC, 1)}C</span> <span className="muted">— highest constant-current rate completed to cut-off without passing the stop temperature (<Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>; {sustained.groupLabel})</span></>
+          ) : (
+            <span className="muted">— no approved constant-current run has completed to cut-off yet</span>
+          )}
+        </p>
+        <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
+      </section>
+
+      <section aria-labelledby="curves" className="space-y-3">
+        <h2 id="curves">Discharge curves</h2>
+        {curves.length === 0 ? <p className="muted">No curves yet.</p> : (
+          <LineChart title="Voltage per cell against capacity delivered" xLabel="Capacity delivered (mAh)" yLabel="Voltage per cell (V)" xDigits={0} yDigits={3}
+            tableCaption={`Discharge curves of ${title}`}
+            notes={<p>The newest {curves.length} published results, downsampled on the server for drawing. Curves from different like-for-like groups are not comparable with each other: each is labelled with its method.</p>}
+            series={curves.map((c) => ({ id: String(c.resultId), label: c.label, href: `/results/${c.resultId}`, points: c.points.map((p) => ({ x: p.mah, y: p.vpc })) }))} />
         )}
+      </section>
+
+      <section aria-labelledby="cycles" className="space-y-3">
+        <h2 id="cycles">Over cycles</h2>
+        <CyclesSection cycles={cycles} />
+      </section>
+
+      <section aria-labelledby="results" className="space-y-3">
+        <h2 id="results">Results ({results.length})</h2>
+        <ResultsList results={results} />
       </section>
     </article>
   );

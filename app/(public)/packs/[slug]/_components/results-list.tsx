@@ -1,0 +1,33 @@
+import Link from "next/link";
+import { MethodCard } from "@/components/method-card";
+import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import type { PublicResultRow } from "@/lib/pack-summary";
+
+/** The pack's published results, newest first, each with its method card. */
+export function ResultsList({ results }: { results: (PublicResultRow & { groupLabel: string })[] }) {
+  const list = [...results].sort((a, b) => (b.publishedAt ?? "").localeCompare(a.publishedAt ?? "") || b.id - a.id);
+  if (list.length === 0) return <p className="muted">No published results yet.</p>;
+  return (
+    <ol className="space-y-3" data-testid="pack-results">
+      {list.map((r) => (
+        <li key={r.id} className="card space-y-2">
+          <div className="flex flex-wrap items-baseline justify-between gap-2">
+            <Link href={`/results/${r.id}`} className="font-medium">Result #{r.id}</Link>
+            <span className="muted text-xs">
+              published {fmtDate(r.publishedAt)}
+              {r.status === "disputed" ? <span className="ml-2 rounded bg-warn-soft px-1.5 py-0.5 font-medium text-warn">disputed</span> : null}
+            </span>
+          </div>
+          <p className="muted text-xs">{r.groupLabel}</p>
+          <p className="num text-sm">
+            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · DC {fmt(r.dcResistanceMohm, 1, "mΩ")}
+          </p>
+          <details>
+            <summary className="cursor-pointer text-sm">Method card</summary>
+            <div className="pt-2"><MethodCard m={r} compact /></div>
+          </details>
+        </li>
+      ))}
+    </ol>
+  );
+}

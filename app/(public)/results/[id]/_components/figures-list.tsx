@@ -1,0 +1,34 @@
+import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
+import type { Figures } from "@/lib/analysis";
+
+/** Every figure computed from the log, with its unit; missing ones show "—". */
+export function FiguresList({ f }: { f: Figures }) {
+  const rows: [string, string, string?][] = [
+    ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
+    ["Capacity ratio", fmt(f.capacityRatio, 2), "delivered ÷ rated"],
+    ["Delivered energy", fmt(f.energyWh, 2, "Wh")],
+    ["Mean voltage under load", `${fmt(f.meanVoltageV, 2, "V")} (${fmt(f.meanVoltagePerCellV, 3, "V/cell")})`],
+    ["Minimum voltage", `${fmt(f.minVoltageV, 2, "V")} (${fmt(f.minVoltagePerCellV, 3, "V/cell")})`],
+    ["Hold voltage", fmt(f.holdVoltagePerCellV, 3, "V/cell")],
+    ["DC resistance", `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ/cell")})`, f.dcResistanceMethod === "iec-61960-two-level" ? "IEC 61960-3 two-level" : f.dcResistanceMethod === "step" ? "rest→load step at 1 s" : undefined],
+    ["DC resistance at 25 °C", fmt(f.resistanceAt25CMohm, 1, "mΩ"), `estimate from ${fmt(f.resistanceTemperatureC, 1, "°C")}: ${RESISTANCE_25C_SOURCE}`],
+    ["Sag-limited C", fmt(f.sagLimitedC, 1, "C"), "from the DC resistance; see methods"],
+    ["Label ratio", fmt(f.labelRatio, 2), "measured C ÷ labelled C"],
+    ["Temperature rise", fmt(f.temperatureRiseC, 1, "°C"), `${fmt(f.startTemperatureC, 1, "°C")} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
+    ["Time to cut-off", fmt(f.timeToCutoffS, 0, "s")],
+    ["Time to stop temperature", f.timeToStopTemperatureS === null ? "not reached" : fmt(f.timeToStopTemperatureS, 0, "s")],
+    ["Specific energy", fmt(f.specificEnergyWhKg, 0, "Wh/kg")],
+    ["Specific power", fmt(f.specificPowerWKg, 0, "W/kg")],
+    ["Samples", `${fmt(f.samples)} over ${fmt(f.durationS, 0, "s")}`],
+  ];
+  return (
+    <dl className="grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
+      {rows.map(([k, v, note]) => (
+        <div key={k}>
+          <dt className="muted">{k}</dt>
+          <dd className="num">{v}{note ? <span className="muted block font-sans text-xs">{note}</span> : null}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}

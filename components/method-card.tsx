@@ -1,0 +1,43 @@
+import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
+import { fmt } from "@/lib/format";
+
+export type MethodCardData = {
+  ambientTemperatureC: number;
+  packStartTemperatureC: number | null;
+  loadMode: string;
+  loadCurrentA: number;
+  loadRateC: number;
+  cutoffVPerCell: number;
+  stopTemperatureC: number;
+  resistanceMethod: string;
+  equipment: string;
+  sampleRateHz: number | null;
+  cyclesBeforeTest: number;
+  testedOn: string | null;
+};
+
+const loadModes: Record<string, string> = { "constant-current": "constant current", "constant-power": "constant power", "constant-resistance": "constant resistance" };
+
+/** The method attached to every number: how the result was taken. */
+export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?: boolean }) {
+  const rows: [string, string][] = [
+    ["Ambient", fmt(m.ambientTemperatureC, 1, "°C")],
+    ["Pack at start", fmt(m.packStartTemperatureC, 1, "°C")],
+    ["Load", `${loadModes[m.loadMode] ?? m.loadMode}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
+    ["Cut-off", fmt(m.cutoffVPerCell, 2, "V per cell")],
+    ["Stop temperature", fmt(m.stopTemperatureC, 0, "°C")],
+    ["Resistance method", RESISTANCE_METHODS[m.resistanceMethod as ResistanceMethod] ?? m.resistanceMethod],
+    ["Cycles before test", String(m.cyclesBeforeTest)],
+  ];
+  if (!compact) rows.push(["Sample rate", fmt(m.sampleRateHz, 1, "Hz")], ["Equipment", m.equipment], ["Tested on", m.testedOn ?? "—"]);
+  return (
+    <dl className={`grid gap-x-4 gap-y-1 text-sm ${compact ? "grid-cols-[auto_1fr] sm:grid-cols-[auto_1fr_auto_1fr]" : "grid-cols-[auto_1fr]"}`}>
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="muted">{k}</dt>
+          <dd className="num">{v}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}

@@ -1,0 +1,1 @@
+CREATE INDEX "results_group_public_idx" ON "results" USING btree ("group_key","pack_id","label_ratio") WHERE "results"."status" in ('approved', 'disputed');

@@ -1,0 +1,109 @@
+// Like-for-like groups: which exist, and the per-pack and per-maker figures inside one group. Medians are
+// computed in PostgreSQL with percentile_cont (linear interpolation between order statistics, the same
+// "type 7" quantile as summarise() in lib/analysis — tests/integration/groups-queries.test.ts checks
+// they agree), so a ranking over 100,000 results never ships the rows to Node.
+import "server-only";
+import { and, desc, eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { makers, packs, results } from "@/db/schema";
+import { describeGroup, type DescribedGroup } from "@/lib/like-for-like";
+import { isPublic } from "./results";
+
+export type GroupSummary = DescribedGroup & { resultCount: number; packCount: number };
+
+/** Groups that hold published results, the most packs first. Labels come from a representative method card. */
+export async function listPublicGroups(): Promise<GroupSummary[]> {
+  const rows = await db.execute<{
+    group_key: string; result_count: string; pack_count: string; resistance_method: string; ambient_temperature_c: number;
+    cutoff_v_per_cell: number; load_current_a: number; rated_capacity_mah: number; cycles_before_test: number;
+  }>(sql`
+    select distinct on (r.group_key) r.group_key, c.result_count, c.pack_count, r.resistance_method, r.ambient_temperature_c,
+           r.cutoff_v_per_cell, r.load_current_a, p.rated_capacity_mah, r.cycles_before_test
+    from ${results} r
+    join ${packs} p on p.id = r.pack_id and p.status = 'active'
+    join (select group_key, count(*) as result_count, count(distinct pack_id) as pack_count
+          from ${results} where status in ('approved', 'disputed') group by group_key) c on c.group_key = r.group_key
+    where r.status in ('approved', 'disputed')
+    order by r.group_key, r.id`);
+  return rows.rows
+    .map((r) => ({
+      ...describeGroup({
+        resistanceMethod: r.resistance_method, ambientC: r.ambient_temperature_c, cutoffVPerCell: r.cutoff_v_per_cell,
+        loadCurrentA: r.load_current_a, ratedMah: r.rated_capacity_mah, cyclesBeforeTest: r.cycles_before_test,
+      }),
+      key: r.group_key,
+      resultCount: Number(r.result_count),
+      packCount: Number(r.pack_count),
+    }))
+    .sort((a, b) => b.packCount - a.packCount || b.resultCount - a.resultCount || a.key.localeCompare(b.key));
+}
+
+export type PackInGroup = {
+  packId: number;
+  packSlug: string;
+  model: string;
+  makerName: string;
+  makerSlug: string;
+  labelledC: number;
+  /** Published results of the pack in the group. */
+  n: number;
+  measuredC: { median: number; n: number; min: number; max: number } | null;
+  labelRatio: number | null;
+  capacityRatio: number | null;
+  capacityMah: number | null;
+  dcResistanceMohm: number | null;
+};
+
+/** Per-pack medians of one group (the label check, and the measured columns of the packs table). */
+export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]> {
+  const rows = await db
+    .select({
+      packId: packs.id, packSlug: packs.slug, model: packs.model, makerName: makers.name, makerSlug: makers.slug, labelledC: packs.labelledContinuousC,
+      n: sql<number>`count(*)::int`,
+      measuredN: sql<number>`count(${results.sagLimitedC})::int`,
+      measuredMedian: sql<number | null>`percentile_cont(0.5) within group (order by ${results.sagLimitedC})`,
+      measuredMin: sql<number | null>`min(${results.sagLimitedC})`,
+      measuredMax: sql<number | null>`max(${results.sagLimitedC})`,
+      labelRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.labelRatio})`,
+      capacityRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityRatio})`,
+      capacityMah: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityMah})`,
+      dcResistanceMohm: sql<number | null>`percentile_cont(0.5) within group (order by ${results.dcResistanceMohm})`,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(and(eq(results.groupKey, groupKey), isPublic, eq(packs.status, "active")))
+    .groupBy(packs.id, makers.id)
+    .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
+  return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, ...r }) => ({
+    ...r,
+    measuredC: measuredMedian === null || measuredN === 0 ? null : { median: measuredMedian, n: measuredN, min: Number(measuredMin), max: Number(measuredMax) },
+  }));
+}
+
+export type MakerRank = { makerSlug: string; makerName: string; medianLabelRatio: number; packs: number; results: number; min: number; max: number };
+
+/**
+ * Makers ranked by the median of their packs' median label ratios inside one group. Each pack counts
+ * once, so a pack tested twenty times does not outweigh the rest of its maker's range.
+ */
+export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> {
+  const rows = await db.execute<{ maker_slug: string; maker_name: string; median: number; packs: number; results: number; min: number; max: number }>(sql`
+    with per_pack as (
+      select r.pack_id, percentile_cont(0.5) within group (order by r.label_ratio) as m, count(*) as n
+      from ${results} r
+      where r.group_key = ${groupKey} and r.status in ('approved', 'disputed') and r.label_ratio is not null
+      group by r.pack_id
+    )
+    select mk.slug as maker_slug, mk.name as maker_name, percentile_cont(0.5) within group (order by pp.m) as median,
+           count(*)::int as packs, sum(pp.n)::int as results, min(pp.m) as min, max(pp.m) as max
+    from per_pack pp
+    join ${packs} p on p.id = pp.pack_id and p.status = 'active'
+    join ${makers} mk on mk.id = p.maker_id
+    group by mk.id
+    order by median desc, mk.name`);
+  return rows.rows.map((r) => ({
+    makerSlug: r.maker_slug, makerName: r.maker_name, medianLabelRatio: Number(r.median), packs: Number(r.packs),
+    results: Number(r.results), min: Number(r.min), max: Number(r.max),
+  }));
+}

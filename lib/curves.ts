@@ -1,0 +1,34 @@
+// Chart-ready discharge curves: downsampled on the server (LTTB from lib/analysis) and rounded, so a
+// browser receives a few kilobytes per curve, never the raw log.
+import { lttb, type CurvePoint } from "@/lib/analysis";
+
+/** One prepared point: capacity delivered (mAh), voltage per cell (V), time (s), pack temperature (°C). */
+export type ChartPoint = { mah: number; vpc: number; s: number; tc: number | null };
+
+export const PACK_PAGE_CURVE_POINTS = 120;
+export const COMPARE_CURVE_POINTS = 120;
+
+const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
+
+/** Load part of a stored curve (positive current), downsampled on voltage against capacity. */
+export function prepareCurve(curve: CurvePoint[], cells: number, maxPoints: number): ChartPoint[] {
+  const load = curve.filter((p) => p.currentA > 0.05 && Number.isFinite(p.voltageV) && Number.isFinite(p.capacityMah));
+  const picked = lttb(load, maxPoints, (p) => p.capacityMah, (p) => p.voltageV);
+  return picked.map((p) => ({
+    mah: round(p.capacityMah, 0),
+    vpc: round(p.voltageV / Math.max(1, cells), 3),
+    s: round(p.timeS, 0),
+    tc: p.temperatureC === null || !Number.isFinite(p.temperatureC) ? null : round(p.temperatureC, 1),
+  }));
+}
+
+/** The whole log (rest included) against time, for one result's page. */
+export function prepareTimeCurve(curve: CurvePoint[], cells: number, maxPoints: number): { s: number; vpc: number; a: number; tc: number | null }[] {
+  const picked = lttb(curve, maxPoints, (p) => p.timeS, (p) => p.voltageV);
+  return picked.map((p) => ({
+    s: round(p.timeS, 1),
+    vpc: round(p.voltageV / Math.max(1, cells), 3),
+    a: round(p.currentA, 2),
+    tc: p.temperatureC === null || !Number.isFinite(p.temperatureC) ? null : round(p.temperatureC, 1),
+  }));
+}

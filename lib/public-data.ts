@@ -1,0 +1,45 @@
+// Cached reads behind the public pages and the public API. Each carries the tags of lib/cache-tags.ts, so
+// moderation's revalidateTag() refreshes exactly the pages that show the changed data. Pages call these,
+// never db/queries directly; integration tests call db/queries (unstable_cache needs a Next.js server).
+import "server-only";
+import { unstable_cache } from "next/cache";
+import { getComparison } from "@/db/queries/compare";
+import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
+import { getPackDetail } from "@/db/queries/pack-detail";
+import { listActivePacks, listPackRows } from "@/db/queries/packs";
+import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
+import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/lib/cache-tags";
+
+export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.results, t.packs], revalidate });
+
+export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.packs], revalidate });
+
+export function cachedPackRows(groupKey: string | null) {
+  const tags = groupKey ? [t.packs, t.results, t.group(groupKey)] : [t.packs, t.results];
+  return unstable_cache(() => listPackRows(groupKey), ["pack-rows", groupKey ?? "-"], { tags, revalidate })();
+}
+
+export function cachedPacksInGroup(groupKey: string) {
+  return unstable_cache(() => listPacksInGroup(groupKey), ["packs-in-group", groupKey], { tags: [t.group(groupKey), t.results, t.packs], revalidate })();
+}
+
+export function cachedMakerRanking(groupKey: string) {
+  return unstable_cache(() => rankMakersInGroup(groupKey), ["maker-ranking", groupKey], { tags: [t.group(groupKey), t.results, t.packs], revalidate })();
+}
+
+export function cachedNewestResults(limit: number) {
+  return unstable_cache(() => listNewestApprovedResults(limit), ["newest-results", String(limit)], { tags: [t.results], revalidate })();
+}
+
+export function cachedPackDetail(slug: string) {
+  return unstable_cache(() => getPackDetail(slug), ["pack-detail", slug], { tags: [t.pack(slug), t.packs], revalidate })();
+}
+
+export function cachedResult(id: number) {
+  return unstable_cache(() => getPublicResult(id), ["result", String(id)], { tags: [t.result(id), t.results], revalidate })();
+}
+
+export function cachedComparison(slugs: string[], group: string | null) {
+  const tags = [t.results, t.packs, ...slugs.map((s) => t.pack(s)), ...(group ? [t.group(group)] : [])];
+  return unstable_cache(() => getComparison(slugs, group), ["comparison", slugs.join(","), group ?? "-"], { tags, revalidate })();
+}

@@ -1,0 +1,116 @@
+// Shoppers' journeys: the packs table through the URL, fuzzy search, a pack page, comparing three packs,
+// charts as tables, keyboard sorting.
+import { expect, test, type Page } from "@playwright/test";
+
+const rows = (page: Page) => page.getByTestId("packs-table").locator("tbody tr");
+const column = async (page: Page, index: number) => (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
+const mah = (t: string) => Number(t.replace(/,/g, ""));
+
+test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
+  await page.goto("/packs?cells=4&sort=capacity&dir=desc");
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  expect(await rows(page).count()).toBeGreaterThan(0);
+  expect(new Set(await column(page, 3))).toEqual(new Set(["4S"]));
+  const capacities = (await column(page, 4)).map(mah);
+  expect(capacities).toEqual([...capacities].sort((a, b) => b - a));
+  await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
+
+  await page.getByRole("combobox", { name: "Connector" }).selectOption("XT60");
+  await expect(page).toHaveURL(/connector=XT60/);
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  expect(new Set(await column(page, 7))).toEqual(new Set(["XT60"]));
+  await page.goBack();
+  await expect(page).not.toHaveURL(/connector=/);
+  await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
+});
+
+test("finds packs with a misspelt maker name", async ({ page }) => {
+  await page.goto("/packs");
+  await page.getByRole("searchbox", { name: "Search maker and model" }).fill("brakwater");
+  await expect(page).toHaveURL(/q=brakwater/);
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  const makers = await column(page, 1);
+  expect(makers.length).toBeGreaterThan(0);
+  expect(new Set(makers)).toEqual(new Set(["Brackwater Power"]));
+});
+
+test("opens a pack from the table and reads its figures by group", async ({ page }) => {
+  await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new&sort=labelRatio&dir=desc");
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  const link = rows(page).first().locator("td:nth-child(2) a");
+  const model = (await link.textContent())?.trim() ?? "";
+  await link.click();
+  await expect(page.getByRole("heading", { level: 1 })).toContainText(model);
+  await expect(page.getByTestId("group-figures")).toContainText("DC step · 15–25 °C · 3.3 V cut-off · 5–10C · new");
+  await expect(page.getByTestId("pack-results").locator("li").first()).toBeVisible();
+});
+
+test("compares three packs in one like-for-like group and lists what it left out", async ({ page }) => {
+  await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new");
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  const hrefs = await rows(page).locator("td:nth-child(2) a").evaluateAll((as) => as.slice(0, 3).map((a) => a.getAttribute("href") ?? ""));
+  const slugs = hrefs.map((h) => h.replace("/packs/", ""));
+  const third = (await rows(page).nth(2).locator("td:nth-child(1)").textContent())?.trim() + " " + (await rows(page).nth(2).locator("td:nth-child(2)").textContent())?.trim();
+  await page.goto(`/compare?packs=${slugs.slice(0, 2).join(",")}&group=dc-step_a15-25_co3.3_r5-10_new`);
+  await page.getByPlaceholder("Type a maker or model").fill(third);
+  await page.getByRole("button", { name: "Add", exact: true }).click();
+  await expect(page).toHaveURL(new RegExp(`packs=${slugs.join(",")}`));
+  const table = page.getByTestId("compare-table");
+  await expect(table.locator("thead th")).toHaveCount(4);
+  await expect(page.getByTestId("compare-group")).toHaveText("DC step · 15–25 °C · 3.3 V cut-off · 5–10C · new");
+  await expect(table).toContainText("★ best");
+  await expect(page.getByTestId("excluded").first()).toBeVisible();
+  // Reorder and remove.
+  await page.getByRole("button", { name: /Move .* right/ }).first().click();
+  await expect(page).toHaveURL(new RegExp(`packs=${slugs[1]},${slugs[0]},${slugs[2]}`));
+  await page.getByRole("button", { name: /^Remove / }).last().click();
+  await expect(table.locator("thead th")).toHaveCount(3);
+});
+
+test("toggles a chart to its data table and back; points are keyboard-focusable with an Esc-dismissable tooltip", async ({ page }) => {
+  await page.goto("/");
+  const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against measured C" });
+  await frame.getByRole("button", { name: "Show as table" }).click();
+  await expect(frame.getByRole("columnheader", { name: "Labelled C" })).toBeVisible();
+  expect(await frame.locator("tbody tr").count()).toBeGreaterThanOrEqual(40);
+  await expect(frame.getByTestId("label-check-point")).toHaveCount(0);
+  await frame.getByRole("button", { name: "Show as chart" }).click();
+  const point = frame.getByTestId("label-check-point").first();
+  await point.focus();
+  await expect(frame.getByRole("status")).toContainText("labelled");
+  await page.keyboard.press("Escape");
+  await expect(frame.getByRole("status")).toHaveCount(0);
+  // Another group from the switcher redraws the chart with its own points.
+  const before = await frame.getByTestId("label-check-point").count();
+  await page.getByTestId("group-switcher").selectOption({ index: 1 });
+  await expect(frame.getByTestId("label-check-point")).not.toHaveCount(before);
+});
+
+test("sorts the packs table from the keyboard through the header buttons", async ({ page }) => {
+  await page.goto("/packs");
+  await page.getByRole("button", { name: /^Maker/ }).focus();
+  for (let i = 0; i < 10; i++) {
+    const text = await page.evaluate(() => document.activeElement?.textContent ?? "");
+    if (text.startsWith("Rated mAh")) break;
+    await page.keyboard.press("Tab");
+  }
+  await page.keyboard.press("Enter");
+  await expect(page).toHaveURL(/sort=capacity&dir=desc/);
+  await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
+  await page.keyboard.press("Enter");
+  await expect(page).toHaveURL(/sort=capacity&dir=asc/);
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  const capacities = (await column(page, 4)).map(mah);
+  expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
+});
+
+test("a result page shows its method card, contributor and review history; the API refuses bad params", async ({ page, request }) => {
+  await page.goto("/");
+  await page.getByTestId("newest-results").getByRole("link", { name: /^Result #/ }).first().click();
+  await expect(page.getByRole("heading", { name: "Method card" })).toBeVisible();
+  await expect(page.getByTestId("contributor")).not.toBeEmpty();
+  await expect(page.getByTestId("review-history")).toContainText("approved");
+  const bad = await request.get("/api/v1/packs?cells=many");
+  expect(bad.status()).toBe(422);
+  expect((await request.get("/results/not-a-number")).status()).toBe(404);
+});

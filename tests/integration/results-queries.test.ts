@@ -1,0 +1,54 @@
+// Queries behind /results/[id] and the home page's newest results.
+import { beforeAll, describe, expect, it } from "vitest";
+import { db } from "@/db";
+import { reviewEvents } from "@/db/schema";
+import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
+import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
+
+const ids = { approved: 0, anon: 0, pending: 0, disputed: 0, older: 0 };
+
+beforeAll(async () => {
+  await emptyCatalogue();
+  const named = await makeUser({ displayName: "Fen Bench" });
+  const anon = await makeUser({ displayName: "Secret Name", anonymous: true });
+  const moderator = await makeUser({ displayName: "Mod" });
+  const m = await makeMaker("Furze Test Cells");
+  const pack = await makePack(m.id);
+  const day = (d: number) => new Date(Date.UTC(2026, 2, d));
+  ids.older = (await makeResult(pack, named.id, { publishedAt: day(1) })).id;
+  ids.approved = (await makeResult(pack, named.id, { publishedAt: day(3) })).id;
+  ids.anon = (await makeResult(pack, anon.id, { publishedAt: day(2) })).id;
+  ids.pending = (await makeResult(pack, named.id, { status: "pending" })).id;
+  ids.disputed = (await makeResult(pack, named.id, { status: "disputed", publishedAt: day(5) })).id;
+  await db.insert(reviewEvents).values([
+    { resultId: ids.approved, actorId: moderator.id, fromStatus: "pending", toStatus: "approved", createdAt: new Date(Date.now() + 1000) },
+    { resultId: ids.disputed, actorId: null, fromStatus: "approved", toStatus: "disputed", reason: "reader-flag", createdAt: new Date(Date.now() + 1000) },
+  ]);
+});
+
+describe("published results", () => {
+  it("returns a published result with its contributor and review history, actors named by role", async () => {
+    const r = await getPublicResult(ids.approved);
+    expect(r?.contributor).toBe("Fen Bench");
+    expect(r?.events.map((e) => [e.actor, e.to])).toEqual([["contributor", "pending"], ["moderator", "approved"]]);
+    expect(r?.pack.makerName).toBe("Furze Test Cells");
+  });
+
+  it("says anonymous when the contributor chose it, never their name", async () => {
+    const r = await getPublicResult(ids.anon);
+    expect(r?.contributor).toBe("anonymous");
+    expect(JSON.stringify(r)).not.toContain("Secret Name");
+  });
+
+  it("keeps disputed results visible and hides pending ones", async () => {
+    expect((await getPublicResult(ids.disputed))?.status).toBe("disputed");
+    expect((await getPublicResult(ids.disputed))?.events.at(-1)?.actor).toBe("system");
+    expect(await getPublicResult(ids.pending)).toBeNull();
+    expect(await getPublicResult(999_999)).toBeNull();
+  });
+
+  it("lists the newest approved results first (not disputed, not pending)", async () => {
+    const list = await listNewestApprovedResults(10);
+    expect(list.map((r) => r.id)).toEqual([ids.approved, ids.anon, ids.older]);
+  });
+});

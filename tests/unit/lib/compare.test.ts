@@ -1,0 +1,38 @@
+import { describe, expect, it } from "vitest";
+import { markDifferences } from "@/lib/compare";
+import { cycleSeries, sustainedC, type PublicResultRow } from "@/lib/pack-summary";
+
+let id = 0;
+const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
+  id: ++id, packId: 1, status: "approved", groupKey: "k", ratedCapacityMah: 2000, ambientTemperatureC: 22, packStartTemperatureC: 22,
+  loadMode: "constant-current", loadCurrentA: 16, loadRateC: 8, cutoffVPerCell: 3.3, stopTemperatureC: 60, resistanceMethod: "dc-step",
+  equipment: "load", sampleRateHz: 1, cyclesBeforeTest: 0, testedOn: null, publishedAt: null, capacityMah: 1900, energyWh: 28,
+  dcResistanceMohm: 10, resistanceAt25CMohm: 10, holdVoltagePerCellV: 3.8, temperatureRiseC: 10, sagLimitedC: 40, labelRatio: 0.8,
+  capacityRatio: 0.95, reachedCutoff: true, passedStopTemperature: false, ...o,
+});
+
+describe("differences between compared packs", () => {
+  it("marks the best value and how far the others trail; missing values get no mark", () => {
+    expect(markDifferences([40, null, 30], "higher")).toEqual([{ best: true, worseBy: null }, { best: false, worseBy: null }, { best: false, worseBy: 0.25 }]);
+    expect(markDifferences([10, 12.5], "lower")[1]?.worseBy).toBeCloseTo(0.25, 9);
+    expect(markDifferences([10, null], "lower")).toEqual([{ best: false, worseBy: null }, { best: false, worseBy: null }]);
+  });
+});
+
+describe("sustained C (definition on /methods)", () => {
+  it("is the highest approved constant-current rate completed to cut-off without passing the stop temperature", () => {
+    const rows = [r({ loadRateC: 5 }), r({ loadRateC: 10 }), r({ loadRateC: 20, passedStopTemperature: true }), r({ loadRateC: 25, reachedCutoff: false }), r({ loadRateC: 30, status: "disputed" }), r({ loadRateC: 40, loadMode: "constant-power" })];
+    expect(sustainedC(rows)?.rateC).toBe(10);
+    expect(sustainedC([r({ passedStopTemperature: true })])).toBeNull();
+  });
+});
+
+describe("cycling series", () => {
+  it("needs two cycle counts in results alike except for age", () => {
+    expect(cycleSeries([r({ cyclesBeforeTest: 0 }), r({ cyclesBeforeTest: 0 })])).toBeNull();
+    const s = cycleSeries([r({ cyclesBeforeTest: 0, capacityMah: 2000 }), r({ cyclesBeforeTest: 100, capacityMah: 1900 }), r({ cyclesBeforeTest: 50, ambientTemperatureC: 8 })]);
+    expect(s?.points.map((p) => p.cycles)).toEqual([0, 100]);
+    // Straight line through (0, 100 %) and (100, 95 %) reaches 80 % at cycle 400 (arithmetic).
+    expect(s?.trend?.cyclesTo80).toBeCloseTo(400, 6);
+  });
+});
