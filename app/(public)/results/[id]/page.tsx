@@ -40,10 +40,8 @@ export default async function ResultPage(props: Props) {
     <article className="space-y-8">
       <header className="space-y-2">
         <p className="muted text-sm"><Link href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</Link> · <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span></p>
-        <div className="flex flex-wrap items-start justify-between gap-3">
-          <h1>Result #{r.id}</h1>
-          <div className="w-full max-w-md sm:w-auto"><FlagResultForm resultId={r.id} /></div>
-        </div>
+        <h1>Result #{r.id}</h1>
+        <div className="max-w-xl"><FlagResultForm resultId={r.id} /></div>
         {r.status === "disputed" ? (
           <p className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn" role="note">
             Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible, marked.
