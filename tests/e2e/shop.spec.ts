@@ -5,6 +5,17 @@ import { expect, test, type Page } from "@playwright/test";
 const rows = (page: Page) => page.getByTestId("packs-table").locator("tbody tr");
 const column = async (page: Page, index: number) => (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
 const mah = (t: string) => Number(t.replace(/,/g, ""));
+/** Waits until the table stops changing: the server-rendered rows are replaced once the client has hydrated. */
+async function settled(page: Page) {
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  let prev = "";
+  await expect.poll(async () => {
+    const now = (await rows(page).allTextContents()).join("|");
+    const same = now === prev && now !== "";
+    prev = now;
+    return same;
+  }, { intervals: [700], timeout: 20_000 }).toBe(true);
+}
 
 test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
   await page.goto("/packs?cells=4&sort=capacity&dir=desc");
@@ -40,7 +51,7 @@ test("finds packs with a misspelt maker name", async ({ page }) => {
 
 test("opens a pack from the table and reads its figures by group", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new&sort=labelRatio&dir=desc");
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  await settled(page);
   const link = rows(page).first().locator("td:nth-child(2) a");
   const model = (await link.textContent())?.trim() ?? "";
   await link.click();
@@ -92,6 +103,7 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
 
 test("sorts the packs table from the keyboard through the header buttons", async ({ page }) => {
   await page.goto("/packs");
+  await settled(page);
   await page.getByRole("button", { name: /^Maker/ }).focus();
   for (let i = 0; i < 10; i++) {
     const text = await page.evaluate(() => document.activeElement?.textContent ?? "");
@@ -103,7 +115,7 @@ test("sorts the packs table from the keyboard through the header buttons", async
   await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
   await page.keyboard.press("Enter");
   await expect(page).toHaveURL(/sort=capacity&dir=asc/);
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  await settled(page);
   const capacities = (await column(page, 4)).map(mah);
   expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
 });
