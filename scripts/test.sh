@@ -56,6 +56,8 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
   export APP_URL="http://localhost:$E2E_PORT" SAGLINE_DEV_TOOLS=1
   $TSX scripts/migrate.ts
   $TSX db/seed/index.ts
+  # The data cache (tagged reads) outlives builds; with a fresh database its entries would be stale.
+  rm -rf .next/cache/fetch-cache
   if ! node_modules/.bin/next build >"$RUN_DIR/build-e2e.log" 2>&1; then
     tail -n 40 "$RUN_DIR/build-e2e.log" >&2; status=1; say "next build failed (log in .run/build-e2e.log)"
   else

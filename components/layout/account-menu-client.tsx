@@ -39,6 +39,11 @@ export function AccountMenu() {
   }
   return (
     <span className="flex items-center gap-1" data-testid="account-menu">
+      {me.role === "moderator" || me.role === "admin" ? (
+        <Link href="/review" className={linkClass}>
+          Review
+        </Link>
+      ) : null}
       {me.role === "admin" ? (
         <Link href="/admin/users" className={linkClass}>
           Admin

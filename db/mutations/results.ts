@@ -7,6 +7,7 @@ import { findResultByIdempotencyKey } from "@/db/queries/submissions";
 import { mailOutbox, results, reviewEvents, type ReviewStatus } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import { createProposedPack, type PackProposal } from "./catalogue";
+import { computeAndStoreFlags } from "./review";
 
 /** The columns a submission or resubmission sets (method card, stored files, computed figures). */
 export type ResultFields = Omit<
@@ -48,6 +49,8 @@ export async function createSubmission(s: NewSubmission): Promise<{ resultId: nu
         .returning({ id: results.id });
       if (!row) throw new Error("result insert returned nothing");
       await tx.insert(reviewEvents).values({ resultId: row.id, actorId: s.contributorId, fromStatus: null, toStatus: "pending", note: "Submitted." });
+      // The automatic plausibility flags arrive with the result (same transaction), ready for the review queue.
+      await computeAndStoreFlags(row.id, tx);
       await queue(tx, s.receipt);
       return { resultId: row.id, created: true };
     });
@@ -87,5 +90,7 @@ export async function resubmitOwnResult(resultId: number, contributorId: string,
     await lockOwn(tx, resultId, contributorId, ["changes_requested"], "resubmit");
     await tx.update(results).set({ ...fields, status: "pending", updatedAt: new Date() }).where(eq(results.id, resultId));
     await tx.insert(reviewEvents).values({ resultId, actorId: contributorId, fromStatus: "changes_requested", toStatus: "pending", note });
+    // New method card or figures: the plausibility flags are computed again.
+    await computeAndStoreFlags(resultId, tx);
   });
 }

@@ -3,10 +3,11 @@ import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp } f
 import { users } from "./auth";
 import { packs } from "./catalogue";
 import { results } from "./results";
+import { flagReasons, flagStatuses } from "./enums";
 
-export const flagReasons = ["wrong-figures", "wrong-pack", "duplicate", "not-a-measurement", "unsafe", "other"] as const;
+export { flagReasons, flagStatuses };
+
 export const flagReason = pgEnum("flag_reason", flagReasons);
-export const flagStatuses = ["open", "kept", "corrected", "withdrawn"] as const;
 export const flagStatus = pgEnum("flag_status", flagStatuses);
 
 export const readerFlags = pgTable(

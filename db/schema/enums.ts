@@ -12,3 +12,9 @@ export type LoadMode = (typeof loadModes)[number];
 /** What the tester states they used to measure resistance (the computed method is in the figures). */
 export const resistanceMethods = ["iec-61960-two-level", "dc-step", "ac-1khz", "charger-readout"] as const;
 export type ResistanceMethod = (typeof resistanceMethods)[number];
+
+/** Why a reader flags a published result, and how a moderator resolves it. */
+export const flagReasons = ["wrong-figures", "wrong-pack", "duplicate", "not-a-measurement", "unsafe", "other"] as const;
+export type FlagReason = (typeof flagReasons)[number];
+export const flagStatuses = ["open", "kept", "corrected", "withdrawn"] as const;
+export type FlagStatus = (typeof flagStatuses)[number];

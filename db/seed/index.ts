@@ -1,7 +1,7 @@
 // npm run db:seed — load the demo scenario. Idempotent: rows are matched on their natural keys
 // (e-mail, slug, seeded idempotency key), so running it twice changes nothing.
 // `--if-empty` skips when the catalogue already has makers (used by npm start).
-import { count } from "drizzle-orm";
+import { count, eq } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import { parseEnv } from "@/lib/env";
@@ -9,6 +9,7 @@ import * as schema from "@/db/schema";
 import { buildPacks, demoMakers, demoUsers } from "./scenario";
 import { seedResults } from "./results";
 import { seedCharts } from "./charts";
+import { computeAndStoreFlags } from "@/db/mutations/review";
 
 export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?: (s: string) => void } = {}) {
   const log = opts.log ?? (() => {});
@@ -42,6 +43,9 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
       )
       .onConflictDoNothing();
     const made = await seedResults(db, packs, log);
+    // Pending results carry their automatic plausibility flags, as they would after a real submission.
+    const pending = await db.select({ id: schema.results.id }).from(schema.results).where(eq(schema.results.status, "pending"));
+    for (const { id } of pending) await computeAndStoreFlags(id, db);
     const charts = await seedCharts(db);
     log(`sagline: demo scenario seeded (${demoMakers.length} makers, ${packs.length} packs, ${made} results, ${charts} charts)`);
   } finally {

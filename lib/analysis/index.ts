@@ -21,5 +21,9 @@ export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summa
 export { retentionTrend, END_OF_LIFE_RETAINED, type RetentionTrend } from "./cycles";
 export { lttb } from "./downsample";
 export { inferCells } from "./cells";
+export {
+  plausibilityFlags, groupModifiedZ, plausibilityCodes, plausibilityLabels,
+  type PlausibilityCode, type PlausibilityInput,
+} from "./plausibility";
 export { toPublicFigures, type LogPreview, type PublicFigures } from "./public-figures";
 export { checkAgainstCard, warningsBesideChecks, type CardCheck, type StatedCard } from "./card-checks";

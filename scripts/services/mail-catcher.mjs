@@ -48,9 +48,15 @@ const server = new SMTPServer({
   },
 });
 
+let listening = false;
 server.on("error", (err) => {
   console.error(`mail catcher: ${err.message}`);
-  process.exit(1);
+  // Before listening (port taken) the catcher cannot work; afterwards a client's dropped connection
+  // (ECONNRESET) is that client's problem and must not take the catcher down for everyone else.
+  if (!listening) process.exit(1);
 });
-server.listen(port, "127.0.0.1", () => console.log(`mail catcher listening on 127.0.0.1:${port}, storing in ${dir}`));
+server.listen(port, "127.0.0.1", () => {
+  listening = true;
+  console.log(`mail catcher listening on 127.0.0.1:${port}, storing in ${dir}`);
+});
 for (const sig of ["SIGTERM", "SIGINT"]) process.on(sig, () => server.close(() => process.exit(0)));

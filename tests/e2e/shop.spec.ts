@@ -5,12 +5,24 @@ import { expect, test, type Page } from "@playwright/test";
 const rows = (page: Page) => page.getByTestId("packs-table").locator("tbody tr");
 const column = async (page: Page, index: number) => (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
 const mah = (t: string) => Number(t.replace(/,/g, ""));
+/** Waits until the table stops changing: the server-rendered rows are replaced once the client has hydrated. */
+async function settled(page: Page) {
+  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  let prev = "";
+  await expect.poll(async () => {
+    const now = (await rows(page).allTextContents()).join("|");
+    const same = now === prev && now !== "";
+    prev = now;
+    return same;
+  }, { intervals: [700], timeout: 20_000 }).toBe(true);
+}
 
 test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
   await page.goto("/packs?cells=4&sort=capacity&dir=desc");
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
   expect(await rows(page).count()).toBeGreaterThan(0);
-  expect(new Set(await column(page, 3))).toEqual(new Set(["4S"]));
+  // The first page is server-rendered; the filtered rows arrive after hydration, so poll rather than read once.
+  await expect.poll(async () => [...new Set(await column(page, 3))]).toEqual(["4S"]);
   const capacities = (await column(page, 4)).map(mah);
   expect(capacities).toEqual([...capacities].sort((a, b) => b - a));
   await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
@@ -18,7 +30,7 @@ test("filters the packs table through the URL, and the back button restores the 
   await page.getByRole("combobox", { name: "Connector" }).selectOption("XT60");
   await expect(page).toHaveURL(/connector=XT60/);
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  expect(new Set(await column(page, 7))).toEqual(new Set(["XT60"]));
+  await expect.poll(async () => [...new Set(await column(page, 7))]).toEqual(["XT60"]);
   await page.goBack();
   await expect(page).not.toHaveURL(/connector=/);
   await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
@@ -26,17 +38,20 @@ test("filters the packs table through the URL, and the back button restores the 
 
 test("finds packs with a misspelt maker name", async ({ page }) => {
   await page.goto("/packs");
-  await page.getByRole("searchbox", { name: "Search maker and model" }).fill("brakwater");
-  await expect(page).toHaveURL(/q=brakwater/);
+  // Typing before the table has hydrated is lost on a busy machine: retry until the URL follows.
+  const box = page.getByRole("searchbox", { name: "Search maker and model" });
+  await expect(async () => {
+    await box.fill("");
+    await box.fill("brakwater");
+    await expect(page).toHaveURL(/q=brakwater/, { timeout: 2000 });
+  }).toPass({ timeout: 20_000 });
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  const makers = await column(page, 1);
-  expect(makers.length).toBeGreaterThan(0);
-  expect(new Set(makers)).toEqual(new Set(["Brackwater Power"]));
+  await expect.poll(async () => [...new Set(await column(page, 1))]).toEqual(["Brackwater Power"]);
 });
 
 test("opens a pack from the table and reads its figures by group", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new&sort=labelRatio&dir=desc");
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  await settled(page);
   const link = rows(page).first().locator("td:nth-child(2) a");
   const model = (await link.textContent())?.trim() ?? "";
   await link.click();
@@ -88,6 +103,7 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
 
 test("sorts the packs table from the keyboard through the header buttons", async ({ page }) => {
   await page.goto("/packs");
+  await settled(page);
   await page.getByRole("button", { name: /^Maker/ }).focus();
   for (let i = 0; i < 10; i++) {
     const text = await page.evaluate(() => document.activeElement?.textContent ?? "");
@@ -99,7 +115,7 @@ test("sorts the packs table from the keyboard through the header buttons", async
   await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
   await page.keyboard.press("Enter");
   await expect(page).toHaveURL(/sort=capacity&dir=asc/);
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  await settled(page);
   const capacities = (await column(page, 4)).map(mah);
   expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
 });

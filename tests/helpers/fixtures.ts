@@ -2,7 +2,7 @@
 // Every result's group key is computed from its method card, as the submission flow does.
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results, reviewEvents, users } from "@/db/schema";
+import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
 import { groupKey, type CurvePoint, type Figures } from "@/lib/analysis";
 
 let seq = 0;
@@ -78,6 +78,7 @@ export async function makeResult(pack: { id: number; ratedCapacityMah: number; l
 
 /** Removes every result, pack and maker, so each test file starts from an empty catalogue. */
 export async function emptyCatalogue() {
+  await db.delete(readerFlags).where(sql`true`);
   await db.delete(reviewEvents).where(sql`true`);
   await db.delete(results).where(sql`true`);
   await db.delete(packs).where(sql`true`);

@@ -3,13 +3,13 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LineChart } from "@/components/charts/line-chart";
+import { FlagResultForm } from "@/components/flag-result-form-client";
 import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { cachedResult } from "@/lib/public-data";
 import { FiguresList } from "./_components/figures-list";
-import { FlagSlot } from "./_components/flag-slot";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.
 export const revalidate = 3600;
@@ -40,10 +40,8 @@ export default async function ResultPage(props: Props) {
     <article className="space-y-8">
       <header className="space-y-2">
         <p className="muted text-sm"><Link href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</Link> · <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span></p>
-        <div className="flex flex-wrap items-start justify-between gap-3">
-          <h1>Result #{r.id}</h1>
-          <FlagSlot resultId={r.id} />
-        </div>
+        <h1>Result #{r.id}</h1>
+        <div className="max-w-xl"><FlagResultForm resultId={r.id} /></div>
         {r.status === "disputed" ? (
           <p className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn" role="note">
             Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible, marked.

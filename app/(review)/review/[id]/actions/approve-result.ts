@@ -1,0 +1,9 @@
+"use server";
+// Approve a pending result: it is published, its pages are revalidated, the contributor and the pack's watchers are told.
+import { decideResult } from "@/db/mutations/review";
+import { authedAction } from "@/lib/authed-action";
+import { approveResultSchema } from "@/lib/validations/review";
+
+export const approveResult = authedAction("result.review", approveResultSchema, (input, user) =>
+  decideResult(user.id, input.resultId, { kind: "approve", note: input.note }),
+);

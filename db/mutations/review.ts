@@ -1,0 +1,130 @@
+// Moderation writes. Each status change and its review_events row share one transaction, with the result
+// row locked (SELECT … FOR UPDATE) and its status re-checked, so two moderators can never both decide the
+// same result. Revalidation and e-mail run only after the commit (db/mutations/review-effects.ts).
+import "server-only";
+import { and, eq, ne } from "drizzle-orm";
+import { db, type Executor, type Transaction } from "@/db";
+import { getPlausibilityInput } from "@/db/queries/review";
+import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
+import type { PlausibilityFlag } from "@/db/schema/results";
+import { plausibilityFlags } from "@/lib/analysis/plausibility";
+import { AppError } from "@/lib/errors";
+import { packTitle } from "@/lib/format";
+import { rejectReasonLabels, type FlagResolution, type RejectReason } from "@/lib/validations/review";
+import { notifyDecision, revalidateResult, type ResultContext } from "./review-effects";
+
+/**
+ * Computes the automatic plausibility flags of a result and stores them on it (results.flags). The
+ * submission flow calls this right after inserting a result; it is safe to call again.
+ */
+export async function computeAndStoreFlags(resultId: number, exec: Executor = db): Promise<PlausibilityFlag[]> {
+  const input = await getPlausibilityInput(resultId, exec);
+  if (!input) throw new AppError("not_found", "That result does not exist.");
+  const mine = plausibilityFlags(input);
+  // The submission's own checks against the method card (and its duplicate check) stay; a code raised here
+  // replaces the same code already stored, so running this again is safe. The card check
+  // "cutoff-not-reached" says the same as our cutoff-mismatch.
+  const [row] = await exec.select({ flags: results.flags }).from(results).where(eq(results.id, resultId));
+  const ours = new Set<string>(mine.map((f) => f.code));
+  if (mine.some((f) => f.code === "cutoff-mismatch")) ours.add("cutoff-not-reached");
+  const flags = [...(row?.flags ?? []).filter((f) => !ours.has(f.code)), ...mine];
+  await exec.update(results).set({ flags }).where(eq(results.id, resultId));
+  return flags;
+}
+
+/** Locks a result and returns what the decision and its after-effects need. */
+export async function lockResult(tx: Transaction, resultId: number): Promise<ResultContext & { status: ReviewStatus }> {
+  const [row] = await tx
+    .select({
+      status: results.status, packId: results.packId, groupKey: results.groupKey, contributorId: results.contributorId,
+      packSlug: packs.slug, model: packs.model, makerSlug: makers.slug, makerName: makers.name, contributorEmail: users.email,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .innerJoin(users, eq(users.id, results.contributorId))
+    .where(eq(results.id, resultId))
+    .for("update", { of: results });
+  if (!row) throw new AppError("not_found", "That result does not exist.");
+  return { ...row, resultId, packTitle: packTitle({ makerName: row.makerName, model: row.model }) };
+}
+
+export async function transition(
+  tx: Transaction,
+  p: { resultId: number; actorId: string | null; from: ReviewStatus; to: ReviewStatus; reason?: string | null; note?: string | null; publish?: boolean },
+): Promise<void> {
+  const now = new Date();
+  const updated = await tx
+    .update(results)
+    .set({ status: p.to, updatedAt: now, ...(p.publish ? { publishedAt: now } : {}) })
+    .where(and(eq(results.id, p.resultId), eq(results.status, p.from)))
+    .returning({ id: results.id });
+  if (updated.length !== 1) throw new AppError("conflict", "This result changed while you were looking at it. Reload and try again.");
+  await tx.insert(reviewEvents).values({
+    resultId: p.resultId, actorId: p.actorId, fromStatus: p.from, toStatus: p.to, reason: p.reason ?? null, note: p.note ?? null, createdAt: now,
+  });
+}
+
+export type Decision =
+  | { kind: "approve"; note: string | null }
+  | { kind: "reject"; reason: RejectReason; note: string | null }
+  | { kind: "request-changes"; note: string };
+
+const decisionStatus = { approve: "approved", reject: "rejected", "request-changes": "changes_requested" } as const;
+
+/** Approve, reject or request changes on a pending result. A moderator cannot decide their own result. */
+export async function decideResult(actorId: string, resultId: number, decision: Decision): Promise<{ resultId: number; status: ReviewStatus }> {
+  const to = decisionStatus[decision.kind];
+  const reason = decision.kind === "reject" ? decision.reason : null;
+  const ctx = await db.transaction(async (tx) => {
+    const c = await lockResult(tx, resultId);
+    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
+    if (c.status !== "pending") throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
+    await transition(tx, { resultId, actorId, from: "pending", to, reason, note: decision.note, publish: to === "approved" });
+    return c;
+  });
+  if (to === "approved") revalidateResult(ctx);
+  const said = [reason ? `Reason: ${rejectReasonLabels[decision.kind === "reject" ? decision.reason : "other"]}.` : null, decision.note].filter(Boolean).join(" ");
+  await notifyDecision(ctx, to, said || null);
+  return { resultId, status: to };
+}
+
+const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved", corrected: "approved", withdrawn: "withdrawn" };
+
+/**
+ * Resolves an open reader flag: keep the result, correct it (the note says what), or withdraw it. The result
+ * stays disputed while other flags are still open, unless it is withdrawn, which closes them all. A withdrawn
+ * result is never deleted: it and its history stay in the audit log.
+ */
+export async function resolveReaderFlag(
+  actorId: string,
+  flagId: number,
+  resolution: FlagResolution,
+  note: string | null,
+): Promise<{ resultId: number; status: ReviewStatus }> {
+  const { ctx, status } = await db.transaction(async (tx) => {
+    const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
+    if (!flag) throw new AppError("not_found", "That flag does not exist.");
+    const c = await lockResult(tx, flag.resultId);
+    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot resolve a flag on your own result; another moderator has to.");
+    if (flag.status !== "open") throw new AppError("conflict", "This flag has already been resolved.");
+    const now = new Date();
+    const close = { status: resolution, resolvedById: actorId, resolutionNote: note, resolvedAt: now } as const;
+    await tx.update(readerFlags).set(close).where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
+    if (resolution === "withdrawn") {
+      await tx.update(readerFlags).set(close).where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)));
+    }
+    const stillOpen = await tx
+      .select({ id: readerFlags.id })
+      .from(readerFlags)
+      .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open")));
+    const to = resolutionStatus[resolution];
+    if (c.status === "disputed" && stillOpen.length === 0) {
+      await transition(tx, { resultId: flag.resultId, actorId, from: "disputed", to, reason: `flag-${resolution}`, note });
+      return { ctx: c, status: to };
+    }
+    return { ctx: c, status: c.status };
+  });
+  revalidateResult(ctx);
+  return { resultId: ctx.resultId, status };
+}

@@ -1,0 +1,207 @@
+// Reads for moderation: what the plausibility check needs, the review queue with its filters and counts,
+// one result's review page (method card, figures, contributor history, the pack's group median before and
+// after approval) and the review history shown publicly.
+import "server-only";
+import { and, asc, count, desc, eq, inArray, ne, sql, type SQL } from "drizzle-orm";
+import { db, type Executor } from "@/db";
+import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
+import { summarise, type PlausibilityInput } from "@/lib/analysis";
+import type { PlausibilityFlag } from "@/db/schema/results";
+import type { ReviewQueueFilter } from "@/lib/validations/review";
+
+const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !== null && Number.isFinite(x));
+
+/** Everything lib/analysis/plausibility needs about one result, gathered from the database. */
+export async function getPlausibilityInput(resultId: number, exec: Executor = db): Promise<PlausibilityInput | null> {
+  const [r] = await exec
+    .select({
+      figures: results.figures, ambientTemperatureC: results.ambientTemperatureC, cutoffVPerCell: results.cutoffVPerCell,
+      groupKey: results.groupKey, logSha256: results.logSha256,
+      cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, packStatus: packs.status, makerStatus: makers.status,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(eq(results.id, resultId));
+  if (!r) return null;
+  const group = await exec
+    .select({ labelRatio: results.labelRatio, sagLimitedC: results.sagLimitedC, capacityRatio: results.capacityRatio })
+    .from(results)
+    .where(and(eq(results.groupKey, r.groupKey), eq(results.status, "approved"), ne(results.id, resultId)));
+  const dupes = await exec
+    .select({ id: results.id })
+    .from(results)
+    .where(and(eq(results.logSha256, r.logSha256), ne(results.id, resultId)))
+    .orderBy(asc(results.id));
+  return {
+    figures: r.figures,
+    method: { ambientTemperatureC: r.ambientTemperatureC, cutoffVPerCell: r.cutoffVPerCell },
+    pack: { cellsInSeries: r.cellsInSeries, ratedCapacityMah: r.ratedCapacityMah },
+    group: {
+      labelRatios: finiteOnly(group.map((g) => g.labelRatio)),
+      sagLimitedCs: finiteOnly(group.map((g) => g.sagLimitedC)),
+      capacityRatios: finiteOnly(group.map((g) => g.capacityRatio)),
+    },
+    duplicateLogResultIds: dupes.map((d) => d.id),
+    makerProposed: r.makerStatus === "proposed",
+    packProposed: r.packStatus === "proposed",
+  };
+}
+
+export type QueueItem = {
+  id: number; packSlug: string; packModel: string; makerName: string; makerSlug: string; groupKey: string;
+  contributorName: string; submittedAt: Date; flags: PlausibilityFlag[]; capacityMah: number | null; labelRatio: number | null;
+};
+export type ReviewQueue = {
+  items: QueueItem[];
+  total: number;
+  counts: { flags: Record<string, number>; unflagged: number; makers: { slug: string; name: string; n: number }[]; groups: { key: string; n: number }[] };
+};
+
+/** Pending results, oldest first, filtered; counts are over all pending results so filters show what they hide. */
+export async function listReviewQueue(filter: ReviewQueueFilter = {}, limit = 200): Promise<ReviewQueue> {
+  const pending = eq(results.status, "pending");
+  const where: SQL[] = [pending];
+  if (filter.maker) where.push(eq(makers.slug, filter.maker));
+  if (filter.group) where.push(eq(results.groupKey, filter.group));
+  if (filter.flag === "none") where.push(sql`jsonb_array_length(${results.flags}) = 0`);
+  else if (filter.flag) where.push(sql`${results.flags} @> ${JSON.stringify([{ code: filter.flag }])}::jsonb`);
+  const items = await db
+    .select({
+      id: results.id, packSlug: packs.slug, packModel: packs.model, makerName: makers.name, makerSlug: makers.slug,
+      groupKey: results.groupKey, displayName: users.displayName, email: users.email, submittedAt: results.submittedAt,
+      flags: results.flags, capacityMah: results.capacityMah, labelRatio: results.labelRatio,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .innerJoin(users, eq(users.id, results.contributorId))
+    .where(and(...where))
+    .orderBy(asc(results.submittedAt), asc(results.id))
+    .limit(limit);
+  const all = await db
+    .select({ flags: results.flags, makerSlug: makers.slug, makerName: makers.name, groupKey: results.groupKey })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(pending);
+  const flags: Record<string, number> = {};
+  const makerCounts = new Map<string, { slug: string; name: string; n: number }>();
+  const groupCounts = new Map<string, number>();
+  let unflagged = 0;
+  for (const r of all) {
+    if (r.flags.length === 0) unflagged++;
+    for (const code of new Set(r.flags.map((f) => f.code))) flags[code] = (flags[code] ?? 0) + 1;
+    const m = makerCounts.get(r.makerSlug) ?? { slug: r.makerSlug, name: r.makerName, n: 0 };
+    m.n++;
+    makerCounts.set(r.makerSlug, m);
+    groupCounts.set(r.groupKey, (groupCounts.get(r.groupKey) ?? 0) + 1);
+  }
+  return {
+    items: items.map(({ displayName, email, ...i }) => ({ ...i, contributorName: displayName?.trim() || email || "unknown" })),
+    total: all.length,
+    counts: {
+      flags,
+      unflagged,
+      makers: [...makerCounts.values()].sort((a, b) => a.name.localeCompare(b.name)),
+      groups: [...groupCounts.entries()].map(([key, n]) => ({ key, n })).sort((a, b) => b.n - a.n || a.key.localeCompare(b.key)),
+    },
+  };
+}
+
+export type HistoryEvent = {
+  id: number; fromStatus: ReviewStatus | null; toStatus: ReviewStatus; reason: string | null; note: string | null;
+  createdAt: Date; actorRole: "contributor" | "moderator" | "admin" | "system"; actorName: string | null;
+};
+
+/** The full review history of a result, oldest first. Actor names are for moderators; pages for the public show the role. */
+export async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
+  const rows = await db
+    .select({
+      id: reviewEvents.id, fromStatus: reviewEvents.fromStatus, toStatus: reviewEvents.toStatus, reason: reviewEvents.reason,
+      note: reviewEvents.note, createdAt: reviewEvents.createdAt, role: users.role, displayName: users.displayName, email: users.email,
+    })
+    .from(reviewEvents)
+    .leftJoin(users, eq(users.id, reviewEvents.actorId))
+    .where(eq(reviewEvents.resultId, resultId))
+    .orderBy(asc(reviewEvents.createdAt), asc(reviewEvents.id));
+  return rows.map(({ role, displayName, email, ...e }) => ({
+    ...e,
+    actorRole: role ?? "system",
+    actorName: role ? displayName?.trim() || email || null : null,
+  }));
+}
+
+export type GroupMedians = { n: number; capacityMah: number | null; labelRatio: number | null; sagLimitedC: number | null; dcResistanceMohm: number | null };
+
+function medians(rows: { capacityMah: number | null; labelRatio: number | null; sagLimitedC: number | null; dcResistanceMohm: number | null }[]): GroupMedians {
+  const m = (xs: (number | null)[]) => summarise(finiteOnly(xs))?.median ?? null;
+  return {
+    n: rows.length,
+    capacityMah: m(rows.map((r) => r.capacityMah)),
+    labelRatio: m(rows.map((r) => r.labelRatio)),
+    sagLimitedC: m(rows.map((r) => r.sagLimitedC)),
+    dcResistanceMohm: m(rows.map((r) => r.dcResistanceMohm)),
+  };
+}
+
+export async function getReviewDetail(resultId: number) {
+  const [row] = await db
+    .select({ result: results, pack: packs, makerName: makers.name, makerSlug: makers.slug, makerStatus: makers.status, contributor: { id: users.id, displayName: users.displayName, email: users.email } })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .innerJoin(users, eq(users.id, results.contributorId))
+    .where(eq(results.id, resultId));
+  if (!row) return null;
+  const r = row.result;
+  const figureCols = { capacityMah: results.capacityMah, labelRatio: results.labelRatio, sagLimitedC: results.sagLimitedC, dcResistanceMohm: results.dcResistanceMohm };
+  const groupRows = await db
+    .select(figureCols)
+    .from(results)
+    .where(and(eq(results.packId, r.packId), eq(results.groupKey, r.groupKey), inArray(results.status, ["approved", "disputed"]), ne(results.id, r.id)));
+  const history = await db
+    .select({ status: results.status, n: count() })
+    .from(results)
+    .where(and(eq(results.contributorId, r.contributorId), ne(results.id, r.id)))
+    .groupBy(results.status);
+  const recent = await db
+    .select({ id: results.id, status: results.status, packModel: packs.model, makerName: makers.name, submittedAt: results.submittedAt })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(and(eq(results.contributorId, r.contributorId), ne(results.id, r.id)))
+    .orderBy(desc(results.submittedAt))
+    .limit(8);
+  const flags = await db.select().from(readerFlags).where(eq(readerFlags.resultId, r.id)).orderBy(asc(readerFlags.createdAt));
+  const self = { capacityMah: r.capacityMah, labelRatio: r.labelRatio, sagLimitedC: r.sagLimitedC, dcResistanceMohm: r.dcResistanceMohm };
+  return {
+    ...row,
+    groupNow: medians(groupRows),
+    groupAfterApproval: medians([...groupRows, self]),
+    contributorHistory: { byStatus: Object.fromEntries(history.map((h) => [h.status, h.n])) as Partial<Record<ReviewStatus, number>>, recent },
+    events: await getReviewHistory(r.id),
+    readerFlags: flags,
+  };
+}
+export type ReviewDetail = NonNullable<Awaited<ReturnType<typeof getReviewDetail>>>;
+
+export type OpenReaderFlag = {
+  id: number; resultId: number; reason: string; note: string | null; createdAt: Date; resultStatus: ReviewStatus;
+  packSlug: string; packModel: string; makerName: string; contributorId: string;
+};
+
+export async function listOpenReaderFlags(limit = 200): Promise<OpenReaderFlag[]> {
+  return db
+    .select({
+      id: readerFlags.id, resultId: readerFlags.resultId, reason: readerFlags.reason, note: readerFlags.note, createdAt: readerFlags.createdAt,
+      resultStatus: results.status, packSlug: packs.slug, packModel: packs.model, makerName: makers.name, contributorId: results.contributorId,
+    })
+    .from(readerFlags)
+    .innerJoin(results, eq(results.id, readerFlags.resultId))
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(eq(readerFlags.status, "open"))
+    .orderBy(asc(readerFlags.createdAt), asc(readerFlags.id))
+    .limit(limit);
+}

@@ -1,0 +1,86 @@
+import { expect, test, type Page } from "@playwright/test";
+import { firstLink, newestMailFor } from "../helpers/mail";
+
+// A moderator signs in with an e-mail link, approves one flagged result and rejects another, and the
+// approved result appears on the public pack page (revalidated by tag, no rebuild).
+const MODERATOR = "moderator@sagline.localhost";
+
+async function signIn(page: Page, email: string) {
+  await page.goto("/sign-in?callbackUrl=%2Freview");
+  const before = Date.now();
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByRole("button", { name: /sign-in link|send/i }).click();
+  await expect(page).toHaveURL(/check-email/);
+  let link = "";
+  await expect.poll(async () => {
+    const m = await newestMailFor(email, 10_000);
+    if (new Date(m.receivedAt).getTime() < before - 1000) return "";
+    link = firstLink(m.text);
+    return link;
+  }, { timeout: 15_000 }).not.toBe("");
+  await page.goto(link);
+  await expect(page).toHaveURL(/\/review$/);
+}
+
+test("a moderator approves one flagged result, rejects another, and the approved one is published", async ({ page }) => {
+  await signIn(page, MODERATOR);
+  await expect(page.getByRole("heading", { level: 1, name: "Review queue" })).toBeVisible();
+
+  const flagged = page.getByTestId("queue-row").filter({ has: page.getByRole("list", { name: "Plausibility flags" }) });
+  expect(await flagged.count()).toBeGreaterThanOrEqual(2);
+  const approveId = await flagged.nth(0).getAttribute("data-result-id");
+  const rejectId = await flagged.nth(1).getAttribute("data-result-id");
+
+  // Approve the first flagged result, having looked at its pack page first (so a cached copy exists).
+  await page.goto(`/review/${approveId}`);
+  await expect(page.getByTestId("flag-list")).toBeVisible();
+  const packHref = await page.getByTestId("pack-link").getAttribute("href");
+  expect(packHref).toMatch(/^\/packs\//);
+  await page.goto(packHref ?? "/");
+  await expect(page.getByRole("link", { name: `Result #${approveId}`, exact: true })).toHaveCount(0);
+  await page.goto(`/review/${approveId}`);
+  await page.getByLabel("Note (optional, sent to the contributor)").fill("Checked against the log.");
+  await page.getByRole("button", { name: "Approve and publish" }).click();
+  await expect(page.getByTestId("decision-done")).toContainText(/approved/i);
+  await expect(page.getByTestId("result-status")).toHaveText("Approved");
+
+  // Reject the second with a reason from the list.
+  await page.goto(`/review/${rejectId}`);
+  await page.getByLabel("Reason").selectOption("wrong-data");
+  await page.getByLabel("Note (required for “other”)").fill("The current channel reads twice the load.");
+  await page.getByRole("button", { name: "Reject" }).click();
+  await expect(page.getByTestId("decision-done")).toContainText(/rejected/i);
+  await expect(page.getByTestId("result-status")).toHaveText("Rejected");
+  await expect(page.getByTestId("review-history")).toContainText("Wrong data");
+
+  // Both have left the queue.
+  await page.goto("/review");
+  await expect(page.locator(`[data-result-id="${approveId}"]`)).toHaveCount(0);
+  await expect(page.locator(`[data-result-id="${rejectId}"]`)).toHaveCount(0);
+
+  // The approved result is on the public pack page.
+  await page.goto(packHref ?? "/");
+  await expect(page.getByTestId("pack-results").getByRole("link", { name: `Result #${approveId}`, exact: true })).toBeVisible();
+});
+
+test("a reader flags a published result and everyone sees it as disputed", async ({ page }) => {
+  await page.goto("/");
+  const href = (await page.locator('main a[href^="/results/"]').first().getAttribute("href")) ?? "";
+  expect(href).toMatch(/^\/results\/\d+$/);
+  await page.goto(href);
+  await expect(page.getByText("Disputed: a reader flagged this result")).toHaveCount(0);
+  await page.getByRole("button", { name: "Flag this result" }).click();
+  await page.getByLabel("What is wrong?").selectOption("wrong-figures");
+  await page.getByLabel("Note for the moderators (optional)").fill("The capacity is above the label.");
+  await page.getByRole("button", { name: "Send flag" }).click();
+  await expect(page.getByText("The result now shows as disputed")).toBeVisible();
+  await page.reload();
+  await expect(page.getByText("Disputed: a reader flagged this result")).toBeVisible();
+});
+
+test("a contributor opening the review queue gets the 403 page", async ({ page }) => {
+  await signIn(page, "ridgeline@sagline.localhost");
+  const res = await page.goto("/review");
+  expect(res?.status()).toBe(403);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("This page is not open to your role");
+});
