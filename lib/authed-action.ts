@@ -27,7 +27,7 @@ export function authedAction<S extends z.ZodType, T>(
   schema: S,
   fn: (input: z.infer<S>, user: SessionUser) => Promise<T>,
 ) {
-  return async (_prev: ActionResult<T> | null | undefined, payload: FormData | z.input<S>): Promise<ActionResult<T>> => {
+  const action = async (_prev: ActionResult<T> | null | undefined, payload: FormData | z.input<S>): Promise<ActionResult<T>> => {
     try {
       const user = await requireUser(permission);
       const raw = payload instanceof FormData ? formDataToObject(payload) : payload;
@@ -37,4 +37,6 @@ export function authedAction<S extends z.ZodType, T>(
       return actionError(err);
     }
   };
+  // The permission travels with the action so one test can check every action against the table.
+  return Object.assign(action, { permission });
 }

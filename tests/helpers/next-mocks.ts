@@ -39,6 +39,8 @@ export const nextCache = {
   revalidateTag: (tag: string) => {
     requestState.revalidated.push(`tag:${tag}`);
   },
+  // No cache outside Next.js: the wrapped query runs every time.
+  unstable_cache: <A extends unknown[], R>(fn: (...args: A) => Promise<R>) => fn,
 };
 
 /** Thrown by redirect() from next/navigation; its digest carries the target. */
