@@ -55,7 +55,9 @@ async function tabTo(page: Page, match: (f: Awaited<ReturnType<typeof focused>>)
 /** The focused element draws a visible focus indicator (an outline or a ring box-shadow). */
 async function expectVisibleFocus(page: Page) {
   const style = await page.evaluate(() => {
-    const el = document.activeElement as HTMLElement;
+    let el = document.activeElement as HTMLElement;
+    // A visually hidden control (such as a styled radio) shows its focus on its label.
+    if (el.getBoundingClientRect().width <= 1) el = el.closest("label") ?? el;
     const s = getComputedStyle(el);
     return { outline: s.outlineStyle !== "none" && parseFloat(s.outlineWidth) > 0, ring: s.boxShadow !== "none" };
   });
@@ -230,4 +232,108 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
   await page.keyboard.press("Enter");
   await expect(page).toHaveURL(new RegExp(`${href}$`));
   await expect(page.getByRole("heading", { level: 1 })).toContainText(model);
+});
+
+test("keyboard only: the first steps of /submit, from the pack search to the log upload", async ({ page }) => {
+  await signIn(page, `e2e-keys-${Date.now()}@sagline.localhost`);
+  await page.goto("/submit");
+  await page.evaluate(() => localStorage.clear());
+  await page.reload();
+  await expect(page.getByRole("group", { name: "Step 1 of 4: Pack" })).toBeEnabled();
+
+  // Step 1: Tab to the pack choice (the catalogue is chosen); arrow keys move between the two choices.
+  await page.locator("body").focus();
+  await tabTo(page, (f) => f.tag === "input" && f.type === "radio");
+  await expect(page.getByRole("radio", { name: "Choose from the catalogue" })).toBeFocused();
+  await expectVisibleFocus(page);
+  await page.keyboard.press("ArrowRight");
+  await expect(page.getByRole("radio", { name: "Propose a new pack" })).toBeChecked();
+  await expect(page.getByLabel("Model, as printed on the label")).toBeVisible();
+  await page.keyboard.press("ArrowLeft");
+  await expect(page.getByRole("radio", { name: "Choose from the catalogue" })).toBeChecked();
+
+  // The fuzzy search, a typo on purpose; Tab to the first hit and choose it with Enter.
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Search packs")).toBeFocused();
+  await expectVisibleFocus(page);
+  await page.keyboard.type("1300 4S Fellrunerr");
+  const firstHit = page.getByTestId("pack-hits").getByRole("button").first();
+  await expect(firstHit).toBeVisible();
+  await page.keyboard.press("Tab");
+  await expect(firstHit).toBeFocused();
+  await expectVisibleFocus(page);
+  await page.keyboard.press("Enter");
+  await expect(firstHit).toHaveAttribute("aria-pressed", "true");
+  await expect(page.getByTestId("chosen-pack")).toContainText("4S 1,300 mAh");
+
+  // On to "Next: Method card" (Back is disabled on the first step, so Tab skips it); Enter moves on.
+  await tabTo(page, (f) => f.tag === "button" && f.text === "Next: Method card");
+  await expectVisibleFocus(page);
+  await page.keyboard.press("Enter");
+  await expect(page.getByRole("group", { name: "Step 2 of 4: Method card" })).toBeVisible();
+  // Focus moves to the new step's first control, the bench profile (none yet for a new contributor).
+  await expect(page.getByLabel("Bench profile")).toBeFocused();
+  await expectVisibleFocus(page);
+
+  // Step 2: the method card, field by field with Tab; Shift+Tab goes back.
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Ambient temperature/)).toBeFocused();
+  await page.keyboard.type("21");
+  await page.keyboard.press("Shift+Tab");
+  await expect(page.getByLabel("Bench profile")).toBeFocused();
+  await page.keyboard.press("Tab");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Pack temperature at the start/)).toBeFocused();
+  await page.keyboard.type("20");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Load current/)).toBeFocused();
+  await page.keyboard.type("13");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Cut-off voltage/)).toBeFocused();
+  await page.keyboard.type("3.3");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Stop temperature/)).toBeFocused();
+  await page.keyboard.type("60");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Sample rate/)).toBeFocused();
+  await page.keyboard.type("1");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel(/^Cycles before this test/)).toBeFocused();
+  await expect(page.getByLabel(/^Cycles before this test/)).toHaveValue("0");
+  // Load mode starts at constant current; arrow keys change a closed select.
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Load mode")).toBeFocused();
+  await expect(page.getByLabel("Load mode")).toHaveValue("constant-current");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Resistance method")).toBeFocused();
+  await expectVisibleFocus(page);
+  await page.keyboard.press("ArrowDown");
+  await page.keyboard.press("ArrowDown");
+  await expect(page.getByLabel("Resistance method")).toHaveValue("dc-step");
+  // Past the date (its day, month and year parts are tab stops of their own) to the equipment.
+  await tabTo(page, (f) => f.id === "method-equipment", { max: 6 });
+  await page.keyboard.type("300 W electronic load, probe on the widest face");
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Notes (optional)")).toBeFocused();
+  await page.keyboard.type("Walked with the keyboard only.");
+  await page.keyboard.press("Tab");
+  await expect(page.getByRole("button", { name: "Back" })).toBeFocused();
+  await page.keyboard.press("Tab");
+  await expect(page.getByRole("button", { name: "Next: Log" })).toBeFocused();
+  await expectVisibleFocus(page);
+  await page.keyboard.press("Enter");
+
+  // Step 3: the upload step; focus lands on its file chooser, which shows its focus.
+  await expect(page.getByRole("group", { name: "Step 3 of 4: Log" })).toBeVisible();
+  await expect(page.getByTestId("log-file")).toBeFocused();
+  await expectVisibleFocus(page);
+  // What was typed is in the draft: going back shows the method card as entered.
+  await tabTo(page, (f) => f.tag === "button" && f.text === "Back");
+  await page.keyboard.press("Space");
+  await expect(page.getByRole("group", { name: "Step 2 of 4: Method card" })).toBeVisible();
+  await expect(page.getByLabel("Bench profile")).toBeFocused();
+  await expect(page.getByLabel(/^Ambient temperature/)).toHaveValue("21");
+  await expect(page.getByLabel(/^Load current/)).toHaveValue("13");
+  await expect(page.getByLabel("Resistance method")).toHaveValue("dc-step");
+  await expect(page.getByLabel(/^Equipment/)).toHaveValue("300 W electronic load, probe on the widest face");
 });
