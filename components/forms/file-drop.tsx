@@ -27,7 +27,7 @@ export function FileDrop({ accept, label, hint, onFile, disabled, error, name, t
           const file = e.dataTransfer.files[0];
           if (file && !disabled) onFile(file);
         }}
-        className={`flex cursor-pointer flex-col items-center gap-1 rounded-lg border-2 border-dashed px-4 py-8 text-center transition-colors ${
+        className={`flex cursor-pointer flex-col items-center gap-1 rounded-lg border-2 border-dashed px-4 py-8 text-center transition-colors has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-charge-500 ${
           over ? "border-cell-500 bg-cell-50 dark:bg-cell-700/20" : "border-ink/20 hover:border-cell-500 dark:border-night-line"
         } ${error ? "border-warn" : ""} ${disabled ? "cursor-not-allowed opacity-60" : ""}`}>
         <span className="font-medium">{label}</span>

@@ -40,7 +40,7 @@ export function PackStep({ form, packs, makers }: Props) {
     <div className="space-y-5">
       <div role="radiogroup" aria-label="Pack" className="flex flex-wrap gap-2">
         {(["existing", "new"] as const).map((m) => (
-          <label key={m} className={`cursor-pointer rounded-md border px-3 py-1.5 text-sm ${mode === m ? "border-cell-500 bg-cell-50 dark:bg-cell-700/20" : "border-ink/20 dark:border-night-line"}`}>
+          <label key={m} className={`cursor-pointer rounded-md border px-3 py-1.5 text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-charge-500 ${mode === m ? "border-cell-500 bg-cell-50 dark:bg-cell-700/20" : "border-ink/20 dark:border-night-line"}`}>
             <input type="radio" value={m} className="sr-only" {...register("pack.mode")} />
             {m === "existing" ? "Choose from the catalogue" : "Propose a new pack"}
           </label>

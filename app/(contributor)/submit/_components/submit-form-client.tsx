@@ -4,7 +4,7 @@
 // survives reloads; a server error lands on its field and the form goes back to that step.
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
-import { useCallback, useEffect, useMemo, useState, useTransition } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState, useTransition } from "react";
 import { useForm, type FieldPath } from "react-hook-form";
 import { Alert, buttonClass } from "@/components/ui/form";
 import type { LogPreview } from "@/lib/analysis";
@@ -72,6 +72,10 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
   const [done, setDone] = useState<{ resultId: number } | null>(null);
   const [pending, startTransition] = useTransition();
   const draft = useDraftStorage(storageKey);
+  // After Next/Back (or a step button) the new step's first control takes focus, so a keyboard user does
+  // not have to Shift+Tab back through the whole step from the Next button.
+  const stepBox = useRef<HTMLFieldSetElement>(null);
+  const focusStep = useRef(false);
   const known = useMemo(() => knownPaths(blank), [blank]);
   const isPath = (f: string): f is Path => known.has(f);
 
@@ -120,9 +124,16 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
         if (!(await trigger(STEP_FIELDS[s] ?? [], { shouldFocus: true }))) return setStep(s);
       }
     }
+    focusStep.current = to !== step;
     setStep(to);
     window.scrollTo({ top: 0, behavior: "smooth" });
   };
+
+  useEffect(() => {
+    if (!focusStep.current) return;
+    focusStep.current = false;
+    stepBox.current?.querySelector<HTMLElement>("input:checked, input:not([type=radio]):not([type=hidden]):not(:disabled), select:not(:disabled), textarea:not(:disabled), button:not(:disabled)")?.focus({ preventScroll: true });
+  }, [step]);
 
   const submit = () => {
     setFormError(null);
@@ -168,7 +179,7 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
       else void form.handleSubmit(submit, (errs) => setStep(Math.min(...Object.keys(errs).map(stepOf), STEPS.length - 1)))();
     }}>
       <StepList steps={STEPS} current={step} onGo={go} />
-      <fieldset className="card min-w-0 space-y-4" disabled={!restored}>
+      <fieldset ref={stepBox} className="card min-w-0 space-y-4" disabled={!restored}>
         <legend className="px-1 text-base font-semibold">{`Step ${step + 1} of ${STEPS.length}: ${STEPS[step]}`}</legend>
         {step === 0 && <PackStep form={form} packs={packs} makers={makers} />}
         {step === 1 && <MethodStep form={form} profiles={profiles} ratedMah={facts?.ratedMah ?? null} />}
