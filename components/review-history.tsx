@@ -1,18 +1,9 @@
 // The full review history of a result (every transition: who, when, from, to, reason, note). Public pages
 // show the actor's role; moderators also see names. Feed it getReviewHistory() from db/queries/review.ts.
 import type { HistoryEvent } from "@/db/queries/review";
-import { reviewStatusLabels } from "@/lib/review-status-labels";
-import { rejectReasonLabels } from "@/lib/validations/review";
+import { reviewReasonLabels as reasonWords, reviewStatusLabels } from "@/lib/review-status-labels";
 
 const when = (d: Date) => d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
-const reasonWords: Record<string, string> = {
-  ...rejectReasonLabels,
-  other: "Other",
-  "reader-flag": "Flagged by a reader",
-  "flag-kept": "Flag resolved: kept",
-  "flag-corrected": "Flag resolved: corrected",
-  "flag-withdrawn": "Flag resolved: withdrawn",
-};
 const roleWords = { contributor: "Contributor", moderator: "Moderator", admin: "Admin", system: "Reader or system" } as const;
 
 export function ReviewHistory({ events, showNames = false }: { events: HistoryEvent[]; showNames?: boolean }) {

@@ -1,4 +1,5 @@
 import type { ReviewStatus } from "@/db/schema/enums";
+import { rejectReasonLabels } from "@/lib/validations/review";
 
 export const reviewStatusLabels: Record<ReviewStatus, string> = {
   pending: "Pending review",
@@ -7,4 +8,15 @@ export const reviewStatusLabels: Record<ReviewStatus, string> = {
   rejected: "Rejected",
   withdrawn: "Withdrawn",
   disputed: "Disputed",
+};
+
+// Words for the reasons stored on review events (reject reasons, reader flags and their resolutions).
+
+export const reviewReasonLabels: Record<string, string> = {
+  ...rejectReasonLabels,
+  other: "Other",
+  "reader-flag": "Flagged by a reader",
+  "flag-kept": "Flag resolved: kept",
+  "flag-corrected": "Flag resolved: corrected",
+  "flag-withdrawn": "Flag resolved: withdrawn",
 };

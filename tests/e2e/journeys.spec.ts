@@ -143,7 +143,7 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
   await page.goto(`/results/${resultId}`);
   await expect(page.getByText("Disputed: a reader flagged this result")).toHaveCount(0);
   await expect(page.getByTestId("review-history")).toContainText("disputed → approved");
-  await expect(page.getByTestId("review-history")).toContainText("flag-kept");
+  await expect(page.getByTestId("review-history")).toContainText("Flag resolved: kept");
 });
 
 test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the licence note", async ({ page }) => {

@@ -8,6 +8,7 @@ import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { describeResultGroup } from "@/lib/pack-summary";
+import { reviewReasonLabels } from "@/lib/review-status-labels";
 import { cachedResult } from "@/lib/public-data";
 import { FiguresList } from "./_components/figures-list";
 
@@ -87,7 +88,7 @@ export default async function ResultPage(props: Props) {
             <li key={e.id} className="flex flex-wrap gap-x-2">
               <span className="num muted">{fmtDate(e.at)}</span>
               <span>{e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWords[e.from] ?? e.from} → ` : ""}<strong>{statusWords[e.to] ?? e.to}</strong></span>
-              {e.reason ? <span className="muted">({e.reason})</span> : null}
+              {e.reason ? <span className="muted">({reviewReasonLabels[e.reason] ?? e.reason})</span> : null}
               {e.note ? <span className="muted">— {e.note}</span> : null}
             </li>
           ))}
