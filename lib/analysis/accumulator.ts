@@ -14,6 +14,9 @@ export class SampleBatch {
   currentA = new Float64Array(0);
   temperatureC = new Float64Array(0);
   minCellVoltageV = new Float64Array(0);
+  /** Running charge after each sample, written by the accumulator for the curve. */
+  positiveChargeAs = new Float64Array(0);
+  negativeChargeAs = new Float64Array(0);
 
   reserve(size: number): void {
     if (this.timeS.length >= size) return;
@@ -23,6 +26,8 @@ export class SampleBatch {
     this.currentA = new Float64Array(n);
     this.temperatureC = new Float64Array(n);
     this.minCellVoltageV = new Float64Array(n);
+    this.positiveChargeAs = new Float64Array(n);
+    this.negativeChargeAs = new Float64Array(n);
   }
 }
 
@@ -73,13 +78,18 @@ export class Accumulator {
     this.curve = new CurveBuckets(curveBuckets);
   }
 
-  /** Adds batch[0..count). Times are already checked to be non-decreasing. */
+  /**
+   * Adds batch[0..count). Times are already checked to be non-decreasing. Per-sample calls take
+   * (batch, k), never numbers: V8 boxes every double passed to or returned from a call it does not
+   * inline, a heap allocation per argument per sample that showed up as most of the GC time.
+   */
   pushBatch(batch: SampleBatch, count: number): void {
     const T = batch.timeS;
     const V = batch.voltageV;
     const I = batch.currentA;
     const TEMP = batch.temperatureC;
-    const CELL = batch.minCellVoltageV;
+    const QP = batch.positiveChargeAs;
+    const QN = batch.negativeChargeAs;
     const thr = this.settings.loadThresholdA;
     const pos = this.positive;
     const neg = this.negative;
@@ -102,6 +112,9 @@ export class Accumulator {
     let stepScore = this.stepScore;
     let stepAbs = this.stepScoreAbs;
     let trend = this.trendScore;
+    // Kept in locals too: field reads and writes on every sample made V8 box doubles (allocations).
+    let temperatureSamples = this.temperatureSamples;
+    let watchFromC = this.watchFromC;
     for (let k = 0; k < count; k++) {
       const t = T[k] as number;
       const v = V[k] as number;
@@ -138,7 +151,7 @@ export class Accumulator {
           open.chargeAs += dq;
           open.energyWs += de;
           trend += sign * (v - lastV);
-          open.add(t, v, sign * i, temp, CELL[k] as number);
+          open.addAt(batch, k, sign);
         }
       } else {
         let dq = 0;
@@ -198,14 +211,20 @@ export class Accumulator {
           this.watchFromC = Number.NEGATIVE_INFINITY;
           open.chargeAs += dq;
           open.energyWs += de;
-          open.add(t, v, sign * i, temp, CELL[k] as number);
+          open.addAt(batch, k, sign);
         }
+        watchFromC = this.watchFromC; // a stretch opened or closed
       }
       if (temp === temp) {
-        this.temperatureSamples++;
-        if (temp >= this.watchFromC) this.watchTemperature(t, temp);
+        temperatureSamples++;
+        if (temp >= watchFromC) {
+          this.watchTemperature(t, temp);
+          watchFromC = this.watchFromC;
+        }
       }
-      curve.push(t, v, i, temp, qPos, qNeg);
+      QP[k] = qPos;
+      QN[k] = qNeg;
+      curve.pushAt(batch, k);
       samples++;
       lastT = t;
       lastV = v;
@@ -214,6 +233,7 @@ export class Accumulator {
       lastSign = sign;
     }
     this.samples = samples;
+    this.temperatureSamples = temperatureSamples;
     this.lastTimeS = lastT;
     this.lastVoltageV = lastV;
     this.lastCurrentA = lastI;

@@ -14,6 +14,16 @@ export type RawCurvePoint = {
   negativeChargeAs: number;
 };
 
+/** The columns pushAt reads: a sample batch with its running charges. */
+export type CurveColumns = {
+  timeS: Float64Array;
+  voltageV: Float64Array;
+  currentA: Float64Array;
+  temperatureC: Float64Array;
+  positiveChargeAs: Float64Array;
+  negativeChargeAs: Float64Array;
+};
+
 const FIELDS = 6;
 const SLOTS = 3; // first, min voltage, max voltage
 
@@ -33,6 +43,23 @@ export class CurveBuckets {
   }
 
   push(t: number, v: number, i: number, temp: number, qPos: number, qNeg: number): void {
+    const b = scratch;
+    b.timeS[0] = t;
+    b.voltageV[0] = v;
+    b.currentA[0] = i;
+    b.temperatureC[0] = temp;
+    b.positiveChargeAs[0] = qPos;
+    b.negativeChargeAs[0] = qNeg;
+    this.pushAt(b, 0);
+  }
+
+  /**
+   * Sample k of the columns. Runs once per sample: takes the columns, not numbers, so no double is
+   * boxed for the call; the rarely needed fields are read only when a slot is written.
+   */
+  pushAt(cols: CurveColumns, k: number): void {
+    const t = cols.timeS[k] as number;
+    const v = cols.voltageV[k] as number;
     let index = this.current;
     if (!(t < this.currentEndS)) {
       // Time only moves forward, so the bucket index changes rarely: divide only then.
@@ -49,10 +76,10 @@ export class CurveBuckets {
     const base = index * SLOTS * FIELDS;
     if (this.filled[index] === 0) {
       this.filled[index] = 1;
-      for (let s = 0; s < SLOTS; s++) write(d, base + s * FIELDS, t, v, i, temp, qPos, qNeg);
+      for (let s = 0; s < SLOTS; s++) write(d, base + s * FIELDS, cols, k);
     } else {
-      if (v < (d[base + FIELDS + 1] as number)) write(d, base + FIELDS, t, v, i, temp, qPos, qNeg);
-      if (v > (d[base + 2 * FIELDS + 1] as number)) write(d, base + 2 * FIELDS, t, v, i, temp, qPos, qNeg);
+      if (v < (d[base + FIELDS + 1] as number)) write(d, base + FIELDS, cols, k);
+      if (v > (d[base + 2 * FIELDS + 1] as number)) write(d, base + 2 * FIELDS, cols, k);
     }
   }
 
@@ -110,14 +137,24 @@ export class CurveBuckets {
   }
 }
 
-function write(d: Float64Array, at: number, t: number, v: number, i: number, temp: number, qPos: number, qNeg: number): void {
-  d[at] = t;
-  d[at + 1] = v;
-  d[at + 2] = i;
-  d[at + 3] = temp;
-  d[at + 4] = qPos;
-  d[at + 5] = qNeg;
+function write(d: Float64Array, at: number, cols: CurveColumns, k: number): void {
+  d[at] = cols.timeS[k] as number;
+  d[at + 1] = cols.voltageV[k] as number;
+  d[at + 2] = cols.currentA[k] as number;
+  d[at + 3] = cols.temperatureC[k] as number;
+  d[at + 4] = cols.positiveChargeAs[k] as number;
+  d[at + 5] = cols.negativeChargeAs[k] as number;
 }
+
+/** One-sample columns for push(), the entry point outside the batch loop. */
+const scratch: CurveColumns = {
+  timeS: new Float64Array(1),
+  voltageV: new Float64Array(1),
+  currentA: new Float64Array(1),
+  temperatureC: new Float64Array(1),
+  positiveChargeAs: new Float64Array(1),
+  negativeChargeAs: new Float64Array(1),
+};
 
 function read(d: Float64Array, at: number): RawCurvePoint {
   return {

@@ -4,6 +4,7 @@
  * samples go by, in constant memory, because which stretch is the longest is known only at
  * the end. Currents are in the stretch's own frame (always positive).
  */
+import type { SampleBatch } from "./accumulator";
 import { type TwoLevelReading, TwoLevelDetector } from "./resistance";
 
 export type StretchSettings = { holdDelayS: number; stopTemperatureC: number; loadThresholdA: number };
@@ -74,8 +75,27 @@ export class Stretch {
     return this.lastTimeS - this.onsetTimeS;
   }
 
-  /** A load sample of this stretch; `i` is positive in the stretch's frame. Runs once per sample. */
+  /** A load sample of this stretch; `i` is positive in the stretch's frame. */
   add(t: number, v: number, i: number, temp: number, minCellVoltageV: number): void {
+    const b = scratch;
+    b.timeS[0] = t;
+    b.voltageV[0] = v;
+    b.currentA[0] = i;
+    b.temperatureC[0] = temp;
+    b.minCellVoltageV[0] = minCellVoltageV;
+    this.addAt(b, 0, 1);
+  }
+
+  /**
+   * Sample k of a batch, its current times `sign` (into the stretch's frame). Runs once per load
+   * sample: takes the batch, not numbers, so no double is boxed for the call.
+   */
+  addAt(batch: SampleBatch, k: number, sign: number): void {
+    const t = batch.timeS[k] as number;
+    const v = batch.voltageV[k] as number;
+    const i = sign * (batch.currentA[k] as number);
+    const temp = batch.temperatureC[k] as number;
+    const minCellVoltageV = batch.minCellVoltageV[k] as number;
     this.samples++;
     this.lastTimeS = t;
     if (i > this.peakCurrentA) this.peakCurrentA = i;
@@ -167,6 +187,15 @@ export class Stretch {
     return Number.NaN;
   }
 }
+
+/** One-sample columns for add(), the entry point outside the batch loop (tests, single samples). */
+const scratch = {
+  timeS: new Float64Array(1),
+  voltageV: new Float64Array(1),
+  currentA: new Float64Array(1),
+  temperatureC: new Float64Array(1),
+  minCellVoltageV: new Float64Array(1),
+} as SampleBatch;
 
 function lerp(t0: number, y0: number, t1: number, y1: number, t: number): number {
   if (t1 === t0) return y1;

@@ -66,30 +66,25 @@ const POW10 = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12,
 export function parseField(text: string | undefined, decimalComma: boolean): number {
   if (text === undefined) return NaN;
   const n = text.length;
+  const sep = decimalComma ? 44 : 46;
   let i = 0;
   let c = text.charCodeAt(0);
   const negative = c === 45;
   if (negative || c === 43) i = 1;
   const start = i;
   let m = 0;
+  let point = -1;
+  // One loop for both sides of the separator: fewer branches and a smaller body, so V8 can
+  // inline it at the sample sink's call sites.
   for (; i < n; i++) {
-    c = text.charCodeAt(i) - 48;
-    if (c < 0 || c > 9) break;
-    m = m * 10 + c;
+    c = text.charCodeAt(i);
+    const d = c - 48;
+    if (d >= 0 && d <= 9) m = m * 10 + d;
+    else if (c === sep && point < 0) point = i;
+    else return parseSlow(text, decimalComma);
   }
-  const intDigits = i - start;
-  let decimals = 0;
-  if (i < n) {
-    if (text.charCodeAt(i) !== (decimalComma ? 44 : 46)) return parseSlow(text, decimalComma);
-    const point = i;
-    for (i++; i < n; i++) {
-      c = text.charCodeAt(i) - 48;
-      if (c < 0 || c > 9) return parseSlow(text, decimalComma);
-      m = m * 10 + c;
-    }
-    decimals = n - point - 1;
-  }
-  const digits = intDigits + decimals;
+  const decimals = point < 0 ? 0 : n - point - 1;
+  const digits = point < 0 ? n - start : n - start - 1;
   if (digits === 0 || digits > 15) return parseSlow(text, decimalComma);
   const value = decimals === 0 ? m : m / (POW10[decimals] as number);
   return negative ? -value : value;
