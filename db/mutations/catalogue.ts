@@ -4,6 +4,7 @@ import "server-only";
 import { eq, like, or, sql } from "drizzle-orm";
 import type { Executor } from "@/db";
 import { makers, packs } from "@/db/schema";
+import { slugify } from "@/lib/slug";
 
 export type PackProposal = {
   makerId: number | null;
@@ -17,16 +18,6 @@ export type PackProposal = {
   connector: string;
 };
 
-export function slugify(text: string): string {
-  const slug = text
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 80);
-  return slug || "unnamed";
-}
 
 /** The first free slug among base, base-2, base-3 … in a table's slug column. */
 async function freeSlug(tx: Executor, table: typeof makers | typeof packs, base: string): Promise<string> {

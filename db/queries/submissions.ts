@@ -31,15 +31,19 @@ const choiceColumns = {
   status: packs.status,
 };
 
+/** Packs a contributor may submit against: active ones, and their own proposals awaiting moderation. */
+const pickableBy = (userId: string) => or(eq(packs.status, "active"), and(eq(packs.status, "proposed"), eq(packs.proposedById, userId)));
+const toChoice = ({ status, ...r }: { status: string } & Omit<PackChoice, "proposed">): PackChoice => ({ ...r, proposed: status === "proposed" });
+
 /** Active packs, plus the ones this contributor proposed that are still waiting for moderation. */
 export async function listPackChoices(userId: string): Promise<PackChoice[]> {
   const rows = await db
     .select(choiceColumns)
     .from(packs)
     .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(or(eq(packs.status, "active"), and(eq(packs.status, "proposed"), eq(packs.proposedById, userId))))
+    .where(pickableBy(userId))
     .orderBy(asc(makers.name), asc(packs.model));
-  return rows.map(({ status, ...r }) => ({ ...r, proposed: status === "proposed" }));
+  return rows.map(toChoice);
 }
 
 /** A pack a contributor may submit against (active, or their own proposal); null otherwise. */
@@ -48,12 +52,9 @@ export async function getPackChoice(packId: number, userId: string): Promise<Pac
     .select(choiceColumns)
     .from(packs)
     .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(packs.id, packId), or(eq(packs.status, "active"), and(eq(packs.status, "proposed"), eq(packs.proposedById, userId)))))
+    .where(and(eq(packs.id, packId), pickableBy(userId)))
     .limit(1);
-  const row = rows[0];
-  if (!row) return null;
-  const { status, ...rest } = row;
-  return { ...rest, proposed: status === "proposed" };
+  return rows[0] ? toChoice(rows[0]) : null;
 }
 
 export type MakerChoice = { id: number; name: string };

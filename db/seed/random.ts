@@ -1,13 +1,8 @@
-// A small seeded PRNG (mulberry32) so the demo scenario is the same on every machine.
+// Seeded randomness (the generator's mulberry32) so the demo scenario is the same on every machine.
+import { seededRandom } from "@/lib/synthetic/equivalent-circuit";
+
 export function createRandom(seed: number) {
-  let a = seed >>> 0;
-  const next = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const next = seededRandom(seed);
   return {
     next,
     between: (lo: number, hi: number) => lo + (hi - lo) * next(),
@@ -26,11 +21,3 @@ export function createRandom(seed: number) {
 }
 export type Random = ReturnType<typeof createRandom>;
 
-export function slugify(text: string): string {
-  return text
-    .toLowerCase()
-    .normalize("NFKD")
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 100);
-}

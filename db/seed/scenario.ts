@@ -1,7 +1,8 @@
 // The demo scenario: an invented world of makers, packs and testers. No real brand, product or person.
 // Each pack carries a hidden "truth" (cell resistance, real capacity) from which synthetic logs are
 // generated and then analysed — figures are computed, never typed.
-import { createRandom, slugify } from "./random";
+import { slugify } from "@/lib/slug";
+import { createRandom } from "./random";
 
 export type DemoUser = { email: string; displayName: string; role: "contributor" | "moderator" | "admin"; anonymous?: boolean };
 export type DemoMaker = { slug: string; name: string; honesty: number; series: string[] };

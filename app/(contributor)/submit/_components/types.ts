@@ -1,18 +1,8 @@
 // What the submit page hands its client components (plain data, no Date objects).
+import type { PackChoice } from "@/db/queries/submissions";
 import type { LoadMode, ResistanceMethod } from "@/db/schema/enums";
 
-export type PackOption = {
-  id: number;
-  makerName: string;
-  model: string;
-  cellsInSeries: number;
-  ratedCapacityMah: number;
-  labelledContinuousC: number;
-  labelledBurstC: number | null;
-  weightG: number | null;
-  connector: string;
-  proposed: boolean;
-};
+export type PackOption = PackChoice;
 export type MakerOption = { id: number; name: string };
 export type BenchProfileOption = {
   id: number;

@@ -1,0 +1,11 @@
+// URL slugs for catalogue entries (makers, packs), shared by the seed and the proposal mutation.
+export function slugify(text: string): string {
+  const slug = text
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 80);
+  return slug || "unnamed";
+}
