@@ -3,6 +3,7 @@
 // chart as PNG and SVG, and two keyboard-only walks (the packs table, the first steps of /submit).
 import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
+import { rows, settled } from "./packs-table-helpers";
 import { signIn } from "./sign-in-helpers";
 
 /** RFC 4180 records (quoted fields may hold commas, doubled quotes and line breaks); every line ends in CRLF. */
@@ -64,18 +65,6 @@ async function expectVisibleFocus(page: Page) {
   expect(style.outline || style.ring, "the focused control shows a focus indicator").toBe(true);
 }
 
-const rows = (page: Page) => page.getByTestId("packs-table").locator("tbody tr");
-/** Waits until the packs table stops changing (the server-rendered rows are replaced after hydration). */
-async function settled(page: Page) {
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  let prev = "";
-  await expect.poll(async () => {
-    const now = (await rows(page).allTextContents()).join("|");
-    const same = now === prev && now !== "";
-    prev = now;
-    return same;
-  }, { intervals: [700], timeout: 20_000 }).toBe(true);
-}
 
 test("a contributor answers a change request and the result is back in the queue with its history", async ({ page }) => {
   await signIn(page, "slipway@sagline.localhost");

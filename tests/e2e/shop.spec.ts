@@ -1,21 +1,10 @@
 // Shoppers' journeys: the packs table through the URL, fuzzy search, a pack page, comparing three packs,
 // charts as tables, keyboard sorting.
 import { expect, test, type Page } from "@playwright/test";
+import { rows, settled } from "./packs-table-helpers";
 
-const rows = (page: Page) => page.getByTestId("packs-table").locator("tbody tr");
 const column = async (page: Page, index: number) => (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
 const mah = (t: string) => Number(t.replace(/,/g, ""));
-/** Waits until the table stops changing: the server-rendered rows are replaced once the client has hydrated. */
-async function settled(page: Page) {
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  let prev = "";
-  await expect.poll(async () => {
-    const now = (await rows(page).allTextContents()).join("|");
-    const same = now === prev && now !== "";
-    prev = now;
-    return same;
-  }, { intervals: [700], timeout: 20_000 }).toBe(true);
-}
 
 test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
   await page.goto("/packs?cells=4&sort=capacity&dir=desc");
