@@ -8,9 +8,9 @@ export function SummaryValue({ s, digits = 1, unit = "" }: { s: Summary; digits?
   return (
     <span className="num whitespace-nowrap">
       {fmt(s.median, digits, unit)}
-      <span className="muted block text-xs">
-        n={s.n}{s.n > 1 ? ` · ${fmt(s.min, digits)}–${fmt(s.max, digits)}` : ""}
-      </span>
+      <span className="muted block text-xs">n={s.n}</span>
+      {/* The spread on a line of its own keeps wide tables narrow enough for a desktop screen. */}
+      {s.n > 1 ? <span className="muted block text-xs">{fmt(s.min, digits)}–{fmt(s.max, digits)}</span> : null}
     </span>
   );
 }

@@ -73,6 +73,8 @@ export function LineChart({ title, series, xLabel, yLabel, xDigits = 0, yDigits 
   const fx = (v: number) => v.toLocaleString("en-GB", { maximumFractionDigits: xDigits, minimumFractionDigits: xDigits });
   const fy = (v: number | null) => (v === null ? "—" : v.toLocaleString("en-GB", { maximumFractionDigits: yDigits, minimumFractionDigits: yDigits }));
   const onlyPoints = series.every((s) => s.mode === "points");
+  // Whole-number axes (cycles, mAh) get whole-number ticks only: no "0.5 cycles".
+  const xTicks = x.ticks(width < 500 ? 4 : 8).filter((v) => xDigits > 0 || Number.isInteger(v));
 
   const table: ChartTable = onlyPoints
     ? { caption: tableCaption, columns: ["Series", xLabel, yLabel], rows: series.flatMap((s) => s.points.map((p) => [s.href ? { text: s.label, href: s.href } : s.label, fx(p.x), fy(p.y)])) }
@@ -136,7 +138,7 @@ export function LineChart({ title, series, xLabel, yLabel, xDigits = 0, yDigits 
               })}
               {cx !== null ? <line x1={x(cx)} x2={x(cx)} y1={0} y2={innerH} stroke="currentColor" className="text-ink-soft dark:text-paper/60" /> : null}
               <g className="text-ink-soft dark:text-paper/70">
-                <AxisBottom top={innerH} scale={x} numTicks={width < 500 ? 4 : 8} stroke="currentColor" tickStroke="currentColor"
+                <AxisBottom top={innerH} scale={x} tickValues={xTicks} tickFormat={(v) => fx(Number(v))} stroke="currentColor" tickStroke="currentColor"
                   tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "middle" }} label={xLabel} labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} />
                 <AxisLeft scale={y} numTicks={5} stroke="currentColor" tickStroke="currentColor" tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "end", dx: -2, dy: 3 }}
                   label={yLabel} labelOffset={40} labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} />

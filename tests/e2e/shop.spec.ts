@@ -49,6 +49,21 @@ test("opens a pack from the table and reads its figures by group", async ({ page
   await expect(page.getByTestId("pack-results").locator("li").first()).toBeVisible();
 });
 
+test("a pack page's figures table fits a desktop screen and its over-cycles charts count whole cycles", async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 900 });
+  await page.goto("/packs/ashcombe-cells-ridge-1800-5s-130c");
+  const region = page.getByRole("region", { name: "Figures by like-for-like group" });
+  await expect(region).toBeVisible();
+  // No hidden columns at 1280 px: the scroll region does not need scrolling.
+  const overflow = await region.evaluate((el) => el.scrollWidth - el.clientWidth);
+  expect(overflow).toBeLessThanOrEqual(1);
+  const cycles = page.getByRole("figure", { name: "Capacity kept over cycles" });
+  await expect(cycles.locator("svg .visx-axis-bottom")).toBeVisible();
+  const ticks = await cycles.locator("svg .visx-axis-bottom .visx-axis-tick text").allTextContents();
+  expect(ticks.length).toBeGreaterThan(1);
+  for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
+});
+
 test("compares three packs in one like-for-like group and lists what it left out", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new");
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
