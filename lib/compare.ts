@@ -80,3 +80,46 @@ export function markDifferences(values: (number | null)[], direction: Direction)
 
 /** A difference a reader should notice (more than 10 % from the best). */
 export const NOTABLE_DIFFERENCE = 0.1;
+
+export type CompareSuggestion = { group: { key: string; label: string }; cells: number; capacityMah: number; packs: { slug: string; title: string }[] };
+
+/**
+ * Ready-made comparisons for an empty /compare: in each of the most populated groups, the packs that a
+ * shopper would put side by side — same cells in series and same rated capacity — when at least two of
+ * them have results there. One suggestion per group, at most `limit`, never two of the same size class.
+ */
+export function suggestComparisons(
+  groups: { key: string; label: string; packSlugs: string[] }[],
+  packs: { slug: string; makerName: string; model: string; cellsInSeries: number; ratedCapacityMah: number }[],
+  limit = 3,
+): CompareSuggestion[] {
+  const bySlug = new Map(packs.map((p) => [p.slug, p]));
+  const used = new Set<string>();
+  const out: CompareSuggestion[] = [];
+  for (const g of groups) {
+    if (out.length >= limit) break;
+    const classes = new Map<string, typeof packs>();
+    for (const slug of g.packSlugs) {
+      const p = bySlug.get(slug);
+      if (!p) continue;
+      const k = `${p.cellsInSeries}:${p.ratedCapacityMah}`;
+      classes.set(k, [...(classes.get(k) ?? []), p]);
+    }
+    const best = [...classes.entries()]
+      .filter(([k, list]) => list.length >= MIN_COMPARE && !used.has(k))
+      .sort((a, b) => b[1].length - a[1].length || a[0].localeCompare(b[0]))[0];
+    if (!best) continue;
+    const [k, list] = best;
+    used.add(k);
+    const chosen = [...list].sort((a, b) => a.slug.localeCompare(b.slug)).slice(0, Math.min(4, MAX_COMPARE));
+    const first = chosen[0];
+    if (!first) continue;
+    out.push({
+      group: { key: g.key, label: g.label },
+      cells: first.cellsInSeries,
+      capacityMah: first.ratedCapacityMah,
+      packs: chosen.map((p) => ({ slug: p.slug, title: `${p.makerName} ${p.model}` })),
+    });
+  }
+  return out;
+}

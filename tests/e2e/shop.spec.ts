@@ -64,6 +64,20 @@ test("a pack page's figures table fits a desktop screen and its over-cycles char
   for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
 });
 
+test("an empty comparison suggests packs of one size tested the same way, and a suggestion opens a comparison", async ({ page }) => {
+  await page.goto("/compare");
+  const suggestions = page.getByTestId("compare-suggestions").locator("li");
+  await expect(suggestions.first()).toBeVisible();
+  const link = suggestions.first().getByRole("link");
+  const label = (await link.textContent()) ?? "";
+  const count = Number(/compare (\d+) packs/.exec(label)?.[1]);
+  expect(count).toBeGreaterThanOrEqual(2);
+  await link.click();
+  await expect(page).toHaveURL(/\/compare\?packs=[^&]+&group=/);
+  await expect(page.getByTestId("compare-group")).toBeVisible();
+  await expect(page.getByTestId("compare-suggestions")).toHaveCount(0);
+});
+
 test("compares three packs in one like-for-like group and lists what it left out", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new");
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);

@@ -2,10 +2,10 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { z } from "zod";
 import { LineChart } from "@/components/charts/line-chart";
-import { MAX_COMPARE, MIN_COMPARE } from "@/lib/compare";
+import { MAX_COMPARE, MIN_COMPARE, suggestComparisons } from "@/lib/compare";
 import { compareChartData } from "@/lib/compare-charts";
 import { packTitle } from "@/lib/format";
-import { cachedComparison, cachedPacks } from "@/lib/public-data";
+import { cachedComparison, cachedGroups, cachedPacks, cachedPacksInGroup } from "@/lib/public-data";
 import { ComparePicker } from "./_components/compare-picker-client";
 import { CompareTable } from "./_components/compare-table";
 
@@ -25,6 +25,7 @@ export default async function ComparePage(props: { searchParams: Promise<Record<
   const options = all.map((p) => ({ slug: p.slug, title: packTitle(p) }));
   const selected = cmp.packs.map((p) => ({ slug: p.slug, title: packTitle(p) }));
   const charts = cmp.group ? compareChartData(cmp) : null;
+  const suggestions = cmp.packs.length < MIN_COMPARE ? await exampleComparisons(all) : [];
   const qsFor = (group: string) => `/compare?packs=${cmp.packs.map((p) => p.slug).join(",")}&group=${group}`;
 
   return (
@@ -34,7 +35,25 @@ export default async function ComparePage(props: { searchParams: Promise<Record<
       {cmp.unknownSlugs.length ? <p className="muted text-sm">Not in the catalogue (left out): {cmp.unknownSlugs.join(", ")}.</p> : null}
 
       {cmp.packs.length < MIN_COMPARE ? (
-        <p className="muted">Add at least {MIN_COMPARE} packs to compare them. Or start from the <Link href="/packs">packs table</Link>.</p>
+        <>
+          <p className="muted">Add at least {MIN_COMPARE} packs to compare them. Or start from the <Link href="/packs">packs table</Link>.</p>
+          {suggestions.length ? (
+            <section aria-labelledby="examples-h" className="space-y-2">
+              <h2 id="examples-h" className="text-base">Or start with packs of one size, tested the same way</h2>
+              <ul className="space-y-2 text-sm" data-testid="compare-suggestions">
+                {suggestions.map((sug) => (
+                  <li key={sug.group.key} className="card space-y-1">
+                    <Link href={`/compare?packs=${sug.packs.map((p) => p.slug).join(",")}&group=${sug.group.key}`} className="font-medium">
+                      {sug.cells}S {sug.capacityMah.toLocaleString("en-GB")} mAh — compare {sug.packs.length} packs
+                    </Link>
+                    <p className="muted text-xs">{sug.packs.map((p) => p.title).join(" · ")}</p>
+                    <p className="muted text-xs">{sug.group.label}</p>
+                  </li>
+                ))}
+              </ul>
+            </section>
+          ) : null}
+        </>
       ) : !cmp.group ? (
         <p className="muted">None of these packs has published results yet.</p>
       ) : (
@@ -68,4 +87,11 @@ export default async function ComparePage(props: { searchParams: Promise<Record<
       )}
     </div>
   );
+}
+
+/** Suggestions for an empty comparison, from the five most populated groups (cached reads only). */
+async function exampleComparisons(all: Awaited<ReturnType<typeof cachedPacks>>) {
+  const groups = (await cachedGroups()).slice(0, 5);
+  const withPacks = await Promise.all(groups.map(async (g) => ({ key: g.key, label: g.label, packSlugs: (await cachedPacksInGroup(g.key)).map((p) => p.packSlug) })));
+  return suggestComparisons(withPacks, all);
 }

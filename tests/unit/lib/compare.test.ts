@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { markDifferences } from "@/lib/compare";
+import { markDifferences, suggestComparisons } from "@/lib/compare";
 import { cycleSeries, sustainedC, type PublicResultRow } from "@/lib/pack-summary";
 
 let id = 0;
@@ -34,5 +34,30 @@ describe("cycling series", () => {
     expect(s?.points.map((p) => p.cycles)).toEqual([0, 100]);
     // Straight line through (0, 100 %) and (100, 95 %) reaches 80 % at cycle 400 (arithmetic).
     expect(s?.trend?.cyclesTo80).toBeCloseTo(400, 6);
+  });
+});
+
+describe("suggestComparisons", () => {
+  const pack = (slug: string, cells: number, mah: number) => ({ slug, makerName: `Maker ${slug}`, model: `M ${slug}`, cellsInSeries: cells, ratedCapacityMah: mah });
+  const packs = [pack("a", 4, 1300), pack("b", 4, 1300), pack("c", 4, 1300), pack("d", 6, 5000), pack("e", 6, 5000), pack("f", 3, 850), pack("g", 4, 1500)];
+
+  it("suggests the largest same-size class in each group, up to four packs, in slug order", () => {
+    const out = suggestComparisons([{ key: "g1", label: "Group 1", packSlugs: ["c", "a", "d", "b", "e", "g"] }], packs);
+    expect(out).toEqual([{ group: { key: "g1", label: "Group 1" }, cells: 4, capacityMah: 1300, packs: [{ slug: "a", title: "Maker a M a" }, { slug: "b", title: "Maker b M b" }, { slug: "c", title: "Maker c M c" }] }]);
+  });
+
+  it("never repeats a size class across groups, skips groups with no pair, and stops at the limit", () => {
+    const groups = [
+      { key: "g1", label: "G1", packSlugs: ["a", "b", "d", "e"] },
+      { key: "g2", label: "G2", packSlugs: ["a", "b", "f", "g"] },
+      { key: "g3", label: "G3", packSlugs: ["d", "e"] },
+      { key: "g4", label: "G4", packSlugs: ["a", "b", "c"] },
+    ];
+    const out = suggestComparisons(groups, packs, 2);
+    expect(out.map((s) => [s.group.key, s.cells, s.capacityMah])).toEqual([["g1", 4, 1300], ["g3", 6, 5000]]);
+  });
+
+  it("ignores slugs missing from the catalogue and suggests nothing without two alike", () => {
+    expect(suggestComparisons([{ key: "g", label: "G", packSlugs: ["a", "zzz", "f", "g"] }], packs)).toEqual([]);
   });
 });
