@@ -5,6 +5,8 @@ import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
+import { listGroupOptions } from "@/db/queries/open-data/groups";
+import { listAllMakers } from "@/db/queries/open-data/packs";
 import { getPackDetail } from "@/db/queries/pack-detail";
 import { listActivePacks, listPackRows } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
@@ -42,4 +44,12 @@ export function cachedResult(id: number) {
 export function cachedComparison(slugs: string[], group: string | null) {
   const tags = [t.results, t.packs, ...slugs.map((s) => t.pack(s)), ...(group ? [t.group(group)] : [])];
   return unstable_cache(() => getComparison(slugs, group), ["comparison", slugs.join(","), group ?? "-"], { tags, revalidate })();
+}
+
+/** Active makers with their active pack counts (/data's download form): catalogue edits and merges revalidate `packs`. */
+export const cachedMakers = unstable_cache(listAllMakers, ["open-data-makers"], { tags: [t.packs], revalidate });
+
+/** Like-for-like groups with their approved-result counts (/data's download form): every decision revalidates `results`. */
+export function cachedGroupOptions(minResults: number) {
+  return unstable_cache(() => listGroupOptions(minResults), ["group-options", String(minResults)], { tags: [t.results, t.packs], revalidate })();
 }

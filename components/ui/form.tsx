@@ -34,14 +34,20 @@ export function describedBy(id: string, error?: string, hint?: boolean): { "aria
   return hint ? { "aria-invalid": false, "aria-describedby": `${id}-hint` } : { "aria-invalid": false };
 }
 
-export function Alert({ tone, children }: { tone: "error" | "success" | "info"; children: ReactNode }) {
-  const tones = {
-    error: "border-warn/40 bg-warn-soft text-warn dark:border-red-400/40 dark:bg-red-950/40 dark:text-red-200",
-    success: "border-cell-500/40 bg-cell-50 text-cell-700 dark:border-cell-400/40 dark:bg-cell-700/20 dark:text-cell-100",
-    info: "border-charge-400/50 bg-charge-50 text-charge-700 dark:border-charge-400/40 dark:bg-charge-700/20 dark:text-charge-100",
-  } as const;
+const alertTones = {
+  error: "border-warn/40 bg-warn-soft text-warn dark:border-red-400/40 dark:bg-red-950/40 dark:text-red-200",
+  success: "border-cell-500/40 bg-cell-50 text-cell-700 dark:border-cell-400/40 dark:bg-cell-700/20 dark:text-cell-100",
+  info: "border-charge-400/50 bg-charge-50 text-charge-700 dark:border-charge-400/40 dark:bg-charge-700/20 dark:text-charge-100",
+} as const;
+
+/** The look of an Alert, for a message placed inside a live region that is already on the page. */
+export function alertClass(tone: keyof typeof alertTones): string {
+  return `rounded-md border px-3 py-2 text-sm ${alertTones[tone]}`;
+}
+
+export function Alert({ tone, children }: { tone: keyof typeof alertTones; children: ReactNode }) {
   return (
-    <div role={tone === "error" ? "alert" : "status"} className={`rounded-md border px-3 py-2 text-sm ${tones[tone]}`}>
+    <div role={tone === "error" ? "alert" : "status"} className={alertClass(tone)}>
       {children}
     </div>
   );

@@ -89,6 +89,13 @@ export async function decideResult(actorId: string, resultId: number, decision: 
   return { resultId, status: to };
 }
 
+/** What a resolution did: the moderator's page names the flag, the result and the result's status after it. */
+export type ResolvedFlag = {
+  flagId: number; resolution: FlagResolution; resultId: number; status: ReviewStatus;
+  /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
+  alsoClosed: number;
+};
+
 const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved", corrected: "approved", withdrawn: "withdrawn" };
 
 /**
@@ -101,8 +108,8 @@ export async function resolveReaderFlag(
   flagId: number,
   resolution: FlagResolution,
   note: string | null,
-): Promise<{ resultId: number; status: ReviewStatus }> {
-  const { ctx, status } = await db.transaction(async (tx) => {
+): Promise<ResolvedFlag> {
+  const { ctx, status, alsoClosed } = await db.transaction(async (tx) => {
     const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
     if (!flag) throw new AppError("not_found", "That flag does not exist.");
     const c = await lockResult(tx, flag.resultId);
@@ -111,8 +118,12 @@ export async function resolveReaderFlag(
     const now = new Date();
     const close = { status: resolution, resolvedById: actorId, resolutionNote: note, resolvedAt: now } as const;
     await tx.update(readerFlags).set(close).where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
+    let alsoClosed = 0;
     if (resolution === "withdrawn") {
-      await tx.update(readerFlags).set(close).where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)));
+      const others = await tx.update(readerFlags).set(close)
+        .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)))
+        .returning({ id: readerFlags.id });
+      alsoClosed = others.length;
     }
     const stillOpen = await tx
       .select({ id: readerFlags.id })
@@ -121,10 +132,10 @@ export async function resolveReaderFlag(
     const to = resolutionStatus[resolution];
     if (c.status === "disputed" && stillOpen.length === 0) {
       await transition(tx, { resultId: flag.resultId, actorId, from: "disputed", to, reason: `flag-${resolution}`, note });
-      return { ctx: c, status: to };
+      return { ctx: c, status: to, alsoClosed };
     }
-    return { ctx: c, status: c.status };
+    return { ctx: c, status: c.status, alsoClosed };
   });
   revalidateResult(ctx);
-  return { resultId: ctx.resultId, status };
+  return { flagId, resolution, resultId: ctx.resultId, status, alsoClosed };
 }

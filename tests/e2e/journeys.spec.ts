@@ -123,9 +123,18 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
   await page.goto("/review/flags");
   const row = page.getByTestId("flag-queue").getByRole("listitem").filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
   await row.getByLabel("Note (required when correcting)").fill("Capacity checked against the log; it matches.");
+  const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
+  expect(flagId).toMatch(/^\d+$/);
   await row.getByRole("button", { name: "Keep" }).click();
-  // The action refreshes the queue: the resolved flag leaves it (and its form with it).
+  // The action refreshes the queue: the resolved flag leaves it (and its form with it)…
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
+  // …while the confirmation, outside the list, stays: it names the flag, the result and the outcome, and
+  // holds the focus that the removed button had.
+  const done = page.getByRole("status").filter({ hasText: `Flag #${flagId} on result #${resultId}` });
+  await expect(done).toBeVisible();
+  await expect(done).toContainText("resolved: result kept. It is published again and no longer shows as disputed.");
+  await expect(done).toBeFocused();
+  await expect(page.getByTestId("flag-queue").getByText(`Flag #${flagId} on`)).toHaveCount(0);
   await page.goto("/review/flags");
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
 

@@ -2,8 +2,22 @@ import { expect, test, type Page } from "@playwright/test";
 import { firstLink, newestMailFor } from "../helpers/mail";
 
 // A moderator signs in with an e-mail link, approves one flagged result and rejects another, and the
-// approved result appears on the public pack page (revalidated by tag, no rebuild).
+// approved result appears on the public pack page and in /data's counts (revalidated by tag, no rebuild).
 const MODERATOR = "moderator@sagline.localhost";
+
+/** Approved results as /data counts them: the sum of the "(n results)" of its like-for-like groups. */
+async function approvedOnDataPage(page: Page): Promise<number> {
+  await page.goto("/data");
+  const options = await page.getByLabel("Like-for-like group (results only)").locator("option").allTextContents();
+  return options.reduce((sum, text) => sum + Number(/\((\d+) results\)$/.exec(text)?.[1] ?? 0), 0);
+}
+
+/** Approved results as the API counts them, straight from the database (the API is never statically cached). */
+async function approvedInApi(page: Page): Promise<number> {
+  const res = await page.request.get("/api/v1/results?size=10");
+  expect(res.status()).toBe(200);
+  return Number(res.headers()["x-total-count"]);
+}
 
 async function signIn(page: Page, email: string) {
   await page.goto("/sign-in?callbackUrl=%2Freview");
@@ -31,6 +45,11 @@ test("a moderator approves one flagged result, rejects another, and the approved
   const approveId = await flagged.nth(0).getAttribute("data-result-id");
   const rejectId = await flagged.nth(1).getAttribute("data-result-id");
 
+  // /data agrees with the database before the decision (and now holds a cached copy the decision must expire).
+  const approvedBefore = await approvedOnDataPage(page);
+  expect(approvedBefore).toBeGreaterThan(0);
+  expect(approvedBefore).toBe(await approvedInApi(page));
+
   // Approve the first flagged result, having looked at its pack page first (so a cached copy exists).
   await page.goto(`/review/${approveId}`);
   await expect(page.getByTestId("flag-list")).toBeVisible();
@@ -43,6 +62,10 @@ test("a moderator approves one flagged result, rejects another, and the approved
   await page.getByRole("button", { name: "Approve and publish" }).click();
   await expect(page.getByTestId("decision-done")).toContainText(/approved/i);
   await expect(page.getByTestId("result-status")).toHaveText("Approved");
+
+  // /data counts it at once: its tagged reads were expired by the decision, not left for the hourly timer.
+  expect(await approvedOnDataPage(page)).toBe(approvedBefore + 1);
+  expect(await approvedInApi(page)).toBe(approvedBefore + 1);
 
   // Reject the second with a reason from the list.
   await page.goto(`/review/${rejectId}`);
@@ -57,6 +80,9 @@ test("a moderator approves one flagged result, rejects another, and the approved
   await page.goto("/review");
   await expect(page.locator(`[data-result-id="${approveId}"]`)).toHaveCount(0);
   await expect(page.locator(`[data-result-id="${rejectId}"]`)).toHaveCount(0);
+
+  // A rejection publishes nothing: /data still counts one more than before, not two.
+  expect(await approvedOnDataPage(page)).toBe(approvedBefore + 1);
 
   // The approved result is on the public pack page.
   await page.goto(packHref ?? "/");

@@ -92,7 +92,7 @@ describe("reader flags", () => {
     const [flag] = await db.select().from(readerFlags).where(eq(readerFlags.resultId, r.id));
     const mod = await signedIn("moderator");
     requestState.token = mod.token;
-    expect(await resolveFlag(null, { flagId: flag!.id, resolution: "kept", note: "Figures match the log." })).toEqual({ ok: true, data: { resultId: r.id, status: "approved" } });
+    expect(await resolveFlag(null, { flagId: flag!.id, resolution: "kept", note: "Figures match the log." })).toEqual({ ok: true, data: { flagId: flag!.id, resolution: "kept", resultId: r.id, status: "approved", alsoClosed: 0 } });
     const [after] = await db.select().from(readerFlags).where(eq(readerFlags.id, flag!.id));
     expect(after).toMatchObject({ status: "kept", resolvedById: mod.id, resolutionNote: "Figures match the log." });
     expect((await eventsOf(r.id)).at(-1)).toMatchObject({ actorId: mod.id, fromStatus: "disputed", toStatus: "approved", reason: "flag-kept" });
@@ -107,7 +107,7 @@ describe("reader flags", () => {
     const mod = await signedIn("moderator");
     requestState.token = mod.token;
     expect(await resolveFlag(null, { flagId: flags[0]!.id, resolution: "corrected" })).toMatchObject({ ok: false, code: "validation" });
-    expect(await resolveFlag(null, { flagId: flags[0]!.id, resolution: "corrected", note: "Pack corrected to the 4S version." })).toMatchObject({ ok: true, data: { status: "disputed" } });
+    expect(await resolveFlag(null, { flagId: flags[0]!.id, resolution: "corrected", note: "Pack corrected to the 4S version." })).toMatchObject({ ok: true, data: { resolution: "corrected", status: "disputed", alsoClosed: 0 } });
     expect(await statusOf(r.id)).toBe("disputed");
     expect(await resolveFlag(null, { flagId: flags[1]!.id, resolution: "kept" })).toMatchObject({ ok: true, data: { status: "approved" } });
   });
@@ -119,7 +119,7 @@ describe("reader flags", () => {
     const [first] = await db.select().from(readerFlags).where(eq(readerFlags.resultId, r.id)).orderBy(asc(readerFlags.id));
     const mod = await signedIn("moderator");
     requestState.token = mod.token;
-    expect(await resolveFlag(null, { flagId: first!.id, resolution: "withdrawn", note: "Simulated log." })).toMatchObject({ ok: true, data: { status: "withdrawn" } });
+    expect(await resolveFlag(null, { flagId: first!.id, resolution: "withdrawn", note: "Simulated log." })).toMatchObject({ ok: true, data: { status: "withdrawn", alsoClosed: 1 } });
     expect(await statusOf(r.id)).toBe("withdrawn");
     const flags = await db.select().from(readerFlags).where(eq(readerFlags.resultId, r.id));
     expect(flags.map((f) => f.status)).toEqual(["withdrawn", "withdrawn"]);

@@ -4,6 +4,8 @@ import { makerFields, packFields, resultFields, type Field } from "@/lib/open-da
 import { ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { openApiDocument } from "@/lib/open-data/openapi";
 
+// This guide reads nothing from the database (endpoints and fields come from lib/open-data in code), so no
+// moderation decision can make it stale and no tag is needed; the hour only picks up a changed APP_URL.
 export const revalidate = 3600;
 export const metadata: Metadata = { title: "API guide", description: "Sagline's public read API: endpoints, filters, paging, caching, rate limits and fields with units." };
 

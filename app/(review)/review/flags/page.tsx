@@ -6,6 +6,7 @@ import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { flagReasonLabels } from "@/lib/validations/review";
 import type { FlagReason } from "@/db/schema/enums";
 import { ResolveFlagForm } from "./_components/resolve-flag-client";
+import { ResolvedFlagNotice } from "./_components/resolved-flag-notice-client";
 
 export const metadata: Metadata = { title: "Reader flags" };
 export const dynamic = "force-dynamic";
@@ -25,25 +26,28 @@ export default async function ReaderFlagsPage() {
           is never deleted and its history stays public.
         </p>
       </div>
-      {flags.length === 0 ? <p className="card muted">No open flags.</p> : (
-        <ul className="space-y-4" data-testid="flag-queue">
-          {flags.map((fl) => (
-            <li key={fl.id} className="card grid gap-4 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
-              <div className="min-w-0 space-y-1">
-                <p className="font-medium">{flagReasonLabels[fl.reason as FlagReason] ?? fl.reason}</p>
-                <p className="muted text-sm">
-                  Flag #{fl.id} on <Link href={`/review/${fl.resultId}`}>result #{fl.resultId}</Link> · {fl.makerName} {fl.packModel} ·{" "}
-                  {reviewStatusLabels[fl.resultStatus]} · {when(fl.createdAt)}
-                </p>
-                {fl.note ? <blockquote className="border-l-2 border-charge-400 pl-3 text-sm">{fl.note}</blockquote> : null}
-              </div>
-              {fl.contributorId === me.id ? (
-                <p className="text-sm">This is your own result; another moderator has to resolve the flag.</p>
-              ) : <ResolveFlagForm flagId={fl.id} />}
-            </li>
-          ))}
-        </ul>
-      )}
+      {/* Around the list and its empty state alike, so the confirmation survives the last row leaving. */}
+      <ResolvedFlagNotice>
+        {flags.length === 0 ? <p className="card muted">No open flags.</p> : (
+          <ul className="space-y-4" data-testid="flag-queue">
+            {flags.map((fl) => (
+              <li key={fl.id} className="card grid gap-4 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+                <div className="min-w-0 space-y-1">
+                  <p className="font-medium">{flagReasonLabels[fl.reason as FlagReason] ?? fl.reason}</p>
+                  <p className="muted text-sm">
+                    Flag #{fl.id} on <Link href={`/review/${fl.resultId}`}>result #{fl.resultId}</Link> · {fl.makerName} {fl.packModel} ·{" "}
+                    {reviewStatusLabels[fl.resultStatus]} · {when(fl.createdAt)}
+                  </p>
+                  {fl.note ? <blockquote className="border-l-2 border-charge-400 pl-3 text-sm">{fl.note}</blockquote> : null}
+                </div>
+                {fl.contributorId === me.id ? (
+                  <p className="text-sm">This is your own result; another moderator has to resolve the flag.</p>
+                ) : <ResolveFlagForm flagId={fl.id} packTitle={`${fl.makerName} ${fl.packModel}`} />}
+              </li>
+            ))}
+          </ul>
+        )}
+      </ResolvedFlagNotice>
     </div>
   );
 }

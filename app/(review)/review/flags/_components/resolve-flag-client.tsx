@@ -1,14 +1,23 @@
 "use client";
 import { useActionState } from "react";
 import { Alert, buttonClass, Field, inputClass } from "@/components/ui/form";
+import type { ResolvedFlag } from "@/db/mutations/review";
+import type { ActionResult } from "@/lib/errors";
 import { resolveFlag } from "../actions/resolve-flag";
+import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";
 
-const outcome = { approved: "Resolved: the result is published again.", withdrawn: "Resolved: the result is withdrawn (it stays in the audit log).", disputed: "Resolved; other flags on this result are still open." } as Record<string, string>;
-
-/** Keep the result, correct it (note required), or withdraw it. */
-export function ResolveFlagForm({ flagId }: { flagId: number }) {
-  const [state, action, pending] = useActionState(resolveFlag, null);
-  if (state?.ok) return <Alert tone="success">{outcome[state.data.status] ?? "Resolved."}</Alert>;
+/**
+ * Keep the result, correct it (note required), or withdraw it. The confirmation goes to the page's notice
+ * (ResolvedFlagNotice), because this form leaves with its row once the queue refreshes.
+ */
+export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTitle: string }) {
+  const announce = useAnnounceResolvedFlag();
+  const [state, action, pending] = useActionState(async (prev: ActionResult<ResolvedFlag> | null, form: FormData) => {
+    const out = await resolveFlag(prev, form);
+    if (out.ok) announce(out.data, packTitle);
+    return out;
+  }, null);
+  if (state?.ok) return <p className="muted text-sm">Resolved.</p>;
   const noteId = `resolve-note-${flagId}`;
   return (
     <form action={action} className="space-y-2" aria-label={`Resolve flag ${flagId}`}>
