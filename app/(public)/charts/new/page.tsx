@@ -1,14 +1,15 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { listGroupOptions } from "@/db/queries/open-data/groups";
-import { listAllMakers } from "@/db/queries/open-data/packs";
+import { cachedGroupOptions, cachedMakers } from "@/lib/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
-export const revalidate = 600;
+// Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
+// The timer is only a safety net.
+export const revalidate = 3600;
 export const metadata: Metadata = { title: "Build a chart", description: "Build a chart from Sagline open data, then embed it or download it." };
 
 export default async function NewChartPage() {
-  const [groups, makers] = await Promise.all([listGroupOptions(3), listAllMakers()]);
+  const [groups, makers] = await Promise.all([cachedGroupOptions(3), cachedMakers()]);
   return (
     <div className="space-y-4">
       <h1>Build a chart</h1>
