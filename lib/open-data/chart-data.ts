@@ -1,8 +1,7 @@
 // Prepares the data of one chart from its state: one like-for-like group at a time, saying what was
 // left out and why.
 import "server-only";
-import { listGroupSamples } from "@/db/queries/open-data/groups";
-import { listGroupCurves } from "@/db/queries/open-data/results";
+import { cachedGroupCurves, cachedGroupSamples } from "@/lib/public-data";
 import { aggregateByMaker, aggregateByPack, groupLabel } from "./aggregate";
 import type { ChartState } from "./chart-state";
 import { plural } from "./chart-svg";
@@ -25,7 +24,8 @@ export const MAX_CURVES = 8;
 
 export async function loadChartData(state: ChartState): Promise<ChartData> {
   const filters = { maker: state.maker, cells: state.cells };
-  const samples = await listGroupSamples(state.group, filters);
+  // Tagged cached reads: a moderation decision in this group refreshes embeds, views and images at once.
+  const samples = await cachedGroupSamples(state.group, filters);
   const packs = aggregateByPack(samples);
   const base: ChartData = { state, groupLabel: groupLabel(samples[0]) ?? state.group, counts: { packs: packs.length, results: samples.length }, leftOut: [] };
   if (state.maker || state.cells) base.leftOut.push(`Filtered to ${[state.maker ? `maker ${state.maker}` : "", state.cells ? `${state.cells}S packs` : ""].filter(Boolean).join(", ")}.`);
@@ -41,7 +41,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     const ranking = aggregateByMaker(packs).flatMap((m) => (m.labelRatio ? [{ label: m.makerName, labelRatio: m.labelRatio.median, packCount: m.packCount, resultCount: m.resultCount }] : []));
     return { ...base, ranking };
   }
-  const series = await listGroupCurves(state.group, filters);
+  const series = await cachedGroupCurves(state.group, filters);
   const seen = new Set<string>();
   const curves: CurveLine[] = [];
   for (const s of series) {

@@ -49,3 +49,32 @@ export function redirectTarget(err: unknown): string | null {
   if (!digest.startsWith("NEXT_REDIRECT")) return null;
   return digest.split(";")[2] ?? null;
 }
+
+/**
+ * A next/cache stand-in that really caches: entries are keyed by the key parts and the call's arguments and
+ * carry their tags; revalidateTag drops every entry with that tag. For tests that prove a cached read goes
+ * stale without a tag and fresh with one. Use with:
+ *   vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).taggedCache);
+ */
+const taggedStore = new Map<string, { tags: string[]; value: Promise<unknown> }>();
+export const taggedCache = {
+  store: taggedStore,
+  revalidatePath: (path: string) => {
+    requestState.revalidated.push(path);
+  },
+  revalidateTag: (tag: string) => {
+    requestState.revalidated.push(`tag:${tag}`);
+    for (const [key, entry] of taggedStore) if (entry.tags.includes(tag)) taggedStore.delete(key);
+  },
+  unstable_cache: <A extends unknown[], R>(fn: (...args: A) => Promise<R>, keyParts: string[] = [], options: { tags?: string[] } = {}) =>
+    (...args: A): Promise<R> => {
+      const key = JSON.stringify([keyParts, args]);
+      const hit = taggedStore.get(key);
+      if (hit) return hit.value as Promise<R>;
+      // Like Next's cache, values go through JSON (a Date comes back as a string).
+      const value = fn(...args).then((v) => JSON.parse(JSON.stringify(v)) as R);
+      taggedStore.set(key, { tags: options.tags ?? [], value });
+      value.catch(() => taggedStore.delete(key));
+      return value;
+    },
+};

@@ -1,4 +1,4 @@
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as getMakers } from "@/app/api/v1/makers/route";
 import { GET as getPack } from "@/app/api/v1/packs/[slug]/route";
 import { GET as getResults } from "@/app/api/v1/results/route";
@@ -7,6 +7,10 @@ import { GET as getGroups } from "@/app/api/v1/groups/route";
 import { GET as getGroup } from "@/app/api/v1/groups/[key]/route";
 import { GET as getOpenApi } from "@/app/api/v1/openapi.json/route";
 import { seedOpenData } from "../helpers/open-data-fixtures";
+
+// The routes read through unstable_cache; outside Next.js every read goes to the database (caching and tag
+// revalidation are proved in api-cache-tags.test.ts).
+vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
 const P = "apit";
 let fx: Awaited<ReturnType<typeof seedOpenData>>;

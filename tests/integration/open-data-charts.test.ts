@@ -1,4 +1,4 @@
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as oembed } from "@/app/api/oembed/route";
 import { GET as image } from "@/app/(public)/charts/image/[state]/[file]/route";
 import { GET as listCharts } from "@/app/api/v1/charts/route";
@@ -6,6 +6,9 @@ import { db } from "@/db";
 import { savedCharts } from "@/db/schema";
 import { encodeChartState, type ChartState } from "@/lib/open-data/chart-state";
 import { seedOpenData } from "../helpers/open-data-fixtures";
+
+// Chart data reads through unstable_cache; outside Next.js every read goes to the database.
+vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
 const P = "cht";
 let state: ChartState;

@@ -1,12 +1,12 @@
 // GET /api/v1/makers/{slug} — one maker.
-import { getMakerBySlug } from "@/db/queries/open-data/packs";
+import { cachedApiMaker } from "@/lib/public-data";
 import { AppError } from "@/lib/errors";
 import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
 import { slugParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ slug: string }>(async (req, params) => {
   const { slug } = slugParam.parse(params);
-  const maker = await getMakerBySlug(slug);
+  const maker = await cachedApiMaker(slug);
   if (!maker) throw new AppError("not_found", "No such maker.");
   return apiJson(req, { data: maker, links: { packs: `/api/v1/packs?maker=${maker.slug}` } });
 });

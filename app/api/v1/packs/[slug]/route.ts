@@ -1,12 +1,12 @@
 // GET /api/v1/packs/{slug} — one pack as labelled, with its number of approved results.
-import { getApiPackBySlug } from "@/db/queries/open-data/packs";
+import { cachedApiPack } from "@/lib/public-data";
 import { AppError } from "@/lib/errors";
 import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
 import { slugParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ slug: string }>(async (req, params) => {
   const { slug } = slugParam.parse(params);
-  const pack = await getApiPackBySlug(slug);
+  const pack = await cachedApiPack(slug);
   if (!pack) throw new AppError("not_found", "No such pack.");
   return apiJson(req, { data: pack, links: { results: `/api/v1/results?pack=${pack.slug}` } });
 });
