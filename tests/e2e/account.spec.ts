@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { requestLink } from "./sign-in-helpers";
+import { linkFromCatcher, requestLink } from "./sign-in-helpers";
 
 // A new contributor signs in with the link from the caught mail, names themselves, keeps a bench profile,
 // and signs out.
@@ -85,4 +85,34 @@ test("the same sign-in link cannot be used twice", async ({ page, browser }) => 
   await expect(second).toHaveURL(/\/sign-in\?error=Verification/);
   await expect(second.getByText("That sign-in link has expired or was already used.")).toBeVisible();
   await other.close();
+});
+
+// A shopper watches a pack from its (static) page: signed out the control asks them to sign in and brings
+// them back; signed in it is a real toggle, and the watch shows on the account page, where it can be undone.
+test("watch a pack from its page after signing in, see it on the account page, and unwatch it there", async ({ page }) => {
+  const email = `e2e-watch-${Date.now()}@sagline.localhost`;
+  const packPath = "/packs/ashcombe-cells-ridge-1800-5s-130c";
+  await page.goto(packPath);
+  const title = (await page.getByRole("heading", { level: 1 }).textContent())?.trim() ?? "";
+  await page.getByRole("link", { name: /^Watch .*sign in/ }).click();
+  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Fpacks%2Fashcombe-cells-ridge-1800-5s-130c$/);
+  await page.goto(await linkFromCatcher(email, await requestLink(page, email, page.url())));
+  await expect(page).toHaveURL(new RegExp(`${packPath}$`));
+
+  const watch = page.getByRole("button", { name: "Watch this pack" });
+  await expect(watch).toHaveAttribute("aria-pressed", "false");
+  await watch.click();
+  const watching = page.getByRole("button", { name: /Watching/ });
+  await expect(watching).toHaveAttribute("aria-pressed", "true");
+  // The state is the server's, not the button's: a reload still says watching.
+  await page.reload();
+  await expect(page.getByRole("button", { name: /Watching/ })).toBeVisible();
+
+  await page.goto("/account");
+  const list = page.getByTestId("watch-list");
+  await expect(list.getByRole("link", { name: title })).toBeVisible();
+  await list.getByRole("button", { name: "Unwatch" }).click();
+  await expect(page.getByText("You are not watching any packs.")).toBeVisible();
+  await page.goto(packPath);
+  await expect(page.getByRole("button", { name: "Watch this pack" })).toBeVisible();
 });

@@ -64,3 +64,34 @@ describe("watch a pack", () => {
     expect(await watchPack(null, fd)).toMatchObject({ ok: false, code: "validation" });
   });
 });
+
+describe("GET /api/v1/me?watching= (the pack page's Watch button asks here)", () => {
+  const meRoute = () => import("@/app/api/v1/me/route");
+  const get = async (query: string, token: string | null) =>
+    (await meRoute()).GET(new Request(`http://localhost:3011/api/v1/me${query}`, { headers: token ? { cookie: `authjs.session-token=${token}` } : {} }), {});
+
+  it("says whether the signed-in person watches the pack, follows a watch, and is private", async () => {
+    const me = await signedIn("contributor", "asker");
+    requestState.token = me.token;
+    let res = await get(`?watching=${packId}`, me.token);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("cache-control")).toContain("no-store");
+    expect(await res.json()).toMatchObject({ user: { role: "contributor" }, watching: false });
+    await watchPack(null, { packId });
+    res = await get(`?watching=${packId}`, me.token);
+    expect(await res.json()).toMatchObject({ watching: true });
+    // Without the parameter the answer stays as before.
+    expect(await (await get("", me.token)).json()).not.toHaveProperty("watching");
+  });
+
+  it("tells nobody anything without a session, and refuses a malformed id with 422", async () => {
+    const anon = await get(`?watching=${packId}`, null);
+    expect(anon.status).toBe(200);
+    expect(await anon.json()).toEqual({ user: null });
+    for (const bad of ["abc", "-1", "1.5", "99999999999"]) {
+      const res = await get(`?watching=${encodeURIComponent(bad)}`, null);
+      expect(res.status, bad).toBe(422);
+      expect(JSON.stringify(await res.json())).toContain("watching");
+    }
+  });
+});

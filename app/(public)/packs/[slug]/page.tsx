@@ -40,7 +40,7 @@ export default async function PackPage(props: Props) {
           <p className="num muted">{labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}</p>
         </div>
         <div className="flex gap-2">
-          <WatchSlot packSlug={pack.slug} packTitle={title} />
+          <WatchSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
           <Link href={`/compare?packs=${pack.slug}`} className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk">Compare…</Link>
         </div>
       </header>
