@@ -1,7 +1,8 @@
 // oEmbed (https://oembed.com) for chart pages: type "rich", honouring maxwidth/maxheight.
 import { z } from "zod";
-import { escapeHtmlAttr, chartLinks } from "./chart-links";
-import { CHART_HEIGHT, CHART_WIDTH, decodeChartState } from "./chart-state";
+import { chartImagePath, chartLinks, escapeHtmlAttr } from "./chart-links";
+import { CHART_MIN_WIDTH, defaultHeight, heightRange } from "./chart-size";
+import { CHART_HEIGHT, CHART_WIDTH, decodeChartState, type ChartState } from "./chart-state";
 import { ATTRIBUTION, DATA_LICENCE_NAME, DATA_LICENCE_URL } from "./licence";
 
 export const oembedQuery = z.object({
@@ -28,6 +29,15 @@ export function chartStateFromUrl(url: string, baseUrl: string) {
   return m?.[1] ? decodeChartState(m[1]) : null;
 }
 
+/** A PNG of the chart within maxwidth × maxheight (oEmbed: "the thumbnail must respect any maxwidth and
+ * maxheight parameters"), at 1× so its pixel size is what we state; none when no allowed size fits. */
+function thumbnail(state: ChartState, baseUrl: string, maxwidth?: number, maxheight?: number) {
+  const width = Math.min(CHART_WIDTH, maxwidth ?? CHART_WIDTH);
+  const height = Math.min(defaultHeight(width), maxheight ?? Infinity);
+  if (width < CHART_MIN_WIDTH || height < heightRange(width).min) return {};
+  return { thumbnail_url: `${baseUrl}${chartImagePath(state, "png", { width, height, scale: 1 })}`, thumbnail_width: width, thumbnail_height: height };
+}
+
 export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, maxheight?: number) {
   const state = chartStateFromUrl(url, baseUrl);
   if (!state) return null;
@@ -51,6 +61,7 @@ export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, 
     html,
     width,
     height,
+    ...thumbnail(state, baseUrl, maxwidth, maxheight),
     license: DATA_LICENCE_NAME,
     license_url: DATA_LICENCE_URL,
   };
