@@ -171,13 +171,17 @@ function ranking(data: ChartData, f: Frame): Kind {
 
 const KINDS = { "label-check": labelCheck, curves, "maker-ranking": ranking } as const;
 
-export function renderChartSvg(data: ChartData, size: ChartSize = DEFAULT_CHART_SIZE): string {
+/** `titleId` must be unique in the page when one page carries several drawings. */
+export function renderChartSvg(data: ChartData, size: ChartSize = DEFAULT_CHART_SIZE, titleId = "chart-title"): string {
   const { state } = data;
   const f = frameFor(size);
   const { width: W, height: H, pad } = f;
   const lineW = W - 2 * pad;
   const [titleFs, noteFs, footFs, creditFs] = [f.font(20), f.font(13), f.font(11), f.font(12)];
-  const credit = wrapText(`Source: Sagline · Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_SHORT}`, lineW, creditFs, 2, EM_BOLD);
+  // The credit breaks between source and licence rather than inside "CC BY 4.0".
+  const dataCredit = `Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_SHORT}`;
+  const oneLine = `Source: Sagline · ${dataCredit}`;
+  const credit = textWidth(oneLine, creditFs, EM_BOLD) <= lineW ? [oneLine] : ["Source: Sagline", ...wrapText(dataCredit, lineW, creditFs, 2, EM_BOLD)];
   const foot = wrapText(`Group: ${data.groupLabel} · ${plural(data.counts.packs, "pack")}, ${plural(data.counts.results, "approved result")}. ${data.leftOut.join(" ")}`, lineW, footFs, f.narrow ? 3 : 2);
   const creditY = (i: number) => H - pad * 0.7 - (credit.length - 1 - i) * creditFs * 1.25;
   const footY = (i: number) => creditY(0) - creditFs * 1.2 - (foot.length - 1 - i) * footFs * 1.3;
@@ -210,8 +214,8 @@ export function renderChartSvg(data: ChartData, size: ChartSize = DEFAULT_CHART_
   const titleTop = pad + titleFs * 0.95;
   const noteTop = pad + title.length * titleFs * 1.2 + noteFs * 1.05;
   return [
-    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" font-family="${FONT}" role="img" aria-labelledby="chart-title">`,
-    `<title id="chart-title">${escapeXml(state.title)}</title>`,
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" font-family="${FONT}" role="img" aria-labelledby="${escapeXml(titleId)}">`,
+    `<title id="${escapeXml(titleId)}">${escapeXml(state.title)}</title>`,
     `<rect width="${W}" height="${H}" fill="#ffffff"/>`,
     ...title.map((l, i) => text(pad, titleTop + i * titleFs * 1.2, l, `font-size="${titleFs}" font-weight="700" fill="${INK}"`)),
     ...note.map((l, i) => text(pad, noteTop + i * noteFs * 1.35, l, `font-size="${noteFs}" fill="${SOFT}"`)),

@@ -18,6 +18,9 @@ describe("oEmbed response", () => {
   it("honours maxwidth and maxheight", () => {
     const narrow = oembedResponse(`${BASE}/charts/view/${s}`, BASE, 400);
     expect(narrow?.width).toBeLessThanOrEqual(400);
+    // Below 560 px the embed shows the square narrow layout: 400 px of chart plus the credit line.
+    expect(narrow?.height).toBe(432);
+    expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 600)?.height).toBe(375 + 32);
     const low = oembedResponse(`${BASE}/embed/chart/${s}`, BASE, 800, 200);
     expect(low?.height).toBeLessThanOrEqual(200);
     expect(low?.width).toBeLessThanOrEqual(800);

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { env } from "@/lib/env";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state";
-import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
@@ -45,7 +45,7 @@ export default async function ChartPage({ params }: Props) {
         <h1>{state.title}</h1>
       </div>
       <figure className="card overflow-hidden p-2">
-        <div className="[&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
+        <ServerChartSvg data={data} />
         <figcaption className="muted px-2 pt-2 text-sm">
           Data: {ATTRIBUTION}, licensed <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
           one like-for-like group are compared. {data.leftOut.join(" ")}
