@@ -27,6 +27,9 @@ export const envSchema = z.object({
   SAGLINE_RATE_LIMITS: z.enum(["on", "off"]).default("on"),
   LOG_MAX_BYTES: z.coerce.number().int().min(1024).max(500 * 1024 * 1024).default(50 * 1024 * 1024),
   PHOTO_MAX_BYTES: z.coerce.number().int().min(1024).max(50 * 1024 * 1024).default(5 * 1024 * 1024),
+  // Draft uploads under incoming/ unused for this many days are removed by `npm run storage:sweep`.
+  INCOMING_MAX_AGE_DAYS: z.coerce.number({ error: "INCOMING_MAX_AGE_DAYS must be a whole number of days" })
+    .int("INCOMING_MAX_AGE_DAYS must be a whole number of days").min(1, "INCOMING_MAX_AGE_DAYS must be at least 1 (day)").max(365, "INCOMING_MAX_AGE_DAYS must be at most 365 (days)").default(7),
 });
 
 export type Env = z.infer<typeof envSchema>;

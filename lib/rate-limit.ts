@@ -11,6 +11,7 @@ export const limits = {
   signInPerIp: { limit: 20, windowS: 15 * 60 },
   submitPerUser: { limit: 20, windowS: 60 * 60 },
   uploadPerUser: { limit: 60, windowS: 60 * 60 },
+  keepDraftPerUser: { limit: 30, windowS: 60 * 60 },
   analysePerIp: { limit: 30, windowS: 60 },
   flagPerIp: { limit: 10, windowS: 60 * 60 },
   apiPerIp: { limit: 600, windowS: 60 },

@@ -28,7 +28,8 @@ export function etagOf(body: string): string {
   return `"${createHash("sha256").update(body).digest("base64url").slice(0, 27)}"`;
 }
 
-function matches(ifNoneMatch: string | null, etag: string): boolean {
+/** Whether an If-None-Match header names this ETag (or `*`); weak forms count, as RFC 9110 §13.1.2 allows. */
+export function ifNoneMatchHits(ifNoneMatch: string | null, etag: string): boolean {
   if (!ifNoneMatch) return false;
   return ifNoneMatch.split(",").some((t) => { const v = t.trim(); return v === "*" || v === etag || v === `W/${etag}`; });
 }
@@ -40,7 +41,7 @@ export function apiJson(req: Request, body: ApiBody, extraHeaders: Record<string
   const text = JSON.stringify({ ...body, meta: { ...body.meta, licence: licenceInfo } });
   const etag = etagOf(text);
   const headers = new Headers({ ...corsHeaders, ...extraHeaders, ETag: etag, "Cache-Control": API_CACHE_CONTROL, Link: `<${DATA_LICENCE_URL}>; rel="license"` });
-  if (matches(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
+  if (ifNoneMatchHits(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
   headers.set("Content-Type", "application/json; charset=utf-8");
   return new Response(req.method === "HEAD" ? null : text, { status: 200, headers });
 }

@@ -1,7 +1,8 @@
 // oEmbed (https://oembed.com) for chart pages: type "rich", honouring maxwidth/maxheight.
 import { z } from "zod";
-import { escapeHtmlAttr, chartLinks } from "./chart-links";
-import { CHART_HEIGHT, CHART_WIDTH, decodeChartState } from "./chart-state";
+import { NARROW_VIEWPORT_PX, NARROW_WIDTH, chartImagePath, chartLinks, escapeHtmlAttr } from "./chart-links";
+import { CHART_MIN_WIDTH, defaultHeight, heightRange } from "./chart-size";
+import { CHART_HEIGHT, CHART_WIDTH, decodeChartState, type ChartState } from "./chart-state";
 import { ATTRIBUTION, DATA_LICENCE_NAME, DATA_LICENCE_URL } from "./licence";
 
 export const oembedQuery = z.object({
@@ -11,9 +12,17 @@ export const oembedQuery = z.object({
   maxheight: z.coerce.number().int().positive().max(10_000).optional(),
 });
 
-/** Height of the embed frame for a width: the chart keeps its aspect ratio, plus a line for the credit. */
+/** Height of the embed frame for a width: the chart's aspect ratio (the embed switches to the square narrow
+ * layout below NARROW_VIEWPORT_PX), plus a line for the credit. */
 const FOOTER_PX = 32;
-const frameHeight = (width: number) => Math.round((width * CHART_HEIGHT) / CHART_WIDTH) + FOOTER_PX;
+const NARROW_RATIO = defaultHeight(NARROW_WIDTH) / NARROW_WIDTH;
+const ratioAt = (width: number) => (width < NARROW_VIEWPORT_PX ? NARROW_RATIO : CHART_HEIGHT / CHART_WIDTH);
+const frameHeight = (width: number) => Math.round(width * ratioAt(width)) + FOOTER_PX;
+/** The widest frame whose chart fits a height. */
+function widthFor(maxheight: number): number {
+  const wide = Math.floor(((maxheight - FOOTER_PX) * CHART_WIDTH) / CHART_HEIGHT);
+  return Math.max(1, wide >= NARROW_VIEWPORT_PX ? wide : Math.floor((maxheight - FOOTER_PX) / NARROW_RATIO));
+}
 
 /** The chart state behind a Sagline URL (permalink or embed), or null when it is not one of ours. */
 export function chartStateFromUrl(url: string, baseUrl: string) {
@@ -28,6 +37,15 @@ export function chartStateFromUrl(url: string, baseUrl: string) {
   return m?.[1] ? decodeChartState(m[1]) : null;
 }
 
+/** A PNG of the chart within maxwidth × maxheight (oEmbed: "the thumbnail must respect any maxwidth and
+ * maxheight parameters"), at 1× so its pixel size is what we state; none when no allowed size fits. */
+function thumbnail(state: ChartState, baseUrl: string, maxwidth?: number, maxheight?: number) {
+  const width = Math.min(CHART_WIDTH, maxwidth ?? CHART_WIDTH);
+  const height = Math.min(defaultHeight(width), maxheight ?? Infinity);
+  if (width < CHART_MIN_WIDTH || height < heightRange(width).min) return {};
+  return { thumbnail_url: `${baseUrl}${chartImagePath(state, "png", { width, height, scale: 1 })}`, thumbnail_width: width, thumbnail_height: height };
+}
+
 export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, maxheight?: number) {
   const state = chartStateFromUrl(url, baseUrl);
   if (!state) return null;
@@ -35,7 +53,7 @@ export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, 
   let height = frameHeight(width);
   if (maxheight !== undefined && height > maxheight) {
     height = maxheight;
-    width = Math.min(width, Math.max(1, Math.floor(((maxheight - FOOTER_PX) * CHART_WIDTH) / CHART_HEIGHT)));
+    width = Math.min(width, widthFor(maxheight));
   }
   const links = chartLinks(state);
   const html = `<iframe src="${baseUrl}${links.embed}" title="${escapeHtmlAttr(state.title)}" loading="lazy" width="${width}" height="${height}" style="max-width:100%;border:0" data-sagline-embed></iframe><script async src="${baseUrl}/embed-resize.js"></script>`;
@@ -51,6 +69,7 @@ export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, 
     html,
     width,
     height,
+    ...thumbnail(state, baseUrl, maxwidth, maxheight),
     license: DATA_LICENCE_NAME,
     license_url: DATA_LICENCE_URL,
   };

@@ -1,4 +1,6 @@
 // The OpenAPI 3.1 document served at /api/v1/openapi.json, built from the same field lists as the downloads.
+import { CHART_MAX_HEIGHT, CHART_MAX_WIDTH, CHART_MIN_HEIGHT, CHART_MIN_WIDTH, DEFAULT_PNG_SCALE, MAX_PNG_SIDE, PNG_SCALES } from "./chart-size";
+import { CHART_WIDTH } from "./chart-state";
 import { makerFields, packFields, resultFields, type Field } from "./fields";
 import { ATTRIBUTION_TEXT, DATA_LICENCE_NAME, DATA_LICENCE_URL, DATA_SCHEMA_VERSION } from "./licence";
 
@@ -70,6 +72,35 @@ const get = (summary: string, parameters: Schema[], schema: Schema) => ({ get: {
 const pathParam = (name: string, type = "string") => ({ name, in: "path", required: true, schema: { type } });
 const data = (ref: string) => ({ type: "object", properties: { data: { $ref: `#/components/schemas/${ref}` } } });
 
+const errorBody = (description: string) => ({ description, content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } });
+
+/** The server-drawn chart images (not JSON, so described on their own). */
+const chartImage = {
+  get: {
+    summary: "A chart drawn on the server as SVG or PNG, licence and source inside",
+    description: `The state is the last part of a chart permalink (/charts/view/{state}). Without size parameters the chart is ${CHART_WIDTH} × 500 CSS pixels and the PNG is drawn at scale ${DEFAULT_PNG_SCALE} (1600 × 1000 pixels). Below 560 pixels of width the layout turns narrow: titles wrap, legends stack and text stays at least 10 px.`,
+    parameters: [
+      { name: "state", in: "path", required: true, description: "The chart's state, base64url-encoded JSON (from a permalink).", schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,4000}$" } },
+      { name: "file", in: "path", required: true, schema: { type: "string", enum: ["chart.svg", "chart.png"] } },
+      { name: "width", in: "query", description: "Width of the drawing in CSS pixels (the SVG's width and viewBox; the PNG's width before scaling). A plain whole number.", schema: { type: "integer", minimum: CHART_MIN_WIDTH, maximum: CHART_MAX_WIDTH, default: CHART_WIDTH } },
+      { name: "height", in: "query", description: `Height in CSS pixels. Default: 5/8 of the width, at least 400. Allowed: from max(${CHART_MIN_HEIGHT}, 0.4 × width) to min(${CHART_MAX_HEIGHT}, 1.5 × width).`, schema: { type: "integer", minimum: CHART_MIN_HEIGHT, maximum: CHART_MAX_HEIGHT } },
+      { name: "scale", in: "query", description: `chart.png only (400 for SVG): device pixels per CSS pixel, so the PNG is width × scale by height × scale pixels; no side may exceed ${MAX_PNG_SIDE}.`, schema: { type: "integer", enum: [...PNG_SCALES], default: DEFAULT_PNG_SCALE } },
+      { name: "download", in: "query", description: "1: sent as an attachment named sagline-<title>-<width>x<height>.<ext>.", schema: { type: "string", enum: ["1"] } },
+    ],
+    responses: {
+      "200": {
+        description: "The image. Cached publicly for an hour; the ETag covers the size and scale.",
+        headers: { ETag: { schema: { type: "string" } }, "Cache-Control": { schema: { type: "string" } } },
+        content: { "image/svg+xml": { schema: { type: "string" } }, "image/png": { schema: { type: "string", contentMediaType: "image/png", contentEncoding: "binary" } } },
+      },
+      "304": { description: "Not modified (If-None-Match matched the ETag)." },
+      "400": errorBody("width, height or scale is malformed or out of range; the message and fieldErrors say what is allowed."),
+      "404": errorBody("The state is not a chart."),
+      "429": errors["429"],
+    },
+  },
+};
+
 export function openApiDocument(serverUrl: string) {
   return {
     openapi: "3.1.0",
@@ -91,6 +122,7 @@ export function openApiDocument(serverUrl: string) {
       "/api/v1/groups/{key}": get("One group with per-pack medians", [pathParam("key"), ...packFilterParams], data("Group")),
       "/api/v1/charts": get("Saved charts", [], { type: "object", properties: { data: { type: "array", items: { $ref: "#/components/schemas/Chart" } } } }),
       "/api/v1/charts/{id}": get("One saved chart", [pathParam("id")], data("Chart")),
+      "/charts/image/{state}/{file}": chartImage,
     },
     components: {
       schemas: {

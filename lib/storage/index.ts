@@ -1,7 +1,7 @@
 // Upload storage through the S3 API only (locally the s3rver stand-in; hosted, any S3-compatible bucket).
 import type { Readable } from "node:stream";
 import {
-  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, PutObjectCommand, S3Client,
+  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client,
 } from "@aws-sdk/client-s3";
 import { Upload } from "@aws-sdk/lib-storage";
 import { env } from "@/lib/env";
@@ -131,5 +131,64 @@ export async function deleteObject(key: string): Promise<void> {
     await storageClient().send(new DeleteObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
   } catch (err) {
     if (!notFound(err)) throw unavailable(err);
+  }
+}
+
+export type StoredObject = { key: string; bytes: number; lastModified: Date };
+
+/** Every object under a prefix, page by page (1,000 keys a request). */
+export async function* listObjects(prefix: string): AsyncGenerator<StoredObject> {
+  let token: string | undefined;
+  do {
+    let page;
+    try {
+      page = await storageClient().send(new ListObjectsV2Command({ Bucket: env().S3_BUCKET, Prefix: prefix, ContinuationToken: token }));
+    } catch (err) {
+      throw unavailable(err);
+    }
+    for (const o of page.Contents ?? []) if (o.Key) yield { key: o.Key, bytes: o.Size ?? 0, lastModified: o.LastModified ?? new Date(0) };
+    token = page.IsTruncated ? page.NextContinuationToken : undefined;
+  } while (token);
+}
+
+// When a draft last used its file: S3 sets LastModified when the object is written (a copy onto itself
+// counts), but some S3-compatible stores (the local stand-in among them) keep it on such a copy, so the
+// time is also written into the object's metadata.
+const USED_AT = "draft-used-at";
+
+export type ObjectInfo = { bytes: number; contentType: string | undefined; lastUsedAt: Date; touchedAt: Date | null; metadata: Record<string, string> };
+
+/** The object's size, content type and last use (the later of LastModified and its draft-used-at), or null. */
+export async function objectInfo(key: string): Promise<ObjectInfo | null> {
+  try {
+    const out = await storageClient().send(new HeadObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
+    const metadata = out.Metadata ?? {};
+    const usedAt = Date.parse(metadata[USED_AT] ?? "");
+    const modified = out.LastModified?.getTime() ?? 0;
+    const touchedAt = Number.isFinite(usedAt) ? new Date(usedAt) : null;
+    return { bytes: out.ContentLength ?? 0, contentType: out.ContentType, lastUsedAt: new Date(Math.max(modified, touchedAt?.getTime() ?? 0)), touchedAt, metadata };
+  } catch (err) {
+    if (notFound(err)) return null;
+    throw unavailable(err);
+  }
+}
+
+/**
+ * Marks an object as used now (a copy onto itself with the time in its metadata), unless it was marked in
+ * the last `minIntervalMs` (so a busy draft costs at most one copy an hour). False when there is no such object.
+ */
+export async function touchObject(key: string, now = new Date(), minIntervalMs = 60 * 60 * 1000): Promise<boolean> {
+  const info = await objectInfo(key);
+  if (!info) return false;
+  if (info.touchedAt && now.getTime() - info.touchedAt.getTime() < minIntervalMs) return true;
+  try {
+    await storageClient().send(new CopyObjectCommand({
+      Bucket: env().S3_BUCKET, Key: key, CopySource: `${env().S3_BUCKET}/${key}`, MetadataDirective: "REPLACE",
+      ContentType: info.contentType, Metadata: { ...info.metadata, [USED_AT]: now.toISOString() },
+    }));
+    return true;
+  } catch (err) {
+    if (notFound(err)) return false;
+    throw unavailable(err);
   }
 }

@@ -1,7 +1,9 @@
 // Storage keys (no I/O here). Files uploaded while filling in the submission form land under
 // incoming/<contributor>/, so a submission can only use files its own contributor uploaded; on submit
 // they are copied to their lasting place (logs/ by content hash, photos/ by contributor). Abandoned
-// drafts' files are left under incoming/, which a bucket lifecycle rule expires on hosted storage.
+// drafts' files are left under incoming/ until `npm run storage:sweep` (lib/storage/sweep.ts) removes
+// them; hosted buckets also expire incoming/ with a lifecycle rule.
+export const INCOMING_PREFIX = "incoming/";
 const UUID = "[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}";
 export const PHOTO_EXTENSIONS = ["jpg", "png", "webp"] as const;
 export type PhotoExtension = (typeof PHOTO_EXTENSIONS)[number];

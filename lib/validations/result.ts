@@ -124,3 +124,7 @@ export type ResubmitResultInput = z.output<typeof resubmitResultSchema>;
 
 /** Re-check of a stored log with the current pack and method card (the preview after a reload or an edit). */
 export const previewStoredLogSchema = z.object({ log: logRefSchema, pack: packStepSchema, method: methodCardSchema });
+
+/** The files a draft in the browser still points at, to keep them from the storage sweep. */
+export const keepDraftFilesSchema = z.object({ logKey: logRefSchema.shape.key.nullable(), photoKeys: photoKeysSchema });
+export type KeepDraftFilesInput = z.output<typeof keepDraftFilesSchema>;

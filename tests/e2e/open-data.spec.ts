@@ -43,8 +43,10 @@ test("a journalist builds a chart, embeds it on another site, and it renders and
   await page.goto(`${otherOrigin}/article`);
   const frame = page.frameLocator("iframe[data-sagline-embed]");
   await expect(frame.locator("svg title").first()).toHaveText("Makers against their labels");
-  await expect(frame.locator("svg")).toContainText("Source: Sagline");
-  await expect(frame.locator("svg")).toContainText("CC BY 4.0");
+  // Two drawings travel in the embed (800 and 400 px layouts); the frame's width picks the one shown.
+  await expect(frame.locator("svg:visible")).toContainText("Source: Sagline");
+  await expect(frame.locator("svg:visible")).toContainText("CC BY 4.0");
+  await expect(frame.locator("svg:visible")).toHaveAttribute("viewBox", "0 0 800 500");
   // The resize script sets the frame to the chart's height (600 px wide → about 375 px of chart plus the credit line).
   const iframe = page.locator("iframe[data-sagline-embed]");
   await expect.poll(async () => Number((await iframe.getAttribute("height")) ?? 0)).toBeLessThan(500);
@@ -52,6 +54,14 @@ test("a journalist builds a chart, embeds it on another site, and it renders and
   expect(height).toBeGreaterThan(350);
   const box = await iframe.boundingBox();
   expect(Math.round(box?.width ?? 0)).toBe(600);
+
+  // In a phone-width column the frame shows the narrow layout (larger text, taller) and resizes to it.
+  pages.set("/phone", `<!doctype html><html><body style="margin:0"><main style="width:360px">${snippet}</main></body></html>`);
+  await page.goto(`${otherOrigin}/phone`);
+  const narrow = page.frameLocator("iframe[data-sagline-embed]").locator("svg:visible");
+  await expect(narrow).toHaveAttribute("viewBox", "0 0 400 400");
+  await expect(narrow).toContainText("Source: Sagline");
+  await expect.poll(async () => Number((await page.locator("iframe[data-sagline-embed]").getAttribute("height")) ?? 0)).toBeGreaterThan(360);
 });
 
 test("embeds are cacheable, cookie-free and frameable; the rest of the site is not", async ({ page, request, baseURL }) => {
@@ -70,7 +80,7 @@ test("embeds are cacheable, cookie-free and frameable; the rest of the site is n
 
   pages.set("/framing", `<!doctype html><html><body><iframe id="site" src="${baseURL}/charts" width="800" height="400"></iframe><iframe id="embed" src="${baseURL}${first.embed}" width="800" height="400"></iframe></body></html>`);
   await page.goto(`${otherOrigin}/framing`);
-  await expect(page.frameLocator("#embed").locator("svg")).toContainText("Source: Sagline");
+  await expect(page.frameLocator("#embed").locator("svg:visible")).toContainText("Source: Sagline");
   // The browser refuses to show the main site inside the other origin's page.
   await page.waitForTimeout(1000);
   await expect(page.frameLocator("#site").getByRole("heading", { name: "Charts" })).toHaveCount(0);

@@ -78,7 +78,10 @@ test("a new contributor signs in by e-mail, picks a bench profile, submits a res
   const mine = page.getByTestId("my-results").getByRole("listitem").filter({ hasText: "Pending review" });
   await expect(mine).toHaveCount(1);
 
-  // The receipt went through the mail catcher.
-  await page.goto("/dev/mail");
-  await expect(page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) })).toBeVisible();
+  // The receipt went through the mail catcher. It is sent after the response, so the page is loaded again
+  // until it shows up.
+  await expect(async () => {
+    await page.goto("/dev/mail");
+    await expect(page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) })).toBeVisible({ timeout: 1000 });
+  }).toPass({ timeout: 15_000 });
 });

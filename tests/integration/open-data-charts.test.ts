@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as oembed } from "@/app/api/oembed/route";
 import { GET as image } from "@/app/(public)/charts/image/[state]/[file]/route";
 import { GET as listCharts } from "@/app/api/v1/charts/route";
+import { GET as getOpenApi } from "@/app/api/v1/openapi.json/route";
 import { db } from "@/db";
 import { savedCharts } from "@/db/schema";
 import { encodeChartState, type ChartState } from "@/lib/open-data/chart-state";
@@ -62,6 +63,81 @@ describe("chart images", () => {
   });
   it("404s a broken state", async () => {
     expect((await image(req("/charts/image/x/chart.svg"), { params: Promise.resolve({ state: "nope", file: "chart.svg" }) })).status).toBe(404);
+  });
+});
+
+describe("chart image sizes (width, height, PNG scale)", () => {
+  const params = (file: string) => ({ params: Promise.resolve({ state: encodeChartState(state), file }) });
+  const get = (file: "chart.png" | "chart.svg", query = "", headers: Record<string, string> = {}) =>
+    image(new Request(`http://localhost:3000/charts/image/x/${file}${query}`, { headers: { "x-forwarded-for": "203.0.113.6", ...headers } }), params(file));
+  // PNG: the IHDR chunk follows the 8-byte signature; width and height are big-endian at bytes 16 and 20 (RFC 2083 §4.1.1).
+  const pngSize = async (res: Response) => {
+    const bytes = Buffer.from(await res.arrayBuffer());
+    expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    expect(bytes.toString("ascii", 12, 16)).toBe("IHDR");
+    return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
+  };
+
+  it("draws the PNG at width × scale by height × scale pixels, 1600 × 1000 by default", async () => {
+    expect(await pngSize(await get("chart.png"))).toEqual({ width: 1600, height: 1000 });
+    expect(await pngSize(await get("chart.png", "?width=400&scale=3"))).toEqual({ width: 1200, height: 1200 });
+    expect(await pngSize(await get("chart.png", "?width=1000&height=700&scale=1"))).toEqual({ width: 1000, height: 700 });
+    expect(await pngSize(await get("chart.png", "?width=320"))).toEqual({ width: 640, height: 800 });
+  });
+
+  it("gives the SVG the asked width, height and viewBox", async () => {
+    const svg = await (await get("chart.svg", "?width=480")).text();
+    expect(svg).toMatch(/^<svg [^>]*viewBox="0 0 480 400" width="480" height="400"/);
+    const tall = await (await get("chart.svg", "?width=600&height=900")).text();
+    expect(tall).toMatch(/^<svg [^>]*viewBox="0 0 600 900" width="600" height="900"/);
+    expect(await (await get("chart.svg")).text()).toMatch(/^<svg [^>]*viewBox="0 0 800 500" width="800" height="500"/);
+  });
+
+  it.each([
+    ["chart.png", "?width=abc", "width"], ["chart.png", "?width=800.5", "width"], ["chart.png", "?width=100", "width"], ["chart.png", "?width=1601", "width"],
+    ["chart.png", "?width=320&height=600", "height"], ["chart.png", "?height=2000", "height"], ["chart.png", "?scale=4", "scale"], ["chart.png", "?scale=two", "scale"],
+    ["chart.png", "?width=1600&scale=3", "scale"], ["chart.svg", "?scale=2", "scale"], ["chart.svg", "?width=99999", "width"],
+  ] as const)("%s%s answers 400 with a plain JSON message on %s", async (file, query, field) => {
+    const res = await get(file, query);
+    expect(res.status).toBe(400);
+    expect(res.headers.get("content-type")).toContain("application/json");
+    const body = (await res.json()) as { error: { code: string; message: string; fieldErrors: Record<string, string[]> } };
+    expect(body.error.code).toBe("bad_request");
+    expect(Object.keys(body.error.fieldErrors)).toEqual([field]);
+    expect(body.error.message).toContain(field);
+    expect(body.error.message).not.toMatch(/at .+\.ts|ZodError|Error:/);
+  });
+
+  it("keeps the bounds the OpenAPI document states", async () => {
+    type Param = { name: string; in: string; schema: { minimum?: number; maximum?: number; enum?: (number | string)[] } };
+    const doc = (await (await getOpenApi(req("/api/v1/openapi.json"), noParams)).json()) as { paths: Record<string, { get: { parameters: Param[]; responses: Record<string, unknown> } }> };
+    const op = doc.paths["/charts/image/{state}/{file}"]?.get;
+    expect(op?.responses).toHaveProperty("400");
+    const schema = (name: string) => op?.parameters.find((p) => p.name === name && p.in === "query")?.schema ?? {};
+    const { minimum = NaN, maximum = NaN } = schema("width");
+    expect((await get("chart.svg", `?width=${minimum}`)).status).toBe(200);
+    expect((await get("chart.svg", `?width=${maximum}`)).status).toBe(200);
+    expect((await get("chart.svg", `?width=${minimum - 1}`)).status).toBe(400);
+    expect((await get("chart.svg", `?width=${maximum + 1}`)).status).toBe(400);
+    for (const scale of schema("scale").enum ?? []) expect((await get("chart.png", `?width=${minimum}&scale=${scale}`)).status).toBe(200);
+    expect(schema("scale").enum).toEqual([1, 2, 3]);
+  });
+
+  it("tags each size and scale apart, answers a matching If-None-Match with 304, and names downloads by pixel size", async () => {
+    const a = await get("chart.png");
+    const b = await get("chart.png", "?scale=1");
+    const c = await get("chart.png", "?width=400");
+    const d = await get("chart.svg");
+    const tags = [a, b, c, d].map((r) => r.headers.get("etag"));
+    expect(tags.every((t) => /^"[A-Za-z0-9_-]{27}"$/.test(t ?? ""))).toBe(true);
+    expect(new Set(tags).size).toBe(4);
+    expect((await get("chart.png", "?width=400")).headers.get("etag")).toBe(tags[2]);
+    const again = await get("chart.png", "?width=400", { "if-none-match": tags[2] ?? "" });
+    expect(again.status).toBe(304);
+    expect(await again.text()).toBe("");
+    expect((await get("chart.png", "", { "if-none-match": tags[2] ?? "" })).status).toBe(200);
+    const download = await get("chart.png", "?width=400&scale=3&download=1");
+    expect(download.headers.get("content-disposition")).toBe(`attachment; filename="sagline-${P}-label-check-1200x1200.png"`);
   });
 });
 

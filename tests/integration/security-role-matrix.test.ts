@@ -26,7 +26,7 @@ const PUBLIC_ACTIONS = new Set(["requestSignInLink", "signOut"]);
 // fails until it is added here, so nobody adds one without deciding who may call it.
 const EXPECTED_ACTIONS: Record<string, Permission> = {
   watchPack: "watch.manage", unwatchPack: "watch.manage", updateProfile: "account.update",
-  withdrawResult: "result.withdraw-own", previewStoredLog: "upload.create", submitResult: "result.submit",
+  withdrawResult: "result.withdraw-own", previewStoredLog: "upload.create", keepDraftFiles: "upload.create", submitResult: "result.submit",
   resubmitResult: "result.resubmit-own", saveBenchProfile: "bench-profile.manage", deleteBenchProfile: "bench-profile.manage",
   editPackLabel: "catalogue.edit", mergeMakers: "catalogue.merge", mergePacks: "catalogue.merge", setUserRole: "user.set-role",
   approveResult: "result.review", rejectResult: "result.review", requestChanges: "result.review", resolveFlag: "flag.resolve",

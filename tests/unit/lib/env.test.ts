@@ -27,4 +27,11 @@ describe("environment validation (lib/env.ts)", () => {
   it("treats empty strings as unset", () => {
     expect(parseEnv({ SMTP_URL: "" }).SMTP_URL).toBe("smtp://127.0.0.1:2525");
   });
+  it("takes the draft-upload age in whole days from 1 to 365, 7 by default", () => {
+    expect(parseEnv({}).INCOMING_MAX_AGE_DAYS).toBe(7);
+    expect(parseEnv({ INCOMING_MAX_AGE_DAYS: "30" }).INCOMING_MAX_AGE_DAYS).toBe(30);
+    for (const bad of ["0", "1.5", "week", "366", "-3"]) {
+      expect(() => parseEnv({ INCOMING_MAX_AGE_DAYS: bad }), bad).toThrow(/INCOMING_MAX_AGE_DAYS: INCOMING_MAX_AGE_DAYS must/);
+    }
+  });
 });

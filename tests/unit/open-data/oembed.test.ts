@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { encodeChartState } from "@/lib/open-data/chart-state";
+import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { chartStateFromUrl, oembedResponse } from "@/lib/open-data/oembed";
 
 const BASE = "http://localhost:3000";
@@ -17,6 +18,9 @@ describe("oEmbed response", () => {
   it("honours maxwidth and maxheight", () => {
     const narrow = oembedResponse(`${BASE}/charts/view/${s}`, BASE, 400);
     expect(narrow?.width).toBeLessThanOrEqual(400);
+    // Below 560 px the embed shows the square narrow layout: 400 px of chart plus the credit line.
+    expect(narrow?.height).toBe(432);
+    expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 600)?.height).toBe(375 + 32);
     const low = oembedResponse(`${BASE}/embed/chart/${s}`, BASE, 800, 200);
     expect(low?.height).toBeLessThanOrEqual(200);
     expect(low?.width).toBeLessThanOrEqual(800);
@@ -27,5 +31,22 @@ describe("oEmbed response", () => {
     expect(chartStateFromUrl(`${BASE}/packs/x`, BASE)).toBeNull();
     expect(chartStateFromUrl("not a url", BASE)).toBeNull();
     expect(oembedResponse(`${BASE}/charts/view/garbage`, BASE)).toBeNull();
+  });
+  it("offers a PNG thumbnail whose stated size is the size its URL draws, within maxwidth and maxheight (§2.3.4)", () => {
+    const drawn = (url: string) => {
+      const u = new URL(url);
+      const out = parseChartImageSize(u.searchParams, "png");
+      return out.ok ? { width: out.size.width * out.size.scale, height: out.size.height * out.size.scale } : null;
+    };
+    for (const [maxwidth, maxheight] of [[undefined, undefined], [400, undefined], [800, 350], [1200, 900]] as const) {
+      const r = oembedResponse(`${BASE}/charts/view/${s}`, BASE, maxwidth, maxheight);
+      expect(r?.thumbnail_url).toContain(`${BASE}/charts/image/${s}/chart.png?`);
+      expect(drawn(r?.thumbnail_url ?? "")).toEqual({ width: r?.thumbnail_width, height: r?.thumbnail_height });
+      expect(r?.thumbnail_width).toBeLessThanOrEqual(maxwidth ?? 800);
+      expect(r?.thumbnail_height).toBeLessThanOrEqual(maxheight ?? 500);
+    }
+    // Narrower than the smallest drawing, or too low for its width: no thumbnail rather than a wrong one.
+    expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 200)).not.toHaveProperty("thumbnail_url");
+    expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 800, 250)).not.toHaveProperty("thumbnail_url");
   });
 });

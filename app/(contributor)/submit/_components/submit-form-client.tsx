@@ -19,6 +19,7 @@ import { PhotosStep } from "./photos-step";
 import { StepList } from "./step-list";
 import type { BenchProfileOption, Limits, MakerOption, PackFactsClient, PackOption } from "./types";
 import { draftKey, readDraft, useDraftStorage } from "./use-draft";
+import { useKeepDraftFiles } from "./use-keep-draft-files";
 
 type Props = { userId: string; packs: PackOption[]; makers: MakerOption[]; profiles: BenchProfileOption[]; limits: Limits };
 type Path = FieldPath<SubmitResultValues>;
@@ -94,6 +95,16 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
     const sub = watch((values) => draft.save({ step, values }));
     return () => sub.unsubscribe();
   }, [restored, step, done, draft, watch, getValues]);
+
+  // The files of a restored draft are kept from the storage sweep; any already gone are asked for again.
+  useKeepDraftFiles(
+    restored && !done,
+    () => ({ logKey: getValues("log.key") || null, photoKeys: getValues("photoKeys") ?? [] }),
+    ({ logMissing, missingPhotoKeys }) => {
+      if (logMissing) setError("log", { type: "server", message: "The uploaded log is no longer stored: please upload it again." });
+      if (missingPhotoKeys.length) setError("photoKeys", { type: "server", message: "A photo is no longer stored: remove it and add it again." });
+    },
+  );
 
   const recheck = useCallback(() => {
     const { log, pack, method } = getValues();

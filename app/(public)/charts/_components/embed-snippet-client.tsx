@@ -1,8 +1,10 @@
 "use client";
-// The embed snippet with a copy button (falls back to selecting the text where the clipboard is refused).
+// A snippet to paste (the embed frame, or the plain image) with a copy button (falls back to selecting the text where the clipboard is refused).
 import { useRef, useState } from "react";
 
-export function EmbedSnippet({ snippet }: { snippet: string }) {
+type Props = { snippet: string; id?: string; label?: string; hint?: string; copyLabel?: string };
+
+export function EmbedSnippet({ snippet, id = "embed-snippet", label = "Embed snippet", copyLabel = "Copy snippet", hint = "Paste it into your page; the frame resizes itself to the chart." }: Props) {
   const ref = useRef<HTMLTextAreaElement>(null);
   const [copied, setCopied] = useState(false);
   async function copy() {
@@ -16,12 +18,12 @@ export function EmbedSnippet({ snippet }: { snippet: string }) {
   }
   return (
     <div className="space-y-2">
-      <label htmlFor="embed-snippet" className="text-sm font-medium">Embed snippet</label>
-      <textarea id="embed-snippet" ref={ref} readOnly value={snippet} rows={4} className="num block w-full rounded border border-ink/20 bg-paper-sunk p-2 text-xs dark:border-night-line dark:bg-night-sunk" onFocus={(e) => e.currentTarget.select()} />
+      <label htmlFor={id} className="text-sm font-medium">{label}</label>
+      <textarea id={id} ref={ref} readOnly value={snippet} rows={4} className="num block w-full rounded border border-ink/20 bg-paper-sunk p-2 text-xs dark:border-night-line dark:bg-night-sunk" onFocus={(e) => e.currentTarget.select()} />
       <button type="button" onClick={copy} className="rounded border border-cell-600 px-3 py-1 text-sm font-medium text-cell-700 hover:bg-cell-50 dark:text-cell-400 dark:hover:bg-night-sunk">
-        {copied ? "Copied" : "Copy snippet"}
+        {copied ? "Copied" : copyLabel}
       </button>
-      <p className="muted text-xs" aria-live="polite">{copied ? "The snippet is on your clipboard." : "Paste it into your page; the frame resizes itself to the chart."}</p>
+      <p className="muted text-xs" aria-live="polite">{copied ? "The snippet is on your clipboard." : hint}</p>
     </div>
   );
 }

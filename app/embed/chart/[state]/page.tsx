@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
 import { decodeChartState } from "@/lib/open-data/chart-state";
-import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 export const revalidate = 3600;
@@ -28,7 +28,7 @@ export default async function EmbedChartPage({ params }: Props) {
   const links = chartLinks(state);
   return (
     <div id="sagline-embed" className="p-1">
-      <div className="[&>svg]:block [&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
+      <ServerChartSvg data={data} />
       <p className="px-1 pt-1 text-xs text-ink-soft">
         <a href={links.permalink} target="_blank" rel="noopener">View on Sagline</a> · Data{" "}
         <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">{DATA_LICENCE_SHORT}</a>

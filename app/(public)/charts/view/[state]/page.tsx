@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { env } from "@/lib/env";
 import { loadChartData } from "@/lib/open-data/chart-data";
-import { chartLinks, embedSnippet } from "@/lib/open-data/chart-links";
+import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state";
-import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
@@ -45,19 +45,37 @@ export default async function ChartPage({ params }: Props) {
         <h1>{state.title}</h1>
       </div>
       <figure className="card overflow-hidden p-2">
-        <div className="[&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: renderChartSvg(data) }} />
+        <ServerChartSvg data={data} />
         <figcaption className="muted px-2 pt-2 text-sm">
           Data: {ATTRIBUTION}, licensed <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
           one like-for-like group are compared. {data.leftOut.join(" ")}
         </figcaption>
       </figure>
       <section className="grid gap-6 lg:grid-cols-[2fr_1fr]" aria-label="Use this chart">
-        <EmbedSnippet snippet={embedSnippet(state, base)} />
+        <div className="space-y-6">
+          <EmbedSnippet snippet={embedSnippet(state, base)} />
+          <EmbedSnippet
+            snippet={imageSnippet(state, base)}
+            id="image-snippet"
+            label="Image snippet (no frame, no script)"
+            copyLabel="Copy image snippet"
+            hint="For newsletters and pages that refuse frames: a linked PNG, sharp on high-density screens, with a taller layout on phones."
+          />
+        </div>
         <div className="space-y-2 text-sm">
           <h2 className="text-base">Download</h2>
           <ul className="space-y-1">
-            <li><a href={`${links.png}?download=1`} download>PNG image (1600 × 1000)</a></li>
-            <li><a href={`${links.svg}?download=1`} download>SVG image</a></li>
+            {PNG_DOWNLOADS.map((d) => {
+              const px = pngPixels(d);
+              const href = chartImagePath(state, "png", { width: d.width, scale: d.scale });
+              return (
+                <li key={d.label}>
+                  <a href={`${href}${href.includes("?") ? "&" : "?"}download=1`} download>{d.label} ({px.width} × {px.height})</a>{" "}
+                  <span className="muted">— {d.note}</span>
+                </li>
+              );
+            })}
+            <li><a href={`${links.svg}?download=1`} download>SVG image</a> <span className="muted">— sharp at any size</span></li>
             <li><a href={`/data/download/results.csv?group=${state.group}${state.maker ? `&maker=${state.maker}` : ""}${state.cells ? `&cells=${state.cells}` : ""}`}>The results behind it (CSV)</a></li>
           </ul>
           <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>

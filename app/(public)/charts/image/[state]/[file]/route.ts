@@ -1,10 +1,13 @@
-// GET /charts/image/{state}/chart.svg|chart.png — the chart drawn on the server (licence inside); ?download=1 saves it.
+// GET /charts/image/{state}/chart.svg|chart.png — the chart drawn on the server (licence inside), at the asked
+// width/height (and PNG scale); ?download=1 saves it. A bad size answers 400 with what is allowed.
 import { z } from "zod";
+import { etagOf, ifNoneMatchHits } from "@/lib/open-data/api";
 import { AppError } from "@/lib/errors";
 import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
 import { withPermission } from "@/lib/route";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { svgToPng } from "@/lib/open-data/chart-png";
+import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { decodeChartState } from "@/lib/open-data/chart-state";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
@@ -16,15 +19,27 @@ export const GET = withPermission<{ params: Promise<{ state: string; file: strin
   const p = params.safeParse(await ctx.params);
   const state = p.success ? decodeChartState(p.data.state) : null;
   if (!p.success || !state) throw new AppError("not_found", "No such chart.");
-  const svg = renderChartSvg(await loadChartData(state));
   const png = p.data.file === "chart.png";
+  const search = new URL(req.url).searchParams;
+  const sized = parseChartImageSize(search, png ? "png" : "svg");
+  if (!sized.ok) throw new AppError("bad_request", Object.values(sized.fieldErrors).flat().join(" "), sized.fieldErrors);
+  const { width, height, scale } = sized.size;
+  const svg = renderChartSvg(await loadChartData(state), { width, height });
   const slug = state.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "chart";
+  // The drawing carries the size, so its text plus the format and scale is the whole picture: equal tags
+  // mean equal bytes, and a 304 skips the PNG render.
+  const etag = etagOf(`${png ? `png@${scale}` : "svg"}\n${svg}`);
   const headers: Record<string, string> = {
     "Content-Type": png ? "image/png" : "image/svg+xml; charset=utf-8",
     "Cache-Control": "public, max-age=3600, stale-while-revalidate=86400",
     "Access-Control-Allow-Origin": "*",
+    "Access-Control-Expose-Headers": "ETag",
+    ETag: etag,
     Link: `<${DATA_LICENCE_URL}>; rel="license"`,
   };
-  if (new URL(req.url).searchParams.get("download") === "1") headers["Content-Disposition"] = `attachment; filename="sagline-${slug}.${png ? "png" : "svg"}"`;
-  return new Response(png ? new Uint8Array(svgToPng(svg)) : svg, { headers });
+  if (search.get("download") === "1") {
+    headers["Content-Disposition"] = `attachment; filename="sagline-${slug}-${width * scale}x${height * scale}.${png ? "png" : "svg"}"`;
+  }
+  if (ifNoneMatchHits(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
+  return new Response(png ? new Uint8Array(svgToPng(svg, scale)) : svg, { headers });
 });
