@@ -7,7 +7,7 @@ import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
 import { listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
 import { getApiPackBySlug, getMakerBySlug, listAllMakers, listMakersPage, type Page } from "@/db/queries/open-data/packs";
-import { getApprovedResult, listGroupCurves, listResultsPage } from "@/db/queries/open-data/results";
+import { listGroupCurves, listResultsPage } from "@/db/queries/open-data/results";
 import { getPackDetail } from "@/db/queries/pack-detail";
 import { listActivePacks, listPackRows } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
@@ -56,41 +56,66 @@ export function cachedGroupOptions(minResults: number) {
   return unstable_cache(() => listGroupOptions(minResults), ["group-options", String(minResults)], { tags: [t.results, t.packs], revalidate })();
 }
 
-// ── The public API's reads (app/api/v1). Filters are validated by zod before they reach here; the cache key
-// is their JSON with sorted keys, so equal queries share one entry whatever the order of the search params.
+// ── The public API's reads (app/api/v1) and chart data. Filters are validated by zod before they reach here.
+// The cache keeps one entry per key on disk, and anyone can make up queries, so only bounded key spaces are
+// cached: catalogue entities that exist (checked against the cached catalogue first), the unfiltered or
+// group/pack/maker/cells-filtered lists, and the first pages. Free-text and range filters, far pages and
+// unknown slugs or groups go straight to the database (an unknown one answers empty without a query).
+/** Pages beyond this are read from the database each time. */
+const CACHED_PAGES = 20;
+const CACHEABLE_FILTERS = new Set(["group", "pack", "maker", "cells"]);
+
 function keyOf(value: Record<string, unknown>): string {
-  return JSON.stringify(Object.keys(value).sort().map((k) => [k, value[k]]));
+  return JSON.stringify(Object.keys(value).filter((k) => value[k] !== undefined).sort().map((k) => [k, value[k]]));
+}
+
+async function knownGroup(key: string): Promise<boolean> {
+  return (await cachedGroups()).some((g) => g.key === key);
+}
+
+/** Only catalogue slugs that exist (and, for a group, one with published results) make a cache entry. */
+async function boundedFilters(f: { group?: string; pack?: string; maker?: string } & Record<string, unknown>): Promise<boolean> {
+  if (Object.keys(f).some((k) => f[k] !== undefined && !CACHEABLE_FILTERS.has(k))) return false;
+  if (f.group !== undefined && !(await knownGroup(f.group))) return false;
+  const catalogue = f.pack !== undefined || f.maker !== undefined ? await cachedPacks() : [];
+  if (f.pack !== undefined && !catalogue.some((p) => p.slug === f.pack)) return false;
+  if (f.maker !== undefined && !catalogue.some((p) => p.makerSlug === f.maker)) return false;
+  return true;
 }
 
 export function cachedApiMakersPage(page: Page) {
+  if (page.page > CACHED_PAGES) return listMakersPage(page);
   return unstable_cache(() => listMakersPage(page), ["api-makers", keyOf(page)], { tags: [t.packs], revalidate })();
 }
 
-export function cachedApiMaker(slug: string) {
+export async function cachedApiMaker(slug: string) {
+  if (!(await cachedPacks()).some((p) => p.makerSlug === slug)) return getMakerBySlug(slug); // makers without active packs are rare: no entry for them
   return unstable_cache(() => getMakerBySlug(slug), ["api-maker", slug], { tags: [t.packs, t.maker(slug)], revalidate })();
 }
 
-export function cachedApiPack(slug: string) {
+export async function cachedApiPack(slug: string) {
+  if (!(await cachedPacks()).some((p) => p.slug === slug)) return getApiPackBySlug(slug);
   return unstable_cache(() => getApiPackBySlug(slug), ["api-pack", slug], { tags: [t.packs, t.results, t.pack(slug)], revalidate })();
 }
 
-export function cachedApiResultsPage(filters: ResultFilters, page: Page) {
+export async function cachedApiResultsPage(filters: ResultFilters, page: Page) {
+  if (page.page > CACHED_PAGES || !(await boundedFilters(filters))) return listResultsPage(filters, page);
   const tags = [t.results, t.packs, ...(filters.group ? [t.group(filters.group)] : []), ...(filters.pack ? [t.pack(filters.pack)] : [])];
   return unstable_cache(() => listResultsPage(filters, page), ["api-results", keyOf(filters), keyOf(page)], { tags, revalidate })();
-}
-
-export function cachedApiResult(id: number) {
-  return unstable_cache(() => getApprovedResult(id), ["api-result", String(id)], { tags: [t.results, t.result(id)], revalidate })();
 }
 
 export function cachedApiGroups(minResults: number) {
   return unstable_cache(() => listGroups(minResults), ["api-groups", String(minResults)], { tags: [t.results, t.packs], revalidate })();
 }
 
-export function cachedGroupSamples(groupKey: string, filters: PackFilters) {
+export async function cachedGroupSamples(groupKey: string, filters: PackFilters) {
+  if (!(await knownGroup(groupKey))) return [];
+  if (!(await boundedFilters(filters))) return listGroupSamples(groupKey, filters);
   return unstable_cache(() => listGroupSamples(groupKey, filters), ["group-samples", groupKey, keyOf(filters)], { tags: [t.results, t.packs, t.group(groupKey)], revalidate })();
 }
 
-export function cachedGroupCurves(groupKey: string, filters: ResultFilters) {
+export async function cachedGroupCurves(groupKey: string, filters: ResultFilters) {
+  if (!(await knownGroup(groupKey))) return [];
+  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, filters);
   return unstable_cache(() => listGroupCurves(groupKey, filters), ["group-curves", groupKey, keyOf(filters)], { tags: [t.results, t.packs, t.group(groupKey)], revalidate })();
 }

@@ -71,4 +71,21 @@ describe("tagged caching of the public API", () => {
     taggedCache.revalidateTag("packs");
     expect(await names()).toContain(`${P}-latecomer`);
   });
+
+  it("keeps the cache bounded: made-up filters, slugs and far pages are read from the database, not stored", async () => {
+    // Warm what the guards themselves read (the cached catalogue and groups), then count.
+    await total(`/api/v1/results?group=${fx.group}`);
+    await getPack(req(`/api/v1/packs/${fx.packs[0]!.slug}`), { params: Promise.resolve({ slug: fx.packs[0]!.slug }) });
+    const size = taggedCache.store.size;
+    expect(await total(`/api/v1/results?q=${encodeURIComponent("anything at all")}`)).toBeGreaterThanOrEqual(0);
+    expect(await total(`/api/v1/results?group=${P}_made_up_group`)).toBe(0);
+    expect(await total(`/api/v1/results?minMah=1000&maxMah=1400`)).toBeGreaterThan(0);
+    expect(await total(`/api/v1/results?page=500&size=1`)).toBeGreaterThan(0);
+    const missing = await getPack(req(`/api/v1/packs/${P}-no-such-pack`), { params: Promise.resolve({ slug: `${P}-no-such-pack` }) });
+    expect(missing.status).toBe(404);
+    const unknownGroup = await getGroup(req(`/api/v1/groups/${P}_nothing_here`), { params: Promise.resolve({ key: `${P}_nothing_here` }) });
+    expect(unknownGroup.status).toBe(404);
+    expect(taggedCache.store.size).toBe(size);
+  });
 });
+

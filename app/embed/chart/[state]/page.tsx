@@ -6,10 +6,11 @@ import { chartLinks } from "@/lib/open-data/chart-links";
 import { decodeChartState } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
-export const revalidate = 3600;
-export async function generateStaticParams(): Promise<{ state: string }[]> {
-  return [];
-}
+// The URL carries the whole chart, so the set of pages is whatever anyone types: rendered per request rather
+// than stored one file per URL (an unbounded page cache, and names too long for the file system). The data
+// comes from tagged cached reads (lib/public-data.ts), so a render is cheap and a decision shows at once;
+// a CDN in front may cache by URL.
+export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ state: string }> };
 

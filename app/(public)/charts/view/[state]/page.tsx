@@ -10,11 +10,11 @@ import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } f
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
 
-// The URL carries the whole chart; pages are generated on first request and revalidated (no cookies).
-export const revalidate = 3600;
-export async function generateStaticParams(): Promise<{ state: string }[]> {
-  return [];
-}
+// The URL carries the whole chart, so the set of pages is whatever anyone types: rendered per request rather
+// than stored one file per URL (an unbounded page cache, and names too long for the file system). The data
+// comes from tagged cached reads (lib/public-data.ts), so a render is cheap and a decision shows at once;
+// a CDN in front may cache by URL.
+export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ state: string }> };
 

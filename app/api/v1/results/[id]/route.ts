@@ -1,12 +1,12 @@
 // GET /api/v1/results/{id} — one approved result with its method card and figures.
-import { cachedApiResult } from "@/lib/public-data";
+import { getApprovedResult } from "@/db/queries/open-data/results";
 import { AppError } from "@/lib/errors";
 import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
 import { idParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ id: string }>(async (req, params) => {
   const { id } = idParam.parse(params);
-  const result = await cachedApiResult(id);
+  const result = await getApprovedResult(id);
   if (!result) throw new AppError("not_found", "No such published result.");
   return apiJson(req, { data: result, links: { pack: `/api/v1/packs/${result.packSlug}`, group: `/api/v1/groups/${result.groupKey}` } });
 });
