@@ -10,11 +10,15 @@ import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } f
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
 
-// The URL carries the whole chart, so the set of pages is whatever anyone types: rendered per request rather
-// than stored one file per URL (an unbounded page cache, and names too long for the file system). The data
-// comes from tagged cached reads (lib/public-data.ts), so a render is cheap and a decision shows at once;
-// a CDN in front may cache by URL.
-export const dynamic = "force-dynamic";
+// The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
+// them (s-maxage). Their data comes from tagged cached reads, so a decision refreshes them at once.
+// Known limit: one stored page per distinct URL, and Next cannot store a state longer than a file name
+// allows (ENAMETOOLONG in the log; such a page is then rendered on each request). Short ids for saved
+// charts would bound both.
+export const revalidate = 3600;
+export async function generateStaticParams(): Promise<{ state: string }[]> {
+  return [];
+}
 
 type Props = { params: Promise<{ state: string }> };
 
