@@ -56,7 +56,11 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
   const packId = new Map(packRows.map((p) => [p.slug, p.id]));
   let made = 0;
   let n = 0;
-  const start = Date.parse("2026-03-01T09:00:00Z");
+  // The demo's clock ends a few days before the day it is seeded (09:00 UTC that day, so a re-seed the same
+  // day gives the same times): submissions every 3.7 hours, so the queue's oldest waits about six weeks and
+  // the newest a few days, as on a live site. Nothing depends on the calendar date itself.
+  const today = new Date();
+  const start = Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate(), 9) - 42 * 86400_000;
 
   for (const campaign of campaigns) {
     const contributorId = userId.get(campaign.contributor);

@@ -97,3 +97,55 @@ export function groupKey(card: MethodCardForKey): GroupKey {
     label: [resistance.label, ambient.label, cutoff.label, rate.label, age.label].join(" · "),
   };
 }
+
+/**
+ * The label of a key, read back part by part with the same band functions that made it (so the two never
+ * drift apart); null when the string is not a key these functions would produce. Lets pages that only
+ * hold a key (the review queue, its filter) show "DC step · 15–25 °C · …" instead of the key itself.
+ */
+export function labelForGroupKey(key: string): string | null {
+  const parts = key.split("_");
+  if (parts.length !== 5) return null;
+  const [res, amb, co, rate, age] = parts as [string, string, string, string, string];
+  const labels = [resistanceFromKey(res), ambientFromKey(amb), cutoffFromKey(co), rateFromKey(rate), ageFromKey(age)];
+  return labels.every((l): l is string => l !== null) ? labels.join(" · ") : null;
+}
+
+function same(band: Band, key: string): string | null {
+  return band.key === key ? band.label : null;
+}
+
+function resistanceFromKey(key: string): string | null {
+  if (key in RESISTANCE_METHODS) return RESISTANCE_METHODS[key as ResistanceMethod];
+  const m = /^other-([a-z0-9-]+)$/.exec(key);
+  return m?.[1] ? m[1].replace(/-/g, " ") : null;
+}
+
+function ambientFromKey(key: string): string | null {
+  if (key === "a-unknown") return ambientBand(Number.NaN).label;
+  let m = /^alt(\d+)$/.exec(key);
+  if (m) return same(ambientBand(Number(m[1]) - 1), key);
+  m = /^agt(\d+)$/.exec(key);
+  if (m) return same(ambientBand(Number(m[1])), key);
+  m = /^a(\d+)-(\d+)$/.exec(key);
+  return m ? same(ambientBand(Number(m[1])), key) : null;
+}
+
+function cutoffFromKey(key: string): string | null {
+  if (key === "co-unknown") return cutoffBand(Number.NaN).label;
+  const m = /^co(\d+\.\d)$/.exec(key);
+  return m ? same(cutoffBand(Number(m[1])), key) : null;
+}
+
+function rateFromKey(key: string): string | null {
+  if (key === "r-unknown") return rateBand(Number.NaN, 1000).label;
+  let m = /^r(\d+)-up$/.exec(key);
+  if (m) return same(rateBand(Number(m[1]) + 1, 1000), key);
+  m = /^r(\d+)-(\d+)$/.exec(key);
+  return m ? same(rateBand(Number(m[2]), 1000), key) : null;
+}
+
+function ageFromKey(key: string): string | null {
+  if (key === "age-unknown") return ageBand(Number.NaN).label;
+  return AGE_BANDS.find((b) => b.key === key)?.label ?? null;
+}

@@ -16,7 +16,7 @@ export {
   arrheniusFactor, resistanceAtTemperature,
 } from "./arrhenius";
 export { sagLimitedC, sagLimitedCurrentA, twoLevelResistanceOhm } from "./resistance";
-export { groupKey, ambientBand, ageBand, cutoffBand, rateBand, RESISTANCE_METHODS, type GroupKey, type MethodCardForKey, type ResistanceMethod } from "./group-key";
+export { groupKey, labelForGroupKey, ambientBand, ageBand, cutoffBand, rateBand, RESISTANCE_METHODS, type GroupKey, type MethodCardForKey, type ResistanceMethod } from "./group-key";
 export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summarise, MODIFIED_Z_THRESHOLD } from "./statistics";
 export { retentionTrend, END_OF_LIFE_RETAINED, type RetentionTrend } from "./cycles";
 export { lttb } from "./downsample";

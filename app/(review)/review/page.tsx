@@ -8,6 +8,7 @@ import { requirePageUser } from "@/lib/page-auth";
 import { reviewQueueFilterSchema } from "@/lib/validations/review";
 import { FlagChips } from "./_components/flag-chips";
 import { QueueKeys } from "./_components/queue-keys-client";
+import { labelForGroupKey } from "@/lib/analysis";
 
 export const metadata: Metadata = { title: "Review queue" };
 export const dynamic = "force-dynamic";
@@ -59,7 +60,7 @@ export default async function ReviewQueuePage(props: { searchParams: Promise<Rec
           <select name="group" defaultValue={filter.group ?? ""} className={inputClass}>
             <option value="">All groups</option>
             {counts.groups.map((g) => (
-              <option key={g.key} value={g.key}>{g.key} ({g.n})</option>
+              <option key={g.key} value={g.key}>{labelForGroupKey(g.key) ?? g.key} ({g.n})</option>
             ))}
           </select>
         </label>
@@ -82,8 +83,9 @@ export default async function ReviewQueuePage(props: { searchParams: Promise<Rec
                 <span className="min-w-0">
                   <span className="block truncate font-medium">{r.makerName} {r.packModel}</span>
                   <span className="muted block truncate text-xs">
-                    #{r.id} · {r.contributorName} · waiting {waited(r.submittedAt)} · <span className="num">{r.groupKey}</span>
+                    #{r.id} · {r.contributorName} · waiting {waited(r.submittedAt)}
                   </span>
+                  <span className="muted block truncate text-xs" title={r.groupKey}>{labelForGroupKey(r.groupKey) ?? r.groupKey}</span>
                 </span>
                 <FlagChips flags={r.flags} />
                 <span className="num muted text-sm sm:text-right">{fmt(r.capacityMah, 0, "mAh")} · ratio {fmt(r.labelRatio, 2)}</span>

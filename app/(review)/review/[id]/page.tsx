@@ -12,6 +12,7 @@ import { flagReasonLabels } from "@/lib/validations/review";
 import { FlagChips } from "../_components/flag-chips";
 import { CurveSvg } from "./_components/curve-svg";
 import { DecisionPanel } from "./_components/decision-panel-client";
+import { labelForGroupKey } from "@/lib/analysis";
 
 export const metadata: Metadata = { title: "Review a result" };
 export const dynamic = "force-dynamic";
@@ -78,7 +79,7 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
 
           <section className="card space-y-3" aria-labelledby="compare-h">
             <h2 id="compare-h">Beside the pack’s group median</h2>
-            <p className="muted text-sm">Approved results of this pack in the same like-for-like group (<span className="num">{r.groupKey}</span>).</p>
+            <p className="muted text-sm">Approved results of this pack in the same like-for-like group (<span title={r.groupKey}>{labelForGroupKey(r.groupKey) ?? r.groupKey}</span>).</p>
             <div className="overflow-x-auto">
               <table className="w-full text-sm">
                 <thead><tr className="text-left">
