@@ -1,13 +1,13 @@
 // Every address a chart has: permalink, embed, images (with their sizes), oEmbed; and the snippets to paste.
 import { ATTRIBUTION, DATA_LICENCE_SHORT } from "./licence";
 import { DEFAULT_PNG_SCALE, defaultHeight, imageSizeQuery, type ChartImageFormat } from "./chart-size";
-import { CHART_HEIGHT, CHART_WIDTH, chartState, encodeChartState, type ChartState } from "./chart-state";
+import { CHART_HEIGHT, CHART_WIDTH, chartState, encodeChartState, statePath, type ChartState } from "./chart-state";
 
 export function chartLinks(state: ChartState) {
   const s = encodeChartState(state);
   return {
-    permalink: `/charts/view/${s}`,
-    embed: `/embed/chart/${s}`,
+    permalink: `/charts/view/${statePath(s)}`,
+    embed: `/embed/chart/${statePath(s)}`,
     svg: `/charts/image/${s}/chart.svg`,
     png: `/charts/image/${s}/chart.png`,
   };

@@ -54,3 +54,28 @@ export function decodeChartState(encoded: string): ChartState | null {
 /** Chart dimensions in CSS pixels. */
 export const CHART_WIDTH = 800;
 export const CHART_HEIGHT = 500;
+
+/**
+ * Permalinks and embeds carry the encoded state as path segments of at most STATE_SEGMENT characters:
+ * their pages are stored per URL (ISR), one file or folder per segment, and a file name has a length
+ * limit (255 bytes) that a long title and note would pass in one segment.
+ */
+export const STATE_SEGMENT = 120;
+
+export function statePath(encoded: string): string {
+  return (encoded.match(new RegExp(`.{1,${STATE_SEGMENT}}`, "g")) ?? [encoded]).join("/");
+}
+
+/** The encoded state from a page's catch-all segments; null when a segment is not base64url. */
+export function stateFromSegments(segments: readonly string[]): string | null {
+  if (segments.length === 0 || segments.length > 40 || segments.some((s) => !/^[A-Za-z0-9_-]+$/.test(s))) return null;
+  return segments.join("");
+}
+
+/** Segments that are not the canonical split of their state (an old one-segment link): where to send them. */
+export function canonicalStatePath(segments: readonly string[]): string | null {
+  const encoded = stateFromSegments(segments);
+  if (encoded === null) return null;
+  const canonical = statePath(encoded);
+  return canonical === segments.join("/") ? null : canonical;
+}

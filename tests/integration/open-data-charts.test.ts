@@ -5,7 +5,7 @@ import { GET as listCharts } from "@/app/api/v1/charts/route";
 import { GET as getOpenApi } from "@/app/api/v1/openapi.json/route";
 import { db } from "@/db";
 import { savedCharts } from "@/db/schema";
-import { encodeChartState, type ChartState } from "@/lib/open-data/chart-state";
+import { encodeChartState, statePath, type ChartState } from "@/lib/open-data/chart-state";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
 // Chart data reads through unstable_cache; outside Next.js every read goes to the database.
@@ -145,7 +145,7 @@ describe("GET /api/v1/charts", () => {
   it("lists saved charts with their links", async () => {
     const body = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as { data: { id: string; links: { permalink: string; embed: string } | null }[] };
     const one = body.data.find((c) => c.id === `${P}-one`);
-    expect(one?.links?.permalink).toBe(`/charts/view/${encodeChartState(state)}`);
+    expect(one?.links?.permalink).toBe(`/charts/view/${statePath(encodeChartState(state))}`);
     expect(one?.links?.embed).toMatch(/^\/embed\/chart\//);
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { PNG_DOWNLOADS, chartImagePath, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
 import { parseChartImageSize } from "@/lib/open-data/chart-size";
-import { encodeChartState, type ChartState } from "@/lib/open-data/chart-state";
+import { encodeChartState, statePath, type ChartState } from "@/lib/open-data/chart-state";
 
 const state: ChartState = { v: 1, kind: "label-check", group: "g1", title: `Packs "against" <labels> & more` };
 const BASE = "https://sagline.example";
@@ -29,7 +29,7 @@ describe("chart image links", () => {
 
   it("give an image snippet with 1×–3× sources, a narrow-screen source, escaped text and every URL allowed", () => {
     const html = imageSnippet(state, BASE);
-    expect(html).toContain(`<a href="${BASE}/charts/view/${encodeChartState(state)}">`);
+    expect(html).toContain(`<a href="${BASE}/charts/view/${statePath(encodeChartState(state))}">`);
     expect(html).toContain('<source media="(max-width: 559px)"');
     expect(html).toContain('width="800" height="500"');
     expect(html).toContain('alt="Packs &quot;against&quot; &lt;labels&gt; &amp; more — chart by Sagline contributors (Sagline), licensed CC BY 4.0"');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { encodeChartState } from "@/lib/open-data/chart-state";
+import { encodeChartState, statePath } from "@/lib/open-data/chart-state";
 import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { chartStateFromUrl, oembedResponse } from "@/lib/open-data/oembed";
 
@@ -48,5 +48,16 @@ describe("oEmbed response", () => {
     // Narrower than the smallest drawing, or too low for its width: no thumbnail rather than a wrong one.
     expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 200)).not.toHaveProperty("thumbnail_url");
     expect(oembedResponse(`${BASE}/charts/view/${s}`, BASE, 800, 250)).not.toHaveProperty("thumbnail_url");
+  });
+});
+
+describe("oEmbed reads split permalinks", () => {
+  it("finds the chart in a permalink or embed whose state is split into segments", () => {
+    const state = { v: 1 as const, kind: "label-check" as const, group: "dc-step_a15-25_co3.3_r5-10_new", title: "T".repeat(120), note: "n".repeat(300) };
+    const path = statePath(encodeChartState(state));
+    expect(path).toContain("/");
+    expect(chartStateFromUrl(`${BASE}/charts/view/${path}`, BASE)).toEqual(state);
+    expect(chartStateFromUrl(`${BASE}/embed/chart/${path}`, BASE)).toEqual(state);
+    expect(chartStateFromUrl(`${BASE}/charts/view/${path}/x.y`, BASE)).toBeNull();
   });
 });

@@ -2,7 +2,7 @@
 // The chart builder: choose, preview (the server-drawn SVG), then go to the permalink that carries the state.
 import { useRouter, useSearchParams } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
-import { CHART_KINDS, CHART_KIND_LABELS, chartState, decodeChartState, encodeChartState, type ChartKind } from "@/lib/open-data/chart-state";
+import { CHART_KINDS, CHART_KIND_LABELS, chartState, decodeChartState, encodeChartState, statePath, type ChartKind } from "@/lib/open-data/chart-state";
 
 type Group = { key: string; label: string; resultCount: number; packCount: number };
 type Maker = { slug: string; name: string };
@@ -34,7 +34,7 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
 
   return (
     <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
-      <form className="card space-y-3" onSubmit={(e) => { e.preventDefault(); if (encoded) router.push(`/charts/view/${encoded}`); }}>
+      <form className="card space-y-3" onSubmit={(e) => { e.preventDefault(); if (encoded) router.push(`/charts/view/${statePath(encoded)}`); }}>
         <fieldset className="space-y-1">
           <legend className="text-sm font-medium">Chart</legend>
           {CHART_KINDS.map((k) => (

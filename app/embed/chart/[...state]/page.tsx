@@ -1,25 +1,35 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
+import { notFound, permanentRedirect } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
-import { decodeChartState } from "@/lib/open-data/chart-state";
+import { canonicalStatePath, decodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 // The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
 // them (s-maxage). Their data comes from tagged cached reads, so a decision refreshes them at once.
-// Known limit: one stored page per distinct URL, and Next cannot store a state longer than a file name
-// allows (ENAMETOOLONG in the log; such a page is then rendered on each request). Short ids for saved
-// charts would bound both.
+// The state is split into path segments of at most STATE_SEGMENT characters (statePath), so each stored
+// page's file and folder names stay under the file system's limit whatever the title and note.
+// Known limit: one stored page per distinct URL (anyone can make up states); a CDN in front bounds the load.
 export const revalidate = 3600;
-export async function generateStaticParams(): Promise<{ state: string }[]> {
+export async function generateStaticParams(): Promise<{ state: string[] }[]> {
   return [];
 }
 
-type Props = { params: Promise<{ state: string }> };
+const BASE_PATH = "/embed/chart";
+type Props = { params: Promise<{ state: string[] }> };
+
+/** The chart a URL's segments carry; an old one-segment link is sent to its canonical split first. */
+async function stateOf(params: Props["params"]) {
+  const { state: segments } = await params;
+  const canonical = canonicalStatePath(segments);
+  if (canonical !== null) permanentRedirect(`${BASE_PATH}/${canonical}`);
+  const encoded = stateFromSegments(segments);
+  return encoded === null ? null : decodeChartState(encoded);
+}
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const state = decodeChartState((await params).state);
+  const state = await stateOf(params);
   return { title: state?.title ?? "Chart not found", robots: { index: false } };
 }
 
@@ -27,7 +37,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 const RESIZE_SCRIPT = `(function(){var el=document.getElementById("sagline-embed");if(!el||window.parent===window)return;var last=0;function send(){var h=Math.ceil(el.getBoundingClientRect().height);if(h&&h!==last){last=h;window.parent.postMessage({type:"sagline:embed-height",height:h},"*");}}if(window.ResizeObserver){new ResizeObserver(send).observe(el);}window.addEventListener("load",send);send();})();`;
 
 export default async function EmbedChartPage({ params }: Props) {
-  const state = decodeChartState((await params).state);
+  const state = await stateOf(params);
   if (!state) notFound();
   const data = await loadChartData(state);
   const links = chartLinks(state);

@@ -1,29 +1,39 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
+import { notFound, permanentRedirect } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { env } from "@/lib/env";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
-import { CHART_KIND_LABELS, decodeChartState } from "@/lib/open-data/chart-state";
+import { CHART_KIND_LABELS, canonicalStatePath, decodeChartState, encodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
 
 // The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
 // them (s-maxage). Their data comes from tagged cached reads, so a decision refreshes them at once.
-// Known limit: one stored page per distinct URL, and Next cannot store a state longer than a file name
-// allows (ENAMETOOLONG in the log; such a page is then rendered on each request). Short ids for saved
-// charts would bound both.
+// The state is split into path segments of at most STATE_SEGMENT characters (statePath), so each stored
+// page's file and folder names stay under the file system's limit whatever the title and note.
+// Known limit: one stored page per distinct URL (anyone can make up states); a CDN in front bounds the load.
 export const revalidate = 3600;
-export async function generateStaticParams(): Promise<{ state: string }[]> {
+export async function generateStaticParams(): Promise<{ state: string[] }[]> {
   return [];
 }
 
-type Props = { params: Promise<{ state: string }> };
+const BASE_PATH = "/charts/view";
+type Props = { params: Promise<{ state: string[] }> };
+
+/** The chart a URL's segments carry; an old one-segment link is sent to its canonical split first. */
+async function stateOf(params: Props["params"]) {
+  const { state: segments } = await params;
+  const canonical = canonicalStatePath(segments);
+  if (canonical !== null) permanentRedirect(`${BASE_PATH}/${canonical}`);
+  const encoded = stateFromSegments(segments);
+  return encoded === null ? null : decodeChartState(encoded);
+}
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const state = decodeChartState((await params).state);
+  const state = await stateOf(params);
   if (!state) return { title: "Chart not found" };
   const base = env().APP_URL;
   const links = chartLinks(state);
@@ -37,7 +47,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 }
 
 export default async function ChartPage({ params }: Props) {
-  const state = decodeChartState((await params).state);
+  const state = await stateOf(params);
   if (!state) notFound();
   const data = await loadChartData(state);
   const links = chartLinks(state);
@@ -84,7 +94,7 @@ export default async function ChartPage({ params }: Props) {
           </ul>
           <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>
           <SaveChart state={state} />
-          <p><Link href={`/charts/new?from=${encodeURIComponent((await params).state)}`}>Change this chart</Link> · <a href={links.embed}>Open the embed</a></p>
+          <p><Link href={`/charts/new?from=${encodeURIComponent(encodeChartState(state))}`}>Change this chart</Link> · <a href={links.embed}>Open the embed</a></p>
         </div>
       </section>
     </div>
