@@ -78,7 +78,7 @@ const errorBody = (description: string) => ({ description, content: { "applicati
 const chartImage = {
   get: {
     summary: "A chart drawn on the server as SVG or PNG, licence and source inside",
-    description: `The state is the last part of a chart permalink (/charts/view/{state}). Without size parameters the chart is ${CHART_WIDTH} × 500 CSS pixels and the PNG is drawn at scale ${DEFAULT_PNG_SCALE} (1600 × 1000 pixels). Below 560 pixels of width the layout turns narrow: titles wrap, legends stack and text stays at least 10 px.`,
+    description: `The state is the encoded chart state: a chart permalink's path after /charts/view/ with its slashes removed. Without size parameters the chart is ${CHART_WIDTH} × 500 CSS pixels and the PNG is drawn at scale ${DEFAULT_PNG_SCALE} (1600 × 1000 pixels). Below 560 pixels of width the layout turns narrow: titles wrap, legends stack and text stays at least 10 px.`,
     parameters: [
       { name: "state", in: "path", required: true, description: "The chart's state, base64url-encoded JSON (from a permalink).", schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,4000}$" } },
       { name: "file", in: "path", required: true, schema: { type: "string", enum: ["chart.svg", "chart.png"] } },
