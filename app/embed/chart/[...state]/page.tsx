@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
-import { notFound, permanentRedirect } from "next/navigation";
+import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
-import { canonicalStatePath, decodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
+import { decodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 // The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
@@ -16,15 +16,11 @@ export async function generateStaticParams(): Promise<{ state: string[] }[]> {
   return [];
 }
 
-const BASE_PATH = "/embed/chart";
 type Props = { params: Promise<{ state: string[] }> };
 
-/** The chart a URL's segments carry; an old one-segment link is sent to its canonical split first. */
+/** The chart a URL's segments carry (proxy.ts has already sent other splits of it to the canonical one). */
 async function stateOf(params: Props["params"]) {
-  const { state: segments } = await params;
-  const canonical = canonicalStatePath(segments);
-  if (canonical !== null) permanentRedirect(`${BASE_PATH}/${canonical}`);
-  const encoded = stateFromSegments(segments);
+  const encoded = stateFromSegments((await params).state);
   return encoded === null ? null : decodeChartState(encoded);
 }
 

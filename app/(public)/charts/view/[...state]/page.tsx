@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound, permanentRedirect } from "next/navigation";
+import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { env } from "@/lib/env";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
-import { CHART_KIND_LABELS, canonicalStatePath, decodeChartState, encodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
+import { CHART_KIND_LABELS, decodeChartState, encodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
@@ -20,15 +20,11 @@ export async function generateStaticParams(): Promise<{ state: string[] }[]> {
   return [];
 }
 
-const BASE_PATH = "/charts/view";
 type Props = { params: Promise<{ state: string[] }> };
 
-/** The chart a URL's segments carry; an old one-segment link is sent to its canonical split first. */
+/** The chart a URL's segments carry (proxy.ts has already sent other splits of it to the canonical one). */
 async function stateOf(params: Props["params"]) {
-  const { state: segments } = await params;
-  const canonical = canonicalStatePath(segments);
-  if (canonical !== null) permanentRedirect(`${BASE_PATH}/${canonical}`);
-  const encoded = stateFromSegments(segments);
+  const encoded = stateFromSegments((await params).state);
   return encoded === null ? null : decodeChartState(encoded);
 }
 
