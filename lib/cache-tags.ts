@@ -10,6 +10,8 @@ export const cacheTags = {
   maker: (slug: string) => `maker:${slug}`,
   group: (key: string) => `group:${key}`,
   result: (id: number) => `result:${id}`,
+  /** The site settings (the notice every page shows, the submissions pause). */
+  settings: "settings",
 } as const;
 
 /** Seconds after which cached public data is refreshed even without a tag (a safety net, not the mechanism). */

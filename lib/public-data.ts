@@ -11,6 +11,7 @@ import { listGroupCurves, listResultsPage } from "@/db/queries/open-data/results
 import { getPackDetail } from "@/db/queries/pack-detail";
 import { listActivePacks, listPackRows } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
+import { getSiteSettings } from "@/db/queries/site-settings";
 import type { PackFilters, ResultFilters } from "@/lib/validations/open-data";
 import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/lib/cache-tags";
 
@@ -119,3 +120,6 @@ export async function cachedGroupCurves(groupKey: string, filters: ResultFilters
   if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, filters);
   return unstable_cache(() => listGroupCurves(groupKey, filters), ["group-curves", groupKey, keyOf(filters)], { tags: [t.results, t.packs, t.group(groupKey)], revalidate })();
 }
+
+/** The site settings, for every page's notice and the submit page: saving them revalidates `settings`. */
+export const cachedSiteSettings = unstable_cache(getSiteSettings, ["site-settings"], { tags: [t.settings], revalidate });

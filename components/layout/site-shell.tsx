@@ -2,6 +2,7 @@
 import { AccountMenu } from "./account-menu-client";
 import { SiteFooter } from "./site-footer";
 import { SiteHeader } from "./site-header";
+import { SiteNotice } from "./site-notice";
 
 export function SiteShell({ children }: { children: React.ReactNode }) {
   return (
@@ -10,6 +11,7 @@ export function SiteShell({ children }: { children: React.ReactNode }) {
         Skip to content
       </a>
       <SiteHeader accountSlot={<AccountMenu />} />
+      <SiteNotice />
       <main id="main" className="mx-auto max-w-page px-4 py-8">
         {children}
       </main>

@@ -1,6 +1,7 @@
 // Plumbing: a general audit trail (role changes, catalogue merges), the outgoing mail queue (so a mail
 // outage never loses a message), and rate-limit counters shared by every server process.
-import { boolean, index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { boolean, check, index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { users } from "./auth";
 
 export const auditEvents = pgTable(
@@ -42,3 +43,21 @@ export const rateLimitHits = pgTable("rate_limit_hits", {
   count: integer("count").notNull(),
   resetAt: timestamp("reset_at", { withTimezone: true }).notNull(),
 });
+
+/**
+ * Site settings an admin changes at /admin/settings: one row (id 1). A notice shown on every page (an
+ * announcement, planned maintenance) and a pause on new submissions (a backlog in review, an incident).
+ * No row means the defaults: no notice, submissions open.
+ */
+export const siteSettings = pgTable(
+  "site_settings",
+  {
+    id: integer("id").primaryKey().default(1),
+    notice: text("notice"),
+    submissionsPaused: boolean("submissions_paused").notNull().default(false),
+    pauseReason: text("pause_reason"),
+    updatedById: text("updated_by_id").references(() => users.id, { onDelete: "set null" }),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [check("site_settings_one_row", sql`${t.id} = 1`)],
+);

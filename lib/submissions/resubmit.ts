@@ -7,6 +7,7 @@ import { resubmitOwnResult } from "@/db/mutations/results";
 import { afterResponse } from "@/lib/after-response";
 import { AppError } from "@/lib/errors";
 import { enforceRateLimit, limits } from "@/lib/rate-limit";
+import { assertSubmissionsOpen } from "./pause";
 import type { SessionUser } from "@/lib/session";
 import { MAX_PHOTOS, type ResubmitResultInput } from "@/lib/validations/result";
 import { moveFiles } from "./files";
@@ -20,6 +21,7 @@ export async function resubmitResultFor(input: ResubmitResultInput, user: Sessio
   if (current.photoKeys.length + input.photoKeys.length > MAX_PHOTOS) {
     throw new AppError("validation", "Too many photos.", { photoKeys: [`A result can have at most ${MAX_PHOTOS} photos; it has ${current.photoKeys.length} already.`] });
   }
+  await assertSubmissionsOpen();
   await enforceRateLimit(`submit:${user.id}`, limits.submitPerUser);
   const p = current.pack;
   const facts: PackFacts = { title: `${p.makerName} ${p.model}`, cells: p.cellsInSeries, ratedMah: p.ratedCapacityMah, labelledC: p.labelledContinuousC, weightG: p.weightG };

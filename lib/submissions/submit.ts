@@ -8,6 +8,7 @@ import { afterResponse } from "@/lib/after-response";
 import { env } from "@/lib/env";
 import { flushOutbox, submissionReceiptMail } from "@/lib/mail";
 import { enforceRateLimit, limits } from "@/lib/rate-limit";
+import { assertSubmissionsOpen } from "./pause";
 import type { SessionUser } from "@/lib/session";
 import type { SubmitResultInput } from "@/lib/validations/result";
 import { analyseForCard, checkFiles, resolvePack, resultFields } from "./prepare";
@@ -18,6 +19,7 @@ export type Submitted = { resultId: number; created: boolean };
 export async function submitResultFor(input: SubmitResultInput, user: SessionUser): Promise<Submitted> {
   const earlier = await findResultByIdempotencyKey(user.id, input.idempotencyKey);
   if (earlier) return { resultId: earlier.id, created: false };
+  await assertSubmissionsOpen();
   await enforceRateLimit(`submit:${user.id}`, limits.submitPerUser);
   const { target, facts } = await resolvePack(input.pack, user.id);
   await checkFiles(input.log.key, input.photoKeys, user.id);

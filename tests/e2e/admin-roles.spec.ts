@@ -49,3 +49,38 @@ test("the last admin cannot demote themselves", async ({ page }) => {
   await page.reload();
   await expect(row.getByLabel("Role for admin@sagline.localhost")).toHaveValue("admin");
 });
+
+// An admin puts a notice on every page and pauses submissions; static public pages show the notice at once
+// (tag revalidation), the submit page explains the pause, and both are undone.
+test("an admin sets a site notice and pauses submissions; pages show both at once, then the admin undoes them", async ({ page }) => {
+  await signIn(page, "admin@sagline.localhost");
+  await page.goto("/admin/settings");
+  await expect(page.getByRole("heading", { name: "Site settings", level: 1 })).toBeVisible();
+  const notice = `Planned maintenance ${Date.now()}: the site may be slow for an hour.`;
+  await page.getByLabel("Notice on every page").fill(notice);
+  await page.getByLabel(/Pause new submissions/).check();
+  // A pause without a reason is refused with a message at the field, and what was typed stays.
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Say why submissions are paused")).toBeVisible();
+  await expect(page.getByLabel("Notice on every page")).toHaveValue(notice);
+  await page.getByLabel(/Why \(contributors see this/).fill("the review queue is catching up");
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Saved. Every page shows the change now.")).toBeVisible();
+
+  await page.goto("/");
+  await expect(page.getByTestId("site-notice")).toHaveText(notice);
+  await page.goto("/packs");
+  await expect(page.getByTestId("site-notice")).toHaveText(notice);
+  await page.goto("/submit");
+  await expect(page.getByTestId("submissions-paused")).toContainText("the review queue is catching up");
+
+  await page.goto("/admin/settings");
+  await page.getByLabel("Notice on every page").fill("");
+  await page.getByLabel(/Pause new submissions/).uncheck();
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Saved. Every page shows the change now.")).toBeVisible();
+  await page.goto("/");
+  await expect(page.getByTestId("site-notice")).toHaveCount(0);
+  await page.goto("/submit");
+  await expect(page.getByTestId("submissions-paused")).toHaveCount(0);
+});

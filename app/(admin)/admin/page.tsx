@@ -3,7 +3,7 @@ import { requirePageUser } from "@/lib/page-auth";
 
 export const dynamic = "force-dynamic";
 
-// The admin area starts with users (catalogue and settings pages join it later).
+// The admin area starts with users; catalogue and site settings sit beside it in the admin navigation.
 export default async function AdminHome() {
   await requirePageUser("user.set-role", "/admin");
   redirect("/admin/users");

@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
+import { getSiteSettings } from "@/db/queries/site-settings";
 import { listMakerChoices, listPackChoices } from "@/db/queries/submissions";
+import { Alert } from "@/components/ui/form";
 import { env } from "@/lib/env";
 import { requirePageUser } from "@/lib/page-auth";
 import { SubmitForm } from "./_components/submit-form-client";
@@ -12,7 +14,7 @@ export const dynamic = "force-dynamic";
 
 export default async function SubmitPage() {
   const user = await requirePageUser("result.submit", "/submit");
-  const [packs, makers, profiles] = await Promise.all([listPackChoices(user.id), listMakerChoices(user.id), listBenchProfilesForUser(user.id)]);
+  const [packs, makers, profiles, settings] = await Promise.all([listPackChoices(user.id), listMakerChoices(user.id), listBenchProfilesForUser(user.id), getSiteSettings()]);
   const e = env();
   return (
     <div className="space-y-6">
@@ -24,6 +26,14 @@ export default async function SubmitPage() {
           <Link href="/analyse">Analyse a log</Link> without submitting.
         </p>
       </header>
+      {settings.submissionsPaused ? (
+        <div data-testid="submissions-paused" className="max-w-3xl">
+          <Alert tone="info">
+            <strong>Submissions are paused:</strong> {settings.pauseReason ?? "please try again later"}. You can still prepare your draft;
+            it is kept in this browser, and Submit works again once they reopen.
+          </Alert>
+        </div>
+      ) : null}
       <SubmitForm userId={user.id} packs={packs} makers={makers} profiles={profiles.map(profileOption)}
         limits={{ logMaxMb: Math.round(e.LOG_MAX_BYTES / (1024 * 1024)), photoMaxMb: Math.round(e.PHOTO_MAX_BYTES / (1024 * 1024)) }} />
     </div>
