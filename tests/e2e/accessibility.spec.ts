@@ -2,6 +2,8 @@
 // critical violations. (A scan finds a subset of problems; the keyboard walks in other specs cover more.)
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
+import { seriousViolations } from "./axe-helpers";
+import { signIn } from "./sign-in-helpers";
 
 const pages = ["/", "/packs", "/compare", "/methods", "/sign-in", "/analyse", "/data", "/charts"];
 
@@ -24,4 +26,20 @@ test("no serious accessibility violations on a pack page", async ({ page }) => {
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze();
   const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
   expect(serious.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
+});
+
+// The signed-in areas too, as a moderator (the admin pages are scanned in admin-roles.spec.ts, where an
+// admin is already signed in: sign-in links are rate-limited per address).
+test("no serious accessibility violations in the signed-in areas (account, submit, review)", async ({ page }) => {
+  await signIn(page, "moderator2@sagline.localhost");
+  await page.goto("/review");
+  const first = await page.locator("[data-queue-link]").first().getAttribute("href");
+  const found: string[] = [];
+  for (const path of ["/account", "/account/bench-profiles", "/submit", "/review", ...(first ? [first] : []), "/review/flags"]) {
+    const response = await page.goto(path);
+    expect(response?.status(), `${path} should load`).toBeLessThan(400);
+    await page.waitForTimeout(300);
+    found.push(...(await seriousViolations(page, path)));
+  }
+  expect(found).toEqual([]);
 });
