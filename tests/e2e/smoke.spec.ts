@@ -22,3 +22,20 @@ test("an unknown pack is a 404 page, not an error", async ({ page }) => {
   const response = await page.goto("/packs/no-such-pack");
   expect(response?.status()).toBe(404);
 });
+
+test("robots.txt and sitemap.xml let search engines find the packs and keep them out of signed-in areas", async ({ request }) => {
+  const robots = await request.get("/robots.txt");
+  expect(robots.status()).toBe(200);
+  const text = await robots.text();
+  expect(text).toContain("Disallow: /account");
+  expect(text).toContain("Disallow: /api/");
+  expect(text).toMatch(/Sitemap: https?:\/\/[^\s]+\/sitemap\.xml/);
+  const sitemap = await request.get("/sitemap.xml");
+  expect(sitemap.status()).toBe(200);
+  expect(sitemap.headers()["content-type"]).toContain("xml");
+  const xml = await sitemap.text();
+  expect(xml).toContain("<urlset");
+  expect(xml).toMatch(/<loc>[^<]+\/packs\/ashcombe-cells-ridge-1800-5s-130c<\/loc>/);
+  expect(xml).toMatch(/<loc>[^<]+\/results\/\d+<\/loc>/);
+  expect(xml).not.toMatch(/<loc>[^<]+\/(account|review|admin)/);
+});
