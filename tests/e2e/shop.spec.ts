@@ -25,6 +25,19 @@ test("filters the packs table through the URL, and the back button restores the 
   await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
 });
 
+test("without a group, one click fills the measured columns from the most tested group", async ({ page }) => {
+  await page.goto("/packs");
+  await settled(page);
+  const suggestion = page.getByTestId("suggested-group");
+  await expect(suggestion).toContainText("DC step · 15–25 °C · 3.3 V cut-off · 5–10C · new");
+  await suggestion.click();
+  await expect(page).toHaveURL(/[?&]group=dc-step_a15-25_co3\.3_r5-10_new/);
+  await settled(page);
+  await expect(page.getByTestId("suggested-group")).toHaveCount(0);
+  // Measured C (the ninth column) now holds figures, not dashes.
+  await expect(rows(page).first().locator("td").nth(8)).toHaveText(/^\d+(\.\d)?C$/);
+});
+
 test("finds packs with a misspelt maker name", async ({ page }) => {
   await page.goto("/packs");
   // Typing before the table has hydrated is lost on a busy machine: retry until the URL follows.

@@ -2,9 +2,10 @@
 // The packs table (TanStack Table). Sorting, filtering and paging happen on the server (manual modes);
 // the table owns column visibility. Header sort controls are buttons, so the keyboard reaches them.
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type VisibilityState } from "@tanstack/react-table";
+import Link from "next/link";
 import { useState } from "react";
 import { fmt, labelSpec } from "@/lib/format";
-import { PAGE_SIZES, type PackParams, type PackSortKey } from "@/lib/pack-query-params";
+import { PAGE_SIZES, writePackParams, type PackParams, type PackSortKey } from "@/lib/pack-query-params";
 import type { ApiPackPage, ApiPackRow } from "./types";
 
 type Change = (patch: Partial<PackParams>) => void;
@@ -28,7 +29,11 @@ function columns(): ColumnDef<ApiPackRow>[] {
   ];
 }
 
-export function PackTable({ page, params, loading, onChange }: { page: ApiPackPage; params: PackParams; loading: boolean; onChange?: Change }) {
+export function PackTable({ page, params, loading, onChange, suggestedGroup = null }: {
+  page: ApiPackPage; params: PackParams; loading: boolean; onChange?: Change;
+  /** The group with the most packs, offered in one click when none is chosen. */
+  suggestedGroup?: { key: string; label: string; packCount: number } | null;
+}) {
   const hasGroup = params.group !== null;
   const [visibility, setVisibility] = useState<VisibilityState>({ capacityRatio: false });
   const table = useReactTable({
@@ -56,6 +61,13 @@ export function PackTable({ page, params, loading, onChange }: { page: ApiPackPa
           {loading ? "Loading packs…" : `${page.total} pack${page.total === 1 ? "" : "s"}`}
           {hasGroup ? null : <span className="muted"> · choose a like-for-like group to fill the measured columns</span>}
         </p>
+        {!hasGroup && suggestedGroup ? (
+          // A link (the state is in the URL), so it works before the page's script has loaded too.
+          <Link href={`/packs?${writePackParams({ ...params, group: suggestedGroup.key, page: 1 }).toString()}`} scroll={false} data-testid="suggested-group"
+            className="rounded border border-cell-500/40 px-2 py-1 text-left text-cell-700 no-underline hover:bg-cell-50 hover:no-underline dark:text-cell-100 dark:hover:bg-cell-700/20">
+            Fill them from the most tested group: {suggestedGroup.label} ({suggestedGroup.packCount} packs)
+          </Link>
+        ) : null}
         <details className="relative">
           <summary className="cursor-pointer rounded border border-ink/20 px-2 py-1 dark:border-night-line">Columns</summary>
           <fieldset className="card absolute right-0 z-20 mt-1 w-60 space-y-1">

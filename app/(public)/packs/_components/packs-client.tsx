@@ -16,7 +16,7 @@ export function PacksView({ params, page, options, loading = false, error = null
     <div className="space-y-4">
       <PackFilters params={params} options={options} onChange={onChange} />
       {error ? <p role="alert" className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn">{error}</p> : null}
-      <PackTable page={page} params={params} loading={loading} onChange={onChange} />
+      <PackTable page={page} params={params} loading={loading} onChange={onChange} suggestedGroup={options.groups[0] ?? null} />
     </div>
   );
 }
