@@ -19,6 +19,18 @@ export type Submitted = { resultId: number; created: boolean };
 export async function submitResultFor(input: SubmitResultInput, user: SessionUser): Promise<Submitted> {
   const earlier = await findResultByIdempotencyKey(user.id, input.idempotencyKey);
   if (earlier) return { resultId: earlier.id, created: false };
+  try {
+    return await submitNew(input, user);
+  } catch (err) {
+    // A double click races: the first request may finish (and move the draft's files away) while the second
+    // is half-way, which then fails on files that are gone. If the first made the result, that is the answer.
+    const made = await findResultByIdempotencyKey(user.id, input.idempotencyKey).catch(() => null);
+    if (made) return { resultId: made.id, created: false };
+    throw err;
+  }
+}
+
+async function submitNew(input: SubmitResultInput, user: SessionUser): Promise<Submitted> {
   await assertSubmissionsOpen();
   await enforceRateLimit(`submit:${user.id}`, limits.submitPerUser);
   const { target, facts } = await resolvePack(input.pack, user.id);
