@@ -72,6 +72,12 @@ export function stateFromSegments(segments: readonly string[]): string | null {
   return segments.join("");
 }
 
+/** The chart a permalink's or embed's path segments carry; null when they do not hold a valid state. */
+export function decodeChartStateSegments(segments: readonly string[]): ChartState | null {
+  const encoded = stateFromSegments(segments);
+  return encoded === null ? null : decodeChartState(encoded);
+}
+
 /** Segments that are not the canonical split of their state (an old one-segment link): where to send them. */
 export function canonicalStatePath(segments: readonly string[]): string | null {
   const encoded = stateFromSegments(segments);

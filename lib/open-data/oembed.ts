@@ -2,7 +2,7 @@
 import { z } from "zod";
 import { NARROW_VIEWPORT_PX, NARROW_WIDTH, chartImagePath, chartLinks, escapeHtmlAttr } from "./chart-links";
 import { CHART_MIN_WIDTH, defaultHeight, heightRange } from "./chart-size";
-import { CHART_HEIGHT, CHART_WIDTH, decodeChartState, stateFromSegments, type ChartState } from "./chart-state";
+import { CHART_HEIGHT, CHART_WIDTH, decodeChartStateSegments, type ChartState } from "./chart-state";
 import { ATTRIBUTION, DATA_LICENCE_NAME, DATA_LICENCE_URL } from "./licence";
 
 export const oembedQuery = z.object({
@@ -34,8 +34,7 @@ export function chartStateFromUrl(url: string, baseUrl: string) {
   }
   if (u.origin !== new URL(baseUrl).origin) return null;
   const m = /^\/(?:charts\/view|embed\/chart)\/([A-Za-z0-9_-]+(?:\/[A-Za-z0-9_-]+)*)\/?$/.exec(u.pathname);
-  const encoded = m?.[1] ? stateFromSegments(m[1].split("/")) : null;
-  return encoded ? decodeChartState(encoded) : null;
+  return m?.[1] ? decodeChartStateSegments(m[1].split("/")) : null;
 }
 
 /** A PNG of the chart within maxwidth × maxheight (oEmbed: "the thumbnail must respect any maxwidth and

@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
-import { decodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
+import { decodeChartStateSegments } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 // The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
@@ -20,8 +20,7 @@ type Props = { params: Promise<{ state: string[] }> };
 
 /** The chart a URL's segments carry (proxy.ts has already sent other splits of it to the canonical one). */
 async function stateOf(params: Props["params"]) {
-  const encoded = stateFromSegments((await params).state);
-  return encoded === null ? null : decodeChartState(encoded);
+  return decodeChartStateSegments((await params).state);
 }
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {

@@ -5,7 +5,7 @@ import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { env } from "@/lib/env";
 import { loadChartData } from "@/lib/open-data/chart-data";
 import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
-import { CHART_KIND_LABELS, decodeChartState, encodeChartState, stateFromSegments } from "@/lib/open-data/chart-state";
+import { CHART_KIND_LABELS, decodeChartStateSegments, encodeChartState } from "@/lib/open-data/chart-state";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
@@ -24,8 +24,7 @@ type Props = { params: Promise<{ state: string[] }> };
 
 /** The chart a URL's segments carry (proxy.ts has already sent other splits of it to the canonical one). */
 async function stateOf(params: Props["params"]) {
-  const encoded = stateFromSegments((await params).state);
-  return encoded === null ? null : decodeChartState(encoded);
+  return decodeChartStateSegments((await params).state);
 }
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
