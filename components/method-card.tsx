@@ -1,20 +1,12 @@
 import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
 import { fmt } from "@/lib/format";
+import type { PublicResultRow } from "@/lib/pack-summary";
 
-export type MethodCardData = {
-  ambientTemperatureC: number;
-  packStartTemperatureC: number | null;
-  loadMode: string;
-  loadCurrentA: number;
-  loadRateC: number;
-  cutoffVPerCell: number;
-  stopTemperatureC: number;
-  resistanceMethod: string;
-  equipment: string;
-  sampleRateHz: number | null;
-  cyclesBeforeTest: number;
-  testedOn: string | null;
-};
+export type MethodCardData = Pick<
+  PublicResultRow,
+  | "ambientTemperatureC" | "packStartTemperatureC" | "loadMode" | "loadCurrentA" | "loadRateC" | "cutoffVPerCell"
+  | "stopTemperatureC" | "resistanceMethod" | "equipment" | "sampleRateHz" | "cyclesBeforeTest" | "testedOn"
+>;
 
 const loadModes: Record<string, string> = { "constant-current": "constant current", "constant-power": "constant power", "constant-resistance": "constant resistance" };
 

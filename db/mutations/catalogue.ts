@@ -3,20 +3,11 @@
 import "server-only";
 import { eq, like, or, sql } from "drizzle-orm";
 import type { Executor } from "@/db";
+import type { PackLabelFields } from "@/db/queries/packs";
 import { makers, packs } from "@/db/schema";
 import { slugify } from "@/lib/slug";
 
-export type PackProposal = {
-  makerId: number | null;
-  makerName: string | null;
-  model: string;
-  cellsInSeries: number;
-  ratedCapacityMah: number;
-  labelledContinuousC: number;
-  labelledBurstC: number | null;
-  weightG: number | null;
-  connector: string;
-};
+export type PackProposal = { makerId: number | null; makerName: string | null; model: string } & PackLabelFields;
 
 
 /** The first free slug among base, base-2, base-3 … in a table's slug column. */

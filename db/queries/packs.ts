@@ -5,12 +5,8 @@ import { makers, packs, results } from "@/db/schema";
 import { listPacksInGroup } from "./groups";
 import { isPublic } from "./results";
 
-export type PackSummary = {
-  id: number;
-  slug: string;
-  model: string;
-  makerName: string;
-  makerSlug: string;
+/** A pack's label as printed (cells, capacity, C ratings, weight, connector): shared by every catalogue read. */
+export type PackLabelFields = {
   cellsInSeries: number;
   ratedCapacityMah: number;
   labelledContinuousC: number;
@@ -19,18 +15,25 @@ export type PackSummary = {
   connector: string;
 };
 
-const packColumns = {
-  id: packs.id,
-  slug: packs.slug,
-  model: packs.model,
-  makerName: makers.name,
-  makerSlug: makers.slug,
+/** The columns of PackLabelFields, to spread into a select. */
+export const packLabelColumns = {
   cellsInSeries: packs.cellsInSeries,
   ratedCapacityMah: packs.ratedCapacityMah,
   labelledContinuousC: packs.labelledContinuousC,
   labelledBurstC: packs.labelledBurstC,
   weightG: packs.weightG,
   connector: packs.connector,
+};
+
+export type PackSummary = { id: number; slug: string; model: string; makerName: string; makerSlug: string } & PackLabelFields;
+
+const packColumns = {
+  id: packs.id,
+  slug: packs.slug,
+  model: packs.model,
+  makerName: makers.name,
+  makerSlug: makers.slug,
+  ...packLabelColumns,
 };
 
 /** Active packs in the catalogue, maker then model. */

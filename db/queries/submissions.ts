@@ -4,30 +4,15 @@ import "server-only";
 import { and, asc, desc, eq, or } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents } from "@/db/schema";
+import { packLabelColumns, type PackLabelFields } from "./packs";
 
-export type PackChoice = {
-  id: number;
-  makerName: string;
-  model: string;
-  cellsInSeries: number;
-  ratedCapacityMah: number;
-  labelledContinuousC: number;
-  labelledBurstC: number | null;
-  weightG: number | null;
-  connector: string;
-  proposed: boolean;
-};
+export type PackChoice = { id: number; makerName: string; model: string; proposed: boolean } & PackLabelFields;
 
 const choiceColumns = {
   id: packs.id,
   makerName: makers.name,
   model: packs.model,
-  cellsInSeries: packs.cellsInSeries,
-  ratedCapacityMah: packs.ratedCapacityMah,
-  labelledContinuousC: packs.labelledContinuousC,
-  labelledBurstC: packs.labelledBurstC,
-  weightG: packs.weightG,
-  connector: packs.connector,
+  ...packLabelColumns,
   status: packs.status,
 };
 
