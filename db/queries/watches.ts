@@ -27,5 +27,5 @@ export async function listWatcherEmails(packId: number, exceptUserIds: string[] 
     .from(watches)
     .innerJoin(users, eq(users.id, watches.userId))
     .where(eq(watches.packId, packId));
-  return rows.filter((r) => r.email && !exceptUserIds.includes(r.userId)).map((r) => r.email as string);
+  return rows.flatMap((r) => (r.email && !exceptUserIds.includes(r.userId) ? [r.email] : []));
 }

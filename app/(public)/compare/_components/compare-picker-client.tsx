@@ -20,9 +20,11 @@ export function ComparePicker({ selected, options, group }: { selected: Option[]
   const slugs = selected.map((s) => s.slug);
   const move = (i: number, by: -1 | 1) => {
     const next = [...slugs];
-    const j = i + by;
-    if (j < 0 || j >= next.length) return;
-    [next[i], next[j]] = [next[j] as string, next[i] as string];
+    const a = next[i];
+    const b = next[i + by];
+    if (a === undefined || b === undefined) return;
+    next[i] = b;
+    next[i + by] = a;
     go(next);
   };
   const add = () => {
