@@ -2,7 +2,7 @@
 // programs, with its own docs at /data/api; oEmbed excepted) and the bare embeds (already noindex) may
 // not. Read per request so the sitemap address follows APP_URL where the app runs, not where it was built.
 import type { MetadataRoute } from "next";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 export const dynamic = "force-dynamic";
 

@@ -1,8 +1,8 @@
 // /sitemap.xml: the public pages, every active pack and every approved result, so shoppers find packs from a
 // search engine. From the tagged cached reads (a decision refreshes them); read per request for APP_URL.
 import type { MetadataRoute } from "next";
-import { env } from "@/lib/env";
-import { cachedNewestResults, cachedPacks } from "@/lib/public-data";
+import { env } from "@/server/env";
+import { cachedNewestResults, cachedPacks } from "@/server/public-data";
 
 export const dynamic = "force-dynamic";
 

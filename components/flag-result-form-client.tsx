@@ -3,7 +3,7 @@
 // posted to POST /api/v1/results/[id]/flags (public, rate-limited). Collapsed until asked for.
 import { useState } from "react";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
-import { flagReasons } from "@/db/schema/enums";
+import { flagReasons } from "@/lib/enums";
 import { flagReasonLabels } from "@/lib/validations/review";
 
 type State = { kind: "idle" } | { kind: "sending" } | { kind: "sent" } | { kind: "error"; message: string; fields: Record<string, string[]> };

@@ -2,7 +2,7 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;

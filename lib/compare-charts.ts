@@ -1,6 +1,6 @@
 // The series /compare hands to its charts: exactly what crosses to the browser (scripts/bench-pages.ts
 // measures this payload for six packs).
-import type { Comparison } from "@/db/queries/compare";
+import type { Comparison } from "@/lib/compare";
 import { packTitle } from "@/lib/format";
 
 export type XY = { x: number; y: number };

@@ -1,5 +1,7 @@
 // Pure side-by-side preparation for /compare: one like-for-like group at a time, never mixed. Picks the
 // group, summarises each pack inside it, says what was left out and why, and marks differences.
+import type { PackSummary } from "@/lib/catalogue";
+import type { ChartPoint } from "@/lib/curves";
 import { summariseExclusions, type DescribedGroup, type Exclusion } from "@/lib/like-for-like";
 import { describeResultGroup, summariseFigures, sustainedC, type PublicResultRow, type Summary, type SummaryFigure } from "@/lib/pack-summary";
 
@@ -123,3 +125,13 @@ export function suggestComparisons(
   }
   return out;
 }
+
+/** Everything /compare shows for 2–6 packs in one like-for-like group (db/queries/compare.ts reads it). */
+export type Comparison = {
+  packs: PackSummary[];
+  unknownSlugs: string[];
+  groups: CompareGroupOption[];
+  group: DescribedGroup | null;
+  compared: ComparedPack[];
+  curves: { packSlug: string; resultId: number; points: ChartPoint[] }[];
+};

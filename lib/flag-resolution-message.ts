@@ -1,6 +1,14 @@
 // The confirmation a moderator reads after resolving a reader flag: which flag, on which result, how it was
 // resolved and where that leaves the result. Pure, so the words are tested without a browser.
-import type { ResolvedFlag } from "@/db/mutations/review";
+import type { ReviewStatus } from "@/lib/enums";
+import type { FlagResolution } from "@/lib/validations/review";
+
+/** What a resolution did: the moderator's page names the flag, the result and the result's status after it. */
+export type ResolvedFlag = {
+  flagId: number; resolution: FlagResolution; resultId: number; status: ReviewStatus;
+  /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
+  alsoClosed: number;
+};
 
 const how: Record<ResolvedFlag["resolution"], string> = { kept: "result kept", corrected: "result corrected", withdrawn: "result withdrawn" };
 

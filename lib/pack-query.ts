@@ -2,7 +2,7 @@
 // the server (API and the first page of /packs) over the cached catalogue — thousands of rows at most —
 // so the browser never downloads the search index.
 import Fuse from "fuse.js";
-import type { PackRow } from "@/db/queries/packs";
+import type { PackRow } from "@/lib/catalogue";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 
 export type PackPage = { rows: PackRow[]; total: number; page: number; pageCount: number; size: number };

@@ -1,6 +1,6 @@
 // The one permission table: resource.action → roles allowed. Every server action and route handler that
 // changes state names one of these; hiding a button is never the check.
-import type { UserRole } from "@/db/schema/auth";
+import type { UserRole } from "@/lib/enums";
 
 const everyone: readonly UserRole[] = ["contributor", "moderator", "admin"];
 const moderators: readonly UserRole[] = ["moderator", "admin"];

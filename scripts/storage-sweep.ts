@@ -1,11 +1,11 @@
 // npm run storage:sweep [-- --dry-run] [-- --max-age-days N] — remove draft uploads under incoming/ that no
-// draft has used for INCOMING_MAX_AGE_DAYS (default 7) and no result points at (lib/storage/sweep.ts).
+// draft has used for INCOMING_MAX_AGE_DAYS (default 7) and no result points at (server/storage/sweep.ts).
 // Prints each removed key and a summary; cron-able. Exits non-zero with one line when something is wrong.
 import { parseArgs } from "node:util";
 import { z } from "zod";
 import { closeDb } from "@/db";
-import { env } from "@/lib/env";
-import { sweepIncomingUploads, type SweepReport } from "@/lib/storage/sweep";
+import { env } from "@/server/env";
+import { sweepIncomingUploads, type SweepReport } from "@/server/storage/sweep";
 
 const days = z.coerce.number().int("--max-age-days must be a whole number of days").min(1, "--max-age-days must be at least 1").max(365, "--max-age-days must be at most 365");
 

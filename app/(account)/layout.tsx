@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { SiteShell } from "@/components/layout/site-shell";
 
-// Signed-in pages: each page looks up the session itself (lib/page-auth.ts); this frame reads nothing.
+// Signed-in pages: each page looks up the session itself (server/page-auth.ts); this frame reads nothing.
 export default function AccountLayout({ children }: { children: React.ReactNode }) {
   return (
     <SiteShell>

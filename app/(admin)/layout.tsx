@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { SiteShell } from "@/components/layout/site-shell";
 
-// Admin pages check the session and role themselves (lib/page-auth.ts); this frame reads nothing.
+// Admin pages check the session and role themselves (server/page-auth.ts); this frame reads nothing.
 export default function AdminLayout({ children }: { children: React.ReactNode }) {
   return (
     <SiteShell>

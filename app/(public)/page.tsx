@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { fmt, fmtDate, fmtRatio } from "@/lib/format";
-import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/lib/public-data";
+import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/server/public-data";
 import { HomeLabelCheck, type HomeGroup } from "./_components/home-label-check-client";
 
 // Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.

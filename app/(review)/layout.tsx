@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { SiteShell } from "@/components/layout/site-shell";
 
-// Review pages check the session and role themselves (lib/page-auth.ts); this frame reads nothing.
+// Review pages check the session and role themselves (server/page-auth.ts); this frame reads nothing.
 export default function ReviewLayout({ children }: { children: React.ReactNode }) {
   return (
     <SiteShell>

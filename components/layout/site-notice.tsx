@@ -1,6 +1,6 @@
 // The admin's notice (/admin/settings) under the header of every page. Read through the tagged cache, so
 // static pages show a change at once; a notice is never worth an error page, so a failed read shows none.
-import { cachedSiteSettings } from "@/lib/public-data";
+import { cachedSiteSettings } from "@/server/public-data";
 
 export async function SiteNotice() {
   let notice: string | null = null;

@@ -3,7 +3,7 @@
 import "server-only";
 import { eq, like, or, sql } from "drizzle-orm";
 import type { Executor } from "@/db";
-import type { PackLabelFields } from "@/db/queries/packs";
+import type { PackLabelFields } from "@/lib/catalogue";
 import { makers, packs } from "@/db/schema";
 import { slugify } from "@/lib/slug";
 

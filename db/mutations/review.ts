@@ -1,6 +1,6 @@
 // Moderation writes. Each status change and its review_events row share one transaction, with the result
 // row locked (SELECT … FOR UPDATE) and its status re-checked, so two moderators can never both decide the
-// same result. Revalidation and e-mail run only after the commit (db/mutations/review-effects.ts).
+// same result. Revalidation and e-mail run only after the commit, in the service (server/review.ts).
 import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { db, type Executor, type Transaction } from "@/db";
@@ -9,9 +9,15 @@ import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewSt
 import type { PlausibilityFlag } from "@/db/schema/results";
 import { plausibilityFlags } from "@/lib/analysis/plausibility";
 import { AppError } from "@/lib/errors";
+import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { packTitle } from "@/lib/format";
-import { rejectReasonLabels, type FlagResolution, type RejectReason } from "@/lib/validations/review";
-import { notifyDecision, revalidateResult, type ResultContext } from "./review-effects";
+import type { FlagResolution, RejectReason } from "@/lib/validations/review";
+
+/** What the after-effects of a moderation write need: the result, its pack and group, who submitted it. */
+export type ResultContext = {
+  resultId: number; packId: number; packSlug: string; makerSlug: string; groupKey: string; packTitle: string;
+  contributorId: string; contributorEmail: string | null;
+};
 
 /**
  * Computes the automatic plausibility flags of a result and stores them on it (results.flags). The
@@ -71,9 +77,17 @@ export type Decision =
   | { kind: "request-changes"; note: string };
 
 const decisionStatus = { approve: "approved", reject: "rejected", "request-changes": "changes_requested" } as const;
+export type DecisionStatus = (typeof decisionStatus)[Decision["kind"]];
 
-/** Approve, reject or request changes on a pending result. A moderator cannot decide their own result. */
-export async function decideResult(actorId: string, resultId: number, decision: Decision): Promise<{ resultId: number; status: ReviewStatus }> {
+/**
+ * Approve, reject or request changes on a pending result, in one transaction. A moderator cannot decide
+ * their own result. Returns what the after-effects need (server/review.ts#decideResult runs them).
+ */
+export async function writeDecision(
+  actorId: string,
+  resultId: number,
+  decision: Decision,
+): Promise<{ ctx: ResultContext; status: DecisionStatus }> {
   const to = decisionStatus[decision.kind];
   const reason = decision.kind === "reject" ? decision.reason : null;
   const ctx = await db.transaction(async (tx) => {
@@ -83,18 +97,8 @@ export async function decideResult(actorId: string, resultId: number, decision: 
     await transition(tx, { resultId, actorId, from: "pending", to, reason, note: decision.note, publish: to === "approved" });
     return c;
   });
-  if (to === "approved") revalidateResult(ctx);
-  const said = [reason ? `Reason: ${rejectReasonLabels[decision.kind === "reject" ? decision.reason : "other"]}.` : null, decision.note].filter(Boolean).join(" ");
-  await notifyDecision(ctx, to, said || null);
-  return { resultId, status: to };
+  return { ctx, status: to };
 }
-
-/** What a resolution did: the moderator's page names the flag, the result and the result's status after it. */
-export type ResolvedFlag = {
-  flagId: number; resolution: FlagResolution; resultId: number; status: ReviewStatus;
-  /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
-  alsoClosed: number;
-};
 
 const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved", corrected: "approved", withdrawn: "withdrawn" };
 
@@ -103,12 +107,12 @@ const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved
  * stays disputed while other flags are still open, unless it is withdrawn, which closes them all. A withdrawn
  * result is never deleted: it and its history stay in the audit log.
  */
-export async function resolveReaderFlag(
+export async function writeFlagResolution(
   actorId: string,
   flagId: number,
   resolution: FlagResolution,
   note: string | null,
-): Promise<ResolvedFlag> {
+): Promise<{ ctx: ResultContext; resolved: ResolvedFlag }> {
   const { ctx, status, alsoClosed } = await db.transaction(async (tx) => {
     const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
     if (!flag) throw new AppError("not_found", "That flag does not exist.");
@@ -136,6 +140,5 @@ export async function resolveReaderFlag(
     }
     return { ctx: c, status: c.status, alsoClosed };
   });
-  revalidateResult(ctx);
-  return { flagId, resolution, resultId: ctx.resultId, status, alsoClosed };
+  return { ctx, resolved: { flagId, resolution, resultId: ctx.resultId, status, alsoClosed } };
 }

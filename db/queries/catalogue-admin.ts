@@ -1,6 +1,6 @@
 // Reads for /admin/catalogue: every maker and pack that is not merged away, with how many results they hold.
 import "server-only";
-import { asc, count, eq, ne } from "drizzle-orm";
+import { asc, count, eq, inArray, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 
@@ -30,3 +30,10 @@ export async function listCataloguePacks() {
 }
 export type CataloguePack = Awaited<ReturnType<typeof listCataloguePacks>>[number];
 export type CatalogueMaker = Awaited<ReturnType<typeof listCatalogueMakers>>[number];
+
+/** The like-for-like groups the results of these packs are in. */
+export async function listGroupKeysOfPacks(packIds: number[]): Promise<string[]> {
+  if (packIds.length === 0) return [];
+  const rows = await db.selectDistinct({ groupKey: results.groupKey }).from(results).where(inArray(results.packId, packIds));
+  return rows.map((r) => r.groupKey);
+}

@@ -1,21 +1,11 @@
 // Everything /compare shows for 2–6 packs in one like-for-like group: summaries, exclusions with reasons,
 // and one prepared curve per pack. Results of other groups are counted and explained, never mixed in.
 import "server-only";
-import { comparePacks, groupOptions, type CompareGroupOption, type ComparedPack } from "@/lib/compare";
-import { COMPARE_CURVE_POINTS, prepareCurve, type ChartPoint } from "@/lib/curves";
-import type { DescribedGroup } from "@/lib/like-for-like";
+import { comparePacks, groupOptions, type Comparison } from "@/lib/compare";
+import { COMPARE_CURVE_POINTS, prepareCurve } from "@/lib/curves";
 import { describeResultGroup } from "@/lib/pack-summary";
-import { getPacksBySlugs, type PackSummary } from "./packs";
+import { getPacksBySlugs } from "./packs";
 import { getPublicCurves, listPublicResultsForPacks } from "./results";
-
-export type Comparison = {
-  packs: PackSummary[];
-  unknownSlugs: string[];
-  groups: CompareGroupOption[];
-  group: DescribedGroup | null;
-  compared: ComparedPack[];
-  curves: { packSlug: string; resultId: number; points: ChartPoint[] }[];
-};
 
 export async function getComparison(slugs: string[], wantedGroup: string | null): Promise<Comparison> {
   const packList = await getPacksBySlugs(slugs);

@@ -3,7 +3,8 @@
 import "server-only";
 import { PACK_PAGE_CURVE_POINTS, prepareCurve, type ChartPoint } from "@/lib/curves";
 import { cycleSeries, describeResultGroup, figuresByGroup, sustainedC, type CycleSeries, type GroupFigures, type PublicResultRow } from "@/lib/pack-summary";
-import { getPackBySlug, type PackSummary } from "./packs";
+import type { PackSummary } from "@/lib/catalogue";
+import { getPackBySlug } from "./packs";
 import { getPublicCurves, listPublicResultsForPacks } from "./results";
 
 /** Curves drawn on a pack page (the newest results); the rest are listed. */

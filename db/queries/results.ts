@@ -1,5 +1,5 @@
 // Reads of published results. Public = approved or disputed (disputed stay visible, marked). Dates leave
-// as ISO strings so the cached reads (lib/public-data.ts) survive JSON round trips.
+// as ISO strings so the cached reads (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";

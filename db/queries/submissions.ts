@@ -4,7 +4,8 @@ import "server-only";
 import { and, asc, desc, eq, or } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents } from "@/db/schema";
-import { packLabelColumns, type PackLabelFields } from "./packs";
+import type { PackLabelFields } from "@/lib/catalogue";
+import { packLabelColumns } from "./packs";
 
 export type PackChoice = { id: number; makerName: string; model: string; proposed: boolean } & PackLabelFields;
 

@@ -1,7 +1,7 @@
 // Users and the tables Auth.js (Drizzle adapter) expects. The role lives on the user row and is read
 // fresh on every request (database sessions), so a demotion takes effect at once.
 import { boolean, integer, pgEnum, pgTable, primaryKey, text, timestamp, index } from "drizzle-orm/pg-core";
-import { userRoles, type UserRole } from "./enums";
+import { userRoles, type UserRole } from "@/lib/enums";
 
 export { userRoles, type UserRole };
 export const userRole = pgEnum("user_role", userRoles);

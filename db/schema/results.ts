@@ -7,7 +7,7 @@ import {
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import { users } from "./auth";
 import { packs } from "./catalogue";
-import { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus } from "./enums";
+import { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus } from "@/lib/enums";
 
 export { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus };
 export const reviewStatus = pgEnum("review_status", reviewStatuses);

@@ -1,8 +1,7 @@
 // The published fields of each table: one list drives the CSV columns, the Table Schema in the Data
 // Package and the OpenAPI schemas, so names, types and units never drift apart.
-import type { MakerRow, PackRow } from "@/db/queries/open-data/packs";
-import type { ResultRow } from "@/db/queries/open-data/results";
 import type { CsvCell } from "./csv";
+import type { MakerRow, PackRecord, ResultRow } from "./records";
 
 export type FieldType = "integer" | "number" | "string" | "date" | "datetime";
 export type Constraints = { required?: boolean; unique?: boolean; minimum?: number; maximum?: number; enum?: string[]; pattern?: string };
@@ -17,7 +16,7 @@ export const makerFields: Field<MakerRow>[] = [
   { name: "packCount", type: "integer", description: "Active packs of this maker (count).", constraints: { required: true, minimum: 0 }, value: (r) => r.packCount },
 ];
 
-export const packFields: Field<PackRow>[] = [
+export const packFields: Field<PackRecord>[] = [
   { name: "id", type: "integer", description: "Pack id (stable).", constraints: { required: true, unique: true, minimum: 1 }, value: (r) => r.id },
   { name: "slug", type: "string", description: "URL name of the pack.", constraints: { required: true, unique: true, pattern: slugPattern }, value: (r) => r.slug },
   { name: "makerId", type: "integer", description: "The maker (makers.id).", constraints: { required: true }, value: (r) => r.makerId },

@@ -2,7 +2,7 @@
 // schema for the form (react-hook-form + zodResolver) and the server action. Ranges match the method card
 // (and the results table's checks): ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C.
 import { z } from "zod";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
+import { loadModes, resistanceMethods } from "@/lib/enums";
 import { optionalEnum, optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
 export const benchProfileSchema = z

@@ -2,8 +2,8 @@
 // actions. Inputs hold strings as typed; the schema turns them into numbers. The method-card bounds match
 // the results table's checks: ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C, load > 0.
 import { z } from "zod";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
-import { PHOTO_EXTENSIONS } from "@/lib/storage/keys";
+import { loadModes, resistanceMethods } from "@/lib/enums";
+import { PHOTO_EXTENSIONS } from "@/lib/storage-keys";
 import { optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
 /** A required number typed into an input ("" → "Enter …"). */

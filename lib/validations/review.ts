@@ -1,6 +1,6 @@
 // Inputs of the moderation actions and the reader-flag endpoint. Shared by forms and server.
 import { z } from "zod";
-import { flagReasons } from "@/db/schema/enums";
+import { flagReasons } from "@/lib/enums";
 import { flagCodes } from "@/lib/flag-labels";
 
 export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;

@@ -1,7 +1,7 @@
 // Query parameters of the upload route handlers. The label and method-card figures are optional: they
 // only shape the preview (the submission re-analyses the stored log with the values it is sent).
 import { z } from "zod";
-import { loadModes } from "@/db/schema/enums";
+import { loadModes } from "@/lib/enums";
 import { analyseQuerySchema } from "./analyse";
 
 export const LOG_EXTENSIONS = ["csv", "txt", "tsv", "log", "dat"] as const;

@@ -1,6 +1,6 @@
 // An admin changes someone's role.
 import { z } from "zod";
-import { userRoles } from "@/db/schema/enums";
+import { userRoles } from "@/lib/enums";
 
 export const setUserRoleSchema = z.object({
   userId: z.string().trim().min(1, "No user given.").max(100),

@@ -1,6 +1,6 @@
 // Stand-ins for next/headers and next/cache in integration tests, so server actions run outside Next.js
 // with a real session: `requestState.token` holds a session token inserted into the sessions table, and
-// lib/session.ts really looks it up. Use in a test file with:
+// server/session.ts really looks it up. Use in a test file with:
 //   vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 //   vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 export const requestState = {

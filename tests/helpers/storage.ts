@@ -1,7 +1,7 @@
 // Looks into the S3 stand-in's test bucket (integration tests set S3_BUCKET=sagline-test).
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
-import { env } from "@/lib/env";
-import { getObjectText, storageClient } from "@/lib/storage";
+import { env } from "@/server/env";
+import { getObjectText, storageClient } from "@/server/storage";
 
 export async function keysUnder(prefix: string): Promise<string[]> {
   const out = await storageClient().send(new ListObjectsV2Command({ Bucket: env().S3_BUCKET, Prefix: prefix }));

@@ -1,4 +1,4 @@
-// The public API reads through tagged caches (lib/public-data.ts): a read is served from the cache until a
+// The public API reads through tagged caches (server/public-data.ts): a read is served from the cache until a
 // tag it carries is revalidated, and a moderation decision revalidates exactly those tags. Uses a next/cache
 // stand-in that really caches by key and drops entries by tag (tests/helpers/next-mocks.ts).
 import { beforeAll, describe, expect, it, vi } from "vitest";
@@ -7,7 +7,7 @@ import { GET as getPack } from "@/app/api/v1/packs/[slug]/route";
 import { GET as getResults } from "@/app/api/v1/results/route";
 import { GET as getGroup } from "@/app/api/v1/groups/[key]/route";
 import { db } from "@/db";
-import { decideResult } from "@/db/mutations/review";
+import { decideResult } from "@/server/review";
 import { makers, users } from "@/db/schema";
 import { taggedCache } from "../helpers/next-mocks";
 import { seedOpenData } from "../helpers/open-data-fixtures";

@@ -6,9 +6,9 @@ import { randomUUID } from "node:crypto";
 import { eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox } from "@/db/schema";
-import { flushOutbox, MAX_ATTEMPTS, retryDelayS, sendMail } from "@/lib/mail/outbox";
-import { mailTransport, type MailTransport } from "@/lib/mail/transport";
-import { signInLinkMail, submissionReceiptMail } from "@/lib/mail/templates";
+import { flushOutbox, MAX_ATTEMPTS, retryDelayS, sendMail } from "@/server/mail/outbox";
+import { mailTransport, type MailTransport } from "@/server/mail/transport";
+import { signInLinkMail, submissionReceiptMail } from "@/server/mail/templates";
 import { newestMailFor } from "../helpers/mail";
 
 async function closedPort(): Promise<number> {

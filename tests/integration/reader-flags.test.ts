@@ -10,7 +10,7 @@ import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser, signedIn } from "../helpers/users";
 
 const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/revalidate", () => revalidate);
+vi.mock("@/server/revalidate", () => revalidate);
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 

@@ -12,7 +12,7 @@ import { makePack, makeResult } from "../helpers/review-fixtures";
 import { signedIn } from "../helpers/users";
 
 const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/revalidate", () => revalidate);
+vi.mock("@/server/revalidate", () => revalidate);
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
@@ -141,7 +141,7 @@ describe("review decisions", () => {
     expect((await approveResult(null, { resultId: r.id })).ok).toBe(true);
     expect(await rejectResult(null, { resultId: r.id, reason: "duplicate" })).toMatchObject({ ok: false, code: "conflict" });
 
-    const { decideResult } = await import("@/db/mutations/review");
+    const { decideResult } = await import("@/server/review");
     const modB = await signedIn("moderator", "mod-b");
     const r2 = await makeResult({ packId: pack.id, contributorId: contributor.id });
     const outcomes = await Promise.allSettled([

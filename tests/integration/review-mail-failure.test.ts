@@ -7,15 +7,15 @@ import { results, reviewEvents } from "@/db/schema";
 import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser } from "../helpers/users";
 
-vi.mock("@/lib/revalidate", () => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/mail", async (orig) => ({
-  ...(await orig<typeof import("@/lib/mail")>()),
+vi.mock("@/server/revalidate", () => ({ revalidateTags: vi.fn() }));
+vi.mock("@/server/mail", async (orig) => ({
+  ...(await orig<typeof import("@/server/mail")>()),
   sendMail: vi.fn(async () => {
     throw new Error("outbox unavailable");
   }),
 }));
 
-const { decideResult } = await import("@/db/mutations/review");
+const { decideResult } = await import("@/server/review");
 
 describe("decisions survive mail failures", () => {
   it("approves and records the event even when sending mail throws", async () => {

@@ -5,7 +5,7 @@ import type { ActionResult } from "@/lib/errors";
 import { requestState } from "../helpers/next-mocks";
 import { signedIn } from "../helpers/users";
 
-vi.mock("@/lib/revalidate", () => ({ revalidateTags: vi.fn() }));
+vi.mock("@/server/revalidate", () => ({ revalidateTags: vi.fn() }));
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 

@@ -3,7 +3,7 @@
 import { describe, expect, it, vi } from "vitest";
 import robots from "@/app/robots";
 import sitemap from "@/app/sitemap";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);

@@ -2,7 +2,7 @@
 // route answers 429 with Retry-After, and the sign-in form's action returns a clear message.
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
-import { limits } from "@/lib/rate-limit";
+import { limits } from "@/server/rate-limit";
 import { requestState } from "../helpers/next-mocks";
 import { caughtFor } from "../helpers/mail";
 

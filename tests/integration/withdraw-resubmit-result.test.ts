@@ -4,7 +4,7 @@ import { asc, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { results, reviewEvents, type ReviewStatus } from "@/db/schema";
-import { settleAfterResponse } from "@/lib/after-response";
+import { settleAfterResponse } from "@/server/after-response";
 import { sampleLog } from "../helpers/logs";
 import { requestState } from "../helpers/next-mocks";
 import { keysUnder } from "../helpers/storage";

@@ -5,7 +5,7 @@ import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { listResultsByContributor } from "@/db/queries/results-by-contributor";
 import { listWatchesForUser } from "@/db/queries/watches";
 import { resistanceMethodLabels } from "@/lib/method-labels";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { signOut } from "./actions/sign-out";
 import { MyResults } from "./_components/my-results";
 import { ProfileForm } from "./_components/profile-form-client";

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { z } from "zod";
 import Link from "next/link";
 import { Alert } from "@/components/ui/form";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/server/session";
 import { publicName } from "@/lib/user-name";
 import { callbackPath } from "@/lib/validations/sign-in";
 import { SignInForm } from "./sign-in-client";

@@ -4,8 +4,8 @@ import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { getSiteSettings } from "@/db/queries/site-settings";
 import { listMakerChoices, listPackChoices } from "@/db/queries/submissions";
 import { Alert } from "@/components/ui/form";
-import { env } from "@/lib/env";
-import { requirePageUser } from "@/lib/page-auth";
+import { env } from "@/server/env";
+import { requirePageUser } from "@/server/page-auth";
 import { SubmitForm } from "./_components/submit-form-client";
 import { profileOption } from "./_components/profile-option";
 

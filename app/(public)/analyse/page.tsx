@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { AnalyseClient } from "./_components/analyse-client";
 
 export const metadata: Metadata = {

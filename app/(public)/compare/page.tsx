@@ -5,7 +5,7 @@ import { LineChart } from "@/components/charts/line-chart";
 import { MAX_COMPARE, MIN_COMPARE, suggestComparisons } from "@/lib/compare";
 import { compareChartData } from "@/lib/compare-charts";
 import { packTitle } from "@/lib/format";
-import { cachedComparison, cachedGroups, cachedPacks, cachedPacksInGroup } from "@/lib/public-data";
+import { cachedComparison, cachedGroups, cachedPacks, cachedPacksInGroup } from "@/server/public-data";
 import { ComparePicker } from "./_components/compare-picker-client";
 import { CompareTable } from "./_components/compare-table";
 

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { DATASETS, dataPackageDescriptor } from "@/lib/open-data/datapackage";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_TITLE, DATA_LICENCE_URL, DATA_SCHEMA_VERSION } from "@/lib/open-data/licence";
-import { cachedGroupOptions, cachedMakers } from "@/lib/public-data";
+import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
 import { DownloadForm } from "./_components/download-form";
 
-// Refreshed by tag (lib/public-data.ts: `results`, `packs`) the moment a decision or a catalogue change lands;
+// Refreshed by tag (server/public-data.ts: `results`, `packs`) the moment a decision or a catalogue change lands;
 // the hour is only a safety net, the same as PUBLIC_REVALIDATE_S (a segment option must be a literal).
 export const revalidate = 3600;
 export const metadata: Metadata = { title: "Open data and API", description: `Download every approved Sagline result as CSV or JSON, with a Data Package descriptor, or read it through the API. ${DATA_LICENCE_SHORT}.` };

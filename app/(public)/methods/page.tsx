@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { readContent, renderMarkdown } from "@/lib/markdown";
+import { readContent, renderMarkdown } from "@/server/markdown";
 
 export const metadata: Metadata = { title: "Methods and safety", description: "How Sagline computes every figure, which results it compares, how to run a usable test, and safety cautions." };
 export const dynamic = "force-static";

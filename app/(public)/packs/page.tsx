@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Suspense } from "react";
 import { queryPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
-import { cachedGroups, cachedPackRows } from "@/lib/public-data";
+import { cachedGroups, cachedPackRows } from "@/server/public-data";
 import { PacksClient, PacksView } from "./_components/packs-client";
 import type { ApiPackPage, FilterOptions } from "./_components/types";
 

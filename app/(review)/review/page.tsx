@@ -4,7 +4,7 @@ import { buttonClass, inputClass } from "@/components/ui/form";
 import { listReviewQueue } from "@/db/queries/review";
 import { flagCodes, flagLabels } from "@/lib/flag-labels";
 import { fmt } from "@/lib/format";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { reviewQueueFilterSchema } from "@/lib/validations/review";
 import { FlagChips } from "./_components/flag-chips";
 import { QueueKeys } from "./_components/queue-keys-client";

@@ -1,7 +1,7 @@
 // GET /api/oembed — oEmbed for Sagline charts: JSON only (501 otherwise), 404 for URLs that are not charts.
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiOptions, corsHeaders, parseQuery } from "@/lib/open-data/api";
+import { apiGet, apiOptions, corsHeaders, parseQuery } from "@/server/api";
 import { oembedQuery, oembedResponse } from "@/lib/open-data/oembed";
 
 export const GET = apiGet(async (req) => {

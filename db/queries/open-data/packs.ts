@@ -3,24 +3,19 @@ import "server-only";
 import { and, asc, count, eq, gte, ilike, lte, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
+import type { MakerRow, PackRecord } from "@/lib/open-data/records";
 import type { PackFilters } from "@/lib/validations/open-data";
+import { packLabelColumns } from "@/db/queries/packs";
 
 export type Page = { page: number; size: number };
 export type Paged<T> = { rows: T[]; total: number };
 
-export type MakerRow = { id: number; slug: string; name: string; packCount: number };
-export type PackRow = {
-  id: number; slug: string; makerId: number; makerSlug: string; makerName: string; model: string;
-  cellsInSeries: number; ratedCapacityMah: number; labelledContinuousC: number; labelledBurstC: number | null;
-  weightG: number | null; connector: string; approvedResultCount: number;
-};
 
 const approvedCount = sql<number>`(select count(*)::int from ${results} where ${results.packId} = ${packs.id} and ${results.status} = 'approved')`;
 
 const packColumns = {
   id: packs.id, slug: packs.slug, makerId: packs.makerId, makerSlug: makers.slug, makerName: makers.name, model: packs.model,
-  cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, labelledContinuousC: packs.labelledContinuousC,
-  labelledBurstC: packs.labelledBurstC, weightG: packs.weightG, connector: packs.connector, approvedResultCount: approvedCount,
+  ...packLabelColumns, approvedResultCount: approvedCount,
 };
 
 function escapeLike(s: string): string {
@@ -74,7 +69,7 @@ async function listMakersPageWhere(slug: string): Promise<Paged<MakerRow>> {
   return { rows, total: rows.length };
 }
 
-export async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRow>> {
+export async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRecord>> {
   const where = and(...packConditions(f));
   const rows = await db
     .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where)
@@ -84,7 +79,7 @@ export async function listPacksPage(f: PackFilters, { page, size }: Page): Promi
   return { rows, total: total?.n ?? 0 };
 }
 
-export async function getApiPackBySlug(slug: string): Promise<PackRow | null> {
+export async function getApiPackBySlug(slug: string): Promise<PackRecord | null> {
   const rows = await db
     .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId))
     .where(and(eq(packs.slug, slug), eq(packs.status, "active"))).limit(1);
@@ -97,6 +92,6 @@ export async function listAllMakers(): Promise<MakerRow[]> {
 }
 
 /** Every active pack matching the filters (downloads). */
-export async function listAllPacks(f: PackFilters = {}): Promise<PackRow[]> {
+export async function listAllPacks(f: PackFilters = {}): Promise<PackRecord[]> {
   return (await listPacksPage(f, { page: 1, size: 1_000_000 })).rows;
 }

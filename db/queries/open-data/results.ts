@@ -3,21 +3,11 @@
 import "server-only";
 import { and, asc, count, eq, type SQL } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results, type LoadMode, type ResistanceMethod } from "@/db/schema";
-import type { CurvePoint, Figures } from "@/lib/analysis";
+import { makers, packs, results } from "@/db/schema";
+import type { CurvePoint } from "@/lib/analysis";
+import type { ResultRow } from "@/lib/open-data/records";
 import type { ResultFilters } from "@/lib/validations/open-data";
 import { packConditions, type Page, type Paged } from "./packs";
-
-export type MethodCard = {
-  ambientTemperatureC: number; packStartTemperatureC: number | null; loadMode: LoadMode; loadCurrentA: number;
-  loadRateC: number; cutoffVPerCell: number; stopTemperatureC: number; resistanceMethod: ResistanceMethod;
-  equipment: string; sampleRateHz: number | null; cyclesBeforeTest: number;
-};
-
-export type ResultRow = {
-  id: number; packId: number; packSlug: string; makerSlug: string; status: "approved"; groupKey: string;
-  testedOn: string | null; publishedAt: string | null; notes: string | null; methodCard: MethodCard; figures: Figures;
-};
 
 const columns = {
   id: results.id, packId: results.packId, packSlug: packs.slug, makerSlug: makers.slug, groupKey: results.groupKey,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { PackRow } from "@/db/queries/packs";
+import type { PackRow } from "@/lib/catalogue";
 import { queryPacks, sortPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams } from "@/lib/pack-query-params";
 import { parsePackQuery } from "@/lib/validations/pack-query";

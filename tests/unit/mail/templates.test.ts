@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { escapeHtml } from "@/lib/mail/html";
-import { reviewDecisionMail, signInLinkMail, submissionReceiptMail, watchedPackResultMail } from "@/lib/mail/templates";
-import { linkify } from "@/lib/mail/catcher";
+import { escapeHtml } from "@/server/mail/html";
+import { reviewDecisionMail, signInLinkMail, submissionReceiptMail, watchedPackResultMail } from "@/server/mail/templates";
+import { linkify } from "@/server/mail/catcher";
 
 const url = "http://localhost:3011/api/auth/callback/nodemailer?callbackUrl=%2Faccount&token=abc&email=a%40b.example";
 

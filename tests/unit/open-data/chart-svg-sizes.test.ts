@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import type { ChartData } from "@/lib/open-data/chart-data";
 import type { ChartSize } from "@/lib/open-data/chart-size";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
-import { chartFontFiles } from "@/lib/open-data/font";
+import { chartFontFiles } from "@/server/open-data/font";
 
 const labels = ["Ridgeway Pro 1300 4S 100C", "Tallow Racing 1500 6S", "Cinder 850 3S", "Northbank Sport 2200 4S 75C", "Quillon Max 1800 6S", "Fenwick 1000 4S", "Harrow Lite 650 2S", "Osprey Flux 1550 5S"];
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({

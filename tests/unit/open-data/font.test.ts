@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { woffToSfnt } from "@/lib/open-data/font";
+import { woffToSfnt } from "@/server/open-data/font";
 
 describe("WOFF 1.0 → sfnt (W3C WOFF File Format 1.0)", () => {
   it("unwraps the shipped Inter font into a TrueType file with the same tables", () => {

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { buttonClass } from "@/components/ui/form";
-import type { ReviewStatus } from "@/db/schema/enums";
+import type { ReviewStatus } from "@/lib/enums";
 import { withdrawResult } from "../actions/withdraw-result";
 
 export function ResultActions({ resultId, status }: { resultId: number; status: ReviewStatus }) {

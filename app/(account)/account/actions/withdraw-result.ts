@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { withdrawOwnResult } from "@/db/mutations/results";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { withdrawResultSchema } from "@/lib/validations/result";
 
 /** Withdraw one's own result while it waits for review (or for one's changes). */

@@ -4,7 +4,7 @@ import { buttonClass } from "@/components/ui/form";
 import { listBenchProfilesForUser, type BenchProfile } from "@/db/queries/bench-profiles";
 import { fmt } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { DeleteBenchProfileButton } from "./_components/delete-bench-profile-client";
 
 export const metadata: Metadata = { title: "Bench profiles" };

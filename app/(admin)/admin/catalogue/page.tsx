@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { listCatalogueMakers, listCataloguePacks } from "@/db/queries/catalogue-admin";
 import { fmt, labelSpec } from "@/lib/format";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { MergeForm } from "./_components/merge-form-client";
 import { PackLabelForm } from "./_components/pack-label-form-client";
 

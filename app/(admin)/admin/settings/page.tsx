@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { getSiteSettings } from "@/db/queries/site-settings";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { SettingsForm } from "./_components/settings-form-client";
 
 export const metadata: Metadata = { title: "Site settings" };

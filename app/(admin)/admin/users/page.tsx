@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { listUsers } from "@/db/queries/users";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { userListParams } from "@/lib/validations/user-role";
 import { RoleForm } from "./_components/role-form-client";
 

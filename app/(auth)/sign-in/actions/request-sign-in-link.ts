@@ -3,10 +3,10 @@
 // Auth.js (which creates the hashed verification token) and our mail outbox.
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
-import { signIn } from "@/lib/auth";
+import { signIn } from "@/server/auth";
 import { actionError, AppError, type ActionResult } from "@/lib/errors";
-import { clientIp } from "@/lib/rate-limit";
-import { enforceSignInLimits } from "@/lib/sign-in-limits";
+import { clientIp } from "@/server/rate-limit";
+import { enforceSignInLimits } from "@/server/sign-in-limits";
 import { signInSchema } from "@/lib/validations/sign-in";
 
 export async function requestSignInLink(_prev: ActionResult | null, form: FormData): Promise<ActionResult> {

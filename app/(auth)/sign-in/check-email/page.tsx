@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 export const metadata: Metadata = { title: "Check your e-mail" };
 export const dynamic = "force-dynamic"; // the local-tools hint depends on the running environment

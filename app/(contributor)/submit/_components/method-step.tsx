@@ -1,7 +1,7 @@
 "use client";
 // Step 2: the method card, prefilled from a bench profile. Every number shows its unit and bounds.
 import { describedBy, Field, inputClass } from "@/components/ui/form";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
+import { loadModes, resistanceMethods } from "@/lib/enums";
 import { fmt } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
 import type { MethodCardValues } from "@/lib/validations/result";

@@ -1,6 +1,6 @@
 // What the submit page hands its client components (plain data, no Date objects).
 import type { PackChoice } from "@/db/queries/submissions";
-import type { LoadMode, ResistanceMethod } from "@/db/schema/enums";
+import type { LoadMode, ResistanceMethod } from "@/lib/enums";
 
 export type PackOption = PackChoice;
 export type MakerOption = { id: number; name: string };

@@ -2,7 +2,7 @@
 // Tells the server that the draft in this browser is still open — when the form is opened and when the tab
 // comes back into view (at most hourly) — so the storage sweep keeps its uploaded files; reports those gone.
 import { useEffect, useRef } from "react";
-import type { KeptDraftFiles } from "@/lib/submissions/draft-files";
+import type { KeptDraftFiles } from "@/server/submissions/draft-files";
 import { keepDraftFiles } from "../actions/keep-draft-files";
 
 const EVERY_MS = 60 * 60 * 1000;

@@ -1,7 +1,7 @@
 "use server";
-import { authedAction } from "@/lib/authed-action";
-import { analyseForCard, checkFiles, resolvePack } from "@/lib/submissions/prepare";
-import { previewOf } from "@/lib/uploads/analyse";
+import { authedAction } from "@/server/authed-action";
+import { analyseForCard, checkFiles, resolvePack } from "@/server/submissions/prepare";
+import { previewOf } from "@/server/uploads/analyse";
 import { previewStoredLogSchema } from "@/lib/validations/result";
 
 /** The figures of an uploaded (not yet submitted) log with the current pack and method card. */

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { cachedGroupOptions, cachedMakers } from "@/lib/public-data";
+import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.

@@ -1,5 +1,5 @@
 import { SummaryValue } from "@/components/summary-value";
-import type { PackSummary } from "@/db/queries/packs";
+import type { PackSummary } from "@/lib/catalogue";
 import { markDifferences, NOTABLE_DIFFERENCE, type ComparedPack, type Direction } from "@/lib/compare";
 import { exclusionText } from "@/lib/like-for-like";
 import { fmt, labelSpec, packTitle } from "@/lib/format";

@@ -1,6 +1,6 @@
 // Filtered downloads: a plain GET form (works without JavaScript); each button names its file.
 import type { GroupOption } from "@/db/queries/open-data/groups";
-import type { MakerRow } from "@/db/queries/open-data/packs";
+import type { MakerRow } from "@/lib/open-data/records";
 
 const inputClass = "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
 

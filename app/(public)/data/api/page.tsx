@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { makerFields, packFields, resultFields, type Field } from "@/lib/open-data/fields";
 import { ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { openApiDocument } from "@/lib/open-data/openapi";

@@ -1,4 +1,4 @@
-import type { PackRow } from "@/db/queries/packs";
+import type { PackRow } from "@/lib/catalogue";
 
 /** A row as the public API sends it (no database id). */
 export type ApiPackRow = Omit<PackRow, "id">;

@@ -9,7 +9,7 @@ import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { reviewReasonLabels } from "@/lib/review-status-labels";
-import { cachedResult } from "@/lib/public-data";
+import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.

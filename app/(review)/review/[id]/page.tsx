@@ -6,7 +6,7 @@ import { ReviewHistory } from "@/components/review-history";
 import { getReviewDetail, type GroupMedians } from "@/db/queries/review";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { flagReasonLabels } from "@/lib/validations/review";
 import { FlagChips } from "../_components/flag-chips";

@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { listOpenReaderFlags } from "@/db/queries/review";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { flagReasonLabels } from "@/lib/validations/review";
-import type { FlagReason } from "@/db/schema/enums";
+import type { FlagReason } from "@/lib/enums";
 import { ResolveFlagForm } from "./_components/resolve-flag-client";
 import { ResolvedFlagNotice } from "./_components/resolved-flag-notice-client";
 

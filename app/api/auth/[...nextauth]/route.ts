@@ -2,10 +2,10 @@
 // A POST asking for a sign-in link is rate-limited per address and per IP first (429 + Retry-After).
 import { NextRequest } from "next/server";
 import { z } from "zod";
-import { handlers } from "@/lib/auth";
-import { clientIp } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { enforceSignInLimits } from "@/lib/sign-in-limits";
+import { handlers } from "@/server/auth";
+import { clientIp } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { enforceSignInLimits } from "@/server/sign-in-limits";
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 

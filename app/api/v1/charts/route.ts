@@ -6,10 +6,10 @@ import { z } from "zod";
 import { listSavedCharts } from "@/db/queries/open-data/charts";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
-import { withPermission } from "@/lib/route";
+import { withPermission } from "@/server/route";
 
 export const GET = apiGet(async (req) => {
   const charts = await listSavedCharts();

@@ -1,6 +1,6 @@
 // GET /api/v1/groups — like-for-like groups with their numbers of approved results and packs.
-import { cachedApiGroups } from "@/lib/public-data";
-import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/lib/open-data/api";
+import { cachedApiGroups } from "@/server/public-data";
+import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
 import { groupListQuery } from "@/lib/validations/open-data";
 
 export const GET = apiGet(async (req) => {

@@ -3,7 +3,7 @@
 // button: pack pages are static and never read cookies, so they ask here).
 import { isWatching } from "@/db/queries/watches";
 import { AppError } from "@/lib/errors";
-import { withPermission } from "@/lib/route";
+import { withPermission } from "@/server/route";
 import { publicName } from "@/lib/user-name";
 import { watchPackSchema } from "@/lib/validations/watch";
 

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { env } from "@/lib/env";
-import { getCaughtMail, linkify } from "@/lib/mail/catcher";
+import { env } from "@/server/env";
+import { getCaughtMail, linkify } from "@/server/mail/catcher";
 
 export const metadata: Metadata = { title: "Caught mail", robots: { index: false } };
 export const dynamic = "force-dynamic";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
-import { loadChartData } from "@/lib/open-data/chart-data";
+import { loadChartData } from "@/server/open-data/load-chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
 import { decodeChartStateSegments } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";

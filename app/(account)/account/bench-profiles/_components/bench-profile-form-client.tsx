@@ -8,7 +8,7 @@ import { useRouter } from "next/navigation";
 import { useRef, useState, useTransition } from "react";
 import { useForm, type UseFormRegister } from "react-hook-form";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
+import { loadModes, resistanceMethods } from "@/lib/enums";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
 import { benchProfileSchema, type BenchProfileFormValues, type BenchProfileInput } from "@/lib/validations/bench-profile";
 import { saveBenchProfile } from "../actions/save-bench-profile";

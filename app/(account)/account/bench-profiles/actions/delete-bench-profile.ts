@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { deleteBenchProfile as deleteBenchProfileRow } from "@/db/mutations/bench-profiles";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { deleteBenchProfileSchema } from "@/lib/validations/bench-profile";
 
 /** Delete one of the user's own bench profiles (results made with it keep their method card). */

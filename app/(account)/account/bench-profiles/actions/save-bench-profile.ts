@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { createBenchProfile, updateBenchProfile } from "@/db/mutations/bench-profiles";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { saveBenchProfileSchema } from "@/lib/validations/bench-profile";
 
 /** Create a bench profile, or update one of the user's own when an id is given. */

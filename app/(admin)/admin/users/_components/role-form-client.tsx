@@ -1,7 +1,7 @@
 "use client";
 import { useActionState } from "react";
 import { buttonClass, inputClass } from "@/components/ui/form";
-import { userRoles, type UserRole } from "@/db/schema/enums";
+import { userRoles, type UserRole } from "@/lib/enums";
 import { setUserRole } from "../actions/set-user-role";
 
 const roleLabels: Record<UserRole, string> = { contributor: "Contributor", moderator: "Moderator", admin: "Admin" };

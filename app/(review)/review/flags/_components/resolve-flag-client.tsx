@@ -1,7 +1,7 @@
 "use client";
 import { useActionState } from "react";
 import { Alert, buttonClass, Field, inputClass } from "@/components/ui/form";
-import type { ResolvedFlag } from "@/db/mutations/review";
+import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import type { ActionResult } from "@/lib/errors";
 import { resolveFlag } from "../actions/resolve-flag";
 import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";

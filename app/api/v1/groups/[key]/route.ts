@@ -1,8 +1,8 @@
 // GET /api/v1/groups/{key} — one like-for-like group: per-pack medians of approved results with n and spread.
-import { cachedGroupSamples } from "@/lib/public-data";
+import { cachedGroupSamples } from "@/server/public-data";
 import { AppError } from "@/lib/errors";
 import { aggregateByPack, groupLabel } from "@/lib/open-data/aggregate";
-import { apiGet, apiJson, apiOptions, parseQuery } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions, parseQuery } from "@/server/api";
 import { groupKeyRouteParam, packFilters } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ key: string }>(async (req, params) => {

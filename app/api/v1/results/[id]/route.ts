@@ -1,7 +1,7 @@
 // GET /api/v1/results/{id} — one approved result with its method card and figures.
 import { getApprovedResult } from "@/db/queries/open-data/results";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { idParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ id: string }>(async (req, params) => {

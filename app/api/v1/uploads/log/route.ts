@@ -1,12 +1,12 @@
 // POST /api/v1/uploads/log — streams a log (raw text/csv body) to storage while hashing and analysing it; answers with its storage key and a preview.
 import { AppError } from "@/lib/errors";
-import { env } from "@/lib/env";
-import { enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { incomingLogKey } from "@/lib/storage";
-import { previewOf } from "@/lib/uploads/analyse";
-import { logBodyKind, requestChunks } from "@/lib/uploads/body";
-import { storeAndAnalyse } from "@/lib/uploads/log-upload";
+import { env } from "@/server/env";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { incomingLogKey } from "@/server/storage";
+import { previewOf } from "@/server/uploads/analyse";
+import { logBodyKind, requestChunks } from "@/server/uploads/body";
+import { storeAndAnalyse } from "@/server/uploads/log-upload";
 import { searchParamsObject } from "@/lib/validations/analyse";
 import { hasLogExtension, logUploadQuerySchema } from "@/lib/validations/upload";
 

@@ -1,11 +1,11 @@
 // POST /api/v1/uploads/photo — stores one label photo (raw image body), checked by its first bytes and size-limited; answers with its storage key.
 import { AppError } from "@/lib/errors";
-import { env } from "@/lib/env";
-import { enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { incomingPhotoKey, putObject } from "@/lib/storage";
-import { readLimited } from "@/lib/uploads/body";
-import { detectImage } from "@/lib/uploads/image";
+import { env } from "@/server/env";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { incomingPhotoKey, putObject } from "@/server/storage";
+import { readLimited } from "@/server/uploads/body";
+import { detectImage } from "@/server/uploads/image";
 
 export const dynamic = "force-dynamic";
 export const runtime = "nodejs";

@@ -1,12 +1,12 @@
 // GET /charts/image/{state}/chart.svg|chart.png — the chart drawn on the server (licence inside), at the asked
 // width/height (and PNG scale); ?download=1 saves it. A bad size answers 400 with what is allowed.
 import { z } from "zod";
-import { etagOf, ifNoneMatchHits } from "@/lib/open-data/api";
+import { etagOf, ifNoneMatchHits } from "@/server/api";
 import { AppError } from "@/lib/errors";
-import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { loadChartData } from "@/lib/open-data/chart-data";
-import { svgToPng } from "@/lib/open-data/chart-png";
+import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { loadChartData } from "@/server/open-data/load-chart-data";
+import { svgToPng } from "@/server/open-data/chart-png";
 import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { decodeChartState } from "@/lib/open-data/chart-state";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";

@@ -1,11 +1,11 @@
 // POST /api/v1/results/[id]/flags — any reader flags a published result (reason + note); rate-limited per IP.
 import { createHash } from "node:crypto";
 import { z } from "zod";
-import { fileReaderFlag } from "@/db/mutations/reader-flags";
+import { fileReaderFlag } from "@/server/review";
 import { AppError } from "@/lib/errors";
-import { env } from "@/lib/env";
-import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
+import { env } from "@/server/env";
+import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
 import { readerFlagSchema } from "@/lib/validations/review";
 
 export const dynamic = "force-dynamic";
