@@ -25,6 +25,24 @@ test("filters the packs table through the URL, and the back button restores the 
   await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
 });
 
+test("two filter boxes typed in quick succession both stay: the second builds on the first", async ({ page }) => {
+  await page.goto("/packs");
+  await settled(page);
+  const from = page.getByRole("spinbutton", { name: "Rated capacity from (mAh)" });
+  const to = page.getByRole("spinbutton", { name: "Rated capacity to (mAh)" });
+  // The second box is filled before the first one's value has reached the URL (each commits 350 ms after typing).
+  await from.fill("1000");
+  await to.fill("2000");
+  await expect(page).toHaveURL(/minMah=1000/);
+  await expect(page).toHaveURL(/maxMah=2000/);
+  await settled(page);
+  await expect(from).toHaveValue("1000");
+  await expect(to).toHaveValue("2000");
+  const capacities = (await column(page, 4)).map(mah);
+  expect(capacities.length).toBeGreaterThan(0);
+  expect(capacities.every((c) => c >= 1000 && c <= 2000)).toBe(true);
+});
+
 test("without a group, one click fills the measured columns from the most tested group", async ({ page }) => {
   await page.goto("/packs");
   await settled(page);

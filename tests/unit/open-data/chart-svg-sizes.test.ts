@@ -22,7 +22,7 @@ const sizes: ChartSize[] = [{ width: 320, height: 400 }, { width: 320, height: 3
 
 type Measured = { text: string; fontSize: number; x0: number; y0: number; x1: number; y1: number };
 
-function measureTexts(svg: string, size: ChartSize): Measured[] {
+function measureTexts(svg: string): Measured[] {
   const open = /^<svg [^>]*>/.exec(svg)?.[0] ?? "";
   return [...svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)].map((m) => {
     const one = `${open}${m[0]}</svg>`;
@@ -46,7 +46,7 @@ describe("chart SVG at the asked size", () => {
     for (const size of sizes) {
       it(`${kind} at ${size.width} × ${size.height}: text at least 10 px, inside the picture, no two texts on top of each other`, () => {
         const svg = renderChartSvg(data, size);
-        const texts = measureTexts(svg, size);
+        const texts = measureTexts(svg);
         expect(texts.length).toBeGreaterThan(3);
         for (const t of texts) {
           expect(t.fontSize, t.text).toBeGreaterThanOrEqual(10);

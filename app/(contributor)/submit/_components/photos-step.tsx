@@ -60,6 +60,7 @@ export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props
               <li key={k} className="card flex w-36 flex-col items-center gap-2 p-2 text-xs">
                 {thumbs[k] ? (
                   // A local preview of the file just chosen (an object URL; next/image does not apply).
+                  // eslint-disable-next-line @next/next/no-img-element
                   <img src={thumbs[k]} alt={`Label photo ${i + 1}`} className="h-24 w-full rounded object-cover" />
                 ) : (
                   <span className="muted flex h-24 w-full items-center justify-center rounded bg-paper-sunk dark:bg-night-sunk">Photo {i + 1} (stored)</span>

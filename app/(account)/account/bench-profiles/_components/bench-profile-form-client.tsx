@@ -5,7 +5,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useRef, useState, useTransition } from "react";
+import { useState, useTransition, type BaseSyntheticEvent } from "react";
 import { useForm, type UseFormRegister } from "react-hook-form";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
 import { loadModes, resistanceMethods } from "@/lib/enums";
@@ -30,7 +30,6 @@ function TextInput(props: {
 
 export function BenchProfileForm({ id, initial }: { id: number | null; initial: BenchProfileFormValues }) {
   const router = useRouter();
-  const formRef = useRef<HTMLFormElement>(null);
   const [pending, startTransition] = useTransition();
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState: { errors } } = useForm<BenchProfileFormValues, unknown, BenchProfileInput>({
@@ -41,10 +40,11 @@ export function BenchProfileForm({ id, initial }: { id: number | null; initial: 
   const err = (n: Name) => errors[n]?.message;
   const today = new Date().toISOString().slice(0, 10);
 
-  // Send the form as typed (FormData), not the parsed values: the server parses with the same schema.
-  const onValid = () => {
-    const el = formRef.current;
-    if (!el) return;
+  // Send the form as typed (FormData), not the parsed values: the server parses with the same schema. The
+  // submit event's target is the form itself (react-hook-form hands the event on after validating).
+  const onValid = (_values: BenchProfileInput, event?: BaseSyntheticEvent) => {
+    const el: unknown = event?.target;
+    if (!(el instanceof HTMLFormElement)) return;
     const data = new FormData(el);
     startTransition(async () => {
       const res = await saveBenchProfile(null, data);
@@ -62,7 +62,7 @@ export function BenchProfileForm({ id, initial }: { id: number | null; initial: 
 
   const common = { register };
   return (
-    <form ref={formRef} noValidate onSubmit={handleSubmit(onValid, () => setFormError(null))} className="space-y-8" aria-busy={pending}>
+    <form noValidate onSubmit={handleSubmit(onValid, () => setFormError(null))} className="space-y-8" aria-busy={pending}>
       {id !== null ? <input type="hidden" name="id" value={id} /> : null}
       <fieldset className="card grid gap-4 md:grid-cols-2">
         <legend className="px-1 text-base font-semibold">Equipment</legend>
