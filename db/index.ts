@@ -40,4 +40,3 @@ export async function closeDb(): Promise<void> {
   globalForDb.saglinePool = undefined;
   globalForDb.saglineDb = undefined;
 }
-export { schema };

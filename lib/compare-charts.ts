@@ -3,8 +3,8 @@
 import type { Comparison } from "@/lib/compare";
 import { packTitle } from "@/lib/format";
 
-export type XY = { x: number; y: number };
-export type CompareSeries = { id: string; label: string; href: string; points: XY[]; styleIndex: number };
+type XY = { x: number; y: number };
+type CompareSeries = { id: string; label: string; href: string; points: XY[]; styleIndex: number };
 export type CompareCharts = { byCapacity: CompareSeries[]; byShare: CompareSeries[]; temperature: CompareSeries[] };
 
 export function compareChartData(c: Comparison): CompareCharts {

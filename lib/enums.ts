@@ -18,4 +18,3 @@ export type ResistanceMethod = (typeof resistanceMethods)[number];
 export const flagReasons = ["wrong-figures", "wrong-pack", "duplicate", "not-a-measurement", "unsafe", "other"] as const;
 export type FlagReason = (typeof flagReasons)[number];
 export const flagStatuses = ["open", "kept", "corrected", "withdrawn"] as const;
-export type FlagStatus = (typeof flagStatuses)[number];

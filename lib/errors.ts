@@ -2,7 +2,7 @@
 // shown as a plain message without internals.
 import { ZodError } from "zod";
 
-export const errorStatus = {
+const errorStatus = {
   bad_request: 400,
   unauthenticated: 401,
   forbidden: 403,
@@ -67,7 +67,7 @@ export function toAppError(err: unknown): AppError {
   return new AppError("internal", "Something went wrong on our side. Nothing was saved; please try again.");
 }
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: FieldErrors } };
+type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: FieldErrors } };
 
 export function errorResponse(err: unknown, headers: HeadersInit = {}): Response {
   const e = toAppError(err);

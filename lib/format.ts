@@ -1,5 +1,5 @@
 // Number formatting used across pages, charts and downloads. Missing values show as an em dash, never 0.
-export const MISSING = "—";
+const MISSING = "—";
 
 export function fmt(value: number | null | undefined, digits = 0, unit = ""): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;

@@ -3,9 +3,9 @@
 import { ageBand, ambientBand, cutoffBand, groupKey, rateBand, type MethodCardForKey } from "@/lib/analysis";
 import { resistanceBand } from "@/lib/analysis/group-key";
 
-export const GROUP_PARTS = ["resistance", "ambient", "cutoff", "rate", "age"] as const;
-export type GroupPart = (typeof GROUP_PARTS)[number];
-export type Band = { key: string; label: string };
+const GROUP_PARTS = ["resistance", "ambient", "cutoff", "rate", "age"] as const;
+type GroupPart = (typeof GROUP_PARTS)[number];
+type Band = { key: string; label: string };
 
 export type DescribedGroup = { key: string; label: string; parts: Record<GroupPart, Band> };
 
@@ -25,7 +25,7 @@ export function describeGroup(card: MethodCardForKey): DescribedGroup {
 }
 
 /** How a reader should read one part of a group that differs from the one shown. */
-export function partReason(part: GroupPart, band: Band): string {
+function partReason(part: GroupPart, band: Band): string {
   switch (part) {
     case "resistance":
       return `resistance by ${band.label}`;
@@ -66,5 +66,3 @@ export function exclusionText(e: Exclusion): string {
 export function keyWithoutAge(g: DescribedGroup): string {
   return GROUP_PARTS.filter((p) => p !== "age").map((p) => g.parts[p].key).join("_");
 }
-
-export const GROUP_KEY_PATTERN = /^[a-z0-9._-]{3,120}$/;

@@ -31,7 +31,7 @@ export const DEFAULT_PACK_PARAMS: PackParams = {
   connector: null, maker: null, group: null, sort: "maker", dir: "asc", page: 1, size: DEFAULT_PAGE_SIZE,
 };
 
-export const NUMBER_PARAMS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG"] as const;
+const NUMBER_PARAMS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG"] as const;
 
 const SLUG = /^[a-z0-9-]{1,80}$/;
 const GROUP = /^[a-z0-9._-]{3,120}$/;

@@ -24,7 +24,7 @@ const sortValue: Record<PackSortKey, (r: PackRow) => string | number | null> = {
 const within = (v: number | null, min: number | null, max: number | null) =>
   (min === null || (v !== null && v >= min)) && (max === null || (v !== null && v <= max));
 
-export function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
+function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
   return rows.filter(
     (r) =>
       (p.cells === null || r.cellsInSeries === p.cells) &&
@@ -43,7 +43,7 @@ export function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
  * word must match somewhere in "maker model" (Fuse's extended search: a space means AND); Fuse's operator
  * characters are dropped from the reader's text so they search as plain words.
  */
-export function searchPacks(rows: PackRow[], q: string): PackRow[] {
+function searchPacks(rows: PackRow[], q: string): PackRow[] {
   const query = q.replace(/[\^!'=$|"]/g, " ").replace(/\s+/g, " ").trim();
   if (!query) return rows;
   const fuse = new Fuse(rows, {

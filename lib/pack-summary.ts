@@ -40,7 +40,7 @@ export type PublicResultRow = {
   passedStopTemperature: boolean;
 };
 
-export const SUMMARY_FIGURES = [
+const SUMMARY_FIGURES = [
   "sagLimitedC", "labelRatio", "capacityMah", "capacityRatio", "holdVoltagePerCellV",
   "dcResistanceMohm", "resistanceAt25CMohm", "temperatureRiseC", "energyWh",
 ] as const;
@@ -105,7 +105,7 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
   return out.sort((a, b) => b.n - a.n || a.group.key.localeCompare(b.group.key));
 }
 
-export type CyclePoint = { resultId: number; cycles: number; capacityMah: number | null; dcResistanceMohm: number | null };
+type CyclePoint = { resultId: number; cycles: number; capacityMah: number | null; dcResistanceMohm: number | null };
 export type CycleSeries = { label: string; points: CyclePoint[]; trend: RetentionTrend | null; ratedCapacityMah: number };
 
 /**

@@ -6,7 +6,7 @@ const everyone: readonly UserRole[] = ["contributor", "moderator", "admin"];
 const moderators: readonly UserRole[] = ["moderator", "admin"];
 const admins: readonly UserRole[] = ["admin"];
 
-export const permissions = {
+const permissions = {
   "account.update": everyone,
   "bench-profile.manage": everyone,
   "result.submit": everyone,

@@ -42,6 +42,7 @@ run_suite() { # name command...
 
 if [ "$ONLY" = all ]; then
   run_suite "types" node_modules/.bin/tsc --noEmit -p .
+  run_suite "lint" npm run --silent lint
 fi
 if [ "$ONLY" = all ] || [ "$ONLY" = unit ]; then
   run_suite "unit tests" node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile.json="$RUN_DIR/results-unit.json"

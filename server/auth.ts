@@ -12,10 +12,10 @@ import { sendMail } from "@/server/mail/outbox";
 import { signInLinkMail } from "@/server/mail/templates";
 import { normaliseEmail } from "@/lib/validations/sign-in";
 
-export const SIGN_IN_LINK_MAX_AGE_S = 24 * 60 * 60;
-export const SESSION_MAX_AGE_S = 30 * 24 * 60 * 60;
+const SIGN_IN_LINK_MAX_AGE_S = 24 * 60 * 60;
+const SESSION_MAX_AGE_S = 30 * 24 * 60 * 60;
 
-export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
+export const { handlers, signIn, signOut } = NextAuth(() => ({
   // getDb(), not the lazy `db` proxy: the adapter recognises the client with an instanceof check.
   adapter: DrizzleAdapter(getDb(), {
     usersTable: users,

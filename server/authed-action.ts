@@ -6,7 +6,7 @@ import { actionError, AppError, type ActionResult } from "@/lib/errors";
 import { can, type Permission } from "@/lib/permissions";
 import { getCurrentUser, type SessionUser } from "@/server/session";
 
-export async function requireUser(permission: Permission, user?: SessionUser | null): Promise<SessionUser> {
+async function requireUser(permission: Permission, user?: SessionUser | null): Promise<SessionUser> {
   const current = user === undefined ? await getCurrentUser() : user;
   if (!current) throw new AppError("unauthenticated", "Please sign in first. Your draft is kept.");
   if (!can(current.role, permission)) throw new AppError("forbidden", "Your role does not allow this.");

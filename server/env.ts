@@ -4,7 +4,7 @@ import { z } from "zod";
 
 const url = (what: string) => z.string().url({ message: `${what} must be a URL` });
 
-export const envSchema = z.object({
+const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: url("DATABASE_URL")
     .refine((v) => v.startsWith("postgres://") || v.startsWith("postgresql://"), "DATABASE_URL must start with postgres://")

@@ -9,7 +9,7 @@ type Handler<C> = (req: Request, ctx: C, user: SessionUser | null) => Promise<Re
 
 const SAFE = new Set(["GET", "HEAD", "OPTIONS"]);
 
-export function checkOrigin(req: Request): void {
+function checkOrigin(req: Request): void {
   if (SAFE.has(req.method)) return;
   const origin = req.headers.get("origin");
   if (!origin) return; // non-browser clients (curl, scripts) send none

@@ -5,9 +5,9 @@ import { cookies } from "next/headers";
 import { getSessionUserByToken, type SessionUser } from "@/db/queries/sessions";
 
 export type { SessionUser };
-export const SESSION_COOKIES = ["__Secure-authjs.session-token", "authjs.session-token"] as const;
+const SESSION_COOKIES = ["__Secure-authjs.session-token", "authjs.session-token"] as const;
 
-export function sessionTokenFromCookieHeader(header: string | null): string | null {
+function sessionTokenFromCookieHeader(header: string | null): string | null {
   if (!header) return null;
   for (const part of header.split(";")) {
     const [name, ...rest] = part.trim().split("=");

@@ -8,7 +8,7 @@ import { benchProfiles } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { BenchProfileInput } from "@/lib/validations/bench-profile";
 
-export const MAX_BENCH_PROFILES_PER_USER = 50;
+const MAX_BENCH_PROFILES_PER_USER = 50;
 
 async function missingOrForeign(id: number): Promise<never> {
   const rows = await db.select({ id: benchProfiles.id }).from(benchProfiles).where(eq(benchProfiles.id, id)).limit(1);

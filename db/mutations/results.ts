@@ -14,7 +14,7 @@ export type ResultFields = Omit<
   typeof results.$inferInsert,
   "id" | "packId" | "contributorId" | "status" | "idempotencyKey" | "submittedAt" | "publishedAt" | "updatedAt"
 >;
-export type QueuedMail = { to: string; subject: string; text: string; html: string | null };
+type QueuedMail = { to: string; subject: string; text: string; html: string | null };
 
 export type NewSubmission = {
   contributorId: string;

@@ -29,7 +29,6 @@ export async function listCataloguePacks() {
     .orderBy(asc(makers.name), asc(packs.model));
 }
 export type CataloguePack = Awaited<ReturnType<typeof listCataloguePacks>>[number];
-export type CatalogueMaker = Awaited<ReturnType<typeof listCatalogueMakers>>[number];
 
 /** The like-for-like groups the results of these packs are in. */
 export async function listGroupKeysOfPacks(packIds: number[]): Promise<string[]> {

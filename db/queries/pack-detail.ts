@@ -8,7 +8,7 @@ import { getPackBySlug } from "./packs";
 import { getPublicCurves, listPublicResultsForPacks } from "./results";
 
 /** Curves drawn on a pack page (the newest results); the rest are listed. */
-export const PACK_PAGE_MAX_CURVES = 6;
+const PACK_PAGE_MAX_CURVES = 6;
 
 export type PackDetail = {
   pack: PackSummary;

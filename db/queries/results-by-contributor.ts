@@ -3,7 +3,7 @@ import { desc, eq, inArray, asc } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
 
-export type ContributorResultEvent = { fromStatus: ReviewStatus | null; toStatus: ReviewStatus; reason: string | null; createdAt: Date };
+type ContributorResultEvent = { fromStatus: ReviewStatus | null; toStatus: ReviewStatus; reason: string | null; createdAt: Date };
 export type ContributorResult = {
   id: number;
   packSlug: string;

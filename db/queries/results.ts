@@ -7,12 +7,12 @@ import { makers, packs, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
-export const PUBLIC_STATUSES = ["approved", "disputed"] as const;
+const PUBLIC_STATUSES = ["approved", "disputed"] as const;
 export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
-export const publicResultColumns = {
+const publicResultColumns = {
   id: results.id,
   packId: results.packId,
   status: results.status,

@@ -48,7 +48,7 @@ export async function getPlausibilityInput(resultId: number, exec: Executor = db
   };
 }
 
-export type QueueItem = {
+type QueueItem = {
   id: number; packSlug: string; packModel: string; makerName: string; makerSlug: string; groupKey: string;
   contributorName: string; submittedAt: Date; flags: PlausibilityFlag[]; capacityMah: number | null; labelRatio: number | null;
 };
@@ -115,7 +115,7 @@ export type HistoryEvent = {
 };
 
 /** The full review history of a result, oldest first. Actor names are for moderators; pages for the public show the role. */
-export async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
+async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
   const rows = await db
     .select({
       id: reviewEvents.id, fromStatus: reviewEvents.fromStatus, toStatus: reviewEvents.toStatus, reason: reviewEvents.reason,
@@ -184,7 +184,6 @@ export async function getReviewDetail(resultId: number) {
     readerFlags: flags,
   };
 }
-export type ReviewDetail = NonNullable<Awaited<ReturnType<typeof getReviewDetail>>>;
 
 export type OpenReaderFlag = {
   id: number; resultId: number; reason: string; note: string | null; createdAt: Date; resultStatus: ReviewStatus;

@@ -6,7 +6,7 @@ import { siteSettings } from "@/db/schema";
 
 export type SiteSettings = { notice: string | null; submissionsPaused: boolean; pauseReason: string | null; updatedAt: string | null };
 
-export const DEFAULT_SITE_SETTINGS: SiteSettings = { notice: null, submissionsPaused: false, pauseReason: null, updatedAt: null };
+const DEFAULT_SITE_SETTINGS: SiteSettings = { notice: null, submissionsPaused: false, pauseReason: null, updatedAt: null };
 
 export async function getSiteSettings(): Promise<SiteSettings> {
   const [row] = await db.select().from(siteSettings).where(eq(siteSettings.id, 1));

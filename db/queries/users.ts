@@ -1,5 +1,5 @@
 import "server-only";
-import { asc, count, eq, sql } from "drizzle-orm";
+import { asc, count, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { users, type UserRole } from "@/db/schema";
 
@@ -15,13 +15,4 @@ export async function listUsers(limit: number, offset: number): Promise<{ rows: 
     .offset(offset);
   const [total] = await db.select({ n: count() }).from(users);
   return { rows, total: total?.n ?? 0 };
-}
-
-export async function getUserProfile(userId: string): Promise<{ email: string | null; displayName: string | null; anonymous: boolean; role: UserRole } | null> {
-  const rows = await db
-    .select({ email: users.email, displayName: users.displayName, anonymous: users.anonymous, role: users.role })
-    .from(users)
-    .where(eq(users.id, userId))
-    .limit(1);
-  return rows[0] ?? null;
 }

@@ -2,12 +2,12 @@
 // (pure; fed by db/queries/open-data/groups.ts).
 import { groupKey as computeGroupKey, summarise } from "@/lib/analysis";
 
-export const AGGREGATE_FIGURES = [
+const AGGREGATE_FIGURES = [
   "capacityMah", "dcResistanceMohm", "resistanceAt25CMohm", "holdVoltagePerCellV", "temperatureRiseC", "sagLimitedC", "labelRatio", "capacityRatio",
 ] as const;
-export type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
+type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
 
-export type Summary = { median: number; n: number; min: number; max: number } | null;
+type Summary = { median: number; n: number; min: number; max: number } | null;
 
 type Sample = {
   packId: number; packSlug: string; makerSlug: string; makerName: string; model: string; cellsInSeries: number;

@@ -2,9 +2,9 @@
 // group at a time, saying what was left out and why.
 import type { ChartState } from "./chart-state";
 
-export type LabelPoint = { label: string; labelledC: number; measuredC: number; n: number };
+type LabelPoint = { label: string; labelledC: number; measuredC: number; n: number };
 export type CurveLine = { label: string; points: { capacityPercent: number; voltagePerCellV: number }[] };
-export type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };
+type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };
 
 export type ChartData = {
   state: ChartState;

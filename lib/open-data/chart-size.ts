@@ -20,7 +20,7 @@ export const MAX_PNG_SIDE = 3200;
 
 export type ChartSize = { width: number; height: number };
 export type ChartImageFormat = "svg" | "png";
-export type ChartImageSize = ChartSize & { scale: number };
+type ChartImageSize = ChartSize & { scale: number };
 
 export const DEFAULT_CHART_SIZE: ChartSize = { width: CHART_WIDTH, height: CHART_HEIGHT };
 

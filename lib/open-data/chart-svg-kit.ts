@@ -11,7 +11,7 @@ export const CELL = "#146d63";
 export const FONT = "Inter, 'Inter Variable', system-ui, sans-serif";
 
 /** Average advance of Inter, in em: regular ≈ 0.53, bold ≈ 0.58 (estimated from the shipped font). */
-export const EM_REGULAR = 0.53;
+const EM_REGULAR = 0.53;
 export const EM_BOLD = 0.58;
 
 export const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;

@@ -12,7 +12,7 @@ import {
 } from "./chart-svg-kit";
 import { ATTRIBUTION, DATA_LICENCE_SHORT } from "./licence";
 
-export { escapeXml, niceTicks, plural, wrapText } from "./chart-svg-kit";
+export { escapeXml, niceTicks, wrapText } from "./chart-svg-kit";
 
 const PALETTE = ["#0072B2", "#D55E00", "#009E73", "#CC79A7", "#E69F00", "#56B4E9", "#000000", "#8c5206"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "", "6 3", "2 3", "8 3 2 3"];

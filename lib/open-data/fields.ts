@@ -3,8 +3,8 @@
 import type { CsvCell } from "./csv";
 import type { MakerRow, PackRecord, ResultRow } from "./records";
 
-export type FieldType = "integer" | "number" | "string" | "date" | "datetime";
-export type Constraints = { required?: boolean; unique?: boolean; minimum?: number; maximum?: number; enum?: string[]; pattern?: string };
+type FieldType = "integer" | "number" | "string" | "date" | "datetime";
+type Constraints = { required?: boolean; unique?: boolean; minimum?: number; maximum?: number; enum?: string[]; pattern?: string };
 export type Field<R> = { name: string; type: FieldType; description: string; constraints?: Constraints; freeText?: boolean; value: (r: R) => CsvCell };
 
 const slugPattern = "^[a-z0-9-]+$";

@@ -10,7 +10,7 @@ export type MakerRow = { id: number; slug: string; name: string; packCount: numb
 /** A pack as published: the catalogue's summary, its maker's id and how many approved results it has. */
 export type PackRecord = PackSummary & { makerId: number; approvedResultCount: number };
 
-export type MethodCard = {
+type MethodCard = {
   ambientTemperatureC: number; packStartTemperatureC: number | null; loadMode: LoadMode; loadCurrentA: number;
   loadRateC: number; cutoffVPerCell: number; stopTemperatureC: number; resistanceMethod: ResistanceMethod;
   equipment: string; sampleRateHz: number | null; cyclesBeforeTest: number;

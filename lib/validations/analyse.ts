@@ -17,8 +17,6 @@ export const analyseQuerySchema = z.object({
   include: z.enum(["curve"], { error: "include may only be 'curve'." }),
 }).partial();
 
-export type AnalyseQuery = z.infer<typeof analyseQuerySchema>;
-
 /** Search params → plain object (empty values dropped, so `?cells=` means "not given"). */
 export function searchParamsObject(url: string): Record<string, string> {
   const out: Record<string, string> = {};

@@ -25,4 +25,3 @@ export type PackLabelInput = z.infer<typeof packLabelSchema>;
 export const mergeSchema = z
   .object({ sourceId: id, targetId: id })
   .refine((v) => v.sourceId !== v.targetId, { path: ["targetId"], message: "Choose two different entries." });
-export type MergeInput = z.infer<typeof mergeSchema>;

@@ -33,7 +33,6 @@ export const resultFilters = packFilters.extend({
 });
 export type ResultFilters = z.infer<typeof resultFilters>;
 
-export const packListQuery = pageQuery.extend(packFilters.shape);
 export const resultListQuery = pageQuery.extend(resultFilters.shape);
 export const groupListQuery = pageQuery.extend({ minResults: intParam(1, 1000).default(1) });
 

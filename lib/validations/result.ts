@@ -7,7 +7,7 @@ import { PHOTO_EXTENSIONS } from "@/lib/storage-keys";
 import { optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
 /** A required number typed into an input ("" → "Enter …"). */
-export const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
+const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
   z
     .string({ error: `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` })
     .trim()
@@ -21,10 +21,10 @@ export const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumb
     })
     .pipe(check(z.number()));
 
-export const PACK_CELLS_MAX = 14;
+const PACK_CELLS_MAX = 14;
 
 // ---------- Step 1: the pack ----------
-export const packStepSchema = z
+const packStepSchema = z
   .object({
     mode: z.enum(["existing", "new"], { error: "Choose a pack or propose a new one." }),
     packId: z.string().trim(),
@@ -56,11 +56,10 @@ export const packStepSchema = z
       ctx.addIssue({ code: "custom", path: ["labelledBurstC"], message: "Burst C cannot be below the continuous C." });
     }
   });
-export type PackStepValues = z.input<typeof packStepSchema>;
 export type PackStep = z.output<typeof packStepSchema>;
 
 // ---------- Step 2: the method card ----------
-export const methodCardSchema = z
+const methodCardSchema = z
   .object({
     benchProfileId: z.string().trim().regex(/^(\d{1,10})?$/, "Choose a bench profile.").transform((v) => (v === "" ? null : Number(v))),
     ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) => n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C.")),
@@ -89,12 +88,12 @@ const LOG_KEY = /^incoming\/[^/]{1,64}\/[0-9a-f-]{36}\.csv$/;
 const PHOTO_KEY = new RegExp(`^incoming/[^/]{1,64}/photo-[0-9a-f-]{36}\\.(${PHOTO_EXTENSIONS.join("|")})$`);
 export const MAX_PHOTOS = 4;
 
-export const logRefSchema = z.object({
+const logRefSchema = z.object({
   key: z.string().regex(LOG_KEY, "Upload the log first."),
   filename: z.string().trim().min(1, "Upload the log first.").max(200, "The file name can be at most 200 characters."),
 });
-export const photoKeysSchema = z.array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again.")).max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
-export const declarationSchema = z.boolean({ error: "Confirm that these are honest measurements." }).refine((v) => v, "Confirm that these are honest measurements.");
+const photoKeysSchema = z.array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again.")).max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
+const declarationSchema = z.boolean({ error: "Confirm that these are honest measurements." }).refine((v) => v, "Confirm that these are honest measurements.");
 
 export const submitResultSchema = z.object({
   idempotencyKey: z.uuid("Reload the page and try again."),
@@ -107,7 +106,7 @@ export const submitResultSchema = z.object({
 export type SubmitResultValues = z.input<typeof submitResultSchema>;
 export type SubmitResultInput = z.output<typeof submitResultSchema>;
 
-export const resultIdSchema = z.coerce.number({ error: "Not a result id." }).int().positive().max(2_147_483_647);
+const resultIdSchema = z.coerce.number({ error: "Not a result id." }).int().positive().max(2_147_483_647);
 export const withdrawResultSchema = z.object({ resultId: resultIdSchema, note: optionalText("Note", 500).optional() });
 
 export const resubmitResultSchema = z.object({
@@ -119,7 +118,6 @@ export const resubmitResultSchema = z.object({
   note: requiredText("Answer to the moderator", 2000),
   declaration: declarationSchema,
 });
-export type ResubmitResultValues = z.input<typeof resubmitResultSchema>;
 export type ResubmitResultInput = z.output<typeof resubmitResultSchema>;
 
 /** Re-check of a stored log with the current pack and method card (the preview after a reload or an edit). */

@@ -22,7 +22,7 @@ export const flagReasonLabels: Record<(typeof flagReasons)[number], string> = {
   other: "Other",
 };
 
-export const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
+const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
 export type FlagResolution = (typeof flagResolutions)[number];
 
 const id = z.coerce.number().int().positive();
@@ -52,8 +52,4 @@ export const reviewQueueFilterSchema = z.object({
 });
 export type ReviewQueueFilter = z.infer<typeof reviewQueueFilterSchema>;
 
-export type ApproveResultInput = z.infer<typeof approveResultSchema>;
-export type RejectResultInput = z.infer<typeof rejectResultSchema>;
-export type RequestChangesInput = z.infer<typeof requestChangesSchema>;
 export type ReaderFlagInput = z.infer<typeof readerFlagSchema>;
-export type ResolveFlagInput = z.infer<typeof resolveFlagSchema>;

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { loadModes } from "@/lib/enums";
 import { analyseQuerySchema } from "./analyse";
 
-export const LOG_EXTENSIONS = ["csv", "txt", "tsv", "log", "dat"] as const;
+const LOG_EXTENSIONS = ["csv", "txt", "tsv", "log", "dat"] as const;
 
 const filename = z
   .string()
@@ -21,7 +21,6 @@ export const logUploadQuerySchema = analyseQuerySchema.omit({ include: true }).e
   loadCurrentA: z.coerce.number().positive().max(2000).optional(),
   loadMode: z.enum(loadModes).optional(),
 });
-export type LogUploadQuery = z.infer<typeof logUploadQuerySchema>;
 
 export function hasLogExtension(name: string): boolean {
   const ext = name.toLowerCase().split(".").pop() ?? "";

@@ -6,7 +6,7 @@ import path from "node:path";
 import { z } from "zod";
 import { env } from "@/server/env";
 
-export const caughtMailId = z.string().regex(/^[0-9]{10,16}-[a-z0-9]{1,12}$/, "Not a caught-mail id");
+const caughtMailId = z.string().regex(/^[0-9]{10,16}-[a-z0-9]{1,12}$/, "Not a caught-mail id");
 
 const caughtMail = z.object({
   id: caughtMailId,
@@ -19,7 +19,7 @@ const caughtMail = z.object({
 });
 export type CaughtMail = z.infer<typeof caughtMail>;
 
-export function catcherDir(): string {
+function catcherDir(): string {
   return path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().MAIL_CATCHER_DIR);
 }
 

@@ -1,3 +1,2 @@
-export { sendMail, flushOutbox, retryDelayS, MAX_ATTEMPTS } from "./outbox";
-export { mailTransport } from "./transport";
+export { sendMail, flushOutbox } from "./outbox";
 export * from "./templates";

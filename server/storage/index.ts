@@ -1,7 +1,7 @@
 // Upload storage through the S3 API only (locally the s3rver stand-in; hosted, any S3-compatible bucket).
 import type { Readable } from "node:stream";
 import {
-  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client,
+  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client,
 } from "@aws-sdk/client-s3";
 import { Upload } from "@aws-sdk/lib-storage";
 import { env } from "@/server/env";
@@ -23,7 +23,7 @@ export function storageClient(): S3Client {
   return client;
 }
 
-export function unavailable(err: unknown): AppError {
+function unavailable(err: unknown): AppError {
   console.error("[storage]", err instanceof Error ? err.message : err);
   return new AppError("unavailable", "File storage is not reachable right now. Nothing was saved; please try again shortly.");
 }
@@ -43,15 +43,6 @@ export async function getObjectText(key: string): Promise<string | null> {
   } catch (err) {
     if (err && typeof err === "object" && "name" in err && (err as { name: string }).name === "NoSuchKey") return null;
     throw unavailable(err);
-  }
-}
-
-export async function storageReachable(): Promise<boolean> {
-  try {
-    await storageClient().send(new HeadBucketCommand({ Bucket: env().S3_BUCKET }));
-    return true;
-  } catch {
-    return false;
   }
 }
 

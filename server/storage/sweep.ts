@@ -11,7 +11,7 @@ import { findReferencedKeys } from "@/db/queries/stored-files";
 import { INCOMING_PREFIX } from "@/lib/storage-keys";
 import { deleteObject, listObjects, objectInfo } from "./index";
 
-export type SweptObject = { key: string; bytes: number; lastUsedAt: Date };
+type SweptObject = { key: string; bytes: number; lastUsedAt: Date };
 export type SweepReport = {
   cutoff: Date;
   dryRun: boolean;

@@ -6,7 +6,7 @@ import type { AnalyseOptions, Analysis, LogPreview, StatedCard } from "@/lib/ana
 import { AppError } from "@/lib/errors";
 import { tooLarge } from "./body";
 
-export function logErrorToAppError(err: unknown, maxBytes: number, field = "file"): unknown {
+function logErrorToAppError(err: unknown, maxBytes: number, field = "file"): unknown {
   if (!isLogError(err)) return err;
   if (err.code === "too-large") return tooLarge(maxBytes, field);
   if (err.code === "internal") return new AppError("internal", err.message);

@@ -78,7 +78,7 @@ export async function readLimited(req: Request, maxBytes: number, field: string,
 }
 
 /** The multipart field `file` as chunks (other fields are ignored); 422 when there is none, 413 past maxBytes. */
-export function multipartFile(req: Request, maxBytes: number, field = "file"): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
+function multipartFile(req: Request, maxBytes: number, field = "file"): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
   if (!req.body) return Promise.reject(new AppError("validation", `No log: send a multipart field named ${field}.`, { [field]: ["Choose a log file."] }));
   const parser = busboy({
     headers: { "content-type": req.headers.get("content-type") ?? "" },

@@ -4,7 +4,7 @@ import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
 import type { Figures } from "@/lib/analysis";
 
-export function figures(over: Partial<Figures> = {}): Figures {
+function figures(over: Partial<Figures> = {}): Figures {
   return {
     samples: 1000, skippedLines: 0, durationS: 600, cells: 4, capacityMah: 1250, energyWh: 18.5, meanVoltageV: 14.8,
     meanVoltagePerCellV: 3.7, minVoltageV: 13.2, minVoltagePerCellV: 3.3, peakCurrentA: 13, startTemperatureC: 22,

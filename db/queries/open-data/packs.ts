@@ -69,7 +69,7 @@ async function listMakersPageWhere(slug: string): Promise<Paged<MakerRow>> {
   return { rows, total: rows.length };
 }
 
-export async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRecord>> {
+async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRecord>> {
   const where = and(...packConditions(f));
   const rows = await db
     .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where)

@@ -24,11 +24,11 @@ import { useKeepDraftFiles } from "./use-keep-draft-files";
 type Props = { userId: string; packs: PackOption[]; makers: MakerOption[]; profiles: BenchProfileOption[]; limits: Limits };
 type Path = FieldPath<SubmitResultValues>;
 
-export const STEPS = ["Pack", "Method card", "Log", "Photos and submit"] as const;
+const STEPS = ["Pack", "Method card", "Log", "Photos and submit"] as const;
 const STEP_FIELDS: Path[][] = [["pack"], ["method"], ["log"], ["photoKeys", "declaration"]];
 
 /** Which step shows a server field error ("method.cutoffVPerCell" → step 1). */
-export function stepOf(field: string): number {
+function stepOf(field: string): number {
   if (field.startsWith("pack")) return 0;
   if (field.startsWith("method")) return 1;
   if (field.startsWith("log")) return 2;
@@ -47,7 +47,7 @@ function knownPaths(v: SubmitResultValues): Set<string> {
 
 const num = (s: string | undefined) => (s && s.trim() !== "" && Number.isFinite(Number(s.replace(",", "."))) ? Number(s.replace(",", ".")) : null);
 
-export function packFacts(v: SubmitResultValues["pack"], packs: PackOption[], makers: MakerOption[]): PackFactsClient | null {
+function packFacts(v: SubmitResultValues["pack"], packs: PackOption[], makers: MakerOption[]): PackFactsClient | null {
   if (v.mode === "existing") {
     const p = packs.find((x) => String(x.id) === v.packId);
     return p ? { cells: p.cellsInSeries, ratedMah: p.ratedCapacityMah, labelledC: p.labelledContinuousC, weightG: p.weightG, title: `${p.makerName} ${p.model}` } : null;
