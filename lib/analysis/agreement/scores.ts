@@ -85,8 +85,10 @@ export type ComparisonScores = {
 
 /**
  * Score every bench that measured one pack's figure in one like-for-like group against their robust consensus.
- * Eₙ uses the consensus as the assigned value with U_X = 2·u(x*) (ISO 13528:2015 7.7.3); each bench's own value
- * is part of that consensus, which makes Eₙ a little kind to it when there are few benches.
+ * Eₙ, from three benches on, uses the consensus as the assigned value with U_X = 2·u(x*) (ISO 13528:2015 7.7.3);
+ * each bench's own value is part of that consensus, which makes Eₙ a little kind to it when there are few benches.
+ * With two benches that consensus would be their mean, with a U_X that grows with their difference (Eₙ could never
+ * pass 0.36), so each is scored against the other instead: Eₙ = (x − x_other)/√(U_x² + U_other²).
  */
 export function scoreParticipants(participants: readonly Participant[], options: AlgorithmAOptions & { sigmaPt?: number } = {}): ComparisonScores {
   const usable = participants.filter((p) => Number.isFinite(p.value));
@@ -99,9 +101,14 @@ export function scoreParticipants(participants: readonly Participant[], options:
   else if (consensus.degenerate || !(consensus.s > 0)) zMissing = "The benches agree exactly on most values, so there is no spread to score against.";
   else sigmaPt = consensus.s;
   if (consensus !== null && sigmaPt === null && zMissing === null) zMissing = "No positive σ_pt was given.";
-  const scores = usable.map((p): ParticipantScore => {
+  const scores = usable.map((p, k): ParticipantScore => {
     const z = consensus && sigmaPt !== null ? zScore(p.value, consensus.x, sigmaPt) : null;
-    const en = consensus && p.U95 !== null && p.U95 !== undefined ? enNumber(p.value, p.U95, consensus.x, 2 * consensus.uX) : null;
+    const other = usable.length === 2 ? usable[1 - k] : undefined;
+    let en: number | null = null;
+    if (consensus && p.U95 !== null && p.U95 !== undefined) {
+      if (other === undefined) en = enNumber(p.value, p.U95, consensus.x, 2 * consensus.uX);
+      else if (other.U95 !== null && other.U95 !== undefined) en = enNumber(p.value, p.U95, other.value, other.U95);
+    }
     return { ...p, z, en, zClass: z === null ? null : classifyZ(z), enClass: en === null ? null : classifyEn(en) };
   });
   return { consensus, sigmaPt, zMissing, scores };

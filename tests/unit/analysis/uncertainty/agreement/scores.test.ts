@@ -66,7 +66,12 @@ describe("scoreParticipants", () => {
     const r = scoreParticipants([{ benchId: "a", value: 4800, U95: 60 }, { benchId: "b", value: 5000, U95: 60 }]);
     expect(r.zMissing).toMatch(/at least three/);
     expect(r.scores.every((s) => s.z === null)).toBe(true);
-    expect(r.scores[1]?.en).not.toBeNull();
+    // Each against the other: Eₙ = (x − x_other)/√(U_x² + U_other²) = ±200/√7200.
+    expect(r.scores[1]?.en).toBeCloseTo(200 / Math.sqrt(7200), 12);
+    expect(r.scores[0]?.en).toBeCloseTo(-200 / Math.sqrt(7200), 12);
+    expect(r.scores[1]?.enClass).toBe("unsatisfactory");
+    // Without the other's uncertainty there is nothing to compare against.
+    expect(scoreParticipants([{ benchId: "a", value: 4800, U95: 60 }, { benchId: "b", value: 5000 }]).scores[0]?.en).toBeNull();
   });
 
   it("one bench or none: no consensus", () => {
