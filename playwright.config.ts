@@ -9,7 +9,8 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
-  reporter: [["list"], ["json", { outputFile: ".run/results-e2e.json" }]],
+  reporter: [["list"], ["json", { outputFile: `${process.env.RUN_DIR ?? ".run/test"}/results-e2e.json` }]],
+  outputDir: `${process.env.RUN_DIR ?? ".run/test"}/e2e-output`,
   use: {
     baseURL: process.env.E2E_BASE_URL ?? "http://localhost:3100",
     trace: "off",

@@ -14,7 +14,7 @@ $TSX scripts/seed/index.ts --if-empty
 say "building (next build)"
 # The data cache (tagged reads) outlives builds and belongs to whichever database filled it (npm test's
 # browser run uses its own): start from an empty one so the site shows this database.
-rm -rf "$ROOT/.next/cache/fetch-cache"
+rm -rf "$DIST_DIR/cache/fetch-cache"
 node_modules/.bin/next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; fail "next build failed (full log in .run/build.log)"; }
 say "serving on http://localhost:$PORT  (open this address; npm run stop stops everything)"
 echo $$ >"$RUN_DIR/app.pid"

@@ -2,7 +2,7 @@
 // critical violations. (A scan finds a subset of problems; the keyboard walks in other specs cover more.)
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
-import { seriousViolations } from "./axe-helpers";
+import { seriousViolations, settled } from "./axe-helpers";
 import { signIn } from "./sign-in-helpers";
 
 const pages = ["/", "/packs", "/compare", "/methods", "/sign-in", "/analyse", "/data", "/charts"];
@@ -11,7 +11,7 @@ for (const path of pages) {
   test(`no serious accessibility violations on ${path}`, async ({ page }) => {
     const response = await page.goto(path);
     expect(response?.status(), `${path} should load`).toBeLessThan(400);
-    await page.waitForTimeout(500);
+    await settled(page);
     const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
     const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
     expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")})`)).toEqual([]);
@@ -38,7 +38,7 @@ test("no serious accessibility violations in the signed-in areas (account, submi
   for (const path of ["/account", "/account/bench-profiles", "/submit", "/review", ...(first ? [first] : []), "/review/flags"]) {
     const response = await page.goto(path);
     expect(response?.status(), `${path} should load`).toBeLessThan(400);
-    await page.waitForTimeout(300);
+    await settled(page);
     found.push(...(await seriousViolations(page, path)));
   }
   expect(found).toEqual([]);

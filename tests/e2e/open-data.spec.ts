@@ -81,8 +81,9 @@ test("embeds are cacheable, cookie-free and frameable; the rest of the site is n
   pages.set("/framing", `<!doctype html><html><body><iframe id="site" src="${baseURL}/charts" width="800" height="400"></iframe><iframe id="embed" src="${baseURL}${first.embed}" width="800" height="400"></iframe></body></html>`);
   await page.goto(`${otherOrigin}/framing`);
   await expect(page.frameLocator("#embed").locator("svg:visible")).toContainText("Source: Sagline");
-  // The browser refuses to show the main site inside the other origin's page.
-  await page.waitForTimeout(1000);
+  // The browser refuses to show the main site inside the other origin's page: that frame ends on the browser's
+  // own error page.
+  await expect.poll(() => page.frames().some((f) => f.url().startsWith("chrome-error://"))).toBe(true);
   await expect(page.frameLocator("#site").getByRole("heading", { name: "Charts" })).toHaveCount(0);
 });
 
