@@ -67,7 +67,7 @@ const folderZones = [
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores([".next*/**", "node_modules/**", "db/migrations/**", "playwright-report/**", "test-results/**", "coverage/**", ".pgdata/**"]),
+  globalIgnores([".next*/**", "node_modules/**", "db/migrations/**", "playwright-report/**", "test-results/**", "coverage/**", ".pgdata*/**", ".run/**"]),
   {
     plugins: { sagline: { rules: { "client-boundary": clientBoundary } } },
     // Packages are never part of a cycle: not parsing them keeps import/no-cycle fast.
