@@ -40,7 +40,8 @@ const clientBoundary = {
       ImportDeclaration(node) {
         if (!client || node.importKind === "type") return;
         if (node.specifiers.length > 0 && node.specifiers.every((s) => s.importKind === "type")) return;
-        if (serverSide(node.source.value)) context.report({ node, messageId: "server", data: { source: node.source.value } });
+        if (serverSide(node.source.value))
+          context.report({ node, messageId: "server", data: { source: node.source.value } });
       },
     };
   },
@@ -61,13 +62,26 @@ const folderZones = [
   },
   { target: "./db", from: ["./app", "./components", "./scripts"], message: "db/ imports only lib/ and itself." },
   { target: "./server", from: ["./app", "./components", "./scripts"], message: "server/ never imports routes or UI." },
-  { target: "./components", from: "./app", message: "Shared UI never imports routes; a piece that needs a route's action lives beside it in app/." },
+  {
+    target: "./components",
+    from: "./app",
+    message: "Shared UI never imports routes; a piece that needs a route's action lives beside it in app/.",
+  },
 ];
 
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores([".next*/**", "node_modules/**", "db/migrations/**", "playwright-report/**", "test-results/**", "coverage/**", ".pgdata*/**", ".run/**"]),
+  globalIgnores([
+    ".next*/**",
+    "node_modules/**",
+    "db/migrations/**",
+    "playwright-report/**",
+    "test-results/**",
+    "coverage/**",
+    ".pgdata*/**",
+    ".run/**",
+  ]),
   {
     plugins: { sagline: { rules: { "client-boundary": clientBoundary } } },
     // Packages are never part of a cycle: not parsing them keeps import/no-cycle fast.
@@ -78,7 +92,13 @@ export default defineConfig([
       "sagline/client-boundary": "error",
       "@typescript-eslint/no-unused-vars": [
         "error",
-        { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrorsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_", ignoreRestSiblings: true },
+        {
+          argsIgnorePattern: "^_",
+          varsIgnorePattern: "^_",
+          caughtErrorsIgnorePattern: "^_",
+          destructuredArrayIgnorePattern: "^_",
+          ignoreRestSiblings: true,
+        },
       ],
       // Says only that the React Compiler would skip a component using react-hook-form's watch() or TanStack
       // Table; this project does not run the compiler.
@@ -91,7 +111,14 @@ export default defineConfig([
     rules: {
       "@typescript-eslint/no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["next", "next/*", "node:*", "server-only"], message: "lib/ is pure and browser-safe; this belongs in server/." }] },
+        {
+          patterns: [
+            {
+              group: ["next", "next/*", "node:*", "server-only"],
+              message: "lib/ is pure and browser-safe; this belongs in server/.",
+            },
+          ],
+        },
       ],
     },
   },
@@ -100,7 +127,14 @@ export default defineConfig([
     rules: {
       "@typescript-eslint/no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["next", "next/*"], message: "db/ never revalidates or reads requests; the service in server/ does." }] },
+        {
+          patterns: [
+            {
+              group: ["next", "next/*"],
+              message: "db/ never revalidates or reads requests; the service in server/ does.",
+            },
+          ],
+        },
       ],
     },
   },
@@ -110,7 +144,15 @@ export default defineConfig([
     rules: {
       "@typescript-eslint/no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["@/db", "@/db/*"], allowTypeImports: true, message: "Read through server/ (cached, tagged reads)." }] },
+        {
+          patterns: [
+            {
+              group: ["@/db", "@/db/*"],
+              allowTypeImports: true,
+              message: "Read through server/ (cached, tagged reads).",
+            },
+          ],
+        },
       ],
     },
   },

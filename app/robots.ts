@@ -11,5 +11,8 @@ const ROBOTS_DISALLOW = ["/account", "/submit", "/review", "/admin", "/sign-in",
 export default function robots(): MetadataRoute.Robots {
   const base = env().APP_URL.replace(/\/$/, "");
   // oEmbed stays open: sites that unfurl a chart link ask it, and some of them honour robots.txt.
-  return { rules: [{ userAgent: "*", allow: ["/", "/api/oembed"], disallow: ROBOTS_DISALLOW }], sitemap: `${base}/sitemap.xml` };
+  return {
+    rules: [{ userAgent: "*", allow: ["/", "/api/oembed"], disallow: ROBOTS_DISALLOW }],
+    sitemap: `${base}/sitemap.xml`,
+  };
 }

@@ -12,7 +12,11 @@ export type Executor = Database | Transaction;
 const globalForDb = globalThis as unknown as { saglinePool?: Pool; saglineDb?: Database };
 
 function createPool(): Pool {
-  const pool = new Pool({ connectionString: env().DATABASE_URL, max: env().DATABASE_POOL_MAX, connectionTimeoutMillis: 5_000 });
+  const pool = new Pool({
+    connectionString: env().DATABASE_URL,
+    max: env().DATABASE_POOL_MAX,
+    connectionTimeoutMillis: 5_000,
+  });
   // An idle client's error (the database restarting) must not crash the server; the pool reconnects.
   pool.on("error", (err) => console.error("[db] idle client error:", err.message));
   return pool;

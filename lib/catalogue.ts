@@ -11,7 +11,13 @@ export type PackLabelFields = {
   connector: string;
 };
 
-export type PackSummary = { id: number; slug: string; model: string; makerName: string; makerSlug: string } & PackLabelFields;
+export type PackSummary = {
+  id: number;
+  slug: string;
+  model: string;
+  makerName: string;
+  makerSlug: string;
+} & PackLabelFields;
 
 /** A row of the packs table: the label, how many published results, and (for a chosen group) medians. */
 export type PackRow = PackSummary & {

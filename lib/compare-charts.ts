@@ -14,8 +14,13 @@ export function compareChartData(c: Comparison): CompareCharts {
     if (!curve) return;
     const base = { id: pack.slug, label: packTitle(pack), href: `/results/${curve.resultId}`, styleIndex: index };
     out.byCapacity.push({ ...base, points: curve.points.map((p) => ({ x: p.mah, y: p.vpc })) });
-    out.byShare.push({ ...base, points: curve.points.map((p) => ({ x: Math.round((p.mah / pack.ratedCapacityMah) * 1000) / 10, y: p.vpc })) });
-    const temps = curve.points.filter((p): p is typeof p & { tc: number } => p.tc !== null).map((p) => ({ x: p.s, y: p.tc }));
+    out.byShare.push({
+      ...base,
+      points: curve.points.map((p) => ({ x: Math.round((p.mah / pack.ratedCapacityMah) * 1000) / 10, y: p.vpc })),
+    });
+    const temps = curve.points
+      .filter((p): p is typeof p & { tc: number } => p.tc !== null)
+      .map((p) => ({ x: p.s, y: p.tc }));
     if (temps.length) out.temperature.push({ ...base, points: temps });
   });
   return out;

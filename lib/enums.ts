@@ -4,7 +4,14 @@
 export const userRoles = ["contributor", "moderator", "admin"] as const;
 export type UserRole = (typeof userRoles)[number];
 
-export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn", "disputed"] as const;
+export const reviewStatuses = [
+  "pending",
+  "changes_requested",
+  "approved",
+  "rejected",
+  "withdrawn",
+  "disputed",
+] as const;
 export type ReviewStatus = (typeof reviewStatuses)[number];
 
 export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
@@ -15,6 +22,13 @@ export const resistanceMethods = ["iec-61960-two-level", "dc-step", "ac-1khz", "
 export type ResistanceMethod = (typeof resistanceMethods)[number];
 
 /** Why a reader flags a published result, and how a moderator resolves it. */
-export const flagReasons = ["wrong-figures", "wrong-pack", "duplicate", "not-a-measurement", "unsafe", "other"] as const;
+export const flagReasons = [
+  "wrong-figures",
+  "wrong-pack",
+  "duplicate",
+  "not-a-measurement",
+  "unsafe",
+  "other",
+] as const;
 export type FlagReason = (typeof flagReasons)[number];
 export const flagStatuses = ["open", "kept", "corrected", "withdrawn"] as const;

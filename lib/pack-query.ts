@@ -44,7 +44,10 @@ function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
  * characters are dropped from the reader's text so they search as plain words.
  */
 function searchPacks(rows: PackRow[], q: string): PackRow[] {
-  const query = q.replace(/[\^!'=$|"]/g, " ").replace(/\s+/g, " ").trim();
+  const query = q
+    .replace(/[\^!'=$|"]/g, " ")
+    .replace(/\s+/g, " ")
+    .trim();
   if (!query) return rows;
   const fuse = new Fuse(rows, {
     keys: [{ name: "title", getFn: (r) => `${r.makerName} ${r.model}` }],
@@ -77,5 +80,11 @@ export function queryPacks(rows: PackRow[], p: PackParams): PackPage {
   const sorted = p.q.trim() && p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
   const pageCount = Math.max(1, Math.ceil(sorted.length / p.size));
   const page = Math.min(p.page, pageCount);
-  return { rows: sorted.slice((page - 1) * p.size, page * p.size), total: sorted.length, page, pageCount, size: p.size };
+  return {
+    rows: sorted.slice((page - 1) * p.size, page * p.size),
+    total: sorted.length,
+    page,
+    pageCount,
+    size: p.size,
+  };
 }

@@ -6,7 +6,9 @@ import { flushOutbox } from "@/server/mail/outbox";
 flushOutbox()
   .then(({ sent, failed }) => console.log(`sagline: mail outbox flushed (${sent} sent, ${failed} still queued)`))
   .catch((err: unknown) => {
-    console.error(`sagline: error: could not flush the mail outbox: ${err instanceof Error ? err.message : String(err)}`);
+    console.error(
+      `sagline: error: could not flush the mail outbox: ${err instanceof Error ? err.message : String(err)}`,
+    );
     process.exitCode = 1;
   })
   .finally(() => closeDb());

@@ -33,7 +33,10 @@ export function etagOf(body: string): string {
 /** Whether an If-None-Match header names this ETag (or `*`); weak forms count, as RFC 9110 §13.1.2 allows. */
 export function ifNoneMatchHits(ifNoneMatch: string | null, etag: string): boolean {
   if (!ifNoneMatch) return false;
-  return ifNoneMatch.split(",").some((t) => { const v = t.trim(); return v === "*" || v === etag || v === `W/${etag}`; });
+  return ifNoneMatch.split(",").some((t) => {
+    const v = t.trim();
+    return v === "*" || v === etag || v === `W/${etag}`;
+  });
 }
 
 export type ApiBody = { data: unknown; meta?: Record<string, unknown>; links?: Record<string, string | null> };
@@ -42,7 +45,13 @@ export type ApiBody = { data: unknown; meta?: Record<string, unknown>; links?: R
 export function apiJson(req: Request, body: ApiBody, extraHeaders: Record<string, string> = {}): Response {
   const text = JSON.stringify({ ...body, meta: { ...body.meta, licence: licenceInfo } });
   const etag = etagOf(text);
-  const headers = new Headers({ ...corsHeaders, ...extraHeaders, ETag: etag, "Cache-Control": API_CACHE_CONTROL, Link: `<${DATA_LICENCE_URL}>; rel="license"` });
+  const headers = new Headers({
+    ...corsHeaders,
+    ...extraHeaders,
+    ETag: etag,
+    "Cache-Control": API_CACHE_CONTROL,
+    Link: `<${DATA_LICENCE_URL}>; rel="license"`,
+  });
   if (ifNoneMatchHits(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
   headers.set("Content-Type", "application/json; charset=utf-8");
   return new Response(req.method === "HEAD" ? null : text, { status: 200, headers });
@@ -70,9 +79,18 @@ export function apiOptions(): Response {
 export function cachedJson(req: Request, data: unknown, extra: Record<string, string> = {}): Response {
   const body = JSON.stringify(data);
   const etag = etagOf(body);
-  const headers = { ...corsHeaders, "Cache-Control": CATALOGUE_CACHE_CONTROL, ETag: etag, Vary: "Accept-Encoding", ...extra };
+  const headers = {
+    ...corsHeaders,
+    "Cache-Control": CATALOGUE_CACHE_CONTROL,
+    ETag: etag,
+    Vary: "Accept-Encoding",
+    ...extra,
+  };
   if (ifNoneMatchHits(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
-  return new Response(body, { status: 200, headers: { ...headers, "Content-Type": "application/json; charset=utf-8" } });
+  return new Response(body, {
+    status: 200,
+    headers: { ...headers, "Content-Type": "application/json; charset=utf-8" },
+  });
 }
 
 /** Error answers of the public API keep the CORS headers, so browsers can read the 422 details. */
@@ -85,11 +103,22 @@ export async function withCors(res: Response | Promise<Response>): Promise<Respo
 /** `meta` and `links` for one page of a list. */
 export function pageEnvelope(req: Request, page: number, size: number, total: number) {
   const url = new URL(req.url);
-  const at = (p: number) => { const u = new URL(url); u.searchParams.set("page", String(p)); u.searchParams.set("size", String(size)); return `${u.pathname}${u.search}`; };
+  const at = (p: number) => {
+    const u = new URL(url);
+    u.searchParams.set("page", String(p));
+    u.searchParams.set("size", String(size));
+    return `${u.pathname}${u.search}`;
+  };
   const pageCount = Math.max(1, Math.ceil(total / size));
   return {
     meta: { page, pageSize: size, pageCount, total },
-    links: { self: at(page), first: at(1), last: at(pageCount), next: page < pageCount ? at(page + 1) : null, prev: page > 1 ? at(Math.min(page - 1, pageCount)) : null },
+    links: {
+      self: at(page),
+      first: at(1),
+      last: at(pageCount),
+      next: page < pageCount ? at(page + 1) : null,
+      prev: page > 1 ? at(Math.min(page - 1, pageCount)) : null,
+    },
     headers: { "X-Total-Count": String(total) },
   };
 }

@@ -27,7 +27,10 @@ export function authedAction<S extends z.ZodType, T>(
   schema: S,
   fn: (input: z.infer<S>, user: SessionUser) => Promise<T>,
 ) {
-  const action = async (_prev: ActionResult<T> | null | undefined, payload: FormData | z.input<S>): Promise<ActionResult<T>> => {
+  const action = async (
+    _prev: ActionResult<T> | null | undefined,
+    payload: FormData | z.input<S>,
+  ): Promise<ActionResult<T>> => {
     try {
       const user = await requireUser(permission);
       const raw = payload instanceof FormData ? formDataToObject(payload) : payload;

@@ -18,8 +18,19 @@ export const cacheTags = {
 export const PUBLIC_REVALIDATE_S = 3600;
 
 /** Every tag a change of one result's status touches (approve, withdraw, dispute, resolve). */
-export function tagsForResult(r: { packSlug: string; makerSlug: string; groupKey: string; resultId?: number }): string[] {
-  const tags: string[] = [cacheTags.packs, cacheTags.results, cacheTags.pack(r.packSlug), cacheTags.maker(r.makerSlug), cacheTags.group(r.groupKey)];
+export function tagsForResult(r: {
+  packSlug: string;
+  makerSlug: string;
+  groupKey: string;
+  resultId?: number;
+}): string[] {
+  const tags: string[] = [
+    cacheTags.packs,
+    cacheTags.results,
+    cacheTags.pack(r.packSlug),
+    cacheTags.maker(r.makerSlug),
+    cacheTags.group(r.groupKey),
+  ];
   if (r.resultId !== undefined) tags.push(cacheTags.result(r.resultId));
   return tags;
 }

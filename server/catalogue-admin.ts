@@ -26,14 +26,22 @@ export async function updatePackLabel(actorId: string, input: PackLabelInput): P
 }
 
 /** Merges a duplicate pack into another: its results and watches move, the duplicate is kept as "merged". */
-export async function mergePacks(actorId: string, sourceId: number, targetId: number): Promise<{ movedResults: number }> {
+export async function mergePacks(
+  actorId: string,
+  sourceId: number,
+  targetId: number,
+): Promise<{ movedResults: number }> {
   const { movedResults, touched } = await mergePackRows(actorId, sourceId, targetId);
   await revalidateTouched(touched);
   return { movedResults };
 }
 
 /** Merges a duplicate maker into another: its packs (and so their results) move, the duplicate is kept as "merged". */
-export async function mergeMakers(actorId: string, sourceId: number, targetId: number): Promise<{ movedPacks: number }> {
+export async function mergeMakers(
+  actorId: string,
+  sourceId: number,
+  targetId: number,
+): Promise<{ movedPacks: number }> {
   const { movedPacks, touched } = await mergeMakerRows(actorId, sourceId, targetId);
   await revalidateTouched(touched);
   return { movedPacks };

@@ -20,7 +20,10 @@ const envObject = z.object({
   S3_PORT: port("S3_PORT", 4569),
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: url("DATABASE_URL")
-    .refine((v) => v.startsWith("postgres://") || v.startsWith("postgresql://"), "DATABASE_URL must start with postgres://")
+    .refine(
+      (v) => v.startsWith("postgres://") || v.startsWith("postgresql://"),
+      "DATABASE_URL must start with postgres://",
+    )
     .optional(),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   SMTP_URL: url("SMTP_URL").optional(),
@@ -28,21 +31,47 @@ const envObject = z.object({
   MAIL_CATCHER_DIR: z.string().min(1).default(".mail"),
   S3_ENDPOINT: url("S3_ENDPOINT").optional(),
   S3_REGION: z.string().min(1).default("us-east-1"),
-  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{2,62}$/, "S3_BUCKET must be a valid bucket name").default("sagline-uploads"),
+  S3_BUCKET: z
+    .string()
+    .regex(/^[a-z0-9][a-z0-9.-]{2,62}$/, "S3_BUCKET must be a valid bucket name")
+    .default("sagline-uploads"),
   S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
-  S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true").transform((v) => v === "true"),
+  S3_FORCE_PATH_STYLE: z
+    .enum(["true", "false"])
+    .default("true")
+    .transform((v) => v === "true"),
   APP_URL: url("APP_URL").optional(),
-  AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters (npm start writes one to .env.local)").optional(),
+  AUTH_SECRET: z
+    .string()
+    .min(32, "AUTH_SECRET must be at least 32 characters (npm start writes one to .env.local)")
+    .optional(),
   // Local tools (the caught-mail page); the project's scripts switch this on, hosted deployments leave it off.
-  SAGLINE_DEV_TOOLS: z.enum(["0", "1"]).default("0").transform((v) => v === "1"),
+  SAGLINE_DEV_TOOLS: z
+    .enum(["0", "1"])
+    .default("0")
+    .transform((v) => v === "1"),
   // Only for load benchmarks on loopback (scripts/bench-load.mjs): switches the request limits off.
   SAGLINE_RATE_LIMITS: z.enum(["on", "off"]).default("on"),
-  LOG_MAX_BYTES: z.coerce.number().int().min(1024).max(500 * 1024 * 1024).default(50 * 1024 * 1024),
-  PHOTO_MAX_BYTES: z.coerce.number().int().min(1024).max(50 * 1024 * 1024).default(5 * 1024 * 1024),
+  LOG_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1024)
+    .max(500 * 1024 * 1024)
+    .default(50 * 1024 * 1024),
+  PHOTO_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1024)
+    .max(50 * 1024 * 1024)
+    .default(5 * 1024 * 1024),
   // Draft uploads under incoming/ unused for this many days are removed by `npm run storage:sweep`.
-  INCOMING_MAX_AGE_DAYS: z.coerce.number({ error: "INCOMING_MAX_AGE_DAYS must be a whole number of days" })
-    .int("INCOMING_MAX_AGE_DAYS must be a whole number of days").min(1, "INCOMING_MAX_AGE_DAYS must be at least 1 (day)").max(365, "INCOMING_MAX_AGE_DAYS must be at most 365 (days)").default(7),
+  INCOMING_MAX_AGE_DAYS: z.coerce
+    .number({ error: "INCOMING_MAX_AGE_DAYS must be a whole number of days" })
+    .int("INCOMING_MAX_AGE_DAYS must be a whole number of days")
+    .min(1, "INCOMING_MAX_AGE_DAYS must be at least 1 (day)")
+    .max(365, "INCOMING_MAX_AGE_DAYS must be at most 365 (days)")
+    .default(7),
 });
 
 const envSchema = envObject.transform((e) => ({

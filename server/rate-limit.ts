@@ -22,7 +22,12 @@ export async function enforceRateLimit(key: string, { limit, windowS }: Limit): 
   if (env().SAGLINE_RATE_LIMITS === "off") return;
   const { count, resetAt } = await hitRateLimit(key, windowS);
   if (count > limit) {
-    throw new AppError("rate_limited", "Too many requests — please wait a little and try again.", undefined, (resetAt.getTime() - Date.now()) / 1000);
+    throw new AppError(
+      "rate_limited",
+      "Too many requests — please wait a little and try again.",
+      undefined,
+      (resetAt.getTime() - Date.now()) / 1000,
+    );
   }
 }
 

@@ -4,7 +4,13 @@
 // the decision; any other failure of an after-effect is logged, not thrown.
 import "server-only";
 import { insertReaderFlag } from "@/db/mutations/reader-flags";
-import { writeDecision, writeFlagResolution, type Decision, type DecisionStatus, type ResultContext } from "@/db/mutations/review";
+import {
+  writeDecision,
+  writeFlagResolution,
+  type Decision,
+  type DecisionStatus,
+  type ResultContext,
+} from "@/db/mutations/review";
 import { listWatcherEmails } from "@/db/queries/watches";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { rejectReasonLabels, type FlagResolution, type ReaderFlagInput } from "@/lib/validations/review";
@@ -30,18 +36,34 @@ async function notifyDecision(c: ResultContext, decision: ReviewDecision, note: 
   if (c.contributorEmail) {
     const to = c.contributorEmail;
     await safely("decision mail", () =>
-      sendMail(to, reviewDecisionMail({ packTitle: c.packTitle, decision, reason: note, resultUrl: `${base}/results/${c.resultId}` })),
+      sendMail(
+        to,
+        reviewDecisionMail({
+          packTitle: c.packTitle,
+          decision,
+          reason: note,
+          resultUrl: `${base}/results/${c.resultId}`,
+        }),
+      ),
     );
   }
   if (decision !== "approved") return;
   await safely("watcher mail", async () => {
-    const mail = watchedPackResultMail({ packTitle: c.packTitle, packUrl: `${base}/packs/${c.packSlug}`, accountUrl: `${base}/account` });
+    const mail = watchedPackResultMail({
+      packTitle: c.packTitle,
+      packUrl: `${base}/packs/${c.packSlug}`,
+      accountUrl: `${base}/account`,
+    });
     for (const to of await listWatcherEmails(c.packId, [c.contributorId])) await sendMail(to, mail);
   });
 }
 
 /** Approve, reject or request changes on a pending result; then revalidate (when published) and tell people. */
-export async function decideResult(actorId: string, resultId: number, decision: Decision): Promise<{ resultId: number; status: DecisionStatus }> {
+export async function decideResult(
+  actorId: string,
+  resultId: number,
+  decision: Decision,
+): Promise<{ resultId: number; status: DecisionStatus }> {
   const { ctx, status } = await writeDecision(actorId, resultId, decision);
   if (status === "approved") revalidateResult(ctx);
   const reason = decision.kind === "reject" ? `Reason: ${rejectReasonLabels[decision.reason]}.` : null;
@@ -51,7 +73,12 @@ export async function decideResult(actorId: string, resultId: number, decision: 
 }
 
 /** Resolves an open reader flag (keep, correct or withdraw the result); then revalidates its pages. */
-export async function resolveReaderFlag(actorId: string, flagId: number, resolution: FlagResolution, note: string | null): Promise<ResolvedFlag> {
+export async function resolveReaderFlag(
+  actorId: string,
+  flagId: number,
+  resolution: FlagResolution,
+  note: string | null,
+): Promise<ResolvedFlag> {
   const { ctx, resolved } = await writeFlagResolution(actorId, flagId, resolution, note);
   revalidateResult(ctx);
   return resolved;

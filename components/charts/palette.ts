@@ -21,4 +21,9 @@ export function seriesStyle(index: number): SeriesStyle {
 
 /** Label check: packs that reach their label vs packs that fall short. */
 export const MEETS_STYLE: SeriesStyle = { color: "#0072B2", dash: undefined, shape: "circle", name: "blue circles" };
-export const SHORT_STYLE: SeriesStyle = { color: "#D55E00", dash: undefined, shape: "triangle-down", name: "vermillion down-triangles" };
+export const SHORT_STYLE: SeriesStyle = {
+  color: "#D55E00",
+  dash: undefined,
+  shape: "triangle-down",
+  name: "vermillion down-triangles",
+};

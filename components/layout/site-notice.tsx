@@ -11,8 +11,12 @@ export async function SiteNotice() {
   }
   if (!notice) return null;
   return (
-    <div role="note" aria-label="Site notice" data-testid="site-notice"
-      className="border-b border-charge-400/40 bg-charge-50 px-4 py-2 text-center text-sm text-charge-700 dark:border-charge-400/30 dark:bg-charge-700/20 dark:text-charge-100">
+    <div
+      role="note"
+      aria-label="Site notice"
+      data-testid="site-notice"
+      className="border-b border-charge-400/40 bg-charge-50 px-4 py-2 text-center text-sm text-charge-700 dark:border-charge-400/30 dark:bg-charge-700/20 dark:text-charge-100"
+    >
       {notice}
     </div>
   );

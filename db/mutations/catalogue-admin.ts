@@ -23,8 +23,12 @@ export async function writePackLabel(actorId: string, input: PackLabelInput): Pr
       .where(eq(packs.id, packId))
       .for("update", { of: packs });
     if (!before) throw new AppError("not_found", "That pack does not exist.");
-    if (before.pack.status === "merged") throw new AppError("conflict", "This pack was merged into another; edit that one.");
-    await tx.update(packs).set({ ...label, updatedAt: new Date() }).where(eq(packs.id, packId));
+    if (before.pack.status === "merged")
+      throw new AppError("conflict", "This pack was merged into another; edit that one.");
+    await tx
+      .update(packs)
+      .set({ ...label, updatedAt: new Date() })
+      .where(eq(packs.id, packId));
     // Capacity ratio = delivered ÷ rated mAh; label ratio = measured C ÷ labelled C (definitions on /methods).
     const cFactor = before.pack.labelledContinuousC / label.labelledContinuousC;
     await tx
@@ -38,17 +42,33 @@ export async function writePackLabel(actorId: string, input: PackLabelInput): Pr
       })
       .where(eq(results.packId, packId));
     const { id: _id, createdAt: _c, updatedAt: _u, ...from } = before.pack;
-    await tx.insert(auditEvents).values({ actorId, action: "pack.edit-label", entityType: "pack", entityId: String(packId), data: { from, to: label, note } });
+    await tx.insert(auditEvents).values({
+      actorId,
+      action: "pack.edit-label",
+      entityType: "pack",
+      entityId: String(packId),
+      data: { from, to: label, note },
+    });
     return { packSlugs: [before.pack.slug], makerSlugs: [before.makerSlug], packIds: [packId] };
   });
 }
 
 /** Merges a duplicate pack into another: its results and watches move, the duplicate is kept as "merged". */
-export async function mergePackRows(actorId: string, sourceId: number, targetId: number): Promise<{ movedResults: number; touched: Touched }> {
+export async function mergePackRows(
+  actorId: string,
+  sourceId: number,
+  targetId: number,
+): Promise<{ movedResults: number; touched: Touched }> {
   if (sourceId === targetId) throw new AppError("bad_request", "Choose two different packs.");
   return db.transaction(async (tx) => {
     const rows = await tx
-      .select({ id: packs.id, slug: packs.slug, status: packs.status, cells: packs.cellsInSeries, makerSlug: makers.slug })
+      .select({
+        id: packs.id,
+        slug: packs.slug,
+        status: packs.status,
+        cells: packs.cellsInSeries,
+        makerSlug: makers.slug,
+      })
       .from(packs)
       .innerJoin(makers, eq(makers.id, packs.makerId))
       .where(inArray(packs.id, [sourceId, targetId]))
@@ -57,38 +77,83 @@ export async function mergePackRows(actorId: string, sourceId: number, targetId:
     const source = rows.find((r) => r.id === sourceId);
     const target = rows.find((r) => r.id === targetId);
     if (!source || !target) throw new AppError("not_found", "One of those packs does not exist.");
-    if (source.status === "merged" || target.status === "merged") throw new AppError("conflict", "One of those packs has already been merged.");
-    if (source.cells !== target.cells) throw new AppError("conflict", "Those packs have different cell counts; they are not the same product.");
-    const moved = await tx.update(results).set({ packId: targetId, updatedAt: new Date() }).where(eq(results.packId, sourceId)).returning({ id: results.id });
+    if (source.status === "merged" || target.status === "merged")
+      throw new AppError("conflict", "One of those packs has already been merged.");
+    if (source.cells !== target.cells)
+      throw new AppError("conflict", "Those packs have different cell counts; they are not the same product.");
+    const moved = await tx
+      .update(results)
+      .set({ packId: targetId, updatedAt: new Date() })
+      .where(eq(results.packId, sourceId))
+      .returning({ id: results.id });
     await tx.execute(sql`insert into ${watches} (user_id, pack_id, created_at)
       select user_id, ${targetId}, created_at from ${watches} where pack_id = ${sourceId} on conflict do nothing`);
     await tx.delete(watches).where(eq(watches.packId, sourceId));
-    await tx.update(packs).set({ status: "merged", mergedIntoId: targetId, updatedAt: new Date() }).where(eq(packs.id, sourceId));
+    await tx
+      .update(packs)
+      .set({ status: "merged", mergedIntoId: targetId, updatedAt: new Date() })
+      .where(eq(packs.id, sourceId));
     await tx.insert(auditEvents).values({
-      actorId, action: "pack.merge", entityType: "pack", entityId: String(sourceId),
-      data: { into: targetId, sourceSlug: source.slug, targetSlug: target.slug, movedResultIds: moved.map((m) => m.id) },
+      actorId,
+      action: "pack.merge",
+      entityType: "pack",
+      entityId: String(sourceId),
+      data: {
+        into: targetId,
+        sourceSlug: source.slug,
+        targetSlug: target.slug,
+        movedResultIds: moved.map((m) => m.id),
+      },
     });
-    const touched = { packSlugs: [source.slug, target.slug], makerSlugs: [source.makerSlug, target.makerSlug], packIds: [targetId] };
+    const touched = {
+      packSlugs: [source.slug, target.slug],
+      makerSlugs: [source.makerSlug, target.makerSlug],
+      packIds: [targetId],
+    };
     return { movedResults: moved.length, touched };
   });
 }
 
 /** Merges a duplicate maker into another: its packs (and so their results) move, the duplicate is kept as "merged". */
-export async function mergeMakerRows(actorId: string, sourceId: number, targetId: number): Promise<{ movedPacks: number; touched: Touched }> {
+export async function mergeMakerRows(
+  actorId: string,
+  sourceId: number,
+  targetId: number,
+): Promise<{ movedPacks: number; touched: Touched }> {
   if (sourceId === targetId) throw new AppError("bad_request", "Choose two different makers.");
   return db.transaction(async (tx) => {
-    const rows = await tx.select().from(makers).where(inArray(makers.id, [sourceId, targetId])).orderBy(makers.id).for("update");
+    const rows = await tx
+      .select()
+      .from(makers)
+      .where(inArray(makers.id, [sourceId, targetId]))
+      .orderBy(makers.id)
+      .for("update");
     const source = rows.find((r) => r.id === sourceId);
     const target = rows.find((r) => r.id === targetId);
     if (!source || !target) throw new AppError("not_found", "One of those makers does not exist.");
-    if (source.status === "merged" || target.status === "merged") throw new AppError("conflict", "One of those makers has already been merged.");
-    const moved = await tx.update(packs).set({ makerId: targetId, updatedAt: new Date() }).where(eq(packs.makerId, sourceId)).returning({ id: packs.id, slug: packs.slug });
-    await tx.update(makers).set({ status: "merged", mergedIntoId: targetId }).where(and(eq(makers.id, sourceId), ne(makers.status, "merged")));
+    if (source.status === "merged" || target.status === "merged")
+      throw new AppError("conflict", "One of those makers has already been merged.");
+    const moved = await tx
+      .update(packs)
+      .set({ makerId: targetId, updatedAt: new Date() })
+      .where(eq(packs.makerId, sourceId))
+      .returning({ id: packs.id, slug: packs.slug });
+    await tx
+      .update(makers)
+      .set({ status: "merged", mergedIntoId: targetId })
+      .where(and(eq(makers.id, sourceId), ne(makers.status, "merged")));
     await tx.insert(auditEvents).values({
-      actorId, action: "maker.merge", entityType: "maker", entityId: String(sourceId),
+      actorId,
+      action: "maker.merge",
+      entityType: "maker",
+      entityId: String(sourceId),
       data: { into: targetId, sourceSlug: source.slug, targetSlug: target.slug, movedPackIds: moved.map((m) => m.id) },
     });
-    const touched = { packSlugs: moved.map((p) => p.slug), makerSlugs: [source.slug, target.slug], packIds: moved.map((p) => p.id) };
+    const touched = {
+      packSlugs: moved.map((p) => p.slug),
+      makerSlugs: [source.slug, target.slug],
+      packIds: moved.map((p) => p.id),
+    };
     return { movedPacks: moved.length, touched };
   });
 }

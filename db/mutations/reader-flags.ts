@@ -15,14 +15,28 @@ export async function insertReaderFlag(
   return db.transaction(async (tx) => {
     const c = await lockResult(tx, resultId);
     // Only published results can be flagged; anything else is not public, so it "does not exist" here.
-    if (c.status !== "approved" && c.status !== "disputed") throw new AppError("not_found", "That result is not published.");
+    if (c.status !== "approved" && c.status !== "disputed")
+      throw new AppError("not_found", "That result is not published.");
     const [row] = await tx
       .insert(readerFlags)
-      .values({ resultId, reporterId: reporter.userId, reporterHash: reporter.reporterHash, reason: input.reason, note: input.note })
+      .values({
+        resultId,
+        reporterId: reporter.userId,
+        reporterHash: reporter.reporterHash,
+        reason: input.reason,
+        note: input.note,
+      })
       .returning({ id: readerFlags.id });
     if (!row) throw new Error("flag insert returned nothing");
     if (c.status === "approved") {
-      await transition(tx, { resultId, actorId: reporter.userId, from: "approved", to: "disputed", reason: "reader-flag", note: `A reader flagged this result: ${input.reason}.` });
+      await transition(tx, {
+        resultId,
+        actorId: reporter.userId,
+        from: "approved",
+        to: "disputed",
+        reason: "reader-flag",
+        note: `A reader flagged this result: ${input.reason}.`,
+      });
     }
     return { ctx: c, flagId: row.id };
   });

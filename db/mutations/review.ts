@@ -15,8 +15,14 @@ import type { FlagResolution, RejectReason } from "@/lib/validations/review";
 
 /** What the after-effects of a moderation write need: the result, its pack and group, who submitted it. */
 export type ResultContext = {
-  resultId: number; packId: number; packSlug: string; makerSlug: string; groupKey: string; packTitle: string;
-  contributorId: string; contributorEmail: string | null;
+  resultId: number;
+  packId: number;
+  packSlug: string;
+  makerSlug: string;
+  groupKey: string;
+  packTitle: string;
+  contributorId: string;
+  contributorEmail: string | null;
 };
 
 /**
@@ -42,8 +48,15 @@ export async function computeAndStoreFlags(resultId: number, exec: Executor = db
 export async function lockResult(tx: Transaction, resultId: number): Promise<ResultContext & { status: ReviewStatus }> {
   const [row] = await tx
     .select({
-      status: results.status, packId: results.packId, groupKey: results.groupKey, contributorId: results.contributorId,
-      packSlug: packs.slug, model: packs.model, makerSlug: makers.slug, makerName: makers.name, contributorEmail: users.email,
+      status: results.status,
+      packId: results.packId,
+      groupKey: results.groupKey,
+      contributorId: results.contributorId,
+      packSlug: packs.slug,
+      model: packs.model,
+      makerSlug: makers.slug,
+      makerName: makers.name,
+      contributorEmail: users.email,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -57,7 +70,15 @@ export async function lockResult(tx: Transaction, resultId: number): Promise<Res
 
 export async function transition(
   tx: Transaction,
-  p: { resultId: number; actorId: string | null; from: ReviewStatus; to: ReviewStatus; reason?: string | null; note?: string | null; publish?: boolean },
+  p: {
+    resultId: number;
+    actorId: string | null;
+    from: ReviewStatus;
+    to: ReviewStatus;
+    reason?: string | null;
+    note?: string | null;
+    publish?: boolean;
+  },
 ): Promise<void> {
   const now = new Date();
   const updated = await tx
@@ -65,9 +86,16 @@ export async function transition(
     .set({ status: p.to, updatedAt: now, ...(p.publish ? { publishedAt: now } : {}) })
     .where(and(eq(results.id, p.resultId), eq(results.status, p.from)))
     .returning({ id: results.id });
-  if (updated.length !== 1) throw new AppError("conflict", "This result changed while you were looking at it. Reload and try again.");
+  if (updated.length !== 1)
+    throw new AppError("conflict", "This result changed while you were looking at it. Reload and try again.");
   await tx.insert(reviewEvents).values({
-    resultId: p.resultId, actorId: p.actorId, fromStatus: p.from, toStatus: p.to, reason: p.reason ?? null, note: p.note ?? null, createdAt: now,
+    resultId: p.resultId,
+    actorId: p.actorId,
+    fromStatus: p.from,
+    toStatus: p.to,
+    reason: p.reason ?? null,
+    note: p.note ?? null,
+    createdAt: now,
   });
 }
 
@@ -92,15 +120,29 @@ export async function writeDecision(
   const reason = decision.kind === "reject" ? decision.reason : null;
   const ctx = await db.transaction(async (tx) => {
     const c = await lockResult(tx, resultId);
-    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
-    if (c.status !== "pending") throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
-    await transition(tx, { resultId, actorId, from: "pending", to, reason, note: decision.note, publish: to === "approved" });
+    if (c.contributorId === actorId)
+      throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
+    if (c.status !== "pending")
+      throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
+    await transition(tx, {
+      resultId,
+      actorId,
+      from: "pending",
+      to,
+      reason,
+      note: decision.note,
+      publish: to === "approved",
+    });
     return c;
   });
   return { ctx, status: to };
 }
 
-const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved", corrected: "approved", withdrawn: "withdrawn" };
+const resolutionStatus: Record<FlagResolution, ReviewStatus> = {
+  kept: "approved",
+  corrected: "approved",
+  withdrawn: "withdrawn",
+};
 
 /**
  * Resolves an open reader flag: keep the result, correct it (the note says what), or withdraw it. The result
@@ -117,14 +159,20 @@ export async function writeFlagResolution(
     const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
     if (!flag) throw new AppError("not_found", "That flag does not exist.");
     const c = await lockResult(tx, flag.resultId);
-    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot resolve a flag on your own result; another moderator has to.");
+    if (c.contributorId === actorId)
+      throw new AppError("forbidden", "You cannot resolve a flag on your own result; another moderator has to.");
     if (flag.status !== "open") throw new AppError("conflict", "This flag has already been resolved.");
     const now = new Date();
     const close = { status: resolution, resolvedById: actorId, resolutionNote: note, resolvedAt: now } as const;
-    await tx.update(readerFlags).set(close).where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
+    await tx
+      .update(readerFlags)
+      .set(close)
+      .where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
     let alsoClosed = 0;
     if (resolution === "withdrawn") {
-      const others = await tx.update(readerFlags).set(close)
+      const others = await tx
+        .update(readerFlags)
+        .set(close)
         .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)))
         .returning({ id: readerFlags.id });
       alsoClosed = others.length;
@@ -135,7 +183,14 @@ export async function writeFlagResolution(
       .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open")));
     const to = resolutionStatus[resolution];
     if (c.status === "disputed" && stillOpen.length === 0) {
-      await transition(tx, { resultId: flag.resultId, actorId, from: "disputed", to, reason: `flag-${resolution}`, note });
+      await transition(tx, {
+        resultId: flag.resultId,
+        actorId,
+        from: "disputed",
+        to,
+        reason: `flag-${resolution}`,
+        note,
+      });
       return { ctx: c, status: to, alsoClosed };
     }
     return { ctx: c, status: c.status, alsoClosed };

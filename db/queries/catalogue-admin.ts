@@ -17,9 +17,18 @@ export async function listCatalogueMakers() {
 export async function listCataloguePacks() {
   return db
     .select({
-      id: packs.id, slug: packs.slug, model: packs.model, makerName: makers.name, status: packs.status,
-      cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, labelledContinuousC: packs.labelledContinuousC,
-      labelledBurstC: packs.labelledBurstC, weightG: packs.weightG, connector: packs.connector, results: count(results.id),
+      id: packs.id,
+      slug: packs.slug,
+      model: packs.model,
+      makerName: makers.name,
+      status: packs.status,
+      cellsInSeries: packs.cellsInSeries,
+      ratedCapacityMah: packs.ratedCapacityMah,
+      labelledContinuousC: packs.labelledContinuousC,
+      labelledBurstC: packs.labelledBurstC,
+      weightG: packs.weightG,
+      connector: packs.connector,
+      results: count(results.id),
     })
     .from(packs)
     .innerJoin(makers, eq(makers.id, packs.makerId))
@@ -33,6 +42,9 @@ export type CataloguePack = Awaited<ReturnType<typeof listCataloguePacks>>[numbe
 /** The like-for-like groups the results of these packs are in. */
 export async function listGroupKeysOfPacks(packIds: number[]): Promise<string[]> {
   if (packIds.length === 0) return [];
-  const rows = await db.selectDistinct({ groupKey: results.groupKey }).from(results).where(inArray(results.packId, packIds));
+  const rows = await db
+    .selectDistinct({ groupKey: results.groupKey })
+    .from(results)
+    .where(inArray(results.packId, packIds));
   return rows.map((r) => r.groupKey);
 }

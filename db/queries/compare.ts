@@ -15,16 +15,27 @@ export async function getComparison(slugs: string[], wantedGroup: string | null)
   const groups = groupOptions(rows);
   const chosenKey = groups.find((g) => g.key === wantedGroup)?.key ?? groups[0]?.key ?? null;
   const representative = rows.find((r) => r.groupKey === chosenKey);
-  if (!representative || chosenKey === null) return { packs: packList, unknownSlugs, groups, group: null, compared: [], curves: [] };
+  if (!representative || chosenKey === null)
+    return { packs: packList, unknownSlugs, groups, group: null, compared: [], curves: [] };
   const group = { ...describeResultGroup(representative), key: chosenKey };
-  const compared = comparePacks(rows, packList.map((p) => p.id), group);
+  const compared = comparePacks(
+    rows,
+    packList.map((p) => p.id),
+    group,
+  );
   const ids = compared.map((c) => c.curveResultId).filter((id): id is number => id !== null);
   const stored = await getPublicCurves(ids);
   const curves = compared.flatMap((c, i) => {
     const pack = packList[i];
     const curve = c.curveResultId === null ? undefined : stored.get(c.curveResultId);
     if (!pack || !curve || c.curveResultId === null) return [];
-    return [{ packSlug: pack.slug, resultId: c.curveResultId, points: prepareCurve(curve, pack.cellsInSeries, COMPARE_CURVE_POINTS) }];
+    return [
+      {
+        packSlug: pack.slug,
+        resultId: c.curveResultId,
+        points: prepareCurve(curve, pack.cellsInSeries, COMPARE_CURVE_POINTS),
+      },
+    ];
   });
   return { packs: packList, unknownSlugs, groups, group, compared, curves };
 }

@@ -2,7 +2,15 @@
 // C, the cycling series with its trend, and prepared discharge curves.
 import "server-only";
 import { PACK_PAGE_CURVE_POINTS, prepareCurve, type ChartPoint } from "@/lib/curves";
-import { cycleSeries, describeResultGroup, figuresByGroup, sustainedC, type CycleSeries, type GroupFigures, type PublicResultRow } from "@/lib/pack-summary";
+import {
+  cycleSeries,
+  describeResultGroup,
+  figuresByGroup,
+  sustainedC,
+  type CycleSeries,
+  type GroupFigures,
+  type PublicResultRow,
+} from "@/lib/pack-summary";
 import type { PackSummary } from "@/lib/catalogue";
 import { getPackBySlug } from "./packs";
 import { getPublicCurves, listPublicResultsForPacks } from "./results";
@@ -31,7 +39,14 @@ export async function getPackDetail(slug: string): Promise<PackDetail | null> {
     const curve = stored.get(r.id);
     if (!curve) return [];
     const g = describeResultGroup(r);
-    return [{ resultId: r.id, groupKey: r.groupKey, label: `#${r.id} · ${g.parts.resistance.label}, ${g.parts.ambient.label}, ${g.parts.rate.label}, ${g.parts.age.label}`, points: prepareCurve(curve, pack.cellsInSeries, PACK_PAGE_CURVE_POINTS) }];
+    return [
+      {
+        resultId: r.id,
+        groupKey: r.groupKey,
+        label: `#${r.id} · ${g.parts.resistance.label}, ${g.parts.ambient.label}, ${g.parts.rate.label}, ${g.parts.age.label}`,
+        points: prepareCurve(curve, pack.cellsInSeries, PACK_PAGE_CURVE_POINTS),
+      },
+    ];
   });
   return {
     pack,

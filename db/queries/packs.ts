@@ -50,7 +50,11 @@ export async function listPackRows(groupKey: string | null): Promise<PackRow[]> 
   const [list, counts, inGroup] = await Promise.all([
     listActivePacks(),
     db
-      .select({ packId: results.packId, n: sql<number>`count(*)::int`, groups: sql<number>`count(distinct ${results.groupKey})::int` })
+      .select({
+        packId: results.packId,
+        n: sql<number>`count(*)::int`,
+        groups: sql<number>`count(distinct ${results.groupKey})::int`,
+      })
       .from(results)
       .where(isPublic)
       .groupBy(results.packId),

@@ -9,7 +9,9 @@ export const userRole = pgEnum("user_role", userRoles);
 export const users = pgTable(
   "users",
   {
-    id: text("id").primaryKey().$defaultFn(() => crypto.randomUUID()),
+    id: text("id")
+      .primaryKey()
+      .$defaultFn(() => crypto.randomUUID()),
     name: text("name"),
     email: text("email").unique(),
     emailVerified: timestamp("email_verified", { mode: "date", withTimezone: true }),

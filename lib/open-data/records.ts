@@ -11,12 +11,29 @@ export type MakerRow = { id: number; slug: string; name: string; packCount: numb
 export type PackRecord = PackSummary & { makerId: number; approvedResultCount: number };
 
 type MethodCard = {
-  ambientTemperatureC: number; packStartTemperatureC: number | null; loadMode: LoadMode; loadCurrentA: number;
-  loadRateC: number; cutoffVPerCell: number; stopTemperatureC: number; resistanceMethod: ResistanceMethod;
-  equipment: string; sampleRateHz: number | null; cyclesBeforeTest: number;
+  ambientTemperatureC: number;
+  packStartTemperatureC: number | null;
+  loadMode: LoadMode;
+  loadCurrentA: number;
+  loadRateC: number;
+  cutoffVPerCell: number;
+  stopTemperatureC: number;
+  resistanceMethod: ResistanceMethod;
+  equipment: string;
+  sampleRateHz: number | null;
+  cyclesBeforeTest: number;
 };
 
 export type ResultRow = {
-  id: number; packId: number; packSlug: string; makerSlug: string; status: "approved"; groupKey: string;
-  testedOn: string | null; publishedAt: string | null; notes: string | null; methodCard: MethodCard; figures: Figures;
+  id: number;
+  packId: number;
+  packSlug: string;
+  makerSlug: string;
+  status: "approved";
+  groupKey: string;
+  testedOn: string | null;
+  publishedAt: string | null;
+  notes: string | null;
+  methodCard: MethodCard;
+  figures: Figures;
 };

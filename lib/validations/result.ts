@@ -14,7 +14,11 @@ const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumber) => 
     .transform((v, ctx) => {
       const n = Number(v.replace(",", "."));
       if (v === "" || !Number.isFinite(n)) {
-        ctx.addIssue({ code: "custom", message: v === "" ? `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` : `${label} must be a number.` });
+        ctx.addIssue({
+          code: "custom",
+          message:
+            v === "" ? `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` : `${label} must be a number.`,
+        });
         return z.NEVER;
       }
       return n;
@@ -31,11 +35,27 @@ const packStepSchema = z
     makerId: z.string().trim(),
     makerName: optionalText("Maker name", 80),
     model: optionalText("Model", 120),
-    cellsInSeries: optionalNumber("Cells in series", (n) => n.int("Cells in series must be a whole number.").min(1, "At least 1 cell.").max(PACK_CELLS_MAX, `At most ${PACK_CELLS_MAX} cells in series.`)),
-    ratedCapacityMah: optionalNumber("Rated capacity", (n) => n.int("Rated capacity must be a whole number of mAh.").min(50, "Rated capacity must be at least 50 mAh.").max(100_000, "Rated capacity must be at most 100 000 mAh.")),
-    labelledContinuousC: optionalNumber("Labelled continuous C", (n) => n.gt(0, "Labelled C must be above 0.").max(1000, "Labelled C must be at most 1000.")),
-    labelledBurstC: optionalNumber("Labelled burst C", (n) => n.gt(0, "Burst C must be above 0.").max(2000, "Burst C must be at most 2000.")),
-    weightG: optionalNumber("Weight", (n) => n.gt(0, "Weight must be above 0 g.").max(50_000, "Weight must be at most 50 kg.")),
+    cellsInSeries: optionalNumber("Cells in series", (n) =>
+      n
+        .int("Cells in series must be a whole number.")
+        .min(1, "At least 1 cell.")
+        .max(PACK_CELLS_MAX, `At most ${PACK_CELLS_MAX} cells in series.`),
+    ),
+    ratedCapacityMah: optionalNumber("Rated capacity", (n) =>
+      n
+        .int("Rated capacity must be a whole number of mAh.")
+        .min(50, "Rated capacity must be at least 50 mAh.")
+        .max(100_000, "Rated capacity must be at most 100 000 mAh."),
+    ),
+    labelledContinuousC: optionalNumber("Labelled continuous C", (n) =>
+      n.gt(0, "Labelled C must be above 0.").max(1000, "Labelled C must be at most 1000."),
+    ),
+    labelledBurstC: optionalNumber("Labelled burst C", (n) =>
+      n.gt(0, "Burst C must be above 0.").max(2000, "Burst C must be at most 2000."),
+    ),
+    weightG: optionalNumber("Weight", (n) =>
+      n.gt(0, "Weight must be above 0 g.").max(50_000, "Weight must be at most 50 kg."),
+    ),
     connector: optionalText("Connector", 40),
   })
   .superRefine((v, ctx) => {
@@ -61,23 +81,52 @@ export type PackStep = z.output<typeof packStepSchema>;
 // ---------- Step 2: the method card ----------
 const methodCardSchema = z
   .object({
-    benchProfileId: z.string().trim().regex(/^(\d{1,10})?$/, "Choose a bench profile.").transform((v) => (v === "" ? null : Number(v))),
-    ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) => n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C.")),
-    packStartTemperatureC: optionalNumber("Pack start temperature", (n) => n.min(-20, "Pack start temperature must be at least −20 °C.").max(60, "Pack start temperature must be at most 60 °C.")),
+    benchProfileId: z
+      .string()
+      .trim()
+      .regex(/^(\d{1,10})?$/, "Choose a bench profile.")
+      .transform((v) => (v === "" ? null : Number(v))),
+    ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) =>
+      n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C."),
+    ),
+    packStartTemperatureC: optionalNumber("Pack start temperature", (n) =>
+      n
+        .min(-20, "Pack start temperature must be at least −20 °C.")
+        .max(60, "Pack start temperature must be at most 60 °C."),
+    ),
     loadMode: z.string({ error: "Choose the load mode." }).pipe(z.enum(loadModes, { error: "Choose the load mode." })),
-    loadCurrentA: requiredNumber("Load current", "A", (n) => n.gt(0, "Load current must be above 0 A.").max(2000, "Load current must be at most 2000 A.")),
-    cutoffVPerCell: requiredNumber("Cut-off voltage", "V per cell", (n) => n.min(2.5, "Cut-off must be at least 2.5 V per cell.").max(4.2, "Cut-off must be at most 4.2 V per cell.")),
-    stopTemperatureC: requiredNumber("Stop temperature", "°C", (n) => n.max(80, "Stop temperature must be at most 80 °C.")),
-    resistanceMethod: z.string({ error: "Choose how you measured resistance." }).pipe(z.enum(resistanceMethods, { error: "Choose how you measured resistance." })),
+    loadCurrentA: requiredNumber("Load current", "A", (n) =>
+      n.gt(0, "Load current must be above 0 A.").max(2000, "Load current must be at most 2000 A."),
+    ),
+    cutoffVPerCell: requiredNumber("Cut-off voltage", "V per cell", (n) =>
+      n.min(2.5, "Cut-off must be at least 2.5 V per cell.").max(4.2, "Cut-off must be at most 4.2 V per cell."),
+    ),
+    stopTemperatureC: requiredNumber("Stop temperature", "°C", (n) =>
+      n.max(80, "Stop temperature must be at most 80 °C."),
+    ),
+    resistanceMethod: z
+      .string({ error: "Choose how you measured resistance." })
+      .pipe(z.enum(resistanceMethods, { error: "Choose how you measured resistance." })),
     equipment: requiredText("Equipment", 300),
-    sampleRateHz: optionalNumber("Sample rate", (n) => n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz.")),
-    cyclesBeforeTest: requiredNumber("Cycles before the test", "", (n) => n.int("Cycles must be a whole number.").min(0, "Cycles cannot be negative.").max(10_000, "Cycles must be at most 10 000.")),
+    sampleRateHz: optionalNumber("Sample rate", (n) =>
+      n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz."),
+    ),
+    cyclesBeforeTest: requiredNumber("Cycles before the test", "", (n) =>
+      n
+        .int("Cycles must be a whole number.")
+        .min(0, "Cycles cannot be negative.")
+        .max(10_000, "Cycles must be at most 10 000."),
+    ),
     testedOn: optionalPastDate("Test date"),
     notes: optionalText("Notes", 2000),
   })
   .superRefine((v, ctx) => {
     if (v.stopTemperatureC <= v.ambientTemperatureC) {
-      ctx.addIssue({ code: "custom", path: ["stopTemperatureC"], message: "Stop temperature must be above the ambient temperature." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["stopTemperatureC"],
+        message: "Stop temperature must be above the ambient temperature.",
+      });
     }
   });
 export type MethodCardValues = z.input<typeof methodCardSchema>;
@@ -92,8 +141,12 @@ const logRefSchema = z.object({
   key: z.string().regex(LOG_KEY, "Upload the log first."),
   filename: z.string().trim().min(1, "Upload the log first.").max(200, "The file name can be at most 200 characters."),
 });
-const photoKeysSchema = z.array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again.")).max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
-const declarationSchema = z.boolean({ error: "Confirm that these are honest measurements." }).refine((v) => v, "Confirm that these are honest measurements.");
+const photoKeysSchema = z
+  .array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again."))
+  .max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
+const declarationSchema = z
+  .boolean({ error: "Confirm that these are honest measurements." })
+  .refine((v) => v, "Confirm that these are honest measurements.");
 
 export const submitResultSchema = z.object({
   idempotencyKey: z.uuid("Reload the page and try again."),

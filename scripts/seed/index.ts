@@ -25,9 +25,21 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
     }
     await db
       .insert(schema.users)
-      .values(demoUsers.map((u) => ({ email: u.email, name: u.displayName, displayName: u.displayName, role: u.role, anonymous: u.anonymous ?? false, emailVerified: new Date("2026-01-01T00:00:00Z") })))
+      .values(
+        demoUsers.map((u) => ({
+          email: u.email,
+          name: u.displayName,
+          displayName: u.displayName,
+          role: u.role,
+          anonymous: u.anonymous ?? false,
+          emailVerified: new Date("2026-01-01T00:00:00Z"),
+        })),
+      )
       .onConflictDoNothing();
-    await db.insert(schema.makers).values(demoMakers.map((m) => ({ slug: m.slug, name: m.name }))).onConflictDoNothing();
+    await db
+      .insert(schema.makers)
+      .values(demoMakers.map((m) => ({ slug: m.slug, name: m.name })))
+      .onConflictDoNothing();
     const makerRows = await db.select({ id: schema.makers.id, slug: schema.makers.slug }).from(schema.makers);
     const makerId = new Map(makerRows.map((m) => [m.slug, m.id]));
     const packs = buildPacks();
@@ -44,10 +56,15 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
       .onConflictDoNothing();
     const made = await seedResults(db, packs, log);
     // Pending results carry their automatic plausibility flags, as they would after a real submission.
-    const pending = await db.select({ id: schema.results.id }).from(schema.results).where(eq(schema.results.status, "pending"));
+    const pending = await db
+      .select({ id: schema.results.id })
+      .from(schema.results)
+      .where(eq(schema.results.status, "pending"));
     for (const { id } of pending) await computeAndStoreFlags(id, db);
     const charts = await seedCharts(db);
-    log(`sagline: demo scenario seeded (${demoMakers.length} makers, ${packs.length} packs, ${made} results, ${charts} charts)`);
+    log(
+      `sagline: demo scenario seeded (${demoMakers.length} makers, ${packs.length} packs, ${made} results, ${charts} charts)`,
+    );
   } finally {
     await pool.end();
   }

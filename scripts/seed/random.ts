@@ -20,4 +20,3 @@ export function createRandom(seed: number) {
   };
 }
 export type Random = ReturnType<typeof createRandom>;
-

@@ -26,12 +26,72 @@ type Campaign = {
 };
 
 const campaigns: Campaign[] = [
-  { contributor: "ridgeline@sagline.localhost", method: "dc-step", ambientC: [20, 24], cutoffVPerCell: 3.3, cRate: 8, cycles: [0, 1], owns: () => true, equipment: "Electronic load 600 W, USB logger at 2 Hz, thermocouple on the pack face", dialect: {} },
-  { contributor: "coldframe@sagline.localhost", method: "iec-61960-two-level", ambientC: [21, 23], cutoffVPerCell: 3.0, cRate: 3, cycles: [0], owns: (i) => i % 2 === 0, equipment: "Programmable load with two-level pulse script, 4-wire sense, NTC on the pack", dialect: { delimiter: ";", decimalComma: true, voltageUnit: "mV", currentUnit: "mA", timeUnit: "ms" } },
-  { contributor: "marsh@sagline.localhost", method: "dc-step", ambientC: [19, 24], cutoffVPerCell: 3.5, cRate: 15, cycles: [0, 2], owns: (i) => i % 2 === 1, equipment: "Carbon-pile load with shunt and data logger, IR thermometer", dialect: { delimiter: "\t", dischargeNegative: true } },
-  { contributor: "quarry@sagline.localhost", method: "charger-readout", ambientC: [6, 12], cutoffVPerCell: 3.3, cRate: 8, cycles: [0], owns: (i) => i % 3 === 0, equipment: "Hobby charger in discharge mode with its logging output (unheated shed)", dialect: { headerStyle: "snake" } },
-  { contributor: "slipway@sagline.localhost", method: "dc-step", ambientC: [20, 24], cutoffVPerCell: 3.3, cRate: 8, cycles: [60, 120, 180], owns: (i) => i % 3 === 1, equipment: "Electronic load 1 kW with logger at 1 Hz, pack in a fire-safe box", dialect: { crlf: true, bom: true } },
-  { contributor: "anon@sagline.localhost", method: "dc-step", ambientC: [26, 31], cutoffVPerCell: 3.3, cRate: 8, cycles: [0], owns: (i) => i % 3 === 2, equipment: "Electronic load, summer workshop, no air conditioning", dialect: { headerStyle: "brackets" } },
+  {
+    contributor: "ridgeline@sagline.localhost",
+    method: "dc-step",
+    ambientC: [20, 24],
+    cutoffVPerCell: 3.3,
+    cRate: 8,
+    cycles: [0, 1],
+    owns: () => true,
+    equipment: "Electronic load 600 W, USB logger at 2 Hz, thermocouple on the pack face",
+    dialect: {},
+  },
+  {
+    contributor: "coldframe@sagline.localhost",
+    method: "iec-61960-two-level",
+    ambientC: [21, 23],
+    cutoffVPerCell: 3.0,
+    cRate: 3,
+    cycles: [0],
+    owns: (i) => i % 2 === 0,
+    equipment: "Programmable load with two-level pulse script, 4-wire sense, NTC on the pack",
+    dialect: { delimiter: ";", decimalComma: true, voltageUnit: "mV", currentUnit: "mA", timeUnit: "ms" },
+  },
+  {
+    contributor: "marsh@sagline.localhost",
+    method: "dc-step",
+    ambientC: [19, 24],
+    cutoffVPerCell: 3.5,
+    cRate: 15,
+    cycles: [0, 2],
+    owns: (i) => i % 2 === 1,
+    equipment: "Carbon-pile load with shunt and data logger, IR thermometer",
+    dialect: { delimiter: "\t", dischargeNegative: true },
+  },
+  {
+    contributor: "quarry@sagline.localhost",
+    method: "charger-readout",
+    ambientC: [6, 12],
+    cutoffVPerCell: 3.3,
+    cRate: 8,
+    cycles: [0],
+    owns: (i) => i % 3 === 0,
+    equipment: "Hobby charger in discharge mode with its logging output (unheated shed)",
+    dialect: { headerStyle: "snake" },
+  },
+  {
+    contributor: "slipway@sagline.localhost",
+    method: "dc-step",
+    ambientC: [20, 24],
+    cutoffVPerCell: 3.3,
+    cRate: 8,
+    cycles: [60, 120, 180],
+    owns: (i) => i % 3 === 1,
+    equipment: "Electronic load 1 kW with logger at 1 Hz, pack in a fire-safe box",
+    dialect: { crlf: true, bom: true },
+  },
+  {
+    contributor: "anon@sagline.localhost",
+    method: "dc-step",
+    ambientC: [26, 31],
+    cutoffVPerCell: 3.3,
+    cRate: 8,
+    cycles: [0],
+    owns: (i) => i % 3 === 2,
+    equipment: "Electronic load, summer workshop, no air conditioning",
+    dialect: { headerStyle: "brackets" },
+  },
 ];
 
 type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "disputed";
@@ -47,7 +107,11 @@ function outcomeFor(r: Random): Outcome {
 
 const rejectReasons = ["incomplete-method", "wrong-data", "not-a-measurement"] as const;
 
-export async function seedResults(db: NodePgDatabase<typeof schema>, packs: DemoPack[], log: (s: string) => void): Promise<number> {
+export async function seedResults(
+  db: NodePgDatabase<typeof schema>,
+  packs: DemoPack[],
+  log: (s: string) => void,
+): Promise<number> {
   const rnd = createRandom(7331);
   const users = await db.select({ id: schema.users.id, email: schema.users.email }).from(schema.users);
   const userId = new Map(users.map((u) => [u.email, u.id]));
@@ -76,7 +140,8 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
         const ambientC = Math.round(rnd.between(...campaign.ambientC) * 10) / 10;
         const loadCurrentA = Math.round(campaign.cRate * (pack.ratedCapacityMah / 1000) * 10) / 10;
         // Ageing (from memory, typical hobby LiPo): ~0.07 % capacity lost and ~0.3 % resistance gained per cycle.
-        const capacityMah = pack.ratedCapacityMah * pack.truth.capacityFactor * (1 - 0.0007 * cycles) * rnd.between(0.98, 1.02);
+        const capacityMah =
+          pack.ratedCapacityMah * pack.truth.capacityFactor * (1 - 0.0007 * cycles) * rnd.between(0.98, 1.02);
         const r0 = pack.truth.r0PerCellMohm * (1 + 0.003 * cycles) * rnd.between(0.93, 1.07);
         const { rows } = generateLog({
           seed: 1000 + n,
@@ -94,9 +159,10 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
           finalRestS: 5,
           // The two-level campaign uses a 4-wire sense and a quiet load, so its readings are far less
           // noisy: at 1 It the step is only a few mV per cell.
-          noise: campaign.method === "iec-61960-two-level"
-            ? { voltageV: 0.0005 * pack.cellsInSeries, currentA: 0.005, temperatureC: 0.05 }
-            : { voltageV: 0.002 * pack.cellsInSeries, currentA: 0.006, temperatureC: 0.1 },
+          noise:
+            campaign.method === "iec-61960-two-level"
+              ? { voltageV: 0.0005 * pack.cellsInSeries, currentA: 0.005, temperatureC: 0.05 }
+              : { voltageV: 0.002 * pack.cellsInSeries, currentA: 0.006, temperatureC: 0.1 },
         });
         const csv = toCsv(rows, campaign.dialect);
         const analysis = await analyseText(csv, {
@@ -111,7 +177,14 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
         const sha = createHash("sha256").update(csv).digest("hex");
         const key = logKey(sha);
         await putObject(key, csv, "text/csv");
-        const group = groupKey({ resistanceMethod: campaign.method, ambientC, cutoffVPerCell: campaign.cutoffVPerCell, loadCurrentA, ratedMah: pack.ratedCapacityMah, cyclesBeforeTest: cycles });
+        const group = groupKey({
+          resistanceMethod: campaign.method,
+          ambientC,
+          cutoffVPerCell: campaign.cutoffVPerCell,
+          loadCurrentA,
+          ratedMah: pack.ratedCapacityMah,
+          cyclesBeforeTest: cycles,
+        });
         const submittedAt = new Date(start + n * 3.7 * 3600 * 1000);
         const outcome = outcomeFor(rnd);
         const published = outcome === "approved" || outcome === "disputed";
@@ -159,17 +232,70 @@ export async function seedResults(db: NodePgDatabase<typeof schema>, packs: Demo
         if (resultId === undefined) continue;
         made++;
         const events: (typeof schema.reviewEvents.$inferInsert)[] = [
-          { resultId, actorId: contributorId, fromStatus: null, toStatus: "pending", note: "Submitted.", createdAt: submittedAt },
+          {
+            resultId,
+            actorId: contributorId,
+            fromStatus: null,
+            toStatus: "pending",
+            note: "Submitted.",
+            createdAt: submittedAt,
+          },
         ];
         const later = (h: number) => new Date(submittedAt.getTime() + h * 3600 * 1000);
-        if (outcome === "approved" || outcome === "disputed") events.push({ resultId, actorId: moderatorId, fromStatus: "pending", toStatus: "approved", createdAt: later(20) });
-        if (outcome === "disputed") events.push({ resultId, actorId: null, fromStatus: "approved", toStatus: "disputed", reason: "reader-flag", note: "A reader flagged the figures.", createdAt: later(60) });
-        if (outcome === "rejected") events.push({ resultId, actorId: moderatorId, fromStatus: "pending", toStatus: "rejected", reason: rnd.pick(rejectReasons), note: "The method card does not match the log.", createdAt: later(20) });
-        if (outcome === "changes_requested") events.push({ resultId, actorId: moderatorId, fromStatus: "pending", toStatus: "changes_requested", note: "Please state where the temperature probe sat.", createdAt: later(20) });
-        if (outcome === "withdrawn") events.push({ resultId, actorId: contributorId, fromStatus: "pending", toStatus: "withdrawn", note: "Wrong pack selected.", createdAt: later(5) });
+        if (outcome === "approved" || outcome === "disputed")
+          events.push({
+            resultId,
+            actorId: moderatorId,
+            fromStatus: "pending",
+            toStatus: "approved",
+            createdAt: later(20),
+          });
+        if (outcome === "disputed")
+          events.push({
+            resultId,
+            actorId: null,
+            fromStatus: "approved",
+            toStatus: "disputed",
+            reason: "reader-flag",
+            note: "A reader flagged the figures.",
+            createdAt: later(60),
+          });
+        if (outcome === "rejected")
+          events.push({
+            resultId,
+            actorId: moderatorId,
+            fromStatus: "pending",
+            toStatus: "rejected",
+            reason: rnd.pick(rejectReasons),
+            note: "The method card does not match the log.",
+            createdAt: later(20),
+          });
+        if (outcome === "changes_requested")
+          events.push({
+            resultId,
+            actorId: moderatorId,
+            fromStatus: "pending",
+            toStatus: "changes_requested",
+            note: "Please state where the temperature probe sat.",
+            createdAt: later(20),
+          });
+        if (outcome === "withdrawn")
+          events.push({
+            resultId,
+            actorId: contributorId,
+            fromStatus: "pending",
+            toStatus: "withdrawn",
+            note: "Wrong pack selected.",
+            createdAt: later(5),
+          });
         await db.insert(schema.reviewEvents).values(events);
         if (outcome === "disputed") {
-          await db.insert(schema.readerFlags).values({ resultId, reason: "wrong-figures", note: "Capacity looks high for this pack.", createdAt: later(60) });
+          await db.insert(schema.readerFlags).values({
+            resultId,
+            reason: "wrong-figures",
+            note: "Capacity looks high for this pack.",
+            createdAt: later(60),
+          });
         }
       }
     }

@@ -4,7 +4,12 @@
 import { slugify } from "@/lib/slug";
 import { createRandom } from "./random";
 
-export type DemoUser = { email: string; displayName: string; role: "contributor" | "moderator" | "admin"; anonymous?: boolean };
+export type DemoUser = {
+  email: string;
+  displayName: string;
+  role: "contributor" | "moderator" | "admin";
+  anonymous?: boolean;
+};
 export type DemoMaker = { slug: string; name: string; honesty: number; series: string[] };
 export type DemoPack = {
   slug: string;

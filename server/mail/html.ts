@@ -1,10 +1,17 @@
 // A deliberately plain HTML wrapper for our e-mails: one column, system fonts, inline styles only, and
 // every interpolated value escaped. The text part is always complete on its own.
 export function escapeHtml(s: string): string {
-  return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+  return s.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
+  );
 }
 
-export type HtmlBlock = { kind: "p"; text: string } | { kind: "button"; href: string; label: string } | { kind: "small"; text: string } | { kind: "link"; href: string };
+export type HtmlBlock =
+  | { kind: "p"; text: string }
+  | { kind: "button"; href: string; label: string }
+  | { kind: "small"; text: string }
+  | { kind: "link"; href: string };
 
 function block(b: HtmlBlock): string {
   switch (b.kind) {

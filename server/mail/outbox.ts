@@ -3,7 +3,13 @@
 // — called after each send and by scripts/flush-mail.ts — retries what is due. A mail outage never loses
 // a message, and never fails the request that caused it.
 import "server-only";
-import { claimDueMail, enqueueClaimedMail, markMailFailed, markMailSent, type OutboxMessage } from "@/db/mutations/mail-outbox";
+import {
+  claimDueMail,
+  enqueueClaimedMail,
+  markMailFailed,
+  markMailSent,
+  type OutboxMessage,
+} from "@/db/mutations/mail-outbox";
 import { env } from "@/server/env";
 import { mailTransport, type MailTransport } from "./transport";
 import type { MailContent } from "./templates";
@@ -24,7 +30,13 @@ export type SendOutcome = { id: number; sent: boolean; error?: string };
 
 async function attempt(row: OutboxMessage, transport: MailTransport): Promise<SendOutcome> {
   try {
-    const info = await transport.sendMail({ from: env().MAIL_FROM, to: row.to, subject: row.subject, text: row.text, ...(row.html ? { html: row.html } : {}) });
+    const info = await transport.sendMail({
+      from: env().MAIL_FROM,
+      to: row.to,
+      subject: row.subject,
+      text: row.text,
+      ...(row.html ? { html: row.html } : {}),
+    });
     const rejected = [...(info.rejected ?? []), ...(info.pending ?? [])];
     if (rejected.length) throw new Error(`the relay refused ${rejected.length} recipient(s)`);
     await markMailSent(row.id, row.sensitive);
@@ -40,7 +52,10 @@ async function attempt(row: OutboxMessage, transport: MailTransport): Promise<Se
 /** Queue a message and try to send it now. Resolves either way; `sent` says whether it left already. */
 export async function sendMail(to: string, content: MailContent, opts: SendOptions = {}): Promise<SendOutcome> {
   const transport = opts.transport ?? mailTransport();
-  const row = await enqueueClaimedMail({ to, subject: content.subject, text: content.text, html: content.html, sensitive: opts.sensitive ?? false }, LEASE_S);
+  const row = await enqueueClaimedMail(
+    { to, subject: content.subject, text: content.text, html: content.html, sensitive: opts.sensitive ?? false },
+    LEASE_S,
+  );
   const outcome = await attempt(row, transport);
   // The relay just worked: a good moment to send anything still waiting.
   if (outcome.sent && (opts.flush ?? true)) await flushOutbox({ transport }).catch(() => undefined);
@@ -48,7 +63,9 @@ export async function sendMail(to: string, content: MailContent, opts: SendOptio
 }
 
 /** Retry due messages (oldest first). Safe to run from several processes at once. */
-export async function flushOutbox(opts: { transport?: MailTransport; limit?: number } = {}): Promise<{ sent: number; failed: number }> {
+export async function flushOutbox(
+  opts: { transport?: MailTransport; limit?: number } = {},
+): Promise<{ sent: number; failed: number }> {
   const transport = opts.transport ?? mailTransport();
   const rows = await claimDueMail(opts.limit ?? 50, LEASE_S, MAX_ATTEMPTS);
   let sent = 0;

@@ -30,7 +30,10 @@ export function signInLinkMail(p: { url: string; expires: Date }): MailContent {
       { kind: "button", href: p.url, label: "Sign in to Sagline" },
       { kind: "small", text: "If the button does not work, copy this address into your browser:" },
       { kind: "link", href: p.url },
-      { kind: "small", text: `The link works once and stops working on ${when(p.expires)}. If you did not ask to sign in, ignore this e-mail.` },
+      {
+        kind: "small",
+        text: `The link works once and stops working on ${when(p.expires)}. If you did not ask to sign in, ignore this e-mail.`,
+      },
     ]),
   };
 }
@@ -49,7 +52,10 @@ export function submissionReceiptMail(p: { packTitle: string; resultUrl: string;
     ].join("\n"),
     html: htmlMail("Result received", [
       { kind: "p", text: `Thank you — we received your result for ${p.packTitle} on ${when(p.submittedAt)}.` },
-      { kind: "p", text: "A moderator will check it against its log and method card. You will get an e-mail when it is approved, or if they need something changed." },
+      {
+        kind: "p",
+        text: "A moderator will check it against its log and method card. You will get an e-mail when it is approved, or if they need something changed.",
+      },
       { kind: "button", href: p.resultUrl, label: "View your result" },
     ]),
   };
@@ -58,17 +64,35 @@ export function submissionReceiptMail(p: { packTitle: string; resultUrl: string;
 export type ReviewDecision = "approved" | "rejected" | "changes_requested";
 
 const decisionWords: Record<ReviewDecision, { subject: string; lead: string }> = {
-  approved: { subject: "Result approved", lead: "Your result has been approved and is now published with its method card." },
+  approved: {
+    subject: "Result approved",
+    lead: "Your result has been approved and is now published with its method card.",
+  },
   rejected: { subject: "Result not accepted", lead: "A moderator did not accept your result." },
-  changes_requested: { subject: "Changes requested", lead: "A moderator asks for a change before your result can be published." },
+  changes_requested: {
+    subject: "Changes requested",
+    lead: "A moderator asks for a change before your result can be published.",
+  },
 };
 
-export function reviewDecisionMail(p: { packTitle: string; decision: ReviewDecision; reason: string | null; resultUrl: string }): MailContent {
+export function reviewDecisionMail(p: {
+  packTitle: string;
+  decision: ReviewDecision;
+  reason: string | null;
+  resultUrl: string;
+}): MailContent {
   const w = decisionWords[p.decision];
   const reason = p.reason?.trim() ? `Moderator's note: ${p.reason.trim()}` : null;
   return {
     subject: `${w.subject}: ${p.packTitle}`,
-    text: [`${w.lead} (${p.packTitle})`, "", ...(reason ? [reason, ""] : []), `See it here: ${p.resultUrl}`, "", SIGN_OFF].join("\n"),
+    text: [
+      `${w.lead} (${p.packTitle})`,
+      "",
+      ...(reason ? [reason, ""] : []),
+      `See it here: ${p.resultUrl}`,
+      "",
+      SIGN_OFF,
+    ].join("\n"),
     html: htmlMail(w.subject, [
       { kind: "p", text: `${w.lead} (${p.packTitle})` },
       ...(reason ? [{ kind: "p" as const, text: reason }] : []),

@@ -16,18 +16,35 @@ async function rowsOf(dataset: Dataset, filters: ResultFilters) {
   return { rows: await listAllResults(filters), kind: dataset } as const;
 }
 
-export async function buildDownload(dataset: Dataset, format: "csv" | "json", filters: ResultFilters, now = new Date()): Promise<DownloadFile> {
+export async function buildDownload(
+  dataset: Dataset,
+  format: "csv" | "json",
+  filters: ResultFilters,
+  now = new Date(),
+): Promise<DownloadFile> {
   const date = now.toISOString().slice(0, 10);
   const note = headerNote(dataset, date);
   const filtered = Object.keys(filters).length > 0;
   const data = await rowsOf(dataset, filters);
   if (format === "json") {
-    const body = JSON.stringify({ note, licence: licenceInfo, filters: filtered ? filters : null, exportedAt: now.toISOString(), data: data.rows }, null, 1);
+    const body = JSON.stringify(
+      {
+        note,
+        licence: licenceInfo,
+        filters: filtered ? filters : null,
+        exportedAt: now.toISOString(),
+        data: data.rows,
+      },
+      null,
+      1,
+    );
     return { body, contentType: "application/json; charset=utf-8", fileName: fileName(dataset, "json", date) };
   }
   const body =
-    data.kind === "makers" ? toCsv(makerFields, data.rows, note)
-    : data.kind === "packs" ? toCsv(packFields, data.rows, note)
-    : toCsv(resultFields, data.rows, note);
+    data.kind === "makers"
+      ? toCsv(makerFields, data.rows, note)
+      : data.kind === "packs"
+        ? toCsv(packFields, data.rows, note)
+        : toCsv(resultFields, data.rows, note);
   return { body, contentType: "text/csv; charset=utf-8; header=present", fileName: fileName(dataset, "csv", date) };
 }

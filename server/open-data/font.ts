@@ -17,11 +17,18 @@ export function woffToSfnt(woff: Buffer): Buffer {
     const compLength = woff.readUInt32BE(at + 8);
     const origLength = woff.readUInt32BE(at + 12);
     const raw = woff.subarray(offset, offset + compLength);
-    tables.push({ tag: woff.readUInt32BE(at), checksum: woff.readUInt32BE(at + 16), data: compLength === origLength ? raw : inflateSync(raw) });
+    tables.push({
+      tag: woff.readUInt32BE(at),
+      checksum: woff.readUInt32BE(at + 16),
+      data: compLength === origLength ? raw : inflateSync(raw),
+    });
   }
   let pow = 1;
   let log = 0;
-  while (pow * 2 <= numTables) { pow *= 2; log++; }
+  while (pow * 2 <= numTables) {
+    pow *= 2;
+    log++;
+  }
   const headerLength = 12 + numTables * 16;
   const total = tables.reduce((n, t) => n + Math.ceil(t.data.length / 4) * 4, headerLength);
   const out = Buffer.alloc(total);
@@ -53,7 +60,14 @@ export function chartFontFiles(): string[] {
     mkdirSync(dir, { recursive: true });
     cached = ["400", "700"].map((w) => {
       const file = path.join(dir, `inter-latin-${w}.ttf`);
-      writeFileSync(file, woffToSfnt(readFileSync(path.join(process.cwd(), "node_modules/@fontsource/inter/files", `inter-latin-${w}-normal.woff`))));
+      writeFileSync(
+        file,
+        woffToSfnt(
+          readFileSync(
+            path.join(process.cwd(), "node_modules/@fontsource/inter/files", `inter-latin-${w}-normal.woff`),
+          ),
+        ),
+      );
       return file;
     });
   }

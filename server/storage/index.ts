@@ -1,7 +1,13 @@
 // Upload storage through the S3 API only (locally the s3rver stand-in; hosted, any S3-compatible bucket).
 import type { Readable } from "node:stream";
 import {
-  CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client,
+  CopyObjectCommand,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  ListObjectsV2Command,
+  PutObjectCommand,
+  S3Client,
 } from "@aws-sdk/client-s3";
 import { Upload } from "@aws-sdk/lib-storage";
 import { env } from "@/server/env";
@@ -25,12 +31,17 @@ export function storageClient(): S3Client {
 
 function unavailable(err: unknown): AppError {
   console.error("[storage]", err instanceof Error ? err.message : err);
-  return new AppError("unavailable", "File storage is not reachable right now. Nothing was saved; please try again shortly.");
+  return new AppError(
+    "unavailable",
+    "File storage is not reachable right now. Nothing was saved; please try again shortly.",
+  );
 }
 
 export async function putObject(key: string, body: string | Uint8Array, contentType: string): Promise<void> {
   try {
-    await storageClient().send(new PutObjectCommand({ Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType }));
+    await storageClient().send(
+      new PutObjectCommand({ Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType }),
+    );
   } catch (err) {
     throw unavailable(err);
   }
@@ -56,7 +67,11 @@ function notFound(err: unknown): boolean {
  * Streams a body of unknown length to storage in parts (multipart upload), never holding more than
  * a couple of parts in memory. `abort()` stops it and removes what was sent.
  */
-export function startStreamUpload(key: string, body: Readable, contentType: string): { done: Promise<void>; abort: () => Promise<void> } {
+export function startStreamUpload(
+  key: string,
+  body: Readable,
+  contentType: string,
+): { done: Promise<void>; abort: () => Promise<void> } {
   const upload = new Upload({
     client: storageClient(),
     params: { Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType },
@@ -111,7 +126,9 @@ export async function getObjectChunks(key: string): Promise<AsyncIterable<Uint8A
 
 export async function copyObject(fromKey: string, toKey: string): Promise<void> {
   try {
-    await storageClient().send(new CopyObjectCommand({ Bucket: env().S3_BUCKET, CopySource: `${env().S3_BUCKET}/${fromKey}`, Key: toKey }));
+    await storageClient().send(
+      new CopyObjectCommand({ Bucket: env().S3_BUCKET, CopySource: `${env().S3_BUCKET}/${fromKey}`, Key: toKey }),
+    );
   } catch (err) {
     throw unavailable(err);
   }
@@ -133,11 +150,14 @@ export async function* listObjects(prefix: string): AsyncGenerator<StoredObject>
   do {
     let page;
     try {
-      page = await storageClient().send(new ListObjectsV2Command({ Bucket: env().S3_BUCKET, Prefix: prefix, ContinuationToken: token }));
+      page = await storageClient().send(
+        new ListObjectsV2Command({ Bucket: env().S3_BUCKET, Prefix: prefix, ContinuationToken: token }),
+      );
     } catch (err) {
       throw unavailable(err);
     }
-    for (const o of page.Contents ?? []) if (o.Key) yield { key: o.Key, bytes: o.Size ?? 0, lastModified: o.LastModified ?? new Date(0) };
+    for (const o of page.Contents ?? [])
+      if (o.Key) yield { key: o.Key, bytes: o.Size ?? 0, lastModified: o.LastModified ?? new Date(0) };
     token = page.IsTruncated ? page.NextContinuationToken : undefined;
   } while (token);
 }
@@ -147,7 +167,13 @@ export async function* listObjects(prefix: string): AsyncGenerator<StoredObject>
 // time is also written into the object's metadata.
 const USED_AT = "draft-used-at";
 
-export type ObjectInfo = { bytes: number; contentType: string | undefined; lastUsedAt: Date; touchedAt: Date | null; metadata: Record<string, string> };
+export type ObjectInfo = {
+  bytes: number;
+  contentType: string | undefined;
+  lastUsedAt: Date;
+  touchedAt: Date | null;
+  metadata: Record<string, string>;
+};
 
 /** The object's size, content type and last use (the later of LastModified and its draft-used-at), or null. */
 export async function objectInfo(key: string): Promise<ObjectInfo | null> {
@@ -157,7 +183,13 @@ export async function objectInfo(key: string): Promise<ObjectInfo | null> {
     const usedAt = Date.parse(metadata[USED_AT] ?? "");
     const modified = out.LastModified?.getTime() ?? 0;
     const touchedAt = Number.isFinite(usedAt) ? new Date(usedAt) : null;
-    return { bytes: out.ContentLength ?? 0, contentType: out.ContentType, lastUsedAt: new Date(Math.max(modified, touchedAt?.getTime() ?? 0)), touchedAt, metadata };
+    return {
+      bytes: out.ContentLength ?? 0,
+      contentType: out.ContentType,
+      lastUsedAt: new Date(Math.max(modified, touchedAt?.getTime() ?? 0)),
+      touchedAt,
+      metadata,
+    };
   } catch (err) {
     if (notFound(err)) return null;
     throw unavailable(err);
@@ -173,10 +205,16 @@ export async function touchObject(key: string, now = new Date(), minIntervalMs =
   if (!info) return false;
   if (info.touchedAt && now.getTime() - info.touchedAt.getTime() < minIntervalMs) return true;
   try {
-    await storageClient().send(new CopyObjectCommand({
-      Bucket: env().S3_BUCKET, Key: key, CopySource: `${env().S3_BUCKET}/${key}`, MetadataDirective: "REPLACE",
-      ContentType: info.contentType, Metadata: { ...info.metadata, [USED_AT]: now.toISOString() },
-    }));
+    await storageClient().send(
+      new CopyObjectCommand({
+        Bucket: env().S3_BUCKET,
+        Key: key,
+        CopySource: `${env().S3_BUCKET}/${key}`,
+        MetadataDirective: "REPLACE",
+        ContentType: info.contentType,
+        Metadata: { ...info.metadata, [USED_AT]: now.toISOString() },
+      }),
+    );
     return true;
   } catch (err) {
     if (notFound(err)) return false;

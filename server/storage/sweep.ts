@@ -26,8 +26,14 @@ export type SweepOptions = { maxAgeDays: number; now?: Date; dryRun?: boolean; p
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
-export async function sweepIncomingUploads({ maxAgeDays, now = new Date(), dryRun = false, prefix = INCOMING_PREFIX }: SweepOptions): Promise<SweepReport> {
-  if (!prefix.startsWith(INCOMING_PREFIX)) throw new Error(`The sweep only looks under ${INCOMING_PREFIX}, not ${prefix}.`);
+export async function sweepIncomingUploads({
+  maxAgeDays,
+  now = new Date(),
+  dryRun = false,
+  prefix = INCOMING_PREFIX,
+}: SweepOptions): Promise<SweepReport> {
+  if (!prefix.startsWith(INCOMING_PREFIX))
+    throw new Error(`The sweep only looks under ${INCOMING_PREFIX}, not ${prefix}.`);
   if (!Number.isFinite(maxAgeDays) || maxAgeDays <= 0) throw new Error("maxAgeDays must be a positive number of days.");
   const cutoff = new Date(now.getTime() - maxAgeDays * DAY_MS);
   const report: SweepReport = { cutoff, dryRun, examined: 0, removed: [], keptRecent: 0, keptReferenced: [] };

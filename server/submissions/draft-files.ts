@@ -12,8 +12,10 @@ export type KeptDraftFiles = { logMissing: boolean; missingPhotoKeys: string[] }
 export async function keepDraftFilesFor(userId: string, input: KeepDraftFilesInput): Promise<KeptDraftFiles> {
   await enforceRateLimit(`keep-draft:${userId}`, limits.keepDraftPerUser);
   // Someone else's key is treated as missing: never touched, and nothing said about it.
-  const logMissing = input.logKey !== null && !(isOwnIncomingLogKey(input.logKey, userId) && (await touchObject(input.logKey)));
+  const logMissing =
+    input.logKey !== null && !(isOwnIncomingLogKey(input.logKey, userId) && (await touchObject(input.logKey)));
   const missingPhotoKeys: string[] = [];
-  for (const key of input.photoKeys) if (!(isOwnIncomingPhotoKey(key, userId) && (await touchObject(key)))) missingPhotoKeys.push(key);
+  for (const key of input.photoKeys)
+    if (!(isOwnIncomingPhotoKey(key, userId) && (await touchObject(key)))) missingPhotoKeys.push(key);
   return { logMissing, missingPhotoKeys };
 }

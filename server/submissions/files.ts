@@ -14,7 +14,11 @@ export type MovedFiles = {
   discardDrafts: () => Promise<void>;
 };
 
-export async function moveFiles(incomingLog: string | null, sha256: string | null, incomingPhotos: string[]): Promise<MovedFiles> {
+export async function moveFiles(
+  incomingLog: string | null,
+  sha256: string | null,
+  incomingPhotos: string[],
+): Promise<MovedFiles> {
   const made: string[] = [];
   const undo = async () => {
     await Promise.all(made.map((k) => deleteObject(k).catch(() => undefined)));
@@ -34,7 +38,12 @@ export async function moveFiles(incomingLog: string | null, sha256: string | nul
       photoKeys.push(to);
     }
     const drafts = [...(incomingLog ? [incomingLog] : []), ...incomingPhotos];
-    return { logKey: finalLog, photoKeys, undo, discardDrafts: async () => void (await Promise.all(drafts.map((k) => deleteObject(k)))) };
+    return {
+      logKey: finalLog,
+      photoKeys,
+      undo,
+      discardDrafts: async () => void (await Promise.all(drafts.map((k) => deleteObject(k)))),
+    };
   } catch (err) {
     await undo();
     throw err;

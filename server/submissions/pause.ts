@@ -7,6 +7,9 @@ import { AppError } from "@/lib/errors";
 export async function assertSubmissionsOpen(): Promise<void> {
   const s = await getSiteSettings();
   if (s.submissionsPaused) {
-    throw new AppError("conflict", `Submissions are paused: ${s.pauseReason ?? "please try again later"}. Your draft is kept in this browser; submit it once they reopen.`);
+    throw new AppError(
+      "conflict",
+      `Submissions are paused: ${s.pauseReason ?? "please try again later"}. Your draft is kept in this browser; submit it once they reopen.`,
+    );
   }
 }

@@ -37,11 +37,30 @@ async function submitNew(input: SubmitResultInput, user: SessionUser): Promise<S
   await checkFiles(input.log.key, input.photoKeys, user.id);
   const figured = await analyseForCard(input.log.key, facts, input.method);
   const files = await moveFiles(input.log.key, figured.sha256, input.photoKeys);
-  const receipt = user.email ? { to: user.email, ...submissionReceiptMail({ packTitle: facts.title, resultUrl: `${env().APP_URL}/account`, submittedAt: new Date() }) } : null;
+  const receipt = user.email
+    ? {
+        to: user.email,
+        ...submissionReceiptMail({
+          packTitle: facts.title,
+          resultUrl: `${env().APP_URL}/account`,
+          submittedAt: new Date(),
+        }),
+      }
+    : null;
   let out: Submitted;
   try {
-    const fields = await resultFields(input.method, facts, figured, { logKey: files.logKey, logFilename: input.log.filename, photoKeys: files.photoKeys });
-    out = await createSubmission({ contributorId: user.id, idempotencyKey: input.idempotencyKey, pack: target, fields, receipt });
+    const fields = await resultFields(input.method, facts, figured, {
+      logKey: files.logKey,
+      logFilename: input.log.filename,
+      photoKeys: files.photoKeys,
+    });
+    out = await createSubmission({
+      contributorId: user.id,
+      idempotencyKey: input.idempotencyKey,
+      pack: target,
+      fields,
+      receipt,
+    });
   } catch (err) {
     await files.undo();
     throw err;

@@ -14,7 +14,12 @@ function logErrorToAppError(err: unknown, maxBytes: number, field = "file"): unk
   return new AppError("validation", `The log could not be read: ${message}`, { [field]: [message] });
 }
 
-export async function analyseChunks(chunks: AsyncIterable<Uint8Array>, options: AnalyseOptions, maxBytes: number, field = "file"): Promise<Analysis> {
+export async function analyseChunks(
+  chunks: AsyncIterable<Uint8Array>,
+  options: AnalyseOptions,
+  maxBytes: number,
+  field = "file",
+): Promise<Analysis> {
   // The core reports anything but its own LogError as an internal fault, so an error from the source
   // (too large, not text, storage gone) is kept here and thrown as it was.
   let sourceError: unknown = null;
@@ -36,5 +41,9 @@ export async function analyseChunks(chunks: AsyncIterable<Uint8Array>, options: 
 export function previewOf(analysis: Analysis, card?: StatedCard): LogPreview {
   const figures = toPublicFigures(analysis);
   const checks = card ? checkAgainstCard(analysis.figures, card) : [];
-  return { figures: { ...figures, warnings: warningsBesideChecks(figures.warnings, checks) }, curve: analysis.curve, checks };
+  return {
+    figures: { ...figures, warnings: warningsBesideChecks(figures.warnings, checks) },
+    curve: analysis.curve,
+    checks,
+  };
 }

@@ -8,7 +8,12 @@ import { AppError } from "@/lib/errors";
 
 /** Content types a raw log may come with (browsers send application/vnd.ms-excel for .csv on Windows). */
 const RAW_LOG_TYPES = new Set([
-  "text/csv", "text/plain", "text/tab-separated-values", "application/csv", "application/vnd.ms-excel", "application/octet-stream",
+  "text/csv",
+  "text/plain",
+  "text/tab-separated-values",
+  "application/csv",
+  "application/vnd.ms-excel",
+  "application/octet-stream",
 ]);
 
 export type LogBodyKind = "raw" | "multipart";
@@ -29,7 +34,9 @@ export function logBodyKind(req: Request, maxBytes: number, allowMultipart = tru
   if (Number.isFinite(length) && length > maxBytes + (allowMultipart ? 64 * 1024 : 0)) throw tooLarge(maxBytes, field);
   if (RAW_LOG_TYPES.has(type)) return "raw";
   if (allowMultipart && type === "multipart/form-data") return "multipart";
-  const accepted = allowMultipart ? "text/csv as the raw body, or multipart/form-data with a field named file" : "text/csv";
+  const accepted = allowMultipart
+    ? "text/csv as the raw body, or multipart/form-data with a field named file"
+    : "text/csv";
   throw new AppError("unsupported_media_type", `Send the log as ${accepted} (got ${type || "no content type"}).`, {
     [field]: ["This is not a CSV log. Export the log from your logger as CSV (comma, semicolon or tab separated)."],
   });
@@ -56,7 +63,8 @@ export async function* requestChunks(req: Request, maxBytes: number, field = "fi
 /** A small body (a photo) read whole, refused with 413 as soon as it passes maxBytes. */
 export async function readLimited(req: Request, maxBytes: number, field: string, message: string): Promise<Uint8Array> {
   const length = Number(req.headers.get("content-length") ?? "");
-  if (Number.isFinite(length) && length > maxBytes) throw new AppError("payload_too_large", message, { [field]: [message] });
+  if (Number.isFinite(length) && length > maxBytes)
+    throw new AppError("payload_too_large", message, { [field]: [message] });
   const parts: Uint8Array[] = [];
   let total = 0;
   try {
@@ -65,7 +73,8 @@ export async function readLimited(req: Request, maxBytes: number, field: string,
       total += chunk.byteLength;
     }
   } catch (err) {
-    if (err instanceof AppError && err.code === "payload_too_large") throw new AppError("payload_too_large", message, { [field]: [message] });
+    if (err instanceof AppError && err.code === "payload_too_large")
+      throw new AppError("payload_too_large", message, { [field]: [message] });
     throw err;
   }
   const out = new Uint8Array(total);
@@ -78,8 +87,15 @@ export async function readLimited(req: Request, maxBytes: number, field: string,
 }
 
 /** The multipart field `file` as chunks (other fields are ignored); 422 when there is none, 413 past maxBytes. */
-function multipartFile(req: Request, maxBytes: number, field = "file"): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
-  if (!req.body) return Promise.reject(new AppError("validation", `No log: send a multipart field named ${field}.`, { [field]: ["Choose a log file."] }));
+function multipartFile(
+  req: Request,
+  maxBytes: number,
+  field = "file",
+): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
+  if (!req.body)
+    return Promise.reject(
+      new AppError("validation", `No log: send a multipart field named ${field}.`, { [field]: ["Choose a log file."] }),
+    );
   const parser = busboy({
     headers: { "content-type": req.headers.get("content-type") ?? "" },
     limits: { files: 1, fileSize: maxBytes + 1, fields: 20, fieldSize: 4096, parts: 24 },
@@ -101,17 +117,34 @@ function multipartFile(req: Request, maxBytes: number, field = "file"): Promise<
       });
     });
     parser.on("error", (err: unknown) => {
-      if (!found) reject(new AppError("bad_request", `The multipart body could not be read: ${err instanceof Error ? err.message : "malformed"}.`));
+      if (!found)
+        reject(
+          new AppError(
+            "bad_request",
+            `The multipart body could not be read: ${err instanceof Error ? err.message : "malformed"}.`,
+          ),
+        );
     });
     parser.on("close", () => {
-      if (!found) reject(new AppError("validation", `No log: send a multipart field named ${field}.`, { [field]: ["Choose a log file."] }));
+      if (!found)
+        reject(
+          new AppError("validation", `No log: send a multipart field named ${field}.`, {
+            [field]: ["Choose a log file."],
+          }),
+        );
     });
-    Readable.fromWeb(req.body as unknown as NodeReadableStream<Uint8Array>).on("error", (err) => parser.destroy(err)).pipe(parser);
+    Readable.fromWeb(req.body as unknown as NodeReadableStream<Uint8Array>)
+      .on("error", (err) => parser.destroy(err))
+      .pipe(parser);
   });
 }
 
 /** The request's log as chunks and its file name, whichever way it was sent. */
-export async function logFromRequest(req: Request, maxBytes: number, fallbackName = "log.csv"): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
+export async function logFromRequest(
+  req: Request,
+  maxBytes: number,
+  fallbackName = "log.csv",
+): Promise<{ chunks: AsyncIterable<Uint8Array>; filename: string }> {
   const kind = logBodyKind(req, maxBytes);
   if (kind === "multipart") return multipartFile(req, maxBytes);
   return { chunks: requestChunks(req, maxBytes), filename: fallbackName };

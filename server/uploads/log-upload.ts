@@ -29,7 +29,11 @@ function hashing(chunks: AsyncIterable<Uint8Array>) {
 }
 
 export async function storeAndAnalyse(
-  chunks: AsyncIterable<Uint8Array>, key: string, options: AnalyseOptions, maxBytes: number, field = "file",
+  chunks: AsyncIterable<Uint8Array>,
+  key: string,
+  options: AnalyseOptions,
+  maxBytes: number,
+  field = "file",
 ): Promise<{ stored: StoredLog; analysis: Analysis }> {
   const body = new PassThrough({ highWaterMark: 1024 * 1024 });
   const upload = startStreamUpload(key, body, "text/csv; charset=utf-8");
@@ -56,9 +60,17 @@ export async function storeAndAnalyse(
 }
 
 /** The stored log read back and analysed again (at submit time: figures from the client are never trusted). */
-export async function analyseStored(key: string, options: AnalyseOptions, maxBytes: number, field = "log"): Promise<{ sha256: string; bytes: number; analysis: Analysis }> {
+export async function analyseStored(
+  key: string,
+  options: AnalyseOptions,
+  maxBytes: number,
+  field = "log",
+): Promise<{ sha256: string; bytes: number; analysis: Analysis }> {
   const chunks = await getObjectChunks(key);
-  if (!chunks) throw new AppError("validation", "The uploaded log is no longer stored.", { [field]: ["The uploaded log is no longer stored: please upload it again."] });
+  if (!chunks)
+    throw new AppError("validation", "The uploaded log is no longer stored.", {
+      [field]: ["The uploaded log is no longer stored: please upload it again."],
+    });
   const hashed = hashing(chunks);
   const analysis = await analyseChunks(hashed.iterable, options, maxBytes, field);
   return { sha256: hashed.state.sha256, bytes: hashed.state.bytes, analysis };

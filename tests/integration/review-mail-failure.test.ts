@@ -24,7 +24,10 @@ describe("decisions survive mail failures", () => {
     const { pack } = await makePack();
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     const quiet = vi.spyOn(console, "error").mockImplementation(() => undefined);
-    await expect(decideResult(mod.id, r.id, { kind: "approve", note: null })).resolves.toEqual({ resultId: r.id, status: "approved" });
+    await expect(decideResult(mod.id, r.id, { kind: "approve", note: null })).resolves.toEqual({
+      resultId: r.id,
+      status: "approved",
+    });
     expect(quiet).toHaveBeenCalledWith(expect.stringContaining("decision mail failed"), "outbox unavailable");
     quiet.mockRestore();
     const [row] = await db.select({ status: results.status }).from(results).where(eq(results.id, r.id));

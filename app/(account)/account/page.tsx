@@ -79,7 +79,9 @@ export default async function AccountPage() {
 
       <section aria-labelledby="watches-heading" className="space-y-3">
         <h2 id="watches-heading">Packs you watch</h2>
-        <WatchList watches={watched.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))} />
+        <WatchList
+          watches={watched.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))}
+        />
       </section>
     </div>
   );

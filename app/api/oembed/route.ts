@@ -7,11 +7,20 @@ import { oembedQuery, oembedResponse } from "@/lib/open-data/oembed";
 export const GET = apiGet(async (req) => {
   const q = parseQuery(req, oembedQuery);
   if (q.format !== undefined && q.format !== "json") {
-    return new Response("Only the json format is available.", { status: 501, headers: { ...corsHeaders, "Content-Type": "text/plain; charset=utf-8" } });
+    return new Response("Only the json format is available.", {
+      status: 501,
+      headers: { ...corsHeaders, "Content-Type": "text/plain; charset=utf-8" },
+    });
   }
   const body = oembedResponse(q.url, env().APP_URL, q.maxwidth, q.maxheight);
   if (!body) throw new AppError("not_found", "That URL is not a Sagline chart.");
   const text = JSON.stringify(body);
-  return new Response(text, { headers: { ...corsHeaders, "Content-Type": "application/json; charset=utf-8", "Cache-Control": "public, max-age=3600" } });
+  return new Response(text, {
+    headers: {
+      ...corsHeaders,
+      "Content-Type": "application/json; charset=utf-8",
+      "Cache-Control": "public, max-age=3600",
+    },
+  });
 });
 export const OPTIONS = apiOptions;

@@ -31,7 +31,9 @@ describe("environment validation (server/env.ts)", () => {
     expect(parseEnv({}).INCOMING_MAX_AGE_DAYS).toBe(7);
     expect(parseEnv({ INCOMING_MAX_AGE_DAYS: "30" }).INCOMING_MAX_AGE_DAYS).toBe(30);
     for (const bad of ["0", "1.5", "week", "366", "-3"]) {
-      expect(() => parseEnv({ INCOMING_MAX_AGE_DAYS: bad }), bad).toThrow(/INCOMING_MAX_AGE_DAYS: INCOMING_MAX_AGE_DAYS must/);
+      expect(() => parseEnv({ INCOMING_MAX_AGE_DAYS: bad }), bad).toThrow(
+        /INCOMING_MAX_AGE_DAYS: INCOMING_MAX_AGE_DAYS must/,
+      );
     }
   });
 

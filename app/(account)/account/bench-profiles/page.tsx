@@ -39,7 +39,9 @@ export default async function BenchProfilesPage() {
         </Link>
       </div>
       {profiles.length === 0 ? (
-        <div className="card muted">No bench profiles yet. Add one to describe your load, logger and resistance meter.</div>
+        <div className="card muted">
+          No bench profiles yet. Add one to describe your load, logger and resistance meter.
+        </div>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" data-testid="bench-profile-list">
           {profiles.map((p) => (

@@ -12,7 +12,10 @@ import { signInSchema } from "@/lib/validations/sign-in";
 export async function requestSignInLink(_prev: ActionResult | null, form: FormData): Promise<ActionResult> {
   let next: string;
   try {
-    const input = signInSchema.parse({ email: form.get("email") ?? "", callbackUrl: form.get("callbackUrl") ?? undefined });
+    const input = signInSchema.parse({
+      email: form.get("email") ?? "",
+      callbackUrl: form.get("callbackUrl") ?? undefined,
+    });
     await enforceSignInLimits(input.email, clientIp(await headers()));
     next = await signIn("nodemailer", { email: input.email, redirectTo: input.callbackUrl, redirect: false });
     if (new URL(next, "http://x").searchParams.has("error")) {

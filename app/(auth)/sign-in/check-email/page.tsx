@@ -21,7 +21,8 @@ export default function CheckEmailPage() {
       </div>
       {env().SAGLINE_DEV_TOOLS ? (
         <p className="muted text-sm">
-          Local development: mail is caught, not sent. Open <Link href="/dev/mail">the caught mail</Link> to click the link.
+          Local development: mail is caught, not sent. Open <Link href="/dev/mail">the caught mail</Link> to click the
+          link.
         </p>
       ) : null}
     </div>

@@ -7,7 +7,11 @@ import { keepDraftFiles } from "../actions/keep-draft-files";
 
 const EVERY_MS = 60 * 60 * 1000;
 
-export function useKeepDraftFiles(active: boolean, files: () => { logKey: string | null; photoKeys: string[] }, onResult: (kept: KeptDraftFiles) => void) {
+export function useKeepDraftFiles(
+  active: boolean,
+  files: () => { logKey: string | null; photoKeys: string[] },
+  onResult: (kept: KeptDraftFiles) => void,
+) {
   const last = useRef(0);
   // An effect event reads the latest files and callback without restarting the effect on every render.
   const keep = useEffectEvent(async () => {

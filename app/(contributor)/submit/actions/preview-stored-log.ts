@@ -10,5 +10,11 @@ export const previewStoredLog = authedAction("upload.create", previewStoredLogSc
   await checkFiles(input.log.key, [], user.id);
   const { analysis } = await analyseForCard(input.log.key, facts, input.method);
   const m = input.method;
-  return previewOf(analysis, { packCells: facts.cells, cutoffVPerCell: m.cutoffVPerCell, loadCurrentA: m.loadCurrentA, loadMode: m.loadMode, stopTemperatureC: m.stopTemperatureC });
+  return previewOf(analysis, {
+    packCells: facts.cells,
+    cutoffVPerCell: m.cutoffVPerCell,
+    loadCurrentA: m.loadCurrentA,
+    loadMode: m.loadMode,
+    stopTemperatureC: m.stopTemperatureC,
+  });
 });

@@ -4,5 +4,7 @@ import { apiGet, corsHeaders } from "@/server/api";
 import { dataPackageDescriptor } from "@/lib/open-data/datapackage";
 
 export const GET = apiGet(async () =>
-  Response.json(dataPackageDescriptor(env().APP_URL, new Date()), { headers: { ...corsHeaders, "Cache-Control": "public, max-age=300" } }),
+  Response.json(dataPackageDescriptor(env().APP_URL, new Date()), {
+    headers: { ...corsHeaders, "Cache-Control": "public, max-age=300" },
+  }),
 );

@@ -8,15 +8,36 @@ import { PackFilters } from "./pack-filters";
 import { PackTable } from "./pack-table";
 import type { ApiPackPage, FilterOptions } from "./types";
 
-export function PacksView({ params, page, options, loading = false, error = null, onChange }: {
-  params: PackParams; page: ApiPackPage; options: FilterOptions; loading?: boolean; error?: string | null;
+export function PacksView({
+  params,
+  page,
+  options,
+  loading = false,
+  error = null,
+  onChange,
+}: {
+  params: PackParams;
+  page: ApiPackPage;
+  options: FilterOptions;
+  loading?: boolean;
+  error?: string | null;
   onChange?: (patch: Partial<PackParams>, mode?: "push" | "replace") => void;
 }) {
   return (
     <div className="space-y-4">
       <PackFilters params={params} options={options} onChange={onChange} />
-      {error ? <p role="alert" className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn">{error}</p> : null}
-      <PackTable page={page} params={params} loading={loading} onChange={onChange} suggestedGroup={options.groups[0] ?? null} />
+      {error ? (
+        <p role="alert" className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn">
+          {error}
+        </p>
+      ) : null}
+      <PackTable
+        page={page}
+        params={params}
+        loading={loading}
+        onChange={onChange}
+        suggestedGroup={options.groups[0] ?? null}
+      />
     </div>
   );
 }
@@ -30,7 +51,11 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
   const canonical = writePackParams(params).toString();
   const isDefault = isDefaultPackParams(params);
   // The default view is the server-rendered first page; any other comes from the API.
-  const [fetched, setFetched] = useState<{ key: string; page: ApiPackPage; error: string | null }>({ key: "", page: initial, error: null });
+  const [fetched, setFetched] = useState<{ key: string; page: ApiPackPage; error: string | null }>({
+    key: "",
+    page: initial,
+    error: null,
+  });
   const shown = isDefault ? { page: initial, error: null } : fetched;
   const loading = !isDefault && fetched.key !== canonical;
 
@@ -39,12 +64,21 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
     const ctrl = new AbortController();
     fetch(`/api/v1/packs?${canonical}`, { signal: ctrl.signal, headers: { Accept: "application/json" } })
       .then(async (res) => {
-        if (!res.ok) throw new Error(res.status === 429 ? "Too many requests — wait a moment and try again." : "The packs could not be loaded. Try again, or clear the filters.");
+        if (!res.ok)
+          throw new Error(
+            res.status === 429
+              ? "Too many requests — wait a moment and try again."
+              : "The packs could not be loaded. Try again, or clear the filters.",
+          );
         setFetched({ key: canonical, page: (await res.json()) as ApiPackPage, error: null });
       })
       .catch((err: unknown) => {
         if (ctrl.signal.aborted) return;
-        setFetched((s) => ({ key: canonical, page: { ...s.page, data: [], total: 0 }, error: err instanceof Error ? err.message : String(err) }));
+        setFetched((s) => ({
+          key: canonical,
+          page: { ...s.page, data: [], total: 0 },
+          error: err instanceof Error ? err.message : String(err),
+        }));
       });
     return () => ctrl.abort();
   }, [canonical, isDefault]);
@@ -55,7 +89,8 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
   const heading = useRef<{ params: PackParams; sent: Set<string> }>({ params, sent: new Set() });
   useEffect(() => {
     const h = heading.current;
-    if (!h.sent.has(canonical) || writePackParams(h.params).toString() === canonical) heading.current = { params, sent: new Set() };
+    if (!h.sent.has(canonical) || writePackParams(h.params).toString() === canonical)
+      heading.current = { params, sent: new Set() };
   }, [canonical, params]);
 
   const onChange = (patch: Partial<PackParams>, mode: "push" | "replace" = "push") => {
@@ -68,5 +103,14 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
     router[how](qs ? `${pathname}?${qs}` : pathname, { scroll: false });
   };
 
-  return <PacksView params={params} page={shown.page} options={options} loading={loading} error={shown.error} onChange={onChange} />;
+  return (
+    <PacksView
+      params={params}
+      page={shown.page}
+      options={options}
+      loading={loading}
+      error={shown.error}
+      onChange={onChange}
+    />
+  );
 }

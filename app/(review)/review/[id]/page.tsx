@@ -16,7 +16,8 @@ export const metadata: Metadata = { title: "Review a result" };
 export const dynamic = "force-dynamic";
 
 const params = z.object({ id: z.coerce.number().int().positive() });
-const when = (d: Date) => d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
+const when = (d: Date) =>
+  d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
 
 export default async function ReviewResultPage(props: { params: Promise<{ id: string }> }) {
   const p = params.safeParse(await props.params);
@@ -30,25 +31,42 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
   return (
     <div className="space-y-6">
       <div className="space-y-1">
-        <p className="muted text-sm"><Link href="/review">← Review queue</Link></p>
+        <p className="muted text-sm">
+          <Link href="/review">← Review queue</Link>
+        </p>
         <h1>{title}</h1>
         <p className="muted text-sm">
-          Result #{r.id} · <span data-testid="result-status">{reviewStatusLabels[r.status]}</span> · submitted {when(r.submittedAt)} by{" "}
-          {d.contributor.displayName ?? d.contributor.email} · label {labelSpec(d.pack)}
+          Result #{r.id} · <span data-testid="result-status">{reviewStatusLabels[r.status]}</span> · submitted{" "}
+          {when(r.submittedAt)} by {d.contributor.displayName ?? d.contributor.email} · label {labelSpec(d.pack)}
           {d.pack.status === "proposed" || d.makerStatus === "proposed" ? " · proposed catalogue entry" : ""}
-          {d.pack.status === "active" ? <> · <Link href={`/packs/${d.pack.slug}`} data-testid="pack-link">public pack page</Link></> : null}
+          {d.pack.status === "active" ? (
+            <>
+              {" "}
+              ·{" "}
+              <Link href={`/packs/${d.pack.slug}`} data-testid="pack-link">
+                public pack page
+              </Link>
+            </>
+          ) : null}
         </p>
-        <p className="text-sm lg:hidden"><a href="#decide-h">Go to the decision ↓</a></p>
+        <p className="text-sm lg:hidden">
+          <a href="#decide-h">Go to the decision ↓</a>
+        </p>
       </div>
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <div className="min-w-0 space-y-6">
           <section className="card space-y-3" aria-labelledby="flags-h">
             <h2 id="flags-h">Plausibility flags</h2>
-            {r.flags.length === 0 ? <p className="muted text-sm">No automatic flag was raised.</p> : (
+            {r.flags.length === 0 ? (
+              <p className="muted text-sm">No automatic flag was raised.</p>
+            ) : (
               <ul className="space-y-2 text-sm" data-testid="flag-list">
                 {r.flags.map((fl, i) => (
-                  <li key={i} className="space-y-1"><FlagChips flags={[fl]} /><p>{fl.message}</p></li>
+                  <li key={i} className="space-y-1">
+                    <FlagChips flags={[fl]} />
+                    <p>{fl.message}</p>
+                  </li>
                 ))}
               </ul>
             )}
@@ -71,7 +89,10 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
               <p className="text-sm">You submitted this result, so another moderator has to review it.</p>
             ) : r.status !== "pending" ? (
               <div className="space-y-2 text-sm" data-testid="decision-done">
-                <p>Decided: {reviewStatusLabels[r.status].toLowerCase()}. Only pending results are decided here; the history below says who decided and why.</p>
+                <p>
+                  Decided: {reviewStatusLabels[r.status].toLowerCase()}. Only pending results are decided here; the
+                  history below says who decided and why.
+                </p>
                 <Link href="/review">Back to the queue</Link>
               </div>
             ) : (

@@ -15,7 +15,10 @@ export const GET = withPermission<Ctx>("public", async (req) => handlers.GET(toN
 
 export const POST = withPermission<Ctx>("public", async (req) => {
   if (new URL(req.url).pathname.endsWith("/signin/nodemailer")) {
-    const form = await req.clone().formData().catch(() => null);
+    const form = await req
+      .clone()
+      .formData()
+      .catch(() => null);
     const email = z.string().catch("").parse(form?.get("email"));
     await enforceSignInLimits(email, clientIp(req.headers));
   }

@@ -21,15 +21,30 @@ export const POST = withPermission("chart.save", async (req, _ctx, user) => {
   if (!user) throw new AppError("unauthenticated", "Please sign in first.");
   const body: unknown = await req.json().catch(() => null);
   const { state } = saveBody.parse(body);
-  const slug = state.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "chart";
+  const slug =
+    state.title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 40) || "chart";
   const id = `${slug}-${randomBytes(4).toString("hex")}`;
-  const row = await insertSavedChart({ id, kind: state.kind, title: state.title, note: state.note ?? null, state, createdById: user.id });
+  const row = await insertSavedChart({
+    id,
+    kind: state.kind,
+    title: state.title,
+    note: state.note ?? null,
+    state,
+    createdById: user.id,
+  });
   try {
     revalidatePath("/charts");
   } catch {
     // Outside a Next request (tests, scripts) there is no cache to revalidate.
   }
-  return Response.json({ data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) }, { status: 201 });
+  return Response.json(
+    { data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) },
+    { status: 201 },
+  );
 });
 
 export const OPTIONS = apiOptions;

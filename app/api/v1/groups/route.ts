@@ -6,7 +6,9 @@ import { groupListQuery } from "@/lib/validations/open-data";
 export const GET = apiGet(async (req) => {
   const { page, size, minResults } = parseQuery(req, groupListQuery);
   const all = await cachedApiGroups(minResults);
-  const rows = all.slice((page - 1) * size, page * size).map((g) => ({ ...g, links: { self: `/api/v1/groups/${g.key}` } }));
+  const rows = all
+    .slice((page - 1) * size, page * size)
+    .map((g) => ({ ...g, links: { self: `/api/v1/groups/${g.key}` } }));
   const env = pageEnvelope(req, page, size, all.length);
   return apiJson(req, { data: rows, meta: env.meta, links: env.links }, env.headers);
 });

@@ -11,7 +11,8 @@ import { DATA_LICENCE } from "@/components/layout/site-footer";
 const handler = withPermission("public", async (req) => {
   await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
   const parsed = parsePackQuery(new URL(req.url).searchParams);
-  if (!parsed.success) throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));
+  if (!parsed.success)
+    throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));
   const params = toPackParams(parsed.data);
   const page = queryPacks(await cachedPackRows(params.group), params);
   return cachedJson(

@@ -23,10 +23,15 @@ export default async function DevMailMessagePage(props: { params: Promise<{ id: 
         <dt className="muted">From</dt>
         <dd className="break-all">{message.from ?? "—"}</dd>
         <dt className="muted">Received</dt>
-        <dd className="num">{new Date(message.receivedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</dd>
+        <dd className="num">
+          {new Date(message.receivedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}
+        </dd>
       </dl>
       {/* The text part, with its links made clickable; the HTML part is not rendered here on purpose. */}
-      <pre className="card overflow-x-auto whitespace-pre-wrap break-words font-sans text-sm leading-relaxed" data-testid="mail-body">
+      <pre
+        className="card overflow-x-auto whitespace-pre-wrap break-words font-sans text-sm leading-relaxed"
+        data-testid="mail-body"
+      >
         {linkify(message.text).map((part, i) =>
           part.href ? (
             <a key={i} href={part.href} className="break-all">

@@ -4,4 +4,6 @@ import { updatePackLabel } from "@/server/catalogue-admin";
 import { authedAction } from "@/server/authed-action";
 import { packLabelSchema } from "@/lib/validations/catalogue-admin";
 
-export const editPackLabel = authedAction("catalogue.edit", packLabelSchema, (input, user) => updatePackLabel(user.id, input));
+export const editPackLabel = authedAction("catalogue.edit", packLabelSchema, (input, user) =>
+  updatePackLabel(user.id, input),
+);

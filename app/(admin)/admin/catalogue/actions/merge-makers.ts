@@ -4,4 +4,6 @@ import { mergeMakers as mergeMakersFor } from "@/server/catalogue-admin";
 import { authedAction } from "@/server/authed-action";
 import { mergeSchema } from "@/lib/validations/catalogue-admin";
 
-export const mergeMakers = authedAction("catalogue.merge", mergeSchema, (input, user) => mergeMakersFor(user.id, input.sourceId, input.targetId));
+export const mergeMakers = authedAction("catalogue.merge", mergeSchema, (input, user) =>
+  mergeMakersFor(user.id, input.sourceId, input.targetId),
+);

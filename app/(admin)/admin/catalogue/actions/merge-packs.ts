@@ -4,4 +4,6 @@ import { mergePacks as mergePacksFor } from "@/server/catalogue-admin";
 import { authedAction } from "@/server/authed-action";
 import { mergeSchema } from "@/lib/validations/catalogue-admin";
 
-export const mergePacks = authedAction("catalogue.merge", mergeSchema, (input, user) => mergePacksFor(user.id, input.sourceId, input.targetId));
+export const mergePacks = authedAction("catalogue.merge", mergeSchema, (input, user) =>
+  mergePacksFor(user.id, input.sourceId, input.targetId),
+);

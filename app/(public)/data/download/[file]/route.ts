@@ -6,7 +6,11 @@ import { apiGet, corsHeaders, parseQuery } from "@/server/api";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { resultFilters } from "@/lib/validations/open-data";
 
-const fileParam = z.object({ file: z.string().regex(new RegExp(`^(${DATASETS.join("|")})\\.(csv|json)$`), "Ask for makers, packs or results as .csv or .json.") });
+const fileParam = z.object({
+  file: z
+    .string()
+    .regex(new RegExp(`^(${DATASETS.join("|")})\\.(csv|json)$`), "Ask for makers, packs or results as .csv or .json."),
+});
 
 export const GET = apiGet<{ file: string }>(async (req, params) => {
   const { file } = fileParam.parse(params);

@@ -27,7 +27,13 @@ export function WatchButton({ packId, initialWatching }: { packId: number; initi
 
   return (
     <span className="inline-flex flex-col gap-1">
-      <button type="button" onClick={toggle} disabled={pending} aria-pressed={watching} className={buttonClass(watching ? "secondary" : "primary")}>
+      <button
+        type="button"
+        onClick={toggle}
+        disabled={pending}
+        aria-pressed={watching}
+        className={buttonClass(watching ? "secondary" : "primary")}
+      >
         {watching ? "Watching ✓ — stop" : "Watch this pack"}
       </button>
       {error ? (

@@ -25,9 +25,12 @@ export function WatchSlot({ packId, packSlug, packTitle }: { packId: number; pac
 
   if (me?.signedIn) return <WatchButton packId={packId} initialWatching={me.watching} />;
   return (
-    <a href={`/sign-in?${new URLSearchParams({ callbackUrl: `/packs/${packSlug}` })}`} data-slot="watch-button"
+    <a
+      href={`/sign-in?${new URLSearchParams({ callbackUrl: `/packs/${packSlug}` })}`}
+      data-slot="watch-button"
       className="inline-flex items-center gap-1 rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
-      aria-label={`Watch ${packTitle}: sign in to get an e-mail when a new result is published`}>
+      aria-label={`Watch ${packTitle}: sign in to get an e-mail when a new result is published`}
+    >
       <span aria-hidden="true">☆</span> Watch
     </a>
   );

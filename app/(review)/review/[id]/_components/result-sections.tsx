@@ -34,14 +34,20 @@ export function GroupComparison({ d }: { d: Detail }) {
   return (
     <section className="card space-y-3" aria-labelledby="compare-h">
       <h2 id="compare-h">Beside the pack’s group median</h2>
-      <p className="muted text-sm">Approved results of this pack in the same like-for-like group (<span title={r.groupKey}>{labelForGroupKey(r.groupKey) ?? r.groupKey}</span>).</p>
+      <p className="muted text-sm">
+        Approved results of this pack in the same like-for-like group (
+        <span title={r.groupKey}>{labelForGroupKey(r.groupKey) ?? r.groupKey}</span>).
+      </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
-          <thead><tr className="text-left">
-            <th className="py-1 pr-3 font-medium">Figure</th><th className="py-1 pr-3 text-right font-medium">This result</th>
-            <th className="py-1 pr-3 text-right font-medium">Median now (n={d.groupNow.n})</th>
-            <th className="py-1 text-right font-medium">If approved (n={d.groupAfterApproval.n})</th>
-          </tr></thead>
+          <thead>
+            <tr className="text-left">
+              <th className="py-1 pr-3 font-medium">Figure</th>
+              <th className="py-1 pr-3 text-right font-medium">This result</th>
+              <th className="py-1 pr-3 text-right font-medium">Median now (n={d.groupNow.n})</th>
+              <th className="py-1 text-right font-medium">If approved (n={d.groupAfterApproval.n})</th>
+            </tr>
+          </thead>
           <tbody className="num">
             {compare.map(([label, mine, key, digits, unit]) => (
               <tr key={key} className="border-t border-ink/10 dark:border-night-line">
@@ -65,36 +71,47 @@ export function MethodAndFigures({ d }: { d: Detail }) {
     <div className="grid gap-6 md:grid-cols-2">
       <section className="card space-y-3" aria-labelledby="method-h">
         <h2 id="method-h">Method card</h2>
-        <Dl rows={[
-          ["Ambient", fmt(r.ambientTemperatureC, 1, "°C")],
-          ["Pack start", fmt(r.packStartTemperatureC, 1, "°C")],
-          ["Load", `${loadModeLabels[r.loadMode]}, ${fmt(r.loadCurrentA, 1, "A")} (${fmt(r.loadRateC, 1, "C")})`, "text"],
-          ["Cut-off per cell", fmt(r.cutoffVPerCell, 2, "V")],
-          ["Stop temperature", fmt(r.stopTemperatureC, 0, "°C")],
-          ["Resistance method", resistanceMethodLabels[r.resistanceMethod], "text"],
-          ["Equipment", r.equipment, "text"],
-          ["Sample rate", fmt(r.sampleRateHz, 1, "Hz")],
-          ["Cycles before test", fmt(r.cyclesBeforeTest)],
-          ["Log", `${r.logFilename} · sha256 ${r.logSha256.slice(0, 12)}…`, "text"],
-        ]} />
+        <Dl
+          rows={[
+            ["Ambient", fmt(r.ambientTemperatureC, 1, "°C")],
+            ["Pack start", fmt(r.packStartTemperatureC, 1, "°C")],
+            [
+              "Load",
+              `${loadModeLabels[r.loadMode]}, ${fmt(r.loadCurrentA, 1, "A")} (${fmt(r.loadRateC, 1, "C")})`,
+              "text",
+            ],
+            ["Cut-off per cell", fmt(r.cutoffVPerCell, 2, "V")],
+            ["Stop temperature", fmt(r.stopTemperatureC, 0, "°C")],
+            ["Resistance method", resistanceMethodLabels[r.resistanceMethod], "text"],
+            ["Equipment", r.equipment, "text"],
+            ["Sample rate", fmt(r.sampleRateHz, 1, "Hz")],
+            ["Cycles before test", fmt(r.cyclesBeforeTest)],
+            ["Log", `${r.logFilename} · sha256 ${r.logSha256.slice(0, 12)}…`, "text"],
+          ]}
+        />
         {r.notes ? <p className="text-sm">{r.notes}</p> : null}
       </section>
       <section className="card space-y-3" aria-labelledby="figures-h">
         <h2 id="figures-h">Figures</h2>
-        <Dl rows={[
-          ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
-          ["Capacity ratio", fmt(f.capacityRatio, 2)],
-          ["Energy", fmt(f.energyWh, 2, "Wh")],
-          ["Mean voltage per cell", fmt(f.meanVoltagePerCellV, 3, "V")],
-          ["Minimum voltage per cell", fmt(f.minVoltagePerCellV, 3, "V")],
-          ["Hold voltage per cell", fmt(f.holdVoltagePerCellV, 3, "V")],
-          ["DC resistance", `${fmt(f.dcResistanceMohm, 1, "mΩ")}${f.dcResistanceMethod ? ` (${f.dcResistanceMethod})` : ""}`],
-          ["Resistance at 25 °C (estimate)", fmt(f.resistanceAt25CMohm, 1, "mΩ")],
-          ["Temperature start → peak", `${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
-          ["Sag-limited C", fmt(f.sagLimitedC, 1, "C")],
-          ["Label ratio", fmt(f.labelRatio, 2)],
-          ["Cells seen in log", fmt(f.cells)],
-        ]} />
+        <Dl
+          rows={[
+            ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
+            ["Capacity ratio", fmt(f.capacityRatio, 2)],
+            ["Energy", fmt(f.energyWh, 2, "Wh")],
+            ["Mean voltage per cell", fmt(f.meanVoltagePerCellV, 3, "V")],
+            ["Minimum voltage per cell", fmt(f.minVoltagePerCellV, 3, "V")],
+            ["Hold voltage per cell", fmt(f.holdVoltagePerCellV, 3, "V")],
+            [
+              "DC resistance",
+              `${fmt(f.dcResistanceMohm, 1, "mΩ")}${f.dcResistanceMethod ? ` (${f.dcResistanceMethod})` : ""}`,
+            ],
+            ["Resistance at 25 °C (estimate)", fmt(f.resistanceAt25CMohm, 1, "mΩ")],
+            ["Temperature start → peak", `${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
+            ["Sag-limited C", fmt(f.sagLimitedC, 1, "C")],
+            ["Label ratio", fmt(f.labelRatio, 2)],
+            ["Cells seen in log", fmt(f.cells)],
+          ]}
+        />
       </section>
     </div>
   );
@@ -125,19 +142,24 @@ export function ContributorHistory({ history }: { history: Detail["contributorHi
     <section className="card space-y-3" aria-labelledby="contributor-h">
       <h2 id="contributor-h">Contributor’s history</h2>
       <p className="text-sm">
-        {fmt(byStatus.approved ?? 0)} approved · {fmt(byStatus.rejected ?? 0)} rejected · {fmt(byStatus.changes_requested ?? 0)} sent back ·{" "}
-        {fmt(byStatus.pending ?? 0)} pending · {fmt((byStatus.disputed ?? 0) + (byStatus.withdrawn ?? 0))} disputed or withdrawn
+        {fmt(byStatus.approved ?? 0)} approved · {fmt(byStatus.rejected ?? 0)} rejected ·{" "}
+        {fmt(byStatus.changes_requested ?? 0)} sent back · {fmt(byStatus.pending ?? 0)} pending ·{" "}
+        {fmt((byStatus.disputed ?? 0) + (byStatus.withdrawn ?? 0))} disputed or withdrawn
       </p>
       {history.recent.length ? (
         <ul className="space-y-1 text-sm">
           {history.recent.map((h) => (
             <li key={h.id} className="flex justify-between gap-2">
-              <span className="truncate">#{h.id} {h.makerName} {h.packModel}</span>
+              <span className="truncate">
+                #{h.id} {h.makerName} {h.packModel}
+              </span>
               <span className="muted shrink-0">{reviewStatusLabels[h.status]}</span>
             </li>
           ))}
         </ul>
-      ) : <p className="muted text-sm">This is their first result.</p>}
+      ) : (
+        <p className="muted text-sm">This is their first result.</p>
+      )}
     </section>
   );
 }

@@ -24,8 +24,18 @@ export function ResolvedFlagNotice({ children }: { children: ReactNode }) {
   return (
     <AnnounceContext value={announce}>
       {/* Empty, it is visually hidden but stays in the accessibility tree (display:none would not be announced). */}
-      <div ref={region} tabIndex={-1} role="status" data-testid="flag-resolved" className={notice ? "scroll-mt-24 rounded-md" : "sr-only"}>
-        {notice ? <p key={notice.seq} className={alertClass("success")}>{notice.text}</p> : null}
+      <div
+        ref={region}
+        tabIndex={-1}
+        role="status"
+        data-testid="flag-resolved"
+        className={notice ? "scroll-mt-24 rounded-md" : "sr-only"}
+      >
+        {notice ? (
+          <p key={notice.seq} className={alertClass("success")}>
+            {notice.text}
+          </p>
+        ) : null}
       </div>
       {children}
     </AnnounceContext>

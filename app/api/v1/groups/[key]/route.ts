@@ -9,7 +9,8 @@ export const GET = apiGet<{ key: string }>(async (req, params) => {
   const { key } = groupKeyRouteParam.parse(params);
   const filters = parseQuery(req, packFilters);
   const samples = await cachedGroupSamples(key, filters);
-  if (samples.length === 0 && Object.keys(filters).length === 0) throw new AppError("not_found", "No approved results in this group.");
+  if (samples.length === 0 && Object.keys(filters).length === 0)
+    throw new AppError("not_found", "No approved results in this group.");
   const packs = aggregateByPack(samples);
   return apiJson(req, {
     data: { key, label: groupLabel(samples[0]), resultCount: samples.length, packCount: packs.length, packs },

@@ -8,6 +8,9 @@ export const GET = apiGet<{ id: string }>(async (req, params) => {
   const { id } = idParam.parse(params);
   const result = await getApprovedResult(id);
   if (!result) throw new AppError("not_found", "No such published result.");
-  return apiJson(req, { data: result, links: { pack: `/api/v1/packs/${result.packSlug}`, group: `/api/v1/groups/${result.groupKey}` } });
+  return apiJson(req, {
+    data: result,
+    links: { pack: `/api/v1/packs/${result.packSlug}`, group: `/api/v1/groups/${result.groupKey}` },
+  });
 });
 export const OPTIONS = apiOptions;

@@ -19,13 +19,31 @@ export const POST = withPermission("upload.create", async (req, _ctx, user) => {
   const maxBytes = env().LOG_MAX_BYTES;
   logBodyKind(req, maxBytes, false, "log");
   if (!hasLogExtension(filename)) {
-    throw new AppError("unsupported_media_type", "Only CSV logs can be uploaded.", { log: [`${filename} is not a CSV log: export the log from your logger as .csv (or .txt/.tsv).`] });
+    throw new AppError("unsupported_media_type", "Only CSV logs can be uploaded.", {
+      log: [`${filename} is not a CSV log: export the log from your logger as .csv (or .txt/.tsv).`],
+    });
   }
   await enforceRateLimit(`upload:${user.id}`, limits.uploadPerUser);
   const key = incomingLogKey(user.id);
-  const { stored, analysis } = await storeAndAnalyse(requestChunks(req, maxBytes, "log"), key, options, maxBytes, "log");
-  const card = options.cells && options.cutoffVPerCell
-    ? { packCells: options.cells, cutoffVPerCell: options.cutoffVPerCell, loadCurrentA, loadMode, stopTemperatureC: options.stopTemperatureC }
-    : undefined;
-  return Response.json({ log: { ...stored, filename }, preview: previewOf(analysis, card) }, { status: 201, headers: { "Cache-Control": "no-store" } });
+  const { stored, analysis } = await storeAndAnalyse(
+    requestChunks(req, maxBytes, "log"),
+    key,
+    options,
+    maxBytes,
+    "log",
+  );
+  const card =
+    options.cells && options.cutoffVPerCell
+      ? {
+          packCells: options.cells,
+          cutoffVPerCell: options.cutoffVPerCell,
+          loadCurrentA,
+          loadMode,
+          stopTemperatureC: options.stopTemperatureC,
+        }
+      : undefined;
+  return Response.json(
+    { log: { ...stored, filename }, preview: previewOf(analysis, card) },
+    { status: 201, headers: { "Cache-Control": "no-store" } },
+  );
 });

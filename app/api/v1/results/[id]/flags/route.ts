@@ -21,7 +21,9 @@ export const POST = withPermission<{ params: Promise<{ id: string }> }>("public"
   });
   const input = readerFlagSchema.parse(body);
   // The reporter's address is kept only as a salted hash, enough to spot one person flagging repeatedly.
-  const reporterHash = createHash("sha256").update(`${env().AUTH_SECRET ?? "sagline"}:${ip}`).digest("hex");
+  const reporterHash = createHash("sha256")
+    .update(`${env().AUTH_SECRET ?? "sagline"}:${ip}`)
+    .digest("hex");
   const { flagId } = await fileReaderFlag(p.data.id, input, { userId: user?.id ?? null, reporterHash });
   return Response.json({ flag: { id: flagId, resultId: p.data.id, status: "open" } }, { status: 201 });
 });
