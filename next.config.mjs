@@ -34,7 +34,8 @@ const embedHeaders = [...common, { key: "Content-Security-Policy", value: csp("*
 
 // npm test builds into its own folder (.next-test) so it never replaces the files a running `npm start` serves.
 const distDir = process.env.NEXT_DIST_DIR || ".next";
-if (!/^\.next[a-z0-9-]*$/.test(distDir)) throw new Error(`NEXT_DIST_DIR must look like .next or .next-test, got ${distDir}`);
+if (!/^\.next[a-z0-9-]*$/.test(distDir))
+  throw new Error(`NEXT_DIST_DIR must look like .next or .next-test, got ${distDir}`);
 
 const nextConfig = {
   distDir,

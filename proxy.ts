@@ -29,7 +29,15 @@ export function proxy(request: NextRequest) {
 
 export const config = {
   matcher: [
-    "/account", "/account/:path*", "/submit", "/submit/:path*", "/review", "/review/:path*", "/admin", "/admin/:path*",
-    "/charts/view/:path+", "/embed/chart/:path+",
+    "/account",
+    "/account/:path*",
+    "/submit",
+    "/submit/:path*",
+    "/review",
+    "/review/:path*",
+    "/admin",
+    "/admin/:path*",
+    "/charts/view/:path+",
+    "/embed/chart/:path+",
   ],
 };

@@ -1,6 +1,6 @@
 import Link from "next/link";
 
-// Rendered with status 403 (forbidden() from lib/page-auth.ts) when a signed-in person opens a page their
+// Rendered with status 403 (forbidden() from server/page-auth.ts) when a signed-in person opens a page their
 // role does not allow. It appears inside the layout of the area they tried to open, which has the header.
 export default function Forbidden() {
   return (

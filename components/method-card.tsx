@@ -4,11 +4,25 @@ import type { PublicResultRow } from "@/lib/pack-summary";
 
 export type MethodCardData = Pick<
   PublicResultRow,
-  | "ambientTemperatureC" | "packStartTemperatureC" | "loadMode" | "loadCurrentA" | "loadRateC" | "cutoffVPerCell"
-  | "stopTemperatureC" | "resistanceMethod" | "equipment" | "sampleRateHz" | "cyclesBeforeTest" | "testedOn"
+  | "ambientTemperatureC"
+  | "packStartTemperatureC"
+  | "loadMode"
+  | "loadCurrentA"
+  | "loadRateC"
+  | "cutoffVPerCell"
+  | "stopTemperatureC"
+  | "resistanceMethod"
+  | "equipment"
+  | "sampleRateHz"
+  | "cyclesBeforeTest"
+  | "testedOn"
 >;
 
-const loadModes: Record<string, string> = { "constant-current": "constant current", "constant-power": "constant power", "constant-resistance": "constant resistance" };
+const loadModes: Record<string, string> = {
+  "constant-current": "constant current",
+  "constant-power": "constant power",
+  "constant-resistance": "constant resistance",
+};
 
 /** The method attached to every number: how the result was taken. */
 export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?: boolean }) {
@@ -21,9 +35,16 @@ export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?
     ["Resistance method", RESISTANCE_METHODS[m.resistanceMethod as ResistanceMethod] ?? m.resistanceMethod],
     ["Cycles before test", String(m.cyclesBeforeTest)],
   ];
-  if (!compact) rows.push(["Sample rate", fmt(m.sampleRateHz, 1, "Hz")], ["Equipment", m.equipment], ["Tested on", m.testedOn ?? "—"]);
+  if (!compact)
+    rows.push(
+      ["Sample rate", fmt(m.sampleRateHz, 1, "Hz")],
+      ["Equipment", m.equipment],
+      ["Tested on", m.testedOn ?? "—"],
+    );
   return (
-    <dl className={`grid gap-x-4 gap-y-1 text-sm ${compact ? "grid-cols-[auto_1fr] sm:grid-cols-[auto_1fr_auto_1fr]" : "grid-cols-[auto_1fr]"}`}>
+    <dl
+      className={`grid gap-x-4 gap-y-1 text-sm ${compact ? "grid-cols-[auto_1fr] sm:grid-cols-[auto_1fr_auto_1fr]" : "grid-cols-[auto_1fr]"}`}
+    >
       {rows.map(([k, v]) => (
         <div key={k} className="contents">
           <dt className="muted">{k}</dt>

@@ -2,7 +2,7 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;
@@ -12,7 +12,11 @@ export type Executor = Database | Transaction;
 const globalForDb = globalThis as unknown as { saglinePool?: Pool; saglineDb?: Database };
 
 function createPool(): Pool {
-  const pool = new Pool({ connectionString: env().DATABASE_URL, max: env().DATABASE_POOL_MAX, connectionTimeoutMillis: 5_000 });
+  const pool = new Pool({
+    connectionString: env().DATABASE_URL,
+    max: env().DATABASE_POOL_MAX,
+    connectionTimeoutMillis: 5_000,
+  });
   // An idle client's error (the database restarting) must not crash the server; the pool reconnects.
   pool.on("error", (err) => console.error("[db] idle client error:", err.message));
   return pool;
@@ -40,4 +44,3 @@ export async function closeDb(): Promise<void> {
   globalForDb.saglinePool = undefined;
   globalForDb.saglineDb = undefined;
 }
-export { schema };

@@ -1,7 +1,16 @@
 // Pure side-by-side preparation for /compare: one like-for-like group at a time, never mixed. Picks the
 // group, summarises each pack inside it, says what was left out and why, and marks differences.
+import type { PackSummary } from "@/lib/catalogue";
+import type { ChartPoint } from "@/lib/curves";
 import { summariseExclusions, type DescribedGroup, type Exclusion } from "@/lib/like-for-like";
-import { describeResultGroup, summariseFigures, sustainedC, type PublicResultRow, type Summary, type SummaryFigure } from "@/lib/pack-summary";
+import {
+  describeResultGroup,
+  summariseFigures,
+  sustainedC,
+  type PublicResultRow,
+  type Summary,
+  type SummaryFigure,
+} from "@/lib/pack-summary";
 
 export const MIN_COMPARE = 2;
 export const MAX_COMPARE = 6;
@@ -56,14 +65,20 @@ export function comparePacks(rows: PublicResultRow[], packIds: number[], group: 
       figures,
       sustainedC: sustainedC(inGroup)?.rateC ?? null,
       curveResultId,
-      excluded: summariseExclusions(group, outside.map((r) => ({ ...describeResultGroup(r), key: r.groupKey }))),
+      excluded: summariseExclusions(
+        group,
+        outside.map((r) => ({ ...describeResultGroup(r), key: r.groupKey })),
+      ),
       excludedCount: outside.length,
     };
   });
 }
 
 export type Direction = "higher" | "lower";
-export type Mark = { best: boolean; /** Fraction worse than the best (0.12 = 12 % worse); null when missing or best. */ worseBy: number | null };
+export type Mark = {
+  best: boolean;
+  /** Fraction worse than the best (0.12 = 12 % worse); null when missing or best. */ worseBy: number | null;
+};
 
 /** Marks the best value in a row and how far behind each other value is. Missing values get no mark. */
 export function markDifferences(values: (number | null)[], direction: Direction): Mark[] {
@@ -81,7 +96,12 @@ export function markDifferences(values: (number | null)[], direction: Direction)
 /** A difference a reader should notice (more than 10 % from the best). */
 export const NOTABLE_DIFFERENCE = 0.1;
 
-export type CompareSuggestion = { group: { key: string; label: string }; cells: number; capacityMah: number; packs: { slug: string; title: string }[] };
+export type CompareSuggestion = {
+  group: { key: string; label: string };
+  cells: number;
+  capacityMah: number;
+  packs: { slug: string; title: string }[];
+};
 
 /**
  * Ready-made comparisons for an empty /compare: in each of the most populated groups, the packs that a
@@ -123,3 +143,13 @@ export function suggestComparisons(
   }
   return out;
 }
+
+/** Everything /compare shows for 2–6 packs in one like-for-like group (db/queries/compare.ts reads it). */
+export type Comparison = {
+  packs: PackSummary[];
+  unknownSlugs: string[];
+  groups: CompareGroupOption[];
+  group: DescribedGroup | null;
+  compared: ComparedPack[];
+  curves: { packSlug: string; resultId: number; points: ChartPoint[] }[];
+};

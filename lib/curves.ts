@@ -13,7 +13,12 @@ const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 *
 /** Load part of a stored curve (positive current), downsampled on voltage against capacity. */
 export function prepareCurve(curve: CurvePoint[], cells: number, maxPoints: number): ChartPoint[] {
   const load = curve.filter((p) => p.currentA > 0.05 && Number.isFinite(p.voltageV) && Number.isFinite(p.capacityMah));
-  const picked = lttb(load, maxPoints, (p) => p.capacityMah, (p) => p.voltageV);
+  const picked = lttb(
+    load,
+    maxPoints,
+    (p) => p.capacityMah,
+    (p) => p.voltageV,
+  );
   return picked.map((p) => ({
     mah: round(p.capacityMah, 0),
     vpc: round(p.voltageV / Math.max(1, cells), 3),
@@ -23,8 +28,17 @@ export function prepareCurve(curve: CurvePoint[], cells: number, maxPoints: numb
 }
 
 /** The whole log (rest included) against time, for one result's page. */
-export function prepareTimeCurve(curve: CurvePoint[], cells: number, maxPoints: number): { s: number; vpc: number; a: number; tc: number | null }[] {
-  const picked = lttb(curve, maxPoints, (p) => p.timeS, (p) => p.voltageV);
+export function prepareTimeCurve(
+  curve: CurvePoint[],
+  cells: number,
+  maxPoints: number,
+): { s: number; vpc: number; a: number; tc: number | null }[] {
+  const picked = lttb(
+    curve,
+    maxPoints,
+    (p) => p.timeS,
+    (p) => p.voltageV,
+  );
   return picked.map((p) => ({
     s: round(p.timeS, 1),
     vpc: round(p.voltageV / Math.max(1, cells), 3),

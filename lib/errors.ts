@@ -2,7 +2,7 @@
 // shown as a plain message without internals.
 import { ZodError } from "zod";
 
-export const errorStatus = {
+const errorStatus = {
   bad_request: 400,
   unauthenticated: 401,
   forbidden: 403,
@@ -44,14 +44,30 @@ export function fieldErrorsOf(err: ZodError): FieldErrors {
 
 // Connection refused/reset, server shutting down or starting, connection failures (PostgreSQL SQLSTATE
 // classes 57P and 08), and pg's own "Connection terminated" — looked for through Drizzle's wrapping `cause`.
-const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "57P01", "57P02", "57P03", "08000", "08001", "08003", "08006"]);
+const DOWN_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "57P01",
+  "57P02",
+  "57P03",
+  "08000",
+  "08001",
+  "08003",
+  "08006",
+]);
 
 export function isDatabaseDown(err: unknown): boolean {
-  for (let e: unknown = err, depth = 0; e && typeof e === "object" && depth < 5; e = (e as { cause?: unknown }).cause, depth++) {
+  for (
+    let e: unknown = err, depth = 0;
+    e && typeof e === "object" && depth < 5;
+    e = (e as { cause?: unknown }).cause, depth++
+  ) {
     const code = "code" in e ? String((e as { code: unknown }).code) : "";
     if (DOWN_CODES.has(code)) return true;
     const message = e instanceof Error ? e.message : "";
-    if (/Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/i.test(message)) return true;
+    if (/Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/i.test(message))
+      return true;
   }
   return false;
 }
@@ -61,19 +77,24 @@ export function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return new AppError("validation", "Some values are not valid.", fieldErrorsOf(err));
   if (isDatabaseDown(err)) {
-    return new AppError("unavailable", "The database is not reachable right now. Nothing was saved; please try again in a moment.");
+    return new AppError(
+      "unavailable",
+      "The database is not reachable right now. Nothing was saved; please try again in a moment.",
+    );
   }
   console.error("[sagline] unexpected error:", err);
   return new AppError("internal", "Something went wrong on our side. Nothing was saved; please try again.");
 }
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: FieldErrors } };
+type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: FieldErrors } };
 
 export function errorResponse(err: unknown, headers: HeadersInit = {}): Response {
   const e = toAppError(err);
   const h = new Headers(headers);
   if (e.retryAfterS !== undefined) h.set("Retry-After", String(Math.max(1, Math.ceil(e.retryAfterS))));
-  const body: ErrorBody = { error: { code: e.code, message: e.message, ...(e.fieldErrors ? { fieldErrors: e.fieldErrors } : {}) } };
+  const body: ErrorBody = {
+    error: { code: e.code, message: e.message, ...(e.fieldErrors ? { fieldErrors: e.fieldErrors } : {}) },
+  };
   return Response.json(body, { status: e.status, headers: h });
 }
 

@@ -9,7 +9,10 @@ export const cardCheckLabels = {
   "stop-temperature-passed": "Stop temperature passed",
 } as const;
 
-export const flagCodes = [...plausibilityCodes, ...(Object.keys(cardCheckLabels) as (keyof typeof cardCheckLabels)[])] as const;
+export const flagCodes = [
+  ...plausibilityCodes,
+  ...(Object.keys(cardCheckLabels) as (keyof typeof cardCheckLabels)[]),
+] as const;
 export type FlagCode = (typeof flagCodes)[number];
 export const flagLabels: Record<FlagCode, string> = { ...plausibilityLabels, ...cardCheckLabels };
 

@@ -1,17 +1,41 @@
 // The confirmation a moderator reads after resolving a reader flag: which flag, on which result, how it was
 // resolved and where that leaves the result. Pure, so the words are tested without a browser.
-import type { ResolvedFlag } from "@/db/mutations/review";
+import type { ReviewStatus } from "@/lib/enums";
+import type { FlagResolution } from "@/lib/validations/review";
 
-const how: Record<ResolvedFlag["resolution"], string> = { kept: "result kept", corrected: "result corrected", withdrawn: "result withdrawn" };
+/** What a resolution did: the moderator's page names the flag, the result and the result's status after it. */
+export type ResolvedFlag = {
+  flagId: number;
+  resolution: FlagResolution;
+  resultId: number;
+  status: ReviewStatus;
+  /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
+  alsoClosed: number;
+};
+
+const how: Record<ResolvedFlag["resolution"], string> = {
+  kept: "result kept",
+  corrected: "result corrected",
+  withdrawn: "result withdrawn",
+};
 
 export function flagResolutionMessage(r: ResolvedFlag, packTitle?: string): string {
   const on = `result #${r.resultId}${packTitle ? ` (${packTitle})` : ""}`;
   const head = `Flag #${r.flagId} on ${on} resolved: ${how[r.resolution]}.`;
-  const others = r.alsoClosed === 1 ? " 1 other open flag on it was closed with this one." : r.alsoClosed > 1 ? ` ${r.alsoClosed} other open flags on it were closed with this one.` : "";
+  const others =
+    r.alsoClosed === 1
+      ? " 1 other open flag on it was closed with this one."
+      : r.alsoClosed > 1
+        ? ` ${r.alsoClosed} other open flags on it were closed with this one.`
+        : "";
   switch (r.status) {
-    case "approved": return `${head} It is published again and no longer shows as disputed.`;
-    case "withdrawn": return `${head} It is withdrawn; it and its history stay in the audit log.${others}`;
-    case "disputed": return `${head} Other flags on it are still open, so it still shows as disputed.`;
-    default: return head;
+    case "approved":
+      return `${head} It is published again and no longer shows as disputed.`;
+    case "withdrawn":
+      return `${head} It is withdrawn; it and its history stay in the audit log.${others}`;
+    case "disputed":
+      return `${head} Other flags on it are still open, so it still shows as disputed.`;
+    default:
+      return head;
   }
 }

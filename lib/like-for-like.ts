@@ -3,9 +3,9 @@
 import { ageBand, ambientBand, cutoffBand, groupKey, rateBand, type MethodCardForKey } from "@/lib/analysis";
 import { resistanceBand } from "@/lib/analysis/group-key";
 
-export const GROUP_PARTS = ["resistance", "ambient", "cutoff", "rate", "age"] as const;
-export type GroupPart = (typeof GROUP_PARTS)[number];
-export type Band = { key: string; label: string };
+const GROUP_PARTS = ["resistance", "ambient", "cutoff", "rate", "age"] as const;
+type GroupPart = (typeof GROUP_PARTS)[number];
+type Band = { key: string; label: string };
 
 export type DescribedGroup = { key: string; label: string; parts: Record<GroupPart, Band> };
 
@@ -25,7 +25,7 @@ export function describeGroup(card: MethodCardForKey): DescribedGroup {
 }
 
 /** How a reader should read one part of a group that differs from the one shown. */
-export function partReason(part: GroupPart, band: Band): string {
+function partReason(part: GroupPart, band: Band): string {
   switch (part) {
     case "resistance":
       return `resistance by ${band.label}`;
@@ -42,7 +42,9 @@ export function partReason(part: GroupPart, band: Band): string {
 
 /** The parts in which `other` differs from `target`, in reading words. Empty when they are the same group. */
 export function groupDifferences(target: DescribedGroup, other: DescribedGroup): string[] {
-  return GROUP_PARTS.filter((p) => target.parts[p].key !== other.parts[p].key).map((p) => partReason(p, other.parts[p]));
+  return GROUP_PARTS.filter((p) => target.parts[p].key !== other.parts[p].key).map((p) =>
+    partReason(p, other.parts[p]),
+  );
 }
 
 export type Exclusion = { count: number; reason: string };
@@ -55,7 +57,9 @@ export function summariseExclusions(target: DescribedGroup, others: DescribedGro
     const reason = groupDifferences(target, g).join(", ") || "different group";
     counts.set(reason, (counts.get(reason) ?? 0) + 1);
   }
-  return [...counts.entries()].map(([reason, count]) => ({ reason, count })).sort((a, b) => b.count - a.count || a.reason.localeCompare(b.reason));
+  return [...counts.entries()]
+    .map(([reason, count]) => ({ reason, count }))
+    .sort((a, b) => b.count - a.count || a.reason.localeCompare(b.reason));
 }
 
 export function exclusionText(e: Exclusion): string {
@@ -64,7 +68,7 @@ export function exclusionText(e: Exclusion): string {
 
 /** The key with its age part removed: results that differ only by pack age form a cycling series. */
 export function keyWithoutAge(g: DescribedGroup): string {
-  return GROUP_PARTS.filter((p) => p !== "age").map((p) => g.parts[p].key).join("_");
+  return GROUP_PARTS.filter((p) => p !== "age")
+    .map((p) => g.parts[p].key)
+    .join("_");
 }
-
-export const GROUP_KEY_PATTERN = /^[a-z0-9._-]{3,120}$/;

@@ -1,5 +1,5 @@
 // Human labels for the method enums, shared by forms, method cards and downloads' documentation.
-import type { LoadMode, ResistanceMethod } from "@/db/schema/enums";
+import type { LoadMode, ResistanceMethod } from "@/lib/enums";
 
 export const resistanceMethodLabels: Record<ResistanceMethod, string> = {
   "iec-61960-two-level": "IEC 61960-3 two-level DC (≈0.2 It for 10 s, then ≈1 It for 1 s)",

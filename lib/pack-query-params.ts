@@ -2,7 +2,17 @@
 // No zod here on purpose: this file reaches the browser, and the page must turn bad params into sensible
 // defaults (the API validates strictly with lib/validations/pack-query.ts and answers 422).
 export const PACK_SORT_KEYS = [
-  "maker", "model", "cells", "capacity", "labelledC", "weight", "connector", "results", "measuredC", "labelRatio", "capacityRatio",
+  "maker",
+  "model",
+  "cells",
+  "capacity",
+  "labelledC",
+  "weight",
+  "connector",
+  "results",
+  "measuredC",
+  "labelRatio",
+  "capacityRatio",
 ] as const;
 export type PackSortKey = (typeof PACK_SORT_KEYS)[number];
 export const PAGE_SIZES = [10, 25, 50, 100] as const;
@@ -27,11 +37,24 @@ export type PackParams = {
 };
 
 export const DEFAULT_PACK_PARAMS: PackParams = {
-  q: "", cells: null, minMah: null, maxMah: null, minC: null, maxC: null, minG: null, maxG: null,
-  connector: null, maker: null, group: null, sort: "maker", dir: "asc", page: 1, size: DEFAULT_PAGE_SIZE,
+  q: "",
+  cells: null,
+  minMah: null,
+  maxMah: null,
+  minC: null,
+  maxC: null,
+  minG: null,
+  maxG: null,
+  connector: null,
+  maker: null,
+  group: null,
+  sort: "maker",
+  dir: "asc",
+  page: 1,
+  size: DEFAULT_PAGE_SIZE,
 };
 
-export const NUMBER_PARAMS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG"] as const;
+const NUMBER_PARAMS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG"] as const;
 
 const SLUG = /^[a-z0-9-]{1,80}$/;
 const GROUP = /^[a-z0-9._-]{3,120}$/;

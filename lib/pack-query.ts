@@ -2,7 +2,7 @@
 // the server (API and the first page of /packs) over the cached catalogue — thousands of rows at most —
 // so the browser never downloads the search index.
 import Fuse from "fuse.js";
-import type { PackRow } from "@/db/queries/packs";
+import type { PackRow } from "@/lib/catalogue";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 
 export type PackPage = { rows: PackRow[]; total: number; page: number; pageCount: number; size: number };
@@ -24,7 +24,7 @@ const sortValue: Record<PackSortKey, (r: PackRow) => string | number | null> = {
 const within = (v: number | null, min: number | null, max: number | null) =>
   (min === null || (v !== null && v >= min)) && (max === null || (v !== null && v <= max));
 
-export function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
+function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
   return rows.filter(
     (r) =>
       (p.cells === null || r.cellsInSeries === p.cells) &&
@@ -43,8 +43,11 @@ export function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
  * word must match somewhere in "maker model" (Fuse's extended search: a space means AND); Fuse's operator
  * characters are dropped from the reader's text so they search as plain words.
  */
-export function searchPacks(rows: PackRow[], q: string): PackRow[] {
-  const query = q.replace(/[\^!'=$|"]/g, " ").replace(/\s+/g, " ").trim();
+function searchPacks(rows: PackRow[], q: string): PackRow[] {
+  const query = q
+    .replace(/[\^!'=$|"]/g, " ")
+    .replace(/\s+/g, " ")
+    .trim();
   if (!query) return rows;
   const fuse = new Fuse(rows, {
     keys: [{ name: "title", getFn: (r) => `${r.makerName} ${r.model}` }],
@@ -77,5 +80,11 @@ export function queryPacks(rows: PackRow[], p: PackParams): PackPage {
   const sorted = p.q.trim() && p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
   const pageCount = Math.max(1, Math.ceil(sorted.length / p.size));
   const page = Math.min(p.page, pageCount);
-  return { rows: sorted.slice((page - 1) * p.size, page * p.size), total: sorted.length, page, pageCount, size: p.size };
+  return {
+    rows: sorted.slice((page - 1) * p.size, page * p.size),
+    total: sorted.length,
+    page,
+    pageCount,
+    size: p.size,
+  };
 }

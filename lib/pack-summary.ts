@@ -40,9 +40,16 @@ export type PublicResultRow = {
   passedStopTemperature: boolean;
 };
 
-export const SUMMARY_FIGURES = [
-  "sagLimitedC", "labelRatio", "capacityMah", "capacityRatio", "holdVoltagePerCellV",
-  "dcResistanceMohm", "resistanceAt25CMohm", "temperatureRiseC", "energyWh",
+const SUMMARY_FIGURES = [
+  "sagLimitedC",
+  "labelRatio",
+  "capacityMah",
+  "capacityRatio",
+  "holdVoltagePerCellV",
+  "dcResistanceMohm",
+  "resistanceAt25CMohm",
+  "temperatureRiseC",
+  "energyWh",
 ] as const;
 export type SummaryFigure = (typeof SUMMARY_FIGURES)[number];
 
@@ -56,7 +63,17 @@ export type GroupFigures = {
   sustainedC: number | null;
 };
 
-export function describeResultGroup(r: Pick<PublicResultRow, "resistanceMethod" | "ambientTemperatureC" | "cutoffVPerCell" | "loadCurrentA" | "ratedCapacityMah" | "cyclesBeforeTest">): DescribedGroup {
+export function describeResultGroup(
+  r: Pick<
+    PublicResultRow,
+    | "resistanceMethod"
+    | "ambientTemperatureC"
+    | "cutoffVPerCell"
+    | "loadCurrentA"
+    | "ratedCapacityMah"
+    | "cyclesBeforeTest"
+  >,
+): DescribedGroup {
   return describeGroup({
     resistanceMethod: r.resistanceMethod,
     ambientC: r.ambientTemperatureC,
@@ -80,7 +97,8 @@ export function summariseFigures(rows: PublicResultRow[]): Record<SummaryFigure,
 export function sustainedC(rows: PublicResultRow[]): { rateC: number; resultId: number } | null {
   let best: { rateC: number; resultId: number } | null = null;
   for (const r of rows) {
-    if (r.status !== "approved" || r.loadMode !== "constant-current" || !r.reachedCutoff || r.passedStopTemperature) continue;
+    if (r.status !== "approved" || r.loadMode !== "constant-current" || !r.reachedCutoff || r.passedStopTemperature)
+      continue;
     if (!best || r.loadRateC > best.rateC) best = { rateC: r.loadRateC, resultId: r.id };
   }
   return best;
@@ -105,8 +123,13 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
   return out.sort((a, b) => b.n - a.n || a.group.key.localeCompare(b.group.key));
 }
 
-export type CyclePoint = { resultId: number; cycles: number; capacityMah: number | null; dcResistanceMohm: number | null };
-export type CycleSeries = { label: string; points: CyclePoint[]; trend: RetentionTrend | null; ratedCapacityMah: number };
+type CyclePoint = { resultId: number; cycles: number; capacityMah: number | null; dcResistanceMohm: number | null };
+export type CycleSeries = {
+  label: string;
+  points: CyclePoint[];
+  trend: RetentionTrend | null;
+  ratedCapacityMah: number;
+};
 
 /**
  * Capacity and resistance over cycles. Ageing moves a result into another age band, so the series takes
@@ -119,7 +142,9 @@ export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
     if (r.status !== "approved") continue;
     const g = describeResultGroup(r);
     const k = keyWithoutAge(g);
-    const label = [g.parts.resistance.label, g.parts.ambient.label, g.parts.cutoff.label, g.parts.rate.label].join(" · ");
+    const label = [g.parts.resistance.label, g.parts.ambient.label, g.parts.cutoff.label, g.parts.rate.label].join(
+      " · ",
+    );
     const entry = series.get(k) ?? { label, rows: [] };
     entry.rows.push(r);
     series.set(k, entry);
@@ -137,7 +162,12 @@ export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
   const first = best.rows[0];
   if (!first) return null;
   const points = best.rows
-    .map((r) => ({ resultId: r.id, cycles: r.cyclesBeforeTest, capacityMah: r.capacityMah, dcResistanceMohm: r.dcResistanceMohm }))
+    .map((r) => ({
+      resultId: r.id,
+      cycles: r.cyclesBeforeTest,
+      capacityMah: r.capacityMah,
+      dcResistanceMohm: r.dcResistanceMohm,
+    }))
     .sort((a, b) => a.cycles - b.cycles || a.resultId - b.resultId);
   const trend = retentionTrend(
     points.filter((p): p is CyclePoint & { capacityMah: number } => p.capacityMah !== null),

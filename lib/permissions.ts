@@ -1,12 +1,12 @@
 // The one permission table: resource.action → roles allowed. Every server action and route handler that
 // changes state names one of these; hiding a button is never the check.
-import type { UserRole } from "@/db/schema/auth";
+import type { UserRole } from "@/lib/enums";
 
 const everyone: readonly UserRole[] = ["contributor", "moderator", "admin"];
 const moderators: readonly UserRole[] = ["moderator", "admin"];
 const admins: readonly UserRole[] = ["admin"];
 
-export const permissions = {
+const permissions = {
   "account.update": everyone,
   "bench-profile.manage": everyone,
   "result.submit": everyone,

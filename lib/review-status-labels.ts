@@ -1,4 +1,4 @@
-import type { ReviewStatus } from "@/db/schema/enums";
+import type { ReviewStatus } from "@/lib/enums";
 import { rejectReasonLabels } from "@/lib/validations/review";
 
 export const reviewStatusLabels: Record<ReviewStatus, string> = {

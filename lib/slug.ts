@@ -1,4 +1,5 @@
-// URL slugs for catalogue entries (makers, packs), shared by the seed and the proposal mutation.
+// URL slugs: catalogue entries (makers, packs — the seed and the proposal mutation) and heading anchors of
+// the Markdown pages (server/markdown.ts).
 export function slugify(text: string): string {
   const slug = text
     .normalize("NFKD")

@@ -11,7 +11,11 @@
       var frame = frames[i];
       if (frame.contentWindow !== event.source) continue;
       var origin;
-      try { origin = new URL(frame.src, document.baseURI).origin; } catch (e) { return; }
+      try {
+        origin = new URL(frame.src, document.baseURI).origin;
+      } catch (_e) {
+        return;
+      }
       if (event.origin !== origin) return;
       var height = Math.max(80, Math.min(4000, Math.round(data.height)));
       frame.style.height = height + "px";

@@ -21,14 +21,16 @@ function envInt(name, fallback, min, max) {
   const raw = process.env[name];
   if (raw === undefined || raw === "") return fallback;
   const n = Number(raw);
-  if (!Number.isInteger(n) || n < min || n > max) fail(`${name} must be a whole number from ${min} to ${max}, got "${raw}"`);
+  if (!Number.isInteger(n) || n < min || n > max)
+    fail(`${name} must be a whole number from ${min} to ${max}, got "${raw}"`);
   return n;
 }
 const port = envInt("BENCH_PORT", 3210, 1024, 65534);
 const runs = envInt("BENCH_RUNS", 3, 1, 15);
 const base = `http://localhost:${port}`;
 const distDir = process.env.NEXT_DIST_DIR || ".next";
-if (!fs.existsSync(path.join(root, distDir, "BUILD_ID"))) fail(`no production build in ${distDir}/; run npm start first`);
+if (!fs.existsSync(path.join(root, distDir, "BUILD_ID")))
+  fail(`no production build in ${distDir}/; run npm start first`);
 if (!fs.existsSync("/usr/bin/chromium")) fail("Debian's chromium is missing (apt-get install chromium)");
 
 const portOpen = (p) =>
@@ -54,7 +56,9 @@ const getJson = async (p) => {
 };
 // The most tested group's packs: the pack page of its first pack, and four of them side by side.
 const groups = await getJson("/api/v1/groups");
-const group = (groups.data ?? []).slice().sort((a, b) => (b.results ?? b.resultCount ?? 0) - (a.results ?? a.resultCount ?? 0))[0];
+const group = (groups.data ?? [])
+  .slice()
+  .sort((a, b) => (b.results ?? b.resultCount ?? 0) - (a.results ?? a.resultCount ?? 0))[0];
 const packs = await getJson(`/api/v1/packs?size=10${group ? `&group=${encodeURIComponent(group.key)}` : ""}`);
 const slugs = (packs.data ?? []).map((p) => p.slug).filter(Boolean);
 if (slugs.length < 4) fail("the database needs at least 4 packs (run npm start to seed the demo)");
@@ -65,7 +69,10 @@ const pages = [
   { name: "home", path: "/" },
   { name: "packs", path: "/packs" },
   { name: "pack page", path: `/packs/${slugs[0]}` },
-  { name: "compare (4 packs)", path: `/compare?packs=${slugs.slice(0, 4).join(",")}${group ? `&group=${encodeURIComponent(group.key)}` : ""}` },
+  {
+    name: "compare (4 packs)",
+    path: `/compare?packs=${slugs.slice(0, 4).join(",")}${group ? `&group=${encodeURIComponent(group.key)}` : ""}`,
+  },
   { name: "embed", path: new URL(embed, base).pathname },
 ];
 
@@ -81,7 +88,16 @@ const userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), "sagline-lh-"));
 const chrome = await chromeLauncher.launch({
   chromePath: "/usr/bin/chromium",
   userDataDir,
-  chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  chromeFlags: [
+    "--headless=new",
+    "--no-sandbox",
+    "--disable-gpu",
+    "--disable-quic",
+    "--no-first-run",
+    "--disable-background-networking",
+    "--disable-component-update",
+    "--disable-sync",
+  ],
 });
 const rows = [];
 try {
@@ -98,7 +114,8 @@ try {
       if (!lhr) fail(`no Lighthouse result for ${p.path}`);
       if (lhr.runtimeError) fail(`${p.path}: ${lhr.runtimeError.message}`);
       const items = lhr.audits["network-requests"]?.details?.items ?? [];
-      const scriptKb = items.filter((r) => r.resourceType === "Script").reduce((sum, r) => sum + (r.transferSize ?? 0), 0) / 1024;
+      const scriptKb =
+        items.filter((r) => r.resourceType === "Script").reduce((sum, r) => sum + (r.transferSize ?? 0), 0) / 1024;
       const scriptFiles = items.filter((r) => r.resourceType === "Script").length;
       samples.push({
         performance: Math.round((lhr.categories.performance.score ?? 0) * 100),
@@ -110,7 +127,9 @@ try {
         scriptFiles,
       });
     }
-    const html = await (await fetch(`http://127.0.0.1:${port}${p.path}`, { headers: { "accept-encoding": "identity" } })).text();
+    const html = await (
+      await fetch(`http://127.0.0.1:${port}${p.path}`, { headers: { "accept-encoding": "identity" } })
+    ).text();
     const m = (k) => median(samples.map((s) => s[k]));
     rows.push({
       page: p.name,
@@ -132,9 +151,16 @@ try {
   fs.rmSync(userDataDir, { recursive: true, force: true });
 }
 
-console.log(`Lighthouse 12.2.3, mobile profile, Debian chromium, median of ${runs} — ${new Date().toISOString()} (load ${os.loadavg().map((l) => l.toFixed(1)).join(" ")})`);
+console.log(
+  `Lighthouse 12.2.3, mobile profile, Debian chromium, median of ${runs} — ${new Date().toISOString()} (load ${os
+    .loadavg()
+    .map((l) => l.toFixed(1))
+    .join(" ")})`,
+);
 console.table(rows.map(({ path: _p, ...r }) => r));
-console.log("targets: performance ≥ 95, TBT ≤ 200 ms, LCP ≤ 2.0 s, CLS ≤ 0.05, accessibility 100; JS ≤ 120 KB gzip on /packs, ≤ 20 KB on an embed; HTML ≤ 60 KB on / and a pack page");
+console.log(
+  "targets: performance ≥ 95, TBT ≤ 200 ms, LCP ≤ 2.0 s, CLS ≤ 0.05, accessibility 100; JS ≤ 120 KB gzip on /packs, ≤ 20 KB on an embed; HTML ≤ 60 KB on / and a pack page",
+);
 const worst = rows.reduce((a, b) => (b.performance < a.performance ? b : a));
 const worstTbt = rows.reduce((a, b) => (b.tbtMs > a.tbtMs ? b : a));
 const worstLcp = rows.reduce((a, b) => (b.lcpS > a.lcpS ? b : a));

@@ -20,14 +20,16 @@ function envInt(name, fallback, min, max) {
   const raw = process.env[name];
   if (raw === undefined || raw === "") return fallback;
   const n = Number(raw);
-  if (!Number.isInteger(n) || n < min || n > max) fail(`${name} must be a whole number from ${min} to ${max}, got "${raw}"`);
+  if (!Number.isInteger(n) || n < min || n > max)
+    fail(`${name} must be a whole number from ${min} to ${max}, got "${raw}"`);
   return n;
 }
 const port = envInt("BENCH_PORT", 3200, 1024, 65534);
 const duration = envInt("BENCH_DURATION_S", 60, 1, 3600);
 const latencyDuration = envInt("BENCH_LATENCY_S", 20, 1, 3600);
 const base = `http://127.0.0.1:${port}`;
-if (!fs.existsSync(path.join(root, ".next/BUILD_ID"))) fail("no production build; run npm start (or npm run build) first");
+if (!fs.existsSync(path.join(root, ".next/BUILD_ID")))
+  fail("no production build; run npm start (or npm run build) first");
 
 const portOpen = (p) =>
   new Promise((resolve) => {
@@ -71,7 +73,9 @@ const routes = [
 
 function run(url, connections, seconds) {
   return new Promise((resolve, reject) => {
-    autocannon({ url, connections, duration: seconds, pipelining: 1 }, (err, result) => (err ? reject(err) : resolve(result)));
+    autocannon({ url, connections, duration: seconds, pipelining: 1 }, (err, result) =>
+      err ? reject(err) : resolve(result),
+    );
   });
 }
 
@@ -83,16 +87,23 @@ for (const r of routes) {
 }
 
 console.log(`\nSagline load benchmark — ${new Date().toISOString()} — ${base}\n`);
-for (const [connections, seconds, label] of [[50, duration, "throughput"], [10, latencyDuration, "latency"]]) {
+for (const [connections, seconds, label] of [
+  [50, duration, "throughput"],
+  [10, latencyDuration, "latency"],
+]) {
   console.log(`${label}: ${connections} connections, ${seconds} s per route`);
-  console.log(`${pad("route", 26)}${pad("req/s", 10)}${pad("p50 ms", 9)}${pad("p99 ms", 9)}${pad("errors", 8)}ratio to static`);
+  console.log(
+    `${pad("route", 26)}${pad("req/s", 10)}${pad("p50 ms", 9)}${pad("p99 ms", 9)}${pad("errors", 8)}ratio to static`,
+  );
   let staticRps = NaN;
   for (const r of routes) {
     const out = await run(base + r.path, connections, seconds);
     const errors = out.errors + out.timeouts + out.non2xx;
     const rps = out.requests.average;
     if (r.path === "/icon.svg") staticRps = rps;
-    console.log(`${pad(r.name, 26)}${pad(num(rps), 10)}${pad(num(out.latency.p50, 1), 9)}${pad(num(out.latency.p99, 1), 9)}${pad(errors, 8)}${num(rps / staticRps, 2)}×`);
+    console.log(
+      `${pad(r.name, 26)}${pad(num(rps), 10)}${pad(num(out.latency.p50, 1), 9)}${pad(num(out.latency.p99, 1), 9)}${pad(errors, 8)}${num(rps / staticRps, 2)}×`,
+    );
   }
   console.log("");
 }
@@ -106,7 +117,9 @@ const captured = [];
 for (const r of routes) {
   const res = await fetch(base + r.path);
   const headers = {};
-  res.headers.forEach((v, k) => { if (!["content-length", "date", "connection", "keep-alive", "transfer-encoding"].includes(k)) headers[k] = v; });
+  res.headers.forEach((v, k) => {
+    if (!["content-length", "date", "connection", "keep-alive", "transfer-encoding"].includes(k)) headers[k] = v;
+  });
   captured.push({ ...r, body: await res.text(), headers });
 }
 const bareFile = path.join(root, ".bench", "bare-server-bodies.json");
@@ -131,12 +144,19 @@ console.log(`${pad("route", 26)}${pad("KB", 7)}${pad("Next req/s", 12)}${pad("ba
 for (const [index, c] of captured.entries()) {
   const ours = (await run(base + c.path, 50, refSeconds)).requests.average;
   const ceiling = (await run(`http://127.0.0.1:${barePort}/${index}`, 50, refSeconds)).requests.average;
-  console.log(`${pad(c.name, 26)}${pad(num(Buffer.byteLength(c.body) / 1024, 1), 7)}${pad(num(ours), 12)}${pad(`${num(ceiling)} (Next at ${num(ours / ceiling, 2)}× of it)`, 28)}`);
+  console.log(
+    `${pad(c.name, 26)}${pad(num(Buffer.byteLength(c.body) / 1024, 1), 7)}${pad(num(ours), 12)}${pad(`${num(ceiling)} (Next at ${num(ours / ceiling, 2)}× of it)`, 28)}`,
+  );
 }
 const gz = await new Promise((resolve, reject) => {
-  autocannon({ url: `${base}/`, connections: 50, duration: refSeconds, headers: { "accept-encoding": "gzip" } }, (err, result) => (err ? reject(err) : resolve(result)));
+  autocannon(
+    { url: `${base}/`, connections: 50, duration: refSeconds, headers: { "accept-encoding": "gzip" } },
+    (err, result) => (err ? reject(err) : resolve(result)),
+  );
 });
-console.log(`home page with Accept-Encoding: gzip (as browsers send; Next compresses each response): ${num(gz.requests.average)} req/s, p99 ${num(gz.latency.p99, 1)} ms, ${num(gz.throughput.average / gz.requests.average / 1024, 1)} KB per response`);
+console.log(
+  `home page with Accept-Encoding: gzip (as browsers send; Next compresses each response): ${num(gz.requests.average)} req/s, p99 ${num(gz.latency.p99, 1)} ms, ${num(gz.throughput.average / gz.requests.average / 1024, 1)} KB per response`,
+);
 bare.kill("SIGTERM");
 console.log("");
 console.log("targets: 0 errors; cached pages ≥ 0.5× the static file's req/s; p99 ≤ 50 ms at 10 connections");

@@ -9,7 +9,7 @@ ensure_node_modules
 ensure_env_file
 services_start >/dev/null
 $TSX scripts/migrate.ts >/dev/null
-$TSX db/seed/index.ts --if-empty >/dev/null
+$TSX scripts/seed/index.ts --if-empty >/dev/null
 if [ "${1:-}" = "--build" ] || [ ! -f "$DIST_DIR/BUILD_ID" ] || [ ! -f "$DIST_DIR/server/app/packs.html" ]; then
   say "building (next build) for the first-load figure — log in .run/build-bench.log"
   node_modules/.bin/next build >"$RUN_DIR/build-bench.log" 2>&1 || { tail -n 30 "$RUN_DIR/build-bench.log" >&2; fail "next build failed"; }

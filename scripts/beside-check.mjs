@@ -15,9 +15,26 @@ const log = (...a) => console.log(new Date().toISOString().slice(11, 19), ...a);
 
 // The app world's environment: the test world's settings removed, so scripts/lib.sh reads .env.local afresh.
 const TEST_KEYS = [
-  "SAGLINE_MODE", "TEST_PORT_BASE", "PG_PORT", "SMTP_PORT", "S3_PORT", "PORT", "E2E_PORT", "RUN_DIR", "NEXT_DIST_DIR",
-  "MAIL_CATCHER_DIR", "S3_DATA_DIR", "DATABASE_URL", "SMTP_URL", "S3_ENDPOINT", "APP_URL", "SAGLINE_PG_FAST",
-  "SAGLINE_DEV_TOOLS", "E2E_BASE_URL", "AUTH_SECRET", "SAGLINE_TEST_WORLD",
+  "SAGLINE_MODE",
+  "TEST_PORT_BASE",
+  "PG_PORT",
+  "SMTP_PORT",
+  "S3_PORT",
+  "PORT",
+  "E2E_PORT",
+  "RUN_DIR",
+  "NEXT_DIST_DIR",
+  "MAIL_CATCHER_DIR",
+  "S3_DATA_DIR",
+  "DATABASE_URL",
+  "SMTP_URL",
+  "S3_ENDPOINT",
+  "APP_URL",
+  "SAGLINE_PG_FAST",
+  "SAGLINE_DEV_TOOLS",
+  "E2E_BASE_URL",
+  "AUTH_SECRET",
+  "SAGLINE_TEST_WORLD",
 ];
 const appEnv = Object.fromEntries(Object.entries(process.env).filter(([k]) => !TEST_KEYS.includes(k)));
 const inAppWorld = (script, extra = {}) =>
@@ -51,11 +68,17 @@ if (settings.app && (await portTaken(settings.port))) {
   if (await portTaken(port)) port = Number(process.env.TEST_PORT_BASE) + 4;
   base = `http://127.0.0.1:${port}`;
   const before = JSON.parse(
-    inAppWorld(`echo "{\\"mail\\": $(svc_running mail && echo true || echo false), \\"s3\\": $(svc_running s3 && echo true || echo false), \\"pg\\": $(pg_running && echo true || echo false)}"`),
+    inAppWorld(
+      `echo "{\\"mail\\": $(svc_running mail && echo true || echo false), \\"s3\\": $(svc_running s3 && echo true || echo false), \\"pg\\": $(pg_running && echo true || echo false)}"`,
+    ),
   );
   log(`starting npm start on ${base} (services already running: ${JSON.stringify(before)})`);
   const out = fs.openSync(path.join(runDir, "beside-app.log"), "w");
-  const child = spawn("bash", ["scripts/start.sh"], { cwd: root, env: { ...appEnv, PORT: String(port) }, stdio: ["ignore", out, out] });
+  const child = spawn("bash", ["scripts/start.sh"], {
+    cwd: root,
+    env: { ...appEnv, PORT: String(port) },
+    stdio: ["ignore", out, out],
+  });
   started = { child, before, port };
 }
 
@@ -63,13 +86,19 @@ if (settings.app && (await portTaken(settings.port))) {
 const pages = ["/", "/packs", "/methods", "/sign-in", "/analyse"];
 async function checkPages() {
   const problems = [];
-  const packs = await fetch(`${base}/api/v1/packs?size=10`).then((r) => (r.ok ? r.json() : null), () => null);
+  const packs = await fetch(`${base}/api/v1/packs?size=10`).then(
+    (r) => (r.ok ? r.json() : null),
+    () => null,
+  );
   const slug = packs?.data?.[0]?.slug;
   for (const p of slug ? [...pages, `/packs/${slug}`] : pages) {
     try {
       const res = await fetch(base + p, { signal: AbortSignal.timeout(20_000) });
       const html = await res.text();
-      if (res.status !== 200) { problems.push(`${p} answered ${res.status}`); continue; }
+      if (res.status !== 200) {
+        problems.push(`${p} answered ${res.status}`);
+        continue;
+      }
       // Every script the page loads must be served (a replaced build folder answers 500/404 here).
       const scripts = [...html.matchAll(/<script[^>]+src="(\/_next\/[^"]+)"/g)].map((m) => m[1]).slice(0, 4);
       if (scripts.length === 0) problems.push(`${p} loads no scripts`);
@@ -102,7 +131,8 @@ async function checkSignIn() {
     });
     const where = ask.headers.get("location") ?? "";
     // The sign-in page's own form lands on /sign-in/check-email; a bare POST gets Auth.js's verify-request route.
-    if (!/\/sign-in\/check-email|\/api\/auth\/verify-request/.test(where)) return [`asking for a link answered ${ask.status} → ${where || "nowhere"}`];
+    if (!/\/sign-in\/check-email|\/api\/auth\/verify-request/.test(where))
+      return [`asking for a link answered ${ask.status} → ${where || "nowhere"}`];
     const dir = path.resolve(root, settings.mail);
     let link = "";
     for (let i = 0; i < 100 && !link; i++) {
@@ -136,14 +166,20 @@ const deadline = Date.now() + 20 * 60_000;
 let ready = false;
 while (!ready && Date.now() < deadline) {
   if (started && started.child.exitCode !== null) break;
-  ready = (await fetch(base + "/", { signal: AbortSignal.timeout(5000) }).then((r) => r.status === 200, () => false));
+  ready = await fetch(base + "/", { signal: AbortSignal.timeout(5000) }).then(
+    (r) => r.status === 200,
+    () => false,
+  );
   if (!ready) await sleep(2000);
 }
 if (!ready) {
-  record("the live app starts", [started ? `npm start did not serve ${base} (see ${runDir}/beside-app.log)` : `${base} stopped answering`]);
+  record("the live app starts", [
+    started ? `npm start did not serve ${base} (see ${runDir}/beside-app.log)` : `${base} stopped answering`,
+  ]);
 } else {
   log(`live app ready on ${base}`);
-  let rounds = 0, signIns = 0;
+  let rounds = 0,
+    signIns = 0;
   const during = [];
   let lastSignIn = 0;
   while (!stopAsked()) {

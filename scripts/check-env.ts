@@ -1,5 +1,5 @@
 // Validate the environment before anything starts; one line per problem, exit 1.
-import { EnvError, parseEnv } from "../lib/env";
+import { EnvError, parseEnv } from "@/server/env";
 
 try {
   parseEnv(process.env);

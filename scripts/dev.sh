@@ -6,5 +6,5 @@ ensure_env_file
 export SAGLINE_DEV_TOOLS=1 APP_URL="${APP_URL:-http://localhost:$PORT}"
 services_start
 $TSX scripts/migrate.ts
-$TSX db/seed/index.ts --if-empty
+$TSX scripts/seed/index.ts --if-empty
 exec node_modules/.bin/next dev -H 127.0.0.1 -p "$PORT"

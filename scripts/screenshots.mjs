@@ -1,4 +1,4 @@
-// Screenshots of public pages for checking by eye: node scripts/screenshots.mjs BASE_URL OUT_DIR path... 
+// Screenshots of public pages for checking by eye: node scripts/screenshots.mjs BASE_URL OUT_DIR path...
 // Each path is taken at 1280 and 390 px wide, light and dark. Uses Debian's chromium (never a download).
 import { chromium } from "playwright-core";
 import fs from "node:fs";
@@ -9,8 +9,17 @@ const [base = "http://localhost:3012", out = ".run/shots", ...paths] = process.a
 fs.mkdirSync(out, { recursive: true });
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sagline-shots-"));
 const ctx = await chromium.launchPersistentContext(dir, {
-  executablePath: "/usr/bin/chromium", headless: true,
-  args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  executablePath: "/usr/bin/chromium",
+  headless: true,
+  args: [
+    "--no-sandbox",
+    "--disable-gpu",
+    "--disable-quic",
+    "--no-first-run",
+    "--disable-background-networking",
+    "--disable-component-update",
+    "--disable-sync",
+  ],
 });
 try {
   const page = ctx.pages()[0] ?? (await ctx.newPage());
@@ -28,7 +37,11 @@ try {
         const slice = width < 600 ? 1400 : total;
         for (let top = 0, k = 0; top < total; top += slice, k++) {
           const file = path.join(out, slice === total ? name : name.replace(".png", `-${k}.png`));
-          await page.screenshot({ path: file, fullPage: true, clip: { x: 0, y: top, width, height: Math.min(slice, total - top) } });
+          await page.screenshot({
+            path: file,
+            fullPage: true,
+            clip: { x: 0, y: top, width, height: Math.min(slice, total - top) },
+          });
           console.log(file);
         }
       }

@@ -10,7 +10,7 @@ node_modules/.bin/tsx scripts/check-env.ts
 port_in_use "$PORT" && fail "port $PORT is taken (is Sagline already running?); run npm run stop or set PORT"
 services_start
 $TSX scripts/migrate.ts
-$TSX db/seed/index.ts --if-empty
+$TSX scripts/seed/index.ts --if-empty
 say "building (next build)"
 # The data cache (tagged reads) outlives builds and belongs to whichever database filled it (npm test's
 # browser run uses its own): start from an empty one so the site shows this database.

@@ -4,7 +4,9 @@ import fs from "node:fs";
 import path from "node:path";
 
 const dir = process.argv[2] ?? ".run";
-let passed = 0, failed = 0, skipped = 0;
+let passed = 0,
+  failed = 0,
+  skipped = 0;
 for (const f of fs.readdirSync(dir).filter((n) => n.startsWith("results-") && n.endsWith(".json"))) {
   const data = JSON.parse(fs.readFileSync(path.join(dir, f), "utf8"));
   if (typeof data.numPassedTests === "number") {

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { fmt, fmtDate, fmtRatio } from "@/lib/format";
-import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/lib/public-data";
+import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/server/public-data";
 import { HomeLabelCheck, type HomeGroup } from "./_components/home-label-check-client";
 
 // Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.
@@ -18,8 +18,27 @@ export default async function HomePage() {
         key: g.key,
         label: g.label,
         packCount: g.packCount,
-        points: packs.flatMap((p) => (p.measuredC ? [{ packSlug: p.packSlug, label: p.model, makerName: p.makerName, labelledC: p.labelledC, measuredC: Math.round(p.measuredC.median * 10) / 10, n: p.measuredC.n }] : [])),
-        ranking: ranking.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }) => ({ makerSlug, makerName, medianLabelRatio, packs: n, results })),
+        points: packs.flatMap((p) =>
+          p.measuredC
+            ? [
+                {
+                  packSlug: p.packSlug,
+                  label: p.model,
+                  makerName: p.makerName,
+                  labelledC: p.labelledC,
+                  measuredC: Math.round(p.measuredC.median * 10) / 10,
+                  n: p.measuredC.n,
+                },
+              ]
+            : [],
+        ),
+        ranking: ranking.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }) => ({
+          makerSlug,
+          makerName,
+          medianLabelRatio,
+          packs: n,
+          results,
+        })),
       };
     }),
   );
@@ -28,22 +47,37 @@ export default async function HomePage() {
       <section className="space-y-4">
         <h1>What the label says, and what the bench measured</h1>
         <p className="muted max-w-3xl">
-          Independent testers log discharges of lithium-polymer packs; Sagline computes the figures from their raw logs by published
-          methods, moderators vet every result, and packs are compared only with results taken the same way.
+          Independent testers log discharges of lithium-polymer packs; Sagline computes the figures from their raw logs
+          by published methods, moderators vet every result, and packs are compared only with results taken the same
+          way.
         </p>
         <form action="/packs" method="get" role="search" className="flex max-w-xl gap-2">
-          <label htmlFor="home-q" className="sr-only">Search packs by maker or model</label>
-          <input id="home-q" name="q" type="search" placeholder="Search packs, e.g. ridge 1300" autoComplete="off"
-            className="flex-1 rounded-md border border-ink/20 bg-paper-raised px-3 py-2 dark:border-night-line dark:bg-night-sunk" />
-          <button type="submit" className="rounded-md bg-charge-500 px-4 py-2 font-medium text-night hover:bg-charge-400">Search</button>
+          <label htmlFor="home-q" className="sr-only">
+            Search packs by maker or model
+          </label>
+          <input
+            id="home-q"
+            name="q"
+            type="search"
+            placeholder="Search packs, e.g. ridge 1300"
+            autoComplete="off"
+            className="flex-1 rounded-md border border-ink/20 bg-paper-raised px-3 py-2 dark:border-night-line dark:bg-night-sunk"
+          />
+          <button
+            type="submit"
+            className="rounded-md bg-charge-500 px-4 py-2 font-medium text-night hover:bg-charge-400"
+          >
+            Search
+          </button>
         </form>
       </section>
 
       <section aria-labelledby="label-check-h" className="space-y-3">
         <h2 id="label-check-h">Label check</h2>
         <p className="muted max-w-3xl text-sm">
-          Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited C) up. Points
-          below the dashed line fall short of their label. <Link href="/methods#sag-limited-c">How sag-limited C is computed</Link>.
+          Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited
+          C) up. Points below the dashed line fall short of their label.{" "}
+          <Link href="/methods#sag-limited-c">How sag-limited C is computed</Link>.
         </p>
         <HomeLabelCheck groups={homeGroups} />
       </section>
@@ -53,13 +87,22 @@ export default async function HomePage() {
         <ul className="grid gap-2 sm:grid-cols-2" data-testid="newest-results">
           {newest.map((r) => (
             <li key={r.id} className="card space-y-1">
-              <Link href={`/packs/${r.packSlug}`} className="font-medium">{r.makerName} {r.packModel}</Link>
-              <p className="num text-sm">{fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio {fmtRatio(r.labelRatio)}</p>
-              <p className="muted text-xs"><Link href={`/results/${r.id}`}>Result #{r.id}</Link> · {fmtDate(r.publishedAt)}</p>
+              <Link href={`/packs/${r.packSlug}`} className="font-medium">
+                {r.makerName} {r.packModel}
+              </Link>
+              <p className="num text-sm">
+                {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
+                {fmtRatio(r.labelRatio)}
+              </p>
+              <p className="muted text-xs">
+                <Link href={`/results/${r.id}`}>Result #{r.id}</Link> · {fmtDate(r.publishedAt)}
+              </p>
             </li>
           ))}
         </ul>
-        <p className="text-sm"><Link href="/packs">All packs →</Link></p>
+        <p className="text-sm">
+          <Link href="/packs">All packs →</Link>
+        </p>
       </section>
     </div>
   );

@@ -1,6 +1,6 @@
 import { notFound } from "next/navigation";
 import { SiteShell } from "@/components/layout/site-shell";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 export const dynamic = "force-dynamic";
 

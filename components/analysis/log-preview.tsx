@@ -17,28 +17,52 @@ function rows(f: PublicFigures): Row[] {
   return [
     { label: "Delivered capacity", value: fmt(f.capacityMah, 0, "mAh"), anchor: "delivered-capacity" },
     { label: "Delivered energy", value: fmt(f.energyWh, 2, "Wh"), anchor: "delivered-energy" },
-    { label: "Mean voltage under load", value: `${fmt(f.meanVoltageV, 2, "V")}${perCell(f.meanVoltagePerCellV, 3)}`, anchor: "mean-voltage" },
-    { label: "Minimum voltage", value: `${fmt(f.minVoltageV, 2, "V")}${perCell(f.minVoltagePerCellV, 3)}`, anchor: "minimum-voltage" },
-    { label: `Hold voltage (${f.parameters.holdDelayS} s)`, value: fmt(f.holdVoltagePerCellV, 3, "V per cell"), anchor: "hold-voltage" },
+    {
+      label: "Mean voltage under load",
+      value: `${fmt(f.meanVoltageV, 2, "V")}${perCell(f.meanVoltagePerCellV, 3)}`,
+      anchor: "mean-voltage",
+    },
+    {
+      label: "Minimum voltage",
+      value: `${fmt(f.minVoltageV, 2, "V")}${perCell(f.minVoltagePerCellV, 3)}`,
+      anchor: "minimum-voltage",
+    },
+    {
+      label: `Hold voltage (${f.parameters.holdDelayS} s)`,
+      value: fmt(f.holdVoltagePerCellV, 3, "V per cell"),
+      anchor: "hold-voltage",
+    },
     {
       label: "DC resistance",
-      value: f.dcResistanceMohm === null ? fmt(null) : `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ per cell")}; ${RESISTANCE_METHOD[f.dcResistanceMethod ?? ""] ?? "no method"})`,
+      value:
+        f.dcResistanceMohm === null
+          ? fmt(null)
+          : `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ per cell")}; ${RESISTANCE_METHOD[f.dcResistanceMethod ?? ""] ?? "no method"})`,
       anchor: "dc-resistance",
     },
     {
       label: "Resistance at 25 °C (estimate)",
-      value: f.resistanceAt25CMohm === null ? fmt(null) : `${fmt(f.resistanceAt25CMohm, 1, "mΩ")} (measured at ${fmt(f.resistanceTemperatureC, 1, "°C")}; Ea ${f.parameters.activationEnergyKJPerMol} kJ/mol)`,
+      value:
+        f.resistanceAt25CMohm === null
+          ? fmt(null)
+          : `${fmt(f.resistanceAt25CMohm, 1, "mΩ")} (measured at ${fmt(f.resistanceTemperatureC, 1, "°C")}; Ea ${f.parameters.activationEnergyKJPerMol} kJ/mol)`,
       anchor: "resistance-at-25c",
     },
     { label: "Peak current", value: fmt(f.peakCurrentA, 1, "A"), anchor: "peak-current" },
     {
       label: "Temperature rise",
-      value: f.temperatureRiseC === null ? fmt(null) : `${fmt(f.temperatureRiseC, 1, "°C")} (${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")})`,
+      value:
+        f.temperatureRiseC === null
+          ? fmt(null)
+          : `${fmt(f.temperatureRiseC, 1, "°C")} (${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")})`,
       anchor: "temperature-rise",
     },
     {
       label: "Sag-limited C",
-      value: f.sagLimitedC === null ? fmt(null) : `${fmt(f.sagLimitedC, 1)}C (${f.parameters.nominalVPerCell} V nominal → ${f.parameters.floorVPerCell} V floor per cell)`,
+      value:
+        f.sagLimitedC === null
+          ? fmt(null)
+          : `${fmt(f.sagLimitedC, 1)}C (${f.parameters.nominalVPerCell} V nominal → ${f.parameters.floorVPerCell} V floor per cell)`,
       anchor: "sag-limited-c",
     },
     { label: "Capacity ratio (delivered ÷ rated)", value: fmt(f.capacityRatio, 2), anchor: "capacity-ratio" },
@@ -48,20 +72,42 @@ function rows(f: PublicFigures): Row[] {
   ];
 }
 
-const CELLS_SOURCE: Record<string, string> = { given: "as given", "cell-columns": "from the per-cell columns", "rest-voltage": "inferred from the rest voltage" };
+const CELLS_SOURCE: Record<string, string> = {
+  given: "as given",
+  "cell-columns": "from the per-cell columns",
+  "rest-voltage": "inferred from the rest voltage",
+};
 
-export function LogPreview({ figures, curve, checks = [] }: { figures: PublicFigures; curve: CurvePoint[]; checks?: CardCheck[] }) {
+export function LogPreview({
+  figures,
+  curve,
+  checks = [],
+}: {
+  figures: PublicFigures;
+  curve: CurvePoint[];
+  checks?: CardCheck[];
+}) {
   return (
     <div className="space-y-5" data-testid="log-preview">
       <p className="muted num text-sm">
-        {fmt(figures.samples)} samples over {fmt(figures.durationS, 0)} s · {figures.cells === null ? "cells unknown" : `${figures.cells}S (${CELLS_SOURCE[figures.cellsSource ?? ""] ?? "unknown"})`}
+        {fmt(figures.samples)} samples over {fmt(figures.durationS, 0)} s ·{" "}
+        {figures.cells === null
+          ? "cells unknown"
+          : `${figures.cells}S (${CELLS_SOURCE[figures.cellsSource ?? ""] ?? "unknown"})`}
         {figures.skippedLines > 0 ? ` · ${fmt(figures.skippedLines)} lines skipped` : ""}
       </p>
       {checks.length > 0 && (
-        <div role="alert" className="rounded-md border border-warn/40 bg-warn-soft p-3 text-sm text-warn dark:bg-warn/15 dark:text-[#ffb4ab]">
+        <div
+          role="alert"
+          className="rounded-md border border-warn/40 bg-warn-soft p-3 text-sm text-warn dark:bg-warn/15 dark:text-[#ffb4ab]"
+        >
           <p className="font-medium">Checks against your method card</p>
           <ul className="mt-1 list-disc space-y-1 pl-5">
-            {checks.map((c) => <li key={c.code} data-check={c.code}>{c.message}</li>)}
+            {checks.map((c) => (
+              <li key={c.code} data-check={c.code}>
+                {c.message}
+              </li>
+            ))}
           </ul>
         </div>
       )}
@@ -69,7 +115,9 @@ export function LogPreview({ figures, curve, checks = [] }: { figures: PublicFig
         <div className="rounded-md border border-charge-400/60 bg-charge-50 p-3 text-sm text-ink dark:border-charge-600 dark:bg-charge-700/20 dark:text-paper">
           <p className="font-medium">Warnings from the analysis</p>
           <ul className="mt-1 list-disc space-y-1 pl-5" data-testid="log-warnings">
-            {figures.warnings.map((w) => <li key={w}>{w}</li>)}
+            {figures.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
           </ul>
         </div>
       )}
@@ -77,7 +125,10 @@ export function LogPreview({ figures, curve, checks = [] }: { figures: PublicFig
         {rows(figures).map((r) => (
           <div key={r.label} className="flex flex-col border-b border-ink/10 pb-1 dark:border-night-line">
             <dt className="muted">
-              <Link href={`/methods#${r.anchor}`} className="text-inherit underline decoration-dotted underline-offset-2 hover:text-cell-600 dark:hover:text-cell-400">
+              <Link
+                href={`/methods#${r.anchor}`}
+                className="text-inherit underline decoration-dotted underline-offset-2 hover:text-cell-600 dark:hover:text-cell-400"
+              >
                 {r.label}
               </Link>
             </dt>
@@ -87,8 +138,8 @@ export function LogPreview({ figures, curve, checks = [] }: { figures: PublicFig
       </dl>
       <LogCurveChart points={curve} />
       <p className="muted text-xs">
-        How each figure is computed: <Link href="/methods">Methods</Link>. Figures describe this log only; they are not a rating or a safety
-        assessment of the pack.
+        How each figure is computed: <Link href="/methods">Methods</Link>. Figures describe this log only; they are not
+        a rating or a safety assessment of the pack.
       </p>
     </div>
   );

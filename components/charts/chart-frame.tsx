@@ -7,7 +7,14 @@ export type ChartTable = { caption: string; columns: string[]; rows: (string | {
  * Every chart sits in this frame: a title, the chart or its data table ("Show as table"), notes, and the
  * licence. The table holds the same numbers the chart draws.
  */
-export function ChartFrame({ title, children, table, notes, legend, headingLevel = 3 }: {
+export function ChartFrame({
+  title,
+  children,
+  table,
+  notes,
+  legend,
+  headingLevel = 3,
+}: {
   title: string;
   children: React.ReactNode;
   table: ChartTable;
@@ -22,8 +29,12 @@ export function ChartFrame({ title, children, table, notes, legend, headingLevel
     <figure className="card space-y-3" aria-labelledby={`${id}-title`}>
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <H id={`${id}-title`}>{title}</H>
-        <button type="button" onClick={() => setAsTable((v) => !v)} aria-pressed={asTable}
-          className="rounded border border-ink/20 px-2 py-1 text-sm hover:bg-paper-sunk dark:border-night-line dark:hover:bg-night-sunk">
+        <button
+          type="button"
+          onClick={() => setAsTable((v) => !v)}
+          aria-pressed={asTable}
+          className="rounded border border-ink/20 px-2 py-1 text-sm hover:bg-paper-sunk dark:border-night-line dark:hover:bg-night-sunk"
+        >
           {asTable ? "Show as chart" : "Show as table"}
         </button>
       </div>
@@ -33,14 +44,28 @@ export function ChartFrame({ title, children, table, notes, legend, headingLevel
           <table className="w-full border-collapse text-sm">
             <caption className="muted pb-2 text-left text-xs">{table.caption}</caption>
             <thead>
-              <tr>{table.columns.map((c) => <th key={c} scope="col" className="sticky top-0 border-b border-ink/15 bg-paper-raised px-2 py-1 text-left font-medium dark:border-night-line dark:bg-night-raised">{c}</th>)}</tr>
+              <tr>
+                {table.columns.map((c) => (
+                  <th
+                    key={c}
+                    scope="col"
+                    className="sticky top-0 border-b border-ink/15 bg-paper-raised px-2 py-1 text-left font-medium dark:border-night-line dark:bg-night-raised"
+                  >
+                    {c}
+                  </th>
+                ))}
+              </tr>
             </thead>
             <tbody>
               {table.rows.map((row, i) => (
                 <tr key={i} className="border-b border-ink/5 dark:border-night-line/60">
                   {row.map((cell, j) => {
                     const c = typeof cell === "string" ? { text: cell } : cell;
-                    return <td key={j} className={`px-2 py-1 ${j > 0 ? "num" : ""}`}>{c.href ? <a href={c.href}>{c.text}</a> : c.text}</td>;
+                    return (
+                      <td key={j} className={`px-2 py-1 ${j > 0 ? "num" : ""}`}>
+                        {c.href ? <a href={c.href}>{c.text}</a> : c.text}
+                      </td>
+                    );
                   })}
                 </tr>
               ))}

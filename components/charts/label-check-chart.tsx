@@ -13,12 +13,25 @@ import { MEETS_STYLE, SHORT_STYLE } from "./palette";
 import { Tooltip } from "./tooltip";
 import { useWidth } from "./use-width";
 
-export type LabelCheckPoint = { packSlug: string; label: string; makerName: string; labelledC: number; measuredC: number; n: number };
+export type LabelCheckPoint = {
+  packSlug: string;
+  label: string;
+  makerName: string;
+  labelledC: number;
+  measuredC: number;
+  n: number;
+};
 
 const margin = { top: 16, right: 20, bottom: 50, left: 58 };
 const f1 = (v: number) => v.toLocaleString("en-GB", { maximumFractionDigits: 1 });
 
-export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height: fixedHeight, title = "Label check" }: {
+export function LabelCheckChart({
+  points,
+  groupLabel,
+  width: fixedWidth,
+  height: fixedHeight,
+  title = "Label check",
+}: {
   points: LabelCheckPoint[];
   groupLabel: string;
   width?: number;
@@ -41,9 +54,24 @@ export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height:
 
   const legend = (
     <ul className="flex flex-wrap gap-x-4 gap-y-1" aria-label="Legend">
-      <li className="flex items-center gap-1"><svg width="14" height="14" aria-hidden="true"><Marker shape={MEETS_STYLE.shape} x={7} y={7} size={9} color={MEETS_STYLE.color} /></svg>meets or beats its label</li>
-      <li className="flex items-center gap-1"><svg width="14" height="14" aria-hidden="true"><Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} filled={false} /></svg>falls short (below the line)</li>
-      <li className="flex items-center gap-1"><svg width="22" height="10" aria-hidden="true"><line x1="0" y1="5" x2="22" y2="5" stroke="currentColor" strokeDasharray="4 3" /></svg>parity: measured = labelled</li>
+      <li className="flex items-center gap-1">
+        <svg width="14" height="14" aria-hidden="true">
+          <Marker shape={MEETS_STYLE.shape} x={7} y={7} size={9} color={MEETS_STYLE.color} />
+        </svg>
+        meets or beats its label
+      </li>
+      <li className="flex items-center gap-1">
+        <svg width="14" height="14" aria-hidden="true">
+          <Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} filled={false} />
+        </svg>
+        falls short (below the line)
+      </li>
+      <li className="flex items-center gap-1">
+        <svg width="22" height="10" aria-hidden="true">
+          <line x1="0" y1="5" x2="22" y2="5" stroke="currentColor" strokeDasharray="4 3" />
+        </svg>
+        parity: measured = labelled
+      </li>
     </ul>
   );
 
@@ -51,32 +79,78 @@ export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height:
     <ChartFrame
       title={title}
       legend={legend}
-      notes={<p>{groupLabel}. One point per pack: the median of its published results in this like-for-like group. {short} of {points.length} packs fall short of their label. Select a point to open the pack.</p>}
+      notes={
+        <p>
+          {groupLabel}. One point per pack: the median of its published results in this like-for-like group. {short} of{" "}
+          {points.length} packs fall short of their label. Select a point to open the pack.
+        </p>
+      }
       table={{
         caption: `Label check, ${groupLabel}`,
         columns: ["Pack", "Labelled C", "Measured C (median)", "Label ratio", "Results"],
-        rows: sorted.map((p) => [{ text: `${p.makerName} ${p.label}`, href: `/packs/${p.packSlug}` }, f1(p.labelledC), f1(p.measuredC), (p.measuredC / p.labelledC).toFixed(2), String(p.n)]),
+        rows: sorted.map((p) => [
+          { text: `${p.makerName} ${p.label}`, href: `/packs/${p.packSlug}` },
+          f1(p.labelledC),
+          f1(p.measuredC),
+          (p.measuredC / p.labelledC).toFixed(2),
+          String(p.n),
+        ]),
       }}
     >
       <div ref={ref} className="relative w-full" onKeyDown={(e) => e.key === "Escape" && setActive(null)}>
         {points.length === 0 ? (
           <p className="muted py-12 text-center">No published results with a measured C in this group yet.</p>
         ) : (
-          <svg width={width} height={height} role="group" aria-label={`${title}: labelled C against measured C, ${points.length} packs`} className="block max-w-full overflow-visible">
+          <svg
+            width={width}
+            height={height}
+            role="group"
+            aria-label={`${title}: labelled C against measured C, ${points.length} packs`}
+            className="block max-w-full overflow-visible"
+          >
             <Group left={margin.left} top={margin.top}>
               <g className="text-ink/10 dark:text-paper/10">
                 <GridRows scale={y} width={innerW} stroke="currentColor" numTicks={6} />
                 <GridColumns scale={x} height={innerH} stroke="currentColor" numTicks={width < 500 ? 5 : 8} />
               </g>
-              <line x1={x(0)} y1={y(0)} x2={x(parityEnd)} y2={y(parityEnd)} stroke="currentColor" strokeDasharray="5 4" className="text-ink-soft dark:text-paper/60" />
-              <text x={x(parityEnd) - 4} y={y(parityEnd) + 14} textAnchor="end" className="fill-ink-soft text-[11px] dark:fill-paper/60">y = x</text>
+              <line
+                x1={x(0)}
+                y1={y(0)}
+                x2={x(parityEnd)}
+                y2={y(parityEnd)}
+                stroke="currentColor"
+                strokeDasharray="5 4"
+                className="text-ink-soft dark:text-paper/60"
+              />
+              <text
+                x={x(parityEnd) - 4}
+                y={y(parityEnd) + 14}
+                textAnchor="end"
+                className="fill-ink-soft text-[11px] dark:fill-paper/60"
+              >
+                y = x
+              </text>
               <g className="text-ink-soft dark:text-paper/70">
-                <AxisBottom top={innerH} scale={x} numTicks={width < 500 ? 5 : 8} stroke="currentColor" tickStroke="currentColor"
+                <AxisBottom
+                  top={innerH}
+                  scale={x}
+                  numTicks={width < 500 ? 5 : 8}
+                  stroke="currentColor"
+                  tickStroke="currentColor"
                   tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "middle" }}
-                  label="Labelled continuous rating (C)" labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} />
-                <AxisLeft scale={y} numTicks={6} stroke="currentColor" tickStroke="currentColor"
+                  label="Labelled continuous rating (C)"
+                  labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
+                />
+                <AxisLeft
+                  scale={y}
+                  numTicks={6}
+                  stroke="currentColor"
+                  tickStroke="currentColor"
                   tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "end", dx: -2, dy: 3 }}
-                  label="Measured sag-limited rating (C)" labelOffset={36} labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} />
+                  label="Measured sag-limited rating (C)"
+                  labelOffset={36}
+                  labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
+                />
               </g>
               {points.map((p) => {
                 const below = p.measuredC < p.labelledC;
@@ -84,12 +158,34 @@ export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height:
                 const px = x(p.labelledC);
                 const py = y(p.measuredC);
                 return (
-                  <a key={p.packSlug} href={`/packs/${p.packSlug}`} data-testid="label-check-point"
+                  <a
+                    key={p.packSlug}
+                    href={`/packs/${p.packSlug}`}
+                    data-testid="label-check-point"
                     aria-label={`${p.makerName} ${p.label}: labelled ${f1(p.labelledC)}C, measured ${f1(p.measuredC)}C from ${p.n} result${p.n === 1 ? "" : "s"}${below ? ", falls short of its label" : ", meets its label"}`}
-                    onMouseEnter={() => setActive(p)} onMouseLeave={() => setActive(null)} onFocus={() => setActive(p)} onBlur={() => setActive(null)}
-                    className="outline-none [&:focus-visible>circle.ring]:opacity-100">
-                    <circle className="ring opacity-0" cx={px} cy={py} r={10} fill="none" stroke="currentColor" strokeWidth={2} />
-                    <Marker shape={s.shape} x={px} y={py} size={active?.packSlug === p.packSlug ? 12 : 9} color={s.color} filled={!below} />
+                    onMouseEnter={() => setActive(p)}
+                    onMouseLeave={() => setActive(null)}
+                    onFocus={() => setActive(p)}
+                    onBlur={() => setActive(null)}
+                    className="outline-none [&:focus-visible>circle.ring]:opacity-100"
+                  >
+                    <circle
+                      className="ring opacity-0"
+                      cx={px}
+                      cy={py}
+                      r={10}
+                      fill="none"
+                      stroke="currentColor"
+                      strokeWidth={2}
+                    />
+                    <Marker
+                      shape={s.shape}
+                      x={px}
+                      y={py}
+                      size={active?.packSlug === p.packSlug ? 12 : 9}
+                      color={s.color}
+                      filled={!below}
+                    />
                   </a>
                 );
               })}
@@ -97,10 +193,20 @@ export function LabelCheckChart({ points, groupLabel, width: fixedWidth, height:
           </svg>
         )}
         {active ? (
-          <Tooltip left={margin.left + x(active.labelledC)} top={margin.top + y(active.measuredC)} containerWidth={width}>
-            <p className="font-medium">{active.makerName} {active.label}</p>
-            <p className="num">labelled {f1(active.labelledC)}C · measured {f1(active.measuredC)}C</p>
-            <p className="num">ratio {(active.measuredC / active.labelledC).toFixed(2)} · {active.n} result{active.n === 1 ? "" : "s"}</p>
+          <Tooltip
+            left={margin.left + x(active.labelledC)}
+            top={margin.top + y(active.measuredC)}
+            containerWidth={width}
+          >
+            <p className="font-medium">
+              {active.makerName} {active.label}
+            </p>
+            <p className="num">
+              labelled {f1(active.labelledC)}C · measured {f1(active.measuredC)}C
+            </p>
+            <p className="num">
+              ratio {(active.measuredC / active.labelledC).toFixed(2)} · {active.n} result{active.n === 1 ? "" : "s"}
+            </p>
           </Tooltip>
         ) : null}
       </div>

@@ -74,15 +74,32 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
         <figcaption className="text-sm font-medium">{title}</figcaption>
         <div className="flex items-center gap-4 text-xs">
           <span className="flex items-center gap-1">
-            <svg width="24" height="8" aria-hidden="true"><line x1="0" y1="4" x2="24" y2="4" strokeWidth="2" className="stroke-[#0072B2] dark:stroke-[#56B4E9]" /></svg>
+            <svg width="24" height="8" aria-hidden="true">
+              <line x1="0" y1="4" x2="24" y2="4" strokeWidth="2" className="stroke-[#0072B2] dark:stroke-[#56B4E9]" />
+            </svg>
             Voltage (V)
           </span>
           <span className="flex items-center gap-1">
-            <svg width="24" height="8" aria-hidden="true"><line x1="0" y1="4" x2="24" y2="4" strokeWidth="2" strokeDasharray="5 3" className="stroke-[#D55E00] dark:stroke-[#E69F00]" /></svg>
+            <svg width="24" height="8" aria-hidden="true">
+              <line
+                x1="0"
+                y1="4"
+                x2="24"
+                y2="4"
+                strokeWidth="2"
+                strokeDasharray="5 3"
+                className="stroke-[#D55E00] dark:stroke-[#E69F00]"
+              />
+            </svg>
             Current (A)
           </span>
-          <button type="button" onClick={() => setAsTable((t) => !t)} aria-expanded={asTable} aria-controls={tableId}
-            className="rounded border border-ink/20 px-2 py-0.5 hover:bg-paper-sunk dark:border-night-line dark:hover:bg-night-sunk">
+          <button
+            type="button"
+            onClick={() => setAsTable((t) => !t)}
+            aria-expanded={asTable}
+            aria-controls={tableId}
+            className="rounded border border-ink/20 px-2 py-0.5 hover:bg-paper-sunk dark:border-night-line dark:hover:bg-night-sunk"
+          >
             {asTable ? "Show as chart" : "Show as table"}
           </button>
         </div>
@@ -93,11 +110,21 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
             <caption className="sr-only">{title}</caption>
             <thead className="sticky top-0 bg-paper-sunk dark:bg-night-sunk">
               <tr>
-                <th scope="col" className="px-2 py-1">Time (s)</th>
-                <th scope="col" className="px-2 py-1">Voltage (V)</th>
-                <th scope="col" className="px-2 py-1">Current (A)</th>
-                <th scope="col" className="px-2 py-1">Temperature (°C)</th>
-                <th scope="col" className="px-2 py-1">Capacity (mAh)</th>
+                <th scope="col" className="px-2 py-1">
+                  Time (s)
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Voltage (V)
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Current (A)
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Temperature (°C)
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Capacity (mAh)
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -115,24 +142,70 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
         </div>
       ) : (
         <div ref={parentRef} className="w-full" id={tableId}>
-          <svg width={width} height={HEIGHT} role="img"
+          <svg
+            width={width}
+            height={HEIGHT}
+            role="img"
             aria-label={`${title}: ${points.length} points over ${fmt(durationS, 0)} s; voltage from ${fmt(points[0]?.voltageV, 2)} V to ${fmt(points[points.length - 1]?.voltageV, 2)} V.`}
-            className="overflow-visible text-ink-soft dark:text-paper/70">
+            className="overflow-visible text-ink-soft dark:text-paper/70"
+          >
             <Group left={MARGIN.left} top={MARGIN.top}>
-              <GridRows scale={scales.v} width={scales.innerW} numTicks={5} className="stroke-ink/10 dark:stroke-night-line" stroke="currentColor" strokeOpacity={0.15} />
-              <LinePath data={points} x={(p) => scales.x(scales.tx(p))} y={(p) => scales.i(p.currentA)} strokeWidth={1.5} strokeDasharray="5 3"
-                className="stroke-[#D55E00] dark:stroke-[#E69F00]" fill="none" />
-              <LinePath data={points} x={(p) => scales.x(scales.tx(p))} y={(p) => scales.v(p.voltageV)} strokeWidth={2}
-                className="stroke-[#0072B2] dark:stroke-[#56B4E9]" fill="none" />
-              <AxisLeft scale={scales.v} numTicks={5} label="Voltage (V)" stroke="currentColor" tickStroke="currentColor"
+              <GridRows
+                scale={scales.v}
+                width={scales.innerW}
+                numTicks={5}
+                className="stroke-ink/10 dark:stroke-night-line"
+                stroke="currentColor"
+                strokeOpacity={0.15}
+              />
+              <LinePath
+                data={points}
+                x={(p) => scales.x(scales.tx(p))}
+                y={(p) => scales.i(p.currentA)}
+                strokeWidth={1.5}
+                strokeDasharray="5 3"
+                className="stroke-[#D55E00] dark:stroke-[#E69F00]"
+                fill="none"
+              />
+              <LinePath
+                data={points}
+                x={(p) => scales.x(scales.tx(p))}
+                y={(p) => scales.v(p.voltageV)}
+                strokeWidth={2}
+                className="stroke-[#0072B2] dark:stroke-[#56B4E9]"
+                fill="none"
+              />
+              <AxisLeft
+                scale={scales.v}
+                numTicks={5}
+                label="Voltage (V)"
+                stroke="currentColor"
+                tickStroke="currentColor"
                 tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "end", dx: -2, dy: 3 }}
-                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} labelOffset={32} />
-              <AxisRight scale={scales.i} left={scales.innerW} numTicks={5} label="Current (A)" stroke="currentColor" tickStroke="currentColor"
+                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
+                labelOffset={32}
+              />
+              <AxisRight
+                scale={scales.i}
+                left={scales.innerW}
+                numTicks={5}
+                label="Current (A)"
+                stroke="currentColor"
+                tickStroke="currentColor"
                 tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "start", dx: 2, dy: 3 }}
-                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} labelOffset={30} />
-              <AxisBottom scale={scales.x} top={scales.innerH} numTicks={tickCount} label={timeLabel} stroke="currentColor" tickStroke="currentColor"
+                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
+                labelOffset={30}
+              />
+              <AxisBottom
+                scale={scales.x}
+                top={scales.innerH}
+                numTicks={tickCount}
+                label={timeLabel}
+                stroke="currentColor"
+                tickStroke="currentColor"
                 tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "middle" }}
-                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }} />
+                labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
+              />
             </Group>
           </svg>
         </div>

@@ -5,7 +5,7 @@ export type MarkerShape = "circle" | "square" | "triangle" | "diamond" | "cross"
 
 export type SeriesStyle = { color: string; dash: string | undefined; shape: MarkerShape; name: string };
 
-export const SERIES_STYLES: SeriesStyle[] = [
+const SERIES_STYLES: SeriesStyle[] = [
   { color: "#0072B2", dash: undefined, shape: "circle", name: "blue, solid, circles" },
   { color: "#E69F00", dash: "7 4", shape: "square", name: "orange, dashed, squares" },
   { color: "#009E73", dash: "2 3", shape: "triangle", name: "green, dotted, triangles" },
@@ -21,4 +21,9 @@ export function seriesStyle(index: number): SeriesStyle {
 
 /** Label check: packs that reach their label vs packs that fall short. */
 export const MEETS_STYLE: SeriesStyle = { color: "#0072B2", dash: undefined, shape: "circle", name: "blue circles" };
-export const SHORT_STYLE: SeriesStyle = { color: "#D55E00", dash: undefined, shape: "triangle-down", name: "vermillion down-triangles" };
+export const SHORT_STYLE: SeriesStyle = {
+  color: "#D55E00",
+  dash: undefined,
+  shape: "triangle-down",
+  name: "vermillion down-triangles",
+};

@@ -11,8 +11,20 @@ const fit = "[&>svg]:block [&>svg]:h-auto [&>svg]:w-full";
 export function ServerChartSvg({ data }: { data: ChartData }) {
   return (
     <>
-      <div className={`max-[559px]:hidden ${fit}`} dangerouslySetInnerHTML={{ __html: renderChartSvg(data, DEFAULT_CHART_SIZE, "chart-title") }} />
-      <div className={`min-[560px]:hidden ${fit}`} dangerouslySetInnerHTML={{ __html: renderChartSvg(data, { width: NARROW_WIDTH, height: defaultHeight(NARROW_WIDTH) }, "chart-title-narrow") }} />
+      <div
+        className={`max-[559px]:hidden ${fit}`}
+        dangerouslySetInnerHTML={{ __html: renderChartSvg(data, DEFAULT_CHART_SIZE, "chart-title") }}
+      />
+      <div
+        className={`min-[560px]:hidden ${fit}`}
+        dangerouslySetInnerHTML={{
+          __html: renderChartSvg(
+            data,
+            { width: NARROW_WIDTH, height: defaultHeight(NARROW_WIDTH) },
+            "chart-title-narrow",
+          ),
+        }}
+      />
     </>
   );
 }

@@ -16,13 +16,24 @@ type ErrorBody = { error?: { message?: string; fieldErrors?: Record<string, stri
 function parseError(status: number, text: string): UploadError {
   try {
     const body = JSON.parse(text) as ErrorBody;
-    if (body.error?.message) return { status, message: body.error.message, ...(body.error.fieldErrors ? { fieldErrors: body.error.fieldErrors } : {}) };
+    if (body.error?.message)
+      return {
+        status,
+        message: body.error.message,
+        ...(body.error.fieldErrors ? { fieldErrors: body.error.fieldErrors } : {}),
+      };
   } catch {
     // not our JSON: a proxy or the platform answered
   }
   if (status === 413) return { status, message: "The file is larger than the upload limit." };
   if (status === 401) return { status, message: "Your session has ended. Sign in again; your draft is kept." };
-  return { status, message: status === 0 ? "The connection was lost. Check your network and try again." : `The upload failed (HTTP ${status}). Please try again.` };
+  return {
+    status,
+    message:
+      status === 0
+        ? "The connection was lost. Check your network and try again."
+        : `The upload failed (HTTP ${status}). Please try again.`,
+  };
 }
 
 export function useXhrUpload<T>() {
@@ -48,7 +59,10 @@ export function useXhrUpload<T>() {
             setState({ phase: "done", data });
             resolve(data);
           } catch {
-            setState({ phase: "error", error: { status: xhr.status, message: "The server's answer could not be read. Please try again." } });
+            setState({
+              phase: "error",
+              error: { status: xhr.status, message: "The server's answer could not be read. Please try again." },
+            });
             resolve(null);
           }
         } else {

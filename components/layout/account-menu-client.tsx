@@ -6,10 +6,13 @@ import { usePathname } from "next/navigation";
 import { useEffect, useState } from "react";
 import { z } from "zod";
 
-const meSchema = z.object({ user: z.object({ name: z.string(), role: z.enum(["contributor", "moderator", "admin"]) }).nullable() });
+const meSchema = z.object({
+  user: z.object({ name: z.string(), role: z.enum(["contributor", "moderator", "admin"]) }).nullable(),
+});
 type Me = z.infer<typeof meSchema>["user"];
 
-const linkClass = "whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper";
+const linkClass =
+  "whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper";
 
 export function AccountMenu() {
   const pathname = usePathname();
@@ -30,7 +33,10 @@ export function AccountMenu() {
 
   if (me === undefined) return <span className="inline-block w-16" aria-hidden="true" />;
   if (me === null) {
-    const back = pathname && !pathname.startsWith("/sign-in") && pathname !== "/" ? `?${new URLSearchParams({ callbackUrl: pathname })}` : "";
+    const back =
+      pathname && !pathname.startsWith("/sign-in") && pathname !== "/"
+        ? `?${new URLSearchParams({ callbackUrl: pathname })}`
+        : "";
     return (
       <Link href={`/sign-in${back}`} className={linkClass} data-testid="account-menu">
         Sign in
@@ -51,7 +57,10 @@ export function AccountMenu() {
       ) : null}
       <Link href="/account" className={linkClass} title={`Signed in as ${me.name}`}>
         <span className="hidden max-w-[12rem] truncate align-bottom md:inline-block">{me.name}</span>
-        <span className="hidden md:inline" aria-hidden="true"> · </span>
+        <span className="hidden md:inline" aria-hidden="true">
+          {" "}
+          ·{" "}
+        </span>
         Account
       </Link>
     </span>

@@ -9,13 +9,15 @@ export function SiteFooter() {
         <div className="space-y-2">
           <p>
             Data on Sagline is published under{" "}
-            <a href={DATA_LICENCE.url} rel="license">{DATA_LICENCE.name}</a> — credit “Sagline contributors”. The
-            code is MIT-licensed (see LICENSE).
+            <a href={DATA_LICENCE.url} rel="license">
+              {DATA_LICENCE.name}
+            </a>{" "}
+            — credit “Sagline contributors”. The code is MIT-licensed (see LICENSE).
           </p>
           <p className="muted">
-            Sagline reports measurements; it does not certify packs. Charging and high-current use of lithium
-            packs can start fires: follow the maker’s instructions, never charge unattended, and retire swollen
-            packs. <Link href="/methods#safety">Safety notes</Link>.
+            Sagline reports measurements; it does not certify packs. Charging and high-current use of lithium packs can
+            start fires: follow the maker’s instructions, never charge unattended, and retire swollen packs.{" "}
+            <Link href="/methods#safety">Safety notes</Link>.
           </p>
         </div>
         <nav aria-label="Footer" className="flex flex-wrap gap-x-4 gap-y-1 sm:justify-end">

@@ -17,17 +17,25 @@ export function SiteHeader({ accountSlot }: { accountSlot?: React.ReactNode }) {
         <Link href="/" className="text-ink no-underline hover:no-underline dark:text-paper" aria-label="Sagline home">
           <Logo />
         </Link>
-        <nav aria-label="Main" className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto text-sm sm:order-none sm:w-auto">
+        <nav
+          aria-label="Main"
+          className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto text-sm sm:order-none sm:w-auto"
+        >
           {nav.map((item) => (
-            <Link key={item.href} href={item.href}
-              className="whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper">
+            <Link
+              key={item.href}
+              href={item.href}
+              className="whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper"
+            >
               {item.label}
             </Link>
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-2 text-sm">
-          <Link href="/submit"
-            className="rounded-md bg-charge-500 px-3 py-1.5 font-medium text-night no-underline hover:bg-charge-400 hover:no-underline">
+          <Link
+            href="/submit"
+            className="rounded-md bg-charge-500 px-3 py-1.5 font-medium text-night no-underline hover:bg-charge-400 hover:no-underline"
+          >
             Submit a result
           </Link>
           {accountSlot}

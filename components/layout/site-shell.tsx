@@ -7,7 +7,10 @@ import { SiteNotice } from "./site-notice";
 export function SiteShell({ children }: { children: React.ReactNode }) {
   return (
     <>
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-raised focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-raised focus:p-2"
+      >
         Skip to content
       </a>
       <SiteHeader accountSlot={<AccountMenu />} />

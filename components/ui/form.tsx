@@ -7,7 +7,14 @@ export const inputClass =
   "focus:border-cell-500 focus:outline-none focus:ring-2 focus:ring-cell-500/30 aria-[invalid=true]:border-warn " +
   "dark:border-night-line dark:bg-night-sunk dark:text-paper dark:placeholder:text-paper/40";
 
-export function Field(props: { id: string; label: ReactNode; hint?: ReactNode; error?: string; children: ReactNode; className?: string }) {
+export function Field(props: {
+  id: string;
+  label: ReactNode;
+  hint?: ReactNode;
+  error?: string;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <div className={`space-y-1 ${props.className ?? ""}`}>
       <label htmlFor={props.id} className="block text-sm font-medium">
@@ -29,7 +36,11 @@ export function Field(props: { id: string; label: ReactNode; hint?: ReactNode; e
 }
 
 /** aria attributes tying an input to its hint or error. */
-export function describedBy(id: string, error?: string, hint?: boolean): { "aria-invalid": boolean; "aria-describedby"?: string } {
+export function describedBy(
+  id: string,
+  error?: string,
+  hint?: boolean,
+): { "aria-invalid": boolean; "aria-describedby"?: string } {
   if (error) return { "aria-invalid": true, "aria-describedby": `${id}-error` };
   return hint ? { "aria-invalid": false, "aria-describedby": `${id}-hint` } : { "aria-invalid": false };
 }
@@ -55,8 +66,10 @@ export function Alert({ tone, children }: { tone: keyof typeof alertTones; child
 
 const buttonTones = {
   primary: "bg-charge-500 text-night hover:bg-charge-400",
-  secondary: "border border-ink/20 bg-paper-raised text-ink hover:bg-paper-sunk dark:border-night-line dark:bg-night-raised dark:text-paper dark:hover:bg-night-sunk",
-  danger: "border border-warn/40 bg-paper-raised text-warn hover:bg-warn-soft dark:border-red-400/40 dark:bg-night-raised dark:text-red-300 dark:hover:bg-red-950/40",
+  secondary:
+    "border border-ink/20 bg-paper-raised text-ink hover:bg-paper-sunk dark:border-night-line dark:bg-night-raised dark:text-paper dark:hover:bg-night-sunk",
+  danger:
+    "border border-warn/40 bg-paper-raised text-warn hover:bg-warn-soft dark:border-red-400/40 dark:bg-night-raised dark:text-red-300 dark:hover:bg-red-950/40",
 } as const;
 
 export function buttonClass(tone: keyof typeof buttonTones = "primary", extra = ""): string {

@@ -8,7 +8,7 @@ import { benchProfiles } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { BenchProfileInput } from "@/lib/validations/bench-profile";
 
-export const MAX_BENCH_PROFILES_PER_USER = 50;
+const MAX_BENCH_PROFILES_PER_USER = 50;
 
 async function missingOrForeign(id: number): Promise<never> {
   const rows = await db.select({ id: benchProfiles.id }).from(benchProfiles).where(eq(benchProfiles.id, id)).limit(1);
@@ -22,15 +22,25 @@ export async function createBenchProfile(userId: string, input: BenchProfileInpu
     await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`bench-profiles:${userId}`}))`);
     const [c] = await tx.select({ n: count() }).from(benchProfiles).where(eq(benchProfiles.userId, userId));
     if ((c?.n ?? 0) >= MAX_BENCH_PROFILES_PER_USER) {
-      throw new AppError("conflict", `You already have ${MAX_BENCH_PROFILES_PER_USER} bench profiles; delete one you no longer use first.`);
+      throw new AppError(
+        "conflict",
+        `You already have ${MAX_BENCH_PROFILES_PER_USER} bench profiles; delete one you no longer use first.`,
+      );
     }
-    const [row] = await tx.insert(benchProfiles).values({ ...input, userId }).returning({ id: benchProfiles.id });
+    const [row] = await tx
+      .insert(benchProfiles)
+      .values({ ...input, userId })
+      .returning({ id: benchProfiles.id });
     if (!row) throw new Error("bench profile insert returned nothing");
     return row;
   });
 }
 
-export async function updateBenchProfile(userId: string, id: number, input: BenchProfileInput): Promise<{ id: number }> {
+export async function updateBenchProfile(
+  userId: string,
+  id: number,
+  input: BenchProfileInput,
+): Promise<{ id: number }> {
   const [row] = await db
     .update(benchProfiles)
     .set({ ...input, updatedAt: new Date() })

@@ -23,7 +23,9 @@ export async function claimDueMail(limit: number, leaseS: number, maxAttempts: n
   const due = db
     .select({ id: mailOutbox.id })
     .from(mailOutbox)
-    .where(and(isNull(mailOutbox.sentAt), lte(mailOutbox.nextAttemptAt, sql`now()`), lt(mailOutbox.attempts, maxAttempts)))
+    .where(
+      and(isNull(mailOutbox.sentAt), lte(mailOutbox.nextAttemptAt, sql`now()`), lt(mailOutbox.attempts, maxAttempts)),
+    )
     .orderBy(mailOutbox.nextAttemptAt)
     .limit(limit)
     .for("update", { skipLocked: true });

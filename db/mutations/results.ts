@@ -14,7 +14,7 @@ export type ResultFields = Omit<
   typeof results.$inferInsert,
   "id" | "packId" | "contributorId" | "status" | "idempotencyKey" | "submittedAt" | "publishedAt" | "updatedAt"
 >;
-export type QueuedMail = { to: string; subject: string; text: string; html: string | null };
+type QueuedMail = { to: string; subject: string; text: string; html: string | null };
 
 export type NewSubmission = {
   contributorId: string;
@@ -42,13 +42,26 @@ async function queue(tx: Executor, mail: QueuedMail | null): Promise<void> {
 export async function createSubmission(s: NewSubmission): Promise<{ resultId: number; created: boolean }> {
   try {
     return await db.transaction(async (tx) => {
-      const packId = "packId" in s.pack ? s.pack.packId : (await createProposedPack(tx, s.pack.proposal, s.contributorId)).packId;
+      const packId =
+        "packId" in s.pack ? s.pack.packId : (await createProposedPack(tx, s.pack.proposal, s.contributorId)).packId;
       const [row] = await tx
         .insert(results)
-        .values({ ...s.fields, packId, contributorId: s.contributorId, status: "pending", idempotencyKey: s.idempotencyKey })
+        .values({
+          ...s.fields,
+          packId,
+          contributorId: s.contributorId,
+          status: "pending",
+          idempotencyKey: s.idempotencyKey,
+        })
         .returning({ id: results.id });
       if (!row) throw new Error("result insert returned nothing");
-      await tx.insert(reviewEvents).values({ resultId: row.id, actorId: s.contributorId, fromStatus: null, toStatus: "pending", note: "Submitted." });
+      await tx.insert(reviewEvents).values({
+        resultId: row.id,
+        actorId: s.contributorId,
+        fromStatus: null,
+        toStatus: "pending",
+        note: "Submitted.",
+      });
       // The automatic plausibility flags arrive with the result (same transaction), ready for the review queue.
       await computeAndStoreFlags(row.id, tx);
       await queue(tx, s.receipt);
@@ -65,12 +78,26 @@ export async function createSubmission(s: NewSubmission): Promise<{ resultId: nu
 }
 
 /** Locks the contributor's own result, checking who owns it and that its state allows the change. */
-async function lockOwn(tx: Executor, resultId: number, contributorId: string, allowed: readonly ReviewStatus[], verb: string) {
-  const [row] = await tx.select({ contributorId: results.contributorId, status: results.status }).from(results).where(eq(results.id, resultId)).for("update");
+async function lockOwn(
+  tx: Executor,
+  resultId: number,
+  contributorId: string,
+  allowed: readonly ReviewStatus[],
+  verb: string,
+) {
+  const [row] = await tx
+    .select({ contributorId: results.contributorId, status: results.status })
+    .from(results)
+    .where(eq(results.id, resultId))
+    .for("update");
   if (!row) throw new AppError("not_found", "That result does not exist.");
-  if (row.contributorId !== contributorId) throw new AppError("forbidden", `Only the contributor who submitted a result can ${verb} it.`);
+  if (row.contributorId !== contributorId)
+    throw new AppError("forbidden", `Only the contributor who submitted a result can ${verb} it.`);
   if (!allowed.includes(row.status)) {
-    throw new AppError("conflict", `This result is ${row.status.replace("_", " ")}; only a result ${allowed.map((s) => s.replace("_", " ")).join(" or ")} can be ${verb === "withdraw" ? "withdrawn" : "resubmitted"}.`);
+    throw new AppError(
+      "conflict",
+      `This result is ${row.status.replace("_", " ")}; only a result ${allowed.map((s) => s.replace("_", " ")).join(" or ")} can be ${verb === "withdraw" ? "withdrawn" : "resubmitted"}.`,
+    );
   }
   return row;
 }
@@ -80,16 +107,32 @@ export async function withdrawOwnResult(resultId: number, contributorId: string,
   await db.transaction(async (tx) => {
     const row = await lockOwn(tx, resultId, contributorId, ["pending", "changes_requested"], "withdraw");
     await tx.update(results).set({ status: "withdrawn", updatedAt: new Date() }).where(eq(results.id, resultId));
-    await tx.insert(reviewEvents).values({ resultId, actorId: contributorId, fromStatus: row.status, toStatus: "withdrawn", note: note ?? "Withdrawn by the contributor." });
+    await tx.insert(reviewEvents).values({
+      resultId,
+      actorId: contributorId,
+      fromStatus: row.status,
+      toStatus: "withdrawn",
+      note: note ?? "Withdrawn by the contributor.",
+    });
   });
 }
 
 /** The contributor's answer to a change request: new method card and figures, back to pending, history kept. */
-export async function resubmitOwnResult(resultId: number, contributorId: string, fields: Partial<ResultFields>, note: string): Promise<void> {
+export async function resubmitOwnResult(
+  resultId: number,
+  contributorId: string,
+  fields: Partial<ResultFields>,
+  note: string,
+): Promise<void> {
   await db.transaction(async (tx) => {
     await lockOwn(tx, resultId, contributorId, ["changes_requested"], "resubmit");
-    await tx.update(results).set({ ...fields, status: "pending", updatedAt: new Date() }).where(eq(results.id, resultId));
-    await tx.insert(reviewEvents).values({ resultId, actorId: contributorId, fromStatus: "changes_requested", toStatus: "pending", note });
+    await tx
+      .update(results)
+      .set({ ...fields, status: "pending", updatedAt: new Date() })
+      .where(eq(results.id, resultId));
+    await tx
+      .insert(reviewEvents)
+      .values({ resultId, actorId: contributorId, fromStatus: "changes_requested", toStatus: "pending", note });
     // New method card or figures: the plausibility flags are computed again.
     await computeAndStoreFlags(resultId, tx);
   });

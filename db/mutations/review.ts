@@ -1,6 +1,6 @@
 // Moderation writes. Each status change and its review_events row share one transaction, with the result
 // row locked (SELECT … FOR UPDATE) and its status re-checked, so two moderators can never both decide the
-// same result. Revalidation and e-mail run only after the commit (db/mutations/review-effects.ts).
+// same result. Revalidation and e-mail run only after the commit, in the service (server/review.ts).
 import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { db, type Executor, type Transaction } from "@/db";
@@ -9,9 +9,21 @@ import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewSt
 import type { PlausibilityFlag } from "@/db/schema/results";
 import { plausibilityFlags } from "@/lib/analysis/plausibility";
 import { AppError } from "@/lib/errors";
+import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { packTitle } from "@/lib/format";
-import { rejectReasonLabels, type FlagResolution, type RejectReason } from "@/lib/validations/review";
-import { notifyDecision, revalidateResult, type ResultContext } from "./review-effects";
+import type { FlagResolution, RejectReason } from "@/lib/validations/review";
+
+/** What the after-effects of a moderation write need: the result, its pack and group, who submitted it. */
+export type ResultContext = {
+  resultId: number;
+  packId: number;
+  packSlug: string;
+  makerSlug: string;
+  groupKey: string;
+  packTitle: string;
+  contributorId: string;
+  contributorEmail: string | null;
+};
 
 /**
  * Computes the automatic plausibility flags of a result and stores them on it (results.flags). The
@@ -36,8 +48,15 @@ export async function computeAndStoreFlags(resultId: number, exec: Executor = db
 export async function lockResult(tx: Transaction, resultId: number): Promise<ResultContext & { status: ReviewStatus }> {
   const [row] = await tx
     .select({
-      status: results.status, packId: results.packId, groupKey: results.groupKey, contributorId: results.contributorId,
-      packSlug: packs.slug, model: packs.model, makerSlug: makers.slug, makerName: makers.name, contributorEmail: users.email,
+      status: results.status,
+      packId: results.packId,
+      groupKey: results.groupKey,
+      contributorId: results.contributorId,
+      packSlug: packs.slug,
+      model: packs.model,
+      makerSlug: makers.slug,
+      makerName: makers.name,
+      contributorEmail: users.email,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -51,7 +70,15 @@ export async function lockResult(tx: Transaction, resultId: number): Promise<Res
 
 export async function transition(
   tx: Transaction,
-  p: { resultId: number; actorId: string | null; from: ReviewStatus; to: ReviewStatus; reason?: string | null; note?: string | null; publish?: boolean },
+  p: {
+    resultId: number;
+    actorId: string | null;
+    from: ReviewStatus;
+    to: ReviewStatus;
+    reason?: string | null;
+    note?: string | null;
+    publish?: boolean;
+  },
 ): Promise<void> {
   const now = new Date();
   const updated = await tx
@@ -59,9 +86,16 @@ export async function transition(
     .set({ status: p.to, updatedAt: now, ...(p.publish ? { publishedAt: now } : {}) })
     .where(and(eq(results.id, p.resultId), eq(results.status, p.from)))
     .returning({ id: results.id });
-  if (updated.length !== 1) throw new AppError("conflict", "This result changed while you were looking at it. Reload and try again.");
+  if (updated.length !== 1)
+    throw new AppError("conflict", "This result changed while you were looking at it. Reload and try again.");
   await tx.insert(reviewEvents).values({
-    resultId: p.resultId, actorId: p.actorId, fromStatus: p.from, toStatus: p.to, reason: p.reason ?? null, note: p.note ?? null, createdAt: now,
+    resultId: p.resultId,
+    actorId: p.actorId,
+    fromStatus: p.from,
+    toStatus: p.to,
+    reason: p.reason ?? null,
+    note: p.note ?? null,
+    createdAt: now,
   });
 }
 
@@ -71,56 +105,74 @@ export type Decision =
   | { kind: "request-changes"; note: string };
 
 const decisionStatus = { approve: "approved", reject: "rejected", "request-changes": "changes_requested" } as const;
+export type DecisionStatus = (typeof decisionStatus)[Decision["kind"]];
 
-/** Approve, reject or request changes on a pending result. A moderator cannot decide their own result. */
-export async function decideResult(actorId: string, resultId: number, decision: Decision): Promise<{ resultId: number; status: ReviewStatus }> {
+/**
+ * Approve, reject or request changes on a pending result, in one transaction. A moderator cannot decide
+ * their own result. Returns what the after-effects need (server/review.ts#decideResult runs them).
+ */
+export async function writeDecision(
+  actorId: string,
+  resultId: number,
+  decision: Decision,
+): Promise<{ ctx: ResultContext; status: DecisionStatus }> {
   const to = decisionStatus[decision.kind];
   const reason = decision.kind === "reject" ? decision.reason : null;
   const ctx = await db.transaction(async (tx) => {
     const c = await lockResult(tx, resultId);
-    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
-    if (c.status !== "pending") throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
-    await transition(tx, { resultId, actorId, from: "pending", to, reason, note: decision.note, publish: to === "approved" });
+    if (c.contributorId === actorId)
+      throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
+    if (c.status !== "pending")
+      throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
+    await transition(tx, {
+      resultId,
+      actorId,
+      from: "pending",
+      to,
+      reason,
+      note: decision.note,
+      publish: to === "approved",
+    });
     return c;
   });
-  if (to === "approved") revalidateResult(ctx);
-  const said = [reason ? `Reason: ${rejectReasonLabels[decision.kind === "reject" ? decision.reason : "other"]}.` : null, decision.note].filter(Boolean).join(" ");
-  await notifyDecision(ctx, to, said || null);
-  return { resultId, status: to };
+  return { ctx, status: to };
 }
 
-/** What a resolution did: the moderator's page names the flag, the result and the result's status after it. */
-export type ResolvedFlag = {
-  flagId: number; resolution: FlagResolution; resultId: number; status: ReviewStatus;
-  /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
-  alsoClosed: number;
+const resolutionStatus: Record<FlagResolution, ReviewStatus> = {
+  kept: "approved",
+  corrected: "approved",
+  withdrawn: "withdrawn",
 };
-
-const resolutionStatus: Record<FlagResolution, ReviewStatus> = { kept: "approved", corrected: "approved", withdrawn: "withdrawn" };
 
 /**
  * Resolves an open reader flag: keep the result, correct it (the note says what), or withdraw it. The result
  * stays disputed while other flags are still open, unless it is withdrawn, which closes them all. A withdrawn
  * result is never deleted: it and its history stay in the audit log.
  */
-export async function resolveReaderFlag(
+export async function writeFlagResolution(
   actorId: string,
   flagId: number,
   resolution: FlagResolution,
   note: string | null,
-): Promise<ResolvedFlag> {
+): Promise<{ ctx: ResultContext; resolved: ResolvedFlag }> {
   const { ctx, status, alsoClosed } = await db.transaction(async (tx) => {
     const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
     if (!flag) throw new AppError("not_found", "That flag does not exist.");
     const c = await lockResult(tx, flag.resultId);
-    if (c.contributorId === actorId) throw new AppError("forbidden", "You cannot resolve a flag on your own result; another moderator has to.");
+    if (c.contributorId === actorId)
+      throw new AppError("forbidden", "You cannot resolve a flag on your own result; another moderator has to.");
     if (flag.status !== "open") throw new AppError("conflict", "This flag has already been resolved.");
     const now = new Date();
     const close = { status: resolution, resolvedById: actorId, resolutionNote: note, resolvedAt: now } as const;
-    await tx.update(readerFlags).set(close).where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
+    await tx
+      .update(readerFlags)
+      .set(close)
+      .where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
     let alsoClosed = 0;
     if (resolution === "withdrawn") {
-      const others = await tx.update(readerFlags).set(close)
+      const others = await tx
+        .update(readerFlags)
+        .set(close)
         .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)))
         .returning({ id: readerFlags.id });
       alsoClosed = others.length;
@@ -131,11 +183,17 @@ export async function resolveReaderFlag(
       .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open")));
     const to = resolutionStatus[resolution];
     if (c.status === "disputed" && stillOpen.length === 0) {
-      await transition(tx, { resultId: flag.resultId, actorId, from: "disputed", to, reason: `flag-${resolution}`, note });
+      await transition(tx, {
+        resultId: flag.resultId,
+        actorId,
+        from: "disputed",
+        to,
+        reason: `flag-${resolution}`,
+        note,
+      });
       return { ctx: c, status: to, alsoClosed };
     }
     return { ctx: c, status: c.status, alsoClosed };
   });
-  revalidateResult(ctx);
-  return { flagId, resolution, resultId: ctx.resultId, status, alsoClosed };
+  return { ctx, resolved: { flagId, resolution, resultId: ctx.resultId, status, alsoClosed } };
 }

@@ -3,10 +3,20 @@ import "server-only";
 import { db } from "@/db";
 import { savedCharts } from "@/db/schema";
 
-export type NewSavedChart = { id: string; kind: "label-check" | "curves" | "maker-ranking"; title: string; note: string | null; state: Record<string, unknown>; createdById: string };
+export type NewSavedChart = {
+  id: string;
+  kind: "label-check" | "curves" | "maker-ranking";
+  title: string;
+  note: string | null;
+  state: Record<string, unknown>;
+  createdById: string;
+};
 
 export async function insertSavedChart(chart: NewSavedChart): Promise<{ id: string; createdAt: Date }> {
-  const [row] = await db.insert(savedCharts).values(chart).returning({ id: savedCharts.id, createdAt: savedCharts.createdAt });
+  const [row] = await db
+    .insert(savedCharts)
+    .values(chart)
+    .returning({ id: savedCharts.id, createdAt: savedCharts.createdAt });
   if (!row) throw new Error("saved chart not returned");
   return row;
 }

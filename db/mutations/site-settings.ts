@@ -15,10 +15,17 @@ export async function saveSiteSettings(actorId: string, input: SiteSettingsInput
       updatedById: actorId,
       updatedAt: new Date(),
     };
-    await tx.insert(siteSettings).values({ id: 1, ...values }).onConflictDoUpdate({ target: siteSettings.id, set: values });
-    const from = before ? { notice: before.notice, submissionsPaused: before.submissionsPaused, pauseReason: before.pauseReason } : null;
+    await tx
+      .insert(siteSettings)
+      .values({ id: 1, ...values })
+      .onConflictDoUpdate({ target: siteSettings.id, set: values });
+    const from = before
+      ? { notice: before.notice, submissionsPaused: before.submissionsPaused, pauseReason: before.pauseReason }
+      : null;
     const to = { notice: values.notice, submissionsPaused: values.submissionsPaused, pauseReason: values.pauseReason };
-    await tx.insert(auditEvents).values({ actorId, action: "settings.edit", entityType: "site-settings", entityId: "1", data: { from, to } });
+    await tx
+      .insert(auditEvents)
+      .values({ actorId, action: "settings.edit", entityType: "site-settings", entityId: "1", data: { from, to } });
     return to;
   });
 }

@@ -6,7 +6,11 @@ import { packs, watches } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 
 export async function watchPack(userId: string, packId: number): Promise<void> {
-  const pack = await db.select({ id: packs.id }).from(packs).where(and(eq(packs.id, packId), ne(packs.status, "merged"))).limit(1);
+  const pack = await db
+    .select({ id: packs.id })
+    .from(packs)
+    .where(and(eq(packs.id, packId), ne(packs.status, "merged")))
+    .limit(1);
   if (pack.length === 0) throw new AppError("not_found", "That pack does not exist.");
   await db.insert(watches).values({ userId, packId }).onConflictDoNothing();
 }

@@ -7,11 +7,19 @@ export type BenchProfile = typeof benchProfiles.$inferSelect;
 
 /** A contributor's bench profiles, by name. */
 export async function listBenchProfilesForUser(userId: string): Promise<BenchProfile[]> {
-  return db.select().from(benchProfiles).where(eq(benchProfiles.userId, userId)).orderBy(asc(benchProfiles.name), asc(benchProfiles.id));
+  return db
+    .select()
+    .from(benchProfiles)
+    .where(eq(benchProfiles.userId, userId))
+    .orderBy(asc(benchProfiles.name), asc(benchProfiles.id));
 }
 
 /** One of the user's own profiles; null when it does not exist or belongs to someone else. */
 export async function getBenchProfileForUser(userId: string, id: number): Promise<BenchProfile | null> {
-  const rows = await db.select().from(benchProfiles).where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId))).limit(1);
+  const rows = await db
+    .select()
+    .from(benchProfiles)
+    .where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId)))
+    .limit(1);
   return rows[0] ?? null;
 }

@@ -1,6 +1,6 @@
 // Reads for /admin/catalogue: every maker and pack that is not merged away, with how many results they hold.
 import "server-only";
-import { asc, count, eq, ne } from "drizzle-orm";
+import { asc, count, eq, inArray, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 
@@ -17,9 +17,18 @@ export async function listCatalogueMakers() {
 export async function listCataloguePacks() {
   return db
     .select({
-      id: packs.id, slug: packs.slug, model: packs.model, makerName: makers.name, status: packs.status,
-      cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, labelledContinuousC: packs.labelledContinuousC,
-      labelledBurstC: packs.labelledBurstC, weightG: packs.weightG, connector: packs.connector, results: count(results.id),
+      id: packs.id,
+      slug: packs.slug,
+      model: packs.model,
+      makerName: makers.name,
+      status: packs.status,
+      cellsInSeries: packs.cellsInSeries,
+      ratedCapacityMah: packs.ratedCapacityMah,
+      labelledContinuousC: packs.labelledContinuousC,
+      labelledBurstC: packs.labelledBurstC,
+      weightG: packs.weightG,
+      connector: packs.connector,
+      results: count(results.id),
     })
     .from(packs)
     .innerJoin(makers, eq(makers.id, packs.makerId))
@@ -29,4 +38,13 @@ export async function listCataloguePacks() {
     .orderBy(asc(makers.name), asc(packs.model));
 }
 export type CataloguePack = Awaited<ReturnType<typeof listCataloguePacks>>[number];
-export type CatalogueMaker = Awaited<ReturnType<typeof listCatalogueMakers>>[number];
+
+/** The like-for-like groups the results of these packs are in. */
+export async function listGroupKeysOfPacks(packIds: number[]): Promise<string[]> {
+  if (packIds.length === 0) return [];
+  const rows = await db
+    .selectDistinct({ groupKey: results.groupKey })
+    .from(results)
+    .where(inArray(results.packId, packIds));
+  return rows.map((r) => r.groupKey);
+}

@@ -14,8 +14,15 @@ export type GroupSummary = DescribedGroup & { resultCount: number; packCount: nu
 /** Groups that hold published results, the most packs first. Labels come from a representative method card. */
 export async function listPublicGroups(): Promise<GroupSummary[]> {
   const rows = await db.execute<{
-    group_key: string; result_count: string; pack_count: string; resistance_method: string; ambient_temperature_c: number;
-    cutoff_v_per_cell: number; load_current_a: number; rated_capacity_mah: number; cycles_before_test: number;
+    group_key: string;
+    result_count: string;
+    pack_count: string;
+    resistance_method: string;
+    ambient_temperature_c: number;
+    cutoff_v_per_cell: number;
+    load_current_a: number;
+    rated_capacity_mah: number;
+    cycles_before_test: number;
   }>(sql`
     select distinct on (r.group_key) r.group_key, c.result_count, c.pack_count, r.resistance_method, r.ambient_temperature_c,
            r.cutoff_v_per_cell, r.load_current_a, p.rated_capacity_mah, r.cycles_before_test
@@ -28,8 +35,12 @@ export async function listPublicGroups(): Promise<GroupSummary[]> {
   return rows.rows
     .map((r) => ({
       ...describeGroup({
-        resistanceMethod: r.resistance_method, ambientC: r.ambient_temperature_c, cutoffVPerCell: r.cutoff_v_per_cell,
-        loadCurrentA: r.load_current_a, ratedMah: r.rated_capacity_mah, cyclesBeforeTest: r.cycles_before_test,
+        resistanceMethod: r.resistance_method,
+        ambientC: r.ambient_temperature_c,
+        cutoffVPerCell: r.cutoff_v_per_cell,
+        loadCurrentA: r.load_current_a,
+        ratedMah: r.rated_capacity_mah,
+        cyclesBeforeTest: r.cycles_before_test,
       }),
       key: r.group_key,
       resultCount: Number(r.result_count),
@@ -58,7 +69,12 @@ export type PackInGroup = {
 export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]> {
   const rows = await db
     .select({
-      packId: packs.id, packSlug: packs.slug, model: packs.model, makerName: makers.name, makerSlug: makers.slug, labelledC: packs.labelledContinuousC,
+      packId: packs.id,
+      packSlug: packs.slug,
+      model: packs.model,
+      makerName: makers.name,
+      makerSlug: makers.slug,
+      labelledC: packs.labelledContinuousC,
       n: sql<number>`count(*)::int`,
       measuredN: sql<number>`count(${results.sagLimitedC})::int`,
       measuredMedian: sql<number | null>`percentile_cont(0.5) within group (order by ${results.sagLimitedC})`,
@@ -77,18 +93,37 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
     .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
   return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, ...r }) => ({
     ...r,
-    measuredC: measuredMedian === null || measuredN === 0 ? null : { median: measuredMedian, n: measuredN, min: Number(measuredMin), max: Number(measuredMax) },
+    measuredC:
+      measuredMedian === null || measuredN === 0
+        ? null
+        : { median: measuredMedian, n: measuredN, min: Number(measuredMin), max: Number(measuredMax) },
   }));
 }
 
-export type MakerRank = { makerSlug: string; makerName: string; medianLabelRatio: number; packs: number; results: number; min: number; max: number };
+export type MakerRank = {
+  makerSlug: string;
+  makerName: string;
+  medianLabelRatio: number;
+  packs: number;
+  results: number;
+  min: number;
+  max: number;
+};
 
 /**
  * Makers ranked by the median of their packs' median label ratios inside one group. Each pack counts
  * once, so a pack tested twenty times does not outweigh the rest of its maker's range.
  */
 export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> {
-  const rows = await db.execute<{ maker_slug: string; maker_name: string; median: number; packs: number; results: number; min: number; max: number }>(sql`
+  const rows = await db.execute<{
+    maker_slug: string;
+    maker_name: string;
+    median: number;
+    packs: number;
+    results: number;
+    min: number;
+    max: number;
+  }>(sql`
     with per_pack as (
       select r.pack_id, percentile_cont(0.5) within group (order by r.label_ratio) as m, count(*) as n
       from ${results} r
@@ -103,7 +138,12 @@ export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> 
     group by mk.id
     order by median desc, mk.name`);
   return rows.rows.map((r) => ({
-    makerSlug: r.maker_slug, makerName: r.maker_name, medianLabelRatio: Number(r.median), packs: Number(r.packs),
-    results: Number(r.results), min: Number(r.min), max: Number(r.max),
+    makerSlug: r.maker_slug,
+    makerName: r.maker_name,
+    medianLabelRatio: Number(r.median),
+    packs: Number(r.packs),
+    results: Number(r.results),
+    min: Number(r.min),
+    max: Number(r.max),
   }));
 }

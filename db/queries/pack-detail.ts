@@ -2,12 +2,21 @@
 // C, the cycling series with its trend, and prepared discharge curves.
 import "server-only";
 import { PACK_PAGE_CURVE_POINTS, prepareCurve, type ChartPoint } from "@/lib/curves";
-import { cycleSeries, describeResultGroup, figuresByGroup, sustainedC, type CycleSeries, type GroupFigures, type PublicResultRow } from "@/lib/pack-summary";
-import { getPackBySlug, type PackSummary } from "./packs";
+import {
+  cycleSeries,
+  describeResultGroup,
+  figuresByGroup,
+  sustainedC,
+  type CycleSeries,
+  type GroupFigures,
+  type PublicResultRow,
+} from "@/lib/pack-summary";
+import type { PackSummary } from "@/lib/catalogue";
+import { getPackBySlug } from "./packs";
 import { getPublicCurves, listPublicResultsForPacks } from "./results";
 
 /** Curves drawn on a pack page (the newest results); the rest are listed. */
-export const PACK_PAGE_MAX_CURVES = 6;
+const PACK_PAGE_MAX_CURVES = 6;
 
 export type PackDetail = {
   pack: PackSummary;
@@ -30,7 +39,14 @@ export async function getPackDetail(slug: string): Promise<PackDetail | null> {
     const curve = stored.get(r.id);
     if (!curve) return [];
     const g = describeResultGroup(r);
-    return [{ resultId: r.id, groupKey: r.groupKey, label: `#${r.id} · ${g.parts.resistance.label}, ${g.parts.ambient.label}, ${g.parts.rate.label}, ${g.parts.age.label}`, points: prepareCurve(curve, pack.cellsInSeries, PACK_PAGE_CURVE_POINTS) }];
+    return [
+      {
+        resultId: r.id,
+        groupKey: r.groupKey,
+        label: `#${r.id} · ${g.parts.resistance.label}, ${g.parts.ambient.label}, ${g.parts.rate.label}, ${g.parts.age.label}`,
+        points: prepareCurve(curve, pack.cellsInSeries, PACK_PAGE_CURVE_POINTS),
+      },
+    ];
   });
   return {
     pack,

@@ -2,18 +2,9 @@ import "server-only";
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
+import type { PackRow, PackSummary } from "@/lib/catalogue";
 import { listPacksInGroup } from "./groups";
 import { isPublic } from "./results";
-
-/** A pack's label as printed (cells, capacity, C ratings, weight, connector): shared by every catalogue read. */
-export type PackLabelFields = {
-  cellsInSeries: number;
-  ratedCapacityMah: number;
-  labelledContinuousC: number;
-  labelledBurstC: number | null;
-  weightG: number | null;
-  connector: string;
-};
 
 /** The columns of PackLabelFields, to spread into a select. */
 export const packLabelColumns = {
@@ -24,8 +15,6 @@ export const packLabelColumns = {
   weightG: packs.weightG,
   connector: packs.connector,
 };
-
-export type PackSummary = { id: number; slug: string; model: string; makerName: string; makerSlug: string } & PackLabelFields;
 
 const packColumns = {
   id: packs.id,
@@ -56,23 +45,16 @@ export async function getPackBySlug(slug: string): Promise<PackSummary | null> {
   return rows[0] ?? null;
 }
 
-/** A row of the packs table: the label, how many published results, and (for a chosen group) medians. */
-export type PackRow = PackSummary & {
-  resultCount: number;
-  groupCount: number;
-  /** Medians inside the chosen like-for-like group; null without a group or without results in it. */
-  measuredC: number | null;
-  labelRatio: number | null;
-  capacityRatio: number | null;
-  groupN: number;
-};
-
 /** Every active pack with its published-result counts; with a group, the pack's medians in it. */
 export async function listPackRows(groupKey: string | null): Promise<PackRow[]> {
   const [list, counts, inGroup] = await Promise.all([
     listActivePacks(),
     db
-      .select({ packId: results.packId, n: sql<number>`count(*)::int`, groups: sql<number>`count(distinct ${results.groupKey})::int` })
+      .select({
+        packId: results.packId,
+        n: sql<number>`count(*)::int`,
+        groups: sql<number>`count(distinct ${results.groupKey})::int`,
+      })
       .from(results)
       .where(isPublic)
       .groupBy(results.packId),

@@ -3,7 +3,12 @@ import { desc, eq, inArray, asc } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
 
-export type ContributorResultEvent = { fromStatus: ReviewStatus | null; toStatus: ReviewStatus; reason: string | null; createdAt: Date };
+type ContributorResultEvent = {
+  fromStatus: ReviewStatus | null;
+  toStatus: ReviewStatus;
+  reason: string | null;
+  createdAt: Date;
+};
 export type ContributorResult = {
   id: number;
   packSlug: string;
@@ -40,9 +45,20 @@ export async function listResultsByContributor(userId: string, limit = 200): Pro
     .limit(limit);
   if (rows.length === 0) return [];
   const events = await db
-    .select({ resultId: reviewEvents.resultId, fromStatus: reviewEvents.fromStatus, toStatus: reviewEvents.toStatus, reason: reviewEvents.reason, createdAt: reviewEvents.createdAt })
+    .select({
+      resultId: reviewEvents.resultId,
+      fromStatus: reviewEvents.fromStatus,
+      toStatus: reviewEvents.toStatus,
+      reason: reviewEvents.reason,
+      createdAt: reviewEvents.createdAt,
+    })
     .from(reviewEvents)
-    .where(inArray(reviewEvents.resultId, rows.map((r) => r.id)))
+    .where(
+      inArray(
+        reviewEvents.resultId,
+        rows.map((r) => r.id),
+      ),
+    )
     .orderBy(asc(reviewEvents.createdAt), asc(reviewEvents.id));
   const byResult = new Map<number, ContributorResultEvent[]>();
   for (const { resultId, ...e } of events) {

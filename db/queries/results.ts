@@ -1,5 +1,5 @@
 // Reads of published results. Public = approved or disputed (disputed stay visible, marked). Dates leave
-// as ISO strings so the cached reads (lib/public-data.ts) survive JSON round trips.
+// as ISO strings so the cached reads (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
@@ -7,12 +7,12 @@ import { makers, packs, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
-export const PUBLIC_STATUSES = ["approved", "disputed"] as const;
+const PUBLIC_STATUSES = ["approved", "disputed"] as const;
 export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
-export const publicResultColumns = {
+const publicResultColumns = {
   id: results.id,
   packId: results.packId,
   status: results.status,
@@ -64,7 +64,10 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
 /** Stored chart curves of the given published results. */
 export async function getPublicCurves(resultIds: number[]): Promise<Map<number, CurvePoint[]>> {
   if (resultIds.length === 0) return new Map();
-  const rows = await db.select({ id: results.id, curve: results.curve }).from(results).where(and(inArray(results.id, resultIds), isPublic));
+  const rows = await db
+    .select({ id: results.id, curve: results.curve })
+    .from(results)
+    .where(and(inArray(results.id, resultIds), isPublic));
   return new Map(rows.map((r) => [r.id, r.curve]));
 }
 
@@ -84,8 +87,15 @@ export type NewestResult = {
 export async function listNewestApprovedResults(limit: number): Promise<NewestResult[]> {
   const rows = await db
     .select({
-      id: results.id, publishedAt: results.publishedAt, packSlug: packs.slug, packModel: packs.model, makerName: makers.name,
-      groupKey: results.groupKey, capacityMah: results.capacityMah, sagLimitedC: results.sagLimitedC, labelRatio: results.labelRatio,
+      id: results.id,
+      publishedAt: results.publishedAt,
+      packSlug: packs.slug,
+      packModel: packs.model,
+      makerName: makers.name,
+      groupKey: results.groupKey,
+      capacityMah: results.capacityMah,
+      sagLimitedC: results.sagLimitedC,
+      labelRatio: results.labelRatio,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -97,13 +107,31 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
 }
 
 export type ResultDetail = PublicResultRow & {
-  pack: { slug: string; model: string; makerName: string; makerSlug: string; cellsInSeries: number; labelledContinuousC: number; labelledBurstC: number | null; weightG: number | null; connector: string };
+  pack: {
+    slug: string;
+    model: string;
+    makerName: string;
+    makerSlug: string;
+    cellsInSeries: number;
+    labelledContinuousC: number;
+    labelledBurstC: number | null;
+    weightG: number | null;
+    connector: string;
+  };
   contributor: string;
   notes: string | null;
   submittedAt: string;
   figures: Figures;
   curve: CurvePoint[];
-  events: { id: number; at: string; from: string | null; to: string; reason: string | null; note: string | null; actor: "contributor" | "moderator" | "system" }[];
+  events: {
+    id: number;
+    at: string;
+    from: string | null;
+    to: string;
+    reason: string | null;
+    note: string | null;
+    actor: "contributor" | "moderator" | "system";
+  }[];
 };
 
 /** One published result with everything its page shows; null when missing or not public. */
@@ -111,10 +139,22 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
   const [row] = await db
     .select({
       ...publicResultColumns,
-      notes: results.notes, submittedAt: results.submittedAt, figures: results.figures, curve: results.curve,
-      contributorId: results.contributorId, contributorName: users.displayName, contributorAnonymous: users.anonymous,
-      packSlug: packs.slug, packModel: packs.model, makerName: makers.name, makerSlug: makers.slug, cellsInSeries: packs.cellsInSeries,
-      labelledContinuousC: packs.labelledContinuousC, labelledBurstC: packs.labelledBurstC, weightG: packs.weightG, connector: packs.connector,
+      notes: results.notes,
+      submittedAt: results.submittedAt,
+      figures: results.figures,
+      curve: results.curve,
+      contributorId: results.contributorId,
+      contributorName: users.displayName,
+      contributorAnonymous: users.anonymous,
+      packSlug: packs.slug,
+      packModel: packs.model,
+      makerName: makers.name,
+      makerSlug: makers.slug,
+      cellsInSeries: packs.cellsInSeries,
+      labelledContinuousC: packs.labelledContinuousC,
+      labelledBurstC: packs.labelledBurstC,
+      weightG: packs.weightG,
+      connector: packs.connector,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -124,21 +164,62 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .limit(1);
   if (!row) return null;
   const events = await db
-    .select({ id: reviewEvents.id, at: reviewEvents.createdAt, from: reviewEvents.fromStatus, to: reviewEvents.toStatus, reason: reviewEvents.reason, note: reviewEvents.note, actorId: reviewEvents.actorId })
+    .select({
+      id: reviewEvents.id,
+      at: reviewEvents.createdAt,
+      from: reviewEvents.fromStatus,
+      to: reviewEvents.toStatus,
+      reason: reviewEvents.reason,
+      note: reviewEvents.note,
+      actorId: reviewEvents.actorId,
+    })
     .from(reviewEvents)
     .where(eq(reviewEvents.resultId, id))
     .orderBy(asc(reviewEvents.createdAt), asc(reviewEvents.id));
-  const { contributorId, contributorName, contributorAnonymous, packSlug, packModel, makerName, makerSlug, cellsInSeries, labelledContinuousC, labelledBurstC, weightG, connector, notes, submittedAt, figures, curve, ...rest } = row;
+  const {
+    contributorId,
+    contributorName,
+    contributorAnonymous,
+    packSlug,
+    packModel,
+    makerName,
+    makerSlug,
+    cellsInSeries,
+    labelledContinuousC,
+    labelledBurstC,
+    weightG,
+    connector,
+    notes,
+    submittedAt,
+    figures,
+    curve,
+    ...rest
+  } = row;
   return {
     ...toRow(rest),
-    pack: { slug: packSlug, model: packModel, makerName, makerSlug, cellsInSeries, labelledContinuousC, labelledBurstC, weightG, connector },
+    pack: {
+      slug: packSlug,
+      model: packModel,
+      makerName,
+      makerSlug,
+      cellsInSeries,
+      labelledContinuousC,
+      labelledBurstC,
+      weightG,
+      connector,
+    },
     contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
     notes,
     submittedAt: new Date(submittedAt).toISOString(),
     figures,
     curve,
     events: events.map((e) => ({
-      id: e.id, at: new Date(e.at).toISOString(), from: e.from, to: e.to, reason: e.reason, note: e.note,
+      id: e.id,
+      at: new Date(e.at).toISOString(),
+      from: e.from,
+      to: e.to,
+      reason: e.reason,
+      note: e.note,
       // Reviewers are named by role only; the contributor is already credited above (or anonymous).
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),

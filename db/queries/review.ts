@@ -15,9 +15,15 @@ const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !=
 export async function getPlausibilityInput(resultId: number, exec: Executor = db): Promise<PlausibilityInput | null> {
   const [r] = await exec
     .select({
-      figures: results.figures, ambientTemperatureC: results.ambientTemperatureC, cutoffVPerCell: results.cutoffVPerCell,
-      groupKey: results.groupKey, logSha256: results.logSha256,
-      cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, packStatus: packs.status, makerStatus: makers.status,
+      figures: results.figures,
+      ambientTemperatureC: results.ambientTemperatureC,
+      cutoffVPerCell: results.cutoffVPerCell,
+      groupKey: results.groupKey,
+      logSha256: results.logSha256,
+      cellsInSeries: packs.cellsInSeries,
+      ratedCapacityMah: packs.ratedCapacityMah,
+      packStatus: packs.status,
+      makerStatus: makers.status,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -48,14 +54,28 @@ export async function getPlausibilityInput(resultId: number, exec: Executor = db
   };
 }
 
-export type QueueItem = {
-  id: number; packSlug: string; packModel: string; makerName: string; makerSlug: string; groupKey: string;
-  contributorName: string; submittedAt: Date; flags: PlausibilityFlag[]; capacityMah: number | null; labelRatio: number | null;
+type QueueItem = {
+  id: number;
+  packSlug: string;
+  packModel: string;
+  makerName: string;
+  makerSlug: string;
+  groupKey: string;
+  contributorName: string;
+  submittedAt: Date;
+  flags: PlausibilityFlag[];
+  capacityMah: number | null;
+  labelRatio: number | null;
 };
 export type ReviewQueue = {
   items: QueueItem[];
   total: number;
-  counts: { flags: Record<string, number>; unflagged: number; makers: { slug: string; name: string; n: number }[]; groups: { key: string; n: number }[] };
+  counts: {
+    flags: Record<string, number>;
+    unflagged: number;
+    makers: { slug: string; name: string; n: number }[];
+    groups: { key: string; n: number }[];
+  };
 };
 
 /** Pending results, oldest first, filtered; counts are over all pending results so filters show what they hide. */
@@ -68,9 +88,18 @@ export async function listReviewQueue(filter: ReviewQueueFilter = {}, limit = 20
   else if (filter.flag) where.push(sql`${results.flags} @> ${JSON.stringify([{ code: filter.flag }])}::jsonb`);
   const items = await db
     .select({
-      id: results.id, packSlug: packs.slug, packModel: packs.model, makerName: makers.name, makerSlug: makers.slug,
-      groupKey: results.groupKey, displayName: users.displayName, email: users.email, submittedAt: results.submittedAt,
-      flags: results.flags, capacityMah: results.capacityMah, labelRatio: results.labelRatio,
+      id: results.id,
+      packSlug: packs.slug,
+      packModel: packs.model,
+      makerName: makers.name,
+      makerSlug: makers.slug,
+      groupKey: results.groupKey,
+      displayName: users.displayName,
+      email: users.email,
+      submittedAt: results.submittedAt,
+      flags: results.flags,
+      capacityMah: results.capacityMah,
+      labelRatio: results.labelRatio,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
@@ -98,28 +127,46 @@ export async function listReviewQueue(filter: ReviewQueueFilter = {}, limit = 20
     groupCounts.set(r.groupKey, (groupCounts.get(r.groupKey) ?? 0) + 1);
   }
   return {
-    items: items.map(({ displayName, email, ...i }) => ({ ...i, contributorName: displayName?.trim() || email || "unknown" })),
+    items: items.map(({ displayName, email, ...i }) => ({
+      ...i,
+      contributorName: displayName?.trim() || email || "unknown",
+    })),
     total: all.length,
     counts: {
       flags,
       unflagged,
       makers: [...makerCounts.values()].sort((a, b) => a.name.localeCompare(b.name)),
-      groups: [...groupCounts.entries()].map(([key, n]) => ({ key, n })).sort((a, b) => b.n - a.n || a.key.localeCompare(b.key)),
+      groups: [...groupCounts.entries()]
+        .map(([key, n]) => ({ key, n }))
+        .sort((a, b) => b.n - a.n || a.key.localeCompare(b.key)),
     },
   };
 }
 
 export type HistoryEvent = {
-  id: number; fromStatus: ReviewStatus | null; toStatus: ReviewStatus; reason: string | null; note: string | null;
-  createdAt: Date; actorRole: "contributor" | "moderator" | "admin" | "system"; actorName: string | null;
+  id: number;
+  fromStatus: ReviewStatus | null;
+  toStatus: ReviewStatus;
+  reason: string | null;
+  note: string | null;
+  createdAt: Date;
+  actorRole: "contributor" | "moderator" | "admin" | "system";
+  actorName: string | null;
 };
 
 /** The full review history of a result, oldest first. Actor names are for moderators; pages for the public show the role. */
-export async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
+async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
   const rows = await db
     .select({
-      id: reviewEvents.id, fromStatus: reviewEvents.fromStatus, toStatus: reviewEvents.toStatus, reason: reviewEvents.reason,
-      note: reviewEvents.note, createdAt: reviewEvents.createdAt, role: users.role, displayName: users.displayName, email: users.email,
+      id: reviewEvents.id,
+      fromStatus: reviewEvents.fromStatus,
+      toStatus: reviewEvents.toStatus,
+      reason: reviewEvents.reason,
+      note: reviewEvents.note,
+      createdAt: reviewEvents.createdAt,
+      role: users.role,
+      displayName: users.displayName,
+      email: users.email,
     })
     .from(reviewEvents)
     .leftJoin(users, eq(users.id, reviewEvents.actorId))
@@ -132,9 +179,22 @@ export async function getReviewHistory(resultId: number): Promise<HistoryEvent[]
   }));
 }
 
-export type GroupMedians = { n: number; capacityMah: number | null; labelRatio: number | null; sagLimitedC: number | null; dcResistanceMohm: number | null };
+export type GroupMedians = {
+  n: number;
+  capacityMah: number | null;
+  labelRatio: number | null;
+  sagLimitedC: number | null;
+  dcResistanceMohm: number | null;
+};
 
-function medians(rows: { capacityMah: number | null; labelRatio: number | null; sagLimitedC: number | null; dcResistanceMohm: number | null }[]): GroupMedians {
+function medians(
+  rows: {
+    capacityMah: number | null;
+    labelRatio: number | null;
+    sagLimitedC: number | null;
+    dcResistanceMohm: number | null;
+  }[],
+): GroupMedians {
   const m = (xs: (number | null)[]) => summarise(finiteOnly(xs))?.median ?? null;
   return {
     n: rows.length,
@@ -147,7 +207,14 @@ function medians(rows: { capacityMah: number | null; labelRatio: number | null; 
 
 export async function getReviewDetail(resultId: number) {
   const [row] = await db
-    .select({ result: results, pack: packs, makerName: makers.name, makerSlug: makers.slug, makerStatus: makers.status, contributor: { id: users.id, displayName: users.displayName, email: users.email } })
+    .select({
+      result: results,
+      pack: packs,
+      makerName: makers.name,
+      makerSlug: makers.slug,
+      makerStatus: makers.status,
+      contributor: { id: users.id, displayName: users.displayName, email: users.email },
+    })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
@@ -155,47 +222,92 @@ export async function getReviewDetail(resultId: number) {
     .where(eq(results.id, resultId));
   if (!row) return null;
   const r = row.result;
-  const figureCols = { capacityMah: results.capacityMah, labelRatio: results.labelRatio, sagLimitedC: results.sagLimitedC, dcResistanceMohm: results.dcResistanceMohm };
+  const figureCols = {
+    capacityMah: results.capacityMah,
+    labelRatio: results.labelRatio,
+    sagLimitedC: results.sagLimitedC,
+    dcResistanceMohm: results.dcResistanceMohm,
+  };
   const groupRows = await db
     .select(figureCols)
     .from(results)
-    .where(and(eq(results.packId, r.packId), eq(results.groupKey, r.groupKey), inArray(results.status, ["approved", "disputed"]), ne(results.id, r.id)));
+    .where(
+      and(
+        eq(results.packId, r.packId),
+        eq(results.groupKey, r.groupKey),
+        inArray(results.status, ["approved", "disputed"]),
+        ne(results.id, r.id),
+      ),
+    );
   const history = await db
     .select({ status: results.status, n: count() })
     .from(results)
     .where(and(eq(results.contributorId, r.contributorId), ne(results.id, r.id)))
     .groupBy(results.status);
   const recent = await db
-    .select({ id: results.id, status: results.status, packModel: packs.model, makerName: makers.name, submittedAt: results.submittedAt })
+    .select({
+      id: results.id,
+      status: results.status,
+      packModel: packs.model,
+      makerName: makers.name,
+      submittedAt: results.submittedAt,
+    })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .where(and(eq(results.contributorId, r.contributorId), ne(results.id, r.id)))
     .orderBy(desc(results.submittedAt))
     .limit(8);
-  const flags = await db.select().from(readerFlags).where(eq(readerFlags.resultId, r.id)).orderBy(asc(readerFlags.createdAt));
-  const self = { capacityMah: r.capacityMah, labelRatio: r.labelRatio, sagLimitedC: r.sagLimitedC, dcResistanceMohm: r.dcResistanceMohm };
+  const flags = await db
+    .select()
+    .from(readerFlags)
+    .where(eq(readerFlags.resultId, r.id))
+    .orderBy(asc(readerFlags.createdAt));
+  const self = {
+    capacityMah: r.capacityMah,
+    labelRatio: r.labelRatio,
+    sagLimitedC: r.sagLimitedC,
+    dcResistanceMohm: r.dcResistanceMohm,
+  };
   return {
     ...row,
     groupNow: medians(groupRows),
     groupAfterApproval: medians([...groupRows, self]),
-    contributorHistory: { byStatus: Object.fromEntries(history.map((h) => [h.status, h.n])) as Partial<Record<ReviewStatus, number>>, recent },
+    contributorHistory: {
+      byStatus: Object.fromEntries(history.map((h) => [h.status, h.n])) as Partial<Record<ReviewStatus, number>>,
+      recent,
+    },
     events: await getReviewHistory(r.id),
     readerFlags: flags,
   };
 }
-export type ReviewDetail = NonNullable<Awaited<ReturnType<typeof getReviewDetail>>>;
 
 export type OpenReaderFlag = {
-  id: number; resultId: number; reason: string; note: string | null; createdAt: Date; resultStatus: ReviewStatus;
-  packSlug: string; packModel: string; makerName: string; contributorId: string;
+  id: number;
+  resultId: number;
+  reason: string;
+  note: string | null;
+  createdAt: Date;
+  resultStatus: ReviewStatus;
+  packSlug: string;
+  packModel: string;
+  makerName: string;
+  contributorId: string;
 };
 
 export async function listOpenReaderFlags(limit = 200): Promise<OpenReaderFlag[]> {
   return db
     .select({
-      id: readerFlags.id, resultId: readerFlags.resultId, reason: readerFlags.reason, note: readerFlags.note, createdAt: readerFlags.createdAt,
-      resultStatus: results.status, packSlug: packs.slug, packModel: packs.model, makerName: makers.name, contributorId: results.contributorId,
+      id: readerFlags.id,
+      resultId: readerFlags.resultId,
+      reason: readerFlags.reason,
+      note: readerFlags.note,
+      createdAt: readerFlags.createdAt,
+      resultStatus: results.status,
+      packSlug: packs.slug,
+      packModel: packs.model,
+      makerName: makers.name,
+      contributorId: results.contributorId,
     })
     .from(readerFlags)
     .innerJoin(results, eq(results.id, readerFlags.resultId))

@@ -12,7 +12,10 @@ export async function findReferencedKeys(keys: string[]): Promise<Set<string>> {
   const found = new Set<string>();
   for (let i = 0; i < keys.length; i += BATCH) {
     const batch = keys.slice(i, i + BATCH);
-    const list = sql`array[${sql.join(batch.map((k) => sql`${k}`), sql`, `)}]::text[]`;
+    const list = sql`array[${sql.join(
+      batch.map((k) => sql`${k}`),
+      sql`, `,
+    )}]::text[]`;
     const rows = await db
       .select({ logKey: results.logKey, photoKeys: results.photoKeys })
       .from(results)

@@ -4,7 +4,8 @@ import "server-only";
 import { and, asc, desc, eq, or } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents } from "@/db/schema";
-import { packLabelColumns, type PackLabelFields } from "./packs";
+import type { PackLabelFields } from "@/lib/catalogue";
+import { packLabelColumns } from "./packs";
 
 export type PackChoice = { id: number; makerName: string; model: string; proposed: boolean } & PackLabelFields;
 
@@ -17,8 +18,12 @@ const choiceColumns = {
 };
 
 /** Packs a contributor may submit against: active ones, and their own proposals awaiting moderation. */
-const pickableBy = (userId: string) => or(eq(packs.status, "active"), and(eq(packs.status, "proposed"), eq(packs.proposedById, userId)));
-const toChoice = ({ status, ...r }: { status: string } & Omit<PackChoice, "proposed">): PackChoice => ({ ...r, proposed: status === "proposed" });
+const pickableBy = (userId: string) =>
+  or(eq(packs.status, "active"), and(eq(packs.status, "proposed"), eq(packs.proposedById, userId)));
+const toChoice = ({ status, ...r }: { status: string } & Omit<PackChoice, "proposed">): PackChoice => ({
+  ...r,
+  proposed: status === "proposed",
+});
 
 /** Active packs, plus the ones this contributor proposed that are still waiting for moderation. */
 export async function listPackChoices(userId: string): Promise<PackChoice[]> {
@@ -56,13 +61,21 @@ export async function getMakerChoice(makerId: number, userId: string): Promise<M
   const rows = await db
     .select({ id: makers.id, name: makers.name })
     .from(makers)
-    .where(and(eq(makers.id, makerId), or(eq(makers.status, "active"), and(eq(makers.status, "proposed"), eq(makers.proposedById, userId)))))
+    .where(
+      and(
+        eq(makers.id, makerId),
+        or(eq(makers.status, "active"), and(eq(makers.status, "proposed"), eq(makers.proposedById, userId))),
+      ),
+    )
     .limit(1);
   return rows[0] ?? null;
 }
 
 /** The result a contributor's form submission already made (the idempotency key from the form). */
-export async function findResultByIdempotencyKey(contributorId: string, idempotencyKey: string): Promise<{ id: number } | null> {
+export async function findResultByIdempotencyKey(
+  contributorId: string,
+  idempotencyKey: string,
+): Promise<{ id: number } | null> {
   const rows = await db
     .select({ id: results.id })
     .from(results)
@@ -73,7 +86,12 @@ export async function findResultByIdempotencyKey(contributorId: string, idempote
 
 /** Other results stored with the same log file (a plausibility flag for moderators). */
 export async function listResultIdsWithLog(sha256: string): Promise<number[]> {
-  const rows = await db.select({ id: results.id }).from(results).where(eq(results.logSha256, sha256)).orderBy(asc(results.id)).limit(10);
+  const rows = await db
+    .select({ id: results.id })
+    .from(results)
+    .where(eq(results.logSha256, sha256))
+    .orderBy(asc(results.id))
+    .limit(10);
   return rows.map((r) => r.id);
 }
 
@@ -82,9 +100,22 @@ export type OwnResult = {
   contributorId: string;
   status: (typeof results.$inferSelect)["status"];
   pack: PackChoice;
-  method: Pick<typeof results.$inferSelect,
-    "benchProfileId" | "ambientTemperatureC" | "packStartTemperatureC" | "loadMode" | "loadCurrentA" | "cutoffVPerCell" | "stopTemperatureC"
-    | "resistanceMethod" | "equipment" | "sampleRateHz" | "cyclesBeforeTest" | "testedOn" | "notes">;
+  method: Pick<
+    typeof results.$inferSelect,
+    | "benchProfileId"
+    | "ambientTemperatureC"
+    | "packStartTemperatureC"
+    | "loadMode"
+    | "loadCurrentA"
+    | "cutoffVPerCell"
+    | "stopTemperatureC"
+    | "resistanceMethod"
+    | "equipment"
+    | "sampleRateHz"
+    | "cyclesBeforeTest"
+    | "testedOn"
+    | "notes"
+  >;
   logKey: string;
   logFilename: string;
   photoKeys: string[];
@@ -94,7 +125,12 @@ export type OwnResult = {
 export async function getResultForEdit(resultId: number): Promise<OwnResult | null> {
   const row = await db.query.results.findFirst({ where: eq(results.id, resultId) });
   if (!row) return null;
-  const pack = await db.select(choiceColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(eq(packs.id, row.packId)).limit(1);
+  const pack = await db
+    .select(choiceColumns)
+    .from(packs)
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(eq(packs.id, row.packId))
+    .limit(1);
   const p = pack[0];
   if (!p) return null;
   const { status: packStatus, ...packRest } = p;
@@ -104,10 +140,19 @@ export async function getResultForEdit(resultId: number): Promise<OwnResult | nu
     status: row.status,
     pack: { ...packRest, proposed: packStatus === "proposed" },
     method: {
-      benchProfileId: row.benchProfileId, ambientTemperatureC: row.ambientTemperatureC, packStartTemperatureC: row.packStartTemperatureC,
-      loadMode: row.loadMode, loadCurrentA: row.loadCurrentA, cutoffVPerCell: row.cutoffVPerCell, stopTemperatureC: row.stopTemperatureC,
-      resistanceMethod: row.resistanceMethod, equipment: row.equipment, sampleRateHz: row.sampleRateHz, cyclesBeforeTest: row.cyclesBeforeTest,
-      testedOn: row.testedOn, notes: row.notes,
+      benchProfileId: row.benchProfileId,
+      ambientTemperatureC: row.ambientTemperatureC,
+      packStartTemperatureC: row.packStartTemperatureC,
+      loadMode: row.loadMode,
+      loadCurrentA: row.loadCurrentA,
+      cutoffVPerCell: row.cutoffVPerCell,
+      stopTemperatureC: row.stopTemperatureC,
+      resistanceMethod: row.resistanceMethod,
+      equipment: row.equipment,
+      sampleRateHz: row.sampleRateHz,
+      cyclesBeforeTest: row.cyclesBeforeTest,
+      testedOn: row.testedOn,
+      notes: row.notes,
     },
     logKey: row.logKey,
     logFilename: row.logFilename,
@@ -116,7 +161,9 @@ export async function getResultForEdit(resultId: number): Promise<OwnResult | nu
 }
 
 /** The reason given with the latest change request on a result (moderators' internal notes stay out). */
-export async function getLatestChangeRequest(resultId: number): Promise<{ reason: string | null; createdAt: Date } | null> {
+export async function getLatestChangeRequest(
+  resultId: number,
+): Promise<{ reason: string | null; createdAt: Date } | null> {
   const rows = await db
     .select({ reason: reviewEvents.reason, createdAt: reviewEvents.createdAt })
     .from(reviewEvents)

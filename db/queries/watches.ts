@@ -7,7 +7,13 @@ export type WatchedPack = { packId: number; slug: string; makerName: string; mod
 
 export async function listWatchesForUser(userId: string): Promise<WatchedPack[]> {
   return db
-    .select({ packId: packs.id, slug: packs.slug, makerName: makers.name, model: packs.model, watchedAt: watches.createdAt })
+    .select({
+      packId: packs.id,
+      slug: packs.slug,
+      makerName: makers.name,
+      model: packs.model,
+      watchedAt: watches.createdAt,
+    })
     .from(watches)
     .innerJoin(packs, eq(packs.id, watches.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
@@ -16,7 +22,11 @@ export async function listWatchesForUser(userId: string): Promise<WatchedPack[]>
 }
 
 export async function isWatching(userId: string, packId: number): Promise<boolean> {
-  const rows = await db.select({ packId: watches.packId }).from(watches).where(and(eq(watches.userId, userId), eq(watches.packId, packId))).limit(1);
+  const rows = await db
+    .select({ packId: watches.packId })
+    .from(watches)
+    .where(and(eq(watches.userId, userId), eq(watches.packId, packId)))
+    .limit(1);
   return rows.length > 0;
 }
 

@@ -1,7 +1,7 @@
 // Users and the tables Auth.js (Drizzle adapter) expects. The role lives on the user row and is read
 // fresh on every request (database sessions), so a demotion takes effect at once.
 import { boolean, integer, pgEnum, pgTable, primaryKey, text, timestamp, index } from "drizzle-orm/pg-core";
-import { userRoles, type UserRole } from "./enums";
+import { userRoles, type UserRole } from "@/lib/enums";
 
 export { userRoles, type UserRole };
 export const userRole = pgEnum("user_role", userRoles);
@@ -9,7 +9,9 @@ export const userRole = pgEnum("user_role", userRoles);
 export const users = pgTable(
   "users",
   {
-    id: text("id").primaryKey().$defaultFn(() => crypto.randomUUID()),
+    id: text("id")
+      .primaryKey()
+      .$defaultFn(() => crypto.randomUUID()),
     name: text("name"),
     email: text("email").unique(),
     emailVerified: timestamp("email_verified", { mode: "date", withTimezone: true }),

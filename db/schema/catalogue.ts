@@ -1,7 +1,18 @@
 // Makers and packs: the catalogue. Proposed entries arrive with a submission and wait for moderation;
 // merged entries point at the survivor so old links and audit history keep working.
 import { sql } from "drizzle-orm";
-import { check, index, integer, pgEnum, pgTable, real, smallint, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+import {
+  check,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  real,
+  smallint,
+  text,
+  timestamp,
+  uniqueIndex,
+} from "drizzle-orm/pg-core";
 import { users } from "./auth";
 
 export const catalogueStatuses = ["active", "proposed", "merged"] as const;
@@ -48,7 +59,10 @@ export const packs = pgTable(
     check("packs_cells_range", sql`${t.cellsInSeries} between 1 and 14`),
     check("packs_rated_positive", sql`${t.ratedCapacityMah} > 0`),
     check("packs_labelled_c_positive", sql`${t.labelledContinuousC} > 0`),
-    check("packs_burst_ge_continuous", sql`${t.labelledBurstC} is null or ${t.labelledBurstC} >= ${t.labelledContinuousC}`),
+    check(
+      "packs_burst_ge_continuous",
+      sql`${t.labelledBurstC} is null or ${t.labelledBurstC} >= ${t.labelledContinuousC}`,
+    ),
     check("packs_weight_positive", sql`${t.weightG} is null or ${t.weightG} > 0`),
   ],
 );

@@ -3,7 +3,7 @@ import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp } f
 import { users } from "./auth";
 import { packs } from "./catalogue";
 import { results } from "./results";
-import { flagReasons, flagStatuses } from "./enums";
+import { flagReasons, flagStatuses } from "@/lib/enums";
 
 export { flagReasons, flagStatuses };
 

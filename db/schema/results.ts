@@ -2,12 +2,29 @@
 // state, plus bench profiles (a contributor's equipment) and the review audit log.
 import { sql } from "drizzle-orm";
 import {
-  check, date, index, integer, jsonb, pgEnum, pgTable, real, text, timestamp, uniqueIndex,
+  check,
+  date,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  real,
+  text,
+  timestamp,
+  uniqueIndex,
 } from "drizzle-orm/pg-core";
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import { users } from "./auth";
 import { packs } from "./catalogue";
-import { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus } from "./enums";
+import {
+  loadModes,
+  resistanceMethods,
+  reviewStatuses,
+  type LoadMode,
+  type ResistanceMethod,
+  type ReviewStatus,
+} from "@/lib/enums";
 
 export { loadModes, resistanceMethods, reviewStatuses, type LoadMode, type ResistanceMethod, type ReviewStatus };
 export const reviewStatus = pgEnum("review_status", reviewStatuses);
@@ -98,7 +115,9 @@ export const results = pgTable(
     index("results_group_idx").on(t.groupKey, t.status),
     // Covers the maker ranking (db/queries/groups.ts): an index-only scan of one group's published label
     // ratios, already in pack order (scripts/bench-pages.sh measures it over 100,000 results).
-    index("results_group_public_idx").on(t.groupKey, t.packId, t.labelRatio).where(sql`${t.status} in ('approved', 'disputed')`),
+    index("results_group_public_idx")
+      .on(t.groupKey, t.packId, t.labelRatio)
+      .where(sql`${t.status} in ('approved', 'disputed')`),
     index("results_contributor_idx").on(t.contributorId),
     index("results_log_sha_idx").on(t.logSha256),
     uniqueIndex("results_idempotency_idx").on(t.contributorId, t.idempotencyKey),

@@ -2,21 +2,41 @@
 // (pure; fed by db/queries/open-data/groups.ts).
 import { groupKey as computeGroupKey, summarise } from "@/lib/analysis";
 
-export const AGGREGATE_FIGURES = [
-  "capacityMah", "dcResistanceMohm", "resistanceAt25CMohm", "holdVoltagePerCellV", "temperatureRiseC", "sagLimitedC", "labelRatio", "capacityRatio",
+const AGGREGATE_FIGURES = [
+  "capacityMah",
+  "dcResistanceMohm",
+  "resistanceAt25CMohm",
+  "holdVoltagePerCellV",
+  "temperatureRiseC",
+  "sagLimitedC",
+  "labelRatio",
+  "capacityRatio",
 ] as const;
-export type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
+type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
 
-export type Summary = { median: number; n: number; min: number; max: number } | null;
+type Summary = { median: number; n: number; min: number; max: number } | null;
 
 type Sample = {
-  packId: number; packSlug: string; makerSlug: string; makerName: string; model: string; cellsInSeries: number;
-  ratedCapacityMah: number; labelledContinuousC: number;
+  packId: number;
+  packSlug: string;
+  makerSlug: string;
+  makerName: string;
+  model: string;
+  cellsInSeries: number;
+  ratedCapacityMah: number;
+  labelledContinuousC: number;
 } & Record<AggregateFigure, number | null>;
 
 export type PackAggregate = {
-  packSlug: string; makerSlug: string; makerName: string; model: string; cellsInSeries: number; ratedCapacityMah: number;
-  labelledContinuousC: number; resultCount: number; figures: Record<AggregateFigure, Summary>;
+  packSlug: string;
+  makerSlug: string;
+  makerName: string;
+  model: string;
+  cellsInSeries: number;
+  ratedCapacityMah: number;
+  labelledContinuousC: number;
+  resultCount: number;
+  figures: Record<AggregateFigure, Summary>;
 };
 
 function summary(values: (number | null)[]): Summary {
@@ -29,16 +49,31 @@ export function aggregateByPack(samples: Sample[]): PackAggregate[] {
   for (const s of samples) byPack.set(s.packId, [...(byPack.get(s.packId) ?? []), s]);
   return [...byPack.values()].map((list) => {
     const first = list[0] as Sample;
-    const figures = Object.fromEntries(AGGREGATE_FIGURES.map((f) => [f, summary(list.map((s) => s[f]))])) as Record<AggregateFigure, Summary>;
+    const figures = Object.fromEntries(AGGREGATE_FIGURES.map((f) => [f, summary(list.map((s) => s[f]))])) as Record<
+      AggregateFigure,
+      Summary
+    >;
     return {
-      packSlug: first.packSlug, makerSlug: first.makerSlug, makerName: first.makerName, model: first.model,
-      cellsInSeries: first.cellsInSeries, ratedCapacityMah: first.ratedCapacityMah, labelledContinuousC: first.labelledContinuousC,
-      resultCount: list.length, figures,
+      packSlug: first.packSlug,
+      makerSlug: first.makerSlug,
+      makerName: first.makerName,
+      model: first.model,
+      cellsInSeries: first.cellsInSeries,
+      ratedCapacityMah: first.ratedCapacityMah,
+      labelledContinuousC: first.labelledContinuousC,
+      resultCount: list.length,
+      figures,
     };
   });
 }
 
-export type MakerAggregate = { makerSlug: string; makerName: string; packCount: number; resultCount: number; labelRatio: Summary };
+export type MakerAggregate = {
+  makerSlug: string;
+  makerName: string;
+  packCount: number;
+  resultCount: number;
+  labelRatio: Summary;
+};
 
 /** Maker ranking: the median over a maker's packs of each pack's median label ratio. */
 export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
@@ -48,7 +83,9 @@ export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
     .map((list) => {
       const first = list[0] as PackAggregate;
       return {
-        makerSlug: first.makerSlug, makerName: first.makerName, packCount: list.length,
+        makerSlug: first.makerSlug,
+        makerName: first.makerName,
+        packCount: list.length,
         resultCount: list.reduce((n, p) => n + p.resultCount, 0),
         labelRatio: summary(list.map((p) => p.figures.labelRatio?.median ?? null)),
       };
@@ -57,10 +94,25 @@ export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
 }
 
 /** A human label for a group key, recomputed from one of its results' method card. */
-export function groupLabel(sample: { resistanceMethod: string; ambientTemperatureC: number; cutoffVPerCell: number; loadCurrentA: number; ratedCapacityMah: number; cyclesBeforeTest: number } | undefined): string | null {
+export function groupLabel(
+  sample:
+    | {
+        resistanceMethod: string;
+        ambientTemperatureC: number;
+        cutoffVPerCell: number;
+        loadCurrentA: number;
+        ratedCapacityMah: number;
+        cyclesBeforeTest: number;
+      }
+    | undefined,
+): string | null {
   if (!sample) return null;
   return computeGroupKey({
-    resistanceMethod: sample.resistanceMethod, ambientC: sample.ambientTemperatureC, cutoffVPerCell: sample.cutoffVPerCell,
-    loadCurrentA: sample.loadCurrentA, ratedMah: sample.ratedCapacityMah, cyclesBeforeTest: sample.cyclesBeforeTest,
+    resistanceMethod: sample.resistanceMethod,
+    ambientC: sample.ambientTemperatureC,
+    cutoffVPerCell: sample.cutoffVPerCell,
+    loadCurrentA: sample.loadCurrentA,
+    ratedMah: sample.ratedCapacityMah,
+    cyclesBeforeTest: sample.cyclesBeforeTest,
   }).label;
 }

@@ -14,7 +14,11 @@ export function chartLinks(state: ChartState) {
 }
 
 /** An image address with its size in the query (nothing for the defaults). */
-export function chartImagePath(state: ChartState, format: ChartImageFormat, size: { width?: number; height?: number; scale?: number } = {}): string {
+export function chartImagePath(
+  state: ChartState,
+  format: ChartImageFormat,
+  size: { width?: number; height?: number; scale?: number } = {},
+): string {
   return `${chartLinks(state)[format]}${imageSizeQuery(format, size)}`;
 }
 
@@ -24,13 +28,26 @@ export const NARROW_WIDTH = 400;
 
 /** The PNG downloads offered on a chart's page: `width` in CSS pixels, `scale` device pixels per CSS pixel. */
 export const PNG_DOWNLOADS = [
-  { label: "PNG image", note: "800 px layout at 2×, for articles and slides", width: CHART_WIDTH, scale: DEFAULT_PNG_SCALE },
-  { label: "PNG for phones and narrow columns", note: `${NARROW_WIDTH} px layout at 2×: taller, with larger text`, width: NARROW_WIDTH, scale: DEFAULT_PNG_SCALE },
+  {
+    label: "PNG image",
+    note: "800 px layout at 2×, for articles and slides",
+    width: CHART_WIDTH,
+    scale: DEFAULT_PNG_SCALE,
+  },
+  {
+    label: "PNG for phones and narrow columns",
+    note: `${NARROW_WIDTH} px layout at 2×: taller, with larger text`,
+    width: NARROW_WIDTH,
+    scale: DEFAULT_PNG_SCALE,
+  },
   { label: "PNG for print and wide layouts", note: "1600 px layout at 2×", width: 1600, scale: 2 },
 ] as const;
 
 /** Pixel size of a PNG download. */
-export const pngPixels = (d: { width: number; scale: number }) => ({ width: d.width * d.scale, height: defaultHeight(d.width) * d.scale });
+export const pngPixels = (d: { width: number; scale: number }) => ({
+  width: d.width * d.scale,
+  height: defaultHeight(d.width) * d.scale,
+});
 
 export function escapeHtmlAttr(text: string): string {
   return text.replace(/&/g, "&amp;").replace(/"/g, "&quot;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
@@ -49,7 +66,8 @@ export function embedSnippet(state: ChartState, baseUrl: string): string {
 /** For pages that take no iframe or script (newsletters, some CMSs): a linked, lazy PNG with 1×, 2× and 3×
  * sources, and the narrow layout on small screens. */
 export function imageSnippet(state: ChartState, baseUrl: string): string {
-  const png = (size: { width?: number; scale?: number }) => escapeHtmlAttr(`${baseUrl}${chartImagePath(state, "png", size)}`);
+  const png = (size: { width?: number; scale?: number }) =>
+    escapeHtmlAttr(`${baseUrl}${chartImagePath(state, "png", size)}`);
   const srcset = (width: number) => [1, 2, 3].map((scale) => `${png({ width, scale })} ${scale}x`).join(", ");
   const alt = escapeHtmlAttr(`${state.title} — chart by ${ATTRIBUTION} (Sagline), licensed ${DATA_LICENCE_SHORT}`);
   return [
@@ -60,13 +78,25 @@ export function imageSnippet(state: ChartState, baseUrl: string): string {
   ].join("\n");
 }
 
-type SavedChart = { id: string; kind: string; title: string; note: string | null; state: Record<string, unknown>; createdAt: Date };
+type SavedChart = {
+  id: string;
+  kind: string;
+  title: string;
+  note: string | null;
+  state: Record<string, unknown>;
+  createdAt: Date;
+};
 
 /** A saved chart as the API returns it; a stored state that no longer parses is reported, not hidden. */
 export function savedChartJson(row: SavedChart) {
   const parsed = chartState.safeParse(row.state);
   return {
-    id: row.id, kind: row.kind, title: row.title, note: row.note, createdAt: row.createdAt.toISOString(),
-    state: row.state, links: parsed.success ? chartLinks(parsed.data) : null,
+    id: row.id,
+    kind: row.kind,
+    title: row.title,
+    note: row.note,
+    createdAt: row.createdAt.toISOString(),
+    state: row.state,
+    links: parsed.success ? chartLinks(parsed.data) : null,
   };
 }

@@ -20,7 +20,7 @@ export const MAX_PNG_SIDE = 3200;
 
 export type ChartSize = { width: number; height: number };
 export type ChartImageFormat = "svg" | "png";
-export type ChartImageSize = ChartSize & { scale: number };
+type ChartImageSize = ChartSize & { scale: number };
 
 export const DEFAULT_CHART_SIZE: ChartSize = { width: CHART_WIDTH, height: CHART_HEIGHT };
 
@@ -29,23 +29,44 @@ export function defaultHeight(width: number): number {
 }
 
 export function heightRange(width: number): { min: number; max: number } {
-  return { min: Math.max(CHART_MIN_HEIGHT, Math.ceil(width * MIN_ASPECT)), max: Math.min(CHART_MAX_HEIGHT, Math.floor(width * MAX_ASPECT)) };
+  return {
+    min: Math.max(CHART_MIN_HEIGHT, Math.ceil(width * MIN_ASPECT)),
+    max: Math.min(CHART_MAX_HEIGHT, Math.floor(width * MAX_ASPECT)),
+  };
 }
 
 const wholeNumber = /^[1-9][0-9]{0,4}$/;
 const widthMessage = `width must be a whole number of pixels from ${CHART_MIN_WIDTH} to ${CHART_MAX_WIDTH}.`;
 
 const imageQuery = z.object({
-  width: z.string().regex(wholeNumber, widthMessage).transform(Number).pipe(z.number().min(CHART_MIN_WIDTH, widthMessage).max(CHART_MAX_WIDTH, widthMessage)).optional(),
-  height: z.string().regex(wholeNumber, `height must be a whole number of pixels from ${CHART_MIN_HEIGHT} to ${CHART_MAX_HEIGHT}, and from ${MIN_ASPECT} to ${MAX_ASPECT} times the width.`).transform(Number).optional(),
-  scale: z.string().regex(/^[123]$/, "scale must be 1, 2 or 3.").transform(Number).optional(),
+  width: z
+    .string()
+    .regex(wholeNumber, widthMessage)
+    .transform(Number)
+    .pipe(z.number().min(CHART_MIN_WIDTH, widthMessage).max(CHART_MAX_WIDTH, widthMessage))
+    .optional(),
+  height: z
+    .string()
+    .regex(
+      wholeNumber,
+      `height must be a whole number of pixels from ${CHART_MIN_HEIGHT} to ${CHART_MAX_HEIGHT}, and from ${MIN_ASPECT} to ${MAX_ASPECT} times the width.`,
+    )
+    .transform(Number)
+    .optional(),
+  scale: z
+    .string()
+    .regex(/^[123]$/, "scale must be 1, 2 or 3.")
+    .transform(Number)
+    .optional(),
 });
 
 export type ImageSizeResult = { ok: true; size: ChartImageSize } | { ok: false; fieldErrors: Record<string, string[]> };
 
 /** Reads width, height and scale from an image URL's search params (first value of each), or says what is wrong. */
 export function parseChartImageSize(params: URLSearchParams, format: ChartImageFormat): ImageSizeResult {
-  const raw = Object.fromEntries(["width", "height", "scale"].flatMap((k) => (params.has(k) ? [[k, params.get(k) ?? ""]] : [])));
+  const raw = Object.fromEntries(
+    ["width", "height", "scale"].flatMap((k) => (params.has(k) ? [[k, params.get(k) ?? ""]] : [])),
+  );
   const parsed = imageQuery.safeParse(raw);
   if (!parsed.success) {
     const fieldErrors: Record<string, string[]> = {};
@@ -56,25 +77,39 @@ export function parseChartImageSize(params: URLSearchParams, format: ChartImageF
   const range = heightRange(width);
   const height = parsed.data.height ?? defaultHeight(width);
   if (height < range.min || height > range.max) {
-    return { ok: false, fieldErrors: { height: [`height must be from ${range.min} to ${range.max} pixels when width is ${width}.`] } };
+    return {
+      ok: false,
+      fieldErrors: { height: [`height must be from ${range.min} to ${range.max} pixels when width is ${width}.`] },
+    };
   }
   if (format === "svg" && parsed.data.scale !== undefined) {
     return { ok: false, fieldErrors: { scale: ["scale applies to chart.png only; an SVG is sharp at any scale."] } };
   }
   const scale = format === "png" ? (parsed.data.scale ?? DEFAULT_PNG_SCALE) : 1;
   if (Math.max(width, height) * scale > MAX_PNG_SIDE) {
-    return { ok: false, fieldErrors: { scale: [`A PNG side can be at most ${MAX_PNG_SIDE} pixels; ${width} × ${height} at scale ${scale} would be ${width * scale} × ${height * scale}. Use a smaller scale or width.`] } };
+    return {
+      ok: false,
+      fieldErrors: {
+        scale: [
+          `A PNG side can be at most ${MAX_PNG_SIDE} pixels; ${width} × ${height} at scale ${scale} would be ${width * scale} × ${height * scale}. Use a smaller scale or width.`,
+        ],
+      },
+    };
   }
   return { ok: true, size: { width, height, scale } };
 }
 
 /** The query string for an image of this size ("" for the defaults), in one fixed order. */
-export function imageSizeQuery(format: ChartImageFormat, size: { width?: number; height?: number; scale?: number } = {}): string {
+export function imageSizeQuery(
+  format: ChartImageFormat,
+  size: { width?: number; height?: number; scale?: number } = {},
+): string {
   const q = new URLSearchParams();
   const width = size.width ?? CHART_WIDTH;
   if (width !== CHART_WIDTH) q.set("width", String(width));
   if (size.height !== undefined && size.height !== defaultHeight(width)) q.set("height", String(size.height));
-  if (format === "png" && size.scale !== undefined && size.scale !== DEFAULT_PNG_SCALE) q.set("scale", String(size.scale));
+  if (format === "png" && size.scale !== undefined && size.scale !== DEFAULT_PNG_SCALE)
+    q.set("scale", String(size.scale));
   const s = q.toString();
   return s ? `?${s}` : "";
 }

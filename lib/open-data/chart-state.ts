@@ -14,7 +14,10 @@ export const chartState = z.object({
   v: z.literal(1),
   kind: z.enum(CHART_KINDS),
   group: z.string().regex(/^[a-z0-9._-]{1,160}$/, "Choose a like-for-like group."),
-  maker: z.string().regex(/^[a-z0-9-]{1,80}$/).optional(),
+  maker: z
+    .string()
+    .regex(/^[a-z0-9-]{1,80}$/)
+    .optional(),
   cells: z.number().int().min(1).max(14).optional(),
   title: z.string().trim().min(1, "Give the chart a title.").max(120),
   note: z.string().trim().max(400).optional(),
@@ -36,7 +39,15 @@ function fromBase64Url(text: string): string {
 /** Keys in a fixed order, so one state always gives one URL. */
 export function encodeChartState(state: ChartState): string {
   const s = chartState.parse(state);
-  const ordered = { v: s.v, kind: s.kind, group: s.group, maker: s.maker, cells: s.cells, title: s.title, note: s.note || undefined };
+  const ordered = {
+    v: s.v,
+    kind: s.kind,
+    group: s.group,
+    maker: s.maker,
+    cells: s.cells,
+    title: s.title,
+    note: s.note || undefined,
+  };
   return toBase64Url(JSON.stringify(ordered));
 }
 

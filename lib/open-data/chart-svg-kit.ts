@@ -11,13 +11,18 @@ export const CELL = "#146d63";
 export const FONT = "Inter, 'Inter Variable', system-ui, sans-serif";
 
 /** Average advance of Inter, in em: regular ≈ 0.53, bold ≈ 0.58 (estimated from the shipped font). */
-export const EM_REGULAR = 0.53;
+const EM_REGULAR = 0.53;
 export const EM_BOLD = 0.58;
 
 export const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 export function escapeXml(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
+  return text
+    .replace(/&/g, "&amp;")
+    .replace(/</g, "&lt;")
+    .replace(/>/g, "&gt;")
+    .replace(/"/g, "&quot;")
+    .replace(/'/g, "&apos;");
 }
 
 export const textWidth = (s: string, fontSizePx: number, em = EM_REGULAR) => s.length * fontSizePx * em;
@@ -35,7 +40,13 @@ export function fitText(variants: string[], maxWidthPx: number, fontSizePx: numb
 }
 
 /** Greedy word wrap by an estimated character width; the last kept line ends with "…" when text was cut. */
-export function wrapText(text: string, maxWidthPx: number, fontSizePx: number, maxLines: number, em = EM_REGULAR): string[] {
+export function wrapText(
+  text: string,
+  maxWidthPx: number,
+  fontSizePx: number,
+  maxLines: number,
+  em = EM_REGULAR,
+): string[] {
   if (maxLines <= 0) return [];
   const perLine = Math.max(10, Math.floor(maxWidthPx / (fontSizePx * em)));
   const lines: string[] = [];
@@ -70,16 +81,28 @@ export function niceTicks(min: number, max: number, count = 5): number[] {
   return ticks;
 }
 
-export const text = (x: number, y: number, s: string, attrs = "") => `<text x="${x.toFixed(1)}" y="${y.toFixed(1)}" ${attrs}>${escapeXml(s)}</text>`;
+export const text = (x: number, y: number, s: string, attrs = "") =>
+  `<text x="${x.toFixed(1)}" y="${y.toFixed(1)}" ${attrs}>${escapeXml(s)}</text>`;
 export const fmtTick = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(0) : Number(v.toFixed(2)).toString());
 
 export type Box = { left: number; top: number; right: number; bottom: number };
 export type Scale = (v: number) => number;
-export const linear = (d0: number, d1: number, r0: number, r1: number): Scale => (v) => r0 + ((v - d0) / (d1 - d0 || 1)) * (r1 - r0);
+export const linear =
+  (d0: number, d1: number, r0: number, r1: number): Scale =>
+  (v) =>
+    r0 + ((v - d0) / (d1 - d0 || 1)) * (r1 - r0);
 
 /** Sizes for one image: `k` scales type, strokes, markers and margins with the square root of the width
  * against the 800-pixel design, within 0.9–1.45, and no text is set under 10 px. */
-export type Frame = { width: number; height: number; k: number; pad: number; narrow: boolean; font: (designPx: number) => number; px: (designPx: number) => number };
+export type Frame = {
+  width: number;
+  height: number;
+  k: number;
+  pad: number;
+  narrow: boolean;
+  font: (designPx: number) => number;
+  px: (designPx: number) => number;
+};
 
 export function frameFor(size: ChartSize): Frame {
   const k = Math.min(1.45, Math.max(0.9, Math.sqrt(size.width / 800)));

@@ -2,14 +2,24 @@
 // Table Schema (types, units in descriptions, constraints, primary and foreign keys), the licence and
 // how to attribute. Built from the same field lists as the files themselves.
 import { makerFields, packFields, resultFields, type Field } from "./fields";
-import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_NAME, DATA_LICENCE_TITLE, DATA_LICENCE_URL, DATA_SCHEMA_VERSION } from "./licence";
+import {
+  ATTRIBUTION,
+  ATTRIBUTION_TEXT,
+  DATA_LICENCE_NAME,
+  DATA_LICENCE_TITLE,
+  DATA_LICENCE_URL,
+  DATA_SCHEMA_VERSION,
+} from "./licence";
 
 export const DATASETS = ["makers", "packs", "results"] as const;
 export type Dataset = (typeof DATASETS)[number];
 
 const licenses = [{ name: DATA_LICENCE_NAME, path: DATA_LICENCE_URL, title: DATA_LICENCE_TITLE }];
 
-function tableSchema<R>(fields: Field<R>[], foreignKeys: { fields: string[]; reference: { resource: string; fields: string[] } }[]) {
+function tableSchema<R>(
+  fields: Field<R>[],
+  foreignKeys: { fields: string[]; reference: { resource: string; fields: string[] } }[],
+) {
   return {
     $schema: "https://datapackage.org/profiles/2.0/tableschema.json",
     fields: fields.map((f) => ({
@@ -28,7 +38,8 @@ function tableSchema<R>(fields: Field<R>[], foreignKeys: { fields: string[]; ref
 const descriptions: Record<Dataset, string> = {
   makers: "Makers: the brands on pack labels.",
   packs: "Packs as sold: maker, model, cells in series, rated capacity and labelled C ratings.",
-  results: "Approved results: one test of one pack each, with its method card and the figures Sagline computed from the log.",
+  results:
+    "Approved results: one test of one pack each, with its method card and the figures Sagline computed from the log.",
 };
 
 export function fileName(dataset: Dataset, ext: "csv" | "json", date: string): string {
@@ -58,7 +69,15 @@ export function dataPackageDescriptor(baseUrl: string, createdAt: Date) {
     mediatype: "text/csv",
     encoding: "utf-8",
     licenses,
-    dialect: { $schema: "https://datapackage.org/profiles/2.0/tabledialect.json", delimiter: ",", doubleQuote: true, lineTerminator: "\r\n", quoteChar: "\"", header: true, commentChar: "#" },
+    dialect: {
+      $schema: "https://datapackage.org/profiles/2.0/tabledialect.json",
+      delimiter: ",",
+      doubleQuote: true,
+      lineTerminator: "\r\n",
+      quoteChar: '"',
+      header: true,
+      commentChar: "#",
+    },
     schema: tableSchema(fields, fks),
   });
   return {

@@ -43,7 +43,11 @@ function thumbnail(state: ChartState, baseUrl: string, maxwidth?: number, maxhei
   const width = Math.min(CHART_WIDTH, maxwidth ?? CHART_WIDTH);
   const height = Math.min(defaultHeight(width), maxheight ?? Infinity);
   if (width < CHART_MIN_WIDTH || height < heightRange(width).min) return {};
-  return { thumbnail_url: `${baseUrl}${chartImagePath(state, "png", { width, height, scale: 1 })}`, thumbnail_width: width, thumbnail_height: height };
+  return {
+    thumbnail_url: `${baseUrl}${chartImagePath(state, "png", { width, height, scale: 1 })}`,
+    thumbnail_width: width,
+    thumbnail_height: height,
+  };
 }
 
 export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, maxheight?: number) {

@@ -16,7 +16,11 @@ export const profileSchema = z
   })
   .superRefine((v, ctx) => {
     if (!v.anonymous && v.displayName === null) {
-      ctx.addIssue({ code: "custom", path: ["displayName"], message: "Enter a display name, or choose to stay anonymous." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["displayName"],
+        message: "Enter a display name, or choose to stay anonymous.",
+      });
     }
   });
 export type ProfileInput = z.output<typeof profileSchema>;

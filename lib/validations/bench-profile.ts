@@ -2,7 +2,7 @@
 // schema for the form (react-hook-form + zodResolver) and the server action. Ranges match the method card
 // (and the results table's checks): ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C.
 import { z } from "zod";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
+import { loadModes, resistanceMethods } from "@/lib/enums";
 import { optionalEnum, optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
 export const benchProfileSchema = z
@@ -11,7 +11,9 @@ export const benchProfileSchema = z
     loadEquipment: requiredText("Load equipment", 120),
     logger: optionalText("Logger", 120),
     resistanceMeter: optionalText("Resistance meter", 120),
-    resistanceMethod: z.string({ error: "Choose how you measure resistance." }).pipe(z.enum(resistanceMethods, { error: "Choose how you measure resistance." })),
+    resistanceMethod: z
+      .string({ error: "Choose how you measure resistance." })
+      .pipe(z.enum(resistanceMethods, { error: "Choose how you measure resistance." })),
     calibratedOn: optionalPastDate("Calibration date"),
     notes: optionalText("Notes", 2000),
     defaultAmbientC: optionalNumber("Ambient temperature", (n) =>
@@ -29,8 +31,16 @@ export const benchProfileSchema = z
     ),
   })
   .superRefine((v, ctx) => {
-    if (v.defaultAmbientC !== null && v.defaultStopTemperatureC !== null && v.defaultStopTemperatureC <= v.defaultAmbientC) {
-      ctx.addIssue({ code: "custom", path: ["defaultStopTemperatureC"], message: "Stop temperature must be above the ambient temperature." });
+    if (
+      v.defaultAmbientC !== null &&
+      v.defaultStopTemperatureC !== null &&
+      v.defaultStopTemperatureC <= v.defaultAmbientC
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["defaultStopTemperatureC"],
+        message: "Stop temperature must be above the ambient temperature.",
+      });
     }
   });
 
@@ -58,6 +68,11 @@ export const benchProfileId = z.coerce.number({ error: "Not a bench profile id."
 
 /** The save action's input: a profile, plus the id when editing one. */
 export const saveBenchProfileSchema = benchProfileSchema.and(
-  z.object({ id: z.union([z.literal(""), benchProfileId]).optional().transform((v) => (v === "" || v === undefined ? null : v)) }),
+  z.object({
+    id: z
+      .union([z.literal(""), benchProfileId])
+      .optional()
+      .transform((v) => (v === "" || v === undefined ? null : v)),
+  }),
 );
 export const deleteBenchProfileSchema = z.object({ id: benchProfileId });

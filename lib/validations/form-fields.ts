@@ -12,7 +12,11 @@ export const optionalText = (label: string, max: number) =>
 
 /** A required free-text field, trimmed. */
 export const requiredText = (label: string, max: number) =>
-  z.string({ error: `Enter the ${label.toLowerCase()}.` }).trim().min(1, `Enter the ${label.toLowerCase()}.`).max(max, `${label} can be at most ${max} characters.`);
+  z
+    .string({ error: `Enter the ${label.toLowerCase()}.` })
+    .trim()
+    .min(1, `Enter the ${label.toLowerCase()}.`)
+    .max(max, `${label} can be at most ${max} characters.`);
 
 /** An optional number typed into a text/number input: "" → null; otherwise a finite number in range. */
 export const optionalNumber = (label: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
@@ -35,8 +39,14 @@ export const optionalPastDate = (label: string) =>
   z
     .string()
     .trim()
-    .refine((v) => v === "" || (/^\d{4}-\d{2}-\d{2}$/.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`))), `${label} must be a date.`)
-    .refine((v) => v === "" || Date.parse(`${v}T00:00:00Z`) <= Date.now() + 24 * 3600 * 1000, `${label} cannot be in the future.`)
+    .refine(
+      (v) => v === "" || (/^\d{4}-\d{2}-\d{2}$/.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`))),
+      `${label} must be a date.`,
+    )
+    .refine(
+      (v) => v === "" || Date.parse(`${v}T00:00:00Z`) <= Date.now() + 24 * 3600 * 1000,
+      `${label} cannot be in the future.`,
+    )
     .refine((v) => v === "" || v >= "1990-01-01", `${label} looks too old.`)
     .transform((v) => (v === "" ? null : v));
 

@@ -1,8 +1,14 @@
 // Query parameters of the public API and the downloads. Everything arrives as strings; zod coerces.
 import { z } from "zod";
 
-const slug = z.string().trim().regex(/^[a-z0-9-]{1,80}$/, "Use a slug: lower-case letters, digits and hyphens.");
-const groupKeyParam = z.string().trim().regex(/^[a-z0-9._-]{1,160}$/, "Not a like-for-like group key.");
+const slug = z
+  .string()
+  .trim()
+  .regex(/^[a-z0-9-]{1,80}$/, "Use a slug: lower-case letters, digits and hyphens.");
+const groupKeyParam = z
+  .string()
+  .trim()
+  .regex(/^[a-z0-9._-]{1,160}$/, "Not a like-for-like group key.");
 const intParam = (min: number, max: number) => z.coerce.number().int().min(min).max(max);
 
 export const pageQuery = z.object({
@@ -33,7 +39,6 @@ export const resultFilters = packFilters.extend({
 });
 export type ResultFilters = z.infer<typeof resultFilters>;
 
-export const packListQuery = pageQuery.extend(packFilters.shape);
 export const resultListQuery = pageQuery.extend(resultFilters.shape);
 export const groupListQuery = pageQuery.extend({ minResults: intParam(1, 1000).default(1) });
 

@@ -19,8 +19,14 @@ export const packQuerySchema = z
     minG: optNumber(0, 100_000),
     maxG: optNumber(0, 100_000),
     connector: z.string().trim().min(1).max(30).optional(),
-    maker: z.string().regex(/^[a-z0-9-]{1,80}$/, "maker must be a maker slug").optional(),
-    group: z.string().regex(/^[a-z0-9._-]{3,120}$/, "group must be a like-for-like group key").optional(),
+    maker: z
+      .string()
+      .regex(/^[a-z0-9-]{1,80}$/, "maker must be a maker slug")
+      .optional(),
+    group: z
+      .string()
+      .regex(/^[a-z0-9._-]{3,120}$/, "group must be a like-for-like group key")
+      .optional(),
     sort: z.enum(PACK_SORT_KEYS).default("maker"),
     dir: z.enum(["asc", "desc"]).default("asc"),
     page: z.coerce.number().int().min(1).max(100_000).default(1),
@@ -30,9 +36,18 @@ export const packQuerySchema = z
       .refine((n) => (PAGE_SIZES as readonly number[]).includes(n), `size must be one of ${PAGE_SIZES.join(", ")}`)
       .default(DEFAULT_PAGE_SIZE),
   })
-  .refine((v) => v.minMah === undefined || v.maxMah === undefined || v.minMah <= v.maxMah, { path: ["maxMah"], message: "maxMah must be at least minMah" })
-  .refine((v) => v.minC === undefined || v.maxC === undefined || v.minC <= v.maxC, { path: ["maxC"], message: "maxC must be at least minC" })
-  .refine((v) => v.minG === undefined || v.maxG === undefined || v.minG <= v.maxG, { path: ["maxG"], message: "maxG must be at least minG" });
+  .refine((v) => v.minMah === undefined || v.maxMah === undefined || v.minMah <= v.maxMah, {
+    path: ["maxMah"],
+    message: "maxMah must be at least minMah",
+  })
+  .refine((v) => v.minC === undefined || v.maxC === undefined || v.minC <= v.maxC, {
+    path: ["maxC"],
+    message: "maxC must be at least minC",
+  })
+  .refine((v) => v.minG === undefined || v.maxG === undefined || v.minG <= v.maxG, {
+    path: ["maxG"],
+    message: "maxG must be at least minG",
+  });
 
 /** Empty values (`?cells=`) count as absent, as HTML forms send them. */
 export function parsePackQuery(sp: URLSearchParams) {
@@ -43,8 +58,20 @@ export function parsePackQuery(sp: URLSearchParams) {
 
 export function toPackParams(v: z.infer<typeof packQuerySchema>): PackParams {
   return {
-    q: v.q ?? "", cells: v.cells ?? null, minMah: v.minMah ?? null, maxMah: v.maxMah ?? null, minC: v.minC ?? null, maxC: v.maxC ?? null,
-    minG: v.minG ?? null, maxG: v.maxG ?? null, connector: v.connector ?? null, maker: v.maker ?? null, group: v.group ?? null,
-    sort: v.sort, dir: v.dir, page: v.page, size: v.size,
+    q: v.q ?? "",
+    cells: v.cells ?? null,
+    minMah: v.minMah ?? null,
+    maxMah: v.maxMah ?? null,
+    minC: v.minC ?? null,
+    maxC: v.maxC ?? null,
+    minG: v.minG ?? null,
+    maxG: v.maxG ?? null,
+    connector: v.connector ?? null,
+    maker: v.maker ?? null,
+    group: v.group ?? null,
+    sort: v.sort,
+    dir: v.dir,
+    page: v.page,
+    size: v.size,
   };
 }

@@ -2,40 +2,60 @@
 // actions. Inputs hold strings as typed; the schema turns them into numbers. The method-card bounds match
 // the results table's checks: ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C, load > 0.
 import { z } from "zod";
-import { loadModes, resistanceMethods } from "@/db/schema/enums";
-import { PHOTO_EXTENSIONS } from "@/lib/storage/keys";
+import { loadModes, resistanceMethods } from "@/lib/enums";
+import { PHOTO_EXTENSIONS } from "@/lib/storage-keys";
 import { optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
 /** A required number typed into an input ("" → "Enter …"). */
-export const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
+const requiredNumber = (label: string, unit: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
   z
     .string({ error: `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` })
     .trim()
     .transform((v, ctx) => {
       const n = Number(v.replace(",", "."));
       if (v === "" || !Number.isFinite(n)) {
-        ctx.addIssue({ code: "custom", message: v === "" ? `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` : `${label} must be a number.` });
+        ctx.addIssue({
+          code: "custom",
+          message:
+            v === "" ? `Enter the ${label.toLowerCase()}${unit ? ` in ${unit}` : ""}.` : `${label} must be a number.`,
+        });
         return z.NEVER;
       }
       return n;
     })
     .pipe(check(z.number()));
 
-export const PACK_CELLS_MAX = 14;
+const PACK_CELLS_MAX = 14;
 
 // ---------- Step 1: the pack ----------
-export const packStepSchema = z
+const packStepSchema = z
   .object({
     mode: z.enum(["existing", "new"], { error: "Choose a pack or propose a new one." }),
     packId: z.string().trim(),
     makerId: z.string().trim(),
     makerName: optionalText("Maker name", 80),
     model: optionalText("Model", 120),
-    cellsInSeries: optionalNumber("Cells in series", (n) => n.int("Cells in series must be a whole number.").min(1, "At least 1 cell.").max(PACK_CELLS_MAX, `At most ${PACK_CELLS_MAX} cells in series.`)),
-    ratedCapacityMah: optionalNumber("Rated capacity", (n) => n.int("Rated capacity must be a whole number of mAh.").min(50, "Rated capacity must be at least 50 mAh.").max(100_000, "Rated capacity must be at most 100 000 mAh.")),
-    labelledContinuousC: optionalNumber("Labelled continuous C", (n) => n.gt(0, "Labelled C must be above 0.").max(1000, "Labelled C must be at most 1000.")),
-    labelledBurstC: optionalNumber("Labelled burst C", (n) => n.gt(0, "Burst C must be above 0.").max(2000, "Burst C must be at most 2000.")),
-    weightG: optionalNumber("Weight", (n) => n.gt(0, "Weight must be above 0 g.").max(50_000, "Weight must be at most 50 kg.")),
+    cellsInSeries: optionalNumber("Cells in series", (n) =>
+      n
+        .int("Cells in series must be a whole number.")
+        .min(1, "At least 1 cell.")
+        .max(PACK_CELLS_MAX, `At most ${PACK_CELLS_MAX} cells in series.`),
+    ),
+    ratedCapacityMah: optionalNumber("Rated capacity", (n) =>
+      n
+        .int("Rated capacity must be a whole number of mAh.")
+        .min(50, "Rated capacity must be at least 50 mAh.")
+        .max(100_000, "Rated capacity must be at most 100 000 mAh."),
+    ),
+    labelledContinuousC: optionalNumber("Labelled continuous C", (n) =>
+      n.gt(0, "Labelled C must be above 0.").max(1000, "Labelled C must be at most 1000."),
+    ),
+    labelledBurstC: optionalNumber("Labelled burst C", (n) =>
+      n.gt(0, "Burst C must be above 0.").max(2000, "Burst C must be at most 2000."),
+    ),
+    weightG: optionalNumber("Weight", (n) =>
+      n.gt(0, "Weight must be above 0 g.").max(50_000, "Weight must be at most 50 kg."),
+    ),
     connector: optionalText("Connector", 40),
   })
   .superRefine((v, ctx) => {
@@ -56,29 +76,57 @@ export const packStepSchema = z
       ctx.addIssue({ code: "custom", path: ["labelledBurstC"], message: "Burst C cannot be below the continuous C." });
     }
   });
-export type PackStepValues = z.input<typeof packStepSchema>;
 export type PackStep = z.output<typeof packStepSchema>;
 
 // ---------- Step 2: the method card ----------
-export const methodCardSchema = z
+const methodCardSchema = z
   .object({
-    benchProfileId: z.string().trim().regex(/^(\d{1,10})?$/, "Choose a bench profile.").transform((v) => (v === "" ? null : Number(v))),
-    ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) => n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C.")),
-    packStartTemperatureC: optionalNumber("Pack start temperature", (n) => n.min(-20, "Pack start temperature must be at least −20 °C.").max(60, "Pack start temperature must be at most 60 °C.")),
+    benchProfileId: z
+      .string()
+      .trim()
+      .regex(/^(\d{1,10})?$/, "Choose a bench profile.")
+      .transform((v) => (v === "" ? null : Number(v))),
+    ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) =>
+      n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C."),
+    ),
+    packStartTemperatureC: optionalNumber("Pack start temperature", (n) =>
+      n
+        .min(-20, "Pack start temperature must be at least −20 °C.")
+        .max(60, "Pack start temperature must be at most 60 °C."),
+    ),
     loadMode: z.string({ error: "Choose the load mode." }).pipe(z.enum(loadModes, { error: "Choose the load mode." })),
-    loadCurrentA: requiredNumber("Load current", "A", (n) => n.gt(0, "Load current must be above 0 A.").max(2000, "Load current must be at most 2000 A.")),
-    cutoffVPerCell: requiredNumber("Cut-off voltage", "V per cell", (n) => n.min(2.5, "Cut-off must be at least 2.5 V per cell.").max(4.2, "Cut-off must be at most 4.2 V per cell.")),
-    stopTemperatureC: requiredNumber("Stop temperature", "°C", (n) => n.max(80, "Stop temperature must be at most 80 °C.")),
-    resistanceMethod: z.string({ error: "Choose how you measured resistance." }).pipe(z.enum(resistanceMethods, { error: "Choose how you measured resistance." })),
+    loadCurrentA: requiredNumber("Load current", "A", (n) =>
+      n.gt(0, "Load current must be above 0 A.").max(2000, "Load current must be at most 2000 A."),
+    ),
+    cutoffVPerCell: requiredNumber("Cut-off voltage", "V per cell", (n) =>
+      n.min(2.5, "Cut-off must be at least 2.5 V per cell.").max(4.2, "Cut-off must be at most 4.2 V per cell."),
+    ),
+    stopTemperatureC: requiredNumber("Stop temperature", "°C", (n) =>
+      n.max(80, "Stop temperature must be at most 80 °C."),
+    ),
+    resistanceMethod: z
+      .string({ error: "Choose how you measured resistance." })
+      .pipe(z.enum(resistanceMethods, { error: "Choose how you measured resistance." })),
     equipment: requiredText("Equipment", 300),
-    sampleRateHz: optionalNumber("Sample rate", (n) => n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz.")),
-    cyclesBeforeTest: requiredNumber("Cycles before the test", "", (n) => n.int("Cycles must be a whole number.").min(0, "Cycles cannot be negative.").max(10_000, "Cycles must be at most 10 000.")),
+    sampleRateHz: optionalNumber("Sample rate", (n) =>
+      n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz."),
+    ),
+    cyclesBeforeTest: requiredNumber("Cycles before the test", "", (n) =>
+      n
+        .int("Cycles must be a whole number.")
+        .min(0, "Cycles cannot be negative.")
+        .max(10_000, "Cycles must be at most 10 000."),
+    ),
     testedOn: optionalPastDate("Test date"),
     notes: optionalText("Notes", 2000),
   })
   .superRefine((v, ctx) => {
     if (v.stopTemperatureC <= v.ambientTemperatureC) {
-      ctx.addIssue({ code: "custom", path: ["stopTemperatureC"], message: "Stop temperature must be above the ambient temperature." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["stopTemperatureC"],
+        message: "Stop temperature must be above the ambient temperature.",
+      });
     }
   });
 export type MethodCardValues = z.input<typeof methodCardSchema>;
@@ -89,12 +137,16 @@ const LOG_KEY = /^incoming\/[^/]{1,64}\/[0-9a-f-]{36}\.csv$/;
 const PHOTO_KEY = new RegExp(`^incoming/[^/]{1,64}/photo-[0-9a-f-]{36}\\.(${PHOTO_EXTENSIONS.join("|")})$`);
 export const MAX_PHOTOS = 4;
 
-export const logRefSchema = z.object({
+const logRefSchema = z.object({
   key: z.string().regex(LOG_KEY, "Upload the log first."),
   filename: z.string().trim().min(1, "Upload the log first.").max(200, "The file name can be at most 200 characters."),
 });
-export const photoKeysSchema = z.array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again.")).max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
-export const declarationSchema = z.boolean({ error: "Confirm that these are honest measurements." }).refine((v) => v, "Confirm that these are honest measurements.");
+const photoKeysSchema = z
+  .array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again."))
+  .max(MAX_PHOTOS, `Attach at most ${MAX_PHOTOS} photos.`);
+const declarationSchema = z
+  .boolean({ error: "Confirm that these are honest measurements." })
+  .refine((v) => v, "Confirm that these are honest measurements.");
 
 export const submitResultSchema = z.object({
   idempotencyKey: z.uuid("Reload the page and try again."),
@@ -107,7 +159,7 @@ export const submitResultSchema = z.object({
 export type SubmitResultValues = z.input<typeof submitResultSchema>;
 export type SubmitResultInput = z.output<typeof submitResultSchema>;
 
-export const resultIdSchema = z.coerce.number({ error: "Not a result id." }).int().positive().max(2_147_483_647);
+const resultIdSchema = z.coerce.number({ error: "Not a result id." }).int().positive().max(2_147_483_647);
 export const withdrawResultSchema = z.object({ resultId: resultIdSchema, note: optionalText("Note", 500).optional() });
 
 export const resubmitResultSchema = z.object({
@@ -119,7 +171,6 @@ export const resubmitResultSchema = z.object({
   note: requiredText("Answer to the moderator", 2000),
   declaration: declarationSchema,
 });
-export type ResubmitResultValues = z.input<typeof resubmitResultSchema>;
 export type ResubmitResultInput = z.output<typeof resubmitResultSchema>;
 
 /** Re-check of a stored log with the current pack and method card (the preview after a reload or an edit). */

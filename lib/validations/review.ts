@@ -1,6 +1,6 @@
 // Inputs of the moderation actions and the reader-flag endpoint. Shared by forms and server.
 import { z } from "zod";
-import { flagReasons } from "@/db/schema/enums";
+import { flagReasons } from "@/lib/enums";
 import { flagCodes } from "@/lib/flag-labels";
 
 export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;
@@ -22,18 +22,27 @@ export const flagReasonLabels: Record<(typeof flagReasons)[number], string> = {
   other: "Other",
 };
 
-export const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
+const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
 export type FlagResolution = (typeof flagResolutions)[number];
 
 const id = z.coerce.number().int().positive();
 const note = (max: number) =>
-  z.string().trim().max(max, `At most ${max} characters.`).optional().transform((v) => (v ? v : null));
-const requiredNote = (max: number, message: string) => z.string({ error: message }).trim().min(3, message).max(max, `At most ${max} characters.`);
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters.`)
+    .optional()
+    .transform((v) => (v ? v : null));
+const requiredNote = (max: number, message: string) =>
+  z.string({ error: message }).trim().min(3, message).max(max, `At most ${max} characters.`);
 
 export const approveResultSchema = z.object({ resultId: id, note: note(2000) });
 export const rejectResultSchema = z
   .object({ resultId: id, reason: z.enum(rejectReasons, { error: "Choose a reason." }), note: note(2000) })
-  .refine((v) => v.reason !== "other" || (v.note?.length ?? 0) >= 3, { path: ["note"], message: "Say why in the note when the reason is “other”." });
+  .refine((v) => v.reason !== "other" || (v.note?.length ?? 0) >= 3, {
+    path: ["note"],
+    message: "Say why in the note when the reason is “other”.",
+  });
 export const requestChangesSchema = z.object({ resultId: id, note: requiredNote(2000, "Say what needs to change.") });
 
 export const readerFlagSchema = z.object({
@@ -42,18 +51,24 @@ export const readerFlagSchema = z.object({
 });
 export const resolveFlagSchema = z
   .object({ flagId: id, resolution: z.enum(flagResolutions, { error: "Choose how to resolve it." }), note: note(2000) })
-  .refine((v) => v.resolution !== "corrected" || (v.note?.length ?? 0) >= 3, { path: ["note"], message: "Say what was corrected." });
+  .refine((v) => v.resolution !== "corrected" || (v.note?.length ?? 0) >= 3, {
+    path: ["note"],
+    message: "Say what was corrected.",
+  });
 
 /** /review search params: filters by flag, maker and group; anything unknown falls back to "all". */
 export const reviewQueueFilterSchema = z.object({
-  flag: z.enum([...flagCodes, "none"]).optional().catch(undefined),
-  maker: z.string().regex(/^[a-z0-9-]{1,120}$/).optional().catch(undefined),
+  flag: z
+    .enum([...flagCodes, "none"])
+    .optional()
+    .catch(undefined),
+  maker: z
+    .string()
+    .regex(/^[a-z0-9-]{1,120}$/)
+    .optional()
+    .catch(undefined),
   group: z.string().max(200).optional().catch(undefined),
 });
 export type ReviewQueueFilter = z.infer<typeof reviewQueueFilterSchema>;
 
-export type ApproveResultInput = z.infer<typeof approveResultSchema>;
-export type RejectResultInput = z.infer<typeof rejectResultSchema>;
-export type RequestChangesInput = z.infer<typeof requestChangesSchema>;
 export type ReaderFlagInput = z.infer<typeof readerFlagSchema>;
-export type ResolveFlagInput = z.infer<typeof resolveFlagSchema>;

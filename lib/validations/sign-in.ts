@@ -26,4 +26,3 @@ export const signInSchema = z.object({
     ),
   callbackUrl: callbackPath.optional().transform((v) => v ?? "/account"),
 });
-export type SignInInput = z.input<typeof signInSchema>;

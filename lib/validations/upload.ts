@@ -1,10 +1,10 @@
 // Query parameters of the upload route handlers. The label and method-card figures are optional: they
 // only shape the preview (the submission re-analyses the stored log with the values it is sent).
 import { z } from "zod";
-import { loadModes } from "@/db/schema/enums";
+import { loadModes } from "@/lib/enums";
 import { analyseQuerySchema } from "./analyse";
 
-export const LOG_EXTENSIONS = ["csv", "txt", "tsv", "log", "dat"] as const;
+const LOG_EXTENSIONS = ["csv", "txt", "tsv", "log", "dat"] as const;
 
 const filename = z
   .string()
@@ -21,7 +21,6 @@ export const logUploadQuerySchema = analyseQuerySchema.omit({ include: true }).e
   loadCurrentA: z.coerce.number().positive().max(2000).optional(),
   loadMode: z.enum(loadModes).optional(),
 });
-export type LogUploadQuery = z.infer<typeof logUploadQuerySchema>;
 
 export function hasLogExtension(name: string): boolean {
   const ext = name.toLowerCase().split(".").pop() ?? "";

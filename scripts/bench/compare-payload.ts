@@ -13,9 +13,14 @@ async function main() {
   const cmp = await getComparison(slugs, group.key);
   const charts = compareChartData(cmp);
   const json = JSON.stringify(charts);
-  const points = [...charts.byCapacity, ...charts.byShare, ...charts.temperature].reduce((n, s) => n + s.points.length, 0);
+  const points = [...charts.byCapacity, ...charts.byShare, ...charts.temperature].reduce(
+    (n, s) => n + s.points.length,
+    0,
+  );
   const kb = (n: number) => (n / 1024).toFixed(1);
-  console.log(`chart payload of /compare with ${cmp.packs.length} packs: ${kb(Buffer.byteLength(json))} KB JSON, ${kb(gzipSync(json).length)} KB gzip (${points} points in 3 charts; target ≤ 100 KB)`);
+  console.log(
+    `chart payload of /compare with ${cmp.packs.length} packs: ${kb(Buffer.byteLength(json))} KB JSON, ${kb(gzipSync(json).length)} KB gzip (${points} points in 3 charts; target ≤ 100 KB)`,
+  );
   await closeDb();
 }
 

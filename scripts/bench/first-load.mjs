@@ -6,7 +6,10 @@ import zlib from "node:zlib";
 
 const route = process.argv[2] ?? "/packs";
 const next = path.resolve(".next");
-const html = fs.readFileSync(path.join(next, "server", "app", `${route === "/" ? "index" : route.slice(1)}.html`), "utf8");
+const html = fs.readFileSync(
+  path.join(next, "server", "app", `${route === "/" ? "index" : route.slice(1)}.html`),
+  "utf8",
+);
 // Scripts marked noModule (the legacy polyfills) are never fetched by the browsers that run modules.
 const tags = [...html.matchAll(/<script[^>]*>/g)].map((m) => m[0]).filter((t) => !/\snomodule/i.test(t));
 const srcs = [...new Set(tags.flatMap((t) => /src="([^"]+\.js)"/.exec(t)?.[1] ?? []))];
@@ -20,4 +23,6 @@ for (const src of srcs) {
 }
 const inline = [...html.matchAll(/<script>([\s\S]*?)<\/script>/g)].reduce((s, m) => s + Buffer.byteLength(m[1]), 0);
 const kb = (n) => (n / 1024).toFixed(1);
-console.log(`first-load JS of ${route}: ${kb(gz)} KB gzip (${kb(raw)} KB raw, ${srcs.length} chunks; target ≤ 180 KB) — plus ${kb(inline)} KB of inline RSC payload in the HTML`);
+console.log(
+  `first-load JS of ${route}: ${kb(gz)} KB gzip (${kb(raw)} KB raw, ${srcs.length} chunks; target ≤ 180 KB) — plus ${kb(inline)} KB of inline RSC payload in the HTML`,
+);

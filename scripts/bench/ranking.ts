@@ -15,8 +15,12 @@ const GROUPS = 20;
 const RUNS = 200;
 
 async function seed(): Promise<string> {
-  await db.execute(sql`insert into users (id, email, display_name) values ('bench-user', 'bench@sagline.localhost', 'Bench')`);
-  await db.execute(sql`insert into makers (slug, name) select 'maker-' || g, 'Maker ' || g from generate_series(1, ${MAKERS}) g`);
+  await db.execute(
+    sql`insert into users (id, email, display_name) values ('bench-user', 'bench@sagline.localhost', 'Bench')`,
+  );
+  await db.execute(
+    sql`insert into makers (slug, name) select 'maker-' || g, 'Maker ' || g from generate_series(1, ${MAKERS}) g`,
+  );
   await db.execute(sql`
     insert into packs (slug, maker_id, model, cells_in_series, rated_capacity_mah, labelled_continuous_c, connector)
     select 'pack-' || g, 1 + (g % ${MAKERS}), 'Model ' || g, 2 + (g % 5), 1000 + (g % 8) * 500, 25 + (g % 10) * 10, 'XT60'
@@ -54,7 +58,11 @@ async function main() {
   }
   times.sort((a, b) => a - b);
   const q = (p: number) => times[Math.min(times.length - 1, Math.floor(p * times.length))] ?? Number.NaN;
-  const [{ n } = { n: 0 }] = (await db.execute<{ n: number }>(sql`select count(*)::int as n from results where group_key = ${key} and status in ('approved','disputed')`)).rows;
+  const [{ n } = { n: 0 }] = (
+    await db.execute<{ n: number }>(
+      sql`select count(*)::int as n from results where group_key = ${key} and status in ('approved','disputed')`,
+    )
+  ).rows;
   console.log(
     `maker ranking over ${RESULTS.toLocaleString("en-GB")} results (${n.toLocaleString("en-GB")} published in the ranked group, ${makers} makers): ` +
       `p50 ${q(0.5).toFixed(1)} ms, p95 ${q(0.95).toFixed(1)} ms, max ${q(1).toFixed(1)} ms over ${RUNS} runs (target p95 ≤ 50 ms; seeded in ${(seeded / 1000).toFixed(1)} s; machine load ${loadavg()[0]?.toFixed(1)})`,

@@ -14,7 +14,15 @@ for (const path of pages) {
     await settled(page);
     const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
     const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
-    expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")})`)).toEqual([]);
+    expect(
+      serious.map(
+        (v) =>
+          `${v.id}: ${v.help} (${v.nodes
+            .map((n) => n.target.join(" "))
+            .slice(0, 3)
+            .join(", ")})`,
+      ),
+    ).toEqual([]);
   });
 }
 
@@ -35,7 +43,14 @@ test("no serious accessibility violations in the signed-in areas (account, submi
   await page.goto("/review");
   const first = await page.locator("[data-queue-link]").first().getAttribute("href");
   const found: string[] = [];
-  for (const path of ["/account", "/account/bench-profiles", "/submit", "/review", ...(first ? [first] : []), "/review/flags"]) {
+  for (const path of [
+    "/account",
+    "/account/bench-profiles",
+    "/submit",
+    "/review",
+    ...(first ? [first] : []),
+    "/review/flags",
+  ]) {
     const response = await page.goto(path);
     expect(response?.status(), `${path} should load`).toBeLessThan(400);
     await settled(page);

@@ -16,7 +16,11 @@ test("sign in through the caught mail, create and edit a bench profile, sign out
 
   // Open the message on the caught-mail page and click its link.
   await page.getByRole("link", { name: "the caught mail" }).click();
-  await page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(email) }).first().click();
+  await page
+    .getByTestId("caught-mail")
+    .getByRole("link", { name: new RegExp(email) })
+    .first()
+    .click();
   await expect(page.getByRole("heading", { name: "Your Sagline sign-in link" })).toBeVisible();
   await page.getByTestId("mail-body").getByRole("link").first().click();
 
@@ -89,7 +93,9 @@ test("the same sign-in link cannot be used twice", async ({ page, browser }) => 
 
 // A shopper watches a pack from its (static) page: signed out the control asks them to sign in and brings
 // them back; signed in it is a real toggle, and the watch shows on the account page, where it can be undone.
-test("watch a pack from its page after signing in, see it on the account page, and unwatch it there", async ({ page }) => {
+test("watch a pack from its page after signing in, see it on the account page, and unwatch it there", async ({
+  page,
+}) => {
   const email = `e2e-watch-${Date.now()}@sagline.localhost`;
   const packPath = "/packs/ashcombe-cells-ridge-1800-5s-130c";
   await page.goto(packPath);

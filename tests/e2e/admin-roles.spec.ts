@@ -11,7 +11,10 @@ async function setRole(admin: Page, email: string, role: "Contributor" | "Modera
 
 // An admin changes a contributor's role; the contributor's access follows on their very next request,
 // without signing in again.
-test("an admin changes roles, and a contributor sees the admin area only while they are admin", async ({ page, browser }) => {
+test("an admin changes roles, and a contributor sees the admin area only while they are admin", async ({
+  page,
+  browser,
+}) => {
   const contributor = "ridgeline@sagline.localhost";
   await signIn(page, contributor);
   const denied = await page.goto("/admin/users");
@@ -53,7 +56,9 @@ test("the last admin cannot demote themselves", async ({ page }) => {
 
 // An admin puts a notice on every page and pauses submissions; static public pages show the notice at once
 // (tag revalidation), the submit page explains the pause, and both are undone.
-test("an admin sets a site notice and pauses submissions; pages show both at once, then the admin undoes them", async ({ page }) => {
+test("an admin sets a site notice and pauses submissions; pages show both at once, then the admin undoes them", async ({
+  page,
+}) => {
   await signIn(page, "admin@sagline.localhost");
   // The admin pages pass the accessibility scan (see accessibility.spec.ts for the rest of the site).
   const found: string[] = [];

@@ -13,5 +13,11 @@ export async function seriousViolations(page: Page, label = page.url()): Promise
   const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
   return results.violations
     .filter((v) => v.impact === "serious" || v.impact === "critical")
-    .map((v) => `${label} ${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")})`);
+    .map(
+      (v) =>
+        `${label} ${v.id}: ${v.help} (${v.nodes
+          .map((n) => n.target.join(" "))
+          .slice(0, 3)
+          .join(", ")})`,
+    );
 }

@@ -15,13 +15,22 @@ function parseCsv(text: string): string[][] {
   for (let i = 0; i < text.length; i++) {
     const c = text[i];
     if (quoted) {
-      if (c === '"' && text[i + 1] === '"') { field += '"'; i++; }
-      else if (c === '"') quoted = false;
+      if (c === '"' && text[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (c === '"') quoted = false;
       else field += c;
     } else if (c === '"' && field === "") quoted = true;
-    else if (c === ",") { record.push(field); field = ""; }
-    else if (c === "\r" && text[i + 1] === "\n") { record.push(field); records.push(record); record = []; field = ""; i++; }
-    else if (c === "\n") throw new Error(`bare LF at offset ${i}: RFC 4180 lines end in CRLF`);
+    else if (c === ",") {
+      record.push(field);
+      field = "";
+    } else if (c === "\r" && text[i + 1] === "\n") {
+      record.push(field);
+      records.push(record);
+      record = [];
+      field = "";
+      i++;
+    } else if (c === "\n") throw new Error(`bare LF at offset ${i}: RFC 4180 lines end in CRLF`);
     else field += c;
   }
   if (field !== "" || record.length > 0) throw new Error("the last record does not end in CRLF");
@@ -33,16 +42,26 @@ const focused = (page: Page) =>
   page.evaluate(() => {
     const el = document.activeElement as HTMLElement | null;
     if (!el) return { tag: "", id: "", text: "", role: "", label: "", href: "", type: "", name: "", form: "" };
-    const labelled = el.id ? document.querySelector(`label[for="${el.id}"]`)?.textContent ?? "" : "";
+    const labelled = el.id ? (document.querySelector(`label[for="${el.id}"]`)?.textContent ?? "") : "";
     return {
-      tag: el.tagName.toLowerCase(), id: el.id, text: (el.textContent ?? "").trim(), role: el.getAttribute("role") ?? "",
-      label: (el.getAttribute("aria-label") ?? labelled).trim(), href: el.getAttribute("href") ?? "", type: el.getAttribute("type") ?? "",
-      name: el.getAttribute("name") ?? "", form: el.closest("form")?.getAttribute("aria-label") ?? "",
+      tag: el.tagName.toLowerCase(),
+      id: el.id,
+      text: (el.textContent ?? "").trim(),
+      role: el.getAttribute("role") ?? "",
+      label: (el.getAttribute("aria-label") ?? labelled).trim(),
+      href: el.getAttribute("href") ?? "",
+      type: el.getAttribute("type") ?? "",
+      name: el.getAttribute("name") ?? "",
+      form: el.closest("form")?.getAttribute("aria-label") ?? "",
     };
   });
 
 /** Presses Tab (or Shift+Tab) until the focused element matches, at most `max` times; fails with what had focus. */
-async function tabTo(page: Page, match: (f: Awaited<ReturnType<typeof focused>>) => boolean, { max = 40, back = false } = {}) {
+async function tabTo(
+  page: Page,
+  match: (f: Awaited<ReturnType<typeof focused>>) => boolean,
+  { max = 40, back = false } = {},
+) {
   const seen: string[] = [];
   for (let i = 0; i < max; i++) {
     await page.keyboard.press(back ? "Shift+Tab" : "Tab");
@@ -65,12 +84,17 @@ async function expectVisibleFocus(page: Page) {
   expect(style.outline || style.ring, "the focused control shows a focus indicator").toBe(true);
 }
 
-
-test("a contributor answers a change request and the result is back in the queue with its history", async ({ page }) => {
+test("a contributor answers a change request and the result is back in the queue with its history", async ({
+  page,
+}) => {
   await signIn(page, "slipway@sagline.localhost");
   await page.goto("/account");
-  const item = page.getByTestId("my-results").getByRole("listitem").filter({ hasText: "Changes requested" })
-    .filter({ has: page.getByRole("link", { name: "Answer the change request" }) }).first();
+  const item = page
+    .getByTestId("my-results")
+    .getByRole("listitem")
+    .filter({ hasText: "Changes requested" })
+    .filter({ has: page.getByRole("link", { name: "Answer the change request" }) })
+    .first();
   const testId = (await item.getAttribute("data-testid")) ?? "";
   const resultId = testId.replace("my-result-", "");
   expect(resultId).toMatch(/^\d+$/);
@@ -110,8 +134,12 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
   await signIn(page, "moderator@sagline.localhost");
   await page.goto("/review/flags");
   await expect(page.getByRole("heading", { level: 1, name: "Reader flags" })).toBeVisible();
-  const flag = page.getByTestId("flag-queue").getByRole("listitem").filter({ hasText: "Capacity looks high for this pack." })
-    .filter({ hasText: "Disputed" }).first();
+  const flag = page
+    .getByTestId("flag-queue")
+    .getByRole("listitem")
+    .filter({ hasText: "Capacity looks high for this pack." })
+    .filter({ hasText: "Disputed" })
+    .first();
   const resultHref = (await flag.getByRole("link", { name: /^result #\d+$/ }).getAttribute("href")) ?? "";
   const resultId = resultHref.replace("/review/", "");
   expect(resultId).toMatch(/^\d+$/);
@@ -121,7 +149,10 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
   await expect(page.getByText("Disputed: a reader flagged this result")).toBeVisible();
 
   await page.goto("/review/flags");
-  const row = page.getByTestId("flag-queue").getByRole("listitem").filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
+  const row = page
+    .getByTestId("flag-queue")
+    .getByRole("listitem")
+    .filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
   await row.getByLabel("Note (required when correcting)").fill("Capacity checked against the log; it matches.");
   const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
   expect(flagId).toMatch(/^\d+$/);
@@ -148,7 +179,10 @@ test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the lic
   await page.goto("/data");
   await page.getByLabel("Cells in series (S)").fill("4");
   await page.getByLabel("Connector").fill("XT60");
-  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Download packs.csv" }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "Download packs.csv" }).click(),
+  ]);
   expect(download.suggestedFilename()).toMatch(/^sagline-packs-\d{4}-\d{2}-\d{2}-v\d+\.\d+\.\d+\.csv$/);
   expect(download.url()).toMatch(/cells=4/);
   expect(download.url()).toMatch(/connector=XT60/);
@@ -160,7 +194,19 @@ test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the lic
   expect(notes.join(" ")).toContain("https://creativecommons.org/licenses/by/4.0/");
   const data = records.filter((r) => !r[0]?.startsWith("#"));
   const [header, ...body] = data;
-  expect(header).toEqual(["id", "slug", "makerId", "model", "cellsInSeries", "ratedCapacityMah", "labelledContinuousC", "labelledBurstC", "weightG", "connector", "approvedResultCount"]);
+  expect(header).toEqual([
+    "id",
+    "slug",
+    "makerId",
+    "model",
+    "cellsInSeries",
+    "ratedCapacityMah",
+    "labelledContinuousC",
+    "labelledBurstC",
+    "weightG",
+    "connector",
+    "approvedResultCount",
+  ]);
   expect(body.length).toBeGreaterThan(0);
   for (const r of body) {
     expect(r).toHaveLength(header?.length ?? 0);
@@ -169,7 +215,9 @@ test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the lic
     expect(Number(r[5])).toBeGreaterThan(0);
   }
   // The same filter through the public API gives the same packs.
-  const api = (await (await page.request.get("/api/v1/packs?cells=4&connector=XT60&size=100")).json()) as { data: { slug: string }[] };
+  const api = (await (await page.request.get("/api/v1/packs?cells=4&connector=XT60&size=100")).json()) as {
+    data: { slug: string }[];
+  };
   expect(body.map((r) => r[1]).sort()).toEqual(api.data.map((p) => p.slug).sort());
 });
 
@@ -181,7 +229,10 @@ test("a journalist opens a chart from /charts and downloads it as PNG and SVG", 
   await expect(page).toHaveURL(/\/charts\/view\/[A-Za-z0-9_-]+(\/[A-Za-z0-9_-]+)*$/);
   await expect(page.getByRole("heading", { level: 1 })).toHaveText(title);
 
-  const [png] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: /PNG image/ }).click()]);
+  const [png] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("link", { name: /PNG image/ }).click(),
+  ]);
   expect(png.suggestedFilename()).toMatch(/^sagline-.+\.png$/);
   const bytes = await readFile((await png.path()) ?? "");
   expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
@@ -191,7 +242,10 @@ test("a journalist opens a chart from /charts and downloads it as PNG and SVG", 
   expect(bytes.length).toBeGreaterThan(10_000);
   expect(bytes.length).toBeLessThan(5_000_000);
 
-  const [svg] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "SVG image" }).click()]);
+  const [svg] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("link", { name: "SVG image" }).click(),
+  ]);
   expect(svg.suggestedFilename()).toMatch(/^sagline-.+\.svg$/);
   const text = await readFile((await svg.path()) ?? "", "utf8");
   expect(text).toMatch(/^(<\?xml[^>]*>\s*)?<svg[\s>]/);
@@ -211,7 +265,11 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
   await page.keyboard.type("brakwater");
   await expect(page).toHaveURL(/q=brakwater/);
   await settled(page);
-  await expect.poll(async () => [...new Set((await rows(page).locator("td:nth-child(1)").allTextContents()).map((t) => t.trim()))]).toEqual(["Brackwater Power"]);
+  await expect
+    .poll(async () => [
+      ...new Set((await rows(page).locator("td:nth-child(1)").allTextContents()).map((t) => t.trim())),
+    ])
+    .toEqual(["Brackwater Power"]);
 
   // On to the "Rated mAh" header button; Enter sorts, highest first.
   await tabTo(page, (f) => f.tag === "button" && f.text.startsWith("Rated mAh"));

@@ -26,17 +26,24 @@ async function signIn(page: Page, email: string) {
   await page.getByRole("button", { name: /sign-in link|send/i }).click();
   await expect(page).toHaveURL(/check-email/);
   let link = "";
-  await expect.poll(async () => {
-    const m = await newestMailFor(email, 10_000);
-    if (new Date(m.receivedAt).getTime() < before - 1000) return "";
-    link = firstLink(m.text);
-    return link;
-  }, { timeout: 15_000 }).not.toBe("");
+  await expect
+    .poll(
+      async () => {
+        const m = await newestMailFor(email, 10_000);
+        if (new Date(m.receivedAt).getTime() < before - 1000) return "";
+        link = firstLink(m.text);
+        return link;
+      },
+      { timeout: 15_000 },
+    )
+    .not.toBe("");
   await page.goto(link);
   await expect(page).toHaveURL(/\/review$/);
 }
 
-test("a moderator approves one flagged result, rejects another, and the approved one is published", async ({ page }) => {
+test("a moderator approves one flagged result, rejects another, and the approved one is published", async ({
+  page,
+}) => {
   await signIn(page, MODERATOR);
   await expect(page.getByRole("heading", { level: 1, name: "Review queue" })).toBeVisible();
 
@@ -86,7 +93,9 @@ test("a moderator approves one flagged result, rejects another, and the approved
 
   // The approved result is on the public pack page.
   await page.goto(packHref ?? "/");
-  await expect(page.getByTestId("pack-results").getByRole("link", { name: `Result #${approveId}`, exact: true })).toBeVisible();
+  await expect(
+    page.getByTestId("pack-results").getByRole("link", { name: `Result #${approveId}`, exact: true }),
+  ).toBeVisible();
 });
 
 test("a reader flags a published result and everyone sees it as disputed", async ({ page }) => {

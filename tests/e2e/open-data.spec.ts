@@ -20,7 +20,10 @@ test.afterAll(async () => {
   await new Promise<void>((resolve) => server.close(() => resolve()));
 });
 
-test("a journalist builds a chart, embeds it on another site, and it renders and resizes", async ({ page, baseURL }) => {
+test("a journalist builds a chart, embeds it on another site, and it renders and resizes", async ({
+  page,
+  baseURL,
+}) => {
   await page.goto("/charts/new");
   await page.getByLabel("Maker ranking (median label ratio)").check();
   await page.getByLabel("Title", { exact: true }).fill("Makers against their labels");
@@ -30,15 +33,21 @@ test("a journalist builds a chart, embeds it on another site, and it renders and
   await expect(page).toHaveURL(/\/charts\/view\/[A-Za-z0-9_-]+(\/[A-Za-z0-9_-]+)*$/);
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Makers against their labels");
   // oEmbed discovery link on the chart page.
-  await expect(page.locator('link[rel="alternate"][type="application/json+oembed"]')).toHaveAttribute("href", /\/api\/oembed\?format=json&url=/);
-  const png = await page.request.get(await page.getByRole("link", { name: /PNG image/ }).getAttribute("href") ?? "");
+  await expect(page.locator('link[rel="alternate"][type="application/json+oembed"]')).toHaveAttribute(
+    "href",
+    /\/api\/oembed\?format=json&url=/,
+  );
+  const png = await page.request.get((await page.getByRole("link", { name: /PNG image/ }).getAttribute("href")) ?? "");
   expect(png.headers()["content-type"]).toBe("image/png");
 
   const snippet = await page.getByLabel("Embed snippet").inputValue();
   expect(snippet).toContain(`${baseURL}/embed/chart/`);
   expect(snippet).toContain('loading="lazy"');
   expect(snippet).toMatch(/title="[^"]+"/);
-  pages.set("/article", `<!doctype html><html><body style="margin:0"><main style="width:600px"><h1>An article</h1>${snippet}<p>After the chart.</p></main></body></html>`);
+  pages.set(
+    "/article",
+    `<!doctype html><html><body style="margin:0"><main style="width:600px"><h1>An article</h1>${snippet}<p>After the chart.</p></main></body></html>`,
+  );
 
   await page.goto(`${otherOrigin}/article`);
   const frame = page.frameLocator("iframe[data-sagline-embed]");
@@ -56,16 +65,27 @@ test("a journalist builds a chart, embeds it on another site, and it renders and
   expect(Math.round(box?.width ?? 0)).toBe(600);
 
   // In a phone-width column the frame shows the narrow layout (larger text, taller) and resizes to it.
-  pages.set("/phone", `<!doctype html><html><body style="margin:0"><main style="width:360px">${snippet}</main></body></html>`);
+  pages.set(
+    "/phone",
+    `<!doctype html><html><body style="margin:0"><main style="width:360px">${snippet}</main></body></html>`,
+  );
   await page.goto(`${otherOrigin}/phone`);
   const narrow = page.frameLocator("iframe[data-sagline-embed]").locator("svg:visible");
   await expect(narrow).toHaveAttribute("viewBox", "0 0 400 400");
   await expect(narrow).toContainText("Source: Sagline");
-  await expect.poll(async () => Number((await page.locator("iframe[data-sagline-embed]").getAttribute("height")) ?? 0)).toBeGreaterThan(360);
+  await expect
+    .poll(async () => Number((await page.locator("iframe[data-sagline-embed]").getAttribute("height")) ?? 0))
+    .toBeGreaterThan(360);
 });
 
-test("embeds are cacheable, cookie-free and frameable; the rest of the site is not", async ({ page, request, baseURL }) => {
-  const charts = (await (await request.get("/api/v1/charts")).json()) as { data: { links: { embed: string; permalink: string } }[] };
+test("embeds are cacheable, cookie-free and frameable; the rest of the site is not", async ({
+  page,
+  request,
+  baseURL,
+}) => {
+  const charts = (await (await request.get("/api/v1/charts")).json()) as {
+    data: { links: { embed: string; permalink: string } }[];
+  };
   const first = charts.data[0]?.links;
   if (!first) throw new Error("the demo seed has charts");
   const embed = await request.get(first.embed);
@@ -78,7 +98,10 @@ test("embeds are cacheable, cookie-free and frameable; the rest of the site is n
   expect(main.headers()["x-frame-options"]).toBe("DENY");
   expect(main.headers()["content-security-policy"]).toContain("frame-ancestors 'none'");
 
-  pages.set("/framing", `<!doctype html><html><body><iframe id="site" src="${baseURL}/charts" width="800" height="400"></iframe><iframe id="embed" src="${baseURL}${first.embed}" width="800" height="400"></iframe></body></html>`);
+  pages.set(
+    "/framing",
+    `<!doctype html><html><body><iframe id="site" src="${baseURL}/charts" width="800" height="400"></iframe><iframe id="embed" src="${baseURL}${first.embed}" width="800" height="400"></iframe></body></html>`,
+  );
   await page.goto(`${otherOrigin}/framing`);
   await expect(page.frameLocator("#embed").locator("svg:visible")).toContainText("Source: Sagline");
   // The browser refuses to show the main site inside the other origin's page: that frame ends on the browser's
@@ -87,17 +110,23 @@ test("embeds are cacheable, cookie-free and frameable; the rest of the site is n
   await expect(page.frameLocator("#site").getByRole("heading", { name: "Charts" })).toHaveCount(0);
 });
 
-test("chart links with a long title and note are stored pages: split into short segments; an old one-segment link redirects", async ({ request }) => {
-  const charts = (await (await request.get("/api/v1/charts")).json()) as { data: { links: { embed: string; permalink: string } }[] };
+test("chart links with a long title and note are stored pages: split into short segments; an old one-segment link redirects", async ({
+  request,
+}) => {
+  const charts = (await (await request.get("/api/v1/charts")).json()) as {
+    data: { links: { embed: string; permalink: string } }[];
+  };
   const split = charts.data.map((c) => c.links).find((l) => l.embed.split("/").length > 4);
   if (!split) throw new Error("the demo seed has a chart whose state needs more than one segment");
   for (const segment of split.embed.split("/")) expect(segment.length).toBeLessThanOrEqual(120);
   // Stored once, then answered from the page cache (a name too long for the file system was never stored).
   // (Storing finishes just after the first answer, so ask until the cache answers.)
-  await expect.poll(async () => {
-    const res = await request.get(split.embed);
-    return `${res.status()} ${res.headers()["x-nextjs-cache"]}`;
-  }).toBe("200 HIT");
+  await expect
+    .poll(async () => {
+      const res = await request.get(split.embed);
+      return `${res.status()} ${res.headers()["x-nextjs-cache"]}`;
+    })
+    .toBe("200 HIT");
   // The one-segment form of the same state (links published before the split) still works, by redirect.
   const joined = split.permalink.replace("/charts/view/", "").split("/").join("");
   const old = await request.get(`/charts/view/${joined}`, { maxRedirects: 0 });
@@ -110,15 +139,23 @@ test("the open-data page offers downloads, the licence and Dataset markup", asyn
   await page.goto("/data");
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Open data");
   await expect(page.getByRole("heading", { name: "Licence and how to credit us" })).toBeVisible();
-  const ld = JSON.parse((await page.locator('script[type="application/ld+json"]').textContent()) ?? "{}") as { "@type": string; license: string };
+  const ld = JSON.parse((await page.locator('script[type="application/ld+json"]').textContent()) ?? "{}") as {
+    "@type": string;
+    license: string;
+  };
   expect(ld["@type"]).toBe("Dataset");
   expect(ld.license).toBe("https://creativecommons.org/licenses/by/4.0/");
-  const csv = await page.request.get((await page.getByRole("link", { name: "results.csv" }).getAttribute("href")) ?? "");
+  const csv = await page.request.get(
+    (await page.getByRole("link", { name: "results.csv" }).getAttribute("href")) ?? "",
+  );
   expect(csv.headers()["content-type"]).toContain("text/csv");
   expect((await csv.text()).split("\r\n").length).toBeGreaterThan(100);
   // A filtered download: one like-for-like group, as CSV with a dated, versioned file name.
   await page.getByLabel("Like-for-like group (results only)").selectOption({ index: 1 });
-  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Download results.csv" }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "Download results.csv" }).click(),
+  ]);
   expect(download.suggestedFilename()).toMatch(/^sagline-results-\d{4}-\d{2}-\d{2}-v\d+\.\d+\.\d+\.csv$/);
   expect(download.url()).toContain("group=");
   await page.getByRole("link", { name: "API guide" }).click();

@@ -7,10 +7,15 @@ export const rows = (page: Page) => page.getByTestId("packs-table").locator("tbo
 export async function settled(page: Page) {
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
   let prev = "";
-  await expect.poll(async () => {
-    const now = (await rows(page).allTextContents()).join("|");
-    const same = now === prev && now !== "";
-    prev = now;
-    return same;
-  }, { intervals: [700], timeout: 20_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const now = (await rows(page).allTextContents()).join("|");
+        const same = now === prev && now !== "";
+        prev = now;
+        return same;
+      },
+      { intervals: [700], timeout: 20_000 },
+    )
+    .toBe(true);
 }

@@ -3,7 +3,8 @@
 import { expect, test, type Page } from "@playwright/test";
 import { rows, settled } from "./packs-table-helpers";
 
-const column = async (page: Page, index: number) => (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
+const column = async (page: Page, index: number) =>
+  (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
 const mah = (t: string) => Number(t.replace(/,/g, ""));
 
 test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
@@ -23,6 +24,24 @@ test("filters the packs table through the URL, and the back button restores the 
   await page.goBack();
   await expect(page).not.toHaveURL(/connector=/);
   await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
+});
+
+test("two filter boxes typed in quick succession both stay: the second builds on the first", async ({ page }) => {
+  await page.goto("/packs");
+  await settled(page);
+  const from = page.getByRole("spinbutton", { name: "Rated capacity from (mAh)" });
+  const to = page.getByRole("spinbutton", { name: "Rated capacity to (mAh)" });
+  // The second box is filled before the first one's value has reached the URL (each commits 350 ms after typing).
+  await from.fill("1000");
+  await to.fill("2000");
+  await expect(page).toHaveURL(/minMah=1000/);
+  await expect(page).toHaveURL(/maxMah=2000/);
+  await settled(page);
+  await expect(from).toHaveValue("1000");
+  await expect(to).toHaveValue("2000");
+  const capacities = (await column(page, 4)).map(mah);
+  expect(capacities.length).toBeGreaterThan(0);
+  expect(capacities.every((c) => c >= 1000 && c <= 2000)).toBe(true);
 });
 
 test("without a group, one click fills the measured columns from the most tested group", async ({ page }) => {
@@ -62,7 +81,9 @@ test("opens a pack from the table and reads its figures by group", async ({ page
   await expect(page.getByTestId("pack-results").locator("li").first()).toBeVisible();
 });
 
-test("a pack page's figures table fits a desktop screen and its over-cycles charts count whole cycles", async ({ page }) => {
+test("a pack page's figures table fits a desktop screen and its over-cycles charts count whole cycles", async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 1280, height: 900 });
   await page.goto("/packs/ashcombe-cells-ridge-1800-5s-130c");
   const region = page.getByRole("region", { name: "Figures by like-for-like group" });
@@ -77,7 +98,9 @@ test("a pack page's figures table fits a desktop screen and its over-cycles char
   for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
 });
 
-test("an empty comparison suggests packs of one size tested the same way, and a suggestion opens a comparison", async ({ page }) => {
+test("an empty comparison suggests packs of one size tested the same way, and a suggestion opens a comparison", async ({
+  page,
+}) => {
   await page.goto("/compare");
   const suggestions = page.getByTestId("compare-suggestions").locator("li");
   await expect(suggestions.first()).toBeVisible();
@@ -94,9 +117,14 @@ test("an empty comparison suggests packs of one size tested the same way, and a 
 test("compares three packs in one like-for-like group and lists what it left out", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new");
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  const hrefs = await rows(page).locator("td:nth-child(2) a").evaluateAll((as) => as.slice(0, 3).map((a) => a.getAttribute("href") ?? ""));
+  const hrefs = await rows(page)
+    .locator("td:nth-child(2) a")
+    .evaluateAll((as) => as.slice(0, 3).map((a) => a.getAttribute("href") ?? ""));
   const slugs = hrefs.map((h) => h.replace("/packs/", ""));
-  const third = (await rows(page).nth(2).locator("td:nth-child(1)").textContent())?.trim() + " " + (await rows(page).nth(2).locator("td:nth-child(2)").textContent())?.trim();
+  const third =
+    (await rows(page).nth(2).locator("td:nth-child(1)").textContent())?.trim() +
+    " " +
+    (await rows(page).nth(2).locator("td:nth-child(2)").textContent())?.trim();
   await page.goto(`/compare?packs=${slugs.slice(0, 2).join(",")}&group=dc-step_a15-25_co3.3_r5-10_new`);
   await page.getByPlaceholder("Type a maker or model").fill(third);
   await page.getByRole("button", { name: "Add", exact: true }).click();
@@ -107,13 +135,21 @@ test("compares three packs in one like-for-like group and lists what it left out
   await expect(table).toContainText("★ best");
   await expect(page.getByTestId("excluded").first()).toBeVisible();
   // Reorder and remove.
-  await page.getByRole("button", { name: /Move .* right/ }).first().click();
+  await page
+    .getByRole("button", { name: /Move .* right/ })
+    .first()
+    .click();
   await expect(page).toHaveURL(new RegExp(`packs=${slugs[1]},${slugs[0]},${slugs[2]}`));
-  await page.getByRole("button", { name: /^Remove / }).last().click();
+  await page
+    .getByRole("button", { name: /^Remove / })
+    .last()
+    .click();
   await expect(table.locator("thead th")).toHaveCount(3);
 });
 
-test("toggles a chart to its data table and back; points are keyboard-focusable with an Esc-dismissable tooltip", async ({ page }) => {
+test("toggles a chart to its data table and back; points are keyboard-focusable with an Esc-dismissable tooltip", async ({
+  page,
+}) => {
   await page.goto("/");
   const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against measured C" });
   await frame.getByRole("button", { name: "Show as table" }).click();
@@ -151,9 +187,16 @@ test("sorts the packs table from the keyboard through the header buttons", async
   expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
 });
 
-test("a result page shows its method card, contributor and review history; the API refuses bad params", async ({ page, request }) => {
+test("a result page shows its method card, contributor and review history; the API refuses bad params", async ({
+  page,
+  request,
+}) => {
   await page.goto("/");
-  await page.getByTestId("newest-results").getByRole("link", { name: /^Result #/ }).first().click();
+  await page
+    .getByTestId("newest-results")
+    .getByRole("link", { name: /^Result #/ })
+    .first()
+    .click();
   await expect(page.getByRole("heading", { name: "Method card" })).toBeVisible();
   await expect(page.getByTestId("contributor")).not.toBeEmpty();
   await expect(page.getByTestId("review-history")).toContainText("approved");

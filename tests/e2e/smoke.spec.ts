@@ -23,7 +23,9 @@ test("an unknown pack is a 404 page, not an error", async ({ page }) => {
   expect(response?.status()).toBe(404);
 });
 
-test("robots.txt and sitemap.xml let search engines find the packs and keep them out of signed-in areas", async ({ request }) => {
+test("robots.txt and sitemap.xml let search engines find the packs and keep them out of signed-in areas", async ({
+  request,
+}) => {
   const robots = await request.get("/robots.txt");
   expect(robots.status()).toBe(200);
   const text = await robots.text();

@@ -5,8 +5,18 @@ import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
 
 function log4s(): Buffer {
   const { rows } = generateLog({
-    seed: 4242, cells: 4, capacityMah: 1300, r0PerCellMohm: 3, r1PerCellMohm: 1, loadCurrentA: 13, cutoffVPerCell: 3.3,
-    ambientC: 22, sampleIntervalS: 1, initialRestS: 5, finalRestS: 5, noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
+    seed: 4242,
+    cells: 4,
+    capacityMah: 1300,
+    r0PerCellMohm: 3,
+    r1PerCellMohm: 1,
+    loadCurrentA: 13,
+    cutoffVPerCell: 3.3,
+    ambientC: 22,
+    sampleIntervalS: 1,
+    initialRestS: 5,
+    finalRestS: 5,
+    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
   });
   return Buffer.from(toCsv(rows));
 }
@@ -18,11 +28,17 @@ async function signInByMail(page: Page, email: string, from: string) {
   await page.getByRole("button", { name: "E-mail me a sign-in link" }).click();
   await expect(page).toHaveURL(/\/sign-in\/check-email/);
   await page.goto("/dev/mail");
-  await page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(email.replace(/[.@+]/g, "\\$&")) }).first().click();
+  await page
+    .getByTestId("caught-mail")
+    .getByRole("link", { name: new RegExp(email.replace(/[.@+]/g, "\\$&")) })
+    .first()
+    .click();
   await page.getByTestId("mail-body").getByRole("link").first().click();
 }
 
-test("a new contributor signs in by e-mail, picks a bench profile, submits a result with a log, and sees it pending", async ({ page }) => {
+test("a new contributor signs in by e-mail, picks a bench profile, submits a result with a log, and sees it pending", async ({
+  page,
+}) => {
   const email = `e2e-${Date.now()}@test.sagline.localhost`;
   await signInByMail(page, email, "/submit");
   await expect(page).toHaveURL(/\/submit$/);
@@ -82,6 +98,10 @@ test("a new contributor signs in by e-mail, picks a bench profile, submits a res
   // until it shows up.
   await expect(async () => {
     await page.goto("/dev/mail");
-    await expect(page.getByTestId("caught-mail").getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) })).toBeVisible({ timeout: 1000 });
+    await expect(
+      page
+        .getByTestId("caught-mail")
+        .getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) }),
+    ).toBeVisible({ timeout: 1000 });
   }).toPass({ timeout: 15_000 });
 });

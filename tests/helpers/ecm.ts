@@ -1,5 +1,12 @@
 /** The equivalent-circuit log generator, for tests: synthetic logs with known truth. */
 export {
-  EcmSimulator, csvChunks, csvHeader, csvLine, generateLog, ocvPerCellV, seededRandom, toCsv,
-  type CsvColumn, type CsvDialect, type EcmOptions, type EcmRow, type EcmTruth,
+  EcmSimulator,
+  csvChunks,
+  generateLog,
+  ocvPerCellV,
+  seededRandom,
+  toCsv,
+  type CsvColumn,
+  type CsvDialect,
+  type EcmOptions,
 } from "@/lib/synthetic/equivalent-circuit";

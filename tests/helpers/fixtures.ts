@@ -10,14 +10,24 @@ const next = () => `${process.pid}-${++seq}`;
 
 export async function makeUser(opts: { displayName?: string; anonymous?: boolean } = {}) {
   const n = next();
-  const [u] = await db.insert(users).values({ email: `u${n}@test.localhost`, displayName: opts.displayName ?? `Tester ${n}`, anonymous: opts.anonymous ?? false }).returning();
+  const [u] = await db
+    .insert(users)
+    .values({
+      email: `u${n}@test.localhost`,
+      displayName: opts.displayName ?? `Tester ${n}`,
+      anonymous: opts.anonymous ?? false,
+    })
+    .returning();
   if (!u) throw new Error("no user");
   return u;
 }
 
 export async function makeMaker(name?: string) {
   const n = next();
-  const [m] = await db.insert(makers).values({ slug: `maker-${n}`, name: name ?? `Maker ${n}` }).returning();
+  const [m] = await db
+    .insert(makers)
+    .values({ slug: `maker-${n}`, name: name ?? `Maker ${n}` })
+    .returning();
   if (!m) throw new Error("no maker");
   return m;
 }
@@ -26,7 +36,17 @@ export async function makePack(makerId: number, opts: Partial<typeof packs.$infe
   const n = next();
   const [p] = await db
     .insert(packs)
-    .values({ slug: `pack-${n}`, makerId, model: `Model ${n}`, cellsInSeries: 4, ratedCapacityMah: 1500, labelledContinuousC: 50, connector: "XT60", weightG: 180, ...opts })
+    .values({
+      slug: `pack-${n}`,
+      makerId,
+      model: `Model ${n}`,
+      cellsInSeries: 4,
+      ratedCapacityMah: 1500,
+      labelledContinuousC: 50,
+      connector: "XT60",
+      weightG: 180,
+      ...opts,
+    })
     .returning();
   if (!p) throw new Error("no pack");
   return p;
@@ -51,28 +71,63 @@ export type ResultOpts = {
   curve?: CurvePoint[];
 };
 
-export async function makeResult(pack: { id: number; ratedCapacityMah: number; labelledContinuousC: number }, contributorId: string, o: ResultOpts = {}) {
+export async function makeResult(
+  pack: { id: number; ratedCapacityMah: number; labelledContinuousC: number },
+  contributorId: string,
+  o: ResultOpts = {},
+) {
   const n = next();
   const rateC = o.rateC ?? 8;
   const loadCurrentA = (rateC * pack.ratedCapacityMah) / 1000;
-  const card = { resistanceMethod: o.method ?? "dc-step", ambientC: o.ambientC ?? 22, cutoffVPerCell: o.cutoffVPerCell ?? 3.3, loadCurrentA, ratedMah: pack.ratedCapacityMah, cyclesBeforeTest: o.cycles ?? 0 };
+  const card = {
+    resistanceMethod: o.method ?? "dc-step",
+    ambientC: o.ambientC ?? 22,
+    cutoffVPerCell: o.cutoffVPerCell ?? 3.3,
+    loadCurrentA,
+    ratedMah: pack.ratedCapacityMah,
+    cyclesBeforeTest: o.cycles ?? 0,
+  };
   const sag = o.sagLimitedC === undefined ? 40 : o.sagLimitedC;
-  const figures = { timeToCutoffS: o.reachedCutoff === false ? null : 400, timeToStopTemperatureS: o.passedStop ? 300 : null, sagLimitedC: sag } as unknown as Figures;
+  const figures = {
+    timeToCutoffS: o.reachedCutoff === false ? null : 400,
+    timeToStopTemperatureS: o.passedStop ? 300 : null,
+    sagLimitedC: sag,
+  } as unknown as Figures;
   const status = o.status ?? "approved";
   const [r] = await db
     .insert(results)
     .values({
-      packId: pack.id, contributorId, status, ambientTemperatureC: card.ambientC, loadMode: o.loadMode ?? "constant-current", loadCurrentA,
-      cutoffVPerCell: card.cutoffVPerCell, stopTemperatureC: 60, resistanceMethod: card.resistanceMethod, equipment: "Test load",
-      cyclesBeforeTest: card.cyclesBeforeTest, logKey: `logs/${n}`, logSha256: n, logBytes: 10, logFilename: "x.csv", figures, curve: o.curve ?? [],
-      sagLimitedC: sag, labelRatio: o.labelRatio === undefined ? (sag === null ? null : sag / pack.labelledContinuousC) : o.labelRatio,
-      capacityMah: o.capacityMah === undefined ? pack.ratedCapacityMah * 0.95 : o.capacityMah, capacityRatio: o.capacityRatio ?? 0.95,
-      dcResistanceMohm: o.dcResistanceMohm === undefined ? 12 : o.dcResistanceMohm, loadRateC: rateC, groupKey: groupKey(card).key,
+      packId: pack.id,
+      contributorId,
+      status,
+      ambientTemperatureC: card.ambientC,
+      loadMode: o.loadMode ?? "constant-current",
+      loadCurrentA,
+      cutoffVPerCell: card.cutoffVPerCell,
+      stopTemperatureC: 60,
+      resistanceMethod: card.resistanceMethod,
+      equipment: "Test load",
+      cyclesBeforeTest: card.cyclesBeforeTest,
+      logKey: `logs/${n}`,
+      logSha256: n,
+      logBytes: 10,
+      logFilename: "x.csv",
+      figures,
+      curve: o.curve ?? [],
+      sagLimitedC: sag,
+      labelRatio: o.labelRatio === undefined ? (sag === null ? null : sag / pack.labelledContinuousC) : o.labelRatio,
+      capacityMah: o.capacityMah === undefined ? pack.ratedCapacityMah * 0.95 : o.capacityMah,
+      capacityRatio: o.capacityRatio ?? 0.95,
+      dcResistanceMohm: o.dcResistanceMohm === undefined ? 12 : o.dcResistanceMohm,
+      loadRateC: rateC,
+      groupKey: groupKey(card).key,
       publishedAt: status === "approved" || status === "disputed" ? (o.publishedAt ?? new Date()) : null,
     })
     .returning();
   if (!r) throw new Error("no result");
-  await db.insert(reviewEvents).values({ resultId: r.id, actorId: contributorId, toStatus: "pending", note: "Submitted." });
+  await db
+    .insert(reviewEvents)
+    .values({ resultId: r.id, actorId: contributorId, toStatus: "pending", note: "Submitted." });
   return r;
 }
 

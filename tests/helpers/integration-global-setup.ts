@@ -19,7 +19,9 @@ export default async function setup(project: TestProject) {
   try {
     await client.connect();
   } catch (err) {
-    throw new Error(`Integration tests need the local PostgreSQL on port ${port} (npm test starts it): ${(err as Error).message}`);
+    throw new Error(
+      `Integration tests need the local PostgreSQL on port ${port} (npm test starts it): ${(err as Error).message}`,
+    );
   }
   await client.query(`CREATE DATABASE ${name}`);
   await client.end();

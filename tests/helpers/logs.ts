@@ -1,13 +1,32 @@
 // Invented logs for tests: the equivalent-circuit generator in the dialects testers' loggers write.
 import { generateLog, toCsv, type CsvDialect, type EcmOptions } from "@/lib/synthetic/equivalent-circuit";
 
-export const SEMICOLON_DIALECT: CsvDialect = { delimiter: ";", decimalComma: true, voltageUnit: "mV", currentUnit: "mA", timeUnit: "ms" };
+export const SEMICOLON_DIALECT: CsvDialect = {
+  delimiter: ";",
+  decimalComma: true,
+  voltageUnit: "mV",
+  currentUnit: "mA",
+  timeUnit: "ms",
+};
 
 /** A 4S 1300 mAh pack discharged at 10C to 3.3 V per cell (sampled at 1 Hz), about 100 kB of CSV. */
-export function sampleLog(options: EcmOptions = {}, dialect: CsvDialect = {}): { csv: string; truth: ReturnType<typeof generateLog>["truth"] } {
+export function sampleLog(
+  options: EcmOptions = {},
+  dialect: CsvDialect = {},
+): { csv: string; truth: ReturnType<typeof generateLog>["truth"] } {
   const { rows, truth } = generateLog({
-    seed: 42, cells: 4, capacityMah: 1300, r0PerCellMohm: 3, r1PerCellMohm: 1, loadCurrentA: 13, cutoffVPerCell: 3.3,
-    ambientC: 22, sampleIntervalS: 1, initialRestS: 5, finalRestS: 5, noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
+    seed: 42,
+    cells: 4,
+    capacityMah: 1300,
+    r0PerCellMohm: 3,
+    r1PerCellMohm: 1,
+    loadCurrentA: 13,
+    cutoffVPerCell: 3.3,
+    ambientC: 22,
+    sampleIntervalS: 1,
+    initialRestS: 5,
+    finalRestS: 5,
+    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
     ...options,
   });
   return { csv: toCsv(rows, dialect), truth };
@@ -15,10 +34,20 @@ export function sampleLog(options: EcmOptions = {}, dialect: CsvDialect = {}): {
 
 /** A request as the browser or curl would send it. */
 export function postRequest(url: string, body: BodyInit | null, headers: Record<string, string> = {}): Request {
-  return new Request(new URL(url, "http://localhost:3013"), { method: "POST", body, headers, duplex: "half" } as RequestInit);
+  return new Request(new URL(url, "http://localhost:3013"), {
+    method: "POST",
+    body,
+    headers,
+    duplex: "half",
+  } as RequestInit);
 }
 
-export function multipart(field: string, filename: string, content: string | Uint8Array<ArrayBuffer>, type = "text/csv"): FormData {
+export function multipart(
+  field: string,
+  filename: string,
+  content: string | Uint8Array<ArrayBuffer>,
+  type = "text/csv",
+): FormData {
   const fd = new FormData();
   fd.append(field, new Blob([content], { type }), filename);
   return fd;

@@ -4,7 +4,14 @@ import path from "node:path";
 
 const dir = path.resolve(process.cwd(), process.env.MAIL_CATCHER_DIR ?? ".mail");
 
-export type Caught = { id: string; to: string[]; subject: string; text: string; html: string | null; receivedAt: string };
+export type Caught = {
+  id: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string | null;
+  receivedAt: string;
+};
 
 export function caughtFor(address: string): Caught[] {
   if (!fs.existsSync(dir)) return [];

@@ -1,6 +1,6 @@
 // Stand-ins for next/headers and next/cache in integration tests, so server actions run outside Next.js
 // with a real session: `requestState.token` holds a session token inserted into the sessions table, and
-// lib/session.ts really looks it up. Use in a test file with:
+// server/session.ts really looks it up. Use in a test file with:
 //   vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 //   vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 export const requestState = {
@@ -15,7 +15,8 @@ const SESSION_COOKIE = "authjs.session-token";
 
 export const nextHeaders = {
   cookies: async () => ({
-    get: (name: string) => (name === SESSION_COOKIE && requestState.token ? { name, value: requestState.token } : undefined),
+    get: (name: string) =>
+      name === SESSION_COOKIE && requestState.token ? { name, value: requestState.token } : undefined,
     getAll: () => (requestState.token ? [{ name: SESSION_COOKIE, value: requestState.token }] : []),
     has: (name: string) => name === SESSION_COOKIE && !!requestState.token,
     set: (name: string, value: string) => {
@@ -45,7 +46,8 @@ export const nextCache = {
 
 /** Thrown by redirect() from next/navigation; its digest carries the target. */
 export function redirectTarget(err: unknown): string | null {
-  const digest = typeof err === "object" && err !== null && "digest" in err ? String((err as { digest: unknown }).digest) : "";
+  const digest =
+    typeof err === "object" && err !== null && "digest" in err ? String((err as { digest: unknown }).digest) : "";
   if (!digest.startsWith("NEXT_REDIRECT")) return null;
   return digest.split(";")[2] ?? null;
 }
@@ -66,7 +68,12 @@ export const taggedCache = {
     requestState.revalidated.push(`tag:${tag}`);
     for (const [key, entry] of taggedStore) if (entry.tags.includes(tag)) taggedStore.delete(key);
   },
-  unstable_cache: <A extends unknown[], R>(fn: (...args: A) => Promise<R>, keyParts: string[] = [], options: { tags?: string[] } = {}) =>
+  unstable_cache:
+    <A extends unknown[], R>(
+      fn: (...args: A) => Promise<R>,
+      keyParts: string[] = [],
+      options: { tags?: string[] } = {},
+    ) =>
     (...args: A): Promise<R> => {
       const key = JSON.stringify([keyParts, args]);
       const hit = taggedStore.get(key);

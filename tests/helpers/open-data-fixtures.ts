@@ -4,48 +4,138 @@ import { db } from "@/db";
 import { makers, packs, results, users, type ReviewStatus } from "@/db/schema";
 import type { Figures } from "@/lib/analysis";
 
-export function figures(over: Partial<Figures> = {}): Figures {
+function figures(over: Partial<Figures> = {}): Figures {
   return {
-    samples: 100, skippedLines: 0, durationS: 600, cells: 4, capacityMah: 1250, energyWh: 18.2, meanVoltageV: 14.6,
-    meanVoltagePerCellV: 3.65, minVoltageV: 13.2, minVoltagePerCellV: 3.3, peakCurrentA: 30, startTemperatureC: 24,
-    peakTemperatureC: 44, temperatureRiseC: 20, timeToCutoffS: 590, timeToStopTemperatureS: null, holdVoltagePerCellV: 3.7,
-    dcResistanceMohm: 14, dcResistancePerCellMohm: 3.5, dcResistanceMethod: "step", resistanceAt25CMohm: 13.8,
-    resistanceTemperatureC: 24, sagLimitedC: 40, capacityRatio: 0.96, labelRatio: 0.53, specificEnergyWhKg: 120,
-    specificPowerWKg: 2000, mainDischargeCurrentA: 26, mainDischargeDurationS: 580, mainDischargeCapacityMah: 1240,
-    mainDischargeEnergyWh: 18, restVoltageV: 16.8, minCellVoltageV: 3.28, dischargeCurrentSign: "positive", cellsSource: "given",
-    warnings: [], ...over,
+    samples: 100,
+    skippedLines: 0,
+    durationS: 600,
+    cells: 4,
+    capacityMah: 1250,
+    energyWh: 18.2,
+    meanVoltageV: 14.6,
+    meanVoltagePerCellV: 3.65,
+    minVoltageV: 13.2,
+    minVoltagePerCellV: 3.3,
+    peakCurrentA: 30,
+    startTemperatureC: 24,
+    peakTemperatureC: 44,
+    temperatureRiseC: 20,
+    timeToCutoffS: 590,
+    timeToStopTemperatureS: null,
+    holdVoltagePerCellV: 3.7,
+    dcResistanceMohm: 14,
+    dcResistancePerCellMohm: 3.5,
+    dcResistanceMethod: "step",
+    resistanceAt25CMohm: 13.8,
+    resistanceTemperatureC: 24,
+    sagLimitedC: 40,
+    capacityRatio: 0.96,
+    labelRatio: 0.53,
+    specificEnergyWhKg: 120,
+    specificPowerWKg: 2000,
+    mainDischargeCurrentA: 26,
+    mainDischargeDurationS: 580,
+    mainDischargeCapacityMah: 1240,
+    mainDischargeEnergyWh: 18,
+    restVoltageV: 16.8,
+    minCellVoltageV: 3.28,
+    dischargeCurrentSign: "positive",
+    cellsSource: "given",
+    warnings: [],
+    ...over,
   };
 }
 
 export async function seedOpenData(prefix: string) {
-  const [user] = await db.insert(users).values({ email: `${prefix}@example.test`, displayName: `${prefix} tester` }).returning();
+  const [user] = await db
+    .insert(users)
+    .values({ email: `${prefix}@example.test`, displayName: `${prefix} tester` })
+    .returning();
   if (!user) throw new Error("no user");
-  const [m1, m2] = await db.insert(makers).values([
-    { slug: `${prefix}-voltwren`, name: `${prefix} Voltwren` },
-    { slug: `${prefix}-pikecell`, name: `${prefix} Pikecell` },
-  ]).returning();
+  const [m1, m2] = await db
+    .insert(makers)
+    .values([
+      { slug: `${prefix}-voltwren`, name: `${prefix} Voltwren` },
+      { slug: `${prefix}-pikecell`, name: `${prefix} Pikecell` },
+    ])
+    .returning();
   if (!m1 || !m2) throw new Error("no makers");
-  const packRows = await db.insert(packs).values([
-    { slug: `${prefix}-voltwren-1300-4s`, makerId: m1.id, model: "Kestrel 1300 4S 100C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 100, connector: "XT60" },
-    { slug: `${prefix}-voltwren-2200-3s`, makerId: m1.id, model: "Kestrel 2200 3S 50C", cellsInSeries: 3, ratedCapacityMah: 2200, labelledContinuousC: 50, connector: "XT60" },
-    { slug: `${prefix}-pikecell-1300-4s`, makerId: m2.id, model: "=Formula 1300 4S 75C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, connector: "XT60" },
-  ]).returning();
+  const packRows = await db
+    .insert(packs)
+    .values([
+      {
+        slug: `${prefix}-voltwren-1300-4s`,
+        makerId: m1.id,
+        model: "Kestrel 1300 4S 100C",
+        cellsInSeries: 4,
+        ratedCapacityMah: 1300,
+        labelledContinuousC: 100,
+        connector: "XT60",
+      },
+      {
+        slug: `${prefix}-voltwren-2200-3s`,
+        makerId: m1.id,
+        model: "Kestrel 2200 3S 50C",
+        cellsInSeries: 3,
+        ratedCapacityMah: 2200,
+        labelledContinuousC: 50,
+        connector: "XT60",
+      },
+      {
+        slug: `${prefix}-pikecell-1300-4s`,
+        makerId: m2.id,
+        model: "=Formula 1300 4S 75C",
+        cellsInSeries: 4,
+        ratedCapacityMah: 1300,
+        labelledContinuousC: 75,
+        connector: "XT60",
+      },
+    ])
+    .returning();
   const [p1, p2, p3] = packRows;
   if (!p1 || !p2 || !p3) throw new Error("no packs");
   const group = `${prefix}_grp`;
   const base = {
-    contributorId: user.id, ambientTemperatureC: 22, loadMode: "constant-current" as const, loadCurrentA: 13, cutoffVPerCell: 3.3,
-    stopTemperatureC: 60, resistanceMethod: "dc-step" as const, equipment: "Bench load, 30 A", cyclesBeforeTest: 2,
-    logKey: "k", logSha256: "s", logBytes: 1, logFilename: "log.csv", curve: [], loadRateC: 10, groupKey: group,
+    contributorId: user.id,
+    ambientTemperatureC: 22,
+    loadMode: "constant-current" as const,
+    loadCurrentA: 13,
+    cutoffVPerCell: 3.3,
+    stopTemperatureC: 60,
+    resistanceMethod: "dc-step" as const,
+    equipment: "Bench load, 30 A",
+    cyclesBeforeTest: 2,
+    logKey: "k",
+    logSha256: "s",
+    logBytes: 1,
+    logFilename: "log.csv",
+    curve: [],
+    loadRateC: 10,
+    groupKey: group,
   };
   const r = (packId: number, status: ReviewStatus, sagLimitedC: number, notes: string | null = null) => ({
-    ...base, packId, status, notes, sagLimitedC, labelRatio: sagLimitedC / 100, capacityMah: 1250,
-    figures: figures({ sagLimitedC, labelRatio: sagLimitedC / 100 }), publishedAt: status === "approved" ? new Date("2026-11-01T00:00:00Z") : null,
+    ...base,
+    packId,
+    status,
+    notes,
+    sagLimitedC,
+    labelRatio: sagLimitedC / 100,
+    capacityMah: 1250,
+    figures: figures({ sagLimitedC, labelRatio: sagLimitedC / 100 }),
+    publishedAt: status === "approved" ? new Date("2026-11-01T00:00:00Z") : null,
   });
-  const rows = await db.insert(results).values([
-    r(p1.id, "approved", 40), r(p1.id, "approved", 44), r(p1.id, "pending", 90), r(p1.id, "rejected", 95),
-    r(p2.id, "approved", 30, "@SUM(A1) warm room"), r(p3.id, "approved", 50, "=cmd|' /C calc'!A0"), r(p3.id, "withdrawn", 99),
-    r(p3.id, "changes_requested", 98),
-  ]).returning({ id: results.id, status: results.status });
+  const rows = await db
+    .insert(results)
+    .values([
+      r(p1.id, "approved", 40),
+      r(p1.id, "approved", 44),
+      r(p1.id, "pending", 90),
+      r(p1.id, "rejected", 95),
+      r(p2.id, "approved", 30, "@SUM(A1) warm room"),
+      r(p3.id, "approved", 50, "=cmd|' /C calc'!A0"),
+      r(p3.id, "withdrawn", 99),
+      r(p3.id, "changes_requested", 98),
+    ])
+    .returning({ id: results.id, status: results.status });
   return { makers: [m1, m2], packs: [p1, p2, p3], group, results: rows };
 }

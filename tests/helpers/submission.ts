@@ -9,26 +9,57 @@ import type { SubmitResultValues } from "@/lib/validations/result";
 import { postRequest, sampleLog } from "./logs";
 import { PNG_BYTES } from "./storage";
 
-export async function makePack(over: Partial<typeof packs.$inferInsert> = {}): Promise<{ packId: number; makerId: number }> {
+export async function makePack(
+  over: Partial<typeof packs.$inferInsert> = {},
+): Promise<{ packId: number; makerId: number }> {
   const tag = randomUUID().slice(0, 8);
-  const [maker] = await db.insert(makers).values({ slug: `testmaker-${tag}`, name: `Testmaker ${tag}` }).returning({ id: makers.id });
+  const [maker] = await db
+    .insert(makers)
+    .values({ slug: `testmaker-${tag}`, name: `Testmaker ${tag}` })
+    .returning({ id: makers.id });
   if (!maker) throw new Error("no maker");
   const [pack] = await db
     .insert(packs)
-    .values({ slug: `testmaker-${tag}-pack`, makerId: maker.id, model: `Volt ${tag} 1300 4S 75C`, cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, weightG: 160, connector: "XT60", ...over })
+    .values({
+      slug: `testmaker-${tag}-pack`,
+      makerId: maker.id,
+      model: `Volt ${tag} 1300 4S 75C`,
+      cellsInSeries: 4,
+      ratedCapacityMah: 1300,
+      labelledContinuousC: 75,
+      weightG: 160,
+      connector: "XT60",
+      ...over,
+    })
     .returning({ id: packs.id });
   if (!pack) throw new Error("no pack");
   return { packId: pack.id, makerId: maker.id };
 }
 
-export async function uploadLog(token: string, csv = sampleLog().csv, filename = "bench.csv"): Promise<{ key: string; filename: string; sha256: string }> {
-  const res = await uploadLogRoute(postRequest(`/api/v1/uploads/log?filename=${encodeURIComponent(filename)}`, csv, { "content-type": "text/csv", cookie: `authjs.session-token=${token}` }), undefined);
+export async function uploadLog(
+  token: string,
+  csv = sampleLog().csv,
+  filename = "bench.csv",
+): Promise<{ key: string; filename: string; sha256: string }> {
+  const res = await uploadLogRoute(
+    postRequest(`/api/v1/uploads/log?filename=${encodeURIComponent(filename)}`, csv, {
+      "content-type": "text/csv",
+      cookie: `authjs.session-token=${token}`,
+    }),
+    undefined,
+  );
   if (res.status !== 201) throw new Error(`upload failed: ${res.status} ${await res.text()}`);
   return (await res.json()).log;
 }
 
 export async function uploadPhoto(token: string): Promise<string> {
-  const res = await uploadPhotoRoute(postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", cookie: `authjs.session-token=${token}` }), undefined);
+  const res = await uploadPhotoRoute(
+    postRequest("/api/v1/uploads/photo", PNG_BYTES, {
+      "content-type": "image/png",
+      cookie: `authjs.session-token=${token}`,
+    }),
+    undefined,
+  );
   if (res.status !== 201) throw new Error(`photo upload failed: ${res.status}`);
   return (await res.json()).key;
 }
@@ -49,9 +80,23 @@ export const validMethod: SubmitResultValues["method"] = {
   notes: "",
 };
 
-export const noProposal = { makerId: "", makerName: "", model: "", cellsInSeries: "", ratedCapacityMah: "", labelledContinuousC: "", labelledBurstC: "", weightG: "", connector: "" };
+export const noProposal = {
+  makerId: "",
+  makerName: "",
+  model: "",
+  cellsInSeries: "",
+  ratedCapacityMah: "",
+  labelledContinuousC: "",
+  labelledBurstC: "",
+  weightG: "",
+  connector: "",
+};
 
-export function submission(packId: number, log: { key: string; filename: string }, over: Partial<SubmitResultValues> = {}): SubmitResultValues {
+export function submission(
+  packId: number,
+  log: { key: string; filename: string },
+  over: Partial<SubmitResultValues> = {},
+): SubmitResultValues {
   return {
     idempotencyKey: randomUUID(),
     pack: { mode: "existing", packId: String(packId), ...noProposal },

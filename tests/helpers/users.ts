@@ -5,7 +5,10 @@ import { sessions, users, type UserRole } from "@/db/schema";
 
 export async function createUser(role: UserRole, label: string = role): Promise<{ id: string; email: string }> {
   const email = `${label}-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
-  const [row] = await db.insert(users).values({ email, role, displayName: `Test ${label}` }).returning({ id: users.id, email: users.email });
+  const [row] = await db
+    .insert(users)
+    .values({ email, role, displayName: `Test ${label}` })
+    .returning({ id: users.id, email: users.email });
   if (!row?.email) throw new Error("user insert returned nothing");
   return { id: row.id, email: row.email };
 }

@@ -17,14 +17,36 @@ const call = (req: Request) => POST(req, undefined);
 describe("POST /api/v1/analyse", () => {
   it("answers a raw text/csv body with the command-line tool's JSON fields (IEC 61960-3 two-level log)", async () => {
     const { csv, truth } = sampleLog({ iecPrelude: true });
-    const res = await call(postRequest("/api/v1/analyse?cells=4&ratedMah=1300&labelledC=75&weightG=150", csv, { "content-type": "text/csv", ...fresh() }));
+    const res = await call(
+      postRequest("/api/v1/analyse?cells=4&ratedMah=1300&labelledC=75&weightG=150", csv, {
+        "content-type": "text/csv",
+        ...fresh(),
+      }),
+    );
     expect(res.status).toBe(200);
     const body = await res.json();
     for (const field of [
-      "samples", "durationS", "cells", "capacityMah", "energyWh", "meanVoltageV", "minVoltageV", "peakCurrentA", "peakTemperatureC",
-      "temperatureRiseC", "holdVoltagePerCellV", "dcResistanceMohm", "dcResistanceMethod", "resistanceAt25CMohm", "sagLimitedC",
-      "capacityRatio", "labelRatio", "specificEnergyWhKg", "warnings",
-    ]) expect(body, field).toHaveProperty(field);
+      "samples",
+      "durationS",
+      "cells",
+      "capacityMah",
+      "energyWh",
+      "meanVoltageV",
+      "minVoltageV",
+      "peakCurrentA",
+      "peakTemperatureC",
+      "temperatureRiseC",
+      "holdVoltagePerCellV",
+      "dcResistanceMohm",
+      "dcResistanceMethod",
+      "resistanceAt25CMohm",
+      "sagLimitedC",
+      "capacityRatio",
+      "labelRatio",
+      "specificEnergyWhKg",
+      "warnings",
+    ])
+      expect(body, field).toHaveProperty(field);
     expect(body.cells).toBe(4);
     expect(body.dcResistanceMethod).toBe("iec-61960-two-level");
     expect(body.capacityMah).toBeCloseTo(truth.deliveredMah, -1);
@@ -36,7 +58,9 @@ describe("POST /api/v1/analyse", () => {
   it("reads a multipart field `file` in the semicolon + decimal comma + mV/mA dialect, and adds the curve on request", async () => {
     const { csv } = sampleLog({}, SEMICOLON_DIALECT);
     const before = await db.$count(results);
-    const res = await call(postRequest("/api/v1/analyse?cells=4&ratedMah=1300&include=curve", multipart("file", "bench.csv", csv), fresh()));
+    const res = await call(
+      postRequest("/api/v1/analyse?cells=4&ratedMah=1300&include=curve", multipart("file", "bench.csv", csv), fresh()),
+    );
     expect(res.status).toBe(200);
     const body = await res.json();
     expect(body.capacityMah).toBeGreaterThan(1200);
@@ -55,7 +79,9 @@ describe("POST /api/v1/analyse", () => {
   });
 
   it("refuses a log that cannot be read with 422 and a clear message on the file", async () => {
-    const res = await call(postRequest("/api/v1/analyse", "hello,world\n1,2\n", { "content-type": "text/csv", ...fresh() }));
+    const res = await call(
+      postRequest("/api/v1/analyse", "hello,world\n1,2\n", { "content-type": "text/csv", ...fresh() }),
+    );
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(body.error.code).toBe("validation");
@@ -79,14 +105,21 @@ describe("POST /api/v1/analyse", () => {
 
   it("refuses bad query parameters with 422 and field errors", async () => {
     const { csv } = sampleLog();
-    const res = await call(postRequest("/api/v1/analyse?cells=4.5&ratedMah=-3", csv, { "content-type": "text/csv", ...fresh() }));
+    const res = await call(
+      postRequest("/api/v1/analyse?cells=4.5&ratedMah=-3", csv, { "content-type": "text/csv", ...fresh() }),
+    );
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(Object.keys(body.error.fieldErrors).sort()).toEqual(["cells", "ratedMah"]);
   });
 
   it("answers 415 for a wrong content type", async () => {
-    const res = await call(postRequest("/api/v1/analyse", JSON.stringify({ log: "1,2" }), { "content-type": "application/json", ...fresh() }));
+    const res = await call(
+      postRequest("/api/v1/analyse", JSON.stringify({ log: "1,2" }), {
+        "content-type": "application/json",
+        ...fresh(),
+      }),
+    );
     expect(res.status).toBe(415);
     expect((await res.json()).error.code).toBe("unsupported_media_type");
   });
@@ -94,7 +127,13 @@ describe("POST /api/v1/analyse", () => {
   it("answers 413 past the body limit, whether Content-Length says so or the stream does", async () => {
     const { csv } = sampleLog({ loadCurrentA: 2.6, sampleIntervalS: 0.1 });
     expect(csv.length).toBeGreaterThan(400 * 1024);
-    const declared = await call(postRequest("/api/v1/analyse", csv, { "content-type": "text/csv", "content-length": String(Buffer.byteLength(csv)), ...fresh() }));
+    const declared = await call(
+      postRequest("/api/v1/analyse", csv, {
+        "content-type": "text/csv",
+        "content-length": String(Buffer.byteLength(csv)),
+        ...fresh(),
+      }),
+    );
     expect(declared.status).toBe(413);
     const streamed = await call(postRequest("/api/v1/analyse", csv, { "content-type": "text/csv", ...fresh() }));
     expect(streamed.status).toBe(413);
@@ -111,7 +150,14 @@ describe("POST /api/v1/analyse", () => {
   });
 
   it("refuses a cross-site browser request", async () => {
-    const res = await call(postRequest("/api/v1/analyse", "t,v\n", { "content-type": "text/csv", origin: "https://elsewhere.example", host: "localhost:3013", ...fresh() }));
+    const res = await call(
+      postRequest("/api/v1/analyse", "t,v\n", {
+        "content-type": "text/csv",
+        origin: "https://elsewhere.example",
+        host: "localhost:3013",
+        ...fresh(),
+      }),
+    );
     expect(res.status).toBe(403);
   });
 });

@@ -1,4 +1,4 @@
-// The public API reads through tagged caches (lib/public-data.ts): a read is served from the cache until a
+// The public API reads through tagged caches (server/public-data.ts): a read is served from the cache until a
 // tag it carries is revalidated, and a moderation decision revalidates exactly those tags. Uses a next/cache
 // stand-in that really caches by key and drops entries by tag (tests/helpers/next-mocks.ts).
 import { beforeAll, describe, expect, it, vi } from "vitest";
@@ -7,7 +7,7 @@ import { GET as getPack } from "@/app/api/v1/packs/[slug]/route";
 import { GET as getResults } from "@/app/api/v1/results/route";
 import { GET as getGroup } from "@/app/api/v1/groups/[key]/route";
 import { db } from "@/db";
-import { decideResult } from "@/db/mutations/review";
+import { decideResult } from "@/server/review";
 import { makers, users } from "@/db/schema";
 import { taggedCache } from "../helpers/next-mocks";
 import { seedOpenData } from "../helpers/open-data-fixtures";
@@ -18,13 +18,17 @@ const P = "apic";
 let fx: Awaited<ReturnType<typeof seedOpenData>>;
 let moderatorId = "";
 let ip = 0;
-const req = (path: string) => new Request(`http://localhost:3000${path}`, { headers: { "x-forwarded-for": `10.9.0.${++ip % 250}` } });
+const req = (path: string) =>
+  new Request(`http://localhost:3000${path}`, { headers: { "x-forwarded-for": `10.9.0.${++ip % 250}` } });
 const noParams = { params: Promise.resolve({}) };
 type Json = { data: unknown; meta: { total?: number } };
 
 beforeAll(async () => {
   fx = await seedOpenData(P);
-  const [mod] = await db.insert(users).values({ email: `${P}-mod@example.test`, displayName: `${P} moderator`, role: "moderator" }).returning();
+  const [mod] = await db
+    .insert(users)
+    .values({ email: `${P}-mod@example.test`, displayName: `${P} moderator`, role: "moderator" })
+    .returning();
   if (!mod) throw new Error("no moderator");
   moderatorId = mod.id;
 });
@@ -40,10 +44,14 @@ describe("tagged caching of the public API", () => {
     const path = `/api/v1/results?group=${fx.group}`;
     const before = await total(path);
     expect(before).toBe(4);
-    const groupBefore = (await (await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })).json()) as { data: { resultCount: number } };
+    const groupBefore = (await (
+      await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })
+    ).json()) as { data: { resultCount: number } };
     expect(groupBefore.data.resultCount).toBe(4);
     const slug = fx.packs[0]!.slug;
-    const packBefore = await (await getPack(req(`/api/v1/packs/${slug}`), { params: Promise.resolve({ slug }) })).text();
+    const packBefore = await (
+      await getPack(req(`/api/v1/packs/${slug}`), { params: Promise.resolve({ slug }) })
+    ).text();
     const cachedKeys = taggedCache.store.size;
     expect(cachedKeys).toBeGreaterThanOrEqual(3);
 
@@ -56,14 +64,19 @@ describe("tagged caching of the public API", () => {
     await decideResult(moderatorId, pending.id, { kind: "approve", note: null });
 
     expect(await total(path)).toBe(before + 1);
-    const groupAfter = (await (await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })).json()) as { data: { resultCount: number } };
+    const groupAfter = (await (
+      await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })
+    ).json()) as { data: { resultCount: number } };
     expect(groupAfter.data.resultCount).toBe(5);
     const packAfter = await (await getPack(req(`/api/v1/packs/${slug}`), { params: Promise.resolve({ slug }) })).text();
     expect(packAfter).not.toBe(packBefore);
   });
 
   it("keeps a cached list until its tag is revalidated: a maker written behind the cache's back shows only after `packs`", async () => {
-    const names = async () => (((await (await getMakers(req("/api/v1/makers?size=200"), noParams)).json()) as { data: { slug: string }[] }).data).map((m) => m.slug);
+    const names = async () =>
+      (
+        (await (await getMakers(req("/api/v1/makers?size=200"), noParams)).json()) as { data: { slug: string }[] }
+      ).data.map((m) => m.slug);
     const first = await names();
     await db.insert(makers).values({ slug: `${P}-latecomer`, name: `${P} Latecomer` });
     // No revalidation yet: the cached page still answers.
@@ -81,11 +94,14 @@ describe("tagged caching of the public API", () => {
     expect(await total(`/api/v1/results?group=${P}_made_up_group`)).toBe(0);
     expect(await total(`/api/v1/results?minMah=1000&maxMah=1400`)).toBeGreaterThan(0);
     expect(await total(`/api/v1/results?page=500&size=1`)).toBeGreaterThan(0);
-    const missing = await getPack(req(`/api/v1/packs/${P}-no-such-pack`), { params: Promise.resolve({ slug: `${P}-no-such-pack` }) });
+    const missing = await getPack(req(`/api/v1/packs/${P}-no-such-pack`), {
+      params: Promise.resolve({ slug: `${P}-no-such-pack` }),
+    });
     expect(missing.status).toBe(404);
-    const unknownGroup = await getGroup(req(`/api/v1/groups/${P}_nothing_here`), { params: Promise.resolve({ key: `${P}_nothing_here` }) });
+    const unknownGroup = await getGroup(req(`/api/v1/groups/${P}_nothing_here`), {
+      params: Promise.resolve({ key: `${P}_nothing_here` }),
+    });
     expect(unknownGroup.status).toBe(404);
     expect(taggedCache.store.size).toBe(size);
   });
 });
-

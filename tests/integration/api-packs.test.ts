@@ -7,18 +7,54 @@ import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../he
 vi.mock("next/cache", () => ({ unstable_cache: <T>(fn: T) => fn }));
 const { GET, OPTIONS } = await import("@/app/api/v1/packs/route");
 
-const G = groupKey({ resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 12, ratedMah: 1500, cyclesBeforeTest: 0 }).key;
-const call = (qs: string, headers: Record<string, string> = {}) => GET(new Request(`http://localhost/api/v1/packs${qs}`, { headers: { "x-forwarded-for": "10.9.9.9", ...headers } }), {});
+const G = groupKey({
+  resistanceMethod: "dc-step",
+  ambientC: 22,
+  cutoffVPerCell: 3.3,
+  loadCurrentA: 12,
+  ratedMah: 1500,
+  cyclesBeforeTest: 0,
+}).key;
+const call = (qs: string, headers: Record<string, string> = {}) =>
+  GET(
+    new Request(`http://localhost/api/v1/packs${qs}`, { headers: { "x-forwarded-for": "10.9.9.9", ...headers } }),
+    {},
+  );
 
 beforeAll(async () => {
   await emptyCatalogue();
   const tester = await makeUser();
   const brack = await makeMaker("Brackwater Test Power");
   const fell = await makeMaker("Fellrunner Test");
-  const torrent = await makePack(brack.id, { model: "Torrent 1500 4S 50C", cellsInSeries: 4, ratedCapacityMah: 1500, weightG: 170 });
-  await makePack(brack.id, { model: "Surge 2200 3S 60C", cellsInSeries: 3, ratedCapacityMah: 2200, labelledContinuousC: 60, connector: "EC5", weightG: 190 });
-  await makePack(fell.id, { model: "Trail 1300 4S 95C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 95, weightG: 160 });
-  await makePack(fell.id, { model: "Endure 5000 6S 45C", cellsInSeries: 6, ratedCapacityMah: 5000, labelledContinuousC: 45, connector: "XT90", weightG: 800 });
+  const torrent = await makePack(brack.id, {
+    model: "Torrent 1500 4S 50C",
+    cellsInSeries: 4,
+    ratedCapacityMah: 1500,
+    weightG: 170,
+  });
+  await makePack(brack.id, {
+    model: "Surge 2200 3S 60C",
+    cellsInSeries: 3,
+    ratedCapacityMah: 2200,
+    labelledContinuousC: 60,
+    connector: "EC5",
+    weightG: 190,
+  });
+  await makePack(fell.id, {
+    model: "Trail 1300 4S 95C",
+    cellsInSeries: 4,
+    ratedCapacityMah: 1300,
+    labelledContinuousC: 95,
+    weightG: 160,
+  });
+  await makePack(fell.id, {
+    model: "Endure 5000 6S 45C",
+    cellsInSeries: 6,
+    ratedCapacityMah: 5000,
+    labelledContinuousC: 45,
+    connector: "XT90",
+    weightG: 800,
+  });
   await makeResult(torrent, tester.id, { sagLimitedC: 40 });
 });
 
@@ -50,7 +86,9 @@ describe("GET /api/v1/packs", () => {
   });
 
   it("applies ranges, maker and group filters; a group adds the pack's medians in it", async () => {
-    expect((await (await call("?minMah=1400&maxMah=2500&minG=180")).json()).data.map((p: { model: string }) => p.model)).toEqual(["Surge 2200 3S 60C"]);
+    expect(
+      (await (await call("?minMah=1400&maxMah=2500&minG=180")).json()).data.map((p: { model: string }) => p.model),
+    ).toEqual(["Surge 2200 3S 60C"]);
     expect((await (await call("?minC=90")).json()).total).toBe(1);
     const fell = await (await call("?maker=fellrunner-test")).json();
     expect(fell.total).toBe(0); // fixture maker slugs are generated; unknown slug → empty, not an error

@@ -66,11 +66,29 @@ describe("bench profiles", () => {
   it("refuses out-of-range method-card defaults with one message per field", async () => {
     const me = await signedIn("contributor");
     requestState.token = me.token;
-    const res = await saveBenchProfile(null, form({ ...valid, resistanceMethod: "", defaultAmbientC: "75", defaultCutoffVPerCell: "2.4", defaultStopTemperatureC: "81", defaultSampleRateHz: "0", calibratedOn: "2999-01-01" }));
+    const res = await saveBenchProfile(
+      null,
+      form({
+        ...valid,
+        resistanceMethod: "",
+        defaultAmbientC: "75",
+        defaultCutoffVPerCell: "2.4",
+        defaultStopTemperatureC: "81",
+        defaultSampleRateHz: "0",
+        calibratedOn: "2999-01-01",
+      }),
+    );
     expect(res).toMatchObject({ ok: false, code: "validation" });
     if (res.ok) return;
     expect(Object.keys(res.fieldErrors ?? {}).sort()).toEqual(
-      ["calibratedOn", "defaultAmbientC", "defaultCutoffVPerCell", "defaultSampleRateHz", "defaultStopTemperatureC", "resistanceMethod"].sort(),
+      [
+        "calibratedOn",
+        "defaultAmbientC",
+        "defaultCutoffVPerCell",
+        "defaultSampleRateHz",
+        "defaultStopTemperatureC",
+        "resistanceMethod",
+      ].sort(),
     );
     expect(res.fieldErrors?.defaultStopTemperatureC?.[0]).toMatch(/80 °C/);
     expect(await db.select().from(benchProfiles).where(eq(benchProfiles.userId, me.id))).toHaveLength(0);
@@ -102,7 +120,9 @@ describe("bench profiles", () => {
     const [row] = await db.select().from(benchProfiles).where(eq(benchProfiles.id, id));
     expect(row?.name).toBe("Summer bench");
     // The mutation itself enforces ownership, whoever calls it.
-    await expect(updateBenchProfile(other.id, id, benchProfileSchema.parse(valid))).rejects.toMatchObject({ code: "forbidden" });
+    await expect(updateBenchProfile(other.id, id, benchProfileSchema.parse(valid))).rejects.toMatchObject({
+      code: "forbidden",
+    });
   });
 
   it("deletes only the owner's profile", async () => {

@@ -9,7 +9,7 @@ import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser, signedIn } from "../helpers/users";
 
 const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/revalidate", () => revalidate);
+vi.mock("@/server/revalidate", () => revalidate);
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
@@ -18,7 +18,10 @@ const { mergePacks } = await import("@/app/(admin)/admin/catalogue/actions/merge
 const { mergeMakers } = await import("@/app/(admin)/admin/catalogue/actions/merge-makers");
 
 const audit = (entityType: string, id: number) =>
-  db.select().from(auditEvents).where(and(eq(auditEvents.entityType, entityType), eq(auditEvents.entityId, String(id))));
+  db
+    .select()
+    .from(auditEvents)
+    .where(and(eq(auditEvents.entityType, entityType), eq(auditEvents.entityId, String(id))));
 
 describe("catalogue admin", () => {
   beforeEach(async () => {
@@ -29,25 +32,62 @@ describe("catalogue admin", () => {
   it("edits a pack's label figures, rescales its results' ratios, audits the change and revalidates the pack", async () => {
     const u = await createUser("contributor");
     const { pack, maker } = await makePack();
-    const r = await makeResult({ packId: pack.id, contributorId: u.id, status: "approved", figures: { capacityMah: 1300, labelRatio: 0.5 } });
+    const r = await makeResult({
+      packId: pack.id,
+      contributorId: u.id,
+      status: "approved",
+      figures: { capacityMah: 1300, labelRatio: 0.5 },
+    });
     const fd = new FormData();
-    for (const [k, v] of Object.entries({ packId: pack.id, cellsInSeries: 4, ratedCapacityMah: 1000, labelledContinuousC: "50", labelledBurstC: "", weightG: "150,5", connector: "XT60", note: "Label photo shows 1000 mAh 50C." })) fd.set(k, String(v));
+    for (const [k, v] of Object.entries({
+      packId: pack.id,
+      cellsInSeries: 4,
+      ratedCapacityMah: 1000,
+      labelledContinuousC: "50",
+      labelledBurstC: "",
+      weightG: "150,5",
+      connector: "XT60",
+      note: "Label photo shows 1000 mAh 50C.",
+    }))
+      fd.set(k, String(v));
     const res = await editPackLabel(null, fd);
     expect(res).toEqual({ ok: true, data: { packId: pack.id } });
     const [after] = await db.select().from(packs).where(eq(packs.id, pack.id));
-    expect(after).toMatchObject({ ratedCapacityMah: 1000, labelledContinuousC: 50, labelledBurstC: null, weightG: 150.5 });
+    expect(after).toMatchObject({
+      ratedCapacityMah: 1000,
+      labelledContinuousC: 50,
+      labelledBurstC: null,
+      weightG: 150.5,
+    });
     const [rr] = await db.select().from(results).where(eq(results.id, r.id));
     expect(rr?.capacityRatio).toBeCloseTo(1.3, 5);
     expect(rr?.labelRatio).toBeCloseTo(1.0, 5); // measured C ÷ labelled C: half of 100C = all of 50C
     expect(rr?.figures.labelRatio).toBeCloseTo(1.0, 5);
     const [ev] = await audit("pack", pack.id);
-    expect(ev).toMatchObject({ action: "pack.edit-label", data: { from: { ratedCapacityMah: 1300 }, to: { ratedCapacityMah: 1000 }, note: "Label photo shows 1000 mAh 50C." } });
-    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`]));
+    expect(ev).toMatchObject({
+      action: "pack.edit-label",
+      data: {
+        from: { ratedCapacityMah: 1300 },
+        to: { ratedCapacityMah: 1000 },
+        note: "Label photo shows 1000 mAh 50C.",
+      },
+    });
+    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(
+      expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`]),
+    );
   });
 
   it("refuses a burst rating below the continuous rating (422)", async () => {
     const { pack } = await makePack();
-    const res = await editPackLabel(null, { packId: pack.id, cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 100, labelledBurstC: 50, weightG: null, connector: "XT60" });
+    const res = await editPackLabel(null, {
+      packId: pack.id,
+      cellsInSeries: 4,
+      ratedCapacityMah: 1300,
+      labelledContinuousC: 100,
+      labelledBurstC: 50,
+      weightG: null,
+      connector: "XT60",
+    });
     expect(res).toMatchObject({ ok: false, code: "validation", fieldErrors: { labelledBurstC: expect.any(Array) } });
   });
 
@@ -67,15 +107,26 @@ describe("catalogue admin", () => {
     expect(await db.select().from(watches).where(eq(watches.packId, b.pack.id))).toHaveLength(1);
     const [ev] = await audit("pack", a.pack.id);
     expect(ev).toMatchObject({ action: "pack.merge", data: { into: b.pack.id, movedResultIds: [r1.id, r2.id] } });
-    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(expect.arrayContaining([`pack:${a.pack.slug}`, `pack:${b.pack.slug}`]));
-    expect(await mergePacks(null, { sourceId: a.pack.id, targetId: b.pack.id })).toMatchObject({ ok: false, code: "conflict" });
-    expect(await mergePacks(null, { sourceId: b.pack.id, targetId: b.pack.id })).toMatchObject({ ok: false, code: "validation" });
+    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(
+      expect.arrayContaining([`pack:${a.pack.slug}`, `pack:${b.pack.slug}`]),
+    );
+    expect(await mergePacks(null, { sourceId: a.pack.id, targetId: b.pack.id })).toMatchObject({
+      ok: false,
+      code: "conflict",
+    });
+    expect(await mergePacks(null, { sourceId: b.pack.id, targetId: b.pack.id })).toMatchObject({
+      ok: false,
+      code: "validation",
+    });
   });
 
   it("refuses to merge packs with different cell counts", async () => {
     const a = await makePack({ cells: 3 });
     const b = await makePack({ cells: 4 });
-    expect(await mergePacks(null, { sourceId: a.pack.id, targetId: b.pack.id })).toMatchObject({ ok: false, code: "conflict" });
+    expect(await mergePacks(null, { sourceId: a.pack.id, targetId: b.pack.id })).toMatchObject({
+      ok: false,
+      code: "conflict",
+    });
   });
 
   it("merges a duplicate maker: its packs move, the duplicate is kept as merged, the merge is audited", async () => {

@@ -5,10 +5,23 @@ import { groupKey, summarise } from "@/lib/analysis";
 import { exclusionText } from "@/lib/like-for-like";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
 
-const card = { resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 12, ratedMah: 1500, cyclesBeforeTest: 0 };
+const card = {
+  resistanceMethod: "dc-step",
+  ambientC: 22,
+  cutoffVPerCell: 3.3,
+  loadCurrentA: 12,
+  ratedMah: 1500,
+  cyclesBeforeTest: 0,
+};
 const WARM = groupKey(card).key;
 const COLD = groupKey({ ...card, ambientC: 8 }).key;
-const curve = Array.from({ length: 50 }, (_, k) => ({ timeS: k * 10, voltageV: 16.4 - k * 0.05, currentA: k === 0 ? 0 : 12, temperatureC: 22 + k * 0.2, capacityMah: k * 33 }));
+const curve = Array.from({ length: 50 }, (_, k) => ({
+  timeS: k * 10,
+  voltageV: 16.4 - k * 0.05,
+  currentA: k === 0 ? 0 : 12,
+  temperatureC: 22 + k * 0.2,
+  capacityMah: k * 33,
+}));
 
 let slugs: string[] = [];
 const values = { p: [20, 30, 40], q: [50, 60], cold: [5, 6, 7, 8] };
@@ -48,7 +61,10 @@ describe("comparison of packs", () => {
     const [p, , r] = cmp.compared;
     expect(p?.excluded.map(exclusionText)).toEqual(["2 results hidden: ambient below 15 °C"]);
     expect(r?.excludedCount).toBe(3);
-    expect(r?.excluded.map(exclusionText)).toEqual(["2 results hidden: ambient below 15 °C", "1 result hidden: 3.0 V cut-off"]);
+    expect(r?.excluded.map(exclusionText)).toEqual([
+      "2 results hidden: ambient below 15 °C",
+      "1 result hidden: 3.0 V cut-off",
+    ]);
   });
 
   it("compares inside another group when asked, with only that group's values", async () => {

@@ -20,7 +20,12 @@ vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCa
 const { submitResult } = await import("@/app/(contributor)/submit/actions/submit-result");
 const root = path.resolve(__dirname, "../..");
 const pg = (what: "pg_stop" | "pg_start") =>
-  execFileSync("bash", ["-c", `source scripts/lib.sh && ${what}`], { cwd: root, env: process.env, stdio: "pipe", timeout: 90_000 });
+  execFileSync("bash", ["-c", `source scripts/lib.sh && ${what}`], {
+    cwd: root,
+    env: process.env,
+    stdio: "pipe",
+    timeout: 90_000,
+  });
 
 afterAll(() => {
   pg("pg_start"); // never leave the shared cluster down, whatever happened above
@@ -52,7 +57,10 @@ describe("PostgreSQL stops mid-submission", () => {
     expect(retried.ok).toBe(true);
     const rows = await db.select().from(results).where(eq(results.contributorId, me.id));
     expect(rows).toHaveLength(1);
-    const events = await db.select().from(reviewEvents).where(eq(reviewEvents.resultId, rows[0]?.id ?? -1));
+    const events = await db
+      .select()
+      .from(reviewEvents)
+      .where(eq(reviewEvents.resultId, rows[0]?.id ?? -1));
     expect(events.map((e) => e.toStatus)).toEqual(["pending"]);
   });
 });

@@ -5,7 +5,14 @@ import { listPackRows } from "@/db/queries/packs";
 import { groupKey, summarise } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
 
-const warm = { resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 12, ratedMah: 1500, cyclesBeforeTest: 0 };
+const warm = {
+  resistanceMethod: "dc-step",
+  ambientC: 22,
+  cutoffVPerCell: 3.3,
+  loadCurrentA: 12,
+  ratedMah: 1500,
+  cyclesBeforeTest: 0,
+};
 const G = groupKey(warm).key; // dc-step, 15–25 °C, 3.3 V, 5–10C, new
 const COLD = groupKey({ ...warm, ambientC: 8 }).key;
 
@@ -67,7 +74,10 @@ describe("like-for-like group queries", () => {
     expect(ranking.map((r) => r.makerName)).toEqual(["Alder Test Cells", "Birch Test Power"]);
     const [alder, birch] = ranking;
     // a1: label ratios 0.2, 0.4, 0.8, 2.0 → median 0.6; a2: 0.7 → maker median of (0.6, 0.7) = 0.65.
-    expect(alder?.medianLabelRatio).toBeCloseTo(summarise([summarise([0.2, 0.4, 0.8, 2])?.median ?? 0, 0.7])?.median ?? 0, 6);
+    expect(alder?.medianLabelRatio).toBeCloseTo(
+      summarise([summarise([0.2, 0.4, 0.8, 2])?.median ?? 0, 0.7])?.median ?? 0,
+      6,
+    );
     expect(alder?.medianLabelRatio).toBeCloseTo(0.65, 6);
     expect(alder).toMatchObject({ packs: 2, results: 5 });
     expect(birch).toMatchObject({ packs: 1, results: 5 });

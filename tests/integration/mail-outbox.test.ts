@@ -6,9 +6,9 @@ import { randomUUID } from "node:crypto";
 import { eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox } from "@/db/schema";
-import { flushOutbox, MAX_ATTEMPTS, retryDelayS, sendMail } from "@/lib/mail/outbox";
-import { mailTransport, type MailTransport } from "@/lib/mail/transport";
-import { signInLinkMail, submissionReceiptMail } from "@/lib/mail/templates";
+import { flushOutbox, MAX_ATTEMPTS, retryDelayS, sendMail } from "@/server/mail/outbox";
+import { mailTransport, type MailTransport } from "@/server/mail/transport";
+import { signInLinkMail, submissionReceiptMail } from "@/server/mail/templates";
 import { newestMailFor } from "../helpers/mail";
 
 async function closedPort(): Promise<number> {
@@ -21,7 +21,8 @@ async function closedPort(): Promise<number> {
 
 const catcher = () => mailTransport(process.env.SMTP_URL);
 const address = (label: string) => `${label}-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
-const receipt = (title: string) => submissionReceiptMail({ packTitle: title, resultUrl: "http://localhost:3011/results/1", submittedAt: new Date() });
+const receipt = (title: string) =>
+  submissionReceiptMail({ packTitle: title, resultUrl: "http://localhost:3011/results/1", submittedAt: new Date() });
 
 async function row(id: number) {
   const [r] = await db.select().from(mailOutbox).where(eq(mailOutbox.id, id));
@@ -30,7 +31,10 @@ async function row(id: number) {
 }
 
 async function makeDue(ids: number[]) {
-  await db.update(mailOutbox).set({ nextAttemptAt: sql`now() - interval '1 second'` }).where(inArray(mailOutbox.id, ids));
+  await db
+    .update(mailOutbox)
+    .set({ nextAttemptAt: sql`now() - interval '1 second'` })
+    .where(inArray(mailOutbox.id, ids));
 }
 
 describe("mail outbox", () => {
@@ -90,7 +94,10 @@ describe("mail outbox", () => {
   it("gives up after the last attempt", async () => {
     const down = mailTransport(`smtp://127.0.0.1:${await closedPort()}`);
     const outcome = await sendMail(address("hopeless"), receipt("Hopeless Pack"), { transport: down });
-    await db.update(mailOutbox).set({ attempts: MAX_ATTEMPTS, nextAttemptAt: sql`now() - interval '1 second'` }).where(eq(mailOutbox.id, outcome.id));
+    await db
+      .update(mailOutbox)
+      .set({ attempts: MAX_ATTEMPTS, nextAttemptAt: sql`now() - interval '1 second'` })
+      .where(eq(mailOutbox.id, outcome.id));
     await flushOutbox({ transport: catcher() });
     expect((await row(outcome.id)).sentAt).toBeNull();
   });
@@ -98,17 +105,29 @@ describe("mail outbox", () => {
   it("never sends a message twice when two flushes run at once", async () => {
     const down = mailTransport(`smtp://127.0.0.1:${await closedPort()}`);
     const ids: number[] = [];
-    for (let i = 0; i < 6; i++) ids.push((await sendMail(address(`race${i}`), receipt(`Race Pack ${i}`), { transport: down })).id);
+    for (let i = 0; i < 6; i++)
+      ids.push((await sendMail(address(`race${i}`), receipt(`Race Pack ${i}`), { transport: down })).id);
     await makeDue(ids);
     const sentTo: string[] = [];
     const counting: MailTransport = {
       sendMail: async (m: { to?: unknown }) => {
         await new Promise((r) => setTimeout(r, 20));
         sentTo.push(String(m.to));
-        return { accepted: [String(m.to)], rejected: [], pending: [], envelope: { from: "", to: [] }, messageId: "x", response: "250" };
+        return {
+          accepted: [String(m.to)],
+          rejected: [],
+          pending: [],
+          envelope: { from: "", to: [] },
+          messageId: "x",
+          response: "250",
+        };
       },
     } as unknown as MailTransport;
-    await Promise.all([flushOutbox({ transport: counting }), flushOutbox({ transport: counting }), flushOutbox({ transport: counting })]);
+    await Promise.all([
+      flushOutbox({ transport: counting }),
+      flushOutbox({ transport: counting }),
+      flushOutbox({ transport: counting }),
+    ]);
     const mine = sentTo.filter((t) => t.includes("race"));
     expect(mine).toHaveLength(6);
     expect(new Set(mine).size).toBe(6);

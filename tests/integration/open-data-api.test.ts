@@ -17,7 +17,9 @@ let fx: Awaited<ReturnType<typeof seedOpenData>>;
 let ipCounter = 0;
 
 function req(path: string, headers: Record<string, string> = {}) {
-  return new Request(`http://localhost:3000${path}`, { headers: { "x-forwarded-for": `10.0.0.${++ipCounter % 250}`, ...headers } });
+  return new Request(`http://localhost:3000${path}`, {
+    headers: { "x-forwarded-for": `10.0.0.${++ipCounter % 250}`, ...headers },
+  });
 }
 const noParams = { params: Promise.resolve({}) };
 type Json = { data: Record<string, unknown>[]; meta: Record<string, unknown>; links: Record<string, string | null> };
@@ -35,18 +37,30 @@ describe("paging, filters and caching", () => {
     expect(body.meta).toMatchObject({ page: 1, pageSize: 2, total: 4, pageCount: 2 });
     expect(body.links.next).toContain("page=2");
     expect(res.headers.get("x-total-count")).toBe("4");
-    const page2 = (await (await getResults(req(`/api/v1/results?group=${fx.group}&size=2&page=2`), noParams)).json()) as Json;
+    const page2 = (await (
+      await getResults(req(`/api/v1/results?group=${fx.group}&size=2&page=2`), noParams)
+    ).json()) as Json;
     expect(page2.data).toHaveLength(2);
     expect(page2.links.next).toBeNull();
     expect(page2.data.map((r) => r.id)).not.toContain(body.data[0]?.id);
   });
 
   it("filters results like the packs table (maker, cells, labelled C)", async () => {
-    const byMaker = (await (await getResults(req(`/api/v1/results?group=${fx.group}&maker=${P}-voltwren`), noParams)).json()) as Json;
-    expect(byMaker.data.map((r) => r.packSlug).sort()).toEqual([`${P}-voltwren-1300-4s`, `${P}-voltwren-1300-4s`, `${P}-voltwren-2200-3s`]);
-    const byCells = (await (await getResults(req(`/api/v1/results?group=${fx.group}&cells=3`), noParams)).json()) as Json;
+    const byMaker = (await (
+      await getResults(req(`/api/v1/results?group=${fx.group}&maker=${P}-voltwren`), noParams)
+    ).json()) as Json;
+    expect(byMaker.data.map((r) => r.packSlug).sort()).toEqual([
+      `${P}-voltwren-1300-4s`,
+      `${P}-voltwren-1300-4s`,
+      `${P}-voltwren-2200-3s`,
+    ]);
+    const byCells = (await (
+      await getResults(req(`/api/v1/results?group=${fx.group}&cells=3`), noParams)
+    ).json()) as Json;
     expect(byCells.data.map((r) => r.packSlug)).toEqual([`${P}-voltwren-2200-3s`]);
-    const byC = (await (await getResults(req(`/api/v1/results?group=${fx.group}&minC=60&maxC=80`), noParams)).json()) as Json;
+    const byC = (await (
+      await getResults(req(`/api/v1/results?group=${fx.group}&minC=60&maxC=80`), noParams)
+    ).json()) as Json;
     expect(byC.data.map((r) => r.packSlug)).toEqual([`${P}-pikecell-1300-4s`]);
   });
 
@@ -78,8 +92,14 @@ describe("paging, filters and caching", () => {
   });
 
   it("returns one pack with its approved result count and 404s an unknown one", async () => {
-    const res = await getPack(req(`/api/v1/packs/${P}-voltwren-1300-4s`), { params: Promise.resolve({ slug: `${P}-voltwren-1300-4s` }) });
-    expect(((await res.json()) as { data: Record<string, unknown> }).data).toMatchObject({ ratedCapacityMah: 1300, labelledContinuousC: 100, approvedResultCount: 2 });
+    const res = await getPack(req(`/api/v1/packs/${P}-voltwren-1300-4s`), {
+      params: Promise.resolve({ slug: `${P}-voltwren-1300-4s` }),
+    });
+    expect(((await res.json()) as { data: Record<string, unknown> }).data).toMatchObject({
+      ratedCapacityMah: 1300,
+      labelledContinuousC: 100,
+      approvedResultCount: 2,
+    });
     expect((await getPack(req("/api/v1/packs/nope"), { params: Promise.resolve({ slug: "nope" }) })).status).toBe(404);
   });
 });
@@ -87,14 +107,23 @@ describe("paging, filters and caching", () => {
 describe("GET /api/v1/results", () => {
   it("returns approved results only, with method cards and figures", async () => {
     const body = (await (await getResults(req(`/api/v1/results?group=${fx.group}&size=200`), noParams)).json()) as Json;
-    const approved = fx.results.filter((r) => r.status === "approved").map((r) => r.id).sort((a, b) => a - b);
+    const approved = fx.results
+      .filter((r) => r.status === "approved")
+      .map((r) => r.id)
+      .sort((a, b) => a - b);
     expect(body.data.map((r) => r.id)).toEqual(approved);
     expect(body.data.every((r) => r.status === "approved")).toBe(true);
-    expect(body.data[0]).toMatchObject({ methodCard: { ambientTemperatureC: 22, cutoffVPerCell: 3.3, resistanceMethod: "dc-step" }, figures: { capacityMah: 1250 } });
+    expect(body.data[0]).toMatchObject({
+      methodCard: { ambientTemperatureC: 22, cutoffVPerCell: 3.3, resistanceMethod: "dc-step" },
+      figures: { capacityMah: 1250 },
+    });
     expect(JSON.stringify(body)).not.toContain("logKey");
     const hidden = fx.results.find((r) => r.status === "pending");
     if (!hidden) throw new Error("fixture");
-    expect((await getResult(req(`/api/v1/results/${hidden.id}`), { params: Promise.resolve({ id: String(hidden.id) }) })).status).toBe(404);
+    expect(
+      (await getResult(req(`/api/v1/results/${hidden.id}`), { params: Promise.resolve({ id: String(hidden.id) }) }))
+        .status,
+    ).toBe(404);
   });
 
   it("filters by pack", async () => {
@@ -107,7 +136,13 @@ describe("GET /api/v1/groups", () => {
   it("lists groups and gives per-pack medians from approved results", async () => {
     const list = (await (await getGroups(req("/api/v1/groups?size=200"), noParams)).json()) as Json;
     expect(list.data.find((g) => g.key === fx.group)).toMatchObject({ resultCount: 4, packCount: 3 });
-    const one = (await (await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })).json()) as { data: { packs: { packSlug: string; resultCount: number; figures: { sagLimitedC: { median: number; n: number } } }[] } };
+    const one = (await (
+      await getGroup(req(`/api/v1/groups/${fx.group}`), { params: Promise.resolve({ key: fx.group }) })
+    ).json()) as {
+      data: {
+        packs: { packSlug: string; resultCount: number; figures: { sagLimitedC: { median: number; n: number } } }[];
+      };
+    };
     const kestrel = one.data.packs.find((p) => p.packSlug === `${P}-voltwren-1300-4s`);
     expect(kestrel?.resultCount).toBe(2);
     expect(kestrel?.figures.sagLimitedC).toMatchObject({ median: 42, n: 2 });
@@ -118,7 +153,8 @@ describe("rate limit", () => {
   it("answers 429 with Retry-After once an IP passes 600 requests a minute", async () => {
     const headers = { "x-forwarded-for": "192.0.2.77" };
     let last: Response | null = null;
-    for (let i = 0; i < 601; i++) last = await getMakers(new Request("http://localhost:3000/api/v1/makers?size=1", { headers }), noParams);
+    for (let i = 0; i < 601; i++)
+      last = await getMakers(new Request("http://localhost:3000/api/v1/makers?size=1", { headers }), noParams);
     expect(last?.status).toBe(429);
     expect(Number(last?.headers.get("retry-after"))).toBeGreaterThan(0);
     expect(last?.headers.get("access-control-allow-origin")).toBe("*");
@@ -127,9 +163,21 @@ describe("rate limit", () => {
 
 describe("GET /api/v1/openapi.json", () => {
   it("describes every path with the licence", async () => {
-    const doc = (await (await getOpenApi(req("/api/v1/openapi.json"), noParams)).json()) as { openapi: string; info: { license: { identifier: string } }; paths: Record<string, unknown> };
+    const doc = (await (await getOpenApi(req("/api/v1/openapi.json"), noParams)).json()) as {
+      openapi: string;
+      info: { license: { identifier: string } };
+      paths: Record<string, unknown>;
+    };
     expect(doc.openapi).toBe("3.1.0");
     expect(doc.info.license.identifier).toBe("CC-BY-4.0");
-    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(["/api/v1/makers", "/api/v1/packs", "/api/v1/results", "/api/v1/groups/{key}", "/api/v1/charts"]));
+    expect(Object.keys(doc.paths)).toEqual(
+      expect.arrayContaining([
+        "/api/v1/makers",
+        "/api/v1/packs",
+        "/api/v1/results",
+        "/api/v1/groups/{key}",
+        "/api/v1/charts",
+      ]),
+    );
   });
 });

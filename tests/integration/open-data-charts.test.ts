@@ -15,7 +15,8 @@ const P = "cht";
 let state: ChartState;
 const BASE = process.env.APP_URL ?? "http://localhost:3000";
 const noParams = { params: Promise.resolve({}) };
-const req = (path: string) => new Request(`http://localhost:3000${path}`, { headers: { "x-forwarded-for": "203.0.113.5" } });
+const req = (path: string) =>
+  new Request(`http://localhost:3000${path}`, { headers: { "x-forwarded-for": "203.0.113.5" } });
 
 beforeAll(async () => {
   const fx = await seedOpenData(P);
@@ -62,14 +63,22 @@ describe("chart images", () => {
     expect(bytes.length).toBeGreaterThan(10_000);
   });
   it("404s a broken state", async () => {
-    expect((await image(req("/charts/image/x/chart.svg"), { params: Promise.resolve({ state: "nope", file: "chart.svg" }) })).status).toBe(404);
+    expect(
+      (await image(req("/charts/image/x/chart.svg"), { params: Promise.resolve({ state: "nope", file: "chart.svg" }) }))
+        .status,
+    ).toBe(404);
   });
 });
 
 describe("chart image sizes (width, height, PNG scale)", () => {
   const params = (file: string) => ({ params: Promise.resolve({ state: encodeChartState(state), file }) });
   const get = (file: "chart.png" | "chart.svg", query = "", headers: Record<string, string> = {}) =>
-    image(new Request(`http://localhost:3000/charts/image/x/${file}${query}`, { headers: { "x-forwarded-for": "203.0.113.6", ...headers } }), params(file));
+    image(
+      new Request(`http://localhost:3000/charts/image/x/${file}${query}`, {
+        headers: { "x-forwarded-for": "203.0.113.6", ...headers },
+      }),
+      params(file),
+    );
   // PNG: the IHDR chunk follows the 8-byte signature; width and height are big-endian at bytes 16 and 20 (RFC 2083 §4.1.1).
   const pngSize = async (res: Response) => {
     const bytes = Buffer.from(await res.arrayBuffer());
@@ -81,7 +90,10 @@ describe("chart image sizes (width, height, PNG scale)", () => {
   it("draws the PNG at width × scale by height × scale pixels, 1600 × 1000 by default", async () => {
     expect(await pngSize(await get("chart.png"))).toEqual({ width: 1600, height: 1000 });
     expect(await pngSize(await get("chart.png", "?width=400&scale=3"))).toEqual({ width: 1200, height: 1200 });
-    expect(await pngSize(await get("chart.png", "?width=1000&height=700&scale=1"))).toEqual({ width: 1000, height: 700 });
+    expect(await pngSize(await get("chart.png", "?width=1000&height=700&scale=1"))).toEqual({
+      width: 1000,
+      height: 700,
+    });
     expect(await pngSize(await get("chart.png", "?width=320"))).toEqual({ width: 640, height: 800 });
   });
 
@@ -94,14 +106,24 @@ describe("chart image sizes (width, height, PNG scale)", () => {
   });
 
   it.each([
-    ["chart.png", "?width=abc", "width"], ["chart.png", "?width=800.5", "width"], ["chart.png", "?width=100", "width"], ["chart.png", "?width=1601", "width"],
-    ["chart.png", "?width=320&height=600", "height"], ["chart.png", "?height=2000", "height"], ["chart.png", "?scale=4", "scale"], ["chart.png", "?scale=two", "scale"],
-    ["chart.png", "?width=1600&scale=3", "scale"], ["chart.svg", "?scale=2", "scale"], ["chart.svg", "?width=99999", "width"],
+    ["chart.png", "?width=abc", "width"],
+    ["chart.png", "?width=800.5", "width"],
+    ["chart.png", "?width=100", "width"],
+    ["chart.png", "?width=1601", "width"],
+    ["chart.png", "?width=320&height=600", "height"],
+    ["chart.png", "?height=2000", "height"],
+    ["chart.png", "?scale=4", "scale"],
+    ["chart.png", "?scale=two", "scale"],
+    ["chart.png", "?width=1600&scale=3", "scale"],
+    ["chart.svg", "?scale=2", "scale"],
+    ["chart.svg", "?width=99999", "width"],
   ] as const)("%s%s answers 400 with a plain JSON message on %s", async (file, query, field) => {
     const res = await get(file, query);
     expect(res.status).toBe(400);
     expect(res.headers.get("content-type")).toContain("application/json");
-    const body = (await res.json()) as { error: { code: string; message: string; fieldErrors: Record<string, string[]> } };
+    const body = (await res.json()) as {
+      error: { code: string; message: string; fieldErrors: Record<string, string[]> };
+    };
     expect(body.error.code).toBe("bad_request");
     expect(Object.keys(body.error.fieldErrors)).toEqual([field]);
     expect(body.error.message).toContain(field);
@@ -109,8 +131,14 @@ describe("chart image sizes (width, height, PNG scale)", () => {
   });
 
   it("keeps the bounds the OpenAPI document states", async () => {
-    type Param = { name: string; in: string; schema: { minimum?: number; maximum?: number; enum?: (number | string)[] } };
-    const doc = (await (await getOpenApi(req("/api/v1/openapi.json"), noParams)).json()) as { paths: Record<string, { get: { parameters: Param[]; responses: Record<string, unknown> } }> };
+    type Param = {
+      name: string;
+      in: string;
+      schema: { minimum?: number; maximum?: number; enum?: (number | string)[] };
+    };
+    const doc = (await (await getOpenApi(req("/api/v1/openapi.json"), noParams)).json()) as {
+      paths: Record<string, { get: { parameters: Param[]; responses: Record<string, unknown> } }>;
+    };
     const op = doc.paths["/charts/image/{state}/{file}"]?.get;
     expect(op?.responses).toHaveProperty("400");
     const schema = (name: string) => op?.parameters.find((p) => p.name === name && p.in === "query")?.schema ?? {};
@@ -119,7 +147,8 @@ describe("chart image sizes (width, height, PNG scale)", () => {
     expect((await get("chart.svg", `?width=${maximum}`)).status).toBe(200);
     expect((await get("chart.svg", `?width=${minimum - 1}`)).status).toBe(400);
     expect((await get("chart.svg", `?width=${maximum + 1}`)).status).toBe(400);
-    for (const scale of schema("scale").enum ?? []) expect((await get("chart.png", `?width=${minimum}&scale=${scale}`)).status).toBe(200);
+    for (const scale of schema("scale").enum ?? [])
+      expect((await get("chart.png", `?width=${minimum}&scale=${scale}`)).status).toBe(200);
     expect(schema("scale").enum).toEqual([1, 2, 3]);
   });
 
@@ -137,13 +166,17 @@ describe("chart image sizes (width, height, PNG scale)", () => {
     expect(await again.text()).toBe("");
     expect((await get("chart.png", "", { "if-none-match": tags[2] ?? "" })).status).toBe(200);
     const download = await get("chart.png", "?width=400&scale=3&download=1");
-    expect(download.headers.get("content-disposition")).toBe(`attachment; filename="sagline-${P}-label-check-1200x1200.png"`);
+    expect(download.headers.get("content-disposition")).toBe(
+      `attachment; filename="sagline-${P}-label-check-1200x1200.png"`,
+    );
   });
 });
 
 describe("GET /api/v1/charts", () => {
   it("lists saved charts with their links", async () => {
-    const body = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as { data: { id: string; links: { permalink: string; embed: string } | null }[] };
+    const body = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as {
+      data: { id: string; links: { permalink: string; embed: string } | null }[];
+    };
     const one = body.data.find((c) => c.id === `${P}-one`);
     expect(one?.links?.permalink).toBe(`/charts/view/${statePath(encodeChartState(state))}`);
     expect(one?.links?.embed).toMatch(/^\/embed\/chart\//);
@@ -153,7 +186,14 @@ describe("GET /api/v1/charts", () => {
 describe("POST /api/v1/charts (curated list, chart.save)", () => {
   const post = (body: unknown, headers: Record<string, string> = {}) =>
     import("@/app/api/v1/charts/route").then(({ POST }) =>
-      POST(new Request("http://localhost:3000/api/v1/charts", { method: "POST", headers: { "content-type": "application/json", host: "localhost:3000", ...headers }, body: JSON.stringify(body) }), noParams),
+      POST(
+        new Request("http://localhost:3000/api/v1/charts", {
+          method: "POST",
+          headers: { "content-type": "application/json", host: "localhost:3000", ...headers },
+          body: JSON.stringify(body),
+        }),
+        noParams,
+      ),
     );
 
   it("needs a signed-in role: anonymous journalists publish permalinks instead (401)", async () => {
@@ -162,9 +202,14 @@ describe("POST /api/v1/charts (curated list, chart.save)", () => {
 
   it("saves for a signed-in contributor, refuses other origins and invalid states", async () => {
     const { sessions, users } = await import("@/db/schema");
-    const [u] = await db.insert(users).values({ email: `${P}-saver@example.test` }).returning();
+    const [u] = await db
+      .insert(users)
+      .values({ email: `${P}-saver@example.test` })
+      .returning();
     if (!u) throw new Error("no user");
-    await db.insert(sessions).values({ sessionToken: `${P}-token`, userId: u.id, expires: new Date(Date.now() + 3_600_000) });
+    await db
+      .insert(sessions)
+      .values({ sessionToken: `${P}-token`, userId: u.id, expires: new Date(Date.now() + 3_600_000) });
     const cookie = { cookie: `authjs.session-token=${P}-token` };
     const res = await post({ state: { ...state, title: "Saved by a contributor" } }, cookie);
     expect(res.status).toBe(201);

@@ -21,7 +21,12 @@ beforeAll(async () => {
   await makeResult(pack, tester.id, { rateC: 30, loadMode: "constant-power" }); // not constant current
   await makeResult(pack, tester.id, { rateC: 40, status: "pending" }); // not public
   // Cycling: same method, ambient, cut-off and rate; ages 0, 60, 120, 180.
-  for (const [cycles, mah] of [[60, 1880], [120, 1800], [180, 1720]] as const) await makeResult(pack, tester.id, { rateC: 8, cycles, capacityMah: mah });
+  for (const [cycles, mah] of [
+    [60, 1880],
+    [120, 1800],
+    [180, 1720],
+  ] as const)
+    await makeResult(pack, tester.id, { rateC: 8, cycles, capacityMah: mah });
 });
 
 describe("pack detail", () => {
@@ -45,7 +50,15 @@ describe("pack detail", () => {
   it("builds the cycling series from results differing only by age, with the retention trend", async () => {
     const d = await getPackDetail(slug);
     expect(d?.cycles?.points.map((p) => p.cycles)).toEqual([0, 60, 120, 180]);
-    const expected = retentionTrend([{ cycles: 0, capacityMah: 1900 }, { cycles: 60, capacityMah: 1880 }, { cycles: 120, capacityMah: 1800 }, { cycles: 180, capacityMah: 1720 }], 2000);
+    const expected = retentionTrend(
+      [
+        { cycles: 0, capacityMah: 1900 },
+        { cycles: 60, capacityMah: 1880 },
+        { cycles: 120, capacityMah: 1800 },
+        { cycles: 180, capacityMah: 1720 },
+      ],
+      2000,
+    );
     expect(d?.cycles?.trend?.cyclesTo80).toBeCloseTo(expected?.cyclesTo80 ?? Number.NaN, 6);
     expect(d?.cycles?.trend?.slopePerCycle).toBeLessThan(0);
   });

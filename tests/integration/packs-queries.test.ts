@@ -8,8 +8,25 @@ describe("pack catalogue queries", () => {
     const [maker] = await db.insert(makers).values({ slug: "testmaker-q", name: "Testmaker Q" }).returning();
     if (!maker) throw new Error("no maker");
     await db.insert(packs).values([
-      { slug: "testmaker-q-a", makerId: maker.id, model: "A 1300 4S 75C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, connector: "XT60" },
-      { slug: "testmaker-q-b", makerId: maker.id, model: "B 1300 4S 75C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, connector: "XT60", status: "proposed" },
+      {
+        slug: "testmaker-q-a",
+        makerId: maker.id,
+        model: "A 1300 4S 75C",
+        cellsInSeries: 4,
+        ratedCapacityMah: 1300,
+        labelledContinuousC: 75,
+        connector: "XT60",
+      },
+      {
+        slug: "testmaker-q-b",
+        makerId: maker.id,
+        model: "B 1300 4S 75C",
+        cellsInSeries: 4,
+        ratedCapacityMah: 1300,
+        labelledContinuousC: 75,
+        connector: "XT60",
+        status: "proposed",
+      },
     ]);
     const list = await listActivePacks();
     const slugs = list.map((p) => p.slug);
@@ -23,7 +40,16 @@ describe("pack catalogue queries", () => {
     const [maker] = await db.insert(makers).values({ slug: "testmaker-r", name: "Testmaker R" }).returning();
     if (!maker) throw new Error("no maker");
     await expect(
-      db.insert(packs).values({ slug: "testmaker-r-a", makerId: maker.id, model: "A", cellsInSeries: 3, ratedCapacityMah: 2200, labelledContinuousC: 50, labelledBurstC: 25, connector: "XT60" }),
+      db.insert(packs).values({
+        slug: "testmaker-r-a",
+        makerId: maker.id,
+        model: "A",
+        cellsInSeries: 3,
+        ratedCapacityMah: 2200,
+        labelledContinuousC: 50,
+        labelledBurstC: 25,
+        connector: "XT60",
+      }),
     ).rejects.toThrow();
   });
 });

@@ -20,7 +20,12 @@ async function storedCodes(resultId: number) {
   return r?.flags.map((f) => f.code);
 }
 
-async function approvedGroup(packId: number, contributorId: string, groupKey: string, values: { labelRatio: number; sagLimitedC: number; capacityRatio: number }[]) {
+async function approvedGroup(
+  packId: number,
+  contributorId: string,
+  groupKey: string,
+  values: { labelRatio: number; sagLimitedC: number; capacityRatio: number }[],
+) {
   for (const v of values) await makeResult({ packId, contributorId, groupKey, status: "approved", figures: v });
 }
 
@@ -34,7 +39,11 @@ describe("computeAndStoreFlags", () => {
 
   it("capacity-above-rated: 1500 mAh from a 1300 mAh pack (common practice 110 %)", async () => {
     const { u, pack } = await setup();
-    const r = await makeResult({ packId: pack.id, contributorId: u.id, figures: { capacityMah: 1500, capacityRatio: 1500 / 1300 } });
+    const r = await makeResult({
+      packId: pack.id,
+      contributorId: u.id,
+      figures: { capacityMah: 1500, capacityRatio: 1500 / 1300 },
+    });
     await computeAndStoreFlags(r.id);
     expect(await storedCodes(r.id)).toEqual(["capacity-above-rated"]);
   });
@@ -46,7 +55,12 @@ describe("computeAndStoreFlags", () => {
       { labelRatio: 0.52, sagLimitedC: 52, capacityRatio: 0.96 },
       { labelRatio: 0.48, sagLimitedC: 48, capacityRatio: 0.96 },
     ]);
-    const r = await makeResult({ packId: pack.id, contributorId: u.id, groupKey, figures: { labelRatio: 1.4, sagLimitedC: 140 } });
+    const r = await makeResult({
+      packId: pack.id,
+      contributorId: u.id,
+      groupKey,
+      figures: { labelRatio: 1.4, sagLimitedC: 140 },
+    });
     await computeAndStoreFlags(r.id);
     expect(await storedCodes(r.id)).toEqual(["label-ratio-outside-group", "sag-c-outside-group"]);
   });
@@ -54,10 +68,17 @@ describe("computeAndStoreFlags", () => {
   it("group-outlier: modified z-score above 3.5 within the like-for-like group (Iglewicz & Hoaglin 1993)", async () => {
     const { u, pack, groupKey } = await setup();
     await approvedGroup(
-      pack.id, u.id, groupKey,
+      pack.id,
+      u.id,
+      groupKey,
       [0.95, 0.97, 0.99, 0.96, 0.98].map((capacityRatio) => ({ labelRatio: 0.5, sagLimitedC: 50, capacityRatio })),
     );
-    const r = await makeResult({ packId: pack.id, contributorId: u.id, groupKey, figures: { capacityMah: 1105, capacityRatio: 0.85 } });
+    const r = await makeResult({
+      packId: pack.id,
+      contributorId: u.id,
+      groupKey,
+      figures: { capacityMah: 1105, capacityRatio: 0.85 },
+    });
     await computeAndStoreFlags(r.id);
     expect(await storedCodes(r.id)).toEqual(["group-outlier"]);
   });
@@ -71,7 +92,12 @@ describe("computeAndStoreFlags", () => {
 
   it("temperature-mismatch: ambient 21 °C, log starts at 30 °C (issue 5: more than 5 °C apart)", async () => {
     const { u, pack } = await setup();
-    const r = await makeResult({ packId: pack.id, contributorId: u.id, ambientTemperatureC: 21, figures: { startTemperatureC: 30 } });
+    const r = await makeResult({
+      packId: pack.id,
+      contributorId: u.id,
+      ambientTemperatureC: 21,
+      figures: { startTemperatureC: 30 },
+    });
     await computeAndStoreFlags(r.id);
     expect(await storedCodes(r.id)).toEqual(["temperature-mismatch"]);
   });
@@ -108,7 +134,15 @@ describe("computeAndStoreFlags beside the submission's card checks", () => {
   it("keeps the card checks stored at submission, replaces its own codes, and is idempotent", async () => {
     const { u, pack } = await setup();
     const r = await makeResult({ packId: pack.id, contributorId: u.id, figures: { cells: 3 } });
-    await db.update(results).set({ flags: [{ code: "load-mismatch", message: "card" }, { code: "cells-mismatch", message: "card says 3S" }] }).where(eq(results.id, r.id));
+    await db
+      .update(results)
+      .set({
+        flags: [
+          { code: "load-mismatch", message: "card" },
+          { code: "cells-mismatch", message: "card says 3S" },
+        ],
+      })
+      .where(eq(results.id, r.id));
     await computeAndStoreFlags(r.id);
     const once = await storedCodes(r.id);
     await computeAndStoreFlags(r.id);

@@ -21,8 +21,21 @@ beforeAll(async () => {
   ids.pending = (await makeResult(pack, named.id, { status: "pending" })).id;
   ids.disputed = (await makeResult(pack, named.id, { status: "disputed", publishedAt: day(5) })).id;
   await db.insert(reviewEvents).values([
-    { resultId: ids.approved, actorId: moderator.id, fromStatus: "pending", toStatus: "approved", createdAt: new Date(Date.now() + 1000) },
-    { resultId: ids.disputed, actorId: null, fromStatus: "approved", toStatus: "disputed", reason: "reader-flag", createdAt: new Date(Date.now() + 1000) },
+    {
+      resultId: ids.approved,
+      actorId: moderator.id,
+      fromStatus: "pending",
+      toStatus: "approved",
+      createdAt: new Date(Date.now() + 1000),
+    },
+    {
+      resultId: ids.disputed,
+      actorId: null,
+      fromStatus: "approved",
+      toStatus: "disputed",
+      reason: "reader-flag",
+      createdAt: new Date(Date.now() + 1000),
+    },
   ]);
 });
 
@@ -30,7 +43,10 @@ describe("published results", () => {
   it("returns a published result with its contributor and review history, actors named by role", async () => {
     const r = await getPublicResult(ids.approved);
     expect(r?.contributor).toBe("Fen Bench");
-    expect(r?.events.map((e) => [e.actor, e.to])).toEqual([["contributor", "pending"], ["moderator", "approved"]]);
+    expect(r?.events.map((e) => [e.actor, e.to])).toEqual([
+      ["contributor", "pending"],
+      ["moderator", "approved"],
+    ]);
     expect(r?.pack.makerName).toBe("Furze Test Cells");
   });
 

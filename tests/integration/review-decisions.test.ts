@@ -12,7 +12,7 @@ import { makePack, makeResult } from "../helpers/review-fixtures";
 import { signedIn } from "../helpers/users";
 
 const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/revalidate", () => revalidate);
+vi.mock("@/server/revalidate", () => revalidate);
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
@@ -24,7 +24,10 @@ async function events(resultId: number) {
   return db.select().from(reviewEvents).where(eq(reviewEvents.resultId, resultId)).orderBy(asc(reviewEvents.id));
 }
 async function statusOf(resultId: number) {
-  const [r] = await db.select({ status: results.status, publishedAt: results.publishedAt }).from(results).where(eq(results.id, resultId));
+  const [r] = await db
+    .select({ status: results.status, publishedAt: results.publishedAt })
+    .from(results)
+    .where(eq(results.id, resultId));
   return r;
 }
 
@@ -39,7 +42,10 @@ describe("review decisions", () => {
     const watcher = await signedIn("contributor", "watcher");
     const mod = await signedIn("moderator");
     const { maker, pack } = await makePack();
-    await db.insert(watches).values([{ userId: watcher.id, packId: pack.id }, { userId: contributor.id, packId: pack.id }]);
+    await db.insert(watches).values([
+      { userId: watcher.id, packId: pack.id },
+      { userId: contributor.id, packId: pack.id },
+    ]);
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     requestState.token = mod.token;
 
@@ -49,12 +55,19 @@ describe("review decisions", () => {
     expect(s?.status).toBe("approved");
     expect(s?.publishedAt).toBeInstanceOf(Date);
     const ev = await events(r.id);
-    expect(ev.at(-1)).toMatchObject({ actorId: mod.id, fromStatus: "pending", toStatus: "approved", note: "Log and method card agree." });
+    expect(ev.at(-1)).toMatchObject({
+      actorId: mod.id,
+      fromStatus: "pending",
+      toStatus: "approved",
+      note: "Log and method card agree.",
+    });
     expect(ev.at(-1)?.createdAt).toBeInstanceOf(Date);
 
     expect(revalidate.revalidateTags).toHaveBeenCalledTimes(1);
     const tags = revalidate.revalidateTags.mock.calls[0]?.[0] as string[];
-    expect(tags).toEqual(expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`, "packs", "results"]));
+    expect(tags).toEqual(
+      expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`, "packs", "results"]),
+    );
 
     const decision = await newestMailFor(contributor.email);
     expect(decision.subject).toMatch(/^Result approved: /);
@@ -76,7 +89,13 @@ describe("review decisions", () => {
     expect(res.ok).toBe(true);
     expect((await statusOf(r.id))?.status).toBe("rejected");
     expect((await statusOf(r.id))?.publishedAt).toBeNull();
-    expect((await events(r.id)).at(-1)).toMatchObject({ actorId: mod.id, fromStatus: "pending", toStatus: "rejected", reason: "incomplete-method", note: "No cut-off stated." });
+    expect((await events(r.id)).at(-1)).toMatchObject({
+      actorId: mod.id,
+      fromStatus: "pending",
+      toStatus: "rejected",
+      reason: "incomplete-method",
+      note: "No cut-off stated.",
+    });
     expect(revalidate.revalidateTags).not.toHaveBeenCalled();
     const mail = await newestMailFor(contributor.email);
     expect(mail.subject).toMatch(/^Result not accepted: /);
@@ -108,7 +127,12 @@ describe("review decisions", () => {
     expect(await requestChanges(null, { resultId: r.id, note: "" })).toMatchObject({ ok: false, code: "validation" });
     const res = await requestChanges(null, { resultId: r.id, note: "Where was the temperature probe?" });
     expect(res.ok).toBe(true);
-    expect((await events(r.id)).at(-1)).toMatchObject({ actorId: mod.id, fromStatus: "pending", toStatus: "changes_requested", note: "Where was the temperature probe?" });
+    expect((await events(r.id)).at(-1)).toMatchObject({
+      actorId: mod.id,
+      fromStatus: "pending",
+      toStatus: "changes_requested",
+      note: "Where was the temperature probe?",
+    });
     const mail = await newestMailFor(contributor.email);
     expect(mail.subject).toMatch(/^Changes requested: /);
     expect(mail.text).toContain("Where was the temperature probe?");
@@ -125,7 +149,11 @@ describe("review decisions", () => {
         () => rejectResult(null, { resultId: r.id, reason: "duplicate" }),
         () => requestChanges(null, { resultId: r.id, note: "Please fix it." }),
       ]) {
-        expect(await call()).toMatchObject({ ok: false, code: "forbidden", error: expect.stringMatching(/own result/) });
+        expect(await call()).toMatchObject({
+          ok: false,
+          code: "forbidden",
+          error: expect.stringMatching(/own result/),
+        });
       }
       expect((await statusOf(r.id))?.status).toBe("pending");
       expect(await events(r.id)).toHaveLength(1);
@@ -139,9 +167,12 @@ describe("review decisions", () => {
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     requestState.token = modA.token;
     expect((await approveResult(null, { resultId: r.id })).ok).toBe(true);
-    expect(await rejectResult(null, { resultId: r.id, reason: "duplicate" })).toMatchObject({ ok: false, code: "conflict" });
+    expect(await rejectResult(null, { resultId: r.id, reason: "duplicate" })).toMatchObject({
+      ok: false,
+      code: "conflict",
+    });
 
-    const { decideResult } = await import("@/db/mutations/review");
+    const { decideResult } = await import("@/server/review");
     const modB = await signedIn("moderator", "mod-b");
     const r2 = await makeResult({ packId: pack.id, contributorId: contributor.id });
     const outcomes = await Promise.allSettled([

@@ -7,15 +7,15 @@ import { results, reviewEvents } from "@/db/schema";
 import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser } from "../helpers/users";
 
-vi.mock("@/lib/revalidate", () => ({ revalidateTags: vi.fn() }));
-vi.mock("@/lib/mail", async (orig) => ({
-  ...(await orig<typeof import("@/lib/mail")>()),
+vi.mock("@/server/revalidate", () => ({ revalidateTags: vi.fn() }));
+vi.mock("@/server/mail", async (orig) => ({
+  ...(await orig<typeof import("@/server/mail")>()),
   sendMail: vi.fn(async () => {
     throw new Error("outbox unavailable");
   }),
 }));
 
-const { decideResult } = await import("@/db/mutations/review");
+const { decideResult } = await import("@/server/review");
 
 describe("decisions survive mail failures", () => {
   it("approves and records the event even when sending mail throws", async () => {
@@ -24,7 +24,10 @@ describe("decisions survive mail failures", () => {
     const { pack } = await makePack();
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     const quiet = vi.spyOn(console, "error").mockImplementation(() => undefined);
-    await expect(decideResult(mod.id, r.id, { kind: "approve", note: null })).resolves.toEqual({ resultId: r.id, status: "approved" });
+    await expect(decideResult(mod.id, r.id, { kind: "approve", note: null })).resolves.toEqual({
+      resultId: r.id,
+      status: "approved",
+    });
     expect(quiet).toHaveBeenCalledWith(expect.stringContaining("decision mail failed"), "outbox unavailable");
     quiet.mockRestore();
     const [row] = await db.select({ status: results.status }).from(results).where(eq(results.id, r.id));

@@ -14,7 +14,11 @@ const { default: ReaderFlagsPage } = await import("@/app/(review)/review/flags/p
 const { default: CataloguePage } = await import("@/app/(admin)/admin/catalogue/page");
 
 const pages: { name: string; allowed: string[]; render: () => Promise<unknown> }[] = [
-  { name: "/review", allowed: ["moderator", "admin"], render: () => ReviewQueuePage({ searchParams: Promise.resolve({ flag: "bogus" }) }) },
+  {
+    name: "/review",
+    allowed: ["moderator", "admin"],
+    render: () => ReviewQueuePage({ searchParams: Promise.resolve({ flag: "bogus" }) }),
+  },
   { name: "/review/flags", allowed: ["moderator", "admin"], render: () => ReaderFlagsPage() },
   { name: "/admin/catalogue", allowed: ["admin"], render: () => CataloguePage() },
 ];

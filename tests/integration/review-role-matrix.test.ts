@@ -5,7 +5,7 @@ import type { ActionResult } from "@/lib/errors";
 import { requestState } from "../helpers/next-mocks";
 import { signedIn } from "../helpers/users";
 
-vi.mock("@/lib/revalidate", () => ({ revalidateTags: vi.fn() }));
+vi.mock("@/server/revalidate", () => ({ revalidateTags: vi.fn() }));
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
@@ -21,15 +21,45 @@ const missing = 999_999_999;
 type Call = () => Promise<ActionResult<unknown>>;
 const actions: { name: string; allowed: string[]; call: Call }[] = [
   { name: "approveResult", allowed: ["moderator", "admin"], call: () => approveResult(null, { resultId: missing }) },
-  { name: "rejectResult", allowed: ["moderator", "admin"], call: () => rejectResult(null, { resultId: missing, reason: "duplicate" }) },
-  { name: "requestChanges", allowed: ["moderator", "admin"], call: () => requestChanges(null, { resultId: missing, note: "Please fix." }) },
-  { name: "resolveFlag", allowed: ["moderator", "admin"], call: () => resolveFlag(null, { flagId: missing, resolution: "kept" }) },
   {
-    name: "editPackLabel", allowed: ["admin"],
-    call: () => editPackLabel(null, { packId: missing, cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, labelledBurstC: null, weightG: null, connector: "XT60" }),
+    name: "rejectResult",
+    allowed: ["moderator", "admin"],
+    call: () => rejectResult(null, { resultId: missing, reason: "duplicate" }),
   },
-  { name: "mergePacks", allowed: ["admin"], call: () => mergePacks(null, { sourceId: missing, targetId: missing - 1 }) },
-  { name: "mergeMakers", allowed: ["admin"], call: () => mergeMakers(null, { sourceId: missing, targetId: missing - 1 }) },
+  {
+    name: "requestChanges",
+    allowed: ["moderator", "admin"],
+    call: () => requestChanges(null, { resultId: missing, note: "Please fix." }),
+  },
+  {
+    name: "resolveFlag",
+    allowed: ["moderator", "admin"],
+    call: () => resolveFlag(null, { flagId: missing, resolution: "kept" }),
+  },
+  {
+    name: "editPackLabel",
+    allowed: ["admin"],
+    call: () =>
+      editPackLabel(null, {
+        packId: missing,
+        cellsInSeries: 4,
+        ratedCapacityMah: 1300,
+        labelledContinuousC: 75,
+        labelledBurstC: null,
+        weightG: null,
+        connector: "XT60",
+      }),
+  },
+  {
+    name: "mergePacks",
+    allowed: ["admin"],
+    call: () => mergePacks(null, { sourceId: missing, targetId: missing - 1 }),
+  },
+  {
+    name: "mergeMakers",
+    allowed: ["admin"],
+    call: () => mergeMakers(null, { sourceId: missing, targetId: missing - 1 }),
+  },
 ];
 
 const tokens: Record<string, string | null> = { anonymous: null };

@@ -3,7 +3,7 @@
 import { describe, expect, it, vi } from "vitest";
 import robots from "@/app/robots";
 import sitemap from "@/app/sitemap";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
@@ -15,7 +15,9 @@ describe("robots and sitemap", () => {
     expect(r.sitemap).toBe(`${base}/sitemap.xml`);
     const rules = Array.isArray(r.rules) ? r.rules[0] : r.rules;
     expect(rules?.allow).toEqual(["/", "/api/oembed"]);
-    expect(rules?.disallow).toEqual(expect.arrayContaining(["/account", "/submit", "/review", "/admin", "/api/", "/embed/"]));
+    expect(rules?.disallow).toEqual(
+      expect.arrayContaining(["/account", "/submit", "/review", "/admin", "/api/", "/embed/"]),
+    );
     expect(rules?.disallow).not.toContain("/packs");
   });
 
@@ -29,7 +31,9 @@ describe("robots and sitemap", () => {
       if (r.status === "approved") expect(urls).toContain(`${base}/results/${r.id}`);
       else expect(urls, `${r.status} result ${r.id}`).not.toContain(`${base}/results/${r.id}`);
     }
-    expect(urls.filter((u) => /^\/(account|submit|review|admin|api|embed|dev)(\/|$)/.test(new URL(u).pathname))).toEqual([]);
+    expect(
+      urls.filter((u) => /^\/(account|submit|review|admin|api|embed|dev)(\/|$)/.test(new URL(u).pathname)),
+    ).toEqual([]);
     expect(new Set(urls).size).toBe(urls.length);
   });
 });

@@ -38,29 +38,65 @@ beforeAll(async () => {
   if (!maker) throw new Error("no maker");
   const [pack] = await db
     .insert(packs)
-    .values({ slug: "matrixmaker-850", makerId: maker.id, model: "Grid 850 3S 45C", cellsInSeries: 3, ratedCapacityMah: 850, labelledContinuousC: 45, connector: "XT30" })
+    .values({
+      slug: "matrixmaker-850",
+      makerId: maker.id,
+      model: "Grid 850 3S 45C",
+      cellsInSeries: 3,
+      ratedCapacityMah: 850,
+      labelledContinuousC: 45,
+      connector: "XT30",
+    })
     .returning();
   if (!pack) throw new Error("no pack");
   packId = pack.id;
 });
 
 async function ownProfile(userId: string): Promise<number> {
-  const [row] = await db.insert(benchProfiles).values({ userId, name: "Matrix bench", loadEquipment: "Test load", resistanceMethod: "dc-step" }).returning();
+  const [row] = await db
+    .insert(benchProfiles)
+    .values({ userId, name: "Matrix bench", loadEquipment: "Test load", resistanceMethod: "dc-step" })
+    .returning();
   if (!row) throw new Error("no profile");
   return row.id;
 }
 
-const profileForm: BenchProfileFormValues = { ...emptyBenchProfile, name: "Matrix bench", loadEquipment: "Test load", resistanceMethod: "dc-step" };
+const profileForm: BenchProfileFormValues = {
+  ...emptyBenchProfile,
+  name: "Matrix bench",
+  loadEquipment: "Test load",
+  resistanceMethod: "dc-step",
+};
 
 // Each action with the permission it must demand and a valid call for a given (possibly absent) user.
 const actions: { name: string; permission: Permission; call: (who: Who) => Promise<ActionResult<unknown>> }[] = [
-  { name: "updateProfile", permission: "account.update", call: () => updateProfile(null, { displayName: "Matrix Tester", anonymous: false }) },
-  { name: "saveBenchProfile (create)", permission: "bench-profile.manage", call: () => saveBenchProfile(null, profileForm) },
-  { name: "saveBenchProfile (update)", permission: "bench-profile.manage", call: async (who) => saveBenchProfile(null, { ...profileForm, id: who ? await ownProfile(who.id) : 1 }) },
-  { name: "deleteBenchProfile", permission: "bench-profile.manage", call: async (who) => deleteBenchProfile(null, { id: who ? await ownProfile(who.id) : 1 }) },
+  {
+    name: "updateProfile",
+    permission: "account.update",
+    call: () => updateProfile(null, { displayName: "Matrix Tester", anonymous: false }),
+  },
+  {
+    name: "saveBenchProfile (create)",
+    permission: "bench-profile.manage",
+    call: () => saveBenchProfile(null, profileForm),
+  },
+  {
+    name: "saveBenchProfile (update)",
+    permission: "bench-profile.manage",
+    call: async (who) => saveBenchProfile(null, { ...profileForm, id: who ? await ownProfile(who.id) : 1 }),
+  },
+  {
+    name: "deleteBenchProfile",
+    permission: "bench-profile.manage",
+    call: async (who) => deleteBenchProfile(null, { id: who ? await ownProfile(who.id) : 1 }),
+  },
   { name: "watchPack", permission: "watch.manage", call: () => watchPack(null, { packId }) },
   { name: "unwatchPack", permission: "watch.manage", call: () => unwatchPack(null, { packId }) },
-  { name: "setUserRole", permission: "user.set-role", call: async () => setUserRole(null, { userId: (await createUser("contributor", "target")).id, role: "moderator" }) },
+  {
+    name: "setUserRole",
+    permission: "user.set-role",
+    call: async () => setUserRole(null, { userId: (await createUser("contributor", "target")).id, role: "moderator" }),
+  },
 ];
 
 // Signed-in pages and the permission each checks; a page "succeeds" by returning its element tree.
@@ -68,8 +104,17 @@ const pages: { path: string; permission: Permission; render: (who: Who) => Promi
   { path: "/account", permission: "account.update", render: () => AccountPage() },
   { path: "/account/bench-profiles", permission: "bench-profile.manage", render: () => BenchProfilesPage() },
   { path: "/account/bench-profiles/new", permission: "bench-profile.manage", render: () => NewBenchProfilePage() },
-  { path: "/account/bench-profiles", permission: "bench-profile.manage", render: async (who) => EditBenchProfilePage({ params: Promise.resolve({ id: String(who ? await ownProfile(who.id) : 1) }) }) },
-  { path: "/admin/users", permission: "user.set-role", render: () => AdminUsersPage({ searchParams: Promise.resolve({}) }) },
+  {
+    path: "/account/bench-profiles",
+    permission: "bench-profile.manage",
+    render: async (who) =>
+      EditBenchProfilePage({ params: Promise.resolve({ id: String(who ? await ownProfile(who.id) : 1) }) }),
+  },
+  {
+    path: "/admin/users",
+    permission: "user.set-role",
+    render: () => AdminUsersPage({ searchParams: Promise.resolve({}) }),
+  },
 ];
 
 async function as(role: UserRole | null): Promise<Who> {
@@ -106,7 +151,10 @@ describe("role matrix: server actions", () => {
 
   it("signOut is public: without a session it just goes home", async () => {
     await as(null);
-    const to = await signOut().then(() => null, (err: unknown) => redirectTarget(err));
+    const to = await signOut().then(
+      () => null,
+      (err: unknown) => redirectTarget(err),
+    );
     expect(to).toBe("http://localhost:3011/");
   });
 });
@@ -122,7 +170,10 @@ describe("role matrix: pages", () => {
           (err: unknown) => {
             const to = redirectTarget(err);
             if (to !== null) return to.startsWith("/sign-in?callbackUrl=") ? "redirect to sign-in" : `redirect ${to}`;
-            const digest = typeof err === "object" && err !== null && "digest" in err ? String((err as { digest: unknown }).digest) : String(err);
+            const digest =
+              typeof err === "object" && err !== null && "digest" in err
+                ? String((err as { digest: unknown }).digest)
+                : String(err);
             return digest === "NEXT_HTTP_ERROR_FALLBACK;403" ? "403" : digest;
           },
         );
@@ -137,7 +188,12 @@ describe("role matrix: route handlers", () => {
   for (const role of roles) {
     it(`GET /api/v1/me as ${role ?? "nobody"} (public) → 200 with ${role ?? "no user"}`, async () => {
       const who = await as(role);
-      const res = await meRoute.GET(new Request("http://localhost:3011/api/v1/me", { headers: who ? { cookie: `authjs.session-token=${who.token}` } : {} }), {});
+      const res = await meRoute.GET(
+        new Request("http://localhost:3011/api/v1/me", {
+          headers: who ? { cookie: `authjs.session-token=${who.token}` } : {},
+        }),
+        {},
+      );
       expect(res.status).toBe(200);
       expect(res.headers.get("cache-control")).toContain("no-store");
       const body = (await res.json()) as { user: { role: string; name: string } | null };
@@ -146,14 +202,21 @@ describe("role matrix: route handlers", () => {
   }
 
   it("GET /api/auth/session (public, Auth.js) answers without a session", async () => {
-    const res = await authRoute.GET(new Request("http://localhost:3011/api/auth/session", { headers: { host: "localhost:3011" } }), ctx);
+    const res = await authRoute.GET(
+      new Request("http://localhost:3011/api/auth/session", { headers: { host: "localhost:3011" } }),
+      ctx,
+    );
     expect(res.status).toBe(200);
     expect(await res.json()).toBeNull();
   });
 
   it("POST /api/auth/* from another site is refused before Auth.js sees it", async () => {
     const res = await authRoute.POST(
-      new Request("http://localhost:3011/api/auth/signin/nodemailer", { method: "POST", headers: { host: "localhost:3011", origin: "https://elsewhere.example" }, body: new URLSearchParams({ email: "x@y.example" }) }),
+      new Request("http://localhost:3011/api/auth/signin/nodemailer", {
+        method: "POST",
+        headers: { host: "localhost:3011", origin: "https://elsewhere.example" },
+        body: new URLSearchParams({ email: "x@y.example" }),
+      }),
       ctx,
     );
     expect(res.status).toBe(403);

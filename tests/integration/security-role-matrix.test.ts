@@ -25,15 +25,33 @@ const PUBLIC_ACTIONS = new Set(["requestSignInLink", "signOut"]);
 // What each action and state-changing route must require — the reviewed matrix. A new action or route
 // fails until it is added here, so nobody adds one without deciding who may call it.
 const EXPECTED_ACTIONS: Record<string, Permission> = {
-  watchPack: "watch.manage", unwatchPack: "watch.manage", updateProfile: "account.update",
-  withdrawResult: "result.withdraw-own", previewStoredLog: "upload.create", keepDraftFiles: "upload.create", submitResult: "result.submit",
-  resubmitResult: "result.resubmit-own", saveBenchProfile: "bench-profile.manage", deleteBenchProfile: "bench-profile.manage",
-  editPackLabel: "catalogue.edit", mergeMakers: "catalogue.merge", mergePacks: "catalogue.merge", setUserRole: "user.set-role", saveSiteSettings: "settings.edit",
-  approveResult: "result.review", rejectResult: "result.review", requestChanges: "result.review", resolveFlag: "flag.resolve",
+  watchPack: "watch.manage",
+  unwatchPack: "watch.manage",
+  updateProfile: "account.update",
+  withdrawResult: "result.withdraw-own",
+  previewStoredLog: "upload.create",
+  keepDraftFiles: "upload.create",
+  submitResult: "result.submit",
+  resubmitResult: "result.resubmit-own",
+  saveBenchProfile: "bench-profile.manage",
+  deleteBenchProfile: "bench-profile.manage",
+  editPackLabel: "catalogue.edit",
+  mergeMakers: "catalogue.merge",
+  mergePacks: "catalogue.merge",
+  setUserRole: "user.set-role",
+  saveSiteSettings: "settings.edit",
+  approveResult: "result.review",
+  rejectResult: "result.review",
+  requestChanges: "result.review",
+  resolveFlag: "flag.resolve",
 };
 const EXPECTED_ROUTES: Record<string, Permission | "public"> = {
-  "POST api/auth/[...nextauth]": "public", "POST api/v1/analyse": "public", "POST api/v1/results/[id]/flags": "public",
-  "POST api/v1/charts": "chart.save", "POST api/v1/uploads/log": "upload.create", "POST api/v1/uploads/photo": "upload.create",
+  "POST api/auth/[...nextauth]": "public",
+  "POST api/v1/analyse": "public",
+  "POST api/v1/results/[id]/flags": "public",
+  "POST api/v1/charts": "chart.save",
+  "POST api/v1/uploads/log": "upload.create",
+  "POST api/v1/uploads/photo": "upload.create",
 };
 const MUTATING = ["POST", "PUT", "PATCH", "DELETE"] as const;
 
@@ -77,10 +95,14 @@ describe("every server action goes through authedAction and answers per the perm
         expect(permission, `${rel}#${name} is wrapped by authedAction`).toBeDefined();
         expect(permission, `${rel}#${name} requires what the matrix says`).toBe(EXPECTED_ACTIONS[name]);
         if (!permission || permission === "public") continue;
-        expect(await callAction(fn, null), `${name} without a session`).toMatchObject({ ok: false, code: "unauthenticated" });
+        expect(await callAction(fn, null), `${name} without a session`).toMatchObject({
+          ok: false,
+          code: "unauthenticated",
+        });
         for (const role of userRoles) {
           const out = await callAction(fn, tokens[role]);
-          if (can(role, permission)) expect(out.code ?? "ok", `${name} as ${role}`).not.toMatch(/^(unauthenticated|forbidden)$/);
+          if (can(role, permission))
+            expect(out.code ?? "ok", `${name} as ${role}`).not.toMatch(/^(unauthenticated|forbidden)$/);
           else expect(out, `${name} as ${role}`).toMatchObject({ ok: false, code: "forbidden" });
         }
       }
@@ -104,7 +126,10 @@ describe("every state-changing route handler goes through withPermission, checks
         expect(permission, `${method} ${rel} is wrapped by withPermission`).toBeDefined();
         const key = `${method} ${path.relative(appDir, path.dirname(file)).split(path.sep).join("/")}`;
         expect(permission, `${key} requires what the matrix says`).toBe(EXPECTED_ROUTES[key]);
-        expect(await callRoute(fn, method, tokens.admin, "https://evil.example"), `${method} ${rel} from a foreign Origin`).toBe(403);
+        expect(
+          await callRoute(fn, method, tokens.admin, "https://evil.example"),
+          `${method} ${rel} from a foreign Origin`,
+        ).toBe(403);
         if (!permission || permission === "public") continue;
         expect(await callRoute(fn, method, null), `${method} ${rel} without a session`).toBe(401);
         for (const role of userRoles) {

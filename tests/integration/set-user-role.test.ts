@@ -21,7 +21,10 @@ async function roleOf(id: string) {
 }
 
 async function auditFor(id: string) {
-  return db.select().from(auditEvents).where(and(eq(auditEvents.entityType, "user"), eq(auditEvents.entityId, id)));
+  return db
+    .select()
+    .from(auditEvents)
+    .where(and(eq(auditEvents.entityType, "user"), eq(auditEvents.entityId, id)));
 }
 
 /** Leave exactly the given admins in the database (other files' tests may have made some). */
@@ -44,10 +47,17 @@ describe("set user role", () => {
     expect(await roleOf(target.id)).toBe("moderator");
     const events = await auditFor(target.id);
     expect(events).toHaveLength(1);
-    expect(events[0]).toMatchObject({ actorId: admin.id, action: "user.set-role", data: { from: "contributor", to: "moderator" } });
+    expect(events[0]).toMatchObject({
+      actorId: admin.id,
+      action: "user.set-role",
+      data: { from: "contributor", to: "moderator" },
+    });
 
     // Setting the same role again changes nothing and adds no event.
-    expect(await setUserRole(null, { userId: target.id, role: "moderator" })).toMatchObject({ ok: true, data: { changed: false } });
+    expect(await setUserRole(null, { userId: target.id, role: "moderator" })).toMatchObject({
+      ok: true,
+      data: { changed: false },
+    });
     expect(await auditFor(target.id)).toHaveLength(1);
   });
 
@@ -66,7 +76,10 @@ describe("set user role", () => {
     const a = await createUser("admin", "a");
     const b = await createUser("admin", "b");
     await onlyAdmins([a.id, b.id]);
-    const outcomes = await Promise.allSettled([setRoleRow(a.id, b.id, "contributor"), setRoleRow(b.id, a.id, "contributor")]);
+    const outcomes = await Promise.allSettled([
+      setRoleRow(a.id, b.id, "contributor"),
+      setRoleRow(b.id, a.id, "contributor"),
+    ]);
     expect(outcomes.filter((o) => o.status === "fulfilled")).toHaveLength(1);
     const rejected = outcomes.find((o) => o.status === "rejected");
     expect(rejected?.status === "rejected" ? rejected.reason : null).toMatchObject({ code: "conflict" });
@@ -84,7 +97,10 @@ describe("set user role", () => {
     expect(await setUserRole(null, { userId: someone.id, role: "moderator" })).toMatchObject({ ok: true });
 
     requestState.token = second.token;
-    expect(await setUserRole(null, { userId: first.id, role: "contributor" })).toMatchObject({ ok: true, data: { changed: true } });
+    expect(await setUserRole(null, { userId: first.id, role: "contributor" })).toMatchObject({
+      ok: true,
+      data: { changed: true },
+    });
 
     requestState.token = first.token;
     expect((await getSessionUserByToken(first.token))?.role).toBe("contributor");
@@ -96,10 +112,17 @@ describe("set user role", () => {
   it("answers 404 for an unknown user and 422 for an unknown role", async () => {
     const admin = await signedIn("admin");
     requestState.token = admin.token;
-    expect(await setUserRole(null, { userId: "no-such-user", role: "moderator" })).toMatchObject({ ok: false, code: "not_found" });
+    expect(await setUserRole(null, { userId: "no-such-user", role: "moderator" })).toMatchObject({
+      ok: false,
+      code: "not_found",
+    });
     const fd = new FormData();
     fd.set("userId", admin.id);
     fd.set("role", "superuser");
-    expect(await setUserRole(null, fd)).toMatchObject({ ok: false, code: "validation", fieldErrors: { role: ["Choose contributor, moderator or admin."] } });
+    expect(await setUserRole(null, fd)).toMatchObject({
+      ok: false,
+      code: "validation",
+      fieldErrors: { role: ["Choose contributor, moderator or admin."] },
+    });
   });
 });

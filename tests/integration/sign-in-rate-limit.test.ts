@@ -2,7 +2,7 @@
 // route answers 429 with Retry-After, and the sign-in form's action returns a clear message.
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
-import { limits } from "@/lib/rate-limit";
+import { limits } from "@/server/rate-limit";
 import { requestState } from "../helpers/next-mocks";
 import { caughtFor } from "../helpers/mail";
 
@@ -16,7 +16,10 @@ const base = "http://localhost:3011/api/auth";
 const ctx = { params: Promise.resolve({ nextauth: [] as string[] }) };
 
 async function csrf(ip: string): Promise<{ token: string; cookie: string }> {
-  const res = await GET(new Request(`${base}/csrf`, { headers: { host: "localhost:3011", "x-forwarded-for": ip } }), ctx);
+  const res = await GET(
+    new Request(`${base}/csrf`, { headers: { host: "localhost:3011", "x-forwarded-for": ip } }),
+    ctx,
+  );
   const body = (await res.json()) as { csrfToken: string };
   const cookie = (res.headers.get("set-cookie") ?? "").split(";")[0] ?? "";
   return { token: body.csrfToken, cookie };
@@ -27,7 +30,12 @@ function postSignIn(email: string, ip: string, auth?: { token: string; cookie: s
   return POST(
     new Request(`${base}/signin/nodemailer`, {
       method: "POST",
-      headers: { host: "localhost:3011", "content-type": "application/x-www-form-urlencoded", "x-forwarded-for": ip, ...(auth ? { cookie: auth.cookie } : {}) },
+      headers: {
+        host: "localhost:3011",
+        "content-type": "application/x-www-form-urlencoded",
+        "x-forwarded-for": ip,
+        ...(auth ? { cookie: auth.cookie } : {}),
+      },
       body,
     }),
     ctx,
@@ -72,7 +80,9 @@ describe("sign-in rate limits", () => {
     expect(refused.status).toBe(429);
     expect(Number(refused.headers.get("retry-after"))).toBeGreaterThan(0);
     // Another IP is unaffected.
-    expect((await postSignIn(`other-${randomUUID().slice(0, 6)}@test.sagline.localhost`, "192.0.2.78")).status).not.toBe(429);
+    expect(
+      (await postSignIn(`other-${randomUUID().slice(0, 6)}@test.sagline.localhost`, "192.0.2.78")).status,
+    ).not.toBe(429);
   });
 
   it("shows the sign-in form a clear message once the address is limited", async () => {

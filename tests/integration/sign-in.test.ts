@@ -93,13 +93,19 @@ describe("sign-in by e-mail link", () => {
     await request(signInForm(email, "/account"));
     const link = firstLink((await newestMailFor(email)).text);
     const res = await GET(new Request(link, { headers: { host: "localhost:3011" } }), ctx);
-    const token = decodeURIComponent(/authjs\.session-token=([^;]+)/.exec(res.headers.get("set-cookie") ?? "")?.[1] ?? "");
+    const token = decodeURIComponent(
+      /authjs\.session-token=([^;]+)/.exec(res.headers.get("set-cookie") ?? "")?.[1] ?? "",
+    );
     expect((await getSessionUserByToken(token))?.role).toBe("moderator");
   });
 
   it("explains a malformed address and sends nothing", async () => {
     const { result } = await request(signInForm("not-an-address"));
-    expect(result).toMatchObject({ ok: false, code: "validation", fieldErrors: { email: ["Enter an e-mail address like name@example.com."] } });
+    expect(result).toMatchObject({
+      ok: false,
+      code: "validation",
+      fieldErrors: { email: ["Enter an e-mail address like name@example.com."] },
+    });
   });
 
   it("never sends people to another site after signing in", async () => {

@@ -42,10 +42,21 @@ describe("site settings", () => {
     const admin = await signedIn("admin", "settings");
     requestState.token = admin.token;
     const res = await saveSiteSettings(null, form({ notice: "  Planned maintenance   on Sunday 09:00 UTC. " }));
-    expect(res).toEqual({ ok: true, data: { notice: "Planned maintenance on Sunday 09:00 UTC.", submissionsPaused: false, pauseReason: null } });
-    expect(await getSiteSettings()).toMatchObject({ notice: "Planned maintenance on Sunday 09:00 UTC.", submissionsPaused: false });
+    expect(res).toEqual({
+      ok: true,
+      data: { notice: "Planned maintenance on Sunday 09:00 UTC.", submissionsPaused: false, pauseReason: null },
+    });
+    expect(await getSiteSettings()).toMatchObject({
+      notice: "Planned maintenance on Sunday 09:00 UTC.",
+      submissionsPaused: false,
+    });
     expect(requestState.revalidated).toContain("tag:settings");
-    const [event] = await db.select().from(auditEvents).where(and(eq(auditEvents.action, "settings.edit"), eq(auditEvents.actorId, admin.id))).orderBy(desc(auditEvents.id)).limit(1);
+    const [event] = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.action, "settings.edit"), eq(auditEvents.actorId, admin.id)))
+      .orderBy(desc(auditEvents.id))
+      .limit(1);
     expect(event?.data).toMatchObject({ to: { notice: "Planned maintenance on Sunday 09:00 UTC." } });
   });
 
@@ -56,7 +67,10 @@ describe("site settings", () => {
       expect(await saveSiteSettings(null, form({ notice: "hijack" }))).toMatchObject({ ok: false, code: "forbidden" });
     }
     requestState.token = null;
-    expect(await saveSiteSettings(null, form({ notice: "hijack" }))).toMatchObject({ ok: false, code: "unauthenticated" });
+    expect(await saveSiteSettings(null, form({ notice: "hijack" }))).toMatchObject({
+      ok: false,
+      code: "unauthenticated",
+    });
     expect(await getSiteSettings()).toEqual(before);
   });
 
@@ -73,7 +87,9 @@ describe("site settings", () => {
   it("a pause refuses submissions with its reason and keeps the draft's files; lifting it lets the same submission through", async () => {
     const admin = await signedIn("admin", "pauser");
     requestState.token = admin.token;
-    expect(await saveSiteSettings(null, form({ submissionsPaused: "on", pauseReason: "moving to a new server" }))).toMatchObject({ ok: true });
+    expect(
+      await saveSiteSettings(null, form({ submissionsPaused: "on", pauseReason: "moving to a new server" })),
+    ).toMatchObject({ ok: true });
 
     const { packId } = await makePack();
     const me = await signedIn("contributor", "paused-tester");
@@ -86,7 +102,10 @@ describe("site settings", () => {
     expect(await keysUnder(`incoming/${me.id}/`)).toContain(log.key);
 
     requestState.token = admin.token;
-    expect(await saveSiteSettings(null, form({}))).toMatchObject({ ok: true, data: { submissionsPaused: false, pauseReason: null } });
+    expect(await saveSiteSettings(null, form({}))).toMatchObject({
+      ok: true,
+      data: { submissionsPaused: false, pauseReason: null },
+    });
     requestState.token = me.token;
     expect(await submitResult(null, submission(packId, log))).toMatchObject({ ok: true, data: { created: true } });
   });

@@ -7,8 +7,8 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { results } from "@/db/schema";
-import { getObjectText, incomingLogKey, incomingPhotoKey, objectInfo, putObject } from "@/lib/storage";
-import { sweepIncomingUploads } from "@/lib/storage/sweep";
+import { getObjectText, incomingLogKey, incomingPhotoKey, objectInfo, putObject } from "@/server/storage";
+import { sweepIncomingUploads } from "@/server/storage/sweep";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 import { requestState } from "../helpers/next-mocks";
 import { keysUnder, PNG_BYTES } from "../helpers/storage";
@@ -28,19 +28,29 @@ async function nextSecond(): Promise<number> {
 
 let me: Awaited<ReturnType<typeof signedIn>>;
 let other: Awaited<ReturnType<typeof signedIn>>;
-const k = {} as Record<"oldLog" | "oldPhoto" | "refLog" | "refPhoto" | "reopenedLog" | "reopenedPhoto" | "recentLog" | "othersOld", string>;
+const k = {} as Record<
+  "oldLog" | "oldPhoto" | "refLog" | "refPhoto" | "reopenedLog" | "reopenedPhoto" | "recentLog" | "othersOld",
+  string
+>;
 /** The moment between the "old" uploads and the "recent" one; sweeping at cutoff + 7 days puts the cut-off here. */
 let cutoff = 0;
-const sweepMine = (dryRun: boolean) => sweepIncomingUploads({ maxAgeDays: 7, now: new Date(cutoff + 7 * DAY_MS), dryRun, prefix: `incoming/${me.id}/` });
+const sweepMine = (dryRun: boolean) =>
+  sweepIncomingUploads({ maxAgeDays: 7, now: new Date(cutoff + 7 * DAY_MS), dryRun, prefix: `incoming/${me.id}/` });
 
 beforeAll(async () => {
   me = await signedIn("contributor", "sweep-me");
   other = await signedIn("contributor", "sweep-other");
   Object.assign(k, {
-    oldLog: incomingLogKey(me.id), oldPhoto: incomingPhotoKey(me.id, "png"), refLog: incomingLogKey(me.id), refPhoto: incomingPhotoKey(me.id, "png"),
-    reopenedLog: incomingLogKey(me.id), reopenedPhoto: incomingPhotoKey(me.id, "png"), othersOld: incomingLogKey(other.id),
+    oldLog: incomingLogKey(me.id),
+    oldPhoto: incomingPhotoKey(me.id, "png"),
+    refLog: incomingLogKey(me.id),
+    refPhoto: incomingPhotoKey(me.id, "png"),
+    reopenedLog: incomingLogKey(me.id),
+    reopenedPhoto: incomingPhotoKey(me.id, "png"),
+    othersOld: incomingLogKey(other.id),
   });
-  for (const key of [k.oldLog, k.refLog, k.reopenedLog, k.othersOld]) await putObject(key, "time_s,voltage_v,current_a\n0,16.8,0\n", "text/csv");
+  for (const key of [k.oldLog, k.refLog, k.reopenedLog, k.othersOld])
+    await putObject(key, "time_s,voltage_v,current_a\n0,16.8,0\n", "text/csv");
   for (const key of [k.oldPhoto, k.refPhoto, k.reopenedPhoto]) await putObject(key, PNG_BYTES, "image/png");
   cutoff = await nextSecond();
   k.recentLog = incomingLogKey(me.id);
@@ -49,7 +59,10 @@ beforeAll(async () => {
   const fx = await seedOpenData("swp");
   const pending = fx.results.find((r) => r.status === "pending");
   if (!pending) throw new Error("the fixture has a pending result");
-  await db.update(results).set({ logKey: k.refLog, photoKeys: [k.refPhoto] }).where(eq(results.id, pending.id));
+  await db
+    .update(results)
+    .set({ logKey: k.refLog, photoKeys: [k.refPhoto] })
+    .where(eq(results.id, pending.id));
 });
 
 describe("keepDraftFiles (the form reopens a draft)", () => {
@@ -66,20 +79,28 @@ describe("keepDraftFiles (the form reopens a draft)", () => {
 
     // Another contributor's key is never touched, and is reported as missing.
     const before = await objectInfo(k.othersOld);
-    expect(await keepDraftFiles(null, { logKey: k.othersOld, photoKeys: [] })).toEqual({ ok: true, data: { logMissing: true, missingPhotoKeys: [] } });
+    expect(await keepDraftFiles(null, { logKey: k.othersOld, photoKeys: [] })).toEqual({
+      ok: true,
+      data: { logMissing: true, missingPhotoKeys: [] },
+    });
     expect((await objectInfo(k.othersOld))?.lastUsedAt).toEqual(before?.lastUsedAt);
     expect(before?.lastUsedAt.getTime()).toBeLessThan(cutoff);
   });
 
   it("refuses keys that are not draft uploads (422)", async () => {
     requestState.token = me.token;
-    expect(await keepDraftFiles(null, { logKey: "logs/ab/abc.csv", photoKeys: [] })).toMatchObject({ ok: false, code: "validation" });
+    expect(await keepDraftFiles(null, { logKey: "logs/ab/abc.csv", photoKeys: [] })).toMatchObject({
+      ok: false,
+      code: "validation",
+    });
   });
 });
 
 describe("sweepIncomingUploads", () => {
   it("refuses to look outside incoming/", async () => {
-    await expect(sweepIncomingUploads({ maxAgeDays: 7, prefix: "logs/" })).rejects.toThrow(/only looks under incoming\//);
+    await expect(sweepIncomingUploads({ maxAgeDays: 7, prefix: "logs/" })).rejects.toThrow(
+      /only looks under incoming\//,
+    );
   });
 
   it("in a dry run reports what it would remove and removes nothing", async () => {
@@ -98,7 +119,9 @@ describe("sweepIncomingUploads", () => {
     expect(report.removed.every((o) => o.lastUsedAt.getTime() < cutoff && o.bytes > 0)).toBe(true);
     expect(report.keptReferenced.sort()).toEqual([k.refLog, k.refPhoto].sort());
     expect(report.keptRecent).toBe(3); // the reopened log and photo, the recent log
-    expect((await keysUnder(`incoming/${me.id}/`)).sort()).toEqual([k.refLog, k.refPhoto, k.reopenedLog, k.reopenedPhoto, k.recentLog].sort());
+    expect((await keysUnder(`incoming/${me.id}/`)).sort()).toEqual(
+      [k.refLog, k.refPhoto, k.reopenedLog, k.reopenedPhoto, k.recentLog].sort(),
+    );
     // Another contributor's prefix was not part of this sweep.
     expect(await keysUnder(`incoming/${other.id}/`)).toEqual([k.othersOld]);
     // Nothing is left to remove.
@@ -115,21 +138,35 @@ describe("sweepIncomingUploads", () => {
 describe("npm run storage:sweep (scripts/storage-sweep.ts)", () => {
   const root = path.resolve(__dirname, "../..");
   const run = (...args: string[]) =>
-    promisify(execFile)(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", "scripts/storage-sweep.ts", ...args], {
-      cwd: root, env: { ...process.env, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true" },
-    }).then((r) => ({ code: 0, ...r }), (e: { code: number; stdout: string; stderr: string }) => e);
+    promisify(execFile)(
+      path.join(root, "node_modules/.bin/tsx"),
+      ["--conditions=react-server", "scripts/storage-sweep.ts", ...args],
+      {
+        cwd: root,
+        env: { ...process.env, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true" },
+      },
+    ).then(
+      (r) => ({ code: 0, ...r }),
+      (e: { code: number; stdout: string; stderr: string }) => e,
+    );
 
   it("prints a summary in a dry run and deletes nothing; refuses bad options with one line and a non-zero exit", async () => {
     const before = (await keysUnder(`incoming/${other.id}/`)).length;
     const dry = await run("--dry-run", "--max-age-days", "1");
     expect(dry.code).toBe(0);
-    expect(dry.stdout).toMatch(/^sagline: storage sweep of incoming\/ in sagline-test: uploads unused since .+ UTC \(1 day\) — dry run, nothing is deleted$/m);
-    expect(dry.stdout).toMatch(/^sagline: \d+ would be removed \([\d.]+ [kM]B\), \d+ kept \(used recently\), \d+ kept \(a result points at them\), \d+ looked at$/m);
+    expect(dry.stdout).toMatch(
+      /^sagline: storage sweep of incoming\/ in sagline-test: uploads unused since .+ UTC \(1 day\) — dry run, nothing is deleted$/m,
+    );
+    expect(dry.stdout).toMatch(
+      /^sagline: \d+ would be removed \([\d.]+ [kM]B\), \d+ kept \(used recently\), \d+ kept \(a result points at them\), \d+ looked at$/m,
+    );
     expect((await keysUnder(`incoming/${other.id}/`)).length).toBe(before);
     for (const bad of [["--max-age-days", "0"], ["--max-age-days", "week"], ["--everything"]]) {
       const out = await run(...bad);
       expect(out.code, bad.join(" ")).toBe(1);
-      expect(out.stderr.trim().split("\n")).toEqual([expect.stringMatching(/^sagline: error: storage sweep stopped: /)]);
+      expect(out.stderr.trim().split("\n")).toEqual([
+        expect.stringMatching(/^sagline: error: storage sweep stopped: /),
+      ]);
     }
   });
 });

@@ -8,7 +8,7 @@ vi.hoisted(() => {
 
 import { db } from "@/db";
 import { mailOutbox, results } from "@/db/schema";
-import { settleAfterResponse } from "@/lib/after-response";
+import { settleAfterResponse } from "@/server/after-response";
 import { requestState } from "../helpers/next-mocks";
 import { makePack, submission, uploadLog } from "../helpers/submission";
 import { signedIn } from "../helpers/users";

@@ -5,9 +5,9 @@ import { beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { mailOutbox, makers, packs, results, reviewEvents } from "@/db/schema";
 import { hitRateLimit } from "@/db/mutations/rate-limits";
-import { settleAfterResponse } from "@/lib/after-response";
+import { settleAfterResponse } from "@/server/after-response";
 import { groupKey } from "@/lib/analysis";
-import { logKey } from "@/lib/storage";
+import { logKey } from "@/server/storage";
 import { sampleLog } from "../helpers/logs";
 import { newestMailFor } from "../helpers/mail";
 import { requestState } from "../helpers/next-mocks";
@@ -40,42 +40,67 @@ describe("submitResult", () => {
     expect(await resultsOf(me.id)).toHaveLength(0);
   });
 
-  it.each(["contributor", "moderator", "admin"] as const)("lets a %s submit: result, figures from the stored log, first review event, receipt", async (role) => {
-    const { packId } = await makePack();
-    const me = await signedIn(role);
-    requestState.token = me.token;
-    const { csv, truth } = sampleLog({ seed: 100 + role.length }); // a log of its own: no duplicate-log flag
-    const log = await uploadLog(me.token, csv);
-    const photo = await uploadPhoto(me.token);
-    const res = await submitResult(null, submission(packId, log, { photoKeys: [photo] }));
-    expect(res.ok).toBe(true);
-    if (!res.ok) return;
-    expect(res.data.created).toBe(true);
-    const [row] = await resultsOf(me.id);
-    expect(row).toBeDefined();
-    if (!row) return;
-    expect(row.status).toBe("pending");
-    expect(row.packStartTemperatureC).toBe(22.5); // "22,5" typed with a decimal comma
-    expect(row.capacityMah).toBeCloseTo(truth.deliveredMah, -1);
-    expect(row.figures.cells).toBe(4);
-    expect(row.loadRateC).toBeCloseTo(10, 5);
-    expect(row.groupKey).toBe(groupKey({ resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 13, ratedMah: 1300, cyclesBeforeTest: 2 }).key);
-    expect(row.logKey).toBe(logKey(log.sha256));
-    expect(row.logSha256).toBe(log.sha256);
-    expect(row.logFilename).toBe("bench.csv");
-    expect(row.photoKeys).toEqual([photo.replace("incoming/", "photos/").replace("/photo-", "/")]);
-    // No check against the card fails; group-based plausibility flags depend on other approved results in the
-    // shared test database, so they are tested on their own (plausibility-flags.test.ts).
-    expect(row.flags.filter((f) => ["cutoff-not-reached", "cells-mismatch", "load-mismatch", "stop-temperature-passed", "duplicate-log", "capacity-above-rated", "temperature-mismatch", "proposed-catalogue"].includes(f.code))).toEqual([]);
-    expect(await getObjectText(row.logKey)).toBe(csv);
-    const events = await db.select().from(reviewEvents).where(eq(reviewEvents.resultId, row.id));
-    expect(events).toEqual([expect.objectContaining({ actorId: me.id, fromStatus: null, toStatus: "pending" })]);
-    await settleAfterResponse();
-    expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]); // drafts removed once committed
-    const mail = await newestMailFor(me.email);
-    expect(mail.subject).toMatch(/^Result received: Testmaker/);
-    expect(requestState.revalidated).toContain("/account");
-  });
+  it.each(["contributor", "moderator", "admin"] as const)(
+    "lets a %s submit: result, figures from the stored log, first review event, receipt",
+    async (role) => {
+      const { packId } = await makePack();
+      const me = await signedIn(role);
+      requestState.token = me.token;
+      const { csv, truth } = sampleLog({ seed: 100 + role.length }); // a log of its own: no duplicate-log flag
+      const log = await uploadLog(me.token, csv);
+      const photo = await uploadPhoto(me.token);
+      const res = await submitResult(null, submission(packId, log, { photoKeys: [photo] }));
+      expect(res.ok).toBe(true);
+      if (!res.ok) return;
+      expect(res.data.created).toBe(true);
+      const [row] = await resultsOf(me.id);
+      expect(row).toBeDefined();
+      if (!row) return;
+      expect(row.status).toBe("pending");
+      expect(row.packStartTemperatureC).toBe(22.5); // "22,5" typed with a decimal comma
+      expect(row.capacityMah).toBeCloseTo(truth.deliveredMah, -1);
+      expect(row.figures.cells).toBe(4);
+      expect(row.loadRateC).toBeCloseTo(10, 5);
+      expect(row.groupKey).toBe(
+        groupKey({
+          resistanceMethod: "dc-step",
+          ambientC: 22,
+          cutoffVPerCell: 3.3,
+          loadCurrentA: 13,
+          ratedMah: 1300,
+          cyclesBeforeTest: 2,
+        }).key,
+      );
+      expect(row.logKey).toBe(logKey(log.sha256));
+      expect(row.logSha256).toBe(log.sha256);
+      expect(row.logFilename).toBe("bench.csv");
+      expect(row.photoKeys).toEqual([photo.replace("incoming/", "photos/").replace("/photo-", "/")]);
+      // No check against the card fails; group-based plausibility flags depend on other approved results in the
+      // shared test database, so they are tested on their own (plausibility-flags.test.ts).
+      expect(
+        row.flags.filter((f) =>
+          [
+            "cutoff-not-reached",
+            "cells-mismatch",
+            "load-mismatch",
+            "stop-temperature-passed",
+            "duplicate-log",
+            "capacity-above-rated",
+            "temperature-mismatch",
+            "proposed-catalogue",
+          ].includes(f.code),
+        ),
+      ).toEqual([]);
+      expect(await getObjectText(row.logKey)).toBe(csv);
+      const events = await db.select().from(reviewEvents).where(eq(reviewEvents.resultId, row.id));
+      expect(events).toEqual([expect.objectContaining({ actorId: me.id, fromStatus: null, toStatus: "pending" })]);
+      await settleAfterResponse();
+      expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]); // drafts removed once committed
+      const mail = await newestMailFor(me.email);
+      expect(mail.subject).toMatch(/^Result received: Testmaker/);
+      expect(requestState.revalidated).toContain("/account");
+    },
+  );
 
   it("makes one result from a double click: the same idempotency key, in a row or at once", async () => {
     const { packId } = await makePack();
@@ -110,10 +135,20 @@ describe("submitResult", () => {
     expect(gone.ok).toBe(false);
     expect(gone.fieldErrors?.["pack.packId"]?.[0]).toMatch(/not in the catalogue/);
     const { packId } = await makePack();
-    const bad = await submitResult(null, submission(packId, log, {
-      method: { ...validMethod, ambientTemperatureC: "-25", cutoffVPerCell: "4.5", stopTemperatureC: "95", loadCurrentA: "0", resistanceMethod: "guess" },
-      declaration: false,
-    }));
+    const bad = await submitResult(
+      null,
+      submission(packId, log, {
+        method: {
+          ...validMethod,
+          ambientTemperatureC: "-25",
+          cutoffVPerCell: "4.5",
+          stopTemperatureC: "95",
+          loadCurrentA: "0",
+          resistanceMethod: "guess",
+        },
+        declaration: false,
+      }),
+    );
     expect(bad).toMatchObject({ ok: false, code: "validation" });
     expect(bad.fieldErrors).toMatchObject({
       "method.ambientTemperatureC": ["Ambient temperature must be at least −20 °C."],
@@ -134,7 +169,10 @@ describe("submitResult", () => {
     requestState.token = me.token;
     const res = await submitResult(null, submission(packId, theirs));
     expect(res.fieldErrors?.log?.[0]).toMatch(/no longer stored/);
-    const gone = await submitResult(null, submission(packId, { key: `incoming/${me.id}/00000000-0000-4000-8000-000000000000.csv`, filename: "x.csv" }));
+    const gone = await submitResult(
+      null,
+      submission(packId, { key: `incoming/${me.id}/00000000-0000-4000-8000-000000000000.csv`, filename: "x.csv" }),
+    );
     expect(gone.fieldErrors?.log?.[0]).toMatch(/upload it again/);
   });
 
@@ -142,13 +180,31 @@ describe("submitResult", () => {
     const me = await signedIn("contributor");
     requestState.token = me.token;
     const log = await uploadLog(me.token);
-    const pack = { mode: "new" as const, packId: "", ...noProposal, makerName: "Brightcell Works", model: "BW 1300 4S 100C", cellsInSeries: "4", ratedCapacityMah: "1300", labelledContinuousC: "100", labelledBurstC: "", weightG: "165", connector: "XT60" };
+    const pack = {
+      mode: "new" as const,
+      packId: "",
+      ...noProposal,
+      makerName: "Brightcell Works",
+      model: "BW 1300 4S 100C",
+      cellsInSeries: "4",
+      ratedCapacityMah: "1300",
+      labelledContinuousC: "100",
+      labelledBurstC: "",
+      weightG: "165",
+      connector: "XT60",
+    };
     const res = await submitResult(null, submission(0, log, { pack }));
     expect(res.ok).toBe(true);
     const [row] = await resultsOf(me.id);
-    const [p] = await db.select().from(packs).where(eq(packs.id, row?.packId ?? -1));
+    const [p] = await db
+      .select()
+      .from(packs)
+      .where(eq(packs.id, row?.packId ?? -1));
     expect(p).toMatchObject({ status: "proposed", proposedById: me.id, model: "BW 1300 4S 100C", cellsInSeries: 4 });
-    const [m] = await db.select().from(makers).where(eq(makers.id, p?.makerId ?? -1));
+    const [m] = await db
+      .select()
+      .from(makers)
+      .where(eq(makers.id, p?.makerId ?? -1));
     expect(m).toMatchObject({ name: "Brightcell Works", status: "proposed", proposedById: me.id });
     expect(row?.labelRatio).not.toBeNull(); // the proposal's labelled C is used for the figures
     expect(row?.flags.map((f) => f.code)).toContain("proposed-catalogue"); // computeAndStoreFlags ran in the same transaction
@@ -169,10 +225,26 @@ describe("submitResult", () => {
     requestState.token = me.token;
     const log = await uploadLog(me.token);
     const photo = await uploadPhoto(me.token);
-    await db.execute(`create or replace function sagline_test_fail() returns trigger language plpgsql as $$ begin raise exception 'injected failure'; end $$`);
-    await db.execute(`create trigger sagline_test_fail before insert on review_events for each row execute function sagline_test_fail()`);
+    await db.execute(
+      `create or replace function sagline_test_fail() returns trigger language plpgsql as $$ begin raise exception 'injected failure'; end $$`,
+    );
+    await db.execute(
+      `create trigger sagline_test_fail before insert on review_events for each row execute function sagline_test_fail()`,
+    );
     try {
-      const pack = { mode: "new" as const, packId: "", ...noProposal, makerName: "Failmaker", model: "F 1", cellsInSeries: "4", ratedCapacityMah: "1300", labelledContinuousC: "50", weightG: "", labelledBurstC: "", connector: "XT60" };
+      const pack = {
+        mode: "new" as const,
+        packId: "",
+        ...noProposal,
+        makerName: "Failmaker",
+        model: "F 1",
+        cellsInSeries: "4",
+        ratedCapacityMah: "1300",
+        labelledContinuousC: "50",
+        weightG: "",
+        labelledBurstC: "",
+        connector: "XT60",
+      };
       const res = await submitResult(null, submission(0, log, { pack, photoKeys: [photo] }));
       expect(res).toMatchObject({ ok: false, code: "internal" });
       expect(res.error).toMatch(/Nothing was saved/);
@@ -196,6 +268,8 @@ describe("submitResult", () => {
     const res = await submitResult(null, submission(packId, await uploadLog(requestState.token)));
     expect(res.ok).toBe(true);
     const [row] = await resultsOf(u.id);
-    expect(await db.$count(reviewEvents, and(eq(reviewEvents.resultId, row?.id ?? -1), eq(reviewEvents.actorId, u.id)))).toBe(1);
+    expect(
+      await db.$count(reviewEvents, and(eq(reviewEvents.resultId, row?.id ?? -1), eq(reviewEvents.actorId, u.id))),
+    ).toBe(1);
   });
 });

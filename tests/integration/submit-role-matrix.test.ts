@@ -38,7 +38,10 @@ async function as(role: UserRole | null) {
 }
 
 /** Someone's submitted result (a fresh contributor's unless an owner is given), in a given state. */
-async function someonesResult(status: "pending" | "changes_requested" = "pending", ownerOf?: { id: string; token: string }): Promise<number> {
+async function someonesResult(
+  status: "pending" | "changes_requested" = "pending",
+  ownerOf?: { id: string; token: string },
+): Promise<number> {
   const owner = ownerOf ?? (await signedIn("contributor", "owner"));
   const saved = requestState.token;
   requestState.token = owner.token;
@@ -56,7 +59,10 @@ async function someonesResult(status: "pending" | "changes_requested" = "pending
 function outcomeOf(err: unknown): string {
   const to = redirectTarget(err);
   if (to !== null) return to.startsWith("/sign-in?callbackUrl=") ? "redirect to sign-in" : `redirect ${to}`;
-  const digest = typeof err === "object" && err !== null && "digest" in err ? String((err as { digest: unknown }).digest) : String(err);
+  const digest =
+    typeof err === "object" && err !== null && "digest" in err
+      ? String((err as { digest: unknown }).digest)
+      : String(err);
   return digest === "NEXT_HTTP_ERROR_FALLBACK;403" ? "403" : digest === "NEXT_HTTP_ERROR_FALLBACK;404" ? "404" : digest;
 }
 
@@ -73,7 +79,8 @@ describe("submission role matrix", () => {
     it(`/submit/[id] of someone else's result as ${who} → ${role ? "403" : "redirect to sign-in"}; own → render`, async () => {
       const id = await someonesResult("changes_requested");
       const me = await as(role);
-      const page = (resultId: number) => ResubmitPage({ params: Promise.resolve({ resultId: String(resultId) }) }).then(() => "render", outcomeOf);
+      const page = (resultId: number) =>
+        ResubmitPage({ params: Promise.resolve({ resultId: String(resultId) }) }).then(() => "render", outcomeOf);
       expect(await page(id)).toBe(role ? "403" : "redirect to sign-in");
       if (me) {
         expect(await page(2_000_000_000)).toBe("404");
@@ -84,26 +91,42 @@ describe("submission role matrix", () => {
     it(`POST /api/v1/uploads/log and /photo as ${who} → ${allowed ? 201 : 401}`, async () => {
       const me = await as(role);
       const cookie: Record<string, string> = me ? { cookie: `authjs.session-token=${me.token}` } : {};
-      const log = await logRoute.POST(postRequest("/api/v1/uploads/log?filename=m.csv", sampleLog().csv, { "content-type": "text/csv", ...cookie }), undefined);
+      const log = await logRoute.POST(
+        postRequest("/api/v1/uploads/log?filename=m.csv", sampleLog().csv, { "content-type": "text/csv", ...cookie }),
+        undefined,
+      );
       expect(log.status).toBe(allowed ? 201 : 401);
-      const photo = await photoRoute.POST(postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", ...cookie }), undefined);
+      const photo = await photoRoute.POST(
+        postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", ...cookie }),
+        undefined,
+      );
       expect(photo.status).toBe(allowed ? 201 : 401);
     });
 
     it(`POST /api/v1/analyse as ${who} → 200 (public)`, async () => {
       const me = await as(role);
-      const res = await analyseRoute.POST(postRequest("/api/v1/analyse", sampleLog().csv, { "content-type": "text/csv", "x-forwarded-for": `10.77.0.${roles.indexOf(role)}`, ...(me ? { cookie: `authjs.session-token=${me.token}` } : {}) }), undefined);
+      const res = await analyseRoute.POST(
+        postRequest("/api/v1/analyse", sampleLog().csv, {
+          "content-type": "text/csv",
+          "x-forwarded-for": `10.77.0.${roles.indexOf(role)}`,
+          ...(me ? { cookie: `authjs.session-token=${me.token}` } : {}),
+        }),
+        undefined,
+      );
       expect(res.status).toBe(200);
     });
 
     it(`submitResult and previewStoredLog as ${who} → ${allowed ? "ok" : "unauthenticated"}`, async () => {
       const me = await as(role);
       const { packId } = await makePack();
-      const log = me ? await uploadLog(me.token) : { key: "incoming/x/00000000-0000-4000-8000-000000000000.csv", filename: "x.csv" };
+      const log = me
+        ? await uploadLog(me.token)
+        : { key: "incoming/x/00000000-0000-4000-8000-000000000000.csv", filename: "x.csv" };
       const values = submission(packId, log);
       const preview = await previewStoredLog(null, { log: values.log, pack: values.pack, method: values.method });
       const submitted = await submitResult(null, values);
-      for (const res of [preview, submitted]) expect(res).toMatchObject(allowed ? { ok: true } : { ok: false, code: "unauthenticated" });
+      for (const res of [preview, submitted])
+        expect(res).toMatchObject(allowed ? { ok: true } : { ok: false, code: "unauthenticated" });
     });
 
     it(`withdrawResult and resubmitResult of someone else's result as ${who} → ${role ? "forbidden" : "unauthenticated"}`, async () => {
@@ -112,7 +135,14 @@ describe("submission role matrix", () => {
       await as(role);
       const expected = role ? "forbidden" : "unauthenticated";
       expect(await withdrawResult(null, { resultId: String(pending) })).toMatchObject({ ok: false, code: expected });
-      const answer = { resultId: String(asked), method: submission(1, { key: "", filename: "" }).method, log: null, photoKeys: [], note: "Changed.", declaration: true };
+      const answer = {
+        resultId: String(asked),
+        method: submission(1, { key: "", filename: "" }).method,
+        log: null,
+        photoKeys: [],
+        note: "Changed.",
+        declaration: true,
+      };
       expect(await resubmitResult(null, answer)).toMatchObject({ ok: false, code: expected });
     });
   }

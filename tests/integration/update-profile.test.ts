@@ -19,7 +19,10 @@ function form(values: Record<string, string>): FormData {
 }
 
 async function profile(id: string) {
-  const [u] = await db.select({ displayName: users.displayName, anonymous: users.anonymous }).from(users).where(eq(users.id, id));
+  const [u] = await db
+    .select({ displayName: users.displayName, anonymous: users.anonymous })
+    .from(users)
+    .where(eq(users.id, id));
   if (!u) throw new Error("user missing");
   return u;
 }
@@ -32,7 +35,10 @@ describe("update profile", () => {
   it("saves a trimmed display name and shows it on results", async () => {
     const me = await signedIn("contributor");
     requestState.token = me.token;
-    expect(await updateProfile(null, form({ displayName: "  Heron Bench  " }))).toMatchObject({ ok: true, data: { displayName: "Heron Bench", anonymous: false } });
+    expect(await updateProfile(null, form({ displayName: "  Heron Bench  " }))).toMatchObject({
+      ok: true,
+      data: { displayName: "Heron Bench", anonymous: false },
+    });
     const p = await profile(me.id);
     expect(p).toEqual({ displayName: "Heron Bench", anonymous: false });
     expect(nameOnResults(p)).toBe("Heron Bench");

@@ -12,7 +12,10 @@ import { postRequest, sampleLog } from "@/tests/helpers/logs";
 import { getObjectText, keysUnder } from "@/tests/helpers/storage";
 
 const call = (req: Request) => POST(req, undefined);
-const csvHeaders = (token?: string) => ({ "content-type": "text/csv", ...(token ? { cookie: `authjs.session-token=${token}` } : {}) });
+const csvHeaders = (token?: string) => ({
+  "content-type": "text/csv",
+  ...(token ? { cookie: `authjs.session-token=${token}` } : {}),
+});
 
 describe("POST /api/v1/uploads/log", () => {
   it("needs a session (401), and an expired one counts as none", async () => {
@@ -26,7 +29,13 @@ describe("POST /api/v1/uploads/log", () => {
   it("stores the log under the contributor's incoming prefix with its SHA-256, and previews the figures and card checks", async () => {
     const me = await signedIn("contributor");
     const { csv } = sampleLog({ cells: 6 });
-    const res = await call(postRequest("/api/v1/uploads/log?filename=bench%20run.csv&cells=4&ratedMah=1300&cutoffVPerCell=3.3", csv, csvHeaders(me.token)));
+    const res = await call(
+      postRequest(
+        "/api/v1/uploads/log?filename=bench%20run.csv&cells=4&ratedMah=1300&cutoffVPerCell=3.3",
+        csv,
+        csvHeaders(me.token),
+      ),
+    );
     expect(res.status).toBe(201);
     const body = await res.json();
     expect(body.log.key).toMatch(new RegExp(`^incoming/${me.id}/[0-9a-f-]{36}\\.csv$`));
@@ -52,7 +61,9 @@ describe("POST /api/v1/uploads/log", () => {
 
   it("refuses a log that cannot be read with 422 on the log field, and leaves nothing stored", async () => {
     const me = await signedIn("contributor");
-    const res = await call(postRequest("/api/v1/uploads/log?filename=broken.csv", "time,voltage\n1,2\n", csvHeaders(me.token)));
+    const res = await call(
+      postRequest("/api/v1/uploads/log?filename=broken.csv", "time,voltage\n1,2\n", csvHeaders(me.token)),
+    );
     expect(res.status).toBe(422);
     expect((await res.json()).error.fieldErrors.log[0]).toMatch(/\w/);
     expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
@@ -64,9 +75,16 @@ describe("POST /api/v1/uploads/log", () => {
     const binary = await call(postRequest("/api/v1/uploads/log?filename=a.csv", pdf, csvHeaders(me.token)));
     expect(binary.status).toBe(422);
     expect((await binary.json()).error.fieldErrors.log[0]).toMatch(/PDF/);
-    const json = await call(postRequest("/api/v1/uploads/log?filename=a.csv", "{}", { ...csvHeaders(me.token), "content-type": "application/json" }));
+    const json = await call(
+      postRequest("/api/v1/uploads/log?filename=a.csv", "{}", {
+        ...csvHeaders(me.token),
+        "content-type": "application/json",
+      }),
+    );
     expect(json.status).toBe(415);
-    const named = await call(postRequest("/api/v1/uploads/log?filename=label.jpg", sampleLog().csv, csvHeaders(me.token)));
+    const named = await call(
+      postRequest("/api/v1/uploads/log?filename=label.jpg", sampleLog().csv, csvHeaders(me.token)),
+    );
     expect(named.status).toBe(415);
     expect((await named.json()).error.fieldErrors.log[0]).toMatch(/label\.jpg is not a CSV log/);
     expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
@@ -75,9 +93,16 @@ describe("POST /api/v1/uploads/log", () => {
   it("answers 413 past the size limit, by Content-Length or by the stream, and leaves nothing stored", async () => {
     const me = await signedIn("contributor");
     const big = "0.000,16.8,0.0,22.0\n".repeat(400_000); // 8 MB
-    const declared = await call(postRequest("/api/v1/uploads/log?filename=big.csv", big, { ...csvHeaders(me.token), "content-length": String(big.length) }));
+    const declared = await call(
+      postRequest("/api/v1/uploads/log?filename=big.csv", big, {
+        ...csvHeaders(me.token),
+        "content-length": String(big.length),
+      }),
+    );
     expect(declared.status).toBe(413);
-    const streamed = await call(postRequest("/api/v1/uploads/log?filename=big.csv", `time,voltage,current\n${big}`, csvHeaders(me.token)));
+    const streamed = await call(
+      postRequest("/api/v1/uploads/log?filename=big.csv", `time,voltage,current\n${big}`, csvHeaders(me.token)),
+    );
     expect(streamed.status).toBe(413);
     expect((await streamed.json()).error.fieldErrors.log[0]).toMatch(/larger than the limit of 7 MB/);
     expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
@@ -85,7 +110,9 @@ describe("POST /api/v1/uploads/log", () => {
 
   it("refuses bad query values with 422", async () => {
     const me = await signedIn("contributor");
-    const res = await call(postRequest("/api/v1/uploads/log?filename=a.csv&cutoffVPerCell=9", sampleLog().csv, csvHeaders(me.token)));
+    const res = await call(
+      postRequest("/api/v1/uploads/log?filename=a.csv&cutoffVPerCell=9", sampleLog().csv, csvHeaders(me.token)),
+    );
     expect(res.status).toBe(422);
     expect(Object.keys((await res.json()).error.fieldErrors)).toEqual(["cutoffVPerCell"]);
   });

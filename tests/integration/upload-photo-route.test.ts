@@ -11,7 +11,10 @@ import { JPEG_BYTES, PNG_BYTES, keysUnder } from "@/tests/helpers/storage";
 import { signedIn } from "@/tests/helpers/users";
 
 const call = (req: Request) => POST(req, undefined);
-const headers = (token: string | null, type: string) => ({ "content-type": type, ...(token ? { cookie: `authjs.session-token=${token}` } : {}) });
+const headers = (token: string | null, type: string) => ({
+  "content-type": type,
+  ...(token ? { cookie: `authjs.session-token=${token}` } : {}),
+});
 
 describe("POST /api/v1/uploads/photo", () => {
   it("needs a session", async () => {
@@ -34,7 +37,13 @@ describe("POST /api/v1/uploads/photo", () => {
 
   it("refuses a file that is not a picture even when it claims to be one (422), and a non-image type (415)", async () => {
     const me = await signedIn("contributor");
-    const fake = await call(postRequest("/api/v1/uploads/photo", new TextEncoder().encode("<svg onload=alert(1)>"), headers(me.token, "image/png")));
+    const fake = await call(
+      postRequest(
+        "/api/v1/uploads/photo",
+        new TextEncoder().encode("<svg onload=alert(1)>"),
+        headers(me.token, "image/png"),
+      ),
+    );
     expect(fake.status).toBe(422);
     expect((await fake.json()).error.fieldErrors.photos[0]).toMatch(/not a JPEG, PNG or WebP picture/);
     const pdf = await call(postRequest("/api/v1/uploads/photo", PNG_BYTES, headers(me.token, "application/pdf")));

@@ -25,10 +25,16 @@ describe("uploads while storage is unreachable", () => {
   it("answers 503 with a plain message for a log and for a photo", async () => {
     const me = await signedIn("contributor");
     const cookie = `authjs.session-token=${me.token}`;
-    const log = await uploadLog(postRequest("/api/v1/uploads/log?filename=a.csv", sampleLog().csv, { "content-type": "text/csv", cookie }), undefined);
+    const log = await uploadLog(
+      postRequest("/api/v1/uploads/log?filename=a.csv", sampleLog().csv, { "content-type": "text/csv", cookie }),
+      undefined,
+    );
     expect(log.status).toBe(503);
     expect((await log.json()).error.message).toMatch(/File storage is not reachable right now/);
-    const photo = await uploadPhoto(postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", cookie }), undefined);
+    const photo = await uploadPhoto(
+      postRequest("/api/v1/uploads/photo", PNG_BYTES, { "content-type": "image/png", cookie }),
+      undefined,
+    );
     expect(photo.status).toBe(503);
   });
 
@@ -36,7 +42,10 @@ describe("uploads while storage is unreachable", () => {
     const me = await signedIn("contributor");
     requestState.token = me.token;
     const { packId } = await makePack();
-    const res = await submitResult(null, submission(packId, { key: `incoming/${me.id}/00000000-0000-4000-8000-000000000000.csv`, filename: "a.csv" }));
+    const res = await submitResult(
+      null,
+      submission(packId, { key: `incoming/${me.id}/00000000-0000-4000-8000-000000000000.csv`, filename: "a.csv" }),
+    );
     expect(res).toMatchObject({ ok: false, code: "unavailable" });
     expect(res.error).toMatch(/File storage is not reachable/);
     expect(await db.$count(results, eq(results.contributorId, me.id))).toBe(0);

@@ -19,7 +19,15 @@ beforeAll(async () => {
   if (!maker) throw new Error("no maker");
   const [pack] = await db
     .insert(packs)
-    .values({ slug: "watchmaker-w-1300", makerId: maker.id, model: "Heron 1300 4S 75C", cellsInSeries: 4, ratedCapacityMah: 1300, labelledContinuousC: 75, connector: "XT60" })
+    .values({
+      slug: "watchmaker-w-1300",
+      makerId: maker.id,
+      model: "Heron 1300 4S 75C",
+      cellsInSeries: 4,
+      ratedCapacityMah: 1300,
+      labelledContinuousC: 75,
+      connector: "XT60",
+    })
     .returning();
   if (!pack) throw new Error("no pack");
   packId = pack.id;
@@ -68,7 +76,12 @@ describe("watch a pack", () => {
 describe("GET /api/v1/me?watching= (the pack page's Watch button asks here)", () => {
   const meRoute = () => import("@/app/api/v1/me/route");
   const get = async (query: string, token: string | null) =>
-    (await meRoute()).GET(new Request(`http://localhost:3011/api/v1/me${query}`, { headers: token ? { cookie: `authjs.session-token=${token}` } : {} }), {});
+    (await meRoute()).GET(
+      new Request(`http://localhost:3011/api/v1/me${query}`, {
+        headers: token ? { cookie: `authjs.session-token=${token}` } : {},
+      }),
+      {},
+    );
 
   it("says whether the signed-in person watches the pack, follows a watch, and is private", async () => {
     const me = await signedIn("contributor", "asker");

@@ -4,7 +4,7 @@ import { asc, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { results, reviewEvents, type ReviewStatus } from "@/db/schema";
-import { settleAfterResponse } from "@/lib/after-response";
+import { settleAfterResponse } from "@/server/after-response";
 import { sampleLog } from "../helpers/logs";
 import { requestState } from "../helpers/next-mocks";
 import { keysUnder } from "../helpers/storage";
@@ -31,13 +31,17 @@ async function resultOf(role: Role = "contributor", status: ReviewStatus = "pend
   const id = res.data.resultId;
   if (status !== "pending") {
     await db.update(results).set({ status }).where(eq(results.id, id));
-    await db.insert(reviewEvents).values({ resultId: id, actorId: null, fromStatus: "pending", toStatus: status, reason: "test" });
+    await db
+      .insert(reviewEvents)
+      .values({ resultId: id, actorId: null, fromStatus: "pending", toStatus: status, reason: "test" });
   }
   return { me, id, packId };
 }
 
-const eventsOf = (id: number) => db.select().from(reviewEvents).where(eq(reviewEvents.resultId, id)).orderBy(asc(reviewEvents.id));
-const statusOf = async (id: number) => (await db.select({ s: results.status }).from(results).where(eq(results.id, id)))[0]?.s;
+const eventsOf = (id: number) =>
+  db.select().from(reviewEvents).where(eq(reviewEvents.resultId, id)).orderBy(asc(reviewEvents.id));
+const statusOf = async (id: number) =>
+  (await db.select({ s: results.status }).from(results).where(eq(results.id, id)))[0]?.s;
 
 describe("withdrawResult", () => {
   beforeEach(() => {
@@ -51,22 +55,31 @@ describe("withdrawResult", () => {
     expect(await statusOf(id)).toBe("pending");
   });
 
-  it.each(["contributor", "moderator", "admin"] as const)("lets a %s withdraw their own pending result, as a review event", async (role) => {
-    const { me, id } = await resultOf(role);
-    expect(await withdrawResult(null, { resultId: String(id) })).toMatchObject({ ok: true });
-    expect(await statusOf(id)).toBe("withdrawn");
-    const events = await eventsOf(id);
-    expect(events.map((e) => [e.fromStatus, e.toStatus, e.actorId])).toEqual([[null, "pending", me.id], ["pending", "withdrawn", me.id]]);
-  });
+  it.each(["contributor", "moderator", "admin"] as const)(
+    "lets a %s withdraw their own pending result, as a review event",
+    async (role) => {
+      const { me, id } = await resultOf(role);
+      expect(await withdrawResult(null, { resultId: String(id) })).toMatchObject({ ok: true });
+      expect(await statusOf(id)).toBe("withdrawn");
+      const events = await eventsOf(id);
+      expect(events.map((e) => [e.fromStatus, e.toStatus, e.actorId])).toEqual([
+        [null, "pending", me.id],
+        ["pending", "withdrawn", me.id],
+      ]);
+    },
+  );
 
-  it.each(["contributor", "moderator", "admin"] as const)("refuses a %s withdrawing someone else's result (403), and a result that does not exist (404)", async (role) => {
-    const { id } = await resultOf();
-    const other = await signedIn(role);
-    requestState.token = other.token;
-    expect(await withdrawResult(null, { resultId: String(id) })).toMatchObject({ ok: false, code: "forbidden" });
-    expect(await withdrawResult(null, { resultId: "2000000000" })).toMatchObject({ ok: false, code: "not_found" });
-    expect(await statusOf(id)).toBe("pending");
-  });
+  it.each(["contributor", "moderator", "admin"] as const)(
+    "refuses a %s withdrawing someone else's result (403), and a result that does not exist (404)",
+    async (role) => {
+      const { id } = await resultOf();
+      const other = await signedIn(role);
+      requestState.token = other.token;
+      expect(await withdrawResult(null, { resultId: String(id) })).toMatchObject({ ok: false, code: "forbidden" });
+      expect(await withdrawResult(null, { resultId: "2000000000" })).toMatchObject({ ok: false, code: "not_found" });
+      expect(await statusOf(id)).toBe("pending");
+    },
+  );
 
   it("refuses a result that is no longer waiting (approved) with a conflict", async () => {
     const { id } = await resultOf("contributor", "approved");
@@ -78,8 +91,13 @@ describe("withdrawResult", () => {
 
 describe("resubmitResult", () => {
   const answer = (id: number, over: Record<string, unknown> = {}) => ({
-    resultId: String(id), method: { ...validMethod, cutoffVPerCell: "3.0", notes: "Probe taped to the middle of the wide face." },
-    log: null, photoKeys: [], note: "Probe position added; cut-off corrected.", declaration: true, ...over,
+    resultId: String(id),
+    method: { ...validMethod, cutoffVPerCell: "3.0", notes: "Probe taped to the middle of the wide face." },
+    log: null,
+    photoKeys: [],
+    note: "Probe position added; cut-off corrected.",
+    declaration: true,
+    ...over,
   });
 
   beforeEach(() => {
@@ -98,7 +116,11 @@ describe("resubmitResult", () => {
     expect(after?.groupKey).not.toBe(before?.groupKey); // the cut-off band moved
     expect(after?.figures.timeToCutoffS).not.toBe(before?.figures.timeToCutoffS);
     const events = await eventsOf(id);
-    expect(events.map((e) => [e.fromStatus, e.toStatus])).toEqual([[null, "pending"], ["pending", "changes_requested"], ["changes_requested", "pending"]]);
+    expect(events.map((e) => [e.fromStatus, e.toStatus])).toEqual([
+      [null, "pending"],
+      ["pending", "changes_requested"],
+      ["changes_requested", "pending"],
+    ]);
     expect(events[2]).toMatchObject({ actorId: me.id, note: "Probe position added; cut-off corrected." });
   });
 
@@ -106,7 +128,10 @@ describe("resubmitResult", () => {
     const { me, id } = await resultOf("moderator", "changes_requested");
     const log = await uploadLog(me.token, sampleLog({ seed: 77 }).csv, "corrected.csv");
     const photo = await uploadPhoto(me.token);
-    expect((await resubmitResult(null, answer(id, { log: { key: log.key, filename: log.filename }, photoKeys: [photo] }))).ok).toBe(true);
+    expect(
+      (await resubmitResult(null, answer(id, { log: { key: log.key, filename: log.filename }, photoKeys: [photo] })))
+        .ok,
+    ).toBe(true);
     const row = (await db.select().from(results).where(eq(results.id, id)))[0];
     expect(row?.logSha256).toBe(log.sha256);
     expect(row?.logFilename).toBe("corrected.csv");
@@ -117,7 +142,9 @@ describe("resubmitResult", () => {
 
   it("refuses someone else's result (403), a pending one (409), no session (401), and an answer without a note (422)", async () => {
     const { id } = await resultOf("contributor", "changes_requested");
-    expect((await resubmitResult(null, answer(id, { note: "" }))).fieldErrors?.note?.[0]).toMatch(/Enter the answer to the moderator/);
+    expect((await resubmitResult(null, answer(id, { note: "" }))).fieldErrors?.note?.[0]).toMatch(
+      /Enter the answer to the moderator/,
+    );
     const other = await signedIn("admin");
     requestState.token = other.token;
     expect(await resubmitResult(null, answer(id))).toMatchObject({ ok: false, code: "forbidden" });
@@ -143,6 +170,8 @@ describe("previewStoredLog", () => {
     expect(res.data.checks.map((c) => c.code)).toContain("cells-mismatch");
     const other = await signedIn("contributor");
     requestState.token = other.token;
-    expect((await previewStoredLog(null, { log: values.log, pack: values.pack, method: values.method })).fieldErrors?.log).toBeDefined();
+    expect(
+      (await previewStoredLog(null, { log: values.log, pack: values.pack, method: values.method })).fieldErrors?.log,
+    ).toBeDefined();
   });
 });

@@ -22,12 +22,38 @@ describe("proxy redirects", () => {
   });
 
   it("covers exactly the signed-in areas", () => {
-    expect(config.matcher).toEqual(expect.arrayContaining(["/account", "/account/:path*", "/submit", "/submit/:path*", "/review", "/review/:path*", "/admin", "/admin/:path*"]));
-    expect(config.matcher.some((m) => m.startsWith("/packs") || m === "/" || m.startsWith("/sign-in") || m === "/charts" || m.startsWith("/charts/new"))).toBe(false);
+    expect(config.matcher).toEqual(
+      expect.arrayContaining([
+        "/account",
+        "/account/:path*",
+        "/submit",
+        "/submit/:path*",
+        "/review",
+        "/review/:path*",
+        "/admin",
+        "/admin/:path*",
+      ]),
+    );
+    expect(
+      config.matcher.some(
+        (m) =>
+          m.startsWith("/packs") ||
+          m === "/" ||
+          m.startsWith("/sign-in") ||
+          m === "/charts" ||
+          m.startsWith("/charts/new"),
+      ),
+    ).toBe(false);
   });
 
   it("sends a chart link whose state is not in its canonical short segments there with a 308, and leaves canonical ones alone", () => {
-    const encoded = encodeChartState({ v: 1, kind: "label-check", group: "dc-step_a15-25_co3.3_r5-10_new", title: "T".repeat(100), note: "n".repeat(200) });
+    const encoded = encodeChartState({
+      v: 1,
+      kind: "label-check",
+      group: "dc-step_a15-25_co3.3_r5-10_new",
+      title: "T".repeat(100),
+      note: "n".repeat(200),
+    });
     const canonical = statePath(encoded);
     for (const base of ["/charts/view", "/embed/chart"]) {
       const res = proxy(new NextRequest(`http://localhost:3011${base}/${encoded}`));
@@ -38,8 +64,9 @@ describe("proxy redirects", () => {
       expect(ok.headers.get("x-middleware-next")).toBe("1");
     }
     // Not a state (the page answers 404 itself), and no cookie check on public chart pages.
-    expect(proxy(new NextRequest("http://localhost:3011/charts/view/not%20a%20state")).headers.get("location")).toBeNull();
+    expect(
+      proxy(new NextRequest("http://localhost:3011/charts/view/not%20a%20state")).headers.get("location"),
+    ).toBeNull();
     expect(config.matcher).toEqual(expect.arrayContaining(["/charts/view/:path+", "/embed/chart/:path+"]));
   });
 });
-

@@ -5,7 +5,7 @@ import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { listResultsByContributor } from "@/db/queries/results-by-contributor";
 import { listWatchesForUser } from "@/db/queries/watches";
 import { resistanceMethodLabels } from "@/lib/method-labels";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { signOut } from "./actions/sign-out";
 import { MyResults } from "./_components/my-results";
 import { ProfileForm } from "./_components/profile-form-client";
@@ -79,7 +79,9 @@ export default async function AccountPage() {
 
       <section aria-labelledby="watches-heading" className="space-y-3">
         <h2 id="watches-heading">Packs you watch</h2>
-        <WatchList watches={watched.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))} />
+        <WatchList
+          watches={watched.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))}
+        />
       </section>
     </div>
   );

@@ -1,5 +1,5 @@
 import { redirect } from "next/navigation";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 
 export const dynamic = "force-dynamic";
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { z } from "zod";
 import Link from "next/link";
 import { Alert } from "@/components/ui/form";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/server/session";
 import { publicName } from "@/lib/user-name";
 import { callbackPath } from "@/lib/validations/sign-in";
 import { SignInForm } from "./sign-in-client";
@@ -21,9 +21,13 @@ const errorText: Record<string, string> = {
   AccessDenied: "Signing in with that address is not allowed.",
 };
 
-export default async function SignInPage(props: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function SignInPage(props: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = params.parse(await props.searchParams);
-  const error = sp.error ? (errorText[sp.error] ?? "Something went wrong while signing in. Please ask for a new link.") : null;
+  const error = sp.error
+    ? (errorText[sp.error] ?? "Something went wrong while signing in. Please ask for a new link.")
+    : null;
   const current = await getCurrentUser();
   return (
     <div className="space-y-6">
@@ -37,16 +41,16 @@ export default async function SignInPage(props: { searchParams: Promise<Record<s
       {error ? <Alert tone="error">{error}</Alert> : null}
       {current ? (
         <Alert tone="info">
-          You are already signed in as {publicName(current)}. <Link href={sp.callbackUrl ?? "/account"}>Continue</Link>, or ask
-          for a link for another address below.
+          You are already signed in as {publicName(current)}. <Link href={sp.callbackUrl ?? "/account"}>Continue</Link>,
+          or ask for a link for another address below.
         </Alert>
       ) : null}
       <div className="card">
         <SignInForm callbackUrl={sp.callbackUrl ?? "/account"} />
       </div>
       <p className="muted text-sm">
-        Reading, comparing and downloading need no account. You sign in to submit results, keep bench profiles and
-        watch packs.
+        Reading, comparing and downloading need no account. You sign in to submit results, keep bench profiles and watch
+        packs.
       </p>
     </div>
   );

@@ -12,7 +12,12 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   return (
     <form action={formAction} noValidate className="space-y-4">
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
-      <Field id="email" label="E-mail address" error={fieldError} hint="We only use it to send you sign-in links and notices you ask for.">
+      <Field
+        id="email"
+        label="E-mail address"
+        error={fieldError}
+        hint="We only use it to send you sign-in links and notices you ask for."
+      >
         <input
           id="email"
           name="email"

@@ -1,11 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { AnalyseClient } from "./_components/analyse-client";
 
 export const metadata: Metadata = {
   title: "Analyse a log",
-  description: "Drop a discharge log (CSV) to see the figures Sagline computes from it — capacity, energy, DC resistance, hold voltage, sag-limited C — without submitting anything.",
+  description:
+    "Drop a discharge log (CSV) to see the figures Sagline computes from it — capacity, energy, DC resistance, hold voltage, sag-limited C — without submitting anything.",
 };
 
 export default function AnalysePage() {
@@ -15,16 +16,16 @@ export default function AnalysePage() {
       <header className="max-w-3xl space-y-2">
         <h1>Analyse a log</h1>
         <p className="muted">
-          Drop a discharge log to see the figures Sagline would compute from it, with the curves and any warnings. Nothing is
-          stored and you do not need to sign in. The same check is available as <code className="num text-sm">POST /api/v1/analyse</code>{" "}
-          (see <Link href="/data#api">the API</Link>).
+          Drop a discharge log to see the figures Sagline would compute from it, with the curves and any warnings.
+          Nothing is stored and you do not need to sign in. The same check is available as{" "}
+          <code className="num text-sm">POST /api/v1/analyse</code> (see <Link href="/data#api">the API</Link>).
         </p>
       </header>
       <AnalyseClient maxMb={maxMb} />
       <aside className="muted max-w-3xl text-sm">
-        Discharging packs at high current makes them hot. Test in a fire-safe place, stop at the stop temperature, never leave a pack
-        under load or on charge unattended, retire swollen packs, and follow the maker’s instructions and local rules.{" "}
-        <Link href="/methods#safety">Safety notes</Link>.
+        Discharging packs at high current makes them hot. Test in a fire-safe place, stop at the stop temperature, never
+        leave a pack under load or on charge unattended, retire swollen packs, and follow the maker’s instructions and
+        local rules. <Link href="/methods#safety">Safety notes</Link>.
       </aside>
     </div>
   );

@@ -5,7 +5,10 @@ import { chartLinks } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, chartState } from "@/lib/open-data/chart-state";
 
 export const revalidate = 600;
-export const metadata: Metadata = { title: "Charts", description: "Published charts from Sagline open data, ready to embed or download." };
+export const metadata: Metadata = {
+  title: "Charts",
+  description: "Published charts from Sagline open data, ready to embed or download.",
+};
 
 export default async function ChartsPage() {
   const saved = await listSavedCharts();
@@ -18,9 +21,17 @@ export default async function ChartsPage() {
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="space-y-1">
           <h1>Charts</h1>
-          <p className="muted max-w-2xl">Charts built from one like-for-like group at a time. Each can be embedded, downloaded as PNG or SVG, and cited under CC BY 4.0.</p>
+          <p className="muted max-w-2xl">
+            Charts built from one like-for-like group at a time. Each can be embedded, downloaded as PNG or SVG, and
+            cited under CC BY 4.0.
+          </p>
         </div>
-        <Link href="/charts/new" className="rounded bg-cell-600 px-4 py-2 font-medium text-white no-underline hover:bg-cell-700 hover:no-underline">Build a chart</Link>
+        <Link
+          href="/charts/new"
+          className="rounded bg-cell-600 px-4 py-2 font-medium text-white no-underline hover:bg-cell-700 hover:no-underline"
+        >
+          Build a chart
+        </Link>
       </div>
       {charts.length === 0 ? <p className="muted">No published charts yet.</p> : null}
       <ul className="grid gap-4 md:grid-cols-2" data-testid="chart-list">
@@ -28,9 +39,18 @@ export default async function ChartsPage() {
           <li key={c.id} className="card space-y-2">
             <Link href={c.links.permalink} className="block">
               {/* eslint-disable-next-line @next/next/no-img-element -- server-drawn SVG */}
-              <img src={c.links.svg} alt={`Chart: ${c.title}`} width={800} height={500} loading="lazy" className="h-auto w-full rounded border border-ink/10" />
+              <img
+                src={c.links.svg}
+                alt={`Chart: ${c.title}`}
+                width={800}
+                height={500}
+                loading="lazy"
+                className="h-auto w-full rounded border border-ink/10"
+              />
             </Link>
-            <h2 className="text-base"><Link href={c.links.permalink}>{c.title}</Link></h2>
+            <h2 className="text-base">
+              <Link href={c.links.permalink}>{c.title}</Link>
+            </h2>
             <p className="muted text-sm">{CHART_KIND_LABELS[c.kind]}</p>
           </li>
         ))}

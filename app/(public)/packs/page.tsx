@@ -3,18 +3,29 @@ import Link from "next/link";
 import { Suspense } from "react";
 import { queryPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
-import { cachedGroups, cachedPackRows } from "@/lib/public-data";
+import { cachedGroups, cachedPackRows } from "@/server/public-data";
 import { PacksClient, PacksView } from "./_components/packs-client";
 import type { ApiPackPage, FilterOptions } from "./_components/types";
 
-export const metadata: Metadata = { title: "Packs", description: "Every pack in the catalogue: filter by cells, capacity, labelled C, weight, connector, maker and like-for-like group." };
+export const metadata: Metadata = {
+  title: "Packs",
+  description:
+    "Every pack in the catalogue: filter by cells, capacity, labelled C, weight, connector, maker and like-for-like group.",
+};
 // Static: the first page (no filters) is rendered here; filtered pages come from /api/v1/packs.
 export const revalidate = 3600;
 
 export default async function PacksPage() {
   const [rows, groups] = await Promise.all([cachedPackRows(null), cachedGroups()]);
   const first = queryPacks(rows, DEFAULT_PACK_PARAMS);
-  const initial: ApiPackPage = { data: first.rows.map(({ id: _id, ...r }) => r), page: first.page, pageSize: first.size, pageCount: first.pageCount, total: first.total, group: null };
+  const initial: ApiPackPage = {
+    data: first.rows.map(({ id: _id, ...r }) => r),
+    page: first.page,
+    pageSize: first.size,
+    pageCount: first.pageCount,
+    total: first.total,
+    group: null,
+  };
   const makers = new Map(rows.map((r) => [r.makerSlug, r.makerName]));
   const options: FilterOptions = {
     makers: [...makers.entries()].map(([slug, name]) => ({ slug, name })).sort((a, b) => a.name.localeCompare(b.name)),
@@ -26,8 +37,8 @@ export default async function PacksPage() {
     <div className="space-y-4">
       <h1>Packs</h1>
       <p className="muted max-w-3xl text-sm">
-        Measured columns appear when you choose a like-for-like group: figures are only compared between results taken the same way
-        (<Link href="/methods#like-for-like">why</Link>). The same data is at <code>/api/v1/packs</code>.
+        Measured columns appear when you choose a like-for-like group: figures are only compared between results taken
+        the same way (<Link href="/methods#like-for-like">why</Link>). The same data is at <code>/api/v1/packs</code>.
       </p>
       {/* Until the client reads the URL the rows are the unfiltered first page, so say they are loading. */}
       <Suspense fallback={<PacksView params={DEFAULT_PACK_PARAMS} page={initial} options={options} loading />}>

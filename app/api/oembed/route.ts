@@ -1,17 +1,26 @@
 // GET /api/oembed — oEmbed for Sagline charts: JSON only (501 otherwise), 404 for URLs that are not charts.
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiOptions, corsHeaders, parseQuery } from "@/lib/open-data/api";
+import { apiGet, apiOptions, corsHeaders, parseQuery } from "@/server/api";
 import { oembedQuery, oembedResponse } from "@/lib/open-data/oembed";
 
 export const GET = apiGet(async (req) => {
   const q = parseQuery(req, oembedQuery);
   if (q.format !== undefined && q.format !== "json") {
-    return new Response("Only the json format is available.", { status: 501, headers: { ...corsHeaders, "Content-Type": "text/plain; charset=utf-8" } });
+    return new Response("Only the json format is available.", {
+      status: 501,
+      headers: { ...corsHeaders, "Content-Type": "text/plain; charset=utf-8" },
+    });
   }
   const body = oembedResponse(q.url, env().APP_URL, q.maxwidth, q.maxheight);
   if (!body) throw new AppError("not_found", "That URL is not a Sagline chart.");
   const text = JSON.stringify(body);
-  return new Response(text, { headers: { ...corsHeaders, "Content-Type": "application/json; charset=utf-8", "Cache-Control": "public, max-age=3600" } });
+  return new Response(text, {
+    headers: {
+      ...corsHeaders,
+      "Content-Type": "application/json; charset=utf-8",
+      "Cache-Control": "public, max-age=3600",
+    },
+  });
 });
 export const OPTIONS = apiOptions;

@@ -4,9 +4,23 @@ import { desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { savedCharts } from "@/db/schema";
 
-export type SavedChartRow = { id: string; kind: "label-check" | "curves" | "maker-ranking"; title: string; note: string | null; state: Record<string, unknown>; createdAt: Date };
+export type SavedChartRow = {
+  id: string;
+  kind: "label-check" | "curves" | "maker-ranking";
+  title: string;
+  note: string | null;
+  state: Record<string, unknown>;
+  createdAt: Date;
+};
 
-const columns = { id: savedCharts.id, kind: savedCharts.kind, title: savedCharts.title, note: savedCharts.note, state: savedCharts.state, createdAt: savedCharts.createdAt };
+const columns = {
+  id: savedCharts.id,
+  kind: savedCharts.kind,
+  title: savedCharts.title,
+  note: savedCharts.note,
+  state: savedCharts.state,
+  createdAt: savedCharts.createdAt,
+};
 
 export async function listSavedCharts(): Promise<SavedChartRow[]> {
   return db.select(columns).from(savedCharts).orderBy(desc(savedCharts.createdAt), desc(savedCharts.id));

@@ -3,24 +3,24 @@ import "server-only";
 import { and, asc, count, eq, gte, ilike, lte, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
+import type { MakerRow, PackRecord } from "@/lib/open-data/records";
 import type { PackFilters } from "@/lib/validations/open-data";
+import { packLabelColumns } from "@/db/queries/packs";
 
 export type Page = { page: number; size: number };
 export type Paged<T> = { rows: T[]; total: number };
 
-export type MakerRow = { id: number; slug: string; name: string; packCount: number };
-export type PackRow = {
-  id: number; slug: string; makerId: number; makerSlug: string; makerName: string; model: string;
-  cellsInSeries: number; ratedCapacityMah: number; labelledContinuousC: number; labelledBurstC: number | null;
-  weightG: number | null; connector: string; approvedResultCount: number;
-};
-
 const approvedCount = sql<number>`(select count(*)::int from ${results} where ${results.packId} = ${packs.id} and ${results.status} = 'approved')`;
 
 const packColumns = {
-  id: packs.id, slug: packs.slug, makerId: packs.makerId, makerSlug: makers.slug, makerName: makers.name, model: packs.model,
-  cellsInSeries: packs.cellsInSeries, ratedCapacityMah: packs.ratedCapacityMah, labelledContinuousC: packs.labelledContinuousC,
-  labelledBurstC: packs.labelledBurstC, weightG: packs.weightG, connector: packs.connector, approvedResultCount: approvedCount,
+  id: packs.id,
+  slug: packs.slug,
+  makerId: packs.makerId,
+  makerSlug: makers.slug,
+  makerName: makers.name,
+  model: packs.model,
+  ...packLabelColumns,
+  approvedResultCount: approvedCount,
 };
 
 function escapeLike(s: string): string {
@@ -50,11 +50,16 @@ export async function listMakersPage({ page, size }: Page): Promise<Paged<MakerR
   const where = eq(makers.status, "active");
   const rows = await db
     .select({
-      id: makers.id, slug: makers.slug, name: makers.name,
+      id: makers.id,
+      slug: makers.slug,
+      name: makers.name,
       packCount: sql<number>`(select count(*)::int from ${packs} where ${packs.makerId} = ${makers.id} and ${packs.status} = 'active')`,
     })
-    .from(makers).where(where).orderBy(asc(makers.name), asc(makers.id))
-    .limit(size).offset((page - 1) * size);
+    .from(makers)
+    .where(where)
+    .orderBy(asc(makers.name), asc(makers.id))
+    .limit(size)
+    .offset((page - 1) * size);
   const [total] = await db.select({ n: count() }).from(makers).where(where);
   return { rows, total: total?.n ?? 0 };
 }
@@ -67,27 +72,42 @@ export async function getMakerBySlug(slug: string): Promise<MakerRow | null> {
 async function listMakersPageWhere(slug: string): Promise<Paged<MakerRow>> {
   const rows = await db
     .select({
-      id: makers.id, slug: makers.slug, name: makers.name,
+      id: makers.id,
+      slug: makers.slug,
+      name: makers.name,
       packCount: sql<number>`(select count(*)::int from ${packs} where ${packs.makerId} = ${makers.id} and ${packs.status} = 'active')`,
     })
-    .from(makers).where(and(eq(makers.status, "active"), eq(makers.slug, slug))).limit(1);
+    .from(makers)
+    .where(and(eq(makers.status, "active"), eq(makers.slug, slug)))
+    .limit(1);
   return { rows, total: rows.length };
 }
 
-export async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRow>> {
+async function listPacksPage(f: PackFilters, { page, size }: Page): Promise<Paged<PackRecord>> {
   const where = and(...packConditions(f));
   const rows = await db
-    .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where)
+    .select(packColumns)
+    .from(packs)
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(where)
     .orderBy(asc(makers.name), asc(packs.model), asc(packs.id))
-    .limit(size).offset((page - 1) * size);
-  const [total] = await db.select({ n: count() }).from(packs).innerJoin(makers, eq(makers.id, packs.makerId)).where(where);
+    .limit(size)
+    .offset((page - 1) * size);
+  const [total] = await db
+    .select({ n: count() })
+    .from(packs)
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(where);
   return { rows, total: total?.n ?? 0 };
 }
 
-export async function getApiPackBySlug(slug: string): Promise<PackRow | null> {
+export async function getApiPackBySlug(slug: string): Promise<PackRecord | null> {
   const rows = await db
-    .select(packColumns).from(packs).innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(packs.slug, slug), eq(packs.status, "active"))).limit(1);
+    .select(packColumns)
+    .from(packs)
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(and(eq(packs.slug, slug), eq(packs.status, "active")))
+    .limit(1);
   return rows[0] ?? null;
 }
 
@@ -97,6 +117,6 @@ export async function listAllMakers(): Promise<MakerRow[]> {
 }
 
 /** Every active pack matching the filters (downloads). */
-export async function listAllPacks(f: PackFilters = {}): Promise<PackRow[]> {
+export async function listAllPacks(f: PackFilters = {}): Promise<PackRecord[]> {
   return (await listPacksPage(f, { page: 1, size: 1_000_000 })).rows;
 }

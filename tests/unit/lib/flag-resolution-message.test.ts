@@ -7,12 +7,18 @@ const base = { flagId: 7, resultId: 42, alsoClosed: 0 } as const;
 
 describe("flagResolutionMessage", () => {
   it("kept and the last open flag: published again", () => {
-    expect(flagResolutionMessage({ ...base, resolution: "kept", status: "approved" }, "Ashcombe Cells Ridge 1300"))
-      .toBe("Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: result kept. It is published again and no longer shows as disputed.");
+    expect(
+      flagResolutionMessage({ ...base, resolution: "kept", status: "approved" }, "Ashcombe Cells Ridge 1300"),
+    ).toBe(
+      "Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: result kept. It is published again and no longer shows as disputed.",
+    );
   });
 
   it("corrected while other flags stay open: still disputed", () => {
-    const text = flagResolutionMessage({ ...base, resolution: "corrected", status: "disputed" }, "Ashcombe Cells Ridge 1300");
+    const text = flagResolutionMessage(
+      { ...base, resolution: "corrected", status: "disputed" },
+      "Ashcombe Cells Ridge 1300",
+    );
     expect(text).toMatch(/^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: result corrected\./);
     expect(text).toContain("still shows as disputed");
   });
@@ -21,7 +27,11 @@ describe("flagResolutionMessage", () => {
     expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn" })).toBe(
       "Flag #7 on result #42 resolved: result withdrawn. It is withdrawn; it and its history stay in the audit log.",
     );
-    expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn", alsoClosed: 1 })).toMatch(/ 1 other open flag on it was closed with this one\.$/);
-    expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn", alsoClosed: 3 })).toMatch(/ 3 other open flags on it were closed with this one\.$/);
+    expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn", alsoClosed: 1 })).toMatch(
+      / 1 other open flag on it was closed with this one\.$/,
+    );
+    expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn", alsoClosed: 3 })).toMatch(
+      / 3 other open flags on it were closed with this one\.$/,
+    );
   });
 });

@@ -10,8 +10,16 @@ describe("sign-in input", () => {
   });
 
   it("only accepts paths on this site as the place to return to", () => {
-    for (const ok of ["/account", "/account/bench-profiles?x=1", "/admin/users"]) expect(callbackPath.parse(ok)).toBe(ok);
-    for (const bad of ["//evil.example", "/\\evil.example", "https://evil.example/", "javascript:alert(1)", "account", "/a b"]) {
+    for (const ok of ["/account", "/account/bench-profiles?x=1", "/admin/users"])
+      expect(callbackPath.parse(ok)).toBe(ok);
+    for (const bad of [
+      "//evil.example",
+      "/\\evil.example",
+      "https://evil.example/",
+      "javascript:alert(1)",
+      "account",
+      "/a b",
+    ]) {
       expect(callbackPath.parse(bad)).toBe("/account");
     }
     expect(signInSchema.parse({ email: "a@b.example" }).callbackUrl).toBe("/account");
@@ -22,7 +30,13 @@ describe("bench profile input", () => {
   const filled = { ...emptyBenchProfile, name: "Bench", loadEquipment: "Load", resistanceMethod: "ac-1khz" };
 
   it("turns empty optional fields into nulls", () => {
-    expect(benchProfileSchema.parse(filled)).toMatchObject({ logger: null, calibratedOn: null, defaultAmbientC: null, defaultLoadMode: null, defaultSampleRateHz: null });
+    expect(benchProfileSchema.parse(filled)).toMatchObject({
+      logger: null,
+      calibratedOn: null,
+      defaultAmbientC: null,
+      defaultLoadMode: null,
+      defaultSampleRateHz: null,
+    });
   });
 
   it("accepts the edges of each range and refuses just outside them", () => {

@@ -19,10 +19,23 @@ describe("chart image size parameters", () => {
   });
 
   it.each([
-    ["width=abc", "width"], ["width=800.5", "width"], ["width=0800", "width"], ["width=8e2", "width"], ["width=-400", "width"],
-    ["width=319", "width"], ["width=1601", "width"], ["width=", "width"], ["height=299", "height"], ["width=320&height=481", "height"],
-    ["width=1600&height=600", "height"], ["height=tall", "height"], ["scale=4", "scale"], ["scale=1.5", "scale"], ["scale=0", "scale"],
-    ["width=1600&scale=3", "scale"], ["width=1200&height=1200&scale=3", "scale"],
+    ["width=abc", "width"],
+    ["width=800.5", "width"],
+    ["width=0800", "width"],
+    ["width=8e2", "width"],
+    ["width=-400", "width"],
+    ["width=319", "width"],
+    ["width=1601", "width"],
+    ["width=", "width"],
+    ["height=299", "height"],
+    ["width=320&height=481", "height"],
+    ["width=1600&height=600", "height"],
+    ["height=tall", "height"],
+    ["scale=4", "scale"],
+    ["scale=1.5", "scale"],
+    ["scale=0", "scale"],
+    ["width=1600&scale=3", "scale"],
+    ["width=1200&height=1200&scale=3", "scale"],
   ])("refuses %s with a message on %s", (query, field) => {
     const out = parse(query);
     expect(out.ok).toBe(false);
@@ -46,8 +59,15 @@ describe("chart image size parameters", () => {
     expect(imageSizeQuery("png", { width: 400, scale: 3 })).toBe("?width=400&scale=3");
     expect(imageSizeQuery("svg", { width: 400, scale: 3 })).toBe("?width=400");
     expect(imageSizeQuery("png", { width: 1000, height: 625 })).toBe("?width=1000");
-    for (const size of [{ width: 400, scale: 1 }, { width: 1000, height: 700, scale: 3 }, { width: 1600, height: 900, scale: 1 }]) {
-      expect(parse(imageSizeQuery("png", size).slice(1))).toEqual({ ok: true, size: { height: defaultHeight(size.width), ...size } });
+    for (const size of [
+      { width: 400, scale: 1 },
+      { width: 1000, height: 700, scale: 3 },
+      { width: 1600, height: 900, scale: 1 },
+    ]) {
+      expect(parse(imageSizeQuery("png", size).slice(1))).toEqual({
+        ok: true,
+        size: { height: defaultHeight(size.width), ...size },
+      });
     }
   });
 });

@@ -1,7 +1,21 @@
 import { describe, expect, it } from "vitest";
-import { STATE_SEGMENT, canonicalStatePath, decodeChartState, encodeChartState, stateFromSegments, statePath, type ChartState } from "@/lib/open-data/chart-state";
+import {
+  STATE_SEGMENT,
+  canonicalStatePath,
+  decodeChartState,
+  encodeChartState,
+  stateFromSegments,
+  statePath,
+  type ChartState,
+} from "@/lib/open-data/chart-state";
 
-const state: ChartState = { v: 1, kind: "label-check", group: "dc-step_a15-25_co3.3_r5-10_new", title: "Ränge – “quoted” & <tagged>", note: "A note" };
+const state: ChartState = {
+  v: 1,
+  kind: "label-check",
+  group: "dc-step_a15-25_co3.3_r5-10_new",
+  title: "Ränge – “quoted” & <tagged>",
+  note: "A note",
+};
 
 describe("chart state in the URL", () => {
   it("round-trips through base64url, including non-ASCII text", () => {
@@ -17,12 +31,20 @@ describe("chart state in the URL", () => {
     expect(decodeChartState("not base64!")).toBeNull();
     expect(decodeChartState(Buffer.from("{}").toString("base64url"))).toBeNull();
     expect(decodeChartState(Buffer.from(JSON.stringify({ ...state, v: 2 })).toString("base64url"))).toBeNull();
-    expect(decodeChartState(Buffer.from(JSON.stringify({ ...state, group: "../etc" })).toString("base64url"))).toBeNull();
+    expect(
+      decodeChartState(Buffer.from(JSON.stringify({ ...state, group: "../etc" })).toString("base64url")),
+    ).toBeNull();
   });
 });
 
 describe("statePath: the state as short path segments", () => {
-  const long: ChartState = { v: 1, kind: "label-check", group: "dc-step_a15-25_co3.3_r5-10_new", title: "T".repeat(120), note: "A long note, ".repeat(30).trim().slice(0, 400) };
+  const long: ChartState = {
+    v: 1,
+    kind: "label-check",
+    group: "dc-step_a15-25_co3.3_r5-10_new",
+    title: "T".repeat(120),
+    note: "A long note, ".repeat(30).trim().slice(0, 400),
+  };
 
   it("splits a long state into segments of at most STATE_SEGMENT characters that join back to it", () => {
     const encoded = encodeChartState(long);

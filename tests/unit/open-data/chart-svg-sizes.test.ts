@@ -5,48 +5,99 @@ import { describe, expect, it } from "vitest";
 import type { ChartData } from "@/lib/open-data/chart-data";
 import type { ChartSize } from "@/lib/open-data/chart-size";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
-import { chartFontFiles } from "@/lib/open-data/font";
+import { chartFontFiles } from "@/server/open-data/font";
 
-const labels = ["Ridgeway Pro 1300 4S 100C", "Tallow Racing 1500 6S", "Cinder 850 3S", "Northbank Sport 2200 4S 75C", "Quillon Max 1800 6S", "Fenwick 1000 4S", "Harrow Lite 650 2S", "Osprey Flux 1550 5S"];
+const labels = [
+  "Ridgeway Pro 1300 4S 100C",
+  "Tallow Racing 1500 6S",
+  "Cinder 850 3S",
+  "Northbank Sport 2200 4S 75C",
+  "Quillon Max 1800 6S",
+  "Fenwick 1000 4S",
+  "Harrow Lite 650 2S",
+  "Osprey Flux 1550 5S",
+];
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
-  state: { v: 1, kind, group: "g", title: "How close makers come to their labels, in one like-for-like group of packs", note: "Medians of approved results; DC step resistance, 15–25 °C ambient, 3.3 V cut-off per cell, new packs." },
-  groupLabel: "DC step · 15–25 °C · 3.3 V/cell · 10–20C · new", counts: { packs: 9, results: 23 }, leftOut: ["1 pack without a sag-limited C left out."],
+  state: {
+    v: 1,
+    kind,
+    group: "g",
+    title: "How close makers come to their labels, in one like-for-like group of packs",
+    note: "Medians of approved results; DC step resistance, 15–25 °C ambient, 3.3 V cut-off per cell, new packs.",
+  },
+  groupLabel: "DC step · 15–25 °C · 3.3 V/cell · 10–20C · new",
+  counts: { packs: 9, results: 23 },
+  leftOut: ["1 pack without a sag-limited C left out."],
 });
 const charts: Record<string, ChartData> = {
-  "label-check": { ...base("label-check"), labelCheck: labels.map((label, i) => ({ label, labelledC: 30 + i * 15, measuredC: 20 + i * 6, n: 3 })) },
-  curves: { ...base("curves"), curves: labels.map((label, i) => ({ label, points: Array.from({ length: 30 }, (_, j) => ({ capacityPercent: j * 3.4, voltagePerCellV: 4.05 - i * 0.04 - j * 0.015 })) })) },
-  "maker-ranking": { ...base("maker-ranking"), ranking: labels.map((l, i) => ({ label: l.split(" ").slice(0, 2).join(" "), labelRatio: 0.35 + i * 0.11, packCount: 2 + i, resultCount: 3 + i })) },
+  "label-check": {
+    ...base("label-check"),
+    labelCheck: labels.map((label, i) => ({ label, labelledC: 30 + i * 15, measuredC: 20 + i * 6, n: 3 })),
+  },
+  curves: {
+    ...base("curves"),
+    curves: labels.map((label, i) => ({
+      label,
+      points: Array.from({ length: 30 }, (_, j) => ({
+        capacityPercent: j * 3.4,
+        voltagePerCellV: 4.05 - i * 0.04 - j * 0.015,
+      })),
+    })),
+  },
+  "maker-ranking": {
+    ...base("maker-ranking"),
+    ranking: labels.map((l, i) => ({
+      label: l.split(" ").slice(0, 2).join(" "),
+      labelRatio: 0.35 + i * 0.11,
+      packCount: 2 + i,
+      resultCount: 3 + i,
+    })),
+  },
   empty: { ...base("label-check"), counts: { packs: 0, results: 0 } },
 };
-const sizes: ChartSize[] = [{ width: 320, height: 400 }, { width: 320, height: 300 }, { width: 480, height: 400 }, { width: 800, height: 500 }, { width: 800, height: 320 }, { width: 1600, height: 1000 }];
+const sizes: ChartSize[] = [
+  { width: 320, height: 400 },
+  { width: 320, height: 300 },
+  { width: 480, height: 400 },
+  { width: 800, height: 500 },
+  { width: 800, height: 320 },
+  { width: 1600, height: 1000 },
+];
 
 type Measured = { text: string; fontSize: number; x0: number; y0: number; x1: number; y1: number };
 
-function measureTexts(svg: string, size: ChartSize): Measured[] {
+function measureTexts(svg: string): Measured[] {
   const open = /^<svg [^>]*>/.exec(svg)?.[0] ?? "";
-  return [...svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)].map((m) => {
-    const one = `${open}${m[0]}</svg>`;
-    const box = new Resvg(one, { font: { fontFiles: chartFontFiles(), loadSystemFonts: false, defaultFontFamily: "Inter" } }).getBBox();
-    if (!box) throw new Error(`nothing drawn for ${m[0]}`);
-    const fontSize = Number(/font-size="([\d.]+)"/.exec(m[1] ?? "")?.[1]);
-    return { text: m[2] ?? "", fontSize, x0: box.x, y0: box.y, x1: box.x + box.width, y1: box.y + box.height };
-  }).filter((t) => t.text.trim() !== "");
+  return [...svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)]
+    .map((m) => {
+      const one = `${open}${m[0]}</svg>`;
+      const box = new Resvg(one, {
+        font: { fontFiles: chartFontFiles(), loadSystemFonts: false, defaultFontFamily: "Inter" },
+      }).getBBox();
+      if (!box) throw new Error(`nothing drawn for ${m[0]}`);
+      const fontSize = Number(/font-size="([\d.]+)"/.exec(m[1] ?? "")?.[1]);
+      return { text: m[2] ?? "", fontSize, x0: box.x, y0: box.y, x1: box.x + box.width, y1: box.y + box.height };
+    })
+    .filter((t) => t.text.trim() !== "");
 }
 
-const overlap = (a: Measured, b: Measured) => Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0) > 0.5 && Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0) > 0.5;
+const overlap = (a: Measured, b: Measured) =>
+  Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0) > 0.5 && Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0) > 0.5;
 
 describe("chart SVG at the asked size", () => {
   it("has the asked width, height and viewBox", () => {
     const svg = renderChartSvg(charts.curves as ChartData, { width: 480, height: 400 });
     expect(svg).toMatch(/^<svg [^>]*viewBox="0 0 480 400" width="480" height="400"/);
-    expect(renderChartSvg(charts.curves as ChartData)).toMatch(/^<svg [^>]*viewBox="0 0 800 500" width="800" height="500"/);
+    expect(renderChartSvg(charts.curves as ChartData)).toMatch(
+      /^<svg [^>]*viewBox="0 0 800 500" width="800" height="500"/,
+    );
   });
 
   for (const [kind, data] of Object.entries(charts)) {
     for (const size of sizes) {
       it(`${kind} at ${size.width} × ${size.height}: text at least 10 px, inside the picture, no two texts on top of each other`, () => {
         const svg = renderChartSvg(data, size);
-        const texts = measureTexts(svg, size);
+        const texts = measureTexts(svg);
         expect(texts.length).toBeGreaterThan(3);
         for (const t of texts) {
           expect(t.fontSize, t.text).toBeGreaterThanOrEqual(10);
@@ -70,7 +121,8 @@ describe("chart SVG at the asked size", () => {
   }
 
   it("scales markers and type with the width (common practice: keep marks readable on small screens)", () => {
-    const radius = (svg: string) => Number(/<circle cx="[^"]+" cy="[^"]+" r="([\d.]+)" fill="#146d63" fill-opacity/.exec(svg)?.[1]);
+    const radius = (svg: string) =>
+      Number(/<circle cx="[^"]+" cy="[^"]+" r="([\d.]+)" fill="#146d63" fill-opacity/.exec(svg)?.[1]);
     const title = (svg: string) => Number(/font-size="([\d.]+)" font-weight="700"/.exec(svg)?.[1]);
     const narrow = renderChartSvg(charts["label-check"] as ChartData, { width: 320, height: 400 });
     const wide = renderChartSvg(charts["label-check"] as ChartData, { width: 1600, height: 1000 });

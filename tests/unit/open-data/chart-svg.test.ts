@@ -4,16 +4,21 @@ import { escapeXml, niceTicks, renderChartSvg, wrapText } from "@/lib/open-data/
 
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
   state: { v: 1, kind, group: "g", title: "A <chart> & more", note: "Note" },
-  groupLabel: "DC step · 15–25 °C", counts: { packs: 2, results: 3 }, leftOut: ["1 pack without a sag-limited C left out."],
+  groupLabel: "DC step · 15–25 °C",
+  counts: { packs: 2, results: 3 },
+  leftOut: ["1 pack without a sag-limited C left out."],
 });
 
 describe("chart SVG", () => {
   it("carries the licence and 'Source: Sagline' inside the drawing (product rule)", () => {
-    const svg = renderChartSvg({ ...base("label-check"), labelCheck: [{ label: "P", labelledC: 50, measuredC: 30, n: 2 }] });
+    const svg = renderChartSvg({
+      ...base("label-check"),
+      labelCheck: [{ label: "P", labelledC: 50, measuredC: 30, n: 2 }],
+    });
     expect(svg).toContain("Source: Sagline");
     expect(svg).toContain("CC BY 4.0");
     expect(svg).toContain("1 pack without a sag-limited C left out.");
-    expect(svg.startsWith("<svg xmlns=\"http://www.w3.org/2000/svg\"")).toBe(true);
+    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
   });
   it("escapes text as XML", () => {
     const svg = renderChartSvg(base("maker-ranking"));
@@ -22,9 +27,29 @@ describe("chart SVG", () => {
     expect(escapeXml(`"'`)).toBe("&quot;&apos;");
   });
   it("draws each kind", () => {
-    expect(renderChartSvg({ ...base("curves"), curves: [{ label: "P", points: [{ capacityPercent: 0, voltagePerCellV: 4.1 }, { capacityPercent: 90, voltagePerCellV: 3.5 }] }] })).toContain("<path d=\"M");
-    expect(renderChartSvg({ ...base("maker-ranking"), ranking: [{ label: "M", labelRatio: 0.7, packCount: 2, resultCount: 3 }] })).toContain("label met (1.0)");
-    expect(renderChartSvg({ ...base("label-check"), counts: { packs: 0, results: 0 } })).toContain("No approved results match this chart yet.");
+    expect(
+      renderChartSvg({
+        ...base("curves"),
+        curves: [
+          {
+            label: "P",
+            points: [
+              { capacityPercent: 0, voltagePerCellV: 4.1 },
+              { capacityPercent: 90, voltagePerCellV: 3.5 },
+            ],
+          },
+        ],
+      }),
+    ).toContain('<path d="M');
+    expect(
+      renderChartSvg({
+        ...base("maker-ranking"),
+        ranking: [{ label: "M", labelRatio: 0.7, packCount: 2, resultCount: 3 }],
+      }),
+    ).toContain("label met (1.0)");
+    expect(renderChartSvg({ ...base("label-check"), counts: { packs: 0, results: 0 } })).toContain(
+      "No approved results match this chart yet.",
+    );
   });
   it("chooses ticks whose last one covers the maximum (common practice)", () => {
     expect(niceTicks(0, 107)).toEqual([0, 25, 50, 75, 100, 125]);

@@ -35,7 +35,7 @@ describe("formula-injection guard (OWASP CSV Injection guidance)", () => {
     expect(guardFormula("Bench load, 30 A")).toBe("Bench load, 30 A");
   });
   it("guards only free-text columns, then escapes the result", () => {
-    expect(csvCell("=HYPERLINK(\"x\")", true)).toBe('"\'=HYPERLINK(""x"")"');
+    expect(csvCell('=HYPERLINK("x")', true)).toBe('"\'=HYPERLINK(""x"")"');
     expect(csvCell("-5", false)).toBe("-5");
     const csv = toCsv([{ name: "notes", freeText: true, value: (r: { n: string }) => r.n }], [{ n: "@evil" }]);
     expect(csv).toBe("notes\r\n'@evil\r\n");

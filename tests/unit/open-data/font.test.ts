@@ -1,11 +1,13 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { woffToSfnt } from "@/lib/open-data/font";
+import { woffToSfnt } from "@/server/open-data/font";
 
 describe("WOFF 1.0 → sfnt (W3C WOFF File Format 1.0)", () => {
   it("unwraps the shipped Inter font into a TrueType file with the same tables", () => {
-    const woff = readFileSync(path.join(process.cwd(), "node_modules/@fontsource/inter/files/inter-latin-400-normal.woff"));
+    const woff = readFileSync(
+      path.join(process.cwd(), "node_modules/@fontsource/inter/files/inter-latin-400-normal.woff"),
+    );
     const sfnt = woffToSfnt(woff);
     expect(sfnt.readUInt32BE(0)).toBe(woff.readUInt32BE(4)); // flavor
     const numTables = sfnt.readUInt16BE(4);

@@ -10,7 +10,14 @@ const s = encodeChartState({ v: 1, kind: "curves", group: "g1", title: "Curves" 
 describe("oEmbed response", () => {
   it("is type rich, version 1.0, with html, width and height", () => {
     const r = oembedResponse(`${BASE}/charts/view/${s}`, BASE);
-    expect(r).toMatchObject({ version: "1.0", type: "rich", title: "Curves", provider_name: "Sagline", provider_url: BASE, width: 800 });
+    expect(r).toMatchObject({
+      version: "1.0",
+      type: "rich",
+      title: "Curves",
+      provider_name: "Sagline",
+      provider_url: BASE,
+      width: 800,
+    });
     expect(r?.html).toContain(`src="${BASE}/embed/chart/${s}"`);
     expect(r?.html).toContain('loading="lazy"');
     expect(r?.height).toBeGreaterThan(0);
@@ -38,7 +45,12 @@ describe("oEmbed response", () => {
       const out = parseChartImageSize(u.searchParams, "png");
       return out.ok ? { width: out.size.width * out.size.scale, height: out.size.height * out.size.scale } : null;
     };
-    for (const [maxwidth, maxheight] of [[undefined, undefined], [400, undefined], [800, 350], [1200, 900]] as const) {
+    for (const [maxwidth, maxheight] of [
+      [undefined, undefined],
+      [400, undefined],
+      [800, 350],
+      [1200, 900],
+    ] as const) {
       const r = oembedResponse(`${BASE}/charts/view/${s}`, BASE, maxwidth, maxheight);
       expect(r?.thumbnail_url).toContain(`${BASE}/charts/image/${s}/chart.png?`);
       expect(drawn(r?.thumbnail_url ?? "")).toEqual({ width: r?.thumbnail_width, height: r?.thumbnail_height });
@@ -53,7 +65,13 @@ describe("oEmbed response", () => {
 
 describe("oEmbed reads split permalinks", () => {
   it("finds the chart in a permalink or embed whose state is split into segments", () => {
-    const state = { v: 1 as const, kind: "label-check" as const, group: "dc-step_a15-25_co3.3_r5-10_new", title: "T".repeat(120), note: "n".repeat(300) };
+    const state = {
+      v: 1 as const,
+      kind: "label-check" as const,
+      group: "dc-step_a15-25_co3.3_r5-10_new",
+      title: "T".repeat(120),
+      note: "n".repeat(300),
+    };
     const path = statePath(encodeChartState(state));
     expect(path).toContain("/");
     expect(chartStateFromUrl(`${BASE}/charts/view/${path}`, BASE)).toEqual(state);

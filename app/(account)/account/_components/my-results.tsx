@@ -4,7 +4,8 @@ import { fmt } from "@/lib/format";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { ResultActions } from "./result-actions-client";
 
-const date = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const date = (d: Date) =>
+  d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 const statusTone: Record<string, string> = {
   approved: "bg-cell-50 text-cell-700 dark:bg-cell-700/30 dark:text-cell-100",
@@ -31,10 +32,13 @@ export function MyResults({ results }: { results: ContributorResult[] }) {
             <Link href={`/results/${r.id}`} className="font-medium">
               {r.makerName} {r.model}
             </Link>
-            <span className={`rounded px-2 py-0.5 text-xs font-medium ${statusTone[r.status] ?? ""}`}>{reviewStatusLabels[r.status]}</span>
+            <span className={`rounded px-2 py-0.5 text-xs font-medium ${statusTone[r.status] ?? ""}`}>
+              {reviewStatusLabels[r.status]}
+            </span>
           </div>
           <p className="muted num text-sm">
-            {fmt(r.loadCurrentA, 1, "A")} · ambient {fmt(r.ambientTemperatureC, 0, "°C")} · submitted {date(r.submittedAt)}
+            {fmt(r.loadCurrentA, 1, "A")} · ambient {fmt(r.ambientTemperatureC, 0, "°C")} · submitted{" "}
+            {date(r.submittedAt)}
             {r.publishedAt ? ` · published ${date(r.publishedAt)}` : ""}
           </p>
           <ResultActions resultId={r.id} status={r.status} />

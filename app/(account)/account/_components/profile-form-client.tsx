@@ -12,11 +12,25 @@ export function ProfileForm({ initial }: { initial: { displayName: string; anony
   return (
     <form action={formAction} noValidate className="space-y-4">
       <Field id="displayName" label="Display name" error={nameError} hint="Shown beside your published results.">
-        <input id="displayName" name="displayName" value={displayName} onChange={(e) => setDisplayName(e.target.value)}
-          maxLength={60} autoComplete="nickname" className={inputClass} {...describedBy("displayName", nameError, true)} />
+        <input
+          id="displayName"
+          name="displayName"
+          value={displayName}
+          onChange={(e) => setDisplayName(e.target.value)}
+          maxLength={60}
+          autoComplete="nickname"
+          className={inputClass}
+          {...describedBy("displayName", nameError, true)}
+        />
       </Field>
       <label className="flex items-start gap-2 text-sm">
-        <input type="checkbox" name="anonymous" checked={anonymous} onChange={(e) => setAnonymous(e.target.checked)} className="mt-1 accent-cell-500" />
+        <input
+          type="checkbox"
+          name="anonymous"
+          checked={anonymous}
+          onChange={(e) => setAnonymous(e.target.checked)}
+          className="mt-1 accent-cell-500"
+        />
         <span>
           Stay anonymous — your published results show “{ANONYMOUS_NAME}” instead of a name. Moderators still see who
           submitted them.

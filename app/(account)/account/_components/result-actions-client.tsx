@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { buttonClass } from "@/components/ui/form";
-import type { ReviewStatus } from "@/db/schema/enums";
+import type { ReviewStatus } from "@/lib/enums";
 import { withdrawResult } from "../actions/withdraw-result";
 
 export function ResultActions({ resultId, status }: { resultId: number; status: ReviewStatus }) {
@@ -27,18 +27,35 @@ export function ResultActions({ resultId, status }: { resultId: number; status: 
   return (
     <div className="flex flex-wrap items-center gap-2 text-sm">
       {status === "changes_requested" && (
-        <Link href={`/submit/${resultId}`} className={buttonClass("primary")}>Answer the change request</Link>
+        <Link href={`/submit/${resultId}`} className={buttonClass("primary")}>
+          Answer the change request
+        </Link>
       )}
       {confirming ? (
         <>
           <span>Withdraw this result? It will not be reviewed or published.</span>
-          <button type="button" className={buttonClass("danger")} onClick={withdraw} disabled={pending}>{pending ? "Withdrawing…" : "Yes, withdraw"}</button>
-          <button type="button" className={buttonClass("secondary")} onClick={() => setConfirming(false)} disabled={pending}>Keep it</button>
+          <button type="button" className={buttonClass("danger")} onClick={withdraw} disabled={pending}>
+            {pending ? "Withdrawing…" : "Yes, withdraw"}
+          </button>
+          <button
+            type="button"
+            className={buttonClass("secondary")}
+            onClick={() => setConfirming(false)}
+            disabled={pending}
+          >
+            Keep it
+          </button>
         </>
       ) : (
-        <button type="button" className={buttonClass("secondary")} onClick={() => setConfirming(true)}>Withdraw</button>
+        <button type="button" className={buttonClass("secondary")} onClick={() => setConfirming(true)}>
+          Withdraw
+        </button>
       )}
-      {error && <p role="alert" className="w-full text-warn dark:text-red-300">{error}</p>}
+      {error && (
+        <p role="alert" className="w-full text-warn dark:text-red-300">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -30,11 +30,19 @@ export function WatchList({ watches }: { watches: Watched[] }) {
   return (
     <div className="space-y-2">
       {error ? <Alert tone="error">{error}</Alert> : null}
-      <ul className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-paper-raised dark:divide-night-line dark:border-night-line dark:bg-night-raised" data-testid="watch-list">
+      <ul
+        className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-paper-raised dark:divide-night-line dark:border-night-line dark:bg-night-raised"
+        data-testid="watch-list"
+      >
         {watches.map((w) => (
           <li key={w.packId} className="flex items-center justify-between gap-3 px-4 py-2">
             <Link href={`/packs/${w.slug}`}>{w.title}</Link>
-            <button type="button" className={buttonClass("secondary", "shrink-0")} disabled={pending} onClick={() => unwatch(w.packId)}>
+            <button
+              type="button"
+              className={buttonClass("secondary", "shrink-0")}
+              disabled={pending}
+              onClick={() => unwatch(w.packId)}
+            >
               Unwatch
             </button>
           </li>

@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { updateProfile as updateProfileRow } from "@/db/mutations/users";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { profileSchema } from "@/lib/validations/account";
 
 /** The signed-in user's display name, or anonymous. */

@@ -4,7 +4,7 @@ import { buttonClass } from "@/components/ui/form";
 import { listBenchProfilesForUser, type BenchProfile } from "@/db/queries/bench-profiles";
 import { fmt } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { DeleteBenchProfileButton } from "./_components/delete-bench-profile-client";
 
 export const metadata: Metadata = { title: "Bench profiles" };
@@ -39,7 +39,9 @@ export default async function BenchProfilesPage() {
         </Link>
       </div>
       {profiles.length === 0 ? (
-        <div className="card muted">No bench profiles yet. Add one to describe your load, logger and resistance meter.</div>
+        <div className="card muted">
+          No bench profiles yet. Add one to describe your load, logger and resistance meter.
+        </div>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" data-testid="bench-profile-list">
           {profiles.map((p) => (

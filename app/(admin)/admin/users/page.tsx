@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { listUsers } from "@/db/queries/users";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { userListParams } from "@/lib/validations/user-role";
 import { RoleForm } from "./_components/role-form-client";
 
@@ -9,9 +9,12 @@ export const metadata: Metadata = { title: "Users and roles" };
 export const dynamic = "force-dynamic";
 
 const PAGE_SIZE = 50;
-const joined = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const joined = (d: Date) =>
+  d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
-export default async function AdminUsersPage(props: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function AdminUsersPage(props: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const me = await requirePageUser("user.set-role", "/admin/users");
   const { page } = userListParams.parse(await props.searchParams);
   const { rows, total } = await listUsers(PAGE_SIZE, (page - 1) * PAGE_SIZE);
@@ -25,9 +28,17 @@ export default async function AdminUsersPage(props: { searchParams: Promise<Reco
           roles and the catalogue. A change takes effect on the person’s next click. There is always at least one admin.
         </p>
       </div>
-      <ul className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-paper-raised dark:divide-night-line dark:border-night-line dark:bg-night-raised" data-testid="user-list">
+      <ul
+        className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-paper-raised dark:divide-night-line dark:border-night-line dark:bg-night-raised"
+        data-testid="user-list"
+      >
         {rows.map((u) => (
-          <li key={u.id} className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 px-4 py-3" data-testid="user-row" data-email={u.email ?? ""}>
+          <li
+            key={u.id}
+            className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 px-4 py-3"
+            data-testid="user-row"
+            data-email={u.email ?? ""}
+          >
             <div className="min-w-0 space-y-0.5">
               <p className="truncate font-medium">
                 {u.email ?? "(no address)"}
@@ -45,7 +56,9 @@ export default async function AdminUsersPage(props: { searchParams: Promise<Reco
       {pages > 1 ? (
         <nav aria-label="Pages" className="flex items-center gap-4 text-sm">
           {page > 1 ? <Link href={`/admin/users?page=${page - 1}`}>← Previous</Link> : null}
-          <span className="muted">Page {page} of {pages}</span>
+          <span className="muted">
+            Page {page} of {pages}
+          </span>
           {page < pages ? <Link href={`/admin/users?page=${page + 1}`}>Next →</Link> : null}
         </nav>
       ) : null}

@@ -3,16 +3,19 @@
 // Auth.js (which creates the hashed verification token) and our mail outbox.
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
-import { signIn } from "@/lib/auth";
+import { signIn } from "@/server/auth";
 import { actionError, AppError, type ActionResult } from "@/lib/errors";
-import { clientIp } from "@/lib/rate-limit";
-import { enforceSignInLimits } from "@/lib/sign-in-limits";
+import { clientIp } from "@/server/rate-limit";
+import { enforceSignInLimits } from "@/server/sign-in-limits";
 import { signInSchema } from "@/lib/validations/sign-in";
 
 export async function requestSignInLink(_prev: ActionResult | null, form: FormData): Promise<ActionResult> {
   let next: string;
   try {
-    const input = signInSchema.parse({ email: form.get("email") ?? "", callbackUrl: form.get("callbackUrl") ?? undefined });
+    const input = signInSchema.parse({
+      email: form.get("email") ?? "",
+      callbackUrl: form.get("callbackUrl") ?? undefined,
+    });
     await enforceSignInLimits(input.email, clientIp(await headers()));
     next = await signIn("nodemailer", { email: input.email, redirectTo: input.callbackUrl, redirect: false });
     if (new URL(next, "http://x").searchParams.has("error")) {

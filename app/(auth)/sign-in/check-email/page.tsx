@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 export const metadata: Metadata = { title: "Check your e-mail" };
 export const dynamic = "force-dynamic"; // the local-tools hint depends on the running environment
@@ -21,7 +21,8 @@ export default function CheckEmailPage() {
       </div>
       {env().SAGLINE_DEV_TOOLS ? (
         <p className="muted text-sm">
-          Local development: mail is caught, not sent. Open <Link href="/dev/mail">the caught mail</Link> to click the link.
+          Local development: mail is caught, not sent. Open <Link href="/dev/mail">the caught mail</Link> to click the
+          link.
         </p>
       ) : null}
     </div>

@@ -5,9 +5,9 @@ import { z } from "zod";
 import { Alert } from "@/components/ui/form";
 import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { getLatestChangeRequest, getResultForEdit } from "@/db/queries/submissions";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { labelSpec } from "@/lib/format";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { profileOption } from "../_components/profile-option";
 import { ResubmitForm } from "./_components/resubmit-form-client";
@@ -32,21 +32,29 @@ export default async function ResubmitPage(props: { params: Promise<{ resultId: 
     <div className="space-y-6">
       <header className="max-w-3xl space-y-2">
         <h1>Answer a change request</h1>
-        <p className="muted num">{p.makerName} {p.model} · {labelSpec(p)} · result #{result.id}</p>
+        <p className="muted num">
+          {p.makerName} {p.model} · {labelSpec(p)} · result #{result.id}
+        </p>
       </header>
       {result.status !== "changes_requested" ? (
         <Alert tone="info">
-          This result is {reviewStatusLabels[result.status].toLowerCase()}; only a result with changes requested can be edited and resubmitted.{" "}
-          <Link href="/account">Back to your account</Link>
+          This result is {reviewStatusLabels[result.status].toLowerCase()}; only a result with changes requested can be
+          edited and resubmitted. <Link href="/account">Back to your account</Link>
         </Alert>
       ) : (
         <>
           <Alert tone="info">
-            A moderator asked for a change{request?.reason ? `: “${request.reason}”` : "."} Edit what needs changing, upload a corrected log if
-            needed, and say what you changed. Every step stays in the result’s history.
+            A moderator asked for a change{request?.reason ? `: “${request.reason}”` : "."} Edit what needs changing,
+            upload a corrected log if needed, and say what you changed. Every step stays in the result’s history.
           </Alert>
-          <ResubmitForm result={result} profiles={profiles.map(profileOption)}
-            limits={{ logMaxMb: Math.round(e.LOG_MAX_BYTES / (1024 * 1024)), photoMaxMb: Math.round(e.PHOTO_MAX_BYTES / (1024 * 1024)) }} />
+          <ResubmitForm
+            result={result}
+            profiles={profiles.map(profileOption)}
+            limits={{
+              logMaxMb: Math.round(e.LOG_MAX_BYTES / (1024 * 1024)),
+              photoMaxMb: Math.round(e.PHOTO_MAX_BYTES / (1024 * 1024)),
+            }}
+          />
         </>
       )}
     </div>

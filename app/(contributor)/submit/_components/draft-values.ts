@@ -9,10 +9,33 @@ export function blankValues(profiles: BenchProfileOption[]): SubmitResultValues 
   const first = profiles[0];
   return {
     idempotencyKey: crypto.randomUUID(),
-    pack: { mode: "existing", packId: "", makerId: "", makerName: "", model: "", cellsInSeries: "", ratedCapacityMah: "", labelledContinuousC: "", labelledBurstC: "", weightG: "", connector: "" },
+    pack: {
+      mode: "existing",
+      packId: "",
+      makerId: "",
+      makerName: "",
+      model: "",
+      cellsInSeries: "",
+      ratedCapacityMah: "",
+      labelledContinuousC: "",
+      labelledBurstC: "",
+      weightG: "",
+      connector: "",
+    },
     method: {
-      benchProfileId: "", ambientTemperatureC: "", packStartTemperatureC: "", loadMode: "constant-current", loadCurrentA: "", cutoffVPerCell: "",
-      stopTemperatureC: "", resistanceMethod: "", equipment: "", sampleRateHz: "", cyclesBeforeTest: "0", testedOn: "", notes: "",
+      benchProfileId: "",
+      ambientTemperatureC: "",
+      packStartTemperatureC: "",
+      loadMode: "constant-current",
+      loadCurrentA: "",
+      cutoffVPerCell: "",
+      stopTemperatureC: "",
+      resistanceMethod: "",
+      equipment: "",
+      sampleRateHz: "",
+      cyclesBeforeTest: "0",
+      testedOn: "",
+      notes: "",
       ...(first ? methodFromProfile(first) : {}),
     },
     log: { key: "", filename: "" },
@@ -32,7 +55,9 @@ export function valuesFromDraft(blank: SubmitResultValues, raw: Record<string, u
   const { mode: _mode, ...packStrings } = blank.pack;
   const schema = z.object({
     idempotencyKey: z.uuid().catch(blank.idempotencyKey),
-    pack: strings(packStrings).extend({ mode: z.enum(["existing", "new"]).catch(blank.pack.mode) }).catch(blank.pack),
+    pack: strings(packStrings)
+      .extend({ mode: z.enum(["existing", "new"]).catch(blank.pack.mode) })
+      .catch(blank.pack),
     method: strings(blank.method).catch(blank.method),
     log: strings(blank.log).catch(blank.log),
     photoKeys: z.array(z.string().max(300)).max(10).catch(blank.photoKeys),

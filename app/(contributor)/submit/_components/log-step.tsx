@@ -44,7 +44,13 @@ function uploadUrl(filename: string, facts: PackFactsClient | null, m: SubmitRes
 }
 
 export function LogStep({ form, facts, limits, preview, previewState, onPreview, onRecheck, optional = false }: Props) {
-  const { setValue, getValues, watch, clearErrors, formState: { errors } } = form;
+  const {
+    setValue,
+    getValues,
+    watch,
+    clearErrors,
+    formState: { errors },
+  } = form;
   const upload = useXhrUpload<UploadAnswer>();
   const log = watch("log");
   const busy = upload.state.phase === "uploading" || upload.state.phase === "processing";
@@ -55,36 +61,63 @@ export function LogStep({ form, facts, limits, preview, previewState, onPreview,
     clearErrors("log");
     const answer = await upload.send(uploadUrl(file.name, facts, getValues("method")), file, file.type || "text/csv");
     if (!answer) return;
-    setValue("log", { key: answer.log.key, filename: answer.log.filename }, { shouldDirty: true, shouldValidate: true });
+    setValue(
+      "log",
+      { key: answer.log.key, filename: answer.log.filename },
+      { shouldDirty: true, shouldValidate: true },
+    );
     onPreview(answer.preview);
   };
   const errorText = uploadError ? (uploadError.fieldErrors?.log?.[0] ?? uploadError.message) : fieldError;
 
   return (
     <div className="space-y-5">
-      <FileDrop accept=".csv,.txt,.tsv,.log,.dat,text/csv,text/plain" label={log?.key ? "Replace the log" : "Drop the log here, or choose a file"}
+      <FileDrop
+        accept=".csv,.txt,.tsv,.log,.dat,text/csv,text/plain"
+        label={log?.key ? "Replace the log" : "Drop the log here, or choose a file"}
         hint={`CSV from your logger (time, voltage, current, optionally temperature); up to ${limits.logMaxMb} MB. ${optional ? "Leave it to keep the stored log." : ""}`}
-        onFile={send} disabled={busy} error={errorText} testId="log-file" />
+        onFile={send}
+        disabled={busy}
+        error={errorText}
+        testId="log-file"
+      />
       <UploadProgress state={upload.state} label="Uploading the log" />
       {uploadError?.status === 401 && (
         <Alert tone="error">
-          Your session has ended. <Link href="/sign-in?callbackUrl=/submit">Sign in again</Link> — this draft is kept in this browser.
+          Your session has ended. <Link href="/sign-in?callbackUrl=/submit">Sign in again</Link> — this draft is kept in
+          this browser.
         </Alert>
       )}
       {log?.key ? (
         <p className="text-sm" data-testid="stored-log">
           Stored log: <span className="num">{log.filename}</span>{" "}
-          <button type="button" className={buttonClass("secondary", "ml-2")} onClick={onRecheck} disabled={previewState === "loading"}>
+          <button
+            type="button"
+            className={buttonClass("secondary", "ml-2")}
+            onClick={onRecheck}
+            disabled={previewState === "loading"}
+          >
             Check again with the current method card
           </button>
         </p>
       ) : null}
-      {previewState === "loading" && <p className="muted text-sm" aria-live="polite">Reading the stored log…</p>}
-      {previewState === "error" && !preview && <p className="text-sm text-warn dark:text-red-300">The stored log could not be checked just now; try again, or upload it again.</p>}
+      {previewState === "loading" && (
+        <p className="muted text-sm" aria-live="polite">
+          Reading the stored log…
+        </p>
+      )}
+      {previewState === "error" && !preview && (
+        <p className="text-sm text-warn dark:text-red-300">
+          The stored log could not be checked just now; try again, or upload it again.
+        </p>
+      )}
       {preview && (
         <section aria-labelledby="preview-heading" className="space-y-3">
           <h3 id="preview-heading">What Sagline computes from this log</h3>
-          <p className="muted text-sm">These figures are computed again on the server when you submit, from the stored log and the method card as you send them.</p>
+          <p className="muted text-sm">
+            These figures are computed again on the server when you submit, from the stored log and the method card as
+            you send them.
+          </p>
           <LogPreview figures={preview.figures} curve={preview.curve} checks={preview.checks} />
         </section>
       )}

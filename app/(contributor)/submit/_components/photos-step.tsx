@@ -12,7 +12,12 @@ import type { Limits, SubmitFormApi } from "./types";
 type Props = { form: SubmitFormApi; limits: Limits; existingPhotos?: number; children?: React.ReactNode };
 
 export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props) {
-  const { register, setValue, watch, formState: { errors } } = form;
+  const {
+    register,
+    setValue,
+    watch,
+    formState: { errors },
+  } = form;
   const upload = useXhrUpload<{ key: string }>();
   const keys = watch("photoKeys") ?? [];
   const [thumbs, setThumbs] = useState<Record<string, string>>({});
@@ -37,8 +42,14 @@ export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props
     setThumbs((t) => ({ ...t, [answer.key]: URL.createObjectURL(file) }));
     setValue("photoKeys", [...keys, answer.key], { shouldDirty: true, shouldValidate: true });
   };
-  const remove = (key: string) => setValue("photoKeys", keys.filter((k) => k !== key), { shouldDirty: true, shouldValidate: true });
-  const uploadError = upload.state.phase === "error" ? (upload.state.error.fieldErrors?.photos?.[0] ?? upload.state.error.message) : null;
+  const remove = (key: string) =>
+    setValue(
+      "photoKeys",
+      keys.filter((k) => k !== key),
+      { shouldDirty: true, shouldValidate: true },
+    );
+  const uploadError =
+    upload.state.phase === "error" ? (upload.state.error.fieldErrors?.photos?.[0] ?? upload.state.error.message) : null;
   const photoError = localError ?? uploadError ?? errors.photoKeys?.message ?? errors.photoKeys?.[0]?.message;
 
   return (
@@ -46,10 +57,19 @@ export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props
       <section className="space-y-3" aria-labelledby="photos-heading">
         <h3 id="photos-heading">Photos of the label (optional)</h3>
         <p className="muted text-sm">
-          Up to {MAX_PHOTOS} pictures (JPEG, PNG or WebP, {limits.photoMaxMb} MB each) showing the printed rating, so moderators can check the pack.
+          Up to {MAX_PHOTOS} pictures (JPEG, PNG or WebP, {limits.photoMaxMb} MB each) showing the printed rating, so
+          moderators can check the pack.
         </p>
         {room > 0 ? (
-          <FileDrop accept="image/jpeg,image/png,image/webp" label="Add a photo" hint={`${room} more allowed`} onFile={add} disabled={busy} error={photoError ?? undefined} testId="photo-file" />
+          <FileDrop
+            accept="image/jpeg,image/png,image/webp"
+            label="Add a photo"
+            hint={`${room} more allowed`}
+            onFile={add}
+            disabled={busy}
+            error={photoError ?? undefined}
+            testId="photo-file"
+          />
         ) : (
           <p className="text-sm">That is the most photos a result can have.</p>
         )}
@@ -60,11 +80,16 @@ export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props
               <li key={k} className="card flex w-36 flex-col items-center gap-2 p-2 text-xs">
                 {thumbs[k] ? (
                   // A local preview of the file just chosen (an object URL; next/image does not apply).
+                  // eslint-disable-next-line @next/next/no-img-element
                   <img src={thumbs[k]} alt={`Label photo ${i + 1}`} className="h-24 w-full rounded object-cover" />
                 ) : (
-                  <span className="muted flex h-24 w-full items-center justify-center rounded bg-paper-sunk dark:bg-night-sunk">Photo {i + 1} (stored)</span>
+                  <span className="muted flex h-24 w-full items-center justify-center rounded bg-paper-sunk dark:bg-night-sunk">
+                    Photo {i + 1} (stored)
+                  </span>
                 )}
-                <button type="button" onClick={() => remove(k)} className={buttonClass("secondary", "w-full")}>Remove</button>
+                <button type="button" onClick={() => remove(k)} className={buttonClass("secondary", "w-full")}>
+                  Remove
+                </button>
               </li>
             ))}
           </ul>
@@ -75,14 +100,23 @@ export function PhotosStep({ form, limits, existingPhotos = 0, children }: Props
 
       <section className="space-y-2">
         <label className="flex items-start gap-3 text-sm">
-          <input type="checkbox" className="mt-1 h-4 w-4 accent-cell-500" aria-invalid={errors.declaration ? true : undefined}
-            aria-describedby={errors.declaration ? "declaration-error" : undefined} {...register("declaration")} />
+          <input
+            type="checkbox"
+            className="mt-1 h-4 w-4 accent-cell-500"
+            aria-invalid={errors.declaration ? true : undefined}
+            aria-describedby={errors.declaration ? "declaration-error" : undefined}
+            {...register("declaration")}
+          />
           <span>
-            I declare that these are honest measurements I took myself, with the method stated, and that the log is unedited. I agree that the
-            figures are published under CC BY 4.0 once a moderator approves them.
+            I declare that these are honest measurements I took myself, with the method stated, and that the log is
+            unedited. I agree that the figures are published under CC BY 4.0 once a moderator approves them.
           </span>
         </label>
-        {errors.declaration?.message && <p id="declaration-error" role="alert" className="text-sm text-warn dark:text-red-300">{errors.declaration.message}</p>}
+        {errors.declaration?.message && (
+          <p id="declaration-error" role="alert" className="text-sm text-warn dark:text-red-300">
+            {errors.declaration.message}
+          </p>
+        )}
       </section>
     </div>
   );

@@ -21,14 +21,20 @@ import type { BenchProfileOption, Limits, MakerOption, PackFactsClient, PackOpti
 import { draftKey, readDraft, useDraftStorage } from "./use-draft";
 import { useKeepDraftFiles } from "./use-keep-draft-files";
 
-type Props = { userId: string; packs: PackOption[]; makers: MakerOption[]; profiles: BenchProfileOption[]; limits: Limits };
+type Props = {
+  userId: string;
+  packs: PackOption[];
+  makers: MakerOption[];
+  profiles: BenchProfileOption[];
+  limits: Limits;
+};
 type Path = FieldPath<SubmitResultValues>;
 
-export const STEPS = ["Pack", "Method card", "Log", "Photos and submit"] as const;
+const STEPS = ["Pack", "Method card", "Log", "Photos and submit"] as const;
 const STEP_FIELDS: Path[][] = [["pack"], ["method"], ["log"], ["photoKeys", "declaration"]];
 
 /** Which step shows a server field error ("method.cutoffVPerCell" → step 1). */
-export function stepOf(field: string): number {
+function stepOf(field: string): number {
   if (field.startsWith("pack")) return 0;
   if (field.startsWith("method")) return 1;
   if (field.startsWith("log")) return 2;
@@ -40,17 +46,27 @@ function knownPaths(v: SubmitResultValues): Set<string> {
   const out = new Set<string>(["root"]);
   for (const [k, val] of Object.entries(v)) {
     out.add(k);
-    if (val && typeof val === "object" && !Array.isArray(val)) for (const sub of Object.keys(val)) out.add(`${k}.${sub}`);
+    if (val && typeof val === "object" && !Array.isArray(val))
+      for (const sub of Object.keys(val)) out.add(`${k}.${sub}`);
   }
   return out;
 }
 
-const num = (s: string | undefined) => (s && s.trim() !== "" && Number.isFinite(Number(s.replace(",", "."))) ? Number(s.replace(",", ".")) : null);
+const num = (s: string | undefined) =>
+  s && s.trim() !== "" && Number.isFinite(Number(s.replace(",", "."))) ? Number(s.replace(",", ".")) : null;
 
-export function packFacts(v: SubmitResultValues["pack"], packs: PackOption[], makers: MakerOption[]): PackFactsClient | null {
+function packFacts(v: SubmitResultValues["pack"], packs: PackOption[], makers: MakerOption[]): PackFactsClient | null {
   if (v.mode === "existing") {
     const p = packs.find((x) => String(x.id) === v.packId);
-    return p ? { cells: p.cellsInSeries, ratedMah: p.ratedCapacityMah, labelledC: p.labelledContinuousC, weightG: p.weightG, title: `${p.makerName} ${p.model}` } : null;
+    return p
+      ? {
+          cells: p.cellsInSeries,
+          ratedMah: p.ratedCapacityMah,
+          labelledC: p.labelledContinuousC,
+          weightG: p.weightG,
+          title: `${p.makerName} ${p.model}`,
+        }
+      : null;
   }
   const cells = num(v.cellsInSeries);
   const ratedMah = num(v.ratedCapacityMah);
@@ -63,7 +79,11 @@ export function packFacts(v: SubmitResultValues["pack"], packs: PackOption[], ma
 export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
   const storageKey = draftKey(userId);
   const blank = useMemo(() => blankValues(profiles), [profiles]);
-  const form = useForm<SubmitResultValues, unknown, SubmitResultInput>({ resolver: zodResolver(submitResultSchema), defaultValues: blank, mode: "onTouched" });
+  const form = useForm<SubmitResultValues, unknown, SubmitResultInput>({
+    resolver: zodResolver(submitResultSchema),
+    defaultValues: blank,
+    mode: "onTouched",
+  });
   const { getValues, setError, trigger, watch, reset } = form;
   const [step, setStep] = useState(0);
   const [restored, setRestored] = useState(false);
@@ -101,8 +121,10 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
     restored && !done,
     () => ({ logKey: getValues("log.key") || null, photoKeys: getValues("photoKeys") ?? [] }),
     ({ logMissing, missingPhotoKeys }) => {
-      if (logMissing) setError("log", { type: "server", message: "The uploaded log is no longer stored: please upload it again." });
-      if (missingPhotoKeys.length) setError("photoKeys", { type: "server", message: "A photo is no longer stored: remove it and add it again." });
+      if (logMissing)
+        setError("log", { type: "server", message: "The uploaded log is no longer stored: please upload it again." });
+      if (missingPhotoKeys.length)
+        setError("photoKeys", { type: "server", message: "A photo is no longer stored: remove it and add it again." });
     },
   );
 
@@ -118,7 +140,8 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
       } else {
         setPreviewState("error");
         if (res.code === "unauthenticated") setFormError({ message: res.error, signIn: true });
-        for (const [field, messages] of Object.entries(res.fieldErrors ?? {})) if (field.startsWith("log")) setError("log", { type: "server", message: messages[0] });
+        for (const [field, messages] of Object.entries(res.fieldErrors ?? {}))
+          if (field.startsWith("log")) setError("log", { type: "server", message: messages[0] });
       }
     });
   }, [getValues, setError]);
@@ -143,7 +166,11 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
   useEffect(() => {
     if (!focusStep.current) return;
     focusStep.current = false;
-    stepBox.current?.querySelector<HTMLElement>("input:checked, input:not([type=radio]):not([type=hidden]):not(:disabled), select:not(:disabled), textarea:not(:disabled), button:not(:disabled)")?.focus({ preventScroll: true });
+    stepBox.current
+      ?.querySelector<HTMLElement>(
+        "input:checked, input:not([type=radio]):not([type=hidden]):not(:disabled), select:not(:disabled), textarea:not(:disabled), button:not(:disabled)",
+      )
+      ?.focus({ preventScroll: true });
   }, [step]);
 
   const submit = () => {
@@ -162,7 +189,9 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
         if (isPath(path)) setError(path, { type: "server", message: messages[0] });
       }
       if (fields.length > 0) setStep(Math.min(...fields.map(([f]) => stepOf(f))));
-      setFormError({ message: fields.length > 0 ? "Some values need a look — see the marked fields. Your draft is kept." : res.error });
+      setFormError({
+        message: fields.length > 0 ? "Some values need a look — see the marked fields. Your draft is kept." : res.error,
+      });
     });
   };
 
@@ -170,10 +199,24 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
     return (
       <div className="card space-y-3" data-testid="submit-done">
         <h2>Thank you — your result is waiting for review</h2>
-        <p>A moderator will check it against its log and method card. We e-mailed you a receipt; you can follow it, or withdraw it while it waits, from your account.</p>
+        <p>
+          A moderator will check it against its log and method card. We e-mailed you a receipt; you can follow it, or
+          withdraw it while it waits, from your account.
+        </p>
         <div className="flex flex-wrap gap-2">
-          <Link href="/account" className={buttonClass("primary")}>Go to your account</Link>
-          <button type="button" className={buttonClass("secondary")} onClick={() => { reset(blankValues(profiles)); setPreview(null); setStep(0); setDone(null); }}>
+          <Link href="/account" className={buttonClass("primary")}>
+            Go to your account
+          </Link>
+          <button
+            type="button"
+            className={buttonClass("secondary")}
+            onClick={() => {
+              reset(blankValues(profiles));
+              setPreview(null);
+              setStep(0);
+              setDone(null);
+            }}
+          >
             Submit another result
           </button>
         </div>
@@ -183,33 +226,70 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
 
   const facts = packFacts(watch("pack"), packs, makers);
   return (
-    <form noValidate className="space-y-6" aria-busy={pending} onSubmit={(e) => {
-      e.preventDefault();
-      // Enter in a field moves on a step; only the last step submits.
-      if (step < STEPS.length - 1) void go(step + 1);
-      else void form.handleSubmit(submit, (errs) => setStep(Math.min(...Object.keys(errs).map(stepOf), STEPS.length - 1)))();
-    }}>
+    <form
+      noValidate
+      className="space-y-6"
+      aria-busy={pending}
+      onSubmit={(e) => {
+        e.preventDefault();
+        // Enter in a field moves on a step; only the last step submits.
+        if (step < STEPS.length - 1) void go(step + 1);
+        else
+          void form.handleSubmit(submit, (errs) =>
+            setStep(Math.min(...Object.keys(errs).map(stepOf), STEPS.length - 1)),
+          )();
+      }}
+    >
       <StepList steps={STEPS} current={step} onGo={go} />
       <fieldset ref={stepBox} className="card min-w-0 space-y-4" disabled={!restored}>
         <legend className="px-1 text-base font-semibold">{`Step ${step + 1} of ${STEPS.length}: ${STEPS[step]}`}</legend>
         {step === 0 && <PackStep form={form} packs={packs} makers={makers} />}
         {step === 1 && <MethodStep form={form} profiles={profiles} ratedMah={facts?.ratedMah ?? null} />}
-        {step === 2 && <LogStep form={form} facts={facts} limits={limits} preview={preview} previewState={previewState} onPreview={setPreview} onRecheck={recheck} />}
+        {step === 2 && (
+          <LogStep
+            form={form}
+            facts={facts}
+            limits={limits}
+            preview={preview}
+            previewState={previewState}
+            onPreview={setPreview}
+            onRecheck={recheck}
+          />
+        )}
         {step === 3 && <PhotosStep form={form} limits={limits} />}
       </fieldset>
       {formError && (
         <Alert tone="error">
           {formError.message}{" "}
-          {formError.signIn && <Link href="/sign-in?callbackUrl=/submit">Sign in again — this draft is kept in this browser.</Link>}
+          {formError.signIn && (
+            <Link href="/sign-in?callbackUrl=/submit">Sign in again — this draft is kept in this browser.</Link>
+          )}
         </Alert>
       )}
       <div className="flex flex-wrap justify-between gap-2">
-        <button type="button" className={buttonClass("secondary")} onClick={() => go(step - 1)} disabled={step === 0 || pending}>Back</button>
+        <button
+          type="button"
+          className={buttonClass("secondary")}
+          onClick={() => go(step - 1)}
+          disabled={step === 0 || pending}
+        >
+          Back
+        </button>
         {/* Distinct keys: React must not turn the clicked "Next" button into the submit button mid-click. */}
         {step < STEPS.length - 1 ? (
-          <button key="next" type="button" className={buttonClass("primary")} onClick={() => go(step + 1)} disabled={pending}>Next: {STEPS[step + 1]}</button>
+          <button
+            key="next"
+            type="button"
+            className={buttonClass("primary")}
+            onClick={() => go(step + 1)}
+            disabled={pending}
+          >
+            Next: {STEPS[step + 1]}
+          </button>
         ) : (
-          <button key="submit" type="submit" className={buttonClass("primary")} disabled={pending}>{pending ? "Submitting…" : "Submit the result"}</button>
+          <button key="submit" type="submit" className={buttonClass("primary")} disabled={pending}>
+            {pending ? "Submitting…" : "Submit the result"}
+          </button>
         )}
       </div>
     </form>

@@ -4,7 +4,12 @@
 import { useCallback, useEffect, useRef } from "react";
 import { z } from "zod";
 
-const draftSchema = z.object({ version: z.literal(1), step: z.number().int().min(0).max(3), values: z.record(z.string(), z.unknown()), savedAt: z.string() });
+const draftSchema = z.object({
+  version: z.literal(1),
+  step: z.number().int().min(0).max(3),
+  values: z.record(z.string(), z.unknown()),
+  savedAt: z.string(),
+});
 export type Draft = { step: number; values: Record<string, unknown> };
 
 export function draftKey(userId: string, scope = "new"): string {

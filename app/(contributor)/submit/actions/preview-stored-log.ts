@@ -1,7 +1,7 @@
 "use server";
-import { authedAction } from "@/lib/authed-action";
-import { analyseForCard, checkFiles, resolvePack } from "@/lib/submissions/prepare";
-import { previewOf } from "@/lib/uploads/analyse";
+import { authedAction } from "@/server/authed-action";
+import { analyseForCard, checkFiles, resolvePack } from "@/server/submissions/prepare";
+import { previewOf } from "@/server/uploads/analyse";
 import { previewStoredLogSchema } from "@/lib/validations/result";
 
 /** The figures of an uploaded (not yet submitted) log with the current pack and method card. */
@@ -10,5 +10,11 @@ export const previewStoredLog = authedAction("upload.create", previewStoredLogSc
   await checkFiles(input.log.key, [], user.id);
   const { analysis } = await analyseForCard(input.log.key, facts, input.method);
   const m = input.method;
-  return previewOf(analysis, { packCells: facts.cells, cutoffVPerCell: m.cutoffVPerCell, loadCurrentA: m.loadCurrentA, loadMode: m.loadMode, stopTemperatureC: m.stopTemperatureC });
+  return previewOf(analysis, {
+    packCells: facts.cells,
+    cutoffVPerCell: m.cutoffVPerCell,
+    loadCurrentA: m.loadCurrentA,
+    loadMode: m.loadMode,
+    stopTemperatureC: m.stopTemperatureC,
+  });
 });

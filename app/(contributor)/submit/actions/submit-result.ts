@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
-import { authedAction } from "@/lib/authed-action";
-import { submitResultFor } from "@/lib/submissions/submit";
+import { authedAction } from "@/server/authed-action";
+import { submitResultFor } from "@/server/submissions/submit";
 import { submitResultSchema } from "@/lib/validations/result";
 
 /** Submit a result: one per idempotency key, figures recomputed from the stored log, receipt queued. */

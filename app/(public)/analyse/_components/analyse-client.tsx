@@ -18,7 +18,12 @@ type FieldName = (typeof FIELDS)[number]["name"];
 
 export function AnalyseClient({ maxMb }: { maxMb: number }) {
   const upload = useXhrUpload<Answer>();
-  const [values, setValues] = useState<Record<FieldName, string>>({ cells: "", ratedMah: "", labelledC: "", weightG: "" });
+  const [values, setValues] = useState<Record<FieldName, string>>({
+    cells: "",
+    ratedMah: "",
+    labelledC: "",
+    weightG: "",
+  });
   const [file, setFile] = useState<File | null>(null);
   const busy = upload.state.phase === "uploading" || upload.state.phase === "processing";
   const error = upload.state.phase === "error" ? upload.state.error : null;
@@ -33,20 +38,36 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
   return (
     <div className="grid gap-6 lg:grid-cols-[20rem_1fr]">
       <div className="space-y-4">
-        <FileDrop accept=".csv,.txt,.tsv,.log,text/csv,text/plain" label="Drop a log here, or choose a file"
-          hint={`CSV from your logger, comma, semicolon or tab separated; up to ${maxMb} MB`} onFile={run} disabled={busy}
-          error={error?.fieldErrors?.file?.[0] ?? (error && !error.fieldErrors ? error.message : undefined)} testId="analyse-file" />
+        <FileDrop
+          accept=".csv,.txt,.tsv,.log,text/csv,text/plain"
+          label="Drop a log here, or choose a file"
+          hint={`CSV from your logger, comma, semicolon or tab separated; up to ${maxMb} MB`}
+          onFile={run}
+          disabled={busy}
+          error={error?.fieldErrors?.file?.[0] ?? (error && !error.fieldErrors ? error.message : undefined)}
+          testId="analyse-file"
+        />
         <UploadProgress state={upload.state} label={`Sending ${file?.name ?? "the log"}`} />
         <fieldset className="card space-y-3">
           <legend className="px-1 text-sm font-medium">Pack label (optional)</legend>
-          <p className="muted text-xs">Some figures need the label: capacity ratio needs the rating, label ratio the labelled C, specific energy the weight.</p>
+          <p className="muted text-xs">
+            Some figures need the label: capacity ratio needs the rating, label ratio the labelled C, specific energy
+            the weight.
+          </p>
           {FIELDS.map((f) => (
             <label key={f.name} className="flex items-center justify-between gap-3 text-sm">
               <span>{f.label}</span>
-              <input type="number" inputMode="decimal" min="0" step={f.step} placeholder={f.placeholder} value={values[f.name]}
+              <input
+                type="number"
+                inputMode="decimal"
+                min="0"
+                step={f.step}
+                placeholder={f.placeholder}
+                value={values[f.name]}
                 onChange={(e) => setValues((v) => ({ ...v, [f.name]: e.target.value }))}
                 aria-invalid={error?.fieldErrors?.[f.name] ? true : undefined}
-                className="num w-28 rounded border border-ink/20 bg-paper-raised px-2 py-1 text-right dark:border-night-line dark:bg-night-sunk" />
+                className="num w-28 rounded border border-ink/20 bg-paper-raised px-2 py-1 text-right dark:border-night-line dark:bg-night-sunk"
+              />
             </label>
           ))}
           {error?.fieldErrors && FIELDS.some((f) => error.fieldErrors?.[f.name]) && (
@@ -54,8 +75,12 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
               {FIELDS.flatMap((f) => (error.fieldErrors?.[f.name] ?? []).map((m) => <li key={f.name + m}>{m}</li>))}
             </ul>
           )}
-          <button type="button" disabled={!file || busy} onClick={() => file && run(file)}
-            className="rounded-md border border-ink/20 px-3 py-1.5 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk">
+          <button
+            type="button"
+            disabled={!file || busy}
+            onClick={() => file && run(file)}
+            className="rounded-md border border-ink/20 px-3 py-1.5 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk"
+          >
             Analyse again with these figures
           </button>
         </fieldset>
@@ -65,7 +90,9 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
         {upload.state.phase === "done" ? (
           <LogPreview figures={upload.state.data} curve={upload.state.data.curve} />
         ) : (
-          <p className="muted text-sm">{busy ? "Working on it…" : "No log yet. The figures, the curves and any warnings appear here."}</p>
+          <p className="muted text-sm">
+            {busy ? "Working on it…" : "No log yet. The figures, the curves and any warnings appear here."}
+          </p>
         )}
       </section>
     </div>

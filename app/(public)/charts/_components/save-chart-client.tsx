@@ -10,9 +10,14 @@ export function SaveChart({ state }: { state: ChartState }) {
   async function save() {
     setBusy(true);
     try {
-      const res = await fetch("/api/v1/charts", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ state }) });
+      const res = await fetch("/api/v1/charts", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ state }),
+      });
       if (res.status === 201) setMessage("Added to the published charts.");
-      else if (res.status === 401) setMessage("Sign in to add charts to the published list. The permalink works without it.");
+      else if (res.status === 401)
+        setMessage("Sign in to add charts to the published list. The permalink works without it.");
       else setMessage("Could not add the chart; the permalink still works.");
     } catch {
       setMessage("Could not reach Sagline; the permalink still works.");
@@ -22,10 +27,19 @@ export function SaveChart({ state }: { state: ChartState }) {
   }
   return (
     <div className="space-y-1">
-      <button type="button" onClick={save} disabled={busy} className="rounded border border-ink/20 px-3 py-1 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk">
+      <button
+        type="button"
+        onClick={save}
+        disabled={busy}
+        className="rounded border border-ink/20 px-3 py-1 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk"
+      >
         Add to published charts
       </button>
-      {message ? <p className="muted text-xs" role="status">{message}</p> : null}
+      {message ? (
+        <p className="muted text-xs" role="status">
+          {message}
+        </p>
+      ) : null}
     </div>
   );
 }

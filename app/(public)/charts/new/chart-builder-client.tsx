@@ -2,12 +2,21 @@
 // The chart builder: choose, preview (the server-drawn SVG), then go to the permalink that carries the state.
 import { useRouter, useSearchParams } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
-import { CHART_KINDS, CHART_KIND_LABELS, chartState, decodeChartState, encodeChartState, statePath, type ChartKind } from "@/lib/open-data/chart-state";
+import {
+  CHART_KINDS,
+  CHART_KIND_LABELS,
+  chartState,
+  decodeChartState,
+  encodeChartState,
+  statePath,
+  type ChartKind,
+} from "@/lib/open-data/chart-state";
 
 type Group = { key: string; label: string; resultCount: number; packCount: number };
 type Maker = { slug: string; name: string };
 
-const input = "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
+const input =
+  "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
 const defaultTitle: Record<ChartKind, string> = {
   "label-check": "Labelled C against measured C",
   curves: "Discharge curves compared",
@@ -25,7 +34,16 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
   const [note, setNote] = useState(from?.note ?? "");
 
   const parsed = useMemo(
-    () => chartState.safeParse({ v: 1, kind, group, maker: maker || undefined, cells: cells ? Number(cells) : undefined, title: title.trim() || defaultTitle[kind], note: note.trim() || undefined }),
+    () =>
+      chartState.safeParse({
+        v: 1,
+        kind,
+        group,
+        maker: maker || undefined,
+        cells: cells ? Number(cells) : undefined,
+        title: title.trim() || defaultTitle[kind],
+        note: note.trim() || undefined,
+      }),
     [kind, group, maker, cells, title, note],
   );
   const encoded = parsed.success ? encodeChartState(parsed.data) : null;
@@ -34,43 +52,97 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
 
   return (
     <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
-      <form className="card space-y-3" onSubmit={(e) => { e.preventDefault(); if (encoded) router.push(`/charts/view/${statePath(encoded)}`); }}>
+      <form
+        className="card space-y-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          if (encoded) router.push(`/charts/view/${statePath(encoded)}`);
+        }}
+      >
         <fieldset className="space-y-1">
           <legend className="text-sm font-medium">Chart</legend>
           {CHART_KINDS.map((k) => (
             <label key={k} className="flex items-start gap-2 text-sm">
-              <input type="radio" name="kind" value={k} checked={kind === k} onChange={() => setKind(k)} className="mt-1" />
+              <input
+                type="radio"
+                name="kind"
+                value={k}
+                checked={kind === k}
+                onChange={() => setKind(k)}
+                className="mt-1"
+              />
               <span>{CHART_KIND_LABELS[k]}</span>
             </label>
           ))}
         </fieldset>
-        <label className="block text-sm">Like-for-like group
+        <label className="block text-sm">
+          Like-for-like group
           <select name="group" value={group} onChange={(e) => setGroup(e.target.value)} className={input}>
-            {groups.map((g) => <option key={g.key} value={g.key}>{g.label} ({g.packCount} packs, {g.resultCount} results)</option>)}
+            {groups.map((g) => (
+              <option key={g.key} value={g.key}>
+                {g.label} ({g.packCount} packs, {g.resultCount} results)
+              </option>
+            ))}
           </select>
         </label>
         <div className="grid grid-cols-2 gap-3">
-          <label className="block text-sm">Maker
+          <label className="block text-sm">
+            Maker
             <select name="maker" value={maker} onChange={(e) => setMaker(e.target.value)} className={input}>
               <option value="">Any maker</option>
-              {makers.map((m) => <option key={m.slug} value={m.slug}>{m.name}</option>)}
+              {makers.map((m) => (
+                <option key={m.slug} value={m.slug}>
+                  {m.name}
+                </option>
+              ))}
             </select>
           </label>
-          <label className="block text-sm">Cells (S)
+          <label className="block text-sm">
+            Cells (S)
             <select name="cells" value={cells} onChange={(e) => setCells(e.target.value)} className={input}>
               <option value="">Any</option>
-              {[1, 2, 3, 4, 5, 6, 8, 10, 12].map((c) => <option key={c} value={c}>{c}S</option>)}
+              {[1, 2, 3, 4, 5, 6, 8, 10, 12].map((c) => (
+                <option key={c} value={c}>
+                  {c}S
+                </option>
+              ))}
             </select>
           </label>
         </div>
-        <label className="block text-sm">Title
-          <input name="title" value={title} onChange={(e) => setTitle(e.target.value)} placeholder={defaultTitle[kind]} maxLength={120} className={input} />
+        <label className="block text-sm">
+          Title
+          <input
+            name="title"
+            value={title}
+            onChange={(e) => setTitle(e.target.value)}
+            placeholder={defaultTitle[kind]}
+            maxLength={120}
+            className={input}
+          />
         </label>
-        <label className="block text-sm">Note (shown under the title)
-          <textarea name="note" value={note} onChange={(e) => setNote(e.target.value)} maxLength={400} rows={3} className={input} />
+        <label className="block text-sm">
+          Note (shown under the title)
+          <textarea
+            name="note"
+            value={note}
+            onChange={(e) => setNote(e.target.value)}
+            maxLength={400}
+            rows={3}
+            className={input}
+          />
         </label>
-        {errors.length ? <ul role="alert" className="text-sm text-warn">{errors.map((e) => <li key={e}>{e}</li>)}</ul> : null}
-        <button type="submit" disabled={!encoded} className="w-full rounded bg-cell-600 px-4 py-2 font-medium text-white hover:bg-cell-700 disabled:opacity-50">
+        {errors.length ? (
+          <ul role="alert" className="text-sm text-warn">
+            {errors.map((e) => (
+              <li key={e}>{e}</li>
+            ))}
+          </ul>
+        ) : null}
+        <button
+          type="submit"
+          disabled={!encoded}
+          className="w-full rounded bg-cell-600 px-4 py-2 font-medium text-white hover:bg-cell-700 disabled:opacity-50"
+        >
           Publish and get the permalink
         </button>
         <p className="muted text-xs">Publishing needs no account: the permalink holds the whole chart.</p>
@@ -78,8 +150,17 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
       <section aria-label="Preview" className="card p-2">
         {preview ? (
           // eslint-disable-next-line @next/next/no-img-element -- server-drawn SVG preview
-          <img src={`/charts/image/${preview}/chart.svg`} alt="Preview of the chart" width={800} height={500} className="h-auto w-full" data-testid="chart-preview" />
-        ) : <p className="muted p-4">Choose a group to see a preview.</p>}
+          <img
+            src={`/charts/image/${preview}/chart.svg`}
+            alt="Preview of the chart"
+            width={800}
+            height={500}
+            className="h-auto w-full"
+            data-testid="chart-preview"
+          />
+        ) : (
+          <p className="muted p-4">Choose a group to see a preview.</p>
+        )}
       </section>
     </div>
   );

@@ -1,12 +1,15 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { cachedGroupOptions, cachedMakers } from "@/lib/public-data";
+import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
 // The timer is only a safety net.
 export const revalidate = 3600;
-export const metadata: Metadata = { title: "Build a chart", description: "Build a chart from Sagline open data, then embed it or download it." };
+export const metadata: Metadata = {
+  title: "Build a chart",
+  description: "Build a chart from Sagline open data, then embed it or download it.",
+};
 
 export default async function NewChartPage() {
   const [groups, makers] = await Promise.all([cachedGroupOptions(3), cachedMakers()]);
@@ -18,7 +21,15 @@ export default async function NewChartPage() {
         carries everything you chose, so a published chart stays as you built it. No account needed.
       </p>
       <Suspense fallback={<p className="muted">Loading the builder…</p>}>
-        <ChartBuilder groups={groups.map((g) => ({ key: g.key, label: g.label ?? g.key, resultCount: g.resultCount, packCount: g.packCount }))} makers={makers.map((m) => ({ slug: m.slug, name: m.name }))} />
+        <ChartBuilder
+          groups={groups.map((g) => ({
+            key: g.key,
+            label: g.label ?? g.key,
+            resultCount: g.resultCount,
+            packCount: g.packCount,
+          }))}
+          makers={makers.map((m) => ({ slug: m.slug, name: m.name }))}
+        />
       </Suspense>
     </div>
   );

@@ -6,7 +6,15 @@ import { MAX_COMPARE } from "@/lib/compare";
 
 type Option = { slug: string; title: string };
 
-export function ComparePicker({ selected, options, group }: { selected: Option[]; options: Option[]; group: string | null }) {
+export function ComparePicker({
+  selected,
+  options,
+  group,
+}: {
+  selected: Option[];
+  options: Option[];
+  group: string | null;
+}) {
   const router = useRouter();
   const listId = useId();
   const [text, setText] = useState("");
@@ -29,7 +37,10 @@ export function ComparePicker({ selected, options, group }: { selected: Option[]
   };
   const add = () => {
     const q = text.trim().toLowerCase();
-    const hit = options.find((o) => o.title.toLowerCase() === q) ?? options.find((o) => o.slug === q) ?? options.find((o) => o.title.toLowerCase().includes(q));
+    const hit =
+      options.find((o) => o.title.toLowerCase() === q) ??
+      options.find((o) => o.slug === q) ??
+      options.find((o) => o.title.toLowerCase().includes(q));
     if (!q || !hit) return setError("Pick a pack from the list.");
     if (slugs.includes(hit.slug)) return setError("That pack is already compared.");
     setError(null);
@@ -40,26 +51,83 @@ export function ComparePicker({ selected, options, group }: { selected: Option[]
     <div className="card space-y-3" data-testid="compare-picker">
       <ol className="flex flex-wrap gap-2">
         {selected.map((s, i) => (
-          <li key={s.slug} className="flex items-center gap-1 rounded-md border border-ink/15 bg-paper px-2 py-1 text-sm dark:border-night-line dark:bg-night">
+          <li
+            key={s.slug}
+            className="flex items-center gap-1 rounded-md border border-ink/15 bg-paper px-2 py-1 text-sm dark:border-night-line dark:bg-night"
+          >
             <span className="num muted">{i + 1}.</span> <span>{s.title}</span>
-            <button type="button" onClick={() => move(i, -1)} disabled={i === 0} aria-label={`Move ${s.title} left`} className="px-1 disabled:opacity-30">←</button>
-            <button type="button" onClick={() => move(i, 1)} disabled={i === selected.length - 1} aria-label={`Move ${s.title} right`} className="px-1 disabled:opacity-30">→</button>
-            <button type="button" onClick={() => go(slugs.filter((x) => x !== s.slug))} aria-label={`Remove ${s.title}`} className="px-1 text-warn">×</button>
+            <button
+              type="button"
+              onClick={() => move(i, -1)}
+              disabled={i === 0}
+              aria-label={`Move ${s.title} left`}
+              className="px-1 disabled:opacity-30"
+            >
+              ←
+            </button>
+            <button
+              type="button"
+              onClick={() => move(i, 1)}
+              disabled={i === selected.length - 1}
+              aria-label={`Move ${s.title} right`}
+              className="px-1 disabled:opacity-30"
+            >
+              →
+            </button>
+            <button
+              type="button"
+              onClick={() => go(slugs.filter((x) => x !== s.slug))}
+              aria-label={`Remove ${s.title}`}
+              className="px-1 text-warn"
+            >
+              ×
+            </button>
           </li>
         ))}
       </ol>
       {selected.length < MAX_COMPARE ? (
-        <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); add(); }}>
+        <form
+          className="flex flex-wrap items-end gap-2"
+          onSubmit={(e) => {
+            e.preventDefault();
+            add();
+          }}
+        >
           <label className="flex-1 space-y-1">
-            <span className="text-xs font-medium">Add a pack ({selected.length} of {MAX_COMPARE})</span>
-            <input list={listId} value={text} onChange={(e) => setText(e.target.value)} placeholder="Type a maker or model" name="add"
-              className="w-full rounded-md border border-ink/20 bg-paper-raised px-2 py-1.5 text-sm dark:border-night-line dark:bg-night-sunk" />
-            <datalist id={listId}>{options.filter((o) => !slugs.includes(o.slug)).map((o) => <option key={o.slug} value={o.title} />)}</datalist>
+            <span className="text-xs font-medium">
+              Add a pack ({selected.length} of {MAX_COMPARE})
+            </span>
+            <input
+              list={listId}
+              value={text}
+              onChange={(e) => setText(e.target.value)}
+              placeholder="Type a maker or model"
+              name="add"
+              className="w-full rounded-md border border-ink/20 bg-paper-raised px-2 py-1.5 text-sm dark:border-night-line dark:bg-night-sunk"
+            />
+            <datalist id={listId}>
+              {options
+                .filter((o) => !slugs.includes(o.slug))
+                .map((o) => (
+                  <option key={o.slug} value={o.title} />
+                ))}
+            </datalist>
           </label>
-          <button type="submit" className="rounded-md bg-charge-500 px-3 py-1.5 text-sm font-medium text-night hover:bg-charge-400">Add</button>
+          <button
+            type="submit"
+            className="rounded-md bg-charge-500 px-3 py-1.5 text-sm font-medium text-night hover:bg-charge-400"
+          >
+            Add
+          </button>
         </form>
-      ) : <p className="muted text-sm">Six packs is the most one comparison shows.</p>}
-      {error ? <p role="alert" className="text-sm text-warn">{error}</p> : null}
+      ) : (
+        <p className="muted text-sm">Six packs is the most one comparison shows.</p>
+      )}
+      {error ? (
+        <p role="alert" className="text-sm text-warn">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }

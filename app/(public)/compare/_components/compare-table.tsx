@@ -1,5 +1,5 @@
 import { SummaryValue } from "@/components/summary-value";
-import type { PackSummary } from "@/db/queries/packs";
+import type { PackSummary } from "@/lib/catalogue";
 import { markDifferences, NOTABLE_DIFFERENCE, type ComparedPack, type Direction } from "@/lib/compare";
 import { exclusionText } from "@/lib/like-for-like";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
@@ -19,8 +19,18 @@ const ROWS: Row[] = [
 ];
 
 function MarkNote({ best, worseBy }: { best: boolean; worseBy: number | null }) {
-  if (best) return <span className="mt-0.5 inline-block rounded bg-cell-100 px-1 text-xs font-medium text-cell-700 dark:bg-cell-700/40 dark:text-cell-100">★ best</span>;
-  if (worseBy !== null && worseBy > NOTABLE_DIFFERENCE) return <span className="mt-0.5 inline-block text-xs text-charge-700 dark:text-charge-400">{Math.round(worseBy * 100)} % behind</span>;
+  if (best)
+    return (
+      <span className="mt-0.5 inline-block rounded bg-cell-100 px-1 text-xs font-medium text-cell-700 dark:bg-cell-700/40 dark:text-cell-100">
+        ★ best
+      </span>
+    );
+  if (worseBy !== null && worseBy > NOTABLE_DIFFERENCE)
+    return (
+      <span className="mt-0.5 inline-block text-xs text-charge-700 dark:text-charge-400">
+        {Math.round(worseBy * 100)} % behind
+      </span>
+    );
   return null;
 }
 
@@ -31,31 +41,56 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
   return (
     <div className="card -mx-4 overflow-x-auto p-0 sm:mx-0" tabIndex={0} role="region" aria-label="Comparison table">
       <table className="w-full min-w-[40rem] border-collapse text-sm" data-testid="compare-table">
-        <caption className="sr-only">Figures of the compared packs in one like-for-like group. ★ marks the best value of a row.</caption>
+        <caption className="sr-only">
+          Figures of the compared packs in one like-for-like group. ★ marks the best value of a row.
+        </caption>
         <thead>
           <tr>
-            <th scope="col" className={`${cell} ${head} w-32 sm:w-48`}><span className="sr-only">Figure</span></th>
+            <th scope="col" className={`${cell} ${head} w-32 sm:w-48`}>
+              <span className="sr-only">Figure</span>
+            </th>
             {packs.map((p) => (
               <th key={p.slug} scope="col" className={`${cell} text-left font-medium`}>
                 <a href={`/packs/${p.slug}`}>{packTitle(p)}</a>
-                <span className="num muted block text-xs font-normal">{labelSpec(p)} · {fmt(p.weightG, 0, "g")}</span>
+                <span className="num muted block text-xs font-normal">
+                  {labelSpec(p)} · {fmt(p.weightG, 0, "g")}
+                </span>
               </th>
             ))}
           </tr>
         </thead>
         <tbody>
           <tr>
-            <th scope="row" className={`${cell} ${head}`}>Results in this group</th>
-            {compared.map((c) => <td key={c.packId} className={`${cell} num`}>{c.n === 0 ? <span className="text-warn">none — figures missing</span> : c.n}</td>)}
+            <th scope="row" className={`${cell} ${head}`}>
+              Results in this group
+            </th>
+            {compared.map((c) => (
+              <td key={c.packId} className={`${cell} num`}>
+                {c.n === 0 ? <span className="text-warn">none — figures missing</span> : c.n}
+              </td>
+            ))}
           </tr>
           {ROWS.map((row) => {
             const summaries = compared.map((c) => c.figures[row.figure] as Summary | null);
-            const marks = row.better ? markDifferences(summaries.map((s) => s?.median ?? null), row.better) : [];
+            const marks = row.better
+              ? markDifferences(
+                  summaries.map((s) => s?.median ?? null),
+                  row.better,
+                )
+              : [];
             return (
               <tr key={row.figure}>
-                <th scope="row" className={`${cell} ${head}`}>{row.label}<span className="muted block text-xs">{row.better ? `${row.better} is better` : "not ranked: sizes differ"}</span></th>
+                <th scope="row" className={`${cell} ${head}`}>
+                  {row.label}
+                  <span className="muted block text-xs">
+                    {row.better ? `${row.better} is better` : "not ranked: sizes differ"}
+                  </span>
+                </th>
                 {summaries.map((s, i) => (
-                  <td key={compared[i]?.packId ?? i} className={`${cell} ${marks[i]?.best ? "bg-cell-50 dark:bg-cell-700/15" : ""}`}>
+                  <td
+                    key={compared[i]?.packId ?? i}
+                    className={`${cell} ${marks[i]?.best ? "bg-cell-50 dark:bg-cell-700/15" : ""}`}
+                  >
                     <SummaryValue s={s} digits={row.digits} unit={row.unit} />
                     {marks[i] ? <MarkNote {...marks[i]} /> : null}
                   </td>
@@ -64,22 +99,37 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
             );
           })}
           <tr>
-            <th scope="row" className={`${cell} ${head}`}>Sustained C<span className="muted block text-xs">higher is better</span></th>
+            <th scope="row" className={`${cell} ${head}`}>
+              Sustained C<span className="muted block text-xs">higher is better</span>
+            </th>
             {(() => {
-              const marks = markDifferences(compared.map((c) => c.sustainedC), "higher");
+              const marks = markDifferences(
+                compared.map((c) => c.sustainedC),
+                "higher",
+              );
               return compared.map((c, i) => (
                 <td key={c.packId} className={`${cell} num ${marks[i]?.best ? "bg-cell-50 dark:bg-cell-700/15" : ""}`}>
                   {c.sustainedC === null ? <span className="muted">—</span> : `${fmt(c.sustainedC, 1)}C`}
-                  {marks[i] ? <div><MarkNote {...marks[i]} /></div> : null}
+                  {marks[i] ? (
+                    <div>
+                      <MarkNote {...marks[i]} />
+                    </div>
+                  ) : null}
                 </td>
               ));
             })()}
           </tr>
           <tr>
-            <th scope="row" className={`${cell} ${head}`}>Left out</th>
+            <th scope="row" className={`${cell} ${head}`}>
+              Left out
+            </th>
             {compared.map((c) => (
               <td key={c.packId} className={`${cell} text-xs`} data-testid="excluded">
-                {c.excluded.length === 0 ? <span className="muted">nothing</span> : c.excluded.map((e) => <p key={e.reason}>{exclusionText(e)}</p>)}
+                {c.excluded.length === 0 ? (
+                  <span className="muted">nothing</span>
+                ) : (
+                  c.excluded.map((e) => <p key={e.reason}>{exclusionText(e)}</p>)
+                )}
               </td>
             ))}
           </tr>

@@ -1,8 +1,10 @@
 // GET /data/datapackage.json — the Data Package (v2) descriptor of the complete, dated and versioned dump.
-import { env } from "@/lib/env";
-import { apiGet, corsHeaders } from "@/lib/open-data/api";
+import { env } from "@/server/env";
+import { apiGet, corsHeaders } from "@/server/api";
 import { dataPackageDescriptor } from "@/lib/open-data/datapackage";
 
 export const GET = apiGet(async () =>
-  Response.json(dataPackageDescriptor(env().APP_URL, new Date()), { headers: { ...corsHeaders, "Cache-Control": "public, max-age=300" } }),
+  Response.json(dataPackageDescriptor(env().APP_URL, new Date()), {
+    headers: { ...corsHeaders, "Cache-Control": "public, max-age=300" },
+  }),
 );

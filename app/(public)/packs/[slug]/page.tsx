@@ -3,9 +3,9 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LineChart } from "@/components/charts/line-chart";
-import { WatchSlot } from "@/components/watch-slot";
+import { WatchSlot } from "./_components/watch-slot-client";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
-import { cachedPackDetail } from "@/lib/public-data";
+import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
 import { GroupFiguresTable } from "./_components/group-figures";
 import { ResultsList } from "./_components/results-list";
@@ -22,7 +22,12 @@ type Props = { params: Promise<{ slug: string }> };
 export async function generateMetadata(props: Props): Promise<Metadata> {
   const parsed = params.safeParse(await props.params);
   const detail = parsed.success ? await cachedPackDetail(parsed.data.slug) : null;
-  return detail ? { title: packTitle(detail.pack), description: `${labelSpec(detail.pack)}: measured figures from independent tests, method attached.` } : {};
+  return detail
+    ? {
+        title: packTitle(detail.pack),
+        description: `${labelSpec(detail.pack)}: measured figures from independent tests, method attached.`,
+      }
+    : {};
 }
 
 export default async function PackPage(props: Props) {
@@ -37,11 +42,18 @@ export default async function PackPage(props: Props) {
       <header className="flex flex-wrap items-start justify-between gap-3">
         <div className="space-y-1">
           <h1>{title}</h1>
-          <p className="num muted">{labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}</p>
+          <p className="num muted">
+            {labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}
+          </p>
         </div>
         <div className="flex gap-2">
           <WatchSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
-          <Link href={`/compare?packs=${pack.slug}`} className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk">Compare…</Link>
+          <Link
+            href={`/compare?packs=${pack.slug}`}
+            className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
+          >
+            Compare…
+          </Link>
         </div>
       </header>
 
@@ -50,7 +62,16 @@ export default async function PackPage(props: Props) {
         <p className="text-sm">
           <strong>Sustained C:</strong>{" "}
           {sustained ? (
-            <><span className="num" data-testid="sustained-c">{fmt(sustained.rateC, 1)}C</span> <span className="muted">— highest constant-current rate completed to cut-off without passing the stop temperature (<Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>; {sustained.groupLabel})</span></>
+            <>
+              <span className="num" data-testid="sustained-c">
+                {fmt(sustained.rateC, 1)}C
+              </span>{" "}
+              <span className="muted">
+                — highest constant-current rate completed to cut-off without passing the stop temperature (
+                <Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>;{" "}
+                {sustained.groupLabel})
+              </span>
+            </>
           ) : (
             <span className="muted">— no approved constant-current run has completed to cut-off yet</span>
           )}
@@ -60,11 +81,29 @@ export default async function PackPage(props: Props) {
 
       <section aria-labelledby="curves" className="space-y-3">
         <h2 id="curves">Discharge curves</h2>
-        {curves.length === 0 ? <p className="muted">No curves yet.</p> : (
-          <LineChart title="Voltage per cell against capacity delivered" xLabel="Capacity delivered (mAh)" yLabel="Voltage per cell (V)" xDigits={0} yDigits={3}
+        {curves.length === 0 ? (
+          <p className="muted">No curves yet.</p>
+        ) : (
+          <LineChart
+            title="Voltage per cell against capacity delivered"
+            xLabel="Capacity delivered (mAh)"
+            yLabel="Voltage per cell (V)"
+            xDigits={0}
+            yDigits={3}
             tableCaption={`Discharge curves of ${title}`}
-            notes={<p>The newest {curves.length} published results, downsampled on the server for drawing. Curves from different like-for-like groups are not comparable with each other: each is labelled with its method.</p>}
-            series={curves.map((c) => ({ id: String(c.resultId), label: c.label, href: `/results/${c.resultId}`, points: c.points.map((p) => ({ x: p.mah, y: p.vpc })) }))} />
+            notes={
+              <p>
+                The newest {curves.length} published results, downsampled on the server for drawing. Curves from
+                different like-for-like groups are not comparable with each other: each is labelled with its method.
+              </p>
+            }
+            series={curves.map((c) => ({
+              id: String(c.resultId),
+              label: c.label,
+              href: `/results/${c.resultId}`,
+              points: c.points.map((p) => ({ x: p.mah, y: p.vpc })),
+            }))}
+          />
         )}
       </section>
 

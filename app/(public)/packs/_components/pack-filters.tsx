@@ -4,28 +4,47 @@ import type { PackParams } from "@/lib/pack-query-params";
 import type { FilterOptions } from "./types";
 
 type Change = (patch: Partial<PackParams>, mode?: "push" | "replace") => void;
-const input = "w-full rounded-md border border-ink/20 bg-paper-raised px-2 py-1.5 text-sm dark:border-night-line dark:bg-night-sunk";
+const input =
+  "w-full rounded-md border border-ink/20 bg-paper-raised px-2 py-1.5 text-sm dark:border-night-line dark:bg-night-sunk";
 
 /**
  * A text or number box that commits a moment after the reader stops typing, and follows the URL (back
  * button) while it is not being edited.
  */
-function SyncedInput({ value, commit, ms = 350, ...rest }: { value: string; commit: (v: string) => void; ms?: number } & Omit<React.InputHTMLAttributes<HTMLInputElement>, "value" | "onChange">) {
+function SyncedInput({
+  value,
+  commit,
+  ms = 350,
+  ...rest
+}: { value: string; commit: (v: string) => void; ms?: number } & Omit<
+  React.InputHTMLAttributes<HTMLInputElement>,
+  "value" | "onChange"
+>) {
   const [draft, setDraft] = useState(value);
   const ref = useRef<HTMLInputElement>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => {
     if (document.activeElement !== ref.current) setDraft(value);
   }, [value]);
-  useEffect(() => () => { if (timer.current) clearTimeout(timer.current); }, []);
+  useEffect(
+    () => () => {
+      if (timer.current) clearTimeout(timer.current);
+    },
+    [],
+  );
   return (
-    <input ref={ref} {...rest} value={draft} className={input}
+    <input
+      ref={ref}
+      {...rest}
+      value={draft}
+      className={input}
       onChange={(e) => {
         const v = e.target.value;
         setDraft(v);
         if (timer.current) clearTimeout(timer.current);
         timer.current = setTimeout(() => commit(v), ms);
-      }} />
+      }}
+    />
   );
 }
 
@@ -34,66 +53,189 @@ function toNum(v: string): number | null {
   return v.trim() === "" || !Number.isFinite(n) || n < 0 ? null : n;
 }
 
-function Range({ label, unit, min, max, minKey, maxKey, onChange }: { label: string; unit: string; min: number | null; max: number | null; minKey: keyof PackParams; maxKey: keyof PackParams; onChange?: Change }) {
+function Range({
+  label,
+  unit,
+  min,
+  max,
+  minKey,
+  maxKey,
+  onChange,
+}: {
+  label: string;
+  unit: string;
+  min: number | null;
+  max: number | null;
+  minKey: keyof PackParams;
+  maxKey: keyof PackParams;
+  onChange?: Change;
+}) {
   return (
     <fieldset className="space-y-1">
-      <legend className="text-xs font-medium">{label} <span className="muted font-normal">({unit})</span></legend>
+      <legend className="text-xs font-medium">
+        {label} <span className="muted font-normal">({unit})</span>
+      </legend>
       <div className="flex items-center gap-1">
-        <SyncedInput type="number" inputMode="decimal" min={0} aria-label={`${label} from (${unit})`} placeholder="from" value={min === null ? "" : String(min)} commit={(v) => onChange?.({ [minKey]: toNum(v), page: 1 })} name={String(minKey)} />
+        <SyncedInput
+          type="number"
+          inputMode="decimal"
+          min={0}
+          aria-label={`${label} from (${unit})`}
+          placeholder="from"
+          value={min === null ? "" : String(min)}
+          commit={(v) => onChange?.({ [minKey]: toNum(v), page: 1 })}
+          name={String(minKey)}
+        />
         <span aria-hidden="true">–</span>
-        <SyncedInput type="number" inputMode="decimal" min={0} aria-label={`${label} to (${unit})`} placeholder="to" value={max === null ? "" : String(max)} commit={(v) => onChange?.({ [maxKey]: toNum(v), page: 1 })} name={String(maxKey)} />
+        <SyncedInput
+          type="number"
+          inputMode="decimal"
+          min={0}
+          aria-label={`${label} to (${unit})`}
+          placeholder="to"
+          value={max === null ? "" : String(max)}
+          commit={(v) => onChange?.({ [maxKey]: toNum(v), page: 1 })}
+          name={String(maxKey)}
+        />
       </div>
     </fieldset>
   );
 }
 
-export function PackFilters({ params, options, onChange }: { params: PackParams; options: FilterOptions; onChange?: Change }) {
+export function PackFilters({
+  params,
+  options,
+  onChange,
+}: {
+  params: PackParams;
+  options: FilterOptions;
+  onChange?: Change;
+}) {
   const [open, setOpen] = useState(false);
   const moreId = useId();
-  const active = [params.group, params.maker, params.cells, params.connector, params.minMah, params.maxMah, params.minC, params.maxC, params.minG, params.maxG].filter((v) => v !== null).length;
-  const select = (key: "connector" | "maker" | "group") => (e: React.ChangeEvent<HTMLSelectElement>) => onChange?.({ [key]: e.target.value || null, page: 1 });
+  const active = [
+    params.group,
+    params.maker,
+    params.cells,
+    params.connector,
+    params.minMah,
+    params.maxMah,
+    params.minC,
+    params.maxC,
+    params.minG,
+    params.maxG,
+  ].filter((v) => v !== null).length;
+  const select = (key: "connector" | "maker" | "group") => (e: React.ChangeEvent<HTMLSelectElement>) =>
+    onChange?.({ [key]: e.target.value || null, page: 1 });
   return (
-    <form role="search" aria-label="Filter packs" className="card grid gap-3 sm:grid-cols-2 lg:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
+    <form
+      role="search"
+      aria-label="Filter packs"
+      className="card grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
+      onSubmit={(e) => e.preventDefault()}
+    >
       <label className="space-y-1 sm:col-span-2">
         <span className="text-xs font-medium">Search maker and model</span>
-        <SyncedInput type="search" name="q" value={params.q} placeholder="e.g. ridge 1300" ms={250} commit={(v) => onChange?.({ q: v, page: 1 }, "replace")} autoComplete="off" />
+        <SyncedInput
+          type="search"
+          name="q"
+          value={params.q}
+          placeholder="e.g. ridge 1300"
+          ms={250}
+          commit={(v) => onChange?.({ q: v, page: 1 }, "replace")}
+          autoComplete="off"
+        />
       </label>
       {/* On a phone the other filters fold away behind one button; from sm up they are always shown. */}
-      <button type="button" className="rounded-md border border-ink/20 px-2 py-1.5 text-sm sm:hidden dark:border-night-line" aria-expanded={open} aria-controls={moreId} onClick={() => setOpen((v) => !v)}>
+      <button
+        type="button"
+        className="rounded-md border border-ink/20 px-2 py-1.5 text-sm sm:hidden dark:border-night-line"
+        aria-expanded={open}
+        aria-controls={moreId}
+        onClick={() => setOpen((v) => !v)}
+      >
         {open ? "Fewer filters" : `More filters${active ? ` (${active} on)` : ""}`}
       </button>
-      <div id={moreId} className={`${open ? "grid" : "hidden"} gap-3 sm:col-span-2 sm:grid sm:grid-cols-2 lg:col-span-4 lg:grid-cols-4`}>
-      <label className="space-y-1">
-        <span className="text-xs font-medium">Like-for-like group</span>
-        <select name="group" value={params.group ?? ""} onChange={select("group")} className={input}>
-          <option value="">any (no measured columns)</option>
-          {options.groups.map((g) => <option key={g.key} value={g.key}>{g.label} ({g.packCount} packs)</option>)}
-        </select>
-      </label>
-      <label className="space-y-1">
-        <span className="text-xs font-medium">Maker</span>
-        <select name="maker" value={params.maker ?? ""} onChange={select("maker")} className={input}>
-          <option value="">any</option>
-          {options.makers.map((m) => <option key={m.slug} value={m.slug}>{m.name}</option>)}
-        </select>
-      </label>
-      <label className="space-y-1">
-        <span className="text-xs font-medium">Cells in series</span>
-        <select name="cells" value={params.cells ?? ""} onChange={(e) => onChange?.({ cells: e.target.value ? Number(e.target.value) : null, page: 1 })} className={input}>
-          <option value="">any</option>
-          {options.cells.map((c) => <option key={c} value={c}>{c}S</option>)}
-        </select>
-      </label>
-      <label className="space-y-1">
-        <span className="text-xs font-medium">Connector</span>
-        <select name="connector" value={params.connector ?? ""} onChange={select("connector")} className={input}>
-          <option value="">any</option>
-          {options.connectors.map((c) => <option key={c} value={c}>{c}</option>)}
-        </select>
-      </label>
-      <Range label="Rated capacity" unit="mAh" min={params.minMah} max={params.maxMah} minKey="minMah" maxKey="maxMah" onChange={onChange} />
-      <Range label="Labelled C" unit="C" min={params.minC} max={params.maxC} minKey="minC" maxKey="maxC" onChange={onChange} />
-      <Range label="Weight" unit="g" min={params.minG} max={params.maxG} minKey="minG" maxKey="maxG" onChange={onChange} />
+      <div
+        id={moreId}
+        className={`${open ? "grid" : "hidden"} gap-3 sm:col-span-2 sm:grid sm:grid-cols-2 lg:col-span-4 lg:grid-cols-4`}
+      >
+        <label className="space-y-1">
+          <span className="text-xs font-medium">Like-for-like group</span>
+          <select name="group" value={params.group ?? ""} onChange={select("group")} className={input}>
+            <option value="">any (no measured columns)</option>
+            {options.groups.map((g) => (
+              <option key={g.key} value={g.key}>
+                {g.label} ({g.packCount} packs)
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="space-y-1">
+          <span className="text-xs font-medium">Maker</span>
+          <select name="maker" value={params.maker ?? ""} onChange={select("maker")} className={input}>
+            <option value="">any</option>
+            {options.makers.map((m) => (
+              <option key={m.slug} value={m.slug}>
+                {m.name}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="space-y-1">
+          <span className="text-xs font-medium">Cells in series</span>
+          <select
+            name="cells"
+            value={params.cells ?? ""}
+            onChange={(e) => onChange?.({ cells: e.target.value ? Number(e.target.value) : null, page: 1 })}
+            className={input}
+          >
+            <option value="">any</option>
+            {options.cells.map((c) => (
+              <option key={c} value={c}>
+                {c}S
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="space-y-1">
+          <span className="text-xs font-medium">Connector</span>
+          <select name="connector" value={params.connector ?? ""} onChange={select("connector")} className={input}>
+            <option value="">any</option>
+            {options.connectors.map((c) => (
+              <option key={c} value={c}>
+                {c}
+              </option>
+            ))}
+          </select>
+        </label>
+        <Range
+          label="Rated capacity"
+          unit="mAh"
+          min={params.minMah}
+          max={params.maxMah}
+          minKey="minMah"
+          maxKey="maxMah"
+          onChange={onChange}
+        />
+        <Range
+          label="Labelled C"
+          unit="C"
+          min={params.minC}
+          max={params.maxC}
+          minKey="minC"
+          maxKey="maxC"
+          onChange={onChange}
+        />
+        <Range
+          label="Weight"
+          unit="g"
+          min={params.minG}
+          max={params.maxG}
+          minKey="minG"
+          maxKey="maxG"
+          onChange={onChange}
+        />
       </div>
     </form>
   );

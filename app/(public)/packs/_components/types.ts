@@ -1,8 +1,15 @@
-import type { PackRow } from "@/db/queries/packs";
+import type { PackRow } from "@/lib/catalogue";
 
 /** A row as the public API sends it (no database id). */
 export type ApiPackRow = Omit<PackRow, "id">;
-export type ApiPackPage = { data: ApiPackRow[]; page: number; pageSize: number; pageCount: number; total: number; group: string | null };
+export type ApiPackPage = {
+  data: ApiPackRow[];
+  page: number;
+  pageSize: number;
+  pageCount: number;
+  total: number;
+  group: string | null;
+};
 export type FilterOptions = {
   makers: { slug: string; name: string }[];
   connectors: string[];

@@ -9,7 +9,7 @@ import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { reviewReasonLabels } from "@/lib/review-status-labels";
-import { cachedResult } from "@/lib/public-data";
+import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.
@@ -27,7 +27,14 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
   return r ? { title: `Result #${r.id} — ${packTitle(r.pack)}` } : {};
 }
 
-const statusWords: Record<string, string> = { pending: "submitted", approved: "approved", disputed: "disputed", rejected: "rejected", withdrawn: "withdrawn", changes_requested: "changes requested" };
+const statusWords: Record<string, string> = {
+  pending: "submitted",
+  approved: "approved",
+  disputed: "disputed",
+  rejected: "rejected",
+  withdrawn: "withdrawn",
+  changes_requested: "changes requested",
+};
 
 export default async function ResultPage(props: Props) {
   const parsed = params.safeParse(await props.params);
@@ -40,16 +47,26 @@ export default async function ResultPage(props: Props) {
   return (
     <article className="space-y-8">
       <header className="space-y-2">
-        <p className="muted text-sm"><Link href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</Link> · <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span></p>
+        <p className="muted text-sm">
+          <Link href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</Link> ·{" "}
+          <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span>
+        </p>
         <h1>Result #{r.id}</h1>
-        <div className="max-w-xl"><FlagResultForm resultId={r.id} /></div>
+        <div className="max-w-xl">
+          <FlagResultForm resultId={r.id} />
+        </div>
         {r.status === "disputed" ? (
           <p className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn" role="note">
-            Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible, marked.
+            Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible,
+            marked.
           </p>
         ) : null}
-        <p className="text-sm">Contributor: <strong data-testid="contributor">{r.contributor}</strong> · published {fmtDate(r.publishedAt)}</p>
-        <p className="text-sm">Like-for-like group: <span className="muted">{group.label}</span></p>
+        <p className="text-sm">
+          Contributor: <strong data-testid="contributor">{r.contributor}</strong> · published {fmtDate(r.publishedAt)}
+        </p>
+        <p className="text-sm">
+          Like-for-like group: <span className="muted">{group.label}</span>
+        </p>
       </header>
 
       <div className="grid gap-6 lg:grid-cols-[1fr_2fr]">
@@ -61,23 +78,50 @@ export default async function ResultPage(props: Props) {
         <section aria-labelledby="figures" className="card space-y-2">
           <h2 id="figures">Figures</h2>
           <FiguresList f={r.figures} />
-          <p className="muted text-xs">Computed by Sagline from the uploaded log. <Link href="/methods#figures">How each figure is defined</Link>.</p>
+          <p className="muted text-xs">
+            Computed by Sagline from the uploaded log. <Link href="/methods#figures">How each figure is defined</Link>.
+          </p>
         </section>
       </div>
 
       <section aria-labelledby="log" className="space-y-4">
         <h2 id="log">Log</h2>
-        <LineChart title="Voltage per cell over time" xLabel="Time (s)" yLabel="Voltage per cell (V)" xDigits={0} yDigits={3} tableCaption={`Result #${r.id}: voltage per cell over time`}
+        <LineChart
+          title="Voltage per cell over time"
+          xLabel="Time (s)"
+          yLabel="Voltage per cell (V)"
+          xDigits={0}
+          yDigits={3}
+          tableCaption={`Result #${r.id}: voltage per cell over time`}
           series={[{ id: "v", label: "voltage per cell", points: time.map((p) => ({ x: p.s, y: p.vpc })) }]}
-          notes={<p>{time.length} points kept of the log by largest-triangle downsampling; rest periods included.</p>} />
+          notes={<p>{time.length} points kept of the log by largest-triangle downsampling; rest periods included.</p>}
+        />
         <div className="grid gap-4 lg:grid-cols-2">
-          <LineChart title="Current over time" xLabel="Time (s)" yLabel="Current (A)" xDigits={0} yDigits={2} tableCaption={`Result #${r.id}: current`}
-            series={[{ id: "a", label: "current", points: time.map((p) => ({ x: p.s, y: p.a })), styleIndex: 1 }]} />
+          <LineChart
+            title="Current over time"
+            xLabel="Time (s)"
+            yLabel="Current (A)"
+            xDigits={0}
+            yDigits={2}
+            tableCaption={`Result #${r.id}: current`}
+            series={[{ id: "a", label: "current", points: time.map((p) => ({ x: p.s, y: p.a })), styleIndex: 1 }]}
+          />
           {temps.length ? (
-            <LineChart title="Pack temperature over time" xLabel="Time (s)" yLabel="Pack temperature (°C)" xDigits={0} yDigits={1} tableCaption={`Result #${r.id}: pack temperature`}
+            <LineChart
+              title="Pack temperature over time"
+              xLabel="Time (s)"
+              yLabel="Pack temperature (°C)"
+              xDigits={0}
+              yDigits={1}
+              tableCaption={`Result #${r.id}: pack temperature`}
               refLines={[{ y: r.stopTemperatureC, label: `stop ${r.stopTemperatureC} °C` }]}
-              series={[{ id: "t", label: "pack temperature", points: temps.map((p) => ({ x: p.s, y: p.tc })), styleIndex: 3 }]} />
-          ) : <p className="muted">The log has no temperature column.</p>}
+              series={[
+                { id: "t", label: "pack temperature", points: temps.map((p) => ({ x: p.s, y: p.tc })), styleIndex: 3 },
+              ]}
+            />
+          ) : (
+            <p className="muted">The log has no temperature column.</p>
+          )}
         </div>
       </section>
 
@@ -87,7 +131,10 @@ export default async function ResultPage(props: Props) {
           {r.events.map((e) => (
             <li key={e.id} className="flex flex-wrap gap-x-2">
               <span className="num muted">{fmtDate(e.at)}</span>
-              <span>{e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWords[e.from] ?? e.from} → ` : ""}<strong>{statusWords[e.to] ?? e.to}</strong></span>
+              <span>
+                {e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWords[e.from] ?? e.from} → ` : ""}
+                <strong>{statusWords[e.to] ?? e.to}</strong>
+              </span>
               {e.reason ? <span className="muted">({reviewReasonLabels[e.reason] ?? e.reason})</span> : null}
               {e.note ? <span className="muted">— {e.note}</span> : null}
             </li>

@@ -8,8 +8,11 @@ export function FlagChips({ flags }: { flags: Flag[] }) {
   return (
     <ul className="flex flex-wrap gap-1" aria-label="Plausibility flags">
       {flags.map((f, i) => (
-        <li key={`${f.code}-${i}`} title={f.message}
-          className="rounded-full border border-charge-400/60 bg-charge-50 px-2 py-0.5 text-xs text-charge-700 dark:border-charge-400/40 dark:bg-charge-700/20 dark:text-charge-100">
+        <li
+          key={`${f.code}-${i}`}
+          title={f.message}
+          className="rounded-full border border-charge-400/60 bg-charge-50 px-2 py-0.5 text-xs text-charge-700 dark:border-charge-400/40 dark:bg-charge-700/20 dark:text-charge-100"
+        >
           {flagLabel(f.code)}
         </li>
       ))}

@@ -2,10 +2,10 @@
 // A POST asking for a sign-in link is rate-limited per address and per IP first (429 + Retry-After).
 import { NextRequest } from "next/server";
 import { z } from "zod";
-import { handlers } from "@/lib/auth";
-import { clientIp } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { enforceSignInLimits } from "@/lib/sign-in-limits";
+import { handlers } from "@/server/auth";
+import { clientIp } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { enforceSignInLimits } from "@/server/sign-in-limits";
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 
@@ -15,7 +15,10 @@ export const GET = withPermission<Ctx>("public", async (req) => handlers.GET(toN
 
 export const POST = withPermission<Ctx>("public", async (req) => {
   if (new URL(req.url).pathname.endsWith("/signin/nodemailer")) {
-    const form = await req.clone().formData().catch(() => null);
+    const form = await req
+      .clone()
+      .formData()
+      .catch(() => null);
     const email = z.string().catch("").parse(form?.get("email"));
     await enforceSignInLimits(email, clientIp(req.headers));
   }

@@ -1,9 +1,9 @@
 // POST /api/v1/analyse — figures, curves and warnings for a log sent as the raw body (text/csv) or a multipart field `file`; nothing is stored.
-import { env } from "@/lib/env";
-import { limits, clientIp, enforceRateLimit } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { analyseChunks, previewOf } from "@/lib/uploads/analyse";
-import { logFromRequest, textOnly } from "@/lib/uploads/body";
+import { env } from "@/server/env";
+import { limits, clientIp, enforceRateLimit } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { analyseChunks, previewOf } from "@/server/uploads/analyse";
+import { logFromRequest, textOnly } from "@/server/uploads/body";
 import { analyseQuerySchema, searchParamsObject } from "@/lib/validations/analyse";
 
 export const dynamic = "force-dynamic";

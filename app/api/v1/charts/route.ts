@@ -6,10 +6,10 @@ import { z } from "zod";
 import { listSavedCharts } from "@/db/queries/open-data/charts";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
-import { withPermission } from "@/lib/route";
+import { withPermission } from "@/server/route";
 
 export const GET = apiGet(async (req) => {
   const charts = await listSavedCharts();
@@ -21,15 +21,30 @@ export const POST = withPermission("chart.save", async (req, _ctx, user) => {
   if (!user) throw new AppError("unauthenticated", "Please sign in first.");
   const body: unknown = await req.json().catch(() => null);
   const { state } = saveBody.parse(body);
-  const slug = state.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "chart";
+  const slug =
+    state.title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 40) || "chart";
   const id = `${slug}-${randomBytes(4).toString("hex")}`;
-  const row = await insertSavedChart({ id, kind: state.kind, title: state.title, note: state.note ?? null, state, createdById: user.id });
+  const row = await insertSavedChart({
+    id,
+    kind: state.kind,
+    title: state.title,
+    note: state.note ?? null,
+    state,
+    createdById: user.id,
+  });
   try {
     revalidatePath("/charts");
   } catch {
     // Outside a Next request (tests, scripts) there is no cache to revalidate.
   }
-  return Response.json({ data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) }, { status: 201 });
+  return Response.json(
+    { data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) },
+    { status: 201 },
+  );
 });
 
 export const OPTIONS = apiOptions;

@@ -1,6 +1,6 @@
 // GET /api/v1/makers — active makers, paginated, with their number of packs.
-import { cachedApiMakersPage } from "@/lib/public-data";
-import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/lib/open-data/api";
+import { cachedApiMakersPage } from "@/server/public-data";
+import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
 import { pageQuery } from "@/lib/validations/open-data";
 
 export const GET = apiGet(async (req) => {

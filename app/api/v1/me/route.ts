@@ -3,7 +3,7 @@
 // button: pack pages are static and never read cookies, so they ask here).
 import { isWatching } from "@/db/queries/watches";
 import { AppError } from "@/lib/errors";
-import { withPermission } from "@/lib/route";
+import { withPermission } from "@/server/route";
 import { publicName } from "@/lib/user-name";
 import { watchPackSchema } from "@/lib/validations/watch";
 
@@ -14,11 +14,17 @@ export const GET = withPermission("public", async (req, _ctx, user) => {
   let watching: boolean | undefined;
   if (raw !== null) {
     const parsed = watchPackSchema.safeParse({ packId: raw });
-    if (!parsed.success) throw new AppError("validation", "watching must be a pack id (a positive whole number).", { watching: ["Not a pack id."] });
+    if (!parsed.success)
+      throw new AppError("validation", "watching must be a pack id (a positive whole number).", {
+        watching: ["Not a pack id."],
+      });
     if (user) watching = await isWatching(user.id, parsed.data.packId);
   }
   return Response.json(
-    { user: user ? { name: publicName(user), role: user.role } : null, ...(watching === undefined ? {} : { watching }) },
+    {
+      user: user ? { name: publicName(user), role: user.role } : null,
+      ...(watching === undefined ? {} : { watching }),
+    },
     { headers: { "Cache-Control": "private, no-store" } },
   );
 });

@@ -1,6 +1,6 @@
 // GET /api/v1/openapi.json — the OpenAPI 3.1 description of the public read API.
-import { env } from "@/lib/env";
-import { apiGet, apiOptions, corsHeaders, API_CACHE_CONTROL } from "@/lib/open-data/api";
+import { env } from "@/server/env";
+import { apiGet, apiOptions, corsHeaders, API_CACHE_CONTROL } from "@/server/api";
 import { openApiDocument } from "@/lib/open-data/openapi";
 
 export const GET = apiGet(async () =>

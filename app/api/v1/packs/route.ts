@@ -1,17 +1,18 @@
 // GET /api/v1/packs — the pack catalogue with filters, fuzzy search, sorting and pages (public, CORS, ETag).
-import { withPermission } from "@/lib/route";
-import { cachedJson, preflight, withCors } from "@/lib/api-cache";
+import { withPermission } from "@/server/route";
+import { apiOptions, cachedJson, withCors } from "@/server/api";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { queryPacks } from "@/lib/pack-query";
-import { cachedPackRows } from "@/lib/public-data";
-import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
+import { cachedPackRows } from "@/server/public-data";
+import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
 import { parsePackQuery, toPackParams } from "@/lib/validations/pack-query";
 import { DATA_LICENCE } from "@/components/layout/site-footer";
 
 const handler = withPermission("public", async (req) => {
   await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
   const parsed = parsePackQuery(new URL(req.url).searchParams);
-  if (!parsed.success) throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));
+  if (!parsed.success)
+    throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));
   const params = toPackParams(parsed.data);
   const page = queryPacks(await cachedPackRows(params.group), params);
   return cachedJson(
@@ -34,5 +35,5 @@ export async function GET(req: Request, ctx: unknown): Promise<Response> {
 }
 
 export function OPTIONS(): Response {
-  return preflight();
+  return apiOptions();
 }

@@ -1,6 +1,6 @@
 // GET /api/v1/results — approved results with method cards and figures, paginated, filtered by pack, group and pack filters.
-import { cachedApiResultsPage } from "@/lib/public-data";
-import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/lib/open-data/api";
+import { cachedApiResultsPage } from "@/server/public-data";
+import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
 import { resultListQuery } from "@/lib/validations/open-data";
 
 export const GET = apiGet(async (req) => {

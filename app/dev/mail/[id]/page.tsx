@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { env } from "@/lib/env";
-import { getCaughtMail, linkify } from "@/lib/mail/catcher";
+import { env } from "@/server/env";
+import { getCaughtMail, linkify } from "@/server/mail/catcher";
 
 export const metadata: Metadata = { title: "Caught mail", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -23,10 +23,15 @@ export default async function DevMailMessagePage(props: { params: Promise<{ id: 
         <dt className="muted">From</dt>
         <dd className="break-all">{message.from ?? "—"}</dd>
         <dt className="muted">Received</dt>
-        <dd className="num">{new Date(message.receivedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</dd>
+        <dd className="num">
+          {new Date(message.receivedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}
+        </dd>
       </dl>
       {/* The text part, with its links made clickable; the HTML part is not rendered here on purpose. */}
-      <pre className="card overflow-x-auto whitespace-pre-wrap break-words font-sans text-sm leading-relaxed" data-testid="mail-body">
+      <pre
+        className="card overflow-x-auto whitespace-pre-wrap break-words font-sans text-sm leading-relaxed"
+        data-testid="mail-body"
+      >
         {linkify(message.text).map((part, i) =>
           part.href ? (
             <a key={i} href={part.href} className="break-all">

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
-import { loadChartData } from "@/lib/open-data/chart-data";
+import { loadChartData } from "@/server/open-data/load-chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
 import { decodeChartStateSegments } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
@@ -40,8 +40,13 @@ export default async function EmbedChartPage({ params }: Props) {
     <div id="sagline-embed" className="p-1">
       <ServerChartSvg data={data} />
       <p className="px-1 pt-1 text-xs text-ink-soft">
-        <a href={links.permalink} target="_blank" rel="noopener">View on Sagline</a> · Data{" "}
-        <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">{DATA_LICENCE_SHORT}</a>
+        <a href={links.permalink} target="_blank" rel="noopener">
+          View on Sagline
+        </a>{" "}
+        · Data{" "}
+        <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">
+          {DATA_LICENCE_SHORT}
+        </a>
       </p>
       <script dangerouslySetInnerHTML={{ __html: RESIZE_SCRIPT }} />
     </div>

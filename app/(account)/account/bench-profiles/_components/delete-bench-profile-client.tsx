@@ -9,7 +9,8 @@ export function DeleteBenchProfileButton({ id, name }: { id: number; name: strin
   const [pending, startTransition] = useTransition();
   const [error, setError] = useState<string | null>(null);
   const onClick = () => {
-    if (!window.confirm(`Delete the bench profile “${name}”? Results you submitted with it keep their method card.`)) return;
+    if (!window.confirm(`Delete the bench profile “${name}”? Results you submitted with it keep their method card.`))
+      return;
     startTransition(async () => {
       const res = await deleteBenchProfile(null, { id });
       if (res.ok) router.refresh();

@@ -1,13 +1,18 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { createBenchProfile, updateBenchProfile } from "@/db/mutations/bench-profiles";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { saveBenchProfileSchema } from "@/lib/validations/bench-profile";
 
 /** Create a bench profile, or update one of the user's own when an id is given. */
-export const saveBenchProfile = authedAction("bench-profile.manage", saveBenchProfileSchema, async ({ id, ...profile }, user) => {
-  const saved = id === null ? await createBenchProfile(user.id, profile) : await updateBenchProfile(user.id, id, profile);
-  revalidatePath("/account");
-  revalidatePath("/account/bench-profiles");
-  return saved;
-});
+export const saveBenchProfile = authedAction(
+  "bench-profile.manage",
+  saveBenchProfileSchema,
+  async ({ id, ...profile }, user) => {
+    const saved =
+      id === null ? await createBenchProfile(user.id, profile) : await updateBenchProfile(user.id, id, profile);
+    revalidatePath("/account");
+    revalidatePath("/account/bench-profiles");
+    return saved;
+  },
+);

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { emptyBenchProfile } from "@/lib/validations/bench-profile";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { BenchProfileForm } from "../_components/bench-profile-form-client";
 
 export const metadata: Metadata = { title: "New bench profile" };

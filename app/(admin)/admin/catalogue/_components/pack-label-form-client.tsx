@@ -26,7 +26,14 @@ export function PackLabelForm({ pack }: { pack: CataloguePack }) {
           const e = err?.fieldErrors?.[name]?.[0];
           return (
             <Field key={name} id={id} label={label} error={e}>
-              <input id={id} name={name} inputMode={mode} defaultValue={pack[name] ?? ""} className={inputClass} {...describedBy(id, e)} />
+              <input
+                id={id}
+                name={name}
+                inputMode={mode}
+                defaultValue={pack[name] ?? ""}
+                className={inputClass}
+                {...describedBy(id, e)}
+              />
             </Field>
           );
         })}
@@ -36,7 +43,9 @@ export function PackLabelForm({ pack }: { pack: CataloguePack }) {
       </Field>
       {err && !err.fieldErrors ? <Alert tone="error">{err.error}</Alert> : null}
       {state?.ok ? <Alert tone="success">Saved. Pages showing this pack are refreshed.</Alert> : null}
-      <button type="submit" className={buttonClass("primary")} disabled={pending}>{pending ? "Saving…" : "Save label"}</button>
+      <button type="submit" className={buttonClass("primary")} disabled={pending}>
+        {pending ? "Saving…" : "Save label"}
+      </button>
     </form>
   );
 }

@@ -1,9 +1,9 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { saveSiteSettings as saveSiteSettingsRow } from "@/db/mutations/site-settings";
-import { authedAction } from "@/lib/authed-action";
-import { cacheTags } from "@/lib/cache-tags";
-import { revalidateTags } from "@/lib/revalidate";
+import { authedAction } from "@/server/authed-action";
+import { cacheTags } from "@/server/cache-tags";
+import { revalidateTags } from "@/server/revalidate";
 import { siteSettingsSchema } from "@/lib/validations/site-settings";
 
 /** Admins set the site notice and pause or reopen submissions; audited; every page shows the change at once. */

@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { setUserRole as setUserRoleRow } from "@/db/mutations/users";
-import { authedAction } from "@/lib/authed-action";
+import { authedAction } from "@/server/authed-action";
 import { setUserRoleSchema } from "@/lib/validations/user-role";
 
 /** Admins change a user's role; the last admin cannot be demoted; every change is audited. */

@@ -18,8 +18,14 @@ import type { BenchProfileOption, Limits } from "../../_components/types";
 import { resubmitResult } from "../actions/resubmit-result";
 
 // The same values as a new submission, except that a new log is optional (empty keeps the stored one).
-const resubmitFormSchema = submitResultSchema.extend({ log: z.object({ key: z.string().max(300), filename: z.string().max(200) }) });
-const noteSchema = z.string().trim().min(1, "Say what you changed, for the moderator.").max(2000, "The answer can be at most 2000 characters.");
+const resubmitFormSchema = submitResultSchema.extend({
+  log: z.object({ key: z.string().max(300), filename: z.string().max(200) }),
+});
+const noteSchema = z
+  .string()
+  .trim()
+  .min(1, "Say what you changed, for the moderator.")
+  .max(2000, "The answer can be at most 2000 characters.");
 
 const str = (n: number | null) => (n === null ? "" : String(n));
 type MethodKey = keyof SubmitResultValues["method"];
@@ -28,12 +34,33 @@ function initialValues(r: OwnResult): SubmitResultValues {
   const m = r.method;
   return {
     idempotencyKey: crypto.randomUUID(),
-    pack: { mode: "existing", packId: String(r.pack.id), makerId: "", makerName: "", model: "", cellsInSeries: "", ratedCapacityMah: "", labelledContinuousC: "", labelledBurstC: "", weightG: "", connector: "" },
+    pack: {
+      mode: "existing",
+      packId: String(r.pack.id),
+      makerId: "",
+      makerName: "",
+      model: "",
+      cellsInSeries: "",
+      ratedCapacityMah: "",
+      labelledContinuousC: "",
+      labelledBurstC: "",
+      weightG: "",
+      connector: "",
+    },
     method: {
-      benchProfileId: str(m.benchProfileId), ambientTemperatureC: str(m.ambientTemperatureC), packStartTemperatureC: str(m.packStartTemperatureC),
-      loadMode: m.loadMode, loadCurrentA: str(m.loadCurrentA), cutoffVPerCell: str(m.cutoffVPerCell), stopTemperatureC: str(m.stopTemperatureC),
-      resistanceMethod: m.resistanceMethod, equipment: m.equipment, sampleRateHz: str(m.sampleRateHz), cyclesBeforeTest: str(m.cyclesBeforeTest),
-      testedOn: m.testedOn ?? "", notes: m.notes ?? "",
+      benchProfileId: str(m.benchProfileId),
+      ambientTemperatureC: str(m.ambientTemperatureC),
+      packStartTemperatureC: str(m.packStartTemperatureC),
+      loadMode: m.loadMode,
+      loadCurrentA: str(m.loadCurrentA),
+      cutoffVPerCell: str(m.cutoffVPerCell),
+      stopTemperatureC: str(m.stopTemperatureC),
+      resistanceMethod: m.resistanceMethod,
+      equipment: m.equipment,
+      sampleRateHz: str(m.sampleRateHz),
+      cyclesBeforeTest: str(m.cyclesBeforeTest),
+      testedOn: m.testedOn ?? "",
+      notes: m.notes ?? "",
     },
     log: { key: "", filename: "" },
     photoKeys: [],
@@ -41,9 +68,21 @@ function initialValues(r: OwnResult): SubmitResultValues {
   };
 }
 
-export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; profiles: BenchProfileOption[]; limits: Limits }) {
+export function ResubmitForm({
+  result,
+  profiles,
+  limits,
+}: {
+  result: OwnResult;
+  profiles: BenchProfileOption[];
+  limits: Limits;
+}) {
   const router = useRouter();
-  const form = useForm<SubmitResultValues, unknown, z.output<typeof resubmitFormSchema>>({ resolver: zodResolver(resubmitFormSchema), defaultValues: initialValues(result), mode: "onTouched" });
+  const form = useForm<SubmitResultValues, unknown, z.output<typeof resubmitFormSchema>>({
+    resolver: zodResolver(resubmitFormSchema),
+    defaultValues: initialValues(result),
+    mode: "onTouched",
+  });
   const [note, setNote] = useState("");
   const [noteError, setNoteError] = useState<string | null>(null);
   const [formError, setFormError] = useState<{ message: string; signIn?: boolean } | null>(null);
@@ -51,7 +90,13 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
   const [pending, startTransition] = useTransition();
   const isMethodKey = (k: string): k is MethodKey => Object.hasOwn(form.getValues("method"), k);
   const p = result.pack;
-  const facts = { cells: p.cellsInSeries, ratedMah: p.ratedCapacityMah, labelledC: p.labelledContinuousC, weightG: p.weightG, title: `${p.makerName} ${p.model}` };
+  const facts = {
+    cells: p.cellsInSeries,
+    ratedMah: p.ratedCapacityMah,
+    labelledC: p.labelledContinuousC,
+    weightG: p.weightG,
+    title: `${p.makerName} ${p.model}`,
+  };
 
   const send = (values: z.output<typeof resubmitFormSchema>) => {
     const checked = noteSchema.safeParse(note);
@@ -61,7 +106,12 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
     startTransition(async () => {
       const raw = form.getValues();
       const res = await resubmitResult(null, {
-        resultId: String(result.id), method: raw.method, log: values.log.key ? raw.log : null, photoKeys: raw.photoKeys, note, declaration: raw.declaration,
+        resultId: String(result.id),
+        method: raw.method,
+        log: values.log.key ? raw.log : null,
+        photoKeys: raw.photoKeys,
+        note,
+        declaration: raw.declaration,
       });
       if (res.ok) {
         router.push("/account");
@@ -71,10 +121,12 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
       if (res.code === "unauthenticated") return setFormError({ message: res.error, signIn: true });
       for (const [field, messages] of Object.entries(res.fieldErrors ?? {})) {
         if (field === "note") setNoteError(messages[0] ?? null);
-        else if (field === "log" || field === "photoKeys" || field === "declaration") form.setError(field, { type: "server", message: messages[0] });
+        else if (field === "log" || field === "photoKeys" || field === "declaration")
+          form.setError(field, { type: "server", message: messages[0] });
         else {
           const key = field.replace(/^method\./, "");
-          if (field.startsWith("method.") && isMethodKey(key)) form.setError(`method.${key}`, { type: "server", message: messages[0] });
+          if (field.startsWith("method.") && isMethodKey(key))
+            form.setError(`method.${key}`, { type: "server", message: messages[0] });
         }
       }
       setFormError({ message: res.fieldErrors ? "Some values need a look — see the marked fields." : res.error });
@@ -90,28 +142,53 @@ export function ResubmitForm({ result, profiles, limits }: { result: OwnResult; 
       <fieldset className="card min-w-0 space-y-4">
         <legend className="px-1 text-base font-semibold">Log</legend>
         <p className="text-sm">
-          Stored log: <span className="num">{result.logFilename}</span>. It is analysed again with the edited method card when you resubmit; upload a
-          corrected log only if the log itself was wrong.
+          Stored log: <span className="num">{result.logFilename}</span>. It is analysed again with the edited method
+          card when you resubmit; upload a corrected log only if the log itself was wrong.
         </p>
-        <LogStep form={form} facts={facts} limits={limits} preview={preview} previewState="idle" onPreview={setPreview} onRecheck={() => undefined} optional />
+        <LogStep
+          form={form}
+          facts={facts}
+          limits={limits}
+          preview={preview}
+          previewState="idle"
+          onPreview={setPreview}
+          onRecheck={() => undefined}
+          optional
+        />
       </fieldset>
       <fieldset className="card min-w-0 space-y-4">
         <legend className="px-1 text-base font-semibold">Photos, answer and declaration</legend>
         <PhotosStep form={form} limits={limits} existingPhotos={result.photoKeys.length}>
-          <Field id="resubmit-note" label="Your answer to the moderator" error={noteError ?? undefined} hint="What you changed, and why.">
-            <textarea id="resubmit-note" rows={4} value={note} onChange={(e) => setNote(e.target.value)} className={inputClass}
-              {...describedBy("resubmit-note", noteError ?? undefined, true)} />
+          <Field
+            id="resubmit-note"
+            label="Your answer to the moderator"
+            error={noteError ?? undefined}
+            hint="What you changed, and why."
+          >
+            <textarea
+              id="resubmit-note"
+              rows={4}
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+              className={inputClass}
+              {...describedBy("resubmit-note", noteError ?? undefined, true)}
+            />
           </Field>
         </PhotosStep>
       </fieldset>
       {formError && (
         <Alert tone="error">
-          {formError.message} {formError.signIn && <Link href={`/sign-in?callbackUrl=/submit/${result.id}`}>Sign in again.</Link>}
+          {formError.message}{" "}
+          {formError.signIn && <Link href={`/sign-in?callbackUrl=/submit/${result.id}`}>Sign in again.</Link>}
         </Alert>
       )}
       <div className="flex flex-wrap justify-between gap-2">
-        <Link href="/account" className={buttonClass("secondary")}>Cancel</Link>
-        <button type="submit" className={buttonClass("primary")} disabled={pending}>{pending ? "Resubmitting…" : "Resubmit for review"}</button>
+        <Link href="/account" className={buttonClass("secondary")}>
+          Cancel
+        </Link>
+        <button type="submit" className={buttonClass("primary")} disabled={pending}>
+          {pending ? "Resubmitting…" : "Resubmit for review"}
+        </button>
       </div>
     </form>
   );

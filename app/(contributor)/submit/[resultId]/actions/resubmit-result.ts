@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
-import { authedAction } from "@/lib/authed-action";
-import { resubmitResultFor } from "@/lib/submissions/resubmit";
+import { authedAction } from "@/server/authed-action";
+import { resubmitResultFor } from "@/server/submissions/resubmit";
 import { resubmitResultSchema } from "@/lib/validations/result";
 
 /** Answer a change request: edited method card (and optionally a new log or photos), back to pending. */

@@ -2,9 +2,16 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ServerChartSvg } from "@/components/charts/server-chart-svg";
-import { env } from "@/lib/env";
-import { loadChartData } from "@/lib/open-data/chart-data";
-import { PNG_DOWNLOADS, chartImagePath, chartLinks, embedSnippet, imageSnippet, pngPixels } from "@/lib/open-data/chart-links";
+import { env } from "@/server/env";
+import { loadChartData } from "@/server/open-data/load-chart-data";
+import {
+  PNG_DOWNLOADS,
+  chartImagePath,
+  chartLinks,
+  embedSnippet,
+  imageSnippet,
+  pngPixels,
+} from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartStateSegments, encodeChartState } from "@/lib/open-data/chart-state";
 import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
@@ -50,14 +57,19 @@ export default async function ChartPage({ params }: Props) {
   return (
     <div className="space-y-6">
       <div className="space-y-1">
-        <p className="muted text-sm"><Link href="/charts">Charts</Link> · {CHART_KIND_LABELS[state.kind]}</p>
+        <p className="muted text-sm">
+          <Link href="/charts">Charts</Link> · {CHART_KIND_LABELS[state.kind]}
+        </p>
         <h1>{state.title}</h1>
       </div>
       <figure className="card overflow-hidden p-2">
         <ServerChartSvg data={data} />
         <figcaption className="muted px-2 pt-2 text-sm">
-          Data: {ATTRIBUTION}, licensed <a href={DATA_LICENCE_URL} rel="license">{DATA_LICENCE_SHORT}</a>. Only results in
-          one like-for-like group are compared. {data.leftOut.join(" ")}
+          Data: {ATTRIBUTION}, licensed{" "}
+          <a href={DATA_LICENCE_URL} rel="license">
+            {DATA_LICENCE_SHORT}
+          </a>
+          . Only results in one like-for-like group are compared. {data.leftOut.join(" ")}
         </figcaption>
       </figure>
       <section className="grid gap-6 lg:grid-cols-[2fr_1fr]" aria-label="Use this chart">
@@ -79,17 +91,33 @@ export default async function ChartPage({ params }: Props) {
               const href = chartImagePath(state, "png", { width: d.width, scale: d.scale });
               return (
                 <li key={d.label}>
-                  <a href={`${href}${href.includes("?") ? "&" : "?"}download=1`} download>{d.label} ({px.width} × {px.height})</a>{" "}
+                  <a href={`${href}${href.includes("?") ? "&" : "?"}download=1`} download>
+                    {d.label} ({px.width} × {px.height})
+                  </a>{" "}
                   <span className="muted">— {d.note}</span>
                 </li>
               );
             })}
-            <li><a href={`${links.svg}?download=1`} download>SVG image</a> <span className="muted">— sharp at any size</span></li>
-            <li><a href={`/data/download/results.csv?group=${state.group}${state.maker ? `&maker=${state.maker}` : ""}${state.cells ? `&cells=${state.cells}` : ""}`}>The results behind it (CSV)</a></li>
+            <li>
+              <a href={`${links.svg}?download=1`} download>
+                SVG image
+              </a>{" "}
+              <span className="muted">— sharp at any size</span>
+            </li>
+            <li>
+              <a
+                href={`/data/download/results.csv?group=${state.group}${state.maker ? `&maker=${state.maker}` : ""}${state.cells ? `&cells=${state.cells}` : ""}`}
+              >
+                The results behind it (CSV)
+              </a>
+            </li>
           </ul>
           <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>
           <SaveChart state={state} />
-          <p><Link href={`/charts/new?from=${encodeURIComponent(encodeChartState(state))}`}>Change this chart</Link> · <a href={links.embed}>Open the embed</a></p>
+          <p>
+            <Link href={`/charts/new?from=${encodeURIComponent(encodeChartState(state))}`}>Change this chart</Link> ·{" "}
+            <a href={links.embed}>Open the embed</a>
+          </p>
         </div>
       </section>
     </div>

@@ -1,12 +1,16 @@
 // GET /data/download/{makers|packs|results}.{csv|json} — complete or filtered downloads (pack filters; results also by pack and group).
 import { z } from "zod";
 import { DATASETS } from "@/lib/open-data/datapackage";
-import { buildDownload } from "@/lib/open-data/downloads";
-import { apiGet, corsHeaders, parseQuery } from "@/lib/open-data/api";
+import { buildDownload } from "@/server/open-data/downloads";
+import { apiGet, corsHeaders, parseQuery } from "@/server/api";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { resultFilters } from "@/lib/validations/open-data";
 
-const fileParam = z.object({ file: z.string().regex(new RegExp(`^(${DATASETS.join("|")})\\.(csv|json)$`), "Ask for makers, packs or results as .csv or .json.") });
+const fileParam = z.object({
+  file: z
+    .string()
+    .regex(new RegExp(`^(${DATASETS.join("|")})\\.(csv|json)$`), "Ask for makers, packs or results as .csv or .json."),
+});
 
 export const GET = apiGet<{ file: string }>(async (req, params) => {
   const { file } = fileParam.parse(params);

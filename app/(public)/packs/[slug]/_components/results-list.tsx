@@ -12,19 +12,26 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
       {list.map((r) => (
         <li key={r.id} className="card space-y-2">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <Link href={`/results/${r.id}`} className="font-medium">Result #{r.id}</Link>
+            <Link href={`/results/${r.id}`} className="font-medium">
+              Result #{r.id}
+            </Link>
             <span className="muted text-xs">
               published {fmtDate(r.publishedAt)}
-              {r.status === "disputed" ? <span className="ml-2 rounded bg-warn-soft px-1.5 py-0.5 font-medium text-warn">disputed</span> : null}
+              {r.status === "disputed" ? (
+                <span className="ml-2 rounded bg-warn-soft px-1.5 py-0.5 font-medium text-warn">disputed</span>
+              ) : null}
             </span>
           </div>
           <p className="muted text-xs">{r.groupLabel}</p>
           <p className="num text-sm">
-            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · DC {fmt(r.dcResistanceMohm, 1, "mΩ")}
+            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmt(r.sagLimitedC, 1, "C")}{" "}
+            sag-limited · DC {fmt(r.dcResistanceMohm, 1, "mΩ")}
           </p>
           <details>
             <summary className="cursor-pointer text-sm">Method card</summary>
-            <div className="pt-2"><MethodCard m={r} compact /></div>
+            <div className="pt-2">
+              <MethodCard m={r} compact />
+            </div>
           </details>
         </li>
       ))}

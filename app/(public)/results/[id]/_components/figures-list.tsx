@@ -10,13 +10,32 @@ export function FiguresList({ f }: { f: Figures }) {
     ["Mean voltage under load", `${fmt(f.meanVoltageV, 2, "V")} (${fmt(f.meanVoltagePerCellV, 3, "V/cell")})`],
     ["Minimum voltage", `${fmt(f.minVoltageV, 2, "V")} (${fmt(f.minVoltagePerCellV, 3, "V/cell")})`],
     ["Hold voltage", fmt(f.holdVoltagePerCellV, 3, "V/cell")],
-    ["DC resistance", `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ/cell")})`, f.dcResistanceMethod === "iec-61960-two-level" ? "IEC 61960-3 two-level" : f.dcResistanceMethod === "step" ? "rest→load step at 1 s" : undefined],
-    ["DC resistance at 25 °C", fmt(f.resistanceAt25CMohm, 1, "mΩ"), `estimate from ${fmt(f.resistanceTemperatureC, 1, "°C")}: ${RESISTANCE_25C_SOURCE}`],
+    [
+      "DC resistance",
+      `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ/cell")})`,
+      f.dcResistanceMethod === "iec-61960-two-level"
+        ? "IEC 61960-3 two-level"
+        : f.dcResistanceMethod === "step"
+          ? "rest→load step at 1 s"
+          : undefined,
+    ],
+    [
+      "DC resistance at 25 °C",
+      fmt(f.resistanceAt25CMohm, 1, "mΩ"),
+      `estimate from ${fmt(f.resistanceTemperatureC, 1, "°C")}: ${RESISTANCE_25C_SOURCE}`,
+    ],
     ["Sag-limited C", fmt(f.sagLimitedC, 1, "C"), "from the DC resistance; see methods"],
     ["Label ratio", fmt(f.labelRatio, 2), "measured C ÷ labelled C"],
-    ["Temperature rise", fmt(f.temperatureRiseC, 1, "°C"), `${fmt(f.startTemperatureC, 1, "°C")} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
+    [
+      "Temperature rise",
+      fmt(f.temperatureRiseC, 1, "°C"),
+      `${fmt(f.startTemperatureC, 1, "°C")} → ${fmt(f.peakTemperatureC, 1, "°C")}`,
+    ],
     ["Time to cut-off", fmt(f.timeToCutoffS, 0, "s")],
-    ["Time to stop temperature", f.timeToStopTemperatureS === null ? "not reached" : fmt(f.timeToStopTemperatureS, 0, "s")],
+    [
+      "Time to stop temperature",
+      f.timeToStopTemperatureS === null ? "not reached" : fmt(f.timeToStopTemperatureS, 0, "s"),
+    ],
     ["Specific energy", fmt(f.specificEnergyWhKg, 0, "Wh/kg")],
     ["Specific power", fmt(f.specificPowerWKg, 0, "W/kg")],
     ["Samples", `${fmt(f.samples)} over ${fmt(f.durationS, 0, "s")}`],
@@ -26,7 +45,10 @@ export function FiguresList({ f }: { f: Figures }) {
       {rows.map(([k, v, note]) => (
         <div key={k}>
           <dt className="muted">{k}</dt>
-          <dd className="num">{v}{note ? <span className="muted block font-sans text-xs">{note}</span> : null}</dd>
+          <dd className="num">
+            {v}
+            {note ? <span className="muted block font-sans text-xs">{note}</span> : null}
+          </dd>
         </div>
       ))}
     </dl>

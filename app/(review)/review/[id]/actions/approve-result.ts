@@ -1,7 +1,7 @@
 "use server";
 // Approve a pending result: it is published, its pages are revalidated, the contributor and the pack's watchers are told.
-import { decideResult } from "@/db/mutations/review";
-import { authedAction } from "@/lib/authed-action";
+import { decideResult } from "@/server/review";
+import { authedAction } from "@/server/authed-action";
 import { approveResultSchema } from "@/lib/validations/review";
 
 export const approveResult = authedAction("result.review", approveResultSchema, (input, user) =>

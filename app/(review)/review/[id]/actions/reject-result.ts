@@ -1,7 +1,7 @@
 "use server";
 // Reject a pending result with a reason from the list (and a note, required for "other").
-import { decideResult } from "@/db/mutations/review";
-import { authedAction } from "@/lib/authed-action";
+import { decideResult } from "@/server/review";
+import { authedAction } from "@/server/authed-action";
 import { rejectResultSchema } from "@/lib/validations/review";
 
 export const rejectResult = authedAction("result.review", rejectResultSchema, (input, user) =>

@@ -1,7 +1,7 @@
 "use client";
 import { useActionState } from "react";
 import { Alert, buttonClass, Field, inputClass } from "@/components/ui/form";
-import type { ResolvedFlag } from "@/db/mutations/review";
+import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import type { ActionResult } from "@/lib/errors";
 import { resolveFlag } from "../actions/resolve-flag";
 import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";
@@ -22,14 +22,30 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
   return (
     <form action={action} className="space-y-2" aria-label={`Resolve flag ${flagId}`}>
       <input type="hidden" name="flagId" value={flagId} />
-      <Field id={noteId} label="Note (required when correcting)" error={state && !state.ok ? state.fieldErrors?.note?.[0] : undefined}>
+      <Field
+        id={noteId}
+        label="Note (required when correcting)"
+        error={state && !state.ok ? state.fieldErrors?.note?.[0] : undefined}
+      >
         <textarea id={noteId} name="note" rows={2} maxLength={2000} className={inputClass} />
       </Field>
       {state && !state.ok && !state.fieldErrors ? <Alert tone="error">{state.error}</Alert> : null}
       <div className="flex flex-wrap gap-2">
-        <button type="submit" name="resolution" value="kept" className={buttonClass("primary")} disabled={pending}>Keep</button>
-        <button type="submit" name="resolution" value="corrected" className={buttonClass("secondary")} disabled={pending}>Corrected</button>
-        <button type="submit" name="resolution" value="withdrawn" className={buttonClass("danger")} disabled={pending}>Withdraw result</button>
+        <button type="submit" name="resolution" value="kept" className={buttonClass("primary")} disabled={pending}>
+          Keep
+        </button>
+        <button
+          type="submit"
+          name="resolution"
+          value="corrected"
+          className={buttonClass("secondary")}
+          disabled={pending}
+        >
+          Corrected
+        </button>
+        <button type="submit" name="resolution" value="withdrawn" className={buttonClass("danger")} disabled={pending}>
+          Withdraw result
+        </button>
       </div>
     </form>
   );

@@ -4,9 +4,8 @@
 // the page (so screen readers announce what is put in it), and it takes focus so keyboard users are not
 // left on a removed button.
 import { createContext, useCallback, useContext, useEffect, useRef, useState, type ReactNode } from "react";
-import type { ResolvedFlag } from "@/db/mutations/review";
 import { alertClass } from "@/components/ui/form";
-import { flagResolutionMessage } from "@/lib/flag-resolution-message";
+import { flagResolutionMessage, type ResolvedFlag } from "@/lib/flag-resolution-message";
 
 type Announce = (resolved: ResolvedFlag, packTitle: string) => void;
 const AnnounceContext = createContext<Announce>(() => {});
@@ -25,8 +24,18 @@ export function ResolvedFlagNotice({ children }: { children: ReactNode }) {
   return (
     <AnnounceContext value={announce}>
       {/* Empty, it is visually hidden but stays in the accessibility tree (display:none would not be announced). */}
-      <div ref={region} tabIndex={-1} role="status" data-testid="flag-resolved" className={notice ? "scroll-mt-24 rounded-md" : "sr-only"}>
-        {notice ? <p key={notice.seq} className={alertClass("success")}>{notice.text}</p> : null}
+      <div
+        ref={region}
+        tabIndex={-1}
+        role="status"
+        data-testid="flag-resolved"
+        className={notice ? "scroll-mt-24 rounded-md" : "sr-only"}
+      >
+        {notice ? (
+          <p key={notice.seq} className={alertClass("success")}>
+            {notice.text}
+          </p>
+        ) : null}
       </div>
       {children}
     </AnnounceContext>

@@ -1,7 +1,7 @@
 "use server";
 // Resolve a reader flag: keep the result, correct it (with a note), or withdraw it.
-import { resolveReaderFlag } from "@/db/mutations/review";
-import { authedAction } from "@/lib/authed-action";
+import { resolveReaderFlag } from "@/server/review";
+import { authedAction } from "@/server/authed-action";
 import { resolveFlagSchema } from "@/lib/validations/review";
 
 export const resolveFlag = authedAction("flag.resolve", resolveFlagSchema, (input, user) =>

@@ -1,7 +1,7 @@
 // GET /api/v1/charts/{id} — one saved chart.
 import { getSavedChart } from "@/db/queries/open-data/charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartIdParam } from "@/lib/validations/open-data";
 

@@ -1,7 +1,7 @@
 // GET /api/v1/makers/{slug} — one maker.
-import { cachedApiMaker } from "@/lib/public-data";
+import { cachedApiMaker } from "@/server/public-data";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { slugParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ slug: string }>(async (req, params) => {

@@ -1,7 +1,7 @@
 // GET /api/v1/packs/{slug} — one pack as labelled, with its number of approved results.
-import { cachedApiPack } from "@/lib/public-data";
+import { cachedApiPack } from "@/server/public-data";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/lib/open-data/api";
+import { apiGet, apiJson, apiOptions } from "@/server/api";
 import { slugParam } from "@/lib/validations/open-data";
 
 export const GET = apiGet<{ slug: string }>(async (req, params) => {

@@ -1,11 +1,11 @@
 // POST /api/v1/uploads/photo — stores one label photo (raw image body), checked by its first bytes and size-limited; answers with its storage key.
 import { AppError } from "@/lib/errors";
-import { env } from "@/lib/env";
-import { enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { incomingPhotoKey, putObject } from "@/lib/storage";
-import { readLimited } from "@/lib/uploads/body";
-import { detectImage } from "@/lib/uploads/image";
+import { env } from "@/server/env";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { incomingPhotoKey, putObject } from "@/server/storage";
+import { readLimited } from "@/server/uploads/body";
+import { detectImage } from "@/server/uploads/image";
 
 export const dynamic = "force-dynamic";
 export const runtime = "nodejs";
@@ -16,12 +16,22 @@ export const POST = withPermission("upload.create", async (req, _ctx, user) => {
   if (!user) throw new AppError("unauthenticated", "Please sign in first.");
   const maxBytes = env().PHOTO_MAX_BYTES;
   const type = (req.headers.get("content-type") ?? "").split(";")[0]?.trim().toLowerCase() ?? "";
-  if (!type.startsWith("image/")) throw new AppError("unsupported_media_type", NOT_AN_IMAGE, { photos: [NOT_AN_IMAGE] });
+  if (!type.startsWith("image/"))
+    throw new AppError("unsupported_media_type", NOT_AN_IMAGE, { photos: [NOT_AN_IMAGE] });
   await enforceRateLimit(`upload:${user.id}`, limits.uploadPerUser);
-  const bytes = await readLimited(req, maxBytes, "photos", `The photo is larger than the limit of ${Math.round(maxBytes / (1024 * 1024))} MB.`);
+  const bytes = await readLimited(
+    req,
+    maxBytes,
+    "photos",
+    `The photo is larger than the limit of ${Math.round(maxBytes / (1024 * 1024))} MB.`,
+  );
   const image = detectImage(bytes);
-  if (!image) throw new AppError("validation", NOT_AN_IMAGE, { photos: [`${NOT_AN_IMAGE} Only label photos can be attached.`] });
+  if (!image)
+    throw new AppError("validation", NOT_AN_IMAGE, { photos: [`${NOT_AN_IMAGE} Only label photos can be attached.`] });
   const key = incomingPhotoKey(user.id, image.ext);
   await putObject(key, bytes, image.contentType);
-  return Response.json({ key, bytes: bytes.byteLength, contentType: image.contentType }, { status: 201, headers: { "Cache-Control": "no-store" } });
+  return Response.json(
+    { key, bytes: bytes.byteLength, contentType: image.contentType },
+    { status: 201, headers: { "Cache-Control": "no-store" } },
+  );
 });

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { getBenchProfileForUser, type BenchProfile } from "@/db/queries/bench-profiles";
-import { requirePageUser } from "@/lib/page-auth";
+import { requirePageUser } from "@/server/page-auth";
 import { benchProfileId, type BenchProfileFormValues } from "@/lib/validations/bench-profile";
 import { BenchProfileForm } from "../../_components/bench-profile-form-client";
 

@@ -1,12 +1,12 @@
 // GET /charts/image/{state}/chart.svg|chart.png — the chart drawn on the server (licence inside), at the asked
 // width/height (and PNG scale); ?download=1 saves it. A bad size answers 400 with what is allowed.
 import { z } from "zod";
-import { etagOf, ifNoneMatchHits } from "@/lib/open-data/api";
+import { etagOf, ifNoneMatchHits } from "@/server/api";
 import { AppError } from "@/lib/errors";
-import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
-import { loadChartData } from "@/lib/open-data/chart-data";
-import { svgToPng } from "@/lib/open-data/chart-png";
+import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
+import { loadChartData } from "@/server/open-data/load-chart-data";
+import { svgToPng } from "@/server/open-data/chart-png";
 import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { decodeChartState } from "@/lib/open-data/chart-state";
 import { renderChartSvg } from "@/lib/open-data/chart-svg";
@@ -22,10 +22,16 @@ export const GET = withPermission<{ params: Promise<{ state: string; file: strin
   const png = p.data.file === "chart.png";
   const search = new URL(req.url).searchParams;
   const sized = parseChartImageSize(search, png ? "png" : "svg");
-  if (!sized.ok) throw new AppError("bad_request", Object.values(sized.fieldErrors).flat().join(" "), sized.fieldErrors);
+  if (!sized.ok)
+    throw new AppError("bad_request", Object.values(sized.fieldErrors).flat().join(" "), sized.fieldErrors);
   const { width, height, scale } = sized.size;
   const svg = renderChartSvg(await loadChartData(state), { width, height });
-  const slug = state.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "chart";
+  const slug =
+    state.title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 60) || "chart";
   // The drawing carries the size, so its text plus the format and scale is the whole picture: equal tags
   // mean equal bytes, and a 304 skips the PNG render.
   const etag = etagOf(`${png ? `png@${scale}` : "svg"}\n${svg}`);
@@ -38,7 +44,8 @@ export const GET = withPermission<{ params: Promise<{ state: string; file: strin
     Link: `<${DATA_LICENCE_URL}>; rel="license"`,
   };
   if (search.get("download") === "1") {
-    headers["Content-Disposition"] = `attachment; filename="sagline-${slug}-${width * scale}x${height * scale}.${png ? "png" : "svg"}"`;
+    headers["Content-Disposition"] =
+      `attachment; filename="sagline-${slug}-${width * scale}x${height * scale}.${png ? "png" : "svg"}"`;
   }
   if (ifNoneMatchHits(req.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
   return new Response(png ? new Uint8Array(svgToPng(svg, scale)) : svg, { headers });

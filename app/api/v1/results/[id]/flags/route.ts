@@ -1,11 +1,11 @@
 // POST /api/v1/results/[id]/flags — any reader flags a published result (reason + note); rate-limited per IP.
 import { createHash } from "node:crypto";
 import { z } from "zod";
-import { fileReaderFlag } from "@/db/mutations/reader-flags";
+import { fileReaderFlag } from "@/server/review";
 import { AppError } from "@/lib/errors";
-import { env } from "@/lib/env";
-import { clientIp, enforceRateLimit, limits } from "@/lib/rate-limit";
-import { withPermission } from "@/lib/route";
+import { env } from "@/server/env";
+import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { withPermission } from "@/server/route";
 import { readerFlagSchema } from "@/lib/validations/review";
 
 export const dynamic = "force-dynamic";
@@ -21,7 +21,9 @@ export const POST = withPermission<{ params: Promise<{ id: string }> }>("public"
   });
   const input = readerFlagSchema.parse(body);
   // The reporter's address is kept only as a salted hash, enough to spot one person flagging repeatedly.
-  const reporterHash = createHash("sha256").update(`${env().AUTH_SECRET ?? "sagline"}:${ip}`).digest("hex");
+  const reporterHash = createHash("sha256")
+    .update(`${env().AUTH_SECRET ?? "sagline"}:${ip}`)
+    .digest("hex");
   const { flagId } = await fileReaderFlag(p.data.id, input, { userId: user?.id ?? null, reporterHash });
   return Response.json({ flag: { id: flagId, resultId: p.data.id, status: "open" } }, { status: 201 });
 });

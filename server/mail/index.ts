@@ -1,0 +1,2 @@
+export { sendMail, flushOutbox } from "./outbox";
+export * from "./templates";

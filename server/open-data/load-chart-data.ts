@@ -1,0 +1,70 @@
+// Prepares the data of one chart from its state through the tagged cached reads: one like-for-like group
+// at a time, saying what was left out and why.
+import "server-only";
+import { aggregateByMaker, aggregateByPack, groupLabel } from "@/lib/open-data/aggregate";
+import { MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/chart-data";
+import { plural } from "@/lib/open-data/chart-svg-kit";
+import type { ChartState } from "@/lib/open-data/chart-state";
+import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
+
+export async function loadChartData(state: ChartState): Promise<ChartData> {
+  const filters = { maker: state.maker, cells: state.cells };
+  // Tagged cached reads: a moderation decision in this group refreshes embeds, views and images at once.
+  const samples = await cachedGroupSamples(state.group, filters);
+  const packs = aggregateByPack(samples);
+  const base: ChartData = {
+    state,
+    groupLabel: groupLabel(samples[0]) ?? state.group,
+    counts: { packs: packs.length, results: samples.length },
+    leftOut: [],
+  };
+  if (state.maker || state.cells)
+    base.leftOut.push(
+      `Filtered to ${[state.maker ? `maker ${state.maker}` : "", state.cells ? `${state.cells}S packs` : ""].filter(Boolean).join(", ")}.`,
+    );
+  if (state.kind === "label-check") {
+    const points = packs.flatMap((p) => {
+      const m = p.figures.sagLimitedC;
+      return m
+        ? [{ label: `${p.makerName} ${p.model}`, labelledC: p.labelledContinuousC, measuredC: m.median, n: m.n }]
+        : [];
+    });
+    if (points.length < packs.length)
+      base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a sag-limited C left out.`);
+    return { ...base, labelCheck: points };
+  }
+  if (state.kind === "maker-ranking") {
+    const ranking = aggregateByMaker(packs).flatMap((m) =>
+      m.labelRatio
+        ? [{ label: m.makerName, labelRatio: m.labelRatio.median, packCount: m.packCount, resultCount: m.resultCount }]
+        : [],
+    );
+    return { ...base, ranking };
+  }
+  const series = await cachedGroupCurves(state.group, filters);
+  const seen = new Set<string>();
+  const curves: CurveLine[] = [];
+  for (const s of series) {
+    if (seen.has(s.packSlug)) continue;
+    seen.add(s.packSlug);
+    if (curves.length < MAX_CURVES) {
+      // Only samples under the main load: rest and recovery at the ends would draw spikes.
+      const peakA = Math.max(0, ...s.curve.map((p) => p.currentA));
+      curves.push({
+        label: `${s.makerName} ${s.model}`,
+        points: s.curve
+          .filter((p) => p.currentA >= peakA * 0.5)
+          .map((p) => ({
+            capacityPercent: (p.capacityMah / s.ratedCapacityMah) * 100,
+            voltagePerCellV: p.voltageV / s.cellsInSeries,
+          })),
+      });
+    }
+  }
+  if (seen.size > MAX_CURVES)
+    base.leftOut.push(
+      `${plural(seen.size - MAX_CURVES, "more pack")} not drawn (at most ${MAX_CURVES} curves, first result of each pack).`,
+    );
+  else base.leftOut.push("One curve per pack: its first approved result in the group.");
+  return { ...base, curves };
+}

@@ -1,0 +1,185 @@
+// Cached reads behind the public pages and the public API. Each carries the tags of server/cache-tags.ts, so
+// moderation's revalidateTag() refreshes exactly the pages that show the changed data. Pages call these,
+// never db/queries directly; integration tests call db/queries (unstable_cache needs a Next.js server).
+import "server-only";
+import { unstable_cache } from "next/cache";
+import { getComparison } from "@/db/queries/compare";
+import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
+import { listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
+import {
+  getApiPackBySlug,
+  getMakerBySlug,
+  listAllMakers,
+  listMakersPage,
+  type Page,
+} from "@/db/queries/open-data/packs";
+import { listGroupCurves, listResultsPage } from "@/db/queries/open-data/results";
+import { getPackDetail } from "@/db/queries/pack-detail";
+import { listActivePacks, listPackRows } from "@/db/queries/packs";
+import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
+import { getSiteSettings } from "@/db/queries/site-settings";
+import type { PackFilters, ResultFilters } from "@/lib/validations/open-data";
+import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/server/cache-tags";
+
+export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.results, t.packs], revalidate });
+
+export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.packs], revalidate });
+
+export function cachedPackRows(groupKey: string | null) {
+  const tags = groupKey ? [t.packs, t.results, t.group(groupKey)] : [t.packs, t.results];
+  return unstable_cache(() => listPackRows(groupKey), ["pack-rows", groupKey ?? "-"], { tags, revalidate })();
+}
+
+export function cachedPacksInGroup(groupKey: string) {
+  return unstable_cache(() => listPacksInGroup(groupKey), ["packs-in-group", groupKey], {
+    tags: [t.group(groupKey), t.results, t.packs],
+    revalidate,
+  })();
+}
+
+export function cachedMakerRanking(groupKey: string) {
+  return unstable_cache(() => rankMakersInGroup(groupKey), ["maker-ranking", groupKey], {
+    tags: [t.group(groupKey), t.results, t.packs],
+    revalidate,
+  })();
+}
+
+export function cachedNewestResults(limit: number) {
+  return unstable_cache(() => listNewestApprovedResults(limit), ["newest-results", String(limit)], {
+    tags: [t.results],
+    revalidate,
+  })();
+}
+
+export function cachedPackDetail(slug: string) {
+  return unstable_cache(() => getPackDetail(slug), ["pack-detail", slug], {
+    tags: [t.pack(slug), t.packs],
+    revalidate,
+  })();
+}
+
+export function cachedResult(id: number) {
+  return unstable_cache(() => getPublicResult(id), ["result", String(id)], {
+    tags: [t.result(id), t.results],
+    revalidate,
+  })();
+}
+
+export function cachedComparison(slugs: string[], group: string | null) {
+  const tags = [t.results, t.packs, ...slugs.map((s) => t.pack(s)), ...(group ? [t.group(group)] : [])];
+  return unstable_cache(() => getComparison(slugs, group), ["comparison", slugs.join(","), group ?? "-"], {
+    tags,
+    revalidate,
+  })();
+}
+
+/** Active makers with their active pack counts (/data's download form): catalogue edits and merges revalidate `packs`. */
+export const cachedMakers = unstable_cache(listAllMakers, ["open-data-makers"], { tags: [t.packs], revalidate });
+
+/** Like-for-like groups with their approved-result counts (/data's download form): every decision revalidates `results`. */
+export function cachedGroupOptions(minResults: number) {
+  return unstable_cache(() => listGroupOptions(minResults), ["group-options", String(minResults)], {
+    tags: [t.results, t.packs],
+    revalidate,
+  })();
+}
+
+// ── The public API's reads (app/api/v1) and chart data. Filters are validated by zod before they reach here.
+// The cache keeps one entry per key on disk, and anyone can make up queries, so only bounded key spaces are
+// cached: catalogue entities that exist (checked against the cached catalogue first), the unfiltered or
+// group/pack/maker/cells-filtered lists, and the first pages. Free-text and range filters, far pages and
+// unknown slugs or groups go straight to the database (an unknown one answers empty without a query).
+/** Pages beyond this are read from the database each time. */
+const CACHED_PAGES = 20;
+const CACHEABLE_FILTERS = new Set(["group", "pack", "maker", "cells"]);
+
+function keyOf(value: Record<string, unknown>): string {
+  return JSON.stringify(
+    Object.keys(value)
+      .filter((k) => value[k] !== undefined)
+      .sort()
+      .map((k) => [k, value[k]]),
+  );
+}
+
+async function knownGroup(key: string): Promise<boolean> {
+  return (await cachedGroups()).some((g) => g.key === key);
+}
+
+/** Only catalogue slugs that exist (and, for a group, one with published results) make a cache entry. */
+async function boundedFilters(
+  f: { group?: string; pack?: string; maker?: string } & Record<string, unknown>,
+): Promise<boolean> {
+  if (Object.keys(f).some((k) => f[k] !== undefined && !CACHEABLE_FILTERS.has(k))) return false;
+  if (f.group !== undefined && !(await knownGroup(f.group))) return false;
+  const catalogue = f.pack !== undefined || f.maker !== undefined ? await cachedPacks() : [];
+  if (f.pack !== undefined && !catalogue.some((p) => p.slug === f.pack)) return false;
+  if (f.maker !== undefined && !catalogue.some((p) => p.makerSlug === f.maker)) return false;
+  return true;
+}
+
+export function cachedApiMakersPage(page: Page) {
+  if (page.page > CACHED_PAGES) return listMakersPage(page);
+  return unstable_cache(() => listMakersPage(page), ["api-makers", keyOf(page)], { tags: [t.packs], revalidate })();
+}
+
+export async function cachedApiMaker(slug: string) {
+  if (!(await cachedPacks()).some((p) => p.makerSlug === slug)) return getMakerBySlug(slug); // makers without active packs are rare: no entry for them
+  return unstable_cache(() => getMakerBySlug(slug), ["api-maker", slug], {
+    tags: [t.packs, t.maker(slug)],
+    revalidate,
+  })();
+}
+
+export async function cachedApiPack(slug: string) {
+  if (!(await cachedPacks()).some((p) => p.slug === slug)) return getApiPackBySlug(slug);
+  return unstable_cache(() => getApiPackBySlug(slug), ["api-pack", slug], {
+    tags: [t.packs, t.results, t.pack(slug)],
+    revalidate,
+  })();
+}
+
+export async function cachedApiResultsPage(filters: ResultFilters, page: Page) {
+  if (page.page > CACHED_PAGES || !(await boundedFilters(filters))) return listResultsPage(filters, page);
+  const tags = [
+    t.results,
+    t.packs,
+    ...(filters.group ? [t.group(filters.group)] : []),
+    ...(filters.pack ? [t.pack(filters.pack)] : []),
+  ];
+  return unstable_cache(() => listResultsPage(filters, page), ["api-results", keyOf(filters), keyOf(page)], {
+    tags,
+    revalidate,
+  })();
+}
+
+export function cachedApiGroups(minResults: number) {
+  return unstable_cache(() => listGroups(minResults), ["api-groups", String(minResults)], {
+    tags: [t.results, t.packs],
+    revalidate,
+  })();
+}
+
+export async function cachedGroupSamples(groupKey: string, filters: PackFilters) {
+  if (!(await knownGroup(groupKey))) return [];
+  if (!(await boundedFilters(filters))) return listGroupSamples(groupKey, filters);
+  return unstable_cache(() => listGroupSamples(groupKey, filters), ["group-samples", groupKey, keyOf(filters)], {
+    tags: [t.results, t.packs, t.group(groupKey)],
+    revalidate,
+  })();
+}
+
+export async function cachedGroupCurves(groupKey: string, filters: ResultFilters) {
+  if (!(await knownGroup(groupKey))) return [];
+  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, filters);
+  return unstable_cache(() => listGroupCurves(groupKey, filters), ["group-curves", groupKey, keyOf(filters)], {
+    tags: [t.results, t.packs, t.group(groupKey)],
+    revalidate,
+  })();
+}
+
+/** The site settings, for every page's notice and the submit page: saving them revalidates `settings`. */
+export const cachedSiteSettings = unstable_cache(getSiteSettings, ["site-settings"], {
+  tags: [t.settings],
+  revalidate,
+});

@@ -1,0 +1,60 @@
+// Answering a change request: the contributor edits the method card (and may upload a corrected log or
+// add photos); the figures are recomputed from the stored log and the result goes back to pending with a
+// review event (changes_requested → pending) carrying their answer. Earlier events stay as they were.
+import "server-only";
+import { getResultForEdit } from "@/db/queries/submissions";
+import { resubmitOwnResult } from "@/db/mutations/results";
+import { afterResponse } from "@/server/after-response";
+import { AppError } from "@/lib/errors";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
+import { assertSubmissionsOpen } from "./pause";
+import type { SessionUser } from "@/server/session";
+import { MAX_PHOTOS, type ResubmitResultInput } from "@/lib/validations/result";
+import { moveFiles } from "./files";
+import { analyseForCard, checkFiles, resultFields, type PackFacts } from "./prepare";
+
+export async function resubmitResultFor(input: ResubmitResultInput, user: SessionUser): Promise<{ resultId: number }> {
+  const current = await getResultForEdit(input.resultId);
+  if (!current) throw new AppError("not_found", "That result does not exist.");
+  if (current.contributorId !== user.id)
+    throw new AppError("forbidden", "Only the contributor who submitted a result can resubmit it.");
+  if (current.status !== "changes_requested")
+    throw new AppError("conflict", "Only a result with changes requested can be resubmitted.");
+  if (current.photoKeys.length + input.photoKeys.length > MAX_PHOTOS) {
+    throw new AppError("validation", "Too many photos.", {
+      photoKeys: [`A result can have at most ${MAX_PHOTOS} photos; it has ${current.photoKeys.length} already.`],
+    });
+  }
+  await assertSubmissionsOpen();
+  await enforceRateLimit(`submit:${user.id}`, limits.submitPerUser);
+  const p = current.pack;
+  const facts: PackFacts = {
+    title: `${p.makerName} ${p.model}`,
+    cells: p.cellsInSeries,
+    ratedMah: p.ratedCapacityMah,
+    labelledC: p.labelledContinuousC,
+    weightG: p.weightG,
+  };
+  await checkFiles(input.log?.key ?? null, input.photoKeys, user.id);
+  const figured = await analyseForCard(input.log?.key ?? current.logKey, facts, input.method);
+  const files = await moveFiles(input.log?.key ?? null, input.log ? figured.sha256 : null, input.photoKeys);
+  try {
+    const fields = await resultFields(
+      input.method,
+      facts,
+      figured,
+      {
+        logKey: input.log ? files.logKey : current.logKey,
+        logFilename: input.log?.filename ?? current.logFilename,
+        photoKeys: [...current.photoKeys, ...files.photoKeys],
+      },
+      current.id,
+    );
+    await resubmitOwnResult(current.id, user.id, fields, input.note);
+  } catch (err) {
+    await files.undo();
+    throw err;
+  }
+  afterResponse(files.discardDrafts);
+  return { resultId: current.id };
+}
