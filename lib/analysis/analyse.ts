@@ -7,6 +7,7 @@ import { DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL } from "./arrhenius";
 import { lttb } from "./downsample";
 import { LogError } from "./errors";
 import { computeFigures } from "./figures";
+import { DEFAULT_RATING_STOP_TEMPERATURE_C } from "./ratings";
 import { type ChunkSource, DEFAULT_MAX_BYTES, readRows, textChunks } from "./reader";
 import { SampleSink } from "./sample-sink";
 import type { AnalyseOptions, Analysis, CurvePoint, ResolvedOptions } from "./types";
@@ -49,6 +50,7 @@ export function resolveOptions(options: AnalyseOptions = {}): ResolvedOptions {
   const resolved: ResolvedOptions = {
     ...options,
     holdDelayS: options.holdDelayS ?? DEFAULT_HOLD_DELAY_S,
+    ratingStopTemperatureC: options.stopTemperatureC ?? DEFAULT_RATING_STOP_TEMPERATURE_C,
     maxBytes: options.maxBytes ?? DEFAULT_MAX_BYTES,
     curvePoints: Math.min(options.curvePoints ?? DEFAULT_CURVE_POINTS, MAX_CURVE_POINTS),
     loadThresholdA: options.loadThresholdA ?? DEFAULT_LOAD_THRESHOLD_A,
@@ -67,7 +69,7 @@ export async function analyseLog(chunks: ChunkSource, options?: AnalyseOptions):
   const opts = resolveOptions(options);
   const acc = new Accumulator({
     holdDelayS: opts.holdDelayS,
-    stopTemperatureC: opts.stopTemperatureC ?? Number.POSITIVE_INFINITY,
+    stopTemperatureC: opts.ratingStopTemperatureC,
     loadThresholdA: opts.loadThresholdA,
   });
   const sink = new SampleSink(acc, opts.mapping);
@@ -95,6 +97,7 @@ export async function analyseLog(chunks: ChunkSource, options?: AnalyseOptions):
     curve,
     parameters: {
       holdDelayS: opts.holdDelayS,
+      stopTemperatureC: opts.ratingStopTemperatureC,
       activationEnergyKJPerMol: opts.activationEnergyKJPerMol,
       nominalVPerCell: opts.nominalVPerCell,
       floorVPerCell: opts.floorVPerCell,

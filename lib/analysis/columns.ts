@@ -22,6 +22,8 @@ export type ColumnMapping = {
   currentUnit?: CurrentUnit;
   temperatureUnit?: TemperatureUnit;
   hasHeader?: boolean;
+  /** Which sign the log gives discharge current; detected from the data when not given. */
+  dischargeSign?: "positive" | "negative";
 };
 
 export type SampleRow = { fields: string[]; line: number };

@@ -2,7 +2,7 @@
 // throwaway database never collide.
 import { db } from "@/db";
 import { makers, packs, results, users, type ReviewStatus } from "@/db/schema";
-import type { Figures } from "@/lib/analysis";
+import { sustainedRule, type Figures } from "@/lib/analysis";
 
 export function figures(over: Partial<Figures> = {}): Figures {
   return {
@@ -13,7 +13,10 @@ export function figures(over: Partial<Figures> = {}): Figures {
     resistanceTemperatureC: 24, sagLimitedC: 40, capacityRatio: 0.96, labelRatio: 0.53, specificEnergyWhKg: 120,
     specificPowerWKg: 2000, mainDischargeCurrentA: 26, mainDischargeDurationS: 580, mainDischargeCapacityMah: 1240,
     mainDischargeEnergyWh: 18, restVoltageV: 16.8, minCellVoltageV: 3.28, dischargeCurrentSign: "positive", cellsSource: "given",
-    warnings: [], ...over,
+    warnings: [],
+    reachedCutoff: true, cutoffSource: "stated", dcResistanceIndicative: false, sagLimitedCEstimate: 40, sagLimitedCAssumptions: null,
+    sustainedCMeasured: null, sustainedCReason: "no-temperature", sustainedCRule: sustainedRule(3.3, 60), sustainedLabelRatio: null, cellSpreadV: null,
+    sampleIntervalS: 1, discharges: [], headlineDischarge: 1, retention: null, warningCodes: [], ...over,
   };
 }
 

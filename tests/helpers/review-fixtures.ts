@@ -2,7 +2,7 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
-import type { Figures } from "@/lib/analysis";
+import { sustainedRule, type Figures } from "@/lib/analysis";
 
 export function figures(over: Partial<Figures> = {}): Figures {
   return {
@@ -13,6 +13,9 @@ export function figures(over: Partial<Figures> = {}): Figures {
     sagLimitedC: 50, capacityRatio: 1250 / 1300, labelRatio: 0.5, specificEnergyWhKg: 120, specificPowerWKg: 900,
     mainDischargeCurrentA: 13, mainDischargeDurationS: 590, mainDischargeCapacityMah: 1250, mainDischargeEnergyWh: 18.5,
     restVoltageV: 16.8, minCellVoltageV: null, dischargeCurrentSign: "positive", cellsSource: "rest-voltage", warnings: [],
+    reachedCutoff: true, cutoffSource: "stated", dcResistanceIndicative: false, sagLimitedCEstimate: 50, sagLimitedCAssumptions: null,
+    sustainedCMeasured: null, sustainedCReason: "no-temperature", sustainedCRule: sustainedRule(3.3, 60), sustainedLabelRatio: null, cellSpreadV: null,
+    sampleIntervalS: 1, discharges: [], headlineDischarge: 1, retention: null, warningCodes: [],
     ...over,
   };
 }

@@ -81,11 +81,16 @@ function mutate(text: string, mutations: Mutation[]): string {
 /** Plain checks, one expect at the end: expect() per value would dominate the run time. */
 function checkFinite(a: Analysis): void {
   const bad: string[] = [];
-  for (const [key, value] of Object.entries(a.figures)) {
-    if (typeof value === "number" && !Number.isFinite(value)) bad.push(`${key} = ${value}`);
-    else if (key === "warnings" && !(Array.isArray(value) && value.every((w) => typeof w === "string"))) bad.push("warnings");
-    else if (key !== "warnings" && typeof value !== "number" && value !== null && typeof value !== "string") bad.push(key);
-  }
+  // Every number anywhere in the figures (discharges, assumptions, retention included) is finite.
+  const visit = (key: string, value: unknown): void => {
+    if (typeof value === "number") {
+      if (!Number.isFinite(value)) bad.push(`${key} = ${value}`);
+    } else if (Array.isArray(value)) value.forEach((v, k) => visit(`${key}[${k}]`, v));
+    else if (value !== null && typeof value === "object") for (const [k, v] of Object.entries(value)) visit(`${key}.${k}`, v);
+    else if (value !== null && typeof value !== "string" && typeof value !== "boolean") bad.push(key);
+  };
+  visit("figures", a.figures);
+  if (!a.figures.warnings.every((w) => typeof w === "string")) bad.push("warnings");
   for (const p of a.curve) {
     if (![p.timeS, p.voltageV, p.currentA, p.capacityMah].every(Number.isFinite)) bad.push(`curve point ${JSON.stringify(p)}`);
     if (p.temperatureC !== null && !Number.isFinite(p.temperatureC)) bad.push("curve temperature");
