@@ -15,6 +15,8 @@ export {
   DEFAULT_RATING_STOP_TEMPERATURE_C, FLOOR_HELD_SHARE, MAX_CURRENT_SPREAD, MIN_DELIVERED_SHARE, sustainedRule,
 } from "./ratings";
 export type { ColumnMapping, ColumnRef } from "./columns";
+export { columnMappingSchema, columnRefSchema, parseMappingJson, MAPPING_JSON_MAX, type MappingParse, type ParsedColumnMapping } from "./mapping-schema";
+export { previewLog, PREVIEW_CHARS, PREVIEW_ROWS, type LogTablePreview } from "./preview";
 export { LogError, isLogError, type LogErrorCode } from "./errors";
 export { DEFAULT_MAX_BYTES, readRows, textChunks, type ChunkSource, type RowHandler } from "./reader";
 export type { Dialect } from "./dialect";
@@ -23,7 +25,10 @@ export {
   arrheniusFactor, resistanceAtTemperature,
 } from "./arrhenius";
 export { sagLimitedC, sagLimitedCurrentA, twoLevelResistanceOhm } from "./resistance";
-export { groupKey, labelForGroupKey, ambientBand, ageBand, cutoffBand, rateBand, RESISTANCE_METHODS, type GroupKey, type MethodCardForKey, type ResistanceMethod } from "./group-key";
+export {
+  groupKey, groupKeyForAnalysis, analysedResistanceBand, labelForGroupKey, ambientBand, ageBand, cutoffBand, rateBand, NO_DC_RESISTANCE_KEY,
+  RESISTANCE_METHODS, type AnalysedResistanceMethod, type GroupKey, type MethodCardForKey, type ResistanceMethod,
+} from "./group-key";
 export { median, medianAbsoluteDeviation, modifiedZScores, outlierIndexes, summarise, MODIFIED_Z_THRESHOLD } from "./statistics";
 export {
   retentionTrend, retentionSeries, projectTo80, END_OF_LIFE_RETAINED, MAX_PROJECTION_BEYOND_SPAN, MIN_POINTS_FOR_PROJECTION,

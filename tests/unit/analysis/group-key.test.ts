@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ageBand, ambientBand, cutoffBand, groupKey, labelForGroupKey, rateBand, resistanceBand } from "@/lib/analysis/group-key";
+import { NO_DC_RESISTANCE_KEY, ageBand, ambientBand, cutoffBand, groupKey, groupKeyForAnalysis, labelForGroupKey, rateBand, resistanceBand } from "@/lib/analysis/group-key";
 
 // Band edges are Sagline's own rules, published in content/methods-figures.md.
 describe("like-for-like group key", () => {
@@ -87,5 +87,36 @@ describe("labelForGroupKey", () => {
     for (const bad of ["", "dc-step", "dc-step_a15-25_co3.3_r5-10", "dc-step_a15-26_co3.3_r5-10_new", "dc-step_a15-25_co3.33_r5-10_new", "dc-step_a15-25_co3.3_r5-9_new", "dc-step_a15-25_co3.3_r5-10_old", "x_y_z_w_v"]) {
       expect(labelForGroupKey(bad), bad).toBeNull();
     }
+  });
+});
+
+describe("group key from what the log shows (the analysis's resistance method, not the card's)", () => {
+  const card = { ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 13, ratedMah: 1300, cyclesBeforeTest: 0 };
+
+  it("a card that says 'charger read-out' but whose log gave a step resistance is grouped as DC step", () => {
+    const typed = groupKey({ ...card, resistanceMethod: "charger-readout" });
+    const shown = groupKeyForAnalysis("step", card);
+    expect(typed.parts.resistance).toBe("charger-readout");
+    expect(shown.key).toBe("dc-step_a15-25_co3.3_r5-10_new");
+    expect(groupKeyForAnalysis("iec-61960-two-level", card).parts.resistance).toBe("iec-61960-two-level");
+  });
+
+  it("a log with no DC resistance gets its own readable part", () => {
+    const g = groupKeyForAnalysis(null, card);
+    expect(g.key).toBe(`${NO_DC_RESISTANCE_KEY}_a15-25_co3.3_r5-10_new`);
+    expect(labelForGroupKey(g.key)).toBe("no DC resistance in the log · 15–25 °C · 3.3 V cut-off · 5–10C · new");
+    // A typed method that happens to be spelt like it stays an "other" method.
+    expect(groupKey({ ...card, resistanceMethod: "dc-none" }).parts.resistance).toBe("other-dc-none");
+  });
+
+  it("labelForGroupKey reads back every analysed key (property, 1,000 cards)", () => {
+    const num = (min: number, max: number) => fc.oneof(fc.double({ min, max, noNaN: true }), fc.constant(Number.NaN));
+    fc.assert(
+      fc.property(fc.constantFrom("iec-61960-two-level" as const, "step" as const, null), num(-30, 80), num(2, 4.3), num(0.1, 400), fc.double({ min: 100, max: 30_000, noNaN: true }), num(0, 2000), (m, a, co, i, mah, cyc) => {
+        const g = groupKeyForAnalysis(m, { ambientC: a, cutoffVPerCell: co, loadCurrentA: i, ratedMah: mah, cyclesBeforeTest: cyc });
+        expect(labelForGroupKey(g.key)).toBe(g.label);
+      }),
+      { numRuns: 1000 },
+    );
   });
 });
