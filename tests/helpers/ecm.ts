@@ -3,3 +3,4 @@ export {
   EcmSimulator, csvChunks, csvHeader, csvLine, generateLog, ocvPerCellV, seededRandom, toCsv,
   type CsvColumn, type CsvDialect, type EcmOptions, type EcmRow, type EcmTruth,
 } from "@/lib/synthetic/equivalent-circuit";
+export { clock, decimate } from "./logs";
