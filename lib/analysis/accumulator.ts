@@ -5,7 +5,7 @@
  * Samples arrive in column batches; the loop keeps its state in locals for speed.
  */
 import { CurveBuckets, type RawCurvePoint } from "./curve-buckets";
-import { GapWatch, IntervalSample } from "./intervals";
+import { GAP_FACTOR, GAP_MIN_S, GapWatch, IntervalSample } from "./intervals";
 import { CHARGE_PHASE_MIN_S, DirectionTotals } from "./phases";
 import { Stretch, type StretchSettings } from "./stretch";
 import type { SampleBatch } from "./sample-batch";
@@ -14,14 +14,6 @@ export { DirectionTotals } from "./phases";
 export { SampleBatch } from "./sample-batch";
 
 export type AccumulatorSettings = StretchSettings & { stopTemperatureC: number };
-/** Intervals shorter than this are never holes in the log, whatever the sampling (s). */
-export const GAP_MIN_S = 2;
-/**
- * A hole: an interval beside a load sample more than this many times longer than the intervals on
- * either side of it (Sagline's rule; local, so a logger that writes rest rows less often than load
- * rows, or changes its rate between steps, does not count as having holes).
- */
-export const GAP_FACTOR = 5;
 
 export class Accumulator {
   samples = 0;
@@ -320,10 +312,5 @@ export class Accumulator {
       const phase = (side === this.positive ? this.negative : this.positive).openPhase;
       if (phase) phase.watching = true;
     }
-  }
-
-  /** The median interval between samples (duplicates not counted); NaN with fewer than two samples. */
-  medianIntervalS(): number {
-    return this.intervals.median();
   }
 }

@@ -48,7 +48,7 @@ export function computeFigures(acc: Accumulator, sink: SampleSink, opts: Resolve
   if (sign === -1) w.add("Discharge current is logged as negative; figures use it as positive.");
 
   const { cells, source: cellsSource, restVoltageV } = cellCount(acc, sink, opts, side.minVoltageV, w);
-  const sampleIntervalS = acc.medianIntervalS();
+  const sampleIntervalS = acc.intervals.median(); // under load: loggers often write rest rows less often
   gapCheck(acc, w);
   const judged = phases.map((p) => judgeCutoff(p, cells, opts.cutoffVPerCell, sampleIntervalS));
   const discharges = phases.map((p, k) => describeDischarge(p, k + 1, acc.firstTimeS, judged[k]?.reached ?? false));

@@ -3,6 +3,15 @@
  * their median), and the longest intervals next to a load sample (holes in the log).
  */
 
+/** Intervals shorter than this are never holes in the log, whatever the sampling (s). */
+export const GAP_MIN_S = 2;
+/**
+ * A hole: an interval beside a load sample more than this many times longer than the intervals on
+ * either side of it (Sagline's rule; local, so a logger that writes rest rows less often than load
+ * rows, or changes its rate between steps, does not count as having holes).
+ */
+export const GAP_FACTOR = 5;
+
 /** Intervals kept for the median; when full, every other one is dropped and the stride doubles. */
 const CAPACITY = 4096;
 /** Longest load intervals remembered. */

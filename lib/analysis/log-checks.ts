@@ -2,7 +2,8 @@
  * What the log as a whole allows: enough samples, how many lines were skipped, holes in it, and the
  * cell count (stated, from per-cell columns, or from the rest voltage).
  */
-import { type Accumulator, GAP_FACTOR, GAP_MIN_S } from "./accumulator";
+import type { Accumulator } from "./accumulator";
+import { GAP_FACTOR, GAP_MIN_S } from "./intervals";
 import { inferCells } from "./cells";
 import { LogError } from "./errors";
 import type { SampleSink } from "./sample-sink";
