@@ -14,7 +14,7 @@ import {
   timestamp,
   uniqueIndex,
 } from "drizzle-orm/pg-core";
-import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, Figures } from "@/lib/analysis";
 import { users } from "./auth";
 import { packs } from "./catalogue";
 import {
@@ -52,6 +52,8 @@ export const benchProfiles = pgTable(
     defaultCutoffVPerCell: real("default_cutoff_v_per_cell"),
     defaultStopTemperatureC: real("default_stop_temperature_c"),
     defaultSampleRateHz: real("default_sample_rate_hz"),
+    /** The column mapping this bench's logs need (header-less or oddly named columns); null: detect the columns. */
+    logMapping: jsonb("log_mapping").$type<ColumnMapping>(),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -89,6 +91,8 @@ export const results = pgTable(
     logBytes: integer("log_bytes").notNull(),
     logFilename: text("log_filename").notNull(),
     photoKeys: jsonb("photo_keys").$type<string[]>().notNull().default([]),
+    /** The column mapping the log was analysed with (the tester's, or their bench profile's); null: detected. */
+    logMapping: jsonb("log_mapping").$type<ColumnMapping>(),
     // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
     figures: jsonb("figures").$type<Figures>().notNull(),
     curve: jsonb("curve").$type<CurvePoint[]>().notNull(),
@@ -98,8 +102,14 @@ export const results = pgTable(
     resistanceAt25CMohm: real("resistance_at_25c_mohm"),
     holdVoltagePerCellV: real("hold_voltage_per_cell_v"),
     temperatureRiseC: real("temperature_rise_c"),
+    /** Sag-limited C, an ESTIMATE from a resistance (figures.sagLimitedCAssumptions); never a measured rating. */
     sagLimitedC: real("sag_limited_c"),
+    /** Sag-limited C estimate ÷ labelled continuous C. */
     labelRatio: real("label_ratio"),
+    /** Sustained C MEASURED from the run (figures.sustainedCRule); null when the run does not qualify. */
+    sustainedCMeasured: real("sustained_c_measured"),
+    /** Measured sustained C ÷ labelled continuous C. */
+    sustainedLabelRatio: real("sustained_label_ratio"),
     capacityRatio: real("capacity_ratio"),
     loadRateC: real("load_rate_c").notNull(),
     groupKey: text("group_key").notNull(),

@@ -8,6 +8,7 @@ import { parseEnv } from "@/server/env";
 import * as schema from "@/db/schema";
 import { buildPacks, demoMakers, demoUsers } from "./scenario";
 import { seedResults } from "./results";
+import { seedCycling } from "./cycling";
 import { seedCharts } from "./charts";
 import { computeAndStoreFlags } from "@/db/mutations/review";
 
@@ -54,7 +55,7 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
         }),
       )
       .onConflictDoNothing();
-    const made = await seedResults(db, packs, log);
+    const made = (await seedResults(db, packs, log)) + (await seedCycling(db, packs));
     // Pending results carry their automatic plausibility flags, as they would after a real submission.
     const pending = await db
       .select({ id: schema.results.id })
