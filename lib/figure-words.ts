@@ -16,6 +16,22 @@ export const LABEL_RATIO_LABELS = {
   measured: "Label ratio (sustained C measured ÷ labelled C)",
 } as const;
 
+/** The label check's title and vertical axis for each rating. */
+export const LABEL_CHECK_WORDS = {
+  estimate: {
+    title: "Label check: labelled C against sag-limited C (estimate)",
+    axis: "Sag-limited C, an estimate from resistance (C)",
+    column: "Sag-limited C (estimate, median)",
+    short: "sag-limited (estimate)",
+  },
+  measured: {
+    title: "Label check: labelled C against sustained C (measured)",
+    axis: "Sustained C, measured from the run (C)",
+    column: "Sustained C (measured, highest)",
+    short: "sustained (measured)",
+  },
+} as const;
+
 /** Ids on /methods; tests/integration/methods-anchors.test.ts checks that every one exists. */
 export const METHODS_ANCHORS = {
   figures: "figures",

@@ -4,7 +4,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, users } from "@/db/schema";
-import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { CurvePoint, Figures, RetentionSeries } from "@/lib/analysis";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 const PUBLIC_STATUSES = ["approved", "disputed"] as const;
@@ -39,8 +39,12 @@ const publicResultColumns = {
   temperatureRiseC: results.temperatureRiseC,
   sagLimitedC: results.sagLimitedC,
   labelRatio: results.labelRatio,
+  sustainedCMeasured: results.sustainedCMeasured,
+  sustainedLabelRatio: results.sustainedLabelRatio,
   capacityRatio: results.capacityRatio,
-  reachedCutoff: sql<boolean>`(${results.figures}->>'timeToCutoffS') is not null`,
+  retention: sql<RetentionSeries | null>`${results.figures}->'retention'`,
+  // Results analysed before issue 12 have no reachedCutoff: a time to cut-off then stood for it.
+  reachedCutoff: sql<boolean>`coalesce((${results.figures}->>'reachedCutoff')::boolean, (${results.figures}->>'timeToCutoffS') is not null)`,
   passedStopTemperature: sql<boolean>`(${results.figures}->>'timeToStopTemperatureS') is not null`,
 };
 
@@ -79,8 +83,11 @@ export type NewestResult = {
   makerName: string;
   groupKey: string;
   capacityMah: number | null;
+  /** Sag-limited C estimate. */
   sagLimitedC: number | null;
+  /** Sag-limited C estimate ÷ labelled C. */
   labelRatio: number | null;
+  sustainedCMeasured: number | null;
 };
 
 /** The newest approved results, for the home page. */
@@ -96,6 +103,7 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
       capacityMah: results.capacityMah,
       sagLimitedC: results.sagLimitedC,
       labelRatio: results.labelRatio,
+      sustainedCMeasured: results.sustainedCMeasured,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))

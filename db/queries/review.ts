@@ -184,6 +184,7 @@ export type GroupMedians = {
   capacityMah: number | null;
   labelRatio: number | null;
   sagLimitedC: number | null;
+  sustainedCMeasured: number | null;
   dcResistanceMohm: number | null;
 };
 
@@ -192,6 +193,7 @@ function medians(
     capacityMah: number | null;
     labelRatio: number | null;
     sagLimitedC: number | null;
+    sustainedCMeasured: number | null;
     dcResistanceMohm: number | null;
   }[],
 ): GroupMedians {
@@ -201,6 +203,7 @@ function medians(
     capacityMah: m(rows.map((r) => r.capacityMah)),
     labelRatio: m(rows.map((r) => r.labelRatio)),
     sagLimitedC: m(rows.map((r) => r.sagLimitedC)),
+    sustainedCMeasured: m(rows.map((r) => r.sustainedCMeasured)),
     dcResistanceMohm: m(rows.map((r) => r.dcResistanceMohm)),
   };
 }
@@ -226,6 +229,7 @@ export async function getReviewDetail(resultId: number) {
     capacityMah: results.capacityMah,
     labelRatio: results.labelRatio,
     sagLimitedC: results.sagLimitedC,
+    sustainedCMeasured: results.sustainedCMeasured,
     dcResistanceMohm: results.dcResistanceMohm,
   };
   const groupRows = await db
@@ -267,6 +271,7 @@ export async function getReviewDetail(resultId: number) {
     capacityMah: r.capacityMah,
     labelRatio: r.labelRatio,
     sagLimitedC: r.sagLimitedC,
+    sustainedCMeasured: r.sustainedCMeasured,
     dcResistanceMohm: r.dcResistanceMohm,
   };
   return {

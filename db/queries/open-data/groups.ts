@@ -46,6 +46,8 @@ export type GroupSample = {
   temperatureRiseC: number | null;
   sagLimitedC: number | null;
   labelRatio: number | null;
+  sustainedCMeasured: number | null;
+  sustainedLabelRatio: number | null;
   capacityRatio: number | null;
 };
 
@@ -73,6 +75,8 @@ export async function listGroupSamples(groupKey: string, f: PackFilters = {}): P
       temperatureRiseC: results.temperatureRiseC,
       sagLimitedC: results.sagLimitedC,
       labelRatio: results.labelRatio,
+      sustainedCMeasured: results.sustainedCMeasured,
+      sustainedLabelRatio: results.sustainedLabelRatio,
       capacityRatio: results.capacityRatio,
     })
     .from(results)
@@ -102,5 +106,5 @@ export async function listGroupOptions(minResults = 3): Promise<GroupOption[]> {
     .where(eq(results.status, "approved"))
     .orderBy(results.groupKey, asc(results.id));
   const byKey = new Map(cards.map((c) => [c.key, c]));
-  return groups.map((g) => ({ ...g, label: groupLabelOf(byKey.get(g.key)) }));
+  return groups.map((g) => ({ ...g, label: groupLabelOf(g.key, byKey.get(g.key)) }));
 }

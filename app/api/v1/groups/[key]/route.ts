@@ -13,7 +13,7 @@ export const GET = apiGet<{ key: string }>(async (req, params) => {
     throw new AppError("not_found", "No approved results in this group.");
   const packs = aggregateByPack(samples);
   return apiJson(req, {
-    data: { key, label: groupLabel(samples[0]), resultCount: samples.length, packCount: packs.length, packs },
+    data: { key, label: groupLabel(key, samples[0]), resultCount: samples.length, packCount: packs.length, packs },
     meta: { filters, aggregate: "median of approved results per pack, with n, min and max" },
   });
 });
