@@ -2,6 +2,7 @@ ALTER TABLE "bench_profiles" ADD COLUMN "log_mapping" jsonb;--> statement-breakp
 ALTER TABLE "results" ADD COLUMN "log_mapping" jsonb;--> statement-breakpoint
 ALTER TABLE "results" ADD COLUMN "sustained_c_measured" real;--> statement-breakpoint
 ALTER TABLE "results" ADD COLUMN "sustained_label_ratio" real;--> statement-breakpoint
+CREATE INDEX "results_group_sustained_idx" ON "results" USING btree ("group_key","pack_id","sustained_label_ratio") WHERE "results"."status" = 'approved';--> statement-breakpoint
 -- Hand-written data migration (issue 12, phase B): the like-for-like key's resistance part is the method the
 -- analysis used on the log (lib/analysis/group-key.ts groupKeyForAnalysis), not the one typed on the method card.
 -- Stored results get their key's first part recomputed from figures->>'dcResistanceMethod'; the other four parts

@@ -128,6 +128,10 @@ export const results = pgTable(
     index("results_group_public_idx")
       .on(t.groupKey, t.packId, t.labelRatio)
       .where(sql`${t.status} in ('approved', 'disputed')`),
+    // The same for the ranking by the measured rating (approved results only count towards it).
+    index("results_group_sustained_idx")
+      .on(t.groupKey, t.packId, t.sustainedLabelRatio)
+      .where(sql`${t.status} = 'approved'`),
     index("results_contributor_idx").on(t.contributorId),
     index("results_log_sha_idx").on(t.logSha256),
     uniqueIndex("results_idempotency_idx").on(t.contributorId, t.idempotencyKey),

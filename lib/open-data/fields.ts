@@ -243,9 +243,9 @@ export const resultFields: Field<ResultRow>[] = [
   f(
     "sagLimitedC",
     "number",
-    "Sag-limited C: the rate at which the pack would sag to the floor voltage per cell, in C.",
+    "Sag-limited C, an ESTIMATE from a resistance (not a tested rate): the rate at which the pack would sag from 3.7 V nominal to a 3.3 V floor per cell through the resistance read 10 s after the load edge, in C.",
   ),
-  f("labelRatio", "number", "Label ratio: measured C ÷ labelled continuous C (dimensionless)."),
+  f("labelRatio", "number", "Label ratio: sag-limited C estimate ÷ labelled continuous C (dimensionless)."),
   f("capacityRatio", "number", "Capacity ratio: delivered ÷ rated capacity (dimensionless)."),
   f("specificEnergyWhKg", "number", "Specific energy, in Wh/kg."),
   f("specificPowerWKg", "number", "Specific power, in W/kg."),
