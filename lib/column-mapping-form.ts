@@ -152,3 +152,17 @@ export function describeMapping(m: ColumnMapping): string {
   if (m.dischargeSign) extra.push(`discharge current ${m.dischargeSign}`);
   return `${parts.join(", ")}${extra.length ? `; ${extra.join(", ")}` : ""}`;
 }
+
+/**
+ * A log whose first rows are numbers (no header row): the columns can only be named by the tester, so a page
+ * waits for the mapping before sending it. Any other failure of detection (odd header names, or not a log at
+ * all) is sent as it is, and the server's message says what is wrong.
+ */
+export function waitsForMapping(preview: LogTablePreview): boolean {
+  if (preview.detected !== null) return false;
+  const first = preview.rows[0];
+  if (!first) return false;
+  const filled = first.fields.filter((f) => f.trim() !== "");
+  const numeric = filled.filter((f) => Number.isFinite(Number(f.trim().replace(",", "."))));
+  return filled.length > 0 && numeric.length * 2 >= filled.length;
+}

@@ -13,7 +13,7 @@ import { UploadProgress } from "@/components/forms/upload-progress";
 import { useXhrUpload } from "@/components/forms/use-xhr-upload";
 import { Alert, buttonClass } from "@/components/ui/form";
 import type { ColumnMapping, LogPreview as LogPreviewData, LogTablePreview } from "@/lib/analysis";
-import { mappingJson } from "@/lib/column-mapping-form";
+import { mappingJson, waitsForMapping } from "@/lib/column-mapping-form";
 import type { SubmitResultValues } from "@/lib/validations/result";
 import type { BenchProfileOption, Limits, PackFactsClient, SubmitFormApi } from "./types";
 
@@ -103,13 +103,14 @@ export function LogStep({
     upload.reset();
     const t = await previewFile(f);
     setTable(t);
-    // The bench profile's mapping when it has one; detection when it names the columns; else the picker waits.
+    // The bench profile's mapping when it has one; a log without a header row waits for the tester's mapping;
+    // anything else goes as it is (the server says what is wrong with a file that is not a log).
     if (profileMapping) await send(f, profileMapping);
-    else if (t.detected) await send(f, null);
+    else if (!waitsForMapping(t)) await send(f, null);
     else setMapping(null);
   };
   const errorText = uploadError ? (uploadError.fieldErrors?.log?.[0] ?? uploadError.message) : fieldError;
-  const needsMapping = table !== null && !table.detected && !log?.key;
+  const needsMapping = table !== null && waitsForMapping(table) && !log?.key;
 
   return (
     <div className="space-y-5">
@@ -124,7 +125,10 @@ export function LogStep({
       />
       <UploadProgress state={upload.state} label="Uploading the log" />
       {file && table ? (
-        <details open={needsMapping || uploadError !== null} key={`${file.name}-${file.size}-${file.lastModified}`}>
+        <details
+          open={needsMapping || (uploadError !== null && !table.detected)}
+          key={`${file.name}-${file.size}-${file.lastModified}`}
+        >
           <summary className="cursor-pointer text-sm">
             {needsMapping
               ? "Columns: say what each column holds before the log is uploaded"

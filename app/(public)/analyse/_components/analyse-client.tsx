@@ -10,7 +10,7 @@ import { FileDrop } from "@/components/forms/file-drop";
 import { UploadProgress } from "@/components/forms/upload-progress";
 import { useXhrUpload } from "@/components/forms/use-xhr-upload";
 import type { ColumnMapping, CurvePoint, LogTablePreview, PublicFigures } from "@/lib/analysis";
-import { mappingJson } from "@/lib/column-mapping-form";
+import { mappingJson, waitsForMapping } from "@/lib/column-mapping-form";
 
 type Answer = PublicFigures & { curve: CurvePoint[] };
 const FIELDS = [
@@ -47,8 +47,9 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
     upload.reset();
     const t = await previewFile(f);
     setTable(t);
-    // Columns named by detection: analyse at once. Otherwise wait for the tester's mapping.
-    if (t.detected) run(f, null);
+    // A log without a header row waits for the tester's mapping; anything else goes at once (the server says
+    // what is wrong with a file that is not a log).
+    if (!waitsForMapping(t)) run(f, null);
   };
 
   return (
