@@ -4,11 +4,18 @@ import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, users } from "@/db/schema";
-import type { CurvePoint, Figures, RetentionSeries } from "@/lib/analysis";
+import type { CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
+import { headlineCurve } from "@/lib/curves";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 const PUBLIC_STATUSES = ["approved", "disputed"] as const;
 export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
+
+/** What headlineCurve needs from the stored figures (absent on results stored before discharges were listed). */
+export const headlineColumns = {
+  discharges: sql<Discharge[] | null>`${results.figures}->'discharges'`,
+  headlineDischarge: sql<number | null>`(${results.figures}->>'headlineDischarge')::int`,
+};
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
@@ -65,14 +72,14 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
   return rows.map(toRow);
 }
 
-/** Stored chart curves of the given published results. */
+/** Stored chart curves of the given published results: the headline discharge of each (lib/curves.ts headlineCurve). */
 export async function getPublicCurves(resultIds: number[]): Promise<Map<number, CurvePoint[]>> {
   if (resultIds.length === 0) return new Map();
   const rows = await db
-    .select({ id: results.id, curve: results.curve })
+    .select({ id: results.id, curve: results.curve, ...headlineColumns })
     .from(results)
     .where(and(inArray(results.id, resultIds), isPublic));
-  return new Map(rows.map((r) => [r.id, r.curve]));
+  return new Map(rows.map((r) => [r.id, headlineCurve(r.curve, r)]));
 }
 
 export type NewestResult = {

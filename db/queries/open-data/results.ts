@@ -5,8 +5,10 @@ import { and, asc, count, eq, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { CurvePoint } from "@/lib/analysis";
+import { headlineCurve } from "@/lib/curves";
 import type { ResultRow } from "@/lib/open-data/records";
 import type { ResultFilters } from "@/lib/validations/open-data";
+import { headlineColumns } from "../results";
 import { packConditions, type Page, type Paged } from "./packs";
 
 const columns = {
@@ -119,9 +121,9 @@ export type CurveSeries = {
   curve: CurvePoint[];
 };
 
-/** Discharge curves of approved results in one like-for-like group (for the curves chart). */
+/** Discharge curves of approved results in one like-for-like group (for the curves chart): each its headline discharge. */
 export async function listGroupCurves(groupKey: string, f: ResultFilters = {}): Promise<CurveSeries[]> {
-  return db
+  const rows = await db
     .select({
       resultId: results.id,
       packSlug: packs.slug,
@@ -131,10 +133,15 @@ export async function listGroupCurves(groupKey: string, f: ResultFilters = {}): 
       ratedCapacityMah: packs.ratedCapacityMah,
       loadRateC: results.loadRateC,
       curve: results.curve,
+      ...headlineColumns,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .where(and(...conditions({ ...f, group: groupKey })))
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
+  return rows.map(({ discharges, headlineDischarge, curve, ...r }) => ({
+    ...r,
+    curve: headlineCurve(curve, { discharges, headlineDischarge }),
+  }));
 }
