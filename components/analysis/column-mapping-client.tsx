@@ -16,6 +16,7 @@ import {
   setRole,
   type ColumnRole,
   type MappingForm,
+  waitsForMapping,
 } from "@/lib/column-mapping-form";
 
 const control =
@@ -98,9 +99,11 @@ export function ColumnMappingPicker({
     <fieldset className="card min-w-0 space-y-3" data-testid="column-mapping">
       <legend className="px-1 text-sm font-semibold">Columns of this log</legend>
       <p className="muted text-xs">
-        {preview.problem
-          ? `Sagline could not name the columns by itself: ${preview.problem} Say what each column holds.`
-          : "Detected from the log; change anything that is wrong."}{" "}
+        {waitsForMapping(preview)
+          ? "The log has no header row, so Sagline could not name the columns by itself. Say what each column holds."
+          : preview.problem
+            ? `Sagline could not name the columns by itself: ${preview.problem}`
+            : "Detected from the log; change anything that is wrong."}{" "}
         Columns are numbered from 1 here; the API counts from 0.
       </p>
       <label className="flex items-center gap-2 text-sm">
