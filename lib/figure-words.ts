@@ -23,12 +23,21 @@ export const LABEL_CHECK_WORDS = {
     axis: "Sag-limited C, an estimate from resistance (C)",
     column: "Sag-limited C (estimate, median)",
     short: "sag-limited (estimate)",
+    meets: "meets or beats its label",
+    below: "falls short (below the line)",
+    belowCount: "fall short of their label by this estimate",
+    pointBelow: "falls short of its label by this estimate",
   },
   measured: {
     title: "Label check: labelled C against sustained C (measured)",
     axis: "Sustained C, measured from the run (C)",
     column: "Sustained C (measured, highest)",
     short: "sustained (measured)",
+    meets: "held its label or more",
+    below: "label not shown (held less, or tested lower)",
+    belowCount:
+      "were not shown to hold their label: a run holds only the rate it was tested at, and a group is one band of rates",
+    pointBelow: "not shown to hold its label",
   },
 } as const;
 

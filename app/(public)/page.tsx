@@ -121,11 +121,12 @@ export default async function HomePage() {
         <h2 id="label-check-h">Label check</h2>
         <p className="muted max-w-3xl text-sm">
           Each point is a pack: its labelled continuous C across, and up either the{" "}
-          <strong>sustained C it was measured to hold</strong> (the current a qualifying run actually drew to its
-          cut-off; <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>the rule</Link>) or the{" "}
           <strong>sag-limited C estimate</strong> from its DC resistance (an estimate, not a tested rate;{" "}
-          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>its assumptions</Link>). Points below the dashed line
-          fall short of their label by that measure.
+          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>its assumptions</Link>) or the{" "}
+          <strong>sustained C it was measured to hold</strong> (the current a qualifying run actually drew to its
+          cut-off; <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>the rule</Link>). Below the dashed line a pack
+          falls short of its label by the estimate; by the measured rating it has not shown its label, since a run holds
+          only the rate it was tested at.
         </p>
         <HomeLabelCheck groups={homeGroups} />
       </section>

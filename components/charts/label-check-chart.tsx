@@ -64,13 +64,13 @@ export function LabelCheckChart({
         <svg width="14" height="14" aria-hidden="true">
           <Marker shape={MEETS_STYLE.shape} x={7} y={7} size={9} color={MEETS_STYLE.color} />
         </svg>
-        meets or beats its label
+        {words.meets}
       </li>
       <li className="flex items-center gap-1">
         <svg width="14" height="14" aria-hidden="true">
           <Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} filled={false} />
         </svg>
-        falls short (below the line)
+        {words.below}
       </li>
       <li className="flex items-center gap-1">
         <svg width="22" height="10" aria-hidden="true">
@@ -91,7 +91,7 @@ export function LabelCheckChart({
           {rating === "measured"
             ? "its sustained C, the highest measured among its approved results in this like-for-like group"
             : "the median sag-limited C estimate of its published results in this like-for-like group"}
-          . {short} of {points.length} packs fall short of their label. Select a point to open the pack.
+          . {short} of {points.length} packs {words.belowCount}. Select a point to open the pack.
         </p>
       }
       table={{
@@ -171,7 +171,7 @@ export function LabelCheckChart({
                     key={p.packSlug}
                     href={`/packs/${p.packSlug}`}
                     data-testid="label-check-point"
-                    aria-label={`${p.makerName} ${p.label}: labelled ${f1(p.labelledC)}C, ${words.short} ${f1(p.measuredC)}C from ${p.n} result${p.n === 1 ? "" : "s"}${below ? ", falls short of its label" : ", meets its label"}`}
+                    aria-label={`${p.makerName} ${p.label}: labelled ${f1(p.labelledC)}C, ${words.short} ${f1(p.measuredC)}C from ${p.n} result${p.n === 1 ? "" : "s"}${below ? `, ${words.pointBelow}` : `, ${words.meets}`}`}
                     onMouseEnter={() => setActive(p)}
                     onMouseLeave={() => setActive(null)}
                     onFocus={() => setActive(p)}

@@ -18,18 +18,18 @@ export async function seedCharts(db: NodePgDatabase<typeof schema>): Promise<num
     {
       id: "demo-label-check",
       kind: "label-check" as const,
-      rating: "measured" as const,
+      rating: "estimate" as const,
       group: first.key,
-      title: "Labelled C against sustained C (measured)",
-      note: "Each dot is a pack: the highest sustained C measured among its approved results against the C printed on its label. Dots under the dashed line held less than their label.",
+      title: "Labelled C against sag-limited C (an estimate)",
+      note: "Each dot is a pack: the median sag-limited C estimate of its approved results (from resistance, 3.7 V nominal to a 3.3 V floor per cell) against the C printed on its label.",
     },
     {
       id: "demo-maker-ranking",
       kind: "maker-ranking" as const,
-      rating: "measured" as const,
+      rating: "estimate" as const,
       group: first.key,
       title: "How close makers come to their labels",
-      note: "Median label ratio (sustained C measured ÷ labelled C) of each maker's packs in one like-for-like group.",
+      note: "Median label ratio (sag-limited C estimate ÷ labelled C) of each maker's packs in one like-for-like group.",
     },
     {
       id: "demo-curves",

@@ -38,6 +38,10 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     });
     if (points.length < packs.length)
       base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a ${words.point} left out.`);
+    if (rating === "measured")
+      base.leftOut.push(
+        "A run holds only the rate it was tested at, and a group is one band of rates: a pack below the line has not shown its label, which is not failing it.",
+      );
     return { ...base, labelCheck: points };
   }
   if (state.kind === "maker-ranking") {

@@ -169,7 +169,7 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
   page,
 }) => {
   await page.goto("/");
-  const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against sustained C (measured)" });
+  const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against sag-limited C (estimate)" });
   await frame.getByRole("button", { name: "Show as table" }).click();
   await expect(frame.getByRole("columnheader", { name: "Labelled C" })).toBeVisible();
   expect(await frame.locator("tbody tr").count()).toBeGreaterThanOrEqual(40);
@@ -191,17 +191,19 @@ test("the label check offers both ratings, each named in the chart's title and a
 }) => {
   await page.goto("/");
   const switcher = page.getByTestId("rating-switch");
-  await expect(switcher.getByLabel("Sustained C (measured)")).toBeChecked();
-  await expect(page.locator("figure").filter({ hasText: "against sustained C (measured)" })).toContainText(
-    "Sustained C, measured from the run (C)",
-  );
-  await switcher.getByLabel("Sag-limited C (estimate)").check();
+  // The estimate is shown first; the measured rating is one click away and says what "below the line" means for it.
+  await expect(switcher.getByLabel("Sag-limited C (estimate)")).toBeChecked();
   const estimate = page
     .locator("figure")
     .filter({ hasText: "Label check: labelled C against sag-limited C (estimate)" });
   await expect(estimate).toContainText("Sag-limited C, an estimate from resistance (C)");
   await expect(estimate.getByTestId("label-check-point").first()).toBeVisible();
   await expect(page.getByText("Label ratio (sag-limited C estimate ÷ labelled C)")).toBeVisible();
+  await switcher.getByLabel("Sustained C (measured)").check();
+  const measured = page.locator("figure").filter({ hasText: "against sustained C (measured)" });
+  await expect(measured).toContainText("Sustained C, measured from the run (C)");
+  await expect(measured).toContainText("label not shown (held less, or tested lower)");
+  await expect(measured.getByTestId("label-check-point").first()).toBeVisible();
   // Makers with fewer than 6 packs have no 95 % interval: the list must not name a leader.
   await expect(page.getByTestId("ranking-verdict")).toContainText("No maker is distinguishably ahead");
   await expect(page.getByTestId("maker-ranking")).not.toContainText("ahead");

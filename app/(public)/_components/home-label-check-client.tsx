@@ -31,11 +31,13 @@ export type HomeGroup = {
   ratings: Record<RatingKind, HomeRating>;
 };
 
-const RATING_ORDER: RatingKind[] = ["measured", "estimate"];
+// The estimate first: inside one like-for-like group (one band of load rates) the measured rating mostly restates
+// the rate the group was tested at, which the chart's notes say when it is shown.
+const RATING_ORDER: RatingKind[] = ["estimate", "measured"];
 
 export function HomeLabelCheck({ groups }: { groups: HomeGroup[] }) {
   const [key, setKey] = useState(groups[0]?.key ?? "");
-  const [rating, setRating] = useState<RatingKind>("measured");
+  const [rating, setRating] = useState<RatingKind>("estimate");
   const group = groups.find((g) => g.key === key) ?? groups[0];
   if (!group) return <p className="muted">No published results yet.</p>;
   const shown = group.ratings[rating];

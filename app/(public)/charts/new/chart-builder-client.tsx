@@ -35,8 +35,8 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
   const [cells, setCells] = useState(from?.cells ? String(from.cells) : "");
   const [title, setTitle] = useState(from?.title ?? "");
   const [note, setNote] = useState(from?.note ?? "");
-  // A chart copied from an older permalink keeps the estimate it drew; a new one starts from the measured rating.
-  const [rating, setRating] = useState<ChartRating>(from ? (from.rating ?? "estimate") : "measured");
+  // A chart copied from an older permalink keeps the estimate it drew (a state without a rating means it).
+  const [rating, setRating] = useState<ChartRating>(from?.rating ?? "estimate");
   const rated = kind === "label-check" || kind === "maker-ranking";
 
   const parsed = useMemo(
