@@ -141,3 +141,19 @@ describe("a log with no measurement noise is flagged", () => {
     expect(codes(input(originalCurve, []))).toEqual([]);
   });
 });
+
+describe("/methods states the thresholds the code uses (content/methods/checks.md)", () => {
+  it("names every constant of the copy and noise tests", async () => {
+    const fs = await import("node:fs");
+    const text = fs.readFileSync("content/methods/checks.md", "utf8").replace(/\s+/g, " ");
+    const noise = await import("@/lib/analysis/log-noise");
+    const f = await import("@/lib/analysis/curve-fingerprint");
+    expect(text).toContain(`${f.SHAPE_POINTS} even`);
+    expect(text).toContain(`under ${f.SAME_SHAPE_RMS}`);
+    expect(text).toContain(`under ${f.NEAR_SHAPE_RMS}`);
+    expect(text).toContain(`at least ${f.NOISE_CORRELATION}`);
+    expect(text).toContain(`under ${noise.SMOOTH_RATIO} of a`);
+    expect(text).toContain(`${["", "one", "two", "three", "four"][noise.FIT_HALF_WIDTH]} neighbours on each side`);
+    expect(text).toContain(`coarser than ${noise.MAX_JUDGED_RESOLUTION_V * 1000} mV`);
+  });
+});
