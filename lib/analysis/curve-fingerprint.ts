@@ -88,7 +88,8 @@ function secondDifferences(shape: number[]): number[] {
   // The last 15 % holds the knee, whose curvature is shared by every test of a pack: left out.
   const end = Math.floor(shape.length * 0.85);
   const out: number[] = [];
-  for (let i = 1; i < end; i++) out.push((shape[i] as number) - ((shape[i - 1] as number) + (shape[i + 1] as number)) / 2);
+  for (let i = 1; i < end; i++)
+    out.push((shape[i] as number) - ((shape[i - 1] as number) + (shape[i + 1] as number)) / 2);
   return out;
 }
 

@@ -20,8 +20,17 @@ import { generateLog, toCsv, type CsvDialect, type EcmOptions, type EcmRow } fro
 
 /** A 4S 1300 mAh pack at 10C, 1 Hz, with 4 mV of voltage noise (a typical hobby logger). */
 const PACK: EcmOptions = {
-  seed: 42, cells: 4, capacityMah: 1300, r0PerCellMohm: 3, r1PerCellMohm: 1, loadCurrentA: 13, cutoffVPerCell: 3.3,
-  ambientC: 22, sampleIntervalS: 1, initialRestS: 5, finalRestS: 5,
+  seed: 42,
+  cells: 4,
+  capacityMah: 1300,
+  r0PerCellMohm: 3,
+  r1PerCellMohm: 1,
+  loadCurrentA: 13,
+  cutoffVPerCell: 3.3,
+  ambientC: 22,
+  sampleIntervalS: 1,
+  initialRestS: 5,
+  finalRestS: 5,
   noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
 };
 
@@ -33,11 +42,20 @@ function fp(curve: CurvePoint[]): CurveFingerprint {
   if (!f) throw new Error("no fingerprint");
   return f;
 }
-function input(curve: CurvePoint[], candidates: { resultId: number; fingerprint: CurveFingerprint }[]): PlausibilityInput {
+function input(
+  curve: CurvePoint[],
+  candidates: { resultId: number; fingerprint: CurveFingerprint }[],
+): PlausibilityInput {
   return {
     figures: {
-      capacityMah: 1280, capacityRatio: 1280 / 1300, labelRatio: 0.5, sagLimitedC: 50, minVoltagePerCellV: 3.3,
-      startTemperatureC: 22, cells: 4, timeToStopTemperatureS: null,
+      capacityMah: 1280,
+      capacityRatio: 1280 / 1300,
+      labelRatio: 0.5,
+      sagLimitedC: 50,
+      minVoltagePerCellV: 3.3,
+      startTemperatureC: 22,
+      cells: 4,
+      timeToStopTemperatureS: null,
     },
     method: { ambientTemperatureC: 22, cutoffVPerCell: 3.3 },
     pack: { cellsInSeries: 4, ratedCapacityMah: 1300 },

@@ -8,11 +8,22 @@ import { decimalPlaces, noiseCheck, quadraticResidual, SMOOTH_RATIO } from "@/li
 import { generateLog, toCsv, type CsvDialect, type EcmOptions } from "@/lib/synthetic/equivalent-circuit";
 
 const PACK: EcmOptions = {
-  seed: 42, cells: 4, capacityMah: 1300, r0PerCellMohm: 3, r1PerCellMohm: 1, loadCurrentA: 13, cutoffVPerCell: 3.3,
-  ambientC: 22, sampleIntervalS: 1, initialRestS: 5, finalRestS: 5,
+  seed: 42,
+  cells: 4,
+  capacityMah: 1300,
+  r0PerCellMohm: 3,
+  r1PerCellMohm: 1,
+  loadCurrentA: 13,
+  cutoffVPerCell: 3.3,
+  ambientC: 22,
+  sampleIntervalS: 1,
+  initialRestS: 5,
+  finalRestS: 5,
 };
 async function check(o: EcmOptions, d: CsvDialect = {}) {
-  const curve: CurvePoint[] = (await analyseText(toCsv(generateLog({ ...PACK, ...o }).rows, d), { cells: o.cells ?? 4 })).curve;
+  const curve: CurvePoint[] = (
+    await analyseText(toCsv(generateLog({ ...PACK, ...o }).rows, d), { cells: o.cells ?? 4 })
+  ).curve;
   return noiseCheck(curve);
 }
 
