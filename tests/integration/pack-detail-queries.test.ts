@@ -16,7 +16,7 @@ beforeAll(async () => {
   await makeResult(pack, tester.id, { rateC: 5, sagLimitedC: 30 });
   await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32 }); // the answer: completed, cool enough
   await makeResult(pack, tester.id, { rateC: 15, passedStop: true }); // passed the stop temperature
-  await makeResult(pack, tester.id, { rateC: 20, status: "disputed" }); // disputed: not counted for sustained C
+  await makeResult(pack, tester.id, { rateC: 20, reachedCutoff: false, openCase: true }); // an open case, stopped early
   await makeResult(pack, tester.id, { rateC: 12, reachedCutoff: false }); // stopped before cut-off
   await makeResult(pack, tester.id, { rateC: 30, loadMode: "constant-power" }); // not constant current
   await makeResult(pack, tester.id, { rateC: 40, status: "pending" }); // not public
@@ -37,7 +37,7 @@ describe("pack detail", () => {
     expect(keys.size).toBe(d?.groups.length);
     const byKeyEnd = (end: string) => d?.groups.find((g) => g.group.key.endsWith(end));
     expect(byKeyEnd("_r5-10_new")?.n).toBe(1); // the new 8C run
-    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, disputed: 1 }); // 12C, 15C and the disputed 20C
+    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, openCases: 1 }); // 12C, 15C and the 20C being checked
     expect(byKeyEnd("_r5-10_c50-199")?.n).toBe(3); // aged 60, 120 and 180 cycles
     expect(byKeyEnd("_r5-10_c50-199")?.figures.capacityMah?.median).toBe(1800);
   });

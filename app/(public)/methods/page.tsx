@@ -13,6 +13,7 @@ export const dynamic = "force-static";
 const SECTIONS = [
   ["methods-figures", "methods/figures"],
   ["methods/like-for-like"],
+  ["methods/checks"],
   ["methods/running-a-test"],
   ["methods/safety"],
 ] as const;
@@ -42,6 +43,9 @@ export default async function MethodsPage() {
           </li>
           <li>
             <a href="#like-for-like">Like-for-like groups</a>
+          </li>
+          <li>
+            <a href="#checks">Checks</a>
           </li>
           <li>
             <a href="#running-a-test">Running a test</a>
