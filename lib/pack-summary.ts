@@ -18,7 +18,8 @@ export type Summary = NonNullable<ReturnType<typeof summarise>>;
 export type PublicResultRow = {
   id: number;
   packId: number;
-  status: "approved" | "disputed";
+  /** A reader asked moderators to check it and they have not decided yet (it still counts meanwhile). */
+  openCase: boolean;
   groupKey: string;
   ratedCapacityMah: number;
   ambientTemperatureC: number;
@@ -74,9 +75,10 @@ export type SummaryFigure = (typeof SUMMARY_FIGURES)[number];
 
 export type GroupFigures = {
   group: DescribedGroup;
-  /** Published results in the group (approved and disputed). */
+  /** Published results in the group. */
   n: number;
-  disputed: number;
+  /** Of those, results a reader asked moderators to check (still counted until they decide). */
+  openCases: number;
   figures: Record<SummaryFigure, Summary | null>;
   /** The pack's sustained C in this group: the highest measured value among its approved results. */
   sustainedC: number | null;
@@ -121,13 +123,14 @@ export function medianIntervals(rows: PublicResultRow[]): Record<SummaryFigure, 
 
 /**
  * Sustained C of a pack: the highest MEASURED sustained C (the current the run actually drew, when the run
- * qualified — figures.sustainedCRule) among its approved results; disputed ones do not count until resolved.
- * Call it with one like-for-like group's rows for the group's value (content/methods/figures.md).
+ * qualified — figures.sustainedCRule) among its published (approved) results; one with an open reader case
+ * counts until moderators decide. Call it with one like-for-like group's rows for the group's value
+ * (content/methods/figures.md).
  */
 export function sustainedC(rows: PublicResultRow[]): { rateC: number; resultId: number } | null {
   let best: { rateC: number; resultId: number } | null = null;
   for (const r of rows) {
-    if (r.status !== "approved" || r.sustainedCMeasured === null || !Number.isFinite(r.sustainedCMeasured)) continue;
+    if (r.sustainedCMeasured === null || !Number.isFinite(r.sustainedCMeasured)) continue;
     if (!best || r.sustainedCMeasured > best.rateC) best = { rateC: r.sustainedCMeasured, resultId: r.id };
   }
   return best;
@@ -144,7 +147,7 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
     out.push({
       group: describeResultGroup(first),
       n: list.length,
-      disputed: list.filter((r) => r.status === "disputed").length,
+      openCases: list.filter((r) => r.openCase).length,
       figures: summariseFigures(list),
       sustainedC: sustainedC(list)?.rateC ?? null,
     });
@@ -167,11 +170,9 @@ export type OnePackSeries = { resultId: number; groupLabel: string; retention: R
 
 export type PackAgeing = { onePack: OnePackSeries | null; acrossResults: CycleSeries | null };
 
-/** The approved result whose log holds the longest retention series (the newest on a tie). */
+/** The published result whose log holds the longest retention series (the newest on a tie). */
 export function onePackSeries(rows: PublicResultRow[]): OnePackSeries | null {
-  const withSeries = rows.filter(
-    (r): r is PublicResultRow & { retention: RetentionSeries } => r.status === "approved" && r.retention !== null,
-  );
+  const withSeries = rows.filter((r): r is PublicResultRow & { retention: RetentionSeries } => r.retention !== null);
   const best = [...withSeries].sort((a, b) => b.retention.points.length - a.retention.points.length || b.id - a.id)[0];
   if (!best) return null;
   return {
@@ -186,12 +187,11 @@ export function onePackSeries(rows: PublicResultRow[]): OnePackSeries | null {
  * Capacity and resistance over cycles ACROSS results. Ageing moves a result into another age band, so the
  * series takes results that share every group part except age (same method, ambient, cut-off and rate) — the
  * series with the most distinct cycle counts. These are separate tests, possibly of different physical packs
- * of one model, so pages say so. Only approved results; null when no series has two cycle counts.
+ * of one model, so pages say so. Published (approved) results only; null when no series has two cycle counts.
  */
 export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
   const series = new Map<string, { label: string; rows: PublicResultRow[] }>();
   for (const r of rows) {
-    if (r.status !== "approved") continue;
     const g = describeResultGroup(r);
     const k = keyWithoutAge(g);
     const label = [g.parts.resistance.label, g.parts.ambient.label, g.parts.cutoff.label, g.parts.rate.label].join(

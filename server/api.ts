@@ -4,7 +4,8 @@ import "server-only";
 import { createHash } from "node:crypto";
 import type { z } from "zod";
 import { errorResponse } from "@/lib/errors";
-import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { clientAddress } from "@/server/client-address";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 import { searchParamsObject } from "@/lib/validations/open-data";
 import { DATA_LICENCE_URL, licenceInfo } from "@/lib/open-data/licence";
@@ -63,7 +64,7 @@ type Ctx<P> = { params: Promise<P> };
 export function apiGet<P = Record<string, never>>(handler: (req: Request, params: P) => Promise<Response>) {
   return withPermission<Ctx<P>>("public", async (req, ctx) => {
     try {
-      await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
+      await enforceRateLimit(`api:${clientAddress(req.headers)}`, limits.apiPerIp);
       return await handler(req, await ctx.params);
     } catch (err) {
       return errorResponse(err, corsHeaders);

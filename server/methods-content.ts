@@ -8,6 +8,7 @@ export const METHODS_SECTIONS = [
   { file: "methods/figures", id: "figures", title: "Figures" },
   { file: "methods/like-for-like", id: "like-for-like", title: "Like-for-like groups" },
   { file: "methods/uncertainty", id: "uncertainty", title: "Uncertainty" },
+  { file: "methods/checks", id: "checks", title: "Checks" },
   { file: "methods/running-a-test", id: "running-a-test", title: "Running a test" },
   { file: "methods/safety", id: "safety", title: "Safety" },
 ] as const;

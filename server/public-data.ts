@@ -5,6 +5,7 @@ import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup, type RankingRating } from "@/db/queries/groups";
+import { listFeaturedCharts } from "@/db/queries/open-data/charts";
 import { listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
 import {
   getApiPackBySlug,
@@ -174,6 +175,18 @@ export async function cachedGroupCurves(groupKey: string, filters: ResultFilters
   if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, filters);
   return unstable_cache(() => listGroupCurves(groupKey, filters), ["group-curves", groupKey, keyOf(filters)], {
     tags: [t.results, t.packs, t.group(groupKey)],
+    revalidate,
+  })();
+}
+
+/** Pages of featured charts kept in the data cache; later pages (rare) are read each time. */
+const CACHED_CHART_PAGES = 10;
+
+/** One page of the featured charts (/charts, GET /api/v1/charts): featuring a chart revalidates `charts`. */
+export function cachedFeaturedCharts(page: number, size: number) {
+  if (page > CACHED_CHART_PAGES) return listFeaturedCharts(page, size);
+  return unstable_cache(() => listFeaturedCharts(page, size), ["featured-charts", String(page), String(size)], {
+    tags: [t.charts],
     revalidate,
   })();
 }

@@ -29,8 +29,8 @@ export async function listPublicGroups(): Promise<GroupSummary[]> {
     from ${results} r
     join ${packs} p on p.id = r.pack_id and p.status = 'active'
     join (select group_key, count(*) as result_count, count(distinct pack_id) as pack_count
-          from ${results} where status in ('approved', 'disputed') group by group_key) c on c.group_key = r.group_key
-    where r.status in ('approved', 'disputed')
+          from ${results} where status = 'approved' group by group_key) c on c.group_key = r.group_key
+    where r.status = 'approved'
     order by r.group_key, r.id`);
   return rows.rows
     .map((r) => ({
@@ -139,7 +139,7 @@ export async function rankMakersInGroup(groupKey: string, rating: RankingRating 
     rating === "estimate"
       ? sql`select r.pack_id, percentile_cont(0.5) within group (order by r.label_ratio) as m, count(*) as n
       from ${results} r
-      where r.group_key = ${groupKey} and r.status in ('approved', 'disputed') and r.label_ratio is not null
+      where r.group_key = ${groupKey} and r.status = 'approved' and r.label_ratio is not null
       group by r.pack_id`
       : sql`select r.pack_id, max(r.sustained_label_ratio) as m, count(*) as n
       from ${results} r

@@ -1,15 +1,19 @@
-// Reads of published results. Public = approved or disputed (disputed stay visible, marked). Dates leave
-// as ISO strings so the cached reads (server/public-data.ts) survive JSON round trips.
+// Reads of published results. Public = approved; a result a reader asked moderators to check (an open reader
+// flag) stays published and counted, marked with its open case. Dates leave as ISO strings so the cached reads
+// (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results, reviewEvents, users } from "@/db/schema";
+import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
+import type { FlagReason } from "@/lib/enums";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
-const PUBLIC_STATUSES = ["approved", "disputed"] as const;
-export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
+export const isPublic = eq(results.status, "approved");
+
+/** Whether a reader's flag on the result is open (a case moderators have not decided). */
+const hasOpenCase = sql<boolean>`exists (select 1 from ${readerFlags} where ${readerFlags.resultId} = ${results.id} and ${readerFlags.status} = 'open')`;
 
 /** What headlineCurve needs from the stored figures (absent on results stored before discharges were listed). */
 export const headlineColumns = {
@@ -22,7 +26,7 @@ const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOS
 const publicResultColumns = {
   id: results.id,
   packId: results.packId,
-  status: results.status,
+  openCase: hasOpenCase,
   groupKey: results.groupKey,
   ratedCapacityMah: packs.ratedCapacityMah,
   ambientTemperatureC: results.ambientTemperatureC,
@@ -55,9 +59,9 @@ const publicResultColumns = {
   passedStopTemperature: sql<boolean>`(${results.figures}->>'timeToStopTemperatureS') is not null`,
 };
 
-type RawRow = Omit<PublicResultRow, "publishedAt" | "status"> & { publishedAt: Date | null; status: string };
+type RawRow = Omit<PublicResultRow, "publishedAt"> & { publishedAt: Date | null };
 function toRow(r: RawRow): PublicResultRow {
-  return { ...r, status: r.status === "disputed" ? "disputed" : "approved", publishedAt: iso(r.publishedAt) };
+  return { ...r, publishedAt: iso(r.publishedAt) };
 }
 
 /** Published results of the given packs (method card and headline figures, no curve), oldest first. */
@@ -134,6 +138,8 @@ export type ResultDetail = PublicResultRow & {
     connector: string;
   };
   contributor: string;
+  /** Reasons of the open reader flags (each once, in the order they were filed); empty when none is open. */
+  openCaseReasons: FlagReason[];
   notes: string | null;
   submittedAt: string;
   figures: Figures;
@@ -191,6 +197,11 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .from(reviewEvents)
     .where(eq(reviewEvents.resultId, id))
     .orderBy(asc(reviewEvents.createdAt), asc(reviewEvents.id));
+  const open = await db
+    .select({ reason: readerFlags.reason })
+    .from(readerFlags)
+    .where(and(eq(readerFlags.resultId, id), eq(readerFlags.status, "open")))
+    .orderBy(asc(readerFlags.createdAt), asc(readerFlags.id));
   const {
     contributorId,
     contributorName,
@@ -224,6 +235,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       connector,
     },
     contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
+    openCaseReasons: [...new Set(open.map((o) => o.reason))],
     notes,
     submittedAt: new Date(submittedAt).toISOString(),
     figures,

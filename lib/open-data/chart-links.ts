@@ -84,7 +84,10 @@ type SavedChart = {
   title: string;
   note: string | null;
   state: Record<string, unknown>;
-  createdAt: Date;
+  /** Dates, or their ISO strings after a cached read's JSON round trip. */
+  createdAt: Date | string;
+  /** When a moderator featured it on /charts; null when it is only saved. */
+  featuredAt: Date | string | null;
 };
 
 /** A saved chart as the API returns it; a stored state that no longer parses is reported, not hidden. */
@@ -95,7 +98,8 @@ export function savedChartJson(row: SavedChart) {
     kind: row.kind,
     title: row.title,
     note: row.note,
-    createdAt: row.createdAt.toISOString(),
+    createdAt: new Date(row.createdAt).toISOString(),
+    featuredAt: row.featuredAt === null ? null : new Date(row.featuredAt).toISOString(),
     state: row.state,
     links: parsed.success ? chartLinks(parsed.data) : null,
   };

@@ -236,10 +236,14 @@ export function openApiDocument(serverUrl: string) {
         [pathParam("key"), ...packFilterParams],
         data("Group"),
       ),
-      "/api/v1/charts": get("Saved charts", [], {
-        type: "object",
-        properties: { data: { type: "array", items: { $ref: "#/components/schemas/Chart" } } },
-      }),
+      "/api/v1/charts": get(
+        "Featured charts (saved charts a moderator chose), newest feature first",
+        [
+          { name: "page", in: "query", schema: { type: "integer", minimum: 1, default: 1 } },
+          { name: "size", in: "query", schema: { type: "integer", minimum: 1, maximum: 50, default: 20 } },
+        ],
+        listOf("Chart"),
+      ),
       "/api/v1/charts/{id}": get("One saved chart", [pathParam("id")], data("Chart")),
       "/charts/image/{state}/{file}": chartImage,
     },
@@ -303,6 +307,7 @@ export function openApiDocument(serverUrl: string) {
             title: { type: "string" },
             note: { type: ["string", "null"] },
             state: { type: "object" },
+            featuredAt: { type: ["string", "null"], format: "date-time" },
             links: { type: ["object", "null"] },
           },
         },

@@ -1,5 +1,6 @@
 // Query parameters of the public API and the downloads. Everything arrives as strings; zod coerces.
 import { z } from "zod";
+import { recordId } from "./ids";
 
 const slug = z
   .string()
@@ -43,7 +44,7 @@ export const resultListQuery = pageQuery.extend(resultFilters.shape);
 export const groupListQuery = pageQuery.extend({ minResults: intParam(1, 1000).default(1) });
 
 export const slugParam = z.object({ slug });
-export const idParam = z.object({ id: z.coerce.number().int().positive() });
+export const idParam = z.object({ id: recordId });
 export const groupKeyRouteParam = z.object({ key: groupKeyParam });
 export const chartIdParam = z.object({ id: z.string().regex(/^[a-z0-9-]{1,64}$/) });
 

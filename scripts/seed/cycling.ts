@@ -143,6 +143,7 @@ export async function seedCycling(db: NodePgDatabase<typeof schema>, packs: Demo
       outcome: "approved",
       contributorId: user.id,
       moderatorId: moderator.id,
+      readerId: null,
       submittedAt,
     });
   }

@@ -11,6 +11,7 @@ import { seedResults } from "./results";
 import { seedCycling } from "./cycling";
 import { seedCharts } from "./charts";
 import { computeAndStoreFlags } from "@/db/mutations/review";
+import { backfillCurveFingerprints } from "@/db/mutations/curve-fingerprints";
 
 export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?: (s: string) => void } = {}) {
   const log = opts.log ?? (() => {});
@@ -56,6 +57,8 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
       )
       .onConflictDoNothing();
     const made = (await seedResults(db, packs, log)) + (await seedCycling(db, packs));
+    // Every result's curve fingerprint, so a new log copied from a demo result is recognised.
+    await backfillCurveFingerprints(db);
     // Pending results carry their automatic plausibility flags, as they would after a real submission.
     const pending = await db
       .select({ id: schema.results.id })

@@ -5,7 +5,8 @@ import * as schema from "@/db/schema";
 import { groupKeyForAnalysis, type Analysis } from "@/lib/analysis";
 import type { Random } from "./random";
 
-export type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "disputed";
+// "flagged": approved, with a reader's open flag (a case for moderators; the result stays published and counted).
+export type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "flagged";
 
 export function outcomeFor(r: Random): Outcome {
   const x = r.next();
@@ -14,7 +15,7 @@ export function outcomeFor(r: Random): Outcome {
   if (x < 0.92) return "changes_requested";
   if (x < 0.96) return "rejected";
   if (x < 0.98) return "withdrawn";
-  return "disputed";
+  return "flagged";
 }
 
 /** Figures, curve and headline columns of an analysed log, with the group key its resistance reading implies. */
@@ -44,13 +45,20 @@ export function figureColumns(
 
 const rejectReasons = ["incomplete-method", "wrong-data", "not-a-measurement"] as const;
 
-/** The review events (and the reader flag of a disputed result) that lead to `outcome`. */
+/** The review events (and the reader's open flag of a flagged result) that lead to `outcome`. */
 export async function seedHistory(
   db: NodePgDatabase<typeof schema>,
   rnd: Random,
-  r: { resultId: number; outcome: Outcome; contributorId: string; moderatorId: string; submittedAt: Date },
+  r: {
+    resultId: number;
+    outcome: Outcome;
+    contributorId: string;
+    moderatorId: string;
+    readerId: string | null;
+    submittedAt: Date;
+  },
 ): Promise<void> {
-  const { resultId, outcome, contributorId, moderatorId, submittedAt } = r;
+  const { resultId, outcome, contributorId, moderatorId, readerId, submittedAt } = r;
   const later = (h: number) => new Date(submittedAt.getTime() + h * 3600 * 1000);
   const events: (typeof schema.reviewEvents.$inferInsert)[] = [
     {
@@ -62,18 +70,8 @@ export async function seedHistory(
       createdAt: submittedAt,
     },
   ];
-  if (outcome === "approved" || outcome === "disputed")
+  if (outcome === "approved" || outcome === "flagged")
     events.push({ resultId, actorId: moderatorId, fromStatus: "pending", toStatus: "approved", createdAt: later(20) });
-  if (outcome === "disputed")
-    events.push({
-      resultId,
-      actorId: null,
-      fromStatus: "approved",
-      toStatus: "disputed",
-      reason: "reader-flag",
-      note: "A reader flagged the figures.",
-      createdAt: later(60),
-    });
   if (outcome === "rejected")
     events.push({
       resultId,
@@ -103,9 +101,10 @@ export async function seedHistory(
       createdAt: later(5),
     });
   await db.insert(schema.reviewEvents).values(events);
-  if (outcome === "disputed") {
+  if (outcome === "flagged") {
     await db.insert(schema.readerFlags).values({
       resultId,
+      reporterId: readerId,
       reason: "wrong-figures",
       note: "Capacity looks high for this pack.",
       createdAt: later(60),

@@ -104,6 +104,8 @@ export async function seedResults(
   const users = await db.select({ id: schema.users.id, email: schema.users.email }).from(schema.users);
   const userId = new Map(users.map((u) => [u.email, u.id]));
   const moderatorId = userId.get("moderator@sagline.localhost");
+  // Reader flags come from signed-in readers: a demo account other than the result's contributor.
+  const readers = ["anon@sagline.localhost", "slipway@sagline.localhost"].map((e) => userId.get(e));
   const packRows = await db.select({ id: schema.packs.id, slug: schema.packs.slug }).from(schema.packs);
   const packId = new Map(packRows.map((p) => [p.slug, p.id]));
   let made = 0;
@@ -167,13 +169,13 @@ export async function seedResults(
         await putObject(key, csv, "text/csv");
         const submittedAt = new Date(start + n * 3.7 * 3600 * 1000);
         const outcome = outcomeFor(rnd);
-        const published = outcome === "approved" || outcome === "disputed";
+        const published = outcome === "approved" || outcome === "flagged";
         const inserted = await db
           .insert(schema.results)
           .values({
             packId: id,
             contributorId,
-            status: outcome,
+            status: outcome === "flagged" ? "approved" : outcome,
             ambientTemperatureC: ambientC,
             packStartTemperatureC: f.startTemperatureC,
             loadMode: "constant-current",
@@ -205,7 +207,8 @@ export async function seedResults(
         const resultId = inserted[0]?.id;
         if (resultId === undefined) continue;
         made++;
-        await seedHistory(db, rnd, { resultId, outcome, contributorId, moderatorId, submittedAt });
+        const readerId = readers.find((r) => r !== undefined && r !== contributorId) ?? null;
+        await seedHistory(db, rnd, { resultId, outcome, contributorId, moderatorId, readerId, submittedAt });
       }
     }
   }

@@ -16,6 +16,7 @@ import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { isOwnIncomingLogKey, isOwnIncomingPhotoKey, objectBytes } from "@/server/storage";
 import { analyseStored } from "@/server/uploads/log-upload";
+import { isRecordIdText } from "@/lib/validations/ids";
 import type { MethodCard, PackStep } from "@/lib/validations/result";
 
 export type PackFacts = { title: string; cells: number; ratedMah: number; labelledC: number; weightG: number | null };
@@ -43,7 +44,7 @@ export async function resolvePack(step: PackStep, userId: string): Promise<{ tar
   let makerName = step.makerName;
   let makerId: number | null = null;
   if (step.makerId !== "") {
-    const maker = /^\d{1,10}$/.test(step.makerId) ? await getMakerChoice(Number(step.makerId), userId) : null;
+    const maker = isRecordIdText(step.makerId) ? await getMakerChoice(Number(step.makerId), userId) : null;
     if (!maker)
       throw new AppError("validation", "That maker is not in the catalogue.", {
         "pack.makerId": ["That maker is not in the catalogue. Choose it again, or give a new maker's name."],
@@ -161,6 +162,7 @@ export async function resultFields(
           {
             code: "duplicate-log",
             message: `The same log file is already on result${same.length > 1 ? "s" : ""} ${same.map((id) => `#${id}`).join(", ")}.`,
+            resultIds: same,
           },
         ]
       : []),

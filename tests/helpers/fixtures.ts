@@ -73,6 +73,8 @@ export type ResultOpts = {
   loadMode?: "constant-current" | "constant-power" | "constant-resistance";
   publishedAt?: Date;
   curve?: CurvePoint[];
+  /** A reader's open flag on it (an open case: the result stays approved and counted). */
+  openCase?: boolean;
 };
 
 export async function makeResult(
@@ -132,13 +134,14 @@ export async function makeResult(
       dcResistanceMohm: o.dcResistanceMohm === undefined ? 12 : o.dcResistanceMohm,
       loadRateC: rateC,
       groupKey: groupKey(card).key,
-      publishedAt: status === "approved" || status === "disputed" ? (o.publishedAt ?? new Date()) : null,
+      publishedAt: status === "approved" ? (o.publishedAt ?? new Date()) : null,
     })
     .returning();
   if (!r) throw new Error("no result");
   await db
     .insert(reviewEvents)
     .values({ resultId: r.id, actorId: contributorId, toStatus: "pending", note: "Submitted." });
+  if (o.openCase) await db.insert(readerFlags).values({ resultId: r.id, reason: "wrong-figures", note: "Check it." });
   return r;
 }
 

@@ -125,7 +125,7 @@ export async function makeResult(p: {
       capacityRatio: f.capacityRatio,
       loadRateC: 10,
       groupKey: p.groupKey ?? `fixture-group-${randomUUID().slice(0, 8)}`,
-      publishedAt: p.status === "approved" || p.status === "disputed" ? new Date() : null,
+      publishedAt: p.status === "approved" ? new Date() : null,
       ...(p.submittedAt ? { submittedAt: p.submittedAt } : {}),
     })
     .returning();

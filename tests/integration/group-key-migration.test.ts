@@ -1,4 +1,4 @@
-// Migration 0004's hand-written data step, run on rows as older code stored them: the like-for-like key's
+// The figures-ratings-mapping migration's hand-written data step, run on rows as older code stored them: the like-for-like key's
 // resistance part comes from what the analysis read on the log (figures.dcResistanceMethod), the other parts
 // stay, and the measured rating is copied from the stored figures where they hold it. The statements are read
 // from the migration file itself, so the test checks exactly what databases run.
@@ -11,7 +11,14 @@ import { results } from "@/db/schema";
 import { groupKey, groupKeyForAnalysis, type Figures } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
 
-const FILE = path.resolve(__dirname, "../../db/migrations/0004_figures-ratings-mapping.sql");
+// Found by name in the journal, so the test follows the migration when migrations are renumbered at merge time.
+const FOLDER = path.resolve(__dirname, "../../db/migrations");
+const journal = JSON.parse(fs.readFileSync(path.join(FOLDER, "meta/_journal.json"), "utf8")) as {
+  entries: { tag: string }[];
+};
+const TAG = journal.entries.find((e) => e.tag.endsWith("_figures-ratings-mapping"))?.tag;
+if (!TAG) throw new Error("no figures-ratings-mapping migration in the journal");
+const FILE = path.join(FOLDER, `${TAG}.sql`);
 const dataStatements = () =>
   fs
     .readFileSync(FILE, "utf8")
@@ -56,7 +63,7 @@ const keyOf = async (name: string) =>
       .where(eq(results.id, ids[name] ?? 0))
   )[0]?.k;
 
-describe("migration 0004: group keys from the log", () => {
+describe("migration figures-ratings-mapping: group keys from the log", () => {
   it("finds the hand-written data statements in the migration", () => {
     expect(dataStatements()).toHaveLength(2);
   });

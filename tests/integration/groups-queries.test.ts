@@ -29,9 +29,10 @@ beforeAll(async () => {
   const b1 = await makePack(makerB.id, { labelledContinuousC: 100 });
   const c1 = await makePack(makerC.id, { labelledContinuousC: 40 });
   ids = { a1: a1.id, a2: a2.id, b1: b1.id, c1: c1.id };
-  // a1 in G: sag-limited C 10, 20, 40, 100 → median 30 (type-7 interpolation), and one disputed result that counts.
+  // a1 in G: sag-limited C 10, 20, 40, 100 → median 30 (type-7 interpolation); the 100 has a reader's open case,
+  // which does not stop it counting until moderators decide.
   for (const c of [10, 20, 40]) await makeResult(a1, tester.id, { sagLimitedC: c });
-  await makeResult(a1, tester.id, { sagLimitedC: 100, status: "disputed" });
+  await makeResult(a1, tester.id, { sagLimitedC: 100, openCase: true });
   // Not public: never counted.
   await makeResult(a1, tester.id, { sagLimitedC: 500, status: "pending" });
   await makeResult(a1, tester.id, { sagLimitedC: 500, status: "rejected" });

@@ -29,7 +29,8 @@ beforeAll(async () => {
   await makeResult(pack, tester.id, { rateC: 5, sagLimitedC: 30, sustainedCMeasured: 4.9 });
   await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32, sustainedCMeasured: 7.9, retention: series }); // the answer
   await makeResult(pack, tester.id, { rateC: 15, passedStop: true, sustainedCMeasured: null }); // did not qualify
-  await makeResult(pack, tester.id, { rateC: 20, status: "disputed", sustainedCMeasured: 19.8 }); // disputed: not counted
+  // An open case, stopped early: it counts while moderators decide, but its run did not qualify.
+  await makeResult(pack, tester.id, { rateC: 20, reachedCutoff: false, openCase: true, sustainedCMeasured: null });
   await makeResult(pack, tester.id, { rateC: 12, reachedCutoff: false }); // stopped before cut-off
   await makeResult(pack, tester.id, { rateC: 30, loadMode: "constant-power" }); // no measured rating
   await makeResult(pack, tester.id, { rateC: 40, status: "pending", sustainedCMeasured: 39, retention: longer }); // not public
@@ -50,7 +51,7 @@ describe("pack detail", () => {
     expect(keys.size).toBe(d?.groups.length);
     const byKeyEnd = (end: string) => d?.groups.find((g) => g.group.key.endsWith(end));
     expect(byKeyEnd("_r5-10_new")?.n).toBe(1); // the new 8C run
-    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, disputed: 1 }); // 12C, 15C and the disputed 20C
+    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, openCases: 1 }); // 12C, 15C and the 20C being checked
     expect(byKeyEnd("_r5-10_c50-199")?.n).toBe(3); // aged 60, 120 and 180 cycles
     expect(byKeyEnd("_r5-10_c50-199")?.figures.capacityMah?.median).toBe(1800);
   });
@@ -60,7 +61,7 @@ describe("pack detail", () => {
     expect(d?.sustained?.rateC).toBeCloseTo(7.9, 5);
     // Per group: the highest measured value of that group's approved results only.
     const g = d?.groups.find((x) => x.group.key.endsWith("_r10-20_new"));
-    expect(g?.sustainedC).toBeNull(); // 15C did not qualify, 20C is disputed, 12C has no measured rating
+    expect(g?.sustainedC).toBeNull(); // none of 12C, 15C and 20C (stopped early) qualified
     expect(d?.groups.find((x) => x.group.key.endsWith("_r2-5_new"))?.sustainedC).toBeCloseTo(4.9, 5);
   });
 

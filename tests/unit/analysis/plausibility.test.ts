@@ -106,10 +106,12 @@ describe("plausibility flags", () => {
     expect(codes(i)).toEqual(["cells-mismatch"]);
   });
 
-  it("duplicate-log: the same content hash was already submitted", () => {
+  it("duplicate-log: the same content hash was already submitted (with the other result's id, for a link)", () => {
     const i = clean();
     i.duplicateLogResultIds = [17];
-    expect(plausibilityFlags(i)).toEqual([{ code: "duplicate-log", message: expect.stringMatching(/#17/) }]);
+    expect(plausibilityFlags(i)).toEqual([
+      { code: "duplicate-log", message: expect.stringMatching(/#17/), resultIds: [17] },
+    ]);
   });
 
   it("proposed-catalogue: a new maker and pack are proposed", () => {

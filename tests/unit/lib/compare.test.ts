@@ -8,7 +8,7 @@ let id = 0;
 const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
   id: ++id,
   packId: 1,
-  status: "approved",
+  openCase: false,
   groupKey: "k",
   ratedCapacityMah: 2000,
   ambientTemperatureC: 22,
@@ -88,10 +88,11 @@ describe("sustained C (definition on /methods#sustained-c)", () => {
       r({ loadRateC: 5, sustainedCMeasured: 4.9 }),
       r({ loadRateC: 10, sustainedCMeasured: 9.7 }),
       r({ loadRateC: 20, sustainedCMeasured: null }), // did not qualify
-      r({ loadRateC: 30, sustainedCMeasured: 29, status: "disputed" }),
     ];
     expect(sustainedC(rows)).toEqual({ rateC: 9.7, resultId: rows[1]?.id });
     expect(sustainedC([r({ sustainedCMeasured: null })])).toBeNull();
+    // A reader's open case does not stop a result counting: it counts until moderators decide.
+    expect(sustainedC([...rows, r({ loadRateC: 30, sustainedCMeasured: 29, openCase: true })])?.rateC).toBe(29);
   });
 });
 
@@ -101,12 +102,12 @@ describe("one pack's ageing", () => {
       Array.from({ length: n }, (_, i) => ({ cycle: i + 1, capacityMah: 2000 - 5 * i })),
       2000,
     );
-  it("comes from the approved result with the longest retention series, never a disputed one", () => {
-    const rows = [r({ retention: s(3) }), r({ retention: s(10), status: "disputed" }), r({ retention: s(5) })];
+  it("comes from the published result with the longest retention series", () => {
+    const rows = [r({ retention: s(3) }), r({ retention: s(10) }), r({ retention: s(5) })];
     const one = onePackSeries(rows);
-    expect(one?.resultId).toBe(rows[2]?.id);
-    expect(one?.retention.points).toHaveLength(5);
-    expect(one?.otherSeries).toBe(1);
+    expect(one?.resultId).toBe(rows[1]?.id);
+    expect(one?.retention.points).toHaveLength(10);
+    expect(one?.otherSeries).toBe(2);
     expect(onePackSeries([r({})])).toBeNull();
   });
 });

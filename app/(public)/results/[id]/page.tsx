@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { recordId } from "@/lib/validations/ids";
 import { LineChart } from "@/components/charts/line-chart";
 import { DischargesTable } from "@/components/analysis/discharges-table";
 import { RetentionSummary } from "@/components/analysis/retention-summary";
@@ -12,6 +13,7 @@ import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { reviewReasonLabels } from "@/lib/review-status-labels";
+import { openCaseReasonWords } from "@/lib/validations/review";
 import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
@@ -21,7 +23,7 @@ export async function generateStaticParams() {
   return [];
 }
 
-const params = z.object({ id: z.coerce.number().int().positive().max(2_147_483_647) });
+const params = z.object({ id: recordId });
 type Props = { params: Promise<{ id: string }> };
 
 export async function generateMetadata(props: Props): Promise<Metadata> {
@@ -33,7 +35,6 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
 const statusWords: Record<string, string> = {
   pending: "submitted",
   approved: "approved",
-  disputed: "disputed",
   rejected: "rejected",
   withdrawn: "withdrawn",
   changes_requested: "changes requested",
@@ -55,15 +56,20 @@ export default async function ResultPage(props: Props) {
           <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span>
         </p>
         <h1>Result #{r.id}</h1>
+        {r.openCaseReasons.length ? (
+          <p
+            className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn"
+            role="note"
+            data-testid="open-case"
+          >
+            A reader asked moderators to check this result:{" "}
+            {r.openCaseReasons.map((reason) => openCaseReasonWords[reason]).join("; ")} — it still counts until they
+            decide.
+          </p>
+        ) : null}
         <div className="max-w-xl">
           <FlagResultForm resultId={r.id} />
         </div>
-        {r.status === "disputed" ? (
-          <p className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn" role="note">
-            Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible,
-            marked.
-          </p>
-        ) : null}
         <p className="text-sm">
           Contributor: <strong data-testid="contributor">{r.contributor}</strong> · published {fmtDate(r.publishedAt)}
         </p>

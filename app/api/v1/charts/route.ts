@@ -1,24 +1,31 @@
-// GET /api/v1/charts — saved (curated) charts with their full state and links.
-// POST /api/v1/charts — add a chart to the curated list (signed-in, "chart.save"); anyone can publish a permalink without it.
+// GET /api/v1/charts — the featured charts (chosen by moderators), newest feature first, a page at a time, with
+// their full state and links. POST /api/v1/charts — save a chart (signed-in, "chart.save", limited per
+// account): it gets an id whose link anyone can open; moderators decide whether it is listed.
 import { randomBytes } from "node:crypto";
-import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { listSavedCharts } from "@/db/queries/open-data/charts";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/server/api";
+import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
+import { pageQuery } from "@/lib/validations/open-data";
+import { cachedFeaturedCharts } from "@/server/public-data";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 
+const chartPageQuery = pageQuery.extend({ size: pageQuery.shape.size.unwrap().max(50).default(20) });
+
 export const GET = apiGet(async (req) => {
-  const charts = await listSavedCharts();
-  return apiJson(req, { data: charts.map(savedChartJson) });
+  const { page, size } = parseQuery(req, chartPageQuery);
+  const { rows, total } = await cachedFeaturedCharts(page, size);
+  const envelope = pageEnvelope(req, page, size, total);
+  return apiJson(req, { data: rows.map(savedChartJson), meta: envelope.meta, links: envelope.links }, envelope.headers);
 });
 const saveBody = z.object({ state: chartState });
 
 export const POST = withPermission("chart.save", async (req, _ctx, user) => {
   if (!user) throw new AppError("unauthenticated", "Please sign in first.");
+  await enforceRateLimit(`chart-save:user:${user.id}`, limits.chartSavePerUser);
   const body: unknown = await req.json().catch(() => null);
   const { state } = saveBody.parse(body);
   const slug =
@@ -36,13 +43,17 @@ export const POST = withPermission("chart.save", async (req, _ctx, user) => {
     state,
     createdById: user.id,
   });
-  try {
-    revalidatePath("/charts");
-  } catch {
-    // Outside a Next request (tests, scripts) there is no cache to revalidate.
-  }
   return Response.json(
-    { data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) },
+    {
+      data: savedChartJson({
+        ...row,
+        kind: state.kind,
+        title: state.title,
+        note: state.note ?? null,
+        state,
+        featuredAt: null,
+      }),
+    },
     { status: 201 },
   );
 });

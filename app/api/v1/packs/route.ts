@@ -4,12 +4,13 @@ import { apiOptions, cachedJson, withCors } from "@/server/api";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { queryPacks } from "@/lib/pack-query";
 import { cachedPackRows } from "@/server/public-data";
-import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { clientAddress } from "@/server/client-address";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { parsePackQuery, toPackParams } from "@/lib/validations/pack-query";
 import { DATA_LICENCE } from "@/components/layout/site-footer";
 
 const handler = withPermission("public", async (req) => {
-  await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
+  await enforceRateLimit(`api:${clientAddress(req.headers)}`, limits.apiPerIp);
   const parsed = parsePackQuery(new URL(req.url).searchParams);
   if (!parsed.success)
     throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));

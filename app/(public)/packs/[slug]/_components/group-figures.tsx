@@ -78,7 +78,7 @@ export function GroupFiguresTable({
                   {g.group.label}
                   <span className="muted block text-xs">
                     {g.n} result{g.n === 1 ? "" : "s"}
-                    {g.disputed ? `, ${g.disputed} disputed` : ""}
+                    {g.openCases ? `, ${g.openCases} being checked by moderators` : ""}
                   </span>
                 </th>
                 <td className="px-2 py-2">
