@@ -1,27 +1,21 @@
 /**
  * Command line: figures from a log file.
  *   npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W]
- *       [--cutoff-v V] [--stop-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL[,temperature=COL]]
+ *       [--cutoff-v V] [--stop-temp-c T] [--pack-start-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL[,temperature=COL]]
  *       [--no-header] [--json]
  * COL is a header name or a column number from 0. Bad input: exit code 2 and one line on stderr.
  */
 import fs from "node:fs";
 import { type AnalyseOptions, type Analysis, type ColumnMapping, LogError, analyseLog, toPublicFigures } from "../lib/analysis";
+import { CLI_NUMBER_FLAGS } from "../lib/open-data/recompute";
 
 const USAGE =
-  "usage: npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W] [--cutoff-v V] [--stop-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL] [--no-header] [--json]";
+  "usage: npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W] [--cutoff-v V] [--stop-temp-c T] [--pack-start-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL] [--no-header] [--json]";
 
 class UsageError extends Error {}
 
-const NUMBER_FLAGS: Record<string, keyof AnalyseOptions> = {
-  "--cells": "cells",
-  "--rated-mah": "ratedMah",
-  "--labelled-c": "labelledC",
-  "--weight-g": "weightG",
-  "--cutoff-v": "cutoffVPerCell",
-  "--stop-temp-c": "stopTemperatureC",
-  "--hold-s": "holdDelayS",
-};
+// The flags live beside the command a result's page shows (lib/open-data/recompute.ts), so the two agree.
+const NUMBER_FLAGS: Record<string, keyof AnalyseOptions> = CLI_NUMBER_FLAGS;
 
 function parseMap(text: string, mapping: ColumnMapping): void {
   for (const part of text.split(",")) {

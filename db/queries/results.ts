@@ -1,14 +1,12 @@
-// Reads of published results. Public = approved or disputed (disputed stay visible, marked). Dates leave
-// as ISO strings so the cached reads (server/public-data.ts) survive JSON round trips.
+// Reads of published results (the counting rule: ./published.ts). Dates leave as ISO strings so the cached reads
+// (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import type { PublicResultRow } from "@/lib/pack-summary";
-
-const PUBLIC_STATUSES = ["approved", "disputed"] as const;
-export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
@@ -55,8 +53,9 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
   const rows = await db
     .select(publicResultColumns)
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .where(and(inArray(results.packId, packIds), isPublic))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.packId, packIds), isPublished))
     .orderBy(asc(results.cyclesBeforeTest), asc(results.id));
   return rows.map(toRow);
 }
@@ -67,7 +66,9 @@ export async function getPublicCurves(resultIds: number[]): Promise<Map<number, 
   const rows = await db
     .select({ id: results.id, curve: results.curve })
     .from(results)
-    .where(and(inArray(results.id, resultIds), isPublic));
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.id, resultIds), isPublished));
   return new Map(rows.map((r) => [r.id, r.curve]));
 }
 
@@ -83,7 +84,7 @@ export type NewestResult = {
   labelRatio: number | null;
 };
 
-/** The newest approved results, for the home page. */
+/** The newest published results, for the home page and the sitemap. */
 export async function listNewestApprovedResults(limit: number): Promise<NewestResult[]> {
   const rows = await db
     .select({
@@ -98,9 +99,9 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
       labelRatio: results.labelRatio,
     })
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(results.status, "approved"), eq(packs.status, "active")))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(isPublished)
     .orderBy(desc(results.publishedAt), desc(results.id))
     .limit(limit);
   return rows.map((r) => ({ ...r, publishedAt: iso(r.publishedAt) }));
@@ -119,6 +120,8 @@ export type ResultDetail = PublicResultRow & {
     connector: string;
   };
   contributor: string;
+  /** The uploaded log's file name (its extension names the download; the name itself is never shown). */
+  logFilename: string;
   notes: string | null;
   submittedAt: string;
   figures: Figures;
@@ -140,6 +143,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .select({
       ...publicResultColumns,
       notes: results.notes,
+      logFilename: results.logFilename,
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
@@ -160,7 +164,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .innerJoin(users, eq(users.id, results.contributorId))
-    .where(and(eq(results.id, id), isPublic))
+    .where(and(eq(results.id, id), isPublished))
     .limit(1);
   if (!row) return null;
   const events = await db
@@ -190,6 +194,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     weightG,
     connector,
     notes,
+    logFilename,
     submittedAt,
     figures,
     curve,
@@ -210,6 +215,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     },
     contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
     notes,
+    logFilename,
     submittedAt: new Date(submittedAt).toISOString(),
     figures,
     curve,
@@ -224,4 +230,24 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),
   };
+}
+
+export type PublishedLog = { resultId: number; key: string; sha256: string; bytes: number; filename: string };
+
+/** The stored log of a published result (its raw data, CC BY 4.0 like the figures); null otherwise. */
+export async function getPublishedLog(id: number): Promise<PublishedLog | null> {
+  const [row] = await db
+    .select({
+      resultId: results.id,
+      key: results.logKey,
+      sha256: results.logSha256,
+      bytes: results.logBytes,
+      filename: results.logFilename,
+    })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.id, id), isPublished))
+    .limit(1);
+  return row ?? null;
 }

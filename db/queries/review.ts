@@ -2,12 +2,13 @@
 // one result's review page (method card, figures, contributor history, the pack's group median before and
 // after approval) and the review history shown publicly.
 import "server-only";
-import { and, asc, count, desc, eq, inArray, ne, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, ne, sql, type SQL } from "drizzle-orm";
 import { db, type Executor } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import { summarise, type PlausibilityInput } from "@/lib/analysis";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import type { ReviewQueueFilter } from "@/lib/validations/review";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !== null && Number.isFinite(x));
 
@@ -231,14 +232,9 @@ export async function getReviewDetail(resultId: number) {
   const groupRows = await db
     .select(figureCols)
     .from(results)
-    .where(
-      and(
-        eq(results.packId, r.packId),
-        eq(results.groupKey, r.groupKey),
-        inArray(results.status, ["approved", "disputed"]),
-        ne(results.id, r.id),
-      ),
-    );
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.packId, r.packId), eq(results.groupKey, r.groupKey), isPublished, ne(results.id, r.id)));
   const history = await db
     .select({ status: results.status, n: count() })
     .from(results)

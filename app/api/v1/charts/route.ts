@@ -1,4 +1,4 @@
-// GET /api/v1/charts — saved (curated) charts with their full state and links.
+// GET /api/v1/charts — saved (curated) charts with their full state and links, paged.
 // POST /api/v1/charts — add a chart to the curated list (signed-in, "chart.save"); anyone can publish a permalink without it.
 import { randomBytes } from "node:crypto";
 import { revalidatePath } from "next/cache";
@@ -6,14 +6,19 @@ import { z } from "zod";
 import { listSavedCharts } from "@/db/queries/open-data/charts";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/server/api";
+import { pageQuery } from "@/lib/api-contract/queries";
+import { chartList } from "@/lib/api-contract/responses";
+import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
 import { withPermission } from "@/server/route";
 
 export const GET = apiGet(async (req) => {
+  const q = parseQuery(req, pageQuery);
   const charts = await listSavedCharts();
-  return apiJson(req, { data: charts.map(savedChartJson) });
+  const page = pageOf(req, q, charts.length);
+  const data = charts.slice((q.page - 1) * q.size, q.page * q.size).map(savedChartJson);
+  return apiJson(req, chartList, { data, meta: page.meta, links: page.links }, page.headers);
 });
 const saveBody = z.object({ state: chartState });
 

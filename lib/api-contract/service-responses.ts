@@ -1,0 +1,97 @@
+// Response schemas of the public routes that are not data lists: POST /api/v1/analyse (the CLI's JSON),
+// oEmbed, a reader's flag and GET /api/v1/me.
+import { z } from "zod";
+import type { CurvePoint, PublicFigures } from "@/lib/analysis";
+import { userRoles } from "@/lib/enums";
+
+const n = z.number().nullable();
+const curvePoint = z.object({
+  timeS: z.number(),
+  voltageV: z.number(),
+  currentA: z.number(),
+  temperatureC: z.number().nullable(),
+  capacityMah: z.number(),
+});
+
+/** toPublicFigures(): every figure of lib/analysis at the top level, then the parameters used. */
+export const analyseResponse = z
+  .object({
+    samples: z.number().int(),
+    skippedLines: z.number().int(),
+    durationS: z.number(),
+    cells: z.number().int().nullable(),
+    capacityMah: n,
+    energyWh: n,
+    meanVoltageV: n,
+    meanVoltagePerCellV: n,
+    minVoltageV: n,
+    minVoltagePerCellV: n,
+    peakCurrentA: n,
+    startTemperatureC: n,
+    peakTemperatureC: n,
+    temperatureRiseC: n,
+    timeToCutoffS: n,
+    timeToStopTemperatureS: n,
+    holdVoltagePerCellV: n,
+    dcResistanceMohm: n,
+    dcResistancePerCellMohm: n,
+    dcResistanceMethod: z.enum(["iec-61960-two-level", "step"]).nullable(),
+    resistanceAt25CMohm: n,
+    resistanceTemperatureC: n,
+    sagLimitedC: n,
+    capacityRatio: n,
+    labelRatio: n,
+    specificEnergyWhKg: n,
+    specificPowerWKg: n,
+    mainDischargeCurrentA: n,
+    mainDischargeDurationS: n,
+    mainDischargeCapacityMah: n,
+    mainDischargeEnergyWh: n,
+    restVoltageV: n,
+    minCellVoltageV: n,
+    dischargeCurrentSign: z.enum(["positive", "negative"]),
+    cellsSource: z.enum(["given", "cell-columns", "rest-voltage"]).nullable(),
+    warnings: z.array(z.string()),
+    parameters: z.object({
+      holdDelayS: z.number(),
+      activationEnergyKJPerMol: z.number(),
+      nominalVPerCell: z.number(),
+      floorVPerCell: z.number(),
+      loadThresholdA: z.number(),
+    }),
+    curve: z.array(curvePoint).optional().describe("Only with include=curve."),
+  })
+  .describe("Figures of the log, as the open CLI's --json prints them (full precision), and the parameters used.");
+
+// The schema and lib/analysis's types must describe the same object (a compile-time check).
+type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
+const _sameShape: Same<z.infer<typeof analyseResponse>, PublicFigures & { curve?: CurvePoint[] }> = true;
+void _sameShape;
+
+export const oembedResponse = z.object({
+  version: z.literal("1.0"),
+  type: z.literal("rich"),
+  title: z.string(),
+  author_name: z.string(),
+  author_url: z.string(),
+  provider_name: z.string(),
+  provider_url: z.string(),
+  cache_age: z.number().int(),
+  html: z.string(),
+  width: z.number().int(),
+  height: z.number().int(),
+  thumbnail_url: z.string().optional(),
+  thumbnail_width: z.number().int().optional(),
+  thumbnail_height: z.number().int().optional(),
+  license: z.string().describe("SPDX identifier of the data's licence."),
+  license_url: z.string(),
+});
+
+export const flagCreated = z.object({
+  flag: z.object({ id: z.number().int(), resultId: z.number().int(), status: z.literal("open") }),
+});
+
+export const meResponse = z.object({
+  user: z.object({ name: z.string(), role: z.enum(userRoles) }).nullable(),
+  watching: z.boolean().optional(),
+});
