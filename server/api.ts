@@ -118,8 +118,8 @@ export function apiJson(req: Request, schema: z.ZodType, body: Envelope, headers
 }
 
 /** JSON that is not an envelope (oEmbed, the OpenAPI document, the Data Package descriptor). */
-export function plainJson(req: Request, schema: z.ZodType | null, body: unknown, headers: Record<string, string> = {}) {
-  if (schema) checkContract(schema, body);
+export function plainJson(req: Request, schema: z.ZodType, body: unknown, headers: Record<string, string> = {}) {
+  checkContract(schema, body);
   return sendCached(req, { body: JSON.stringify(body), contentType: "application/json; charset=utf-8", headers });
 }
 

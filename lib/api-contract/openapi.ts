@@ -48,6 +48,8 @@ const NAMED: Record<string, z.ZodType> = {
   OEmbed: s.oembedResponse,
   FlagCreated: s.flagCreated,
   Me: s.meResponse,
+  DataPackage: s.dataPackageResponse,
+  OpenApiDocument: s.openApiResponse,
 };
 const nameOf = new Map(Object.entries(NAMED).map(([name, schema]) => [schema, name]));
 const ref = (name: string) => `#/components/schemas/${name}`;

@@ -5,7 +5,7 @@ import { z } from "zod";
 
 export const SLUG_PATTERN = /^[a-z0-9-]{1,80}$/;
 /** Like-for-like group keys: lib/analysis/group-key.ts joins lower-case band keys with "_" (about 30–60 characters). */
-export const GROUP_KEY_PATTERN = /^[a-z0-9._-]{3,120}$/;
+export const GROUP_KEY_PATTERN = /^[a-z0-9._-]{1,120}$/;
 
 export const slug = z.string().trim().regex(SLUG_PATTERN, "Use a slug: lower-case letters, digits and hyphens.");
 export const groupKey = z.string().trim().regex(GROUP_KEY_PATTERN, "Not a like-for-like group key.");

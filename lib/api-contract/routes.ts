@@ -208,14 +208,14 @@ export const ROUTES: RouteSpec[] = [
     method: "get",
     path: "/api/v1/openapi.json",
     summary: "This document",
-    responses: { "200": { description: "The OpenAPI 3.1 document.", media: { "application/json": {} } }, ...e429 },
+    responses: { ...ok(s.openApiResponse, "The OpenAPI 3.1 document."), ...e429 },
   },
   {
     method: "get",
     path: "/data/datapackage.json",
     summary: "The Data Package descriptor of the downloads (Table Schemas, licence, counting rule)",
     etag: true,
-    responses: { "200": { description: "Data Package v2 descriptor.", media: { "application/json": {} } }, ...e429 },
+    responses: { ...ok(s.dataPackageResponse, "The Data Package v2 descriptor."), ...e429 },
   },
   {
     method: "get",

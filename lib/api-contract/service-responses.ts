@@ -95,3 +95,29 @@ export const meResponse = z.object({
   user: z.object({ name: z.string(), role: z.enum(userRoles) }).nullable(),
   watching: z.boolean().optional(),
 });
+
+/** GET /data/datapackage.json: a Data Package v2 descriptor (its full rules: the Frictionless profiles). */
+export const dataPackageResponse = z
+  .looseObject({
+    $schema: z.string(),
+    name: z.string(),
+    version: z.string(),
+    licenses: z.array(z.looseObject({ name: z.string(), path: z.string() })).min(1),
+    resources: z.array(
+      z.looseObject({
+        name: z.string(),
+        path: z.string(),
+        schema: z.looseObject({ fields: z.array(z.looseObject({})) }),
+      }),
+    ),
+  })
+  .describe("A Data Package (v2) descriptor: https://datapackage.org/standard/data-package/");
+
+/** GET /api/v1/openapi.json: an OpenAPI 3.1 document (its full rules: the OpenAPI specification). */
+export const openApiResponse = z
+  .looseObject({
+    openapi: z.string(),
+    info: z.looseObject({ title: z.string(), version: z.string() }),
+    paths: z.looseObject({}),
+  })
+  .describe("An OpenAPI 3.1 document: https://spec.openapis.org/oas/v3.1.0");
