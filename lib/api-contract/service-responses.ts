@@ -1,7 +1,7 @@
 // Response schemas of the public routes that are not data lists: POST /api/v1/analyse (the CLI's JSON),
 // oEmbed, a reader's flag and GET /api/v1/me.
 import { z } from "zod";
-import type { CurvePoint, PublicFigures } from "@/lib/analysis";
+import { WARNING_CODES, type CurvePoint, type PublicFigures } from "@/lib/analysis";
 import { userRoles } from "@/lib/enums";
 
 const n = z.number().nullable();
@@ -12,6 +12,57 @@ const curvePoint = z.object({
   temperatureC: z.number().nullable(),
   capacityMah: z.number(),
 });
+
+const discharge = z.object({
+  index: z.number().int(),
+  startS: z.number(),
+  durationS: z.number(),
+  capacityMah: z.number(),
+  energyWh: z.number(),
+  meanCurrentA: z.number(),
+  meanVoltageV: z.number(),
+  minVoltageV: z.number(),
+  reachedCutoff: z.boolean(),
+  peakTemperatureC: n,
+});
+const trend = z.object({ slopePerCycle: z.number(), intercept: z.number(), cyclesTo80: n, r2: n });
+const retention = z.object({
+  reference: z.enum(["rated", "first"]),
+  referenceMah: z.number(),
+  points: z.array(z.object({ cycle: z.number(), capacityMah: z.number(), retained: z.number() })),
+  trend: trend.nullable(),
+  cyclesTo80: n,
+  extrapolated: z.boolean(),
+  projectionNote: z.string(),
+});
+const sagLimitedAssumptions = z.object({
+  nominalVPerCell: z.number(),
+  floorVPerCell: z.number(),
+  resistancePoint: z.enum(["hold", "step-1s"]),
+  resistanceAtS: z.number(),
+  resistanceMohm: z.number(),
+  currentA: z.number(),
+  temperatureC: n,
+  indicative: z.boolean(),
+});
+const sustainedCRule = z.object({
+  floorVPerCell: z.number(),
+  stopTemperatureC: z.number(),
+  floorHeldShare: z.number(),
+  maxCurrentSpread: z.number(),
+  minDeliveredShare: z.number(),
+});
+const sustainedCReason = z.enum([
+  "no-rated-capacity",
+  "cells-unknown",
+  "cutoff-not-reached",
+  "no-temperature",
+  "stop-temperature-reached",
+  "fell-below-floor",
+  "cell-below-cutoff",
+  "current-not-steady",
+  "partial-discharge",
+]);
 
 /** toPublicFigures(): every figure of lib/analysis at the top level, then the parameters used. */
 export const analyseResponse = z
@@ -31,6 +82,8 @@ export const analyseResponse = z
     peakTemperatureC: n,
     temperatureRiseC: n,
     timeToCutoffS: n,
+    reachedCutoff: z.boolean(),
+    cutoffSource: z.enum(["stated", "log-end"]).nullable(),
     timeToStopTemperatureS: n,
     holdVoltagePerCellV: n,
     dcResistanceMohm: n,
@@ -38,9 +91,16 @@ export const analyseResponse = z
     dcResistanceMethod: z.enum(["iec-61960-two-level", "step"]).nullable(),
     resistanceAt25CMohm: n,
     resistanceTemperatureC: n,
+    dcResistanceIndicative: z.boolean(),
+    sagLimitedCEstimate: n,
+    sagLimitedCAssumptions: sagLimitedAssumptions.nullable(),
     sagLimitedC: n,
+    sustainedCMeasured: n,
+    sustainedCReason: sustainedCReason.nullable(),
+    sustainedCRule: sustainedCRule,
     capacityRatio: n,
     labelRatio: n,
+    sustainedLabelRatio: n,
     specificEnergyWhKg: n,
     specificPowerWKg: n,
     mainDischargeCurrentA: n,
@@ -49,11 +109,18 @@ export const analyseResponse = z
     mainDischargeEnergyWh: n,
     restVoltageV: n,
     minCellVoltageV: n,
+    cellSpreadV: n,
+    sampleIntervalS: n,
+    discharges: z.array(discharge),
+    headlineDischarge: z.number().int().nullable(),
+    retention: retention.nullable(),
     dischargeCurrentSign: z.enum(["positive", "negative"]),
     cellsSource: z.enum(["given", "cell-columns", "rest-voltage"]).nullable(),
     warnings: z.array(z.string()),
+    warningCodes: z.array(z.enum(WARNING_CODES)),
     parameters: z.object({
       holdDelayS: z.number(),
+      stopTemperatureC: z.number(),
       activationEnergyKJPerMol: z.number(),
       nominalVPerCell: z.number(),
       floorVPerCell: z.number(),

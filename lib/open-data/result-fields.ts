@@ -151,7 +151,7 @@ export const resultFields: Field<ResultFlatRow>[] = [
   figure(
     "sagLimitedC",
     "number",
-    "Sag-limited C: the rate at which the pack would sag to the floor voltage per cell, in C.",
+    "Sag-limited C, an estimate from the measured resistance (never a measured rating): the rate at which the pack would sag to the floor voltage per cell, in C (/methods#sag-limited-c).",
     1,
   ),
   figure("labelRatio", "number", "Label ratio: measured C ÷ labelled continuous C (dimensionless).", 3),
