@@ -9,6 +9,7 @@ import { summarise, type PlausibilityInput } from "@/lib/analysis";
 import { CURVE_KEY_TOLERANCE } from "@/lib/analysis/curve-fingerprint";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import type { ReviewQueueFilter } from "@/lib/validations/review";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !== null && Number.isFinite(x));
 
@@ -257,14 +258,9 @@ export async function getReviewDetail(resultId: number) {
   const groupRows = await db
     .select(figureCols)
     .from(results)
-    .where(
-      and(
-        eq(results.packId, r.packId),
-        eq(results.groupKey, r.groupKey),
-        eq(results.status, "approved"),
-        ne(results.id, r.id),
-      ),
-    );
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.packId, r.packId), eq(results.groupKey, r.groupKey), isPublished, ne(results.id, r.id)));
   const history = await db
     .select({ status: results.status, n: count() })
     .from(results)

@@ -9,6 +9,7 @@ import { checkAgainstCard, groupKey, type Analysis, type CardCheck } from "@/lib
 import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { isOwnIncomingLogKey, isOwnIncomingPhotoKey, objectBytes } from "@/server/storage";
+import { analyseOptionsFor } from "@/lib/open-data/recompute";
 import { analyseStored } from "@/server/uploads/log-upload";
 import { isRecordIdText } from "@/lib/validations/ids";
 import type { MethodCard, PackStep } from "@/lib/validations/result";
@@ -99,17 +100,18 @@ export async function checkFiles(logKey: string | null, photoKeys: string[], use
 export type Figured = { sha256: string; bytes: number; analysis: Analysis; checks: CardCheck[] };
 
 export async function analyseForCard(logKey: string, facts: PackFacts, card: MethodCard): Promise<Figured> {
+  // The same options a result's page gives the open CLI to recompute the figures (lib/open-data/recompute.ts).
   const { sha256, bytes, analysis } = await analyseStored(
     logKey,
-    {
+    analyseOptionsFor({
       cells: facts.cells,
       ratedMah: facts.ratedMah,
       labelledC: facts.labelledC,
-      ...(facts.weightG !== null ? { weightG: facts.weightG } : {}),
+      weightG: facts.weightG,
       cutoffVPerCell: card.cutoffVPerCell,
       stopTemperatureC: card.stopTemperatureC,
-      ...(card.packStartTemperatureC !== null ? { packStartTemperatureC: card.packStartTemperatureC } : {}),
-    },
+      packStartTemperatureC: card.packStartTemperatureC,
+    }),
     env().LOG_MAX_BYTES,
     "log",
   );

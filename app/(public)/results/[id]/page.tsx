@@ -8,6 +8,8 @@ import { FlagResultForm } from "@/components/flag-result-form-client";
 import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
+import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { logDownloadName, recomputeCommand } from "@/lib/open-data/recompute";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { reviewReasonLabels } from "@/lib/review-status-labels";
 import { openCaseReasonWords } from "@/lib/validations/review";
@@ -45,6 +47,16 @@ export default async function ResultPage(props: Props) {
   const group = describeResultGroup(r);
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
   const temps = time.filter((p): p is typeof p & { tc: number } => p.tc !== null);
+  const logFile = logDownloadName(r.id, r.logFilename);
+  const command = recomputeCommand(logFile, {
+    cells: r.pack.cellsInSeries,
+    ratedMah: r.ratedCapacityMah,
+    labelledC: r.pack.labelledContinuousC,
+    weightG: r.pack.weightG,
+    cutoffVPerCell: r.cutoffVPerCell,
+    stopTemperatureC: r.stopTemperatureC,
+    packStartTemperatureC: r.packStartTemperatureC,
+  });
   return (
     <article className="space-y-8">
       <header className="space-y-2">
@@ -129,6 +141,23 @@ export default async function ResultPage(props: Props) {
             <p className="muted">The log has no temperature column.</p>
           )}
         </div>
+      </section>
+
+      <section aria-labelledby="raw-log" className="space-y-2" data-testid="raw-log">
+        <h2 id="raw-log">Raw log and recomputing the figures</h2>
+        <p className="text-sm">
+          <a href={`/api/v1/results/${r.id}/log`} download={logFile}>
+            Download the log ({logFile})
+          </a>{" "}
+          as it was uploaded, under{" "}
+          <a href={DATA_LICENCE_URL} rel="license">
+            {DATA_LICENCE_LABEL}
+          </a>
+          . With Sagline&apos;s open command-line tool, this command computes the same figures from it:
+        </p>
+        <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
+          <code data-testid="recompute-command">{command}</code>
+        </pre>
       </section>
 
       <section aria-labelledby="history" className="space-y-2">
