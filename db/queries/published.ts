@@ -5,21 +5,10 @@
 // stays approved and so still counts. The predicate names results, packs and makers: join packs on
 // results.pack_id and makers on packs.maker_id (packOfResult, makerOfPack).
 import "server-only";
-import { and, eq, inArray } from "drizzle-orm";
-import { makers, packs, results, type ReviewStatus } from "@/db/schema";
+import { and, eq } from "drizzle-orm";
+import { makers, packs, results } from "@/db/schema";
 
-/**
- * "approved" is published. Until the reader-case work of issue 13 lands, an open reader case is still stored as
- * the status "disputed" — the same thing as "approved with an open case", so it counts too. That work drops
- * "disputed" from the enum; this entry goes with it (the type makes it a compile error until it does).
- */
-const PUBLISHED_STATUSES: ReviewStatus[] = ["approved", "disputed"];
-
-export const isPublished = and(
-  inArray(results.status, PUBLISHED_STATUSES),
-  eq(packs.status, "active"),
-  eq(makers.status, "active"),
-);
+export const isPublished = and(eq(results.status, "approved"), eq(packs.status, "active"), eq(makers.status, "active"));
 
 export const packOfResult = eq(packs.id, results.packId);
 export const makerOfPack = eq(makers.id, packs.makerId);

@@ -9,12 +9,16 @@ export const GROUP_KEY_PATTERN = /^[a-z0-9._-]{1,120}$/;
 
 export const slug = z.string().trim().regex(SLUG_PATTERN, "Use a slug: lower-case letters, digits and hyphens.");
 export const groupKey = z.string().trim().regex(GROUP_KEY_PATTERN, "Not a like-for-like group key.");
-/** Row ids are PostgreSQL integers: positive and at most 2³¹ − 1. */
-export const rowId = z.coerce
-  .number({ error: "Not an id." })
-  .int("Not an id.")
-  .positive("Not an id.")
-  .max(2_147_483_647, "Not an id.");
+/**
+ * Row ids in paths are PostgreSQL integers written in digits: positive and at most 2³¹ − 1. Digits only, so "1e3",
+ * " 7" or "0x10" never quietly mean another row (the same rule as lib/validations/ids.ts for forms and JSON).
+ */
+export const rowId = z
+  .string()
+  .regex(/^[1-9][0-9]{0,9}$/, "Not an id.")
+  .describe("A positive whole number in digits, at most 2147483647.")
+  .transform(Number)
+  .pipe(z.number().max(2_147_483_647, "Not an id."));
 
 export const MAX_PAGE_SIZE = 200;
 export const DEFAULT_PAGE_SIZE = 25;

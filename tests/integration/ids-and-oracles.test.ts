@@ -40,7 +40,7 @@ describe("ids are positive 32-bit integers everywhere", () => {
       expect(recordId.safeParse(bad).success, String(bad)).toBe(false);
   });
 
-  it("routes: GET /api/v1/results/{id} 422, POST …/flags 404 (signed in)", async () => {
+  it("routes: GET /api/v1/results/{id} 404 (a path naming no row), POST …/flags 404 (signed in)", async () => {
     const { GET } = await import("@/app/api/v1/results/[id]/route");
     const flags = await import("@/app/api/v1/results/[id]/flags/route");
     for (const id of TOO_BIG) {
@@ -50,7 +50,7 @@ describe("ids are positive 32-bit integers everywhere", () => {
           params: Promise.resolve({ id }),
         },
       );
-      expect(get.status, id).toBe(422);
+      expect(get.status, id).toBe(404);
       const post = await flags.POST(
         new Request(`http://localhost/api/v1/results/${id}/flags`, {
           method: "POST",
