@@ -4,7 +4,7 @@
 import { useState } from "react";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
 import { flagReasons } from "@/lib/enums";
-import { flagReasonLabels } from "@/lib/validations/review";
+import { flagReasonLabels } from "@/lib/labels";
 
 type State =
   | { kind: "idle" }

@@ -4,15 +4,12 @@
 export const userRoles = ["contributor", "moderator", "admin"] as const;
 export type UserRole = (typeof userRoles)[number];
 
-export const reviewStatuses = [
-  "pending",
-  "changes_requested",
-  "approved",
-  "rejected",
-  "withdrawn",
-  "disputed",
-] as const;
+export const reviewStatuses = ["pending", "awaiting_answer", "approved", "rejected", "withdrawn", "disputed"] as const;
 export type ReviewStatus = (typeof reviewStatuses)[number];
+
+/** Why a moderator did not accept a result (stored as the review event's reason). */
+export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;
+export type RejectReason = (typeof rejectReasons)[number];
 
 export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
 export type LoadMode = (typeof loadModes)[number];

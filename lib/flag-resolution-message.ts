@@ -15,7 +15,7 @@ export type ResolvedFlag = {
 
 const how: Record<ResolvedFlag["resolution"], string> = {
   kept: "result kept",
-  corrected: "result corrected",
+  corrected: "result kept, with a moderator’s note",
   withdrawn: "result withdrawn",
 };
 

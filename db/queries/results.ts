@@ -6,6 +6,7 @@ import { db } from "@/db";
 import { makers, packs, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Figures } from "@/lib/analysis";
 import type { PublicResultRow } from "@/lib/pack-summary";
+import { nameOnResults } from "@/lib/user-name";
 
 const PUBLIC_STATUSES = ["approved", "disputed"] as const;
 export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
@@ -121,6 +122,8 @@ export type ResultDetail = PublicResultRow & {
   contributor: string;
   notes: string | null;
   submittedAt: string;
+  /** How many label photos the contributor sent (served at /results/<id>/photos/<n>, 1-based). */
+  photoCount: number;
   figures: Figures;
   curve: CurvePoint[];
   events: {
@@ -143,6 +146,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
+      photoCount: sql<number>`jsonb_array_length(${results.photoKeys})::int`,
       contributorId: results.contributorId,
       contributorName: users.displayName,
       contributorAnonymous: users.anonymous,
@@ -193,6 +197,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     submittedAt,
     figures,
     curve,
+    photoCount,
     ...rest
   } = row;
   return {
@@ -208,9 +213,10 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       weightG,
       connector,
     },
-    contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
+    contributor: nameOnResults({ displayName: contributorName, anonymous: contributorAnonymous }),
     notes,
     submittedAt: new Date(submittedAt).toISOString(),
+    photoCount,
     figures,
     curve,
     events: events.map((e) => ({
@@ -220,7 +226,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       to: e.to,
       reason: e.reason,
       note: e.note,
-      // Reviewers are named by role only; the contributor is already credited above (or anonymous).
+      // Reviewers are named by role only; the contributor is already credited above (as they chose).
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),
   };

@@ -1,4 +1,5 @@
-// What readers and journalists leave behind: flags on published results, watches, saved charts.
+// What readers and journalists leave behind: flags on published results, requests for new-result e-mails
+// about a pack, saved charts.
 import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp } from "drizzle-orm/pg-core";
 import { users } from "./auth";
 import { packs } from "./catalogue";
@@ -30,8 +31,9 @@ export const readerFlags = pgTable(
   (t) => [index("reader_flags_result_idx").on(t.resultId), index("reader_flags_status_idx").on(t.status)],
 );
 
-export const watches = pgTable(
-  "watches",
+/** A reader asked to be e-mailed when a new result on this pack is published. */
+export const packEmails = pgTable(
+  "pack_emails",
   {
     userId: text("user_id")
       .notNull()
@@ -41,7 +43,7 @@ export const watches = pgTable(
       .references(() => packs.id, { onDelete: "cascade" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [primaryKey({ columns: [t.userId, t.packId] }), index("watches_pack_idx").on(t.packId)],
+  (t) => [primaryKey({ columns: [t.userId, t.packId] }), index("pack_emails_pack_idx").on(t.packId)],
 );
 
 export const chartKinds = ["label-check", "curves", "maker-ranking"] as const;

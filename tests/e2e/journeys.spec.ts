@@ -1,4 +1,4 @@
-// Issue 8's remaining journeys, each from the freshly seeded database: a contributor answers a change
+// Issue 8's remaining journeys, each from the freshly seeded database: a contributor answers a moderator's
 // request, a moderator resolves a reader flag, a shopper downloads a filtered CSV, a journalist downloads a
 // chart as PNG and SVG, and two keyboard-only walks (the packs table, the first steps of /submit).
 import { readFile } from "node:fs/promises";
@@ -84,7 +84,7 @@ async function expectVisibleFocus(page: Page) {
   expect(style.outline || style.ring, "the focused control shows a focus indicator").toBe(true);
 }
 
-test("a contributor answers a change request and the result is back in the queue with its history", async ({
+test("a contributor answers a moderator's request and the result is back in the queue with its history", async ({
   page,
 }) => {
   await signIn(page, "slipway@sagline.localhost");
@@ -92,17 +92,17 @@ test("a contributor answers a change request and the result is back in the queue
   const item = page
     .getByTestId("my-results")
     .getByRole("listitem")
-    .filter({ hasText: "Changes requested" })
-    .filter({ has: page.getByRole("link", { name: "Answer the change request" }) })
+    .filter({ hasText: "Waiting for your answer" })
+    .filter({ has: page.getByRole("link", { name: "Answer the moderator" }) })
     .first();
   const testId = (await item.getAttribute("data-testid")) ?? "";
   const resultId = testId.replace("my-result-", "");
   expect(resultId).toMatch(/^\d+$/);
 
-  await item.getByRole("link", { name: "Answer the change request" }).click();
+  await item.getByRole("link", { name: "Answer the moderator" }).click();
   await expect(page).toHaveURL(new RegExp(`/submit/${resultId}$`));
-  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answer a change request");
-  await expect(page.getByText("A moderator asked for a change")).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answer the moderator");
+  await expect(page.getByTestId("moderator-request")).toBeVisible();
 
   // The method card arrives as stored; say where the probe sat and correct the ambient.
   await expect(page.getByLabel(/^Equipment/)).not.toHaveValue("");
@@ -110,24 +110,26 @@ test("a contributor answers a change request and the result is back in the queue
   await page.getByLabel("Notes (optional)").fill("Probe taped to the middle of the widest face, under the wrap.");
   // The answer is required.
   await page.getByLabel(/I declare that these are honest measurements/).check();
-  await page.getByRole("button", { name: "Resubmit for review" }).click();
+  await page.getByRole("button", { name: "Send my answer" }).click();
   await expect(page.getByText("Say what you changed, for the moderator.")).toBeVisible();
   await page.getByLabel("Your answer to the moderator").fill("Added where the probe sat; ambient corrected to 22 °C.");
-  await page.getByRole("button", { name: "Resubmit for review" }).click();
+  await page.getByRole("button", { name: "Send my answer" }).click();
 
-  await expect(page).toHaveURL(/\/account$/);
+  await expect(page).toHaveURL(new RegExp(`/account/results/${resultId}\\?sent=answer$`));
+  await expect(page.getByTestId("answer-sent")).toContainText(`result #${resultId}`);
+  await page.goto("/account");
   const mine = page.getByTestId(`my-result-${resultId}`);
-  await expect(mine).toContainText("Pending review");
+  await expect(mine).toContainText("Waiting for review");
   await expect(mine).toContainText("ambient 22 °C");
-  await expect(mine.getByRole("link", { name: "Answer the change request" })).toHaveCount(0);
+  await expect(mine.getByRole("link", { name: "Answer the moderator" })).toHaveCount(0);
   await mine.getByText(/^Review history/).click();
   const history = mine.getByRole("listitem");
-  await expect(history.last()).toContainText("Changes requested → Pending review");
-  await expect(history.nth(-2)).toContainText("Pending review → Changes requested");
+  await expect(history.last()).toContainText("Waiting for your answer → Waiting for review");
+  await expect(history.nth(-2)).toContainText("Waiting for review → Waiting for your answer");
 
   // It can no longer be edited: it waits for a moderator again.
   await page.goto(`/submit/${resultId}`);
-  await expect(page.getByText(/only a result with changes requested can be edited/)).toBeVisible();
+  await expect(page.getByText(/only a result waiting for your answer can be edited/)).toBeVisible();
 });
 
 test("a moderator keeps a reader-flagged result and it is no longer shown as disputed", async ({ page }) => {
@@ -153,7 +155,7 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
     .getByTestId("flag-queue")
     .getByRole("listitem")
     .filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
-  await row.getByLabel("Note (required when correcting)").fill("Capacity checked against the log; it matches.");
+  await row.getByLabel("Note (required for “keep, with a note”)").fill("Capacity checked against the log; it matches.");
   const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
   expect(flagId).toMatch(/^\d+$/);
   await row.getByRole("button", { name: "Keep" }).click();

@@ -19,7 +19,9 @@ describe("flagResolutionMessage", () => {
       { ...base, resolution: "corrected", status: "disputed" },
       "Ashcombe Cells Ridge 1300",
     );
-    expect(text).toMatch(/^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: result corrected\./);
+    expect(text).toMatch(
+      /^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: result kept, with a moderator’s note\./,
+    );
     expect(text).toContain("still shows as disputed");
   });
 

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { listOpenReaderFlags } from "@/db/queries/review";
 import { requirePageUser } from "@/server/page-auth";
-import { reviewStatusLabels } from "@/lib/review-status-labels";
-import { flagReasonLabels } from "@/lib/validations/review";
+import { reviewStatusLabels } from "@/lib/labels";
+import { flagReasonLabels } from "@/lib/labels";
 import type { FlagReason } from "@/lib/enums";
 import { ResolveFlagForm } from "./_components/resolve-flag-client";
 import { ResolvedFlagNotice } from "./_components/resolved-flag-notice-client";
@@ -23,8 +23,8 @@ export default async function ReaderFlagsPage() {
         <h1>Reader flags</h1>
         <p className="muted max-w-3xl">
           {flags.length} open {flags.length === 1 ? "flag" : "flags"}, oldest first. A flagged result shows as disputed
-          to everyone until its flags are resolved. Keep it, correct it (say what changed), or withdraw it — a withdrawn
-          result is never deleted and its history stays public.
+          to everyone until its flags are resolved. Keep it, keep it with a note (say what the reader got right), or
+          withdraw it — a withdrawn result is never deleted and its history stays public.
         </p>
       </div>
       {/* Around the list and its empty state alike, so the confirmation survives the last row leaving. */}

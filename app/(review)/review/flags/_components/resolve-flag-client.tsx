@@ -7,7 +7,8 @@ import { resolveFlag } from "../actions/resolve-flag";
 import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";
 
 /**
- * Keep the result, correct it (note required), or withdraw it. The confirmation goes to the page's notice
+ * Keep the result, keep it with a moderator's note saying what the reader got right (note required), or
+ * withdraw it. The confirmation goes to the page's notice
  * (ResolvedFlagNotice), because this form leaves with its row once the queue refreshes.
  */
 export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTitle: string }) {
@@ -24,7 +25,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
       <input type="hidden" name="flagId" value={flagId} />
       <Field
         id={noteId}
-        label="Note (required when correcting)"
+        label="Note (required for “keep, with a note”)"
         error={state && !state.ok ? state.fieldErrors?.note?.[0] : undefined}
       >
         <textarea id={noteId} name="note" rows={2} maxLength={2000} className={inputClass} />
@@ -41,7 +42,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
           className={buttonClass("secondary")}
           disabled={pending}
         >
-          Corrected
+          Keep, with a note
         </button>
         <button type="submit" name="resolution" value="withdrawn" className={buttonClass("danger")} disabled={pending}>
           Withdraw result

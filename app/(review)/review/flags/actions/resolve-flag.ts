@@ -1,5 +1,5 @@
 "use server";
-// Resolve a reader flag: keep the result, correct it (with a note), or withdraw it.
+// Resolve a reader flag: keep the result, keep it with a moderator's note, or withdraw it.
 import { resolveReaderFlag } from "@/server/review";
 import { authedAction } from "@/server/authed-action";
 import { resolveFlagSchema } from "@/lib/validations/review";

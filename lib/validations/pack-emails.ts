@@ -1,6 +1,6 @@
-// Watching a pack (an e-mail when a new result on it is published).
+// New-result e-mails about a pack: which pack.
 import { z } from "zod";
 
-export const watchPackSchema = z.object({
+export const packEmailsSchema = z.object({
   packId: z.coerce.number({ error: "Not a pack id." }).int().positive().max(2_147_483_647),
 });
