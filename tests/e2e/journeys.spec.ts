@@ -4,7 +4,7 @@
 import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
 import { rows, settled } from "./packs-table-helpers";
-import { signIn } from "./sign-in-helpers";
+import { choosePublicName, signIn } from "./sign-in-helpers";
 
 /** RFC 4180 records (quoted fields may hold commas, doubled quotes and line breaks); every line ends in CRLF. */
 function parseCsv(text: string): string[][] {
@@ -158,7 +158,7 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
   await row.getByLabel("Note (required for “keep, with a note”)").fill("Capacity checked against the log; it matches.");
   const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
   expect(flagId).toMatch(/^\d+$/);
-  await row.getByRole("button", { name: "Keep" }).click();
+  await row.getByRole("button", { name: "Keep", exact: true }).click();
   // The action refreshes the queue: the resolved flag leaves it (and its form with it)…
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
   // …while the confirmation, outside the list, stays: it names the flag, the result and the outcome, and
@@ -294,6 +294,7 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
 
 test("keyboard only: the first steps of /submit, from the pack search to the log upload", async ({ page }) => {
   await signIn(page, `e2e-keys-${Date.now()}@sagline.localhost`);
+  await choosePublicName(page, "Keyboard Bench");
   await page.goto("/submit");
   await page.evaluate(() => localStorage.clear());
   await page.reload();

@@ -9,6 +9,7 @@ import sharp from "sharp";
 import { demoUsers } from "../../scripts/seed/scenario";
 import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
 import { caughtFor, firstLink } from "../helpers/mail";
+import { seriousViolations } from "./axe-helpers";
 import { choosePublicName, linkFromCatcher, requestLink, signIn } from "./sign-in-helpers";
 
 function log4s(): Buffer {
@@ -130,6 +131,7 @@ test("a proposed pack goes live when its first result is approved, after the mod
   const mod = await asModerator(browser);
   await mod.goto(`/review/${resultId}`);
   await expect(mod.getByTestId("proposed-entry")).toBeVisible();
+  expect(await seriousViolations(mod, "/review/[id] with a proposal")).toEqual([]);
   await photosLoaded(mod, "label-photos", 2);
   const [download] = await Promise.all([mod.waitForEvent("download"), mod.getByTestId("log-download").click()]);
   expect(download.suggestedFilename()).toBe(`result-${resultId}-skua-run.csv`);
@@ -166,6 +168,7 @@ test("a result sent back: the e-mail's link opens the contributor's view with th
   page,
   browser,
 }) => {
+  test.setTimeout(150_000);
   const mod = await asModerator(browser);
   await mod.goto("/review");
   const contributors = new Map(
@@ -201,12 +204,14 @@ test("a result sent back: the e-mail's link opens the contributor's view with th
   await expect(page).toHaveURL(new RegExp(`/account/results/${resultId}$`));
   await expect(page.getByTestId("own-status")).toHaveText("Waiting for your answer");
   await expect(page.getByTestId("moderator-request")).toContainText(question);
+  expect(await seriousViolations(page, "/account/results/[id]")).toEqual([]);
 
   // The answer form shows the request beside it; the answer is confirmed with the result's number.
   await page.getByRole("link", { name: "Answer the moderator" }).click();
   await expect(page).toHaveURL(new RegExp(`/submit/${resultId}$`));
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answer the moderator");
   await expect(page.getByTestId("moderator-request")).toContainText(question);
+  expect(await seriousViolations(page, "/submit/[id]")).toEqual([]);
   await page.getByLabel("Your answer to the moderator").fill("Taped to the middle of the widest face, under the wrap.");
   await page.getByLabel(/I declare that these are honest measurements/).check();
   await page.getByRole("button", { name: "Send my answer" }).click();

@@ -45,4 +45,5 @@ export async function choosePublicName(page: Page, name: string | null): Promise
     await page.getByLabel("Display name").fill(name);
   }
   await page.getByRole("button", { name: "Save and continue" }).click();
+  await expect(page).not.toHaveURL(/\/account\/public-name/);
 }

@@ -8,7 +8,16 @@ import { buttonClass } from "@/components/ui/form";
 import type { ReviewStatus } from "@/lib/enums";
 import { withdrawResult } from "../actions/withdraw-result";
 
-export function ResultActions({ resultId, status }: { resultId: number; status: ReviewStatus }) {
+export function ResultActions({
+  resultId,
+  status,
+  answerLink = true,
+}: {
+  resultId: number;
+  status: ReviewStatus;
+  /** Off where the page already offers the answer beside the moderator's request. */
+  answerLink?: boolean;
+}) {
   const router = useRouter();
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -26,7 +35,7 @@ export function ResultActions({ resultId, status }: { resultId: number; status: 
 
   return (
     <div className="flex flex-wrap items-center gap-2 text-sm">
-      {status === "awaiting_answer" && (
+      {status === "awaiting_answer" && answerLink && (
         <Link href={`/submit/${resultId}`} className={buttonClass("primary")}>
           Answer the moderator
         </Link>

@@ -102,7 +102,7 @@ export default async function OwnResultPage(props: {
           <Link href={`/packs/${r.packSlug}`}>the pack’s page</Link>
         </p>
       ) : null}
-      <ResultActions resultId={r.id} status={r.status} />
+      <ResultActions resultId={r.id} status={r.status} answerLink={false} />
 
       <div className="grid gap-6 lg:grid-cols-2">
         <section className="card space-y-2" aria-labelledby="method-h">
