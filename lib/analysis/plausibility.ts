@@ -51,7 +51,14 @@ export const START_TEMPERATURE_GAP_C = 5;
 export type PlausibilityInput = {
   figures: Pick<
     Figures,
-    "capacityMah" | "capacityRatio" | "labelRatio" | "sagLimitedC" | "minVoltagePerCellV" | "startTemperatureC" | "cells" | "timeToStopTemperatureS"
+    | "capacityMah"
+    | "capacityRatio"
+    | "labelRatio"
+    | "sagLimitedC"
+    | "minVoltagePerCellV"
+    | "startTemperatureC"
+    | "cells"
+    | "timeToStopTemperatureS"
   >;
   method: { ambientTemperatureC: number; cutoffVPerCell: number };
   pack: { cellsInSeries: number; ratedCapacityMah: number };
@@ -115,7 +122,8 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
   const zCap = groupModifiedZ(capacityRatio, group.capacityRatios);
   if (zCap !== null && Math.abs(zCap) > MODIFIED_Z_THRESHOLD) outliers.push(`capacity ratio (modified z ${n2(zCap)})`);
   const zLabel = groupModifiedZ(f.labelRatio, group.labelRatios);
-  if (zLabel !== null && Math.abs(zLabel) > MODIFIED_Z_THRESHOLD) outliers.push(`label ratio (modified z ${n2(zLabel)})`);
+  if (zLabel !== null && Math.abs(zLabel) > MODIFIED_Z_THRESHOLD)
+    outliers.push(`label ratio (modified z ${n2(zLabel)})`);
   if (outliers.length) {
     flags.push({
       code: "group-outlier",
@@ -138,7 +146,10 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
     }
   }
 
-  if (f.startTemperatureC !== null && Math.abs(f.startTemperatureC - method.ambientTemperatureC) > START_TEMPERATURE_GAP_C) {
+  if (
+    f.startTemperatureC !== null &&
+    Math.abs(f.startTemperatureC - method.ambientTemperatureC) > START_TEMPERATURE_GAP_C
+  ) {
     flags.push({
       code: "temperature-mismatch",
       message: `The stated ambient is ${n2(method.ambientTemperatureC)} °C but the log starts at ${n2(f.startTemperatureC)} °C, more than ${START_TEMPERATURE_GAP_C} °C apart: the pack was not at room temperature, or a probe was misplaced.`,
@@ -160,8 +171,13 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
   }
 
   if (input.makerProposed || input.packProposed) {
-    const what = [input.makerProposed ? "a new maker" : null, input.packProposed ? "a new pack" : null].filter(Boolean).join(" and ");
-    flags.push({ code: "proposed-catalogue", message: `This result proposes ${what}; check the label details before approving.` });
+    const what = [input.makerProposed ? "a new maker" : null, input.packProposed ? "a new pack" : null]
+      .filter(Boolean)
+      .join(" and ");
+    flags.push({
+      code: "proposed-catalogue",
+      message: `This result proposes ${what}; check the label details before approving.`,
+    });
   }
 
   return flags;

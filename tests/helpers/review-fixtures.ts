@@ -2,7 +2,7 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
-import type { Figures } from "@/lib/analysis";
+import { sustainedRule, type Figures } from "@/lib/analysis";
 
 function figures(over: Partial<Figures> = {}): Figures {
   return {
@@ -42,6 +42,21 @@ function figures(over: Partial<Figures> = {}): Figures {
     dischargeCurrentSign: "positive",
     cellsSource: "rest-voltage",
     warnings: [],
+    reachedCutoff: true,
+    cutoffSource: "stated",
+    dcResistanceIndicative: false,
+    sagLimitedCEstimate: 50,
+    sagLimitedCAssumptions: null,
+    sustainedCMeasured: null,
+    sustainedCReason: "no-temperature",
+    sustainedCRule: sustainedRule(3.3, 60),
+    sustainedLabelRatio: null,
+    cellSpreadV: null,
+    sampleIntervalS: 1,
+    discharges: [],
+    headlineDischarge: 1,
+    retention: null,
+    warningCodes: [],
     ...over,
   };
 }
