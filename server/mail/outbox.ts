@@ -11,7 +11,7 @@ import {
   type NewOutboxMessage,
   type OutboxMessage,
 } from "@/db/mutations/mail-outbox";
-import { db, type Executor } from "@/db";
+import { db } from "@/db";
 import { env } from "@/server/env";
 import { mailTransport, type MailTransport } from "./transport";
 import type { MailContent } from "./templates";
@@ -36,12 +36,8 @@ export function outboxMessage(to: string, content: MailContent, sensitive = fals
  * Queue one message on its own (nothing else to commit with it, e.g. a sign-in link). Returns at once; the
  * worker sends it when the insert commits.
  */
-export async function queueMail(
-  to: string,
-  content: MailContent,
-  opts: { sensitive?: boolean; exec?: Executor } = {},
-): Promise<number> {
-  const [id] = await queueRows(opts.exec ?? db, [outboxMessage(to, content, opts.sensitive ?? false)]);
+export async function queueMail(to: string, content: MailContent, opts: { sensitive?: boolean } = {}): Promise<number> {
+  const [id] = await queueRows(db, [outboxMessage(to, content, opts.sensitive ?? false)]);
   if (id === undefined) throw new Error("mail outbox insert returned nothing");
   return id;
 }

@@ -74,21 +74,26 @@ export async function runMailWorker(opts: WorkerOptions): Promise<void> {
         pending = true; // anything queued while we were away
         opts.onListening?.();
       }
+      let handled = 0;
       if (pending) {
         pending = false;
         for (;;) {
           const { sent, failed } = await deliverDueMail({ ...(opts.transport ? { transport: opts.transport } : {}) });
+          handled += sent + failed;
           if (sent + failed > 0) log(`sagline: mail worker sent ${sent}, ${failed} to retry later`);
           if (sent + failed === 0 || opts.signal.aborted) break;
         }
       }
+      // A notification that arrived while sending (no sleep to cut short then) is handled before sleeping.
+      if (pending) continue;
       const due = await nextMailDueAt(MAX_ATTEMPTS);
       const untilDue = due ? due.getTime() - Date.now() + 50 : pollMs;
-      if (untilDue <= 0) {
+      if (untilDue <= 0 && handled > 0) {
         pending = true;
         continue;
       }
-      await sleep(Math.min(pollMs, untilDue), opts.signal, wake);
+      // Due but not claimable (another worker holds it for a moment): look again shortly, not in a busy loop.
+      await sleep(untilDue <= 0 ? 200 : Math.min(pollMs, untilDue), opts.signal, wake);
       if (!pending) pending = due !== null && due.getTime() <= Date.now() + 50;
       // The poll interval passing with nothing due still looks once: a lost notification costs at most pollMs.
       if (!pending && !due) pending = true;
