@@ -125,7 +125,11 @@ beforeAll(async () => {
   const sub = await submitResult(null, submission(packId, await uploadLog(me.token, sampleLog({ seed: 811 }).csv)));
   if (!sub.ok) throw new Error(sub.error);
   withLog = sub.data.resultId;
-  await decideResult(mod.id, withLog, { kind: "approve", note: null });
+  await decideResult(mod.id, withLog, {
+    kind: "approve",
+    note: null,
+    catalogue: { intoPackId: null, intoMakerId: null },
+  });
   requestState.token = null;
   flagged = fx.results.find((r) => r.status === "approved")?.id ?? 0;
 });

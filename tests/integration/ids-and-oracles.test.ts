@@ -147,7 +147,7 @@ describe("someone else's row answers like a missing one", () => {
     const { default: ResubmitPage } = await import("@/app/(contributor)/submit/[resultId]/page");
     const owner = await signedIn("contributor");
     const { pack } = await makePack();
-    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "changes_requested" });
+    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "awaiting_answer" });
     requestState.token = tokens.contributor ?? null;
     for (const id of [String(r.id), "2000000000"])
       await expect(ResubmitPage({ params: Promise.resolve({ resultId: id }) })).rejects.toMatchObject({
