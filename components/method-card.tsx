@@ -1,5 +1,6 @@
 import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
 import { fmt } from "@/lib/format";
+import { loadModeLabels } from "@/lib/labels";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 export type MethodCardData = Pick<
@@ -18,18 +19,12 @@ export type MethodCardData = Pick<
   | "testedOn"
 >;
 
-const loadModes: Record<string, string> = {
-  "constant-current": "constant current",
-  "constant-power": "constant power",
-  "constant-resistance": "constant resistance",
-};
-
 /** The method attached to every number: how the result was taken. */
 export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?: boolean }) {
   const rows: [string, string][] = [
     ["Ambient", fmt(m.ambientTemperatureC, 1, "°C")],
     ["Pack at start", fmt(m.packStartTemperatureC, 1, "°C")],
-    ["Load", `${loadModes[m.loadMode] ?? m.loadMode}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
+    ["Load", `${loadModeLabels[m.loadMode].toLowerCase()}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
     ["Cut-off", fmt(m.cutoffVPerCell, 2, "V per cell")],
     ["Stop temperature", fmt(m.stopTemperatureC, 0, "°C")],
     ["Resistance method", RESISTANCE_METHODS[m.resistanceMethod as ResistanceMethod] ?? m.resistanceMethod],

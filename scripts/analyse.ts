@@ -1,7 +1,7 @@
 /**
  * Command line: figures from a log file.
  *   npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W]
- *       [--cutoff-v V] [--stop-temp-c T] [--hold-s S] [--no-header] [--json]
+ *       [--cutoff-v V] [--stop-temp-c T] [--pack-start-temp-c T] [--hold-s S] [--no-header] [--json]
  *       [--map time=COL,voltage=COL,current=COL[,temperature=COL][,cells=COL+COL+…][,time-unit=s|ms|min|h]
  *              [,voltage-unit=V|mV][,current-unit=A|mA][,temperature-unit=C|F|K][,discharge=positive|negative]]
  *       [--map-json '{"time":1,"voltage":9,"current":8,"hasHeader":false}']
@@ -18,21 +18,15 @@ import {
   parseMappingJson,
   toPublicFigures,
 } from "../lib/analysis";
+import { CLI_NUMBER_FLAGS } from "../lib/open-data/recompute";
 
 const USAGE =
-  "usage: npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W] [--cutoff-v V] [--stop-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL,…] [--map-json JSON] [--no-header] [--json]";
+  "usage: npm run --silent analyse -- <log.csv> [--cells N] [--rated-mah X] [--labelled-c C] [--weight-g W] [--cutoff-v V] [--stop-temp-c T] [--pack-start-temp-c T] [--hold-s S] [--map time=COL,voltage=COL,current=COL,…] [--map-json JSON] [--no-header] [--json]";
 
 class UsageError extends Error {}
 
-const NUMBER_FLAGS: Record<string, keyof AnalyseOptions> = {
-  "--cells": "cells",
-  "--rated-mah": "ratedMah",
-  "--labelled-c": "labelledC",
-  "--weight-g": "weightG",
-  "--cutoff-v": "cutoffVPerCell",
-  "--stop-temp-c": "stopTemperatureC",
-  "--hold-s": "holdDelayS",
-};
+// The flags live beside the command a result's page shows (lib/open-data/recompute.ts), so the two agree.
+const NUMBER_FLAGS: Record<string, keyof AnalyseOptions> = CLI_NUMBER_FLAGS;
 
 const MAP_KEYS: Record<string, string> = {
   time: "time",

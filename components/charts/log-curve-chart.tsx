@@ -1,6 +1,8 @@
 "use client";
-// A small preview of a log: pack voltage (left axis, solid) and current (right axis, dashed) against
-// time, with a "show as table" toggle. Colours are Okabe–Ito and always paired with a dash pattern.
+// A small preview of a log: pack voltage (left axis, solid), current (right axis, dashed) and, when asked,
+// pack temperature (its own scale, dotted, labelled at both ends) against time, with a "show as table" toggle.
+// Colours are Okabe–Ito and always paired with a dash pattern. The current axis spans charge (negative) and
+// discharge alike, so a charge phase stays inside the chart.
 import { useCallback, useId, useMemo, useRef, useState } from "react";
 import { AxisBottom, AxisLeft, AxisRight } from "@visx/axis";
 import { GridRows } from "@visx/grid";
@@ -13,7 +15,7 @@ import { fmt } from "@/lib/format";
 const MARGIN = { top: 12, right: 52, bottom: 40, left: 52 };
 const HEIGHT = 260;
 
-type Props = { points: CurvePoint[]; title?: string };
+type Props = { points: CurvePoint[]; title?: string; withTemperature?: boolean };
 
 /** The width of an element, kept up to date; a callback ref, so a re-mounted element is observed too. */
 function useWidth(initial: number): [(el: HTMLDivElement | null) => void, number] {
@@ -46,7 +48,7 @@ function extent(values: number[]): [number, number] {
   return [lo - pad, hi + pad];
 }
 
-export function LogCurveChart({ points, title = "Voltage and current over time" }: Props) {
+export function LogCurveChart({ points, title = "Voltage and current over time", withTemperature = false }: Props) {
   const [asTable, setAsTable] = useState(false);
   const [parentRef, width] = useWidth(320);
   const tableId = useId();
@@ -60,9 +62,11 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
     const innerH = HEIGHT - MARGIN.top - MARGIN.bottom;
     const x = scaleLinear<number>({ domain: extent(points.map(tx)), range: [0, innerW] });
     const v = scaleLinear<number>({ domain: extent(points.map((p) => p.voltageV)), range: [innerH, 0], nice: true });
-    const [, iHi] = extent(points.map((p) => p.currentA));
-    const i = scaleLinear<number>({ domain: [0, Math.max(iHi, 0.1)], range: [innerH, 0], nice: true });
-    return { x, v, i, tx, innerW, innerH };
+    const [iLo, iHi] = extent(points.map((p) => p.currentA));
+    const i = scaleLinear<number>({ domain: [Math.min(iLo, 0), Math.max(iHi, 0.1)], range: [innerH, 0], nice: true });
+    const temps = points.flatMap((p) => (p.temperatureC === null ? [] : [p.temperatureC]));
+    const t = temps.length > 1 ? scaleLinear<number>({ domain: extent(temps), range: [innerH, 0], nice: true }) : null;
+    return { x, v, i, t, tx, innerW, innerH };
   }, [points, width, inMinutes]);
 
   if (points.length === 0) return <p className="muted text-sm">No curve to show.</p>;
@@ -93,6 +97,23 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
             </svg>
             Current (A)
           </span>
+          {withTemperature && scales.t ? (
+            <span className="flex items-center gap-1">
+              <svg width="24" height="8" aria-hidden="true">
+                <line
+                  x1="0"
+                  y1="4"
+                  x2="24"
+                  y2="4"
+                  strokeWidth="2"
+                  strokeDasharray="1 3"
+                  strokeLinecap="round"
+                  className="stroke-[#009E73] dark:stroke-[#6fd3b2]"
+                />
+              </svg>
+              Temperature (°C, {fmt(scales.t.domain()[0], 0)}–{fmt(scales.t.domain()[1], 0)})
+            </span>
+          ) : null}
           <button
             type="button"
             onClick={() => setAsTable((t) => !t)}
@@ -167,6 +188,18 @@ export function LogCurveChart({ points, title = "Voltage and current over time" 
                 className="stroke-[#D55E00] dark:stroke-[#E69F00]"
                 fill="none"
               />
+              {withTemperature && scales.t ? (
+                <LinePath
+                  data={points.filter((p) => p.temperatureC !== null)}
+                  x={(p) => scales.x(scales.tx(p))}
+                  y={(p) => scales.t?.(p.temperatureC ?? 0) ?? 0}
+                  strokeWidth={2}
+                  strokeDasharray="1 3"
+                  strokeLinecap="round"
+                  className="stroke-[#009E73] dark:stroke-[#6fd3b2]"
+                  fill="none"
+                />
+              ) : null}
               <LinePath
                 data={points}
                 x={(p) => scales.x(scales.tx(p))}

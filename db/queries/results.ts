@@ -1,16 +1,16 @@
-// Reads of published results. Public = approved; a result a reader asked moderators to check (an open reader
-// flag) stays published and counted, marked with its open case. Dates leave as ISO strings so the cached reads
+// Reads of published results (the counting rule: ./published.ts). A result a reader asked moderators to check (an
+// open reader flag) stays published and counted, marked with its open case. Dates leave as ISO strings so the cached reads
 // (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
-import type { CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
 import type { FlagReason } from "@/lib/enums";
 import type { PublicResultRow } from "@/lib/pack-summary";
-
-export const isPublic = eq(results.status, "approved");
+import { isPublished, makerOfPack, packOfResult } from "./published";
+import { nameOnResults } from "@/lib/user-name";
 
 /** Whether a reader's flag on the result is open (a case moderators have not decided). */
 const hasOpenCase = sql<boolean>`exists (select 1 from ${readerFlags} where ${readerFlags.resultId} = ${results.id} and ${readerFlags.status} = 'open')`;
@@ -70,8 +70,9 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
   const rows = await db
     .select(publicResultColumns)
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .where(and(inArray(results.packId, packIds), isPublic))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.packId, packIds), isPublished))
     .orderBy(asc(results.cyclesBeforeTest), asc(results.id));
   return rows.map(toRow);
 }
@@ -82,7 +83,9 @@ export async function getPublicCurves(resultIds: number[]): Promise<Map<number, 
   const rows = await db
     .select({ id: results.id, curve: results.curve, ...headlineColumns })
     .from(results)
-    .where(and(inArray(results.id, resultIds), isPublic));
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.id, resultIds), isPublished));
   return new Map(rows.map((r) => [r.id, headlineCurve(r.curve, r)]));
 }
 
@@ -101,7 +104,7 @@ export type NewestResult = {
   sustainedCMeasured: number | null;
 };
 
-/** The newest approved results, for the home page. */
+/** The newest published results, for the home page and the sitemap. */
 export async function listNewestApprovedResults(limit: number): Promise<NewestResult[]> {
   const rows = await db
     .select({
@@ -117,9 +120,9 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
       sustainedCMeasured: results.sustainedCMeasured,
     })
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(results.status, "approved"), eq(packs.status, "active")))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(isPublished)
     .orderBy(desc(results.publishedAt), desc(results.id))
     .limit(limit);
   return rows.map((r) => ({ ...r, publishedAt: iso(r.publishedAt) }));
@@ -140,8 +143,14 @@ export type ResultDetail = PublicResultRow & {
   contributor: string;
   /** Reasons of the open reader flags (each once, in the order they were filed); empty when none is open. */
   openCaseReasons: FlagReason[];
+  /** The uploaded log's file name (its extension names the download; the name itself is never shown). */
+  logFilename: string;
+  /** The column mapping the log was read with (null: the columns were detected). */
+  logMapping: ColumnMapping | null;
   notes: string | null;
   submittedAt: string;
+  /** How many label photos the contributor sent (served at /results/<id>/photos/<n>, 1-based). */
+  photoCount: number;
   figures: Figures;
   curve: CurvePoint[];
   events: {
@@ -161,9 +170,12 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .select({
       ...publicResultColumns,
       notes: results.notes,
+      logFilename: results.logFilename,
+      logMapping: results.logMapping,
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
+      photoCount: sql<number>`jsonb_array_length(${results.photoKeys})::int`,
       contributorId: results.contributorId,
       contributorName: users.displayName,
       contributorAnonymous: users.anonymous,
@@ -181,7 +193,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .innerJoin(users, eq(users.id, results.contributorId))
-    .where(and(eq(results.id, id), isPublic))
+    .where(and(eq(results.id, id), isPublished))
     .limit(1);
   if (!row) return null;
   const events = await db
@@ -216,9 +228,12 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     weightG,
     connector,
     notes,
+    logFilename,
+    logMapping,
     submittedAt,
     figures,
     curve,
+    photoCount,
     ...rest
   } = row;
   return {
@@ -234,10 +249,13 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       weightG,
       connector,
     },
-    contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
+    contributor: nameOnResults({ displayName: contributorName, anonymous: contributorAnonymous }),
     openCaseReasons: [...new Set(open.map((o) => o.reason))],
     notes,
+    logFilename,
+    logMapping,
     submittedAt: new Date(submittedAt).toISOString(),
+    photoCount,
     figures,
     curve,
     events: events.map((e) => ({
@@ -247,8 +265,28 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       to: e.to,
       reason: e.reason,
       note: e.note,
-      // Reviewers are named by role only; the contributor is already credited above (or anonymous).
+      // Reviewers are named by role only; the contributor is already credited above (as they chose).
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),
   };
+}
+
+export type PublishedLog = { resultId: number; key: string; sha256: string; bytes: number; filename: string };
+
+/** The stored log of a published result (its raw data, CC BY 4.0 like the figures); null otherwise. */
+export async function getPublishedLog(id: number): Promise<PublishedLog | null> {
+  const [row] = await db
+    .select({
+      resultId: results.id,
+      key: results.logKey,
+      sha256: results.logSha256,
+      bytes: results.logBytes,
+      filename: results.logFilename,
+    })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.id, id), isPublished))
+    .limit(1);
+  return row ?? null;
 }

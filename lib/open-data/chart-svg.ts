@@ -30,7 +30,7 @@ import {
   type Frame,
   type Scale,
 } from "./chart-svg-kit";
-import { ATTRIBUTION, DATA_LICENCE_SHORT } from "./licence";
+import { ATTRIBUTION, DATA_LICENCE_LABEL } from "./licence";
 
 export { escapeXml, niceTicks, wrapText } from "./chart-svg-kit";
 
@@ -323,7 +323,7 @@ export function renderChartSvg(data: ChartData, size: ChartSize = DEFAULT_CHART_
   const lineW = W - 2 * pad;
   const [titleFs, noteFs, footFs, creditFs] = [f.font(20), f.font(13), f.font(11), f.font(12)];
   // The credit breaks between source and licence rather than inside "CC BY 4.0".
-  const dataCredit = `Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_SHORT}`;
+  const dataCredit = `Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_LABEL}`;
   const oneLine = `Source: Sagline · ${dataCredit}`;
   const credit =
     textWidth(oneLine, creditFs, EM_BOLD) <= lineW

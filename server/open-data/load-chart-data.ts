@@ -6,12 +6,14 @@ import { CHART_RATING_WORDS, MAX_CURVES, type ChartData, type CurveLine } from "
 import { rankingVerdict } from "@/lib/maker-ranking";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
+import { packWhere } from "@/server/open-data/catalogue";
 import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
 
 export async function loadChartData(state: ChartState): Promise<ChartData> {
   const filters = { maker: state.maker, cells: state.cells };
+  const where = await packWhere(filters);
   // Tagged cached reads: a moderation decision in this group refreshes embeds, views and images at once.
-  const samples = await cachedGroupSamples(state.group, filters);
+  const samples = await cachedGroupSamples(state.group, filters, where);
   const packs = aggregateByPack(samples);
   // States published before the rating was chosen drew the estimate, and still do.
   const rating = state.rating ?? "estimate";
@@ -55,7 +57,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     base.leftOut.push(rankingVerdict(makers).words);
     return { ...base, ranking };
   }
-  const series = await cachedGroupCurves(state.group, filters);
+  const series = await cachedGroupCurves(state.group, filters, where);
   const seen = new Set<string>();
   const curves: CurveLine[] = [];
   for (const s of series) {

@@ -15,6 +15,7 @@ import {
 import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { isOwnIncomingLogKey, isOwnIncomingPhotoKey, objectBytes } from "@/server/storage";
+import { analyseOptionsFor } from "@/lib/open-data/recompute";
 import { analyseStored } from "@/server/uploads/log-upload";
 import { isRecordIdText } from "@/lib/validations/ids";
 import type { MethodCard, PackStep } from "@/lib/validations/result";
@@ -117,18 +118,19 @@ export async function analyseForCard(
   card: MethodCard,
   mapping: ColumnMapping | null = null,
 ): Promise<Figured> {
+  // The same options a result's page gives the open CLI to recompute the figures (lib/open-data/recompute.ts).
   const { sha256, bytes, analysis } = await analyseStored(
     logKey,
-    {
+    analyseOptionsFor({
       cells: facts.cells,
       ratedMah: facts.ratedMah,
       labelledC: facts.labelledC,
-      ...(facts.weightG !== null ? { weightG: facts.weightG } : {}),
+      weightG: facts.weightG,
       cutoffVPerCell: card.cutoffVPerCell,
       stopTemperatureC: card.stopTemperatureC,
-      ...(card.packStartTemperatureC !== null ? { packStartTemperatureC: card.packStartTemperatureC } : {}),
-      ...(mapping ? { mapping } : {}),
-    },
+      packStartTemperatureC: card.packStartTemperatureC,
+      mapping,
+    }),
     env().LOG_MAX_BYTES,
     "log",
   );

@@ -153,3 +153,16 @@ export async function emptyCatalogue() {
   await db.delete(packs).where(sql`true`);
   await db.delete(makers).where(sql`true`);
 }
+
+/**
+ * An open reader case on a result, as a signed-in reader's flag leaves it: the result stays approved and keeps
+ * counting (the counting rule, lib/open-data/licence.ts#PUBLISHED_RULE) until a moderator resolves the case.
+ */
+export async function openReaderCase(resultId: number, reporterId: string) {
+  const [flag] = await db
+    .insert(readerFlags)
+    .values({ resultId, reporterId, reason: "wrong-figures", note: "The capacity looks high." })
+    .returning();
+  if (!flag) throw new Error("no flag");
+  return flag;
+}

@@ -39,3 +39,19 @@ export function firstLink(text: string): string {
   if (!m) throw new Error("no link in the message");
   return m[0];
 }
+
+/**
+ * What the mail worker does when it wakes, done here in the test's process against the test's database: send
+ * every due message in the outbox through the local mail catcher (SMTP_URL). Integration tests call it where
+ * a running app would have its worker (scripts/mail-worker.ts) send the mail.
+ */
+export async function deliverQueuedMail(): Promise<{ sent: number; failed: number }> {
+  const { deliverDueMail } = await import("@/server/mail/outbox");
+  const total = { sent: 0, failed: 0 };
+  for (;;) {
+    const round = await deliverDueMail();
+    total.sent += round.sent;
+    total.failed += round.failed;
+    if (round.sent + round.failed === 0) return total;
+  }
+}

@@ -10,10 +10,11 @@ function figures(over: Partial<Figures> = {}): Figures {
     skippedLines: 0,
     durationS: 600,
     cells: 4,
-    capacityMah: 1250,
-    energyWh: 18.2,
+    // Float noise as a double sum leaves it: the published figures must come out rounded (1250, 18.2, 3.652).
+    capacityMah: 1250.4321,
+    energyWh: 18.2049999,
     meanVoltageV: 14.6,
-    meanVoltagePerCellV: 3.65,
+    meanVoltagePerCellV: 3.652431030273438,
     minVoltageV: 13.2,
     minVoltagePerCellV: 3.3,
     peakCurrentA: 30,
@@ -149,7 +150,7 @@ export async function seedOpenData(prefix: string) {
       r(p2.id, "approved", 30, "@SUM(A1) warm room"),
       r(p3.id, "approved", 50, "=cmd|' /C calc'!A0"),
       r(p3.id, "withdrawn", 99),
-      r(p3.id, "changes_requested", 98),
+      r(p3.id, "awaiting_answer", 98),
     ])
     .returning({ id: results.id, status: results.status });
   return { makers: [m1, m2], packs: [p1, p2, p3], group, results: rows };

@@ -40,7 +40,7 @@ describe("ids are positive 32-bit integers everywhere", () => {
       expect(recordId.safeParse(bad).success, String(bad)).toBe(false);
   });
 
-  it("routes: GET /api/v1/results/{id} 422, POST …/flags 404 (signed in)", async () => {
+  it("routes: GET /api/v1/results/{id} 404 (a path naming no row), POST …/flags 404 (signed in)", async () => {
     const { GET } = await import("@/app/api/v1/results/[id]/route");
     const flags = await import("@/app/api/v1/results/[id]/flags/route");
     for (const id of TOO_BIG) {
@@ -50,7 +50,7 @@ describe("ids are positive 32-bit integers everywhere", () => {
           params: Promise.resolve({ id }),
         },
       );
-      expect(get.status, id).toBe(422);
+      expect(get.status, id).toBe(404);
       const post = await flags.POST(
         new Request(`http://localhost/api/v1/results/${id}/flags`, {
           method: "POST",
@@ -147,7 +147,7 @@ describe("someone else's row answers like a missing one", () => {
     const { default: ResubmitPage } = await import("@/app/(contributor)/submit/[resultId]/page");
     const owner = await signedIn("contributor");
     const { pack } = await makePack();
-    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "changes_requested" });
+    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "awaiting_answer" });
     requestState.token = tokens.contributor ?? null;
     for (const id of [String(r.id), "2000000000"])
       await expect(ResubmitPage({ params: Promise.resolve({ resultId: id }) })).rejects.toMatchObject({

@@ -1,10 +1,10 @@
-// The query behind /packs/[slug]: figures per group, sustained C (the highest MEASURED value among approved
+// The query behind /packs/[slug]: figures per group, sustained C (the highest MEASURED value among published
 // results, content/methods/figures.md), the ageing figures — one pack's retention series from a multi-cycle
 // log, and results across cycle counts with a projection only where the data supports it.
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackDetail } from "@/db/queries/pack-detail";
 import { projectTo80, retentionSeries, retentionTrend } from "@/lib/analysis";
-import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
+import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 
 let slug = "";
 // One physical pack over 5 cycles of one log (invented numbers), and a longer series on a result that is not public.
@@ -27,10 +27,11 @@ beforeAll(async () => {
   // Sustained C candidates (all new packs, warm, 3.3 V; rate bands differ so groups differ too). The stated rate
   // no longer counts: only the measured rating of runs that qualified (null for the others).
   await makeResult(pack, tester.id, { rateC: 5, sagLimitedC: 30, sustainedCMeasured: 4.9 });
-  await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32, sustainedCMeasured: 7.9, retention: series }); // the answer
+  await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32, sustainedCMeasured: 7.9, retention: series });
   await makeResult(pack, tester.id, { rateC: 15, passedStop: true, sustainedCMeasured: null }); // did not qualify
-  // An open case, stopped early: it counts while moderators decide, but its run did not qualify.
-  await makeResult(pack, tester.id, { rateC: 20, reachedCutoff: false, openCase: true, sustainedCMeasured: null });
+  // The answer: it qualified; an open reader case leaves it published, so it counts until moderators decide.
+  await openReaderCase((await makeResult(pack, tester.id, { rateC: 20, sustainedCMeasured: 19.6 })).id, tester.id);
+  await makeResult(pack, tester.id, { rateC: 25, status: "rejected", sustainedCMeasured: 24.5 }); // not published
   await makeResult(pack, tester.id, { rateC: 12, reachedCutoff: false }); // stopped before cut-off
   await makeResult(pack, tester.id, { rateC: 30, loadMode: "constant-power" }); // no measured rating
   await makeResult(pack, tester.id, { rateC: 40, status: "pending", sustainedCMeasured: 39, retention: longer }); // not public
@@ -51,21 +52,22 @@ describe("pack detail", () => {
     expect(keys.size).toBe(d?.groups.length);
     const byKeyEnd = (end: string) => d?.groups.find((g) => g.group.key.endsWith(end));
     expect(byKeyEnd("_r5-10_new")?.n).toBe(1); // the new 8C run
-    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, openCases: 1 }); // 12C, 15C and the 20C being checked
+    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, openCases: 1 }); // 12C, 15C and 20C (with its open case)
     expect(byKeyEnd("_r5-10_c50-199")?.n).toBe(3); // aged 60, 120 and 180 cycles
     expect(byKeyEnd("_r5-10_c50-199")?.figures.capacityMah?.median).toBe(1800);
   });
 
-  it("takes sustained C as the highest measured value among approved results (not the rate the tester stated)", async () => {
+  it("takes sustained C as the highest measured value among published results (not the rate the tester stated)", async () => {
     const d = await getPackDetail(slug);
-    expect(d?.sustained?.rateC).toBeCloseTo(7.9, 5);
-    // Per group: the highest measured value of that group's approved results only.
+    expect(d?.sustained?.rateC).toBeCloseTo(19.6, 5);
+    // Per group: the highest measured value of that group's published results only.
     const g = d?.groups.find((x) => x.group.key.endsWith("_r10-20_new"));
-    expect(g?.sustainedC).toBeNull(); // none of 12C, 15C and 20C (stopped early) qualified
+    expect(g?.sustainedC).toBeCloseTo(19.6, 5); // 12C stopped early and 15C passed the stop temperature
     expect(d?.groups.find((x) => x.group.key.endsWith("_r2-5_new"))?.sustainedC).toBeCloseTo(4.9, 5);
+    expect(d?.groups.find((x) => x.group.key.endsWith("_r5-10_new"))?.sustainedC).toBeCloseTo(7.9, 5);
   });
 
-  it("draws one physical pack's ageing from the approved result whose log holds several cycles", async () => {
+  it("draws one physical pack's ageing from the published result whose log holds several cycles", async () => {
     const d = await getPackDetail(slug);
     const one = d?.ageing.onePack;
     expect(one?.retention.points.map((p) => p.cycle)).toEqual([1, 2, 3, 4, 5]);

@@ -76,7 +76,7 @@ describe("a submission with a column mapping", () => {
   it("keeps using the stored mapping when a resubmission keeps the stored log", async () => {
     const { me, res } = await submit(cyclingLog(3, 84).csv, validMethod, CYCLING_MAPPING);
     if (!res.ok) throw new Error(res.error);
-    await db.update(results).set({ status: "changes_requested" }).where(eq(results.id, res.data.resultId));
+    await db.update(results).set({ status: "awaiting_answer" }).where(eq(results.id, res.data.resultId));
     requestState.token = me.token;
     const again = await resubmitResult(null, {
       resultId: String(res.data.resultId),

@@ -34,7 +34,7 @@ describe("/methods anchors", () => {
     const seen = new Set<string>();
     const twice = ids.filter((id) => (seen.has(id) ? true : (seen.add(id), false)));
     expect(twice).toEqual([]);
-    for (const s of METHODS_SECTIONS) expect(ids, `section ${s.file}`).toContain(s.id);
+    for (const s of METHODS_SECTIONS) expect(ids, `section ${s.title}`).toContain(s.id);
   });
 
   it("has an element for every literal /methods#… link in the source", () => {

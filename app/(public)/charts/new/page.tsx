@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
+import { makerRows } from "@/server/open-data/catalogue";
+import { cachedGroups } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
@@ -12,7 +13,9 @@ export const metadata: Metadata = {
 };
 
 export default async function NewChartPage() {
-  const [groups, makers] = await Promise.all([cachedGroupOptions(3), cachedMakers()]);
+  const [allGroups, makers] = await Promise.all([cachedGroups(), makerRows()]);
+  // Groups with at least three published results: fewer make no chart worth publishing.
+  const groups = allGroups.filter((g) => g.resultCount >= 3);
   return (
     <div className="space-y-4">
       <h1>Build a chart</h1>
@@ -24,7 +27,7 @@ export default async function NewChartPage() {
         <ChartBuilder
           groups={groups.map((g) => ({
             key: g.key,
-            label: g.label ?? g.key,
+            label: g.label,
             resultCount: g.resultCount,
             packCount: g.packCount,
           }))}

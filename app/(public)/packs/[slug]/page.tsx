@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LineChart } from "@/components/charts/line-chart";
-import { WatchSlot } from "./_components/watch-slot-client";
+import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
 import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
@@ -48,7 +48,7 @@ export default async function PackPage(props: Props) {
           </p>
         </div>
         <div className="flex gap-2">
-          <WatchSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
+          <PackEmailsSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
           <Link
             href={`/compare?packs=${pack.slug}`}
             className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"

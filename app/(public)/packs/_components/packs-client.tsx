@@ -6,7 +6,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { isDefaultPackParams, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { PackFilters } from "./pack-filters";
 import { PackTable } from "./pack-table";
-import type { ApiPackPage, FilterOptions } from "./types";
+import type { ApiPackList, ApiPackPage, FilterOptions } from "./types";
 
 export function PacksView({
   params,
@@ -68,9 +68,16 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
           throw new Error(
             res.status === 429
               ? "Too many requests — wait a moment and try again."
-              : "The packs could not be loaded. Try again, or clear the filters.",
+              : res.status === 422 && params.page > 1
+                ? `There is no page ${params.page} of these packs: go back to page 1.`
+                : "The packs could not be loaded. Try again, or clear the filters.",
           );
-        setFetched({ key: canonical, page: (await res.json()) as ApiPackPage, error: null });
+        const { data, meta } = (await res.json()) as ApiPackList;
+        setFetched({
+          key: canonical,
+          page: { data, page: meta.page, pageCount: meta.pageCount, total: meta.total },
+          error: null,
+        });
       })
       .catch((err: unknown) => {
         if (ctrl.signal.aborted) return;
@@ -81,7 +88,7 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
         }));
       });
     return () => ctrl.abort();
-  }, [canonical, isDefault]);
+  }, [canonical, isDefault, params.page]);
 
   // Filters changed in quick succession (a second box typed in before the first reached the URL) build on
   // each other, never on the URL of an earlier render: `heading` holds where the page is going. It follows

@@ -11,9 +11,11 @@ import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
+import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { logDownloadName, recomputeCommand } from "@/lib/open-data/recompute";
 import { describeResultGroup } from "@/lib/pack-summary";
-import { reviewReasonLabels } from "@/lib/review-status-labels";
-import { openCaseReasonWords } from "@/lib/validations/review";
+import { openCaseReasonWords, reviewReasonLabel, reviewStatusLabels } from "@/lib/labels";
+import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
@@ -32,13 +34,8 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
   return r ? { title: `Result #${r.id} — ${packTitle(r.pack)}` } : {};
 }
 
-const statusWords: Record<string, string> = {
-  pending: "submitted",
-  approved: "approved",
-  rejected: "rejected",
-  withdrawn: "withdrawn",
-  changes_requested: "changes requested",
-};
+const isStatus = (s: string): s is ReviewStatus => Object.hasOwn(reviewStatusLabels, s);
+const statusWord = (s: string) => (isStatus(s) ? reviewStatusLabels[s].toLowerCase() : "another state");
 
 export default async function ResultPage(props: Props) {
   const parsed = params.safeParse(await props.params);
@@ -48,6 +45,17 @@ export default async function ResultPage(props: Props) {
   const group = describeResultGroup(r);
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
   const temps = time.filter((p): p is typeof p & { tc: number } => p.tc !== null);
+  const logFile = logDownloadName(r.id, r.logFilename);
+  const command = recomputeCommand(logFile, {
+    cells: r.pack.cellsInSeries,
+    ratedMah: r.ratedCapacityMah,
+    labelledC: r.pack.labelledContinuousC,
+    weightG: r.pack.weightG,
+    cutoffVPerCell: r.cutoffVPerCell,
+    stopTemperatureC: r.stopTemperatureC,
+    packStartTemperatureC: r.packStartTemperatureC,
+    mapping: r.logMapping,
+  });
   return (
     <article className="space-y-8">
       <header className="space-y-2">
@@ -141,6 +149,45 @@ export default async function ResultPage(props: Props) {
         </div>
       </section>
 
+      <section aria-labelledby="raw-log" className="space-y-2" data-testid="raw-log">
+        <h2 id="raw-log">Raw log and recomputing the figures</h2>
+        <p className="text-sm">
+          <a href={`/api/v1/results/${r.id}/log`} download={logFile}>
+            Download the log ({logFile})
+          </a>{" "}
+          as it was uploaded, under{" "}
+          <a href={DATA_LICENCE_URL} rel="license">
+            {DATA_LICENCE_LABEL}
+          </a>
+          . With Sagline&apos;s open command-line tool, this command computes the same figures from it:
+        </p>
+        <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
+          <code data-testid="recompute-command">{command}</code>
+        </pre>
+      </section>
+      {r.photoCount > 0 ? (
+        <section aria-labelledby="photos" className="space-y-2">
+          <h2 id="photos">Label photos</h2>
+          <p className="muted text-sm">The pack’s label as the contributor photographed it (location data removed).</p>
+          <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="result-photos">
+            {Array.from({ length: r.photoCount }, (_, i) => (
+              <li key={i}>
+                <a href={`/results/${r.id}/photos/${i + 1}`}>
+                  {/* Served from storage through /results/<id>/photos/<n>; next/image's optimiser does not apply. */}
+                  {/* eslint-disable-next-line @next/next/no-img-element */}
+                  <img
+                    src={`/results/${r.id}/photos/${i + 1}`}
+                    alt={`Label photo ${i + 1} of result #${r.id}`}
+                    loading="lazy"
+                    className="aspect-square w-full rounded border border-ink/10 object-cover dark:border-night-line"
+                  />
+                </a>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+
       <section aria-labelledby="history" className="space-y-2">
         <h2 id="history">Review history</h2>
         <ol className="space-y-1 text-sm" data-testid="review-history">
@@ -148,10 +195,10 @@ export default async function ResultPage(props: Props) {
             <li key={e.id} className="flex flex-wrap gap-x-2">
               <span className="num muted">{fmtDate(e.at)}</span>
               <span>
-                {e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWords[e.from] ?? e.from} → ` : ""}
-                <strong>{statusWords[e.to] ?? e.to}</strong>
+                {e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWord(e.from)} → ` : ""}
+                <strong>{statusWord(e.to)}</strong>
               </span>
-              {e.reason ? <span className="muted">({reviewReasonLabels[e.reason] ?? e.reason})</span> : null}
+              {e.reason ? <span className="muted">({reviewReasonLabel(e.reason)})</span> : null}
               {e.note ? <span className="muted">— {e.note}</span> : null}
             </li>
           ))}

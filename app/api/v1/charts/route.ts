@@ -5,21 +5,20 @@ import { randomBytes } from "node:crypto";
 import { z } from "zod";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
+import { chartListQuery } from "@/lib/api-contract/queries";
+import { chartList } from "@/lib/api-contract/responses";
+import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
-import { pageQuery } from "@/lib/validations/open-data";
 import { cachedFeaturedCharts } from "@/server/public-data";
 import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 
-const chartPageQuery = pageQuery.extend({ size: pageQuery.shape.size.unwrap().max(50).default(20) });
-
 export const GET = apiGet(async (req) => {
-  const { page, size } = parseQuery(req, chartPageQuery);
-  const { rows, total } = await cachedFeaturedCharts(page, size);
-  const envelope = pageEnvelope(req, page, size, total);
-  return apiJson(req, { data: rows.map(savedChartJson), meta: envelope.meta, links: envelope.links }, envelope.headers);
+  const q = parseQuery(req, chartListQuery);
+  const { rows, total } = await cachedFeaturedCharts(q.page, q.size);
+  const page = pageOf(req, q, total);
+  return apiJson(req, chartList, { data: rows.map(savedChartJson), meta: page.meta, links: page.links }, page.headers);
 });
 const saveBody = z.object({ state: chartState });
 

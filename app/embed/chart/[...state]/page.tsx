@@ -4,7 +4,7 @@ import { ServerChartSvg } from "@/components/charts/server-chart-svg";
 import { loadChartData } from "@/server/open-data/load-chart-data";
 import { chartLinks } from "@/lib/open-data/chart-links";
 import { decodeChartStateSegments } from "@/lib/open-data/chart-state";
-import { DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 // The URL carries the whole chart, and anyone can make up a new one, so the page is drawn per request and
 // nothing is stored per link (kept pages cost ≈ 435 KB of cache files each, without bound). Its data comes
@@ -42,7 +42,7 @@ export default async function EmbedChartPage({ params }: Props) {
         </a>{" "}
         · Data{" "}
         <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">
-          {DATA_LICENCE_SHORT}
+          {DATA_LICENCE_LABEL}
         </a>
       </p>
       <script dangerouslySetInnerHTML={{ __html: RESIZE_SCRIPT }} />

@@ -13,7 +13,7 @@ import {
   pngPixels,
 } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartStateSegments, encodeChartState } from "@/lib/open-data/chart-state";
-import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
 
@@ -64,7 +64,7 @@ export default async function ChartPage({ params }: Props) {
         <figcaption className="muted px-2 pt-2 text-sm">
           Data: {ATTRIBUTION}, licensed{" "}
           <a href={DATA_LICENCE_URL} rel="license">
-            {DATA_LICENCE_SHORT}
+            {DATA_LICENCE_LABEL}
           </a>
           . Only results in one like-for-like group are compared. {data.leftOut.join(" ")}
         </figcaption>
