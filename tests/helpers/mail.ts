@@ -23,11 +23,13 @@ export function caughtFor(address: string): Caught[] {
     .sort((a, b) => b.id.localeCompare(a.id, "en", { numeric: true }));
 }
 
-/** Waits for the newest message to an address (the catcher writes it a moment after SMTP says OK). */
-export async function newestMailFor(address: string, timeoutMs = 5000): Promise<Caught> {
+/** Waits for the newest message to an address (the catcher writes it a moment after SMTP says OK), or the newest
+ * whose subject matches. */
+export async function newestMailFor(address: string, timeoutMs = 5000, subject?: RegExp): Promise<Caught> {
   const until = Date.now() + timeoutMs;
   for (;;) {
-    const [m] = caughtFor(address);
+    // With a subject, wait for that message: an earlier one to the same address may be all that is written yet.
+    const [m] = caughtFor(address).filter((c) => !subject || subject.test(c.subject));
     if (m) return m;
     if (Date.now() > until) throw new Error(`no mail caught for ${address}`);
     await new Promise((r) => setTimeout(r, 50));

@@ -77,8 +77,8 @@ describe("ids are positive 32-bit integers everywhere", () => {
       (id: string) => ({ resultId: id, reason: "other", note: "why not" }),
     ],
     [
-      "@/app/(review)/review/[id]/actions/request-changes",
-      "requestChanges",
+      "@/app/(review)/review/[id]/actions/ask-contributor",
+      "askContributor",
       "moderator",
       (id: string) => ({ resultId: id, note: "Change it." }),
     ],
@@ -100,8 +100,8 @@ describe("ids are positive 32-bit integers everywhere", () => {
       "contributor",
       (id: string) => ({ id }),
     ],
-    ["@/app/actions/watch-pack", "watchPack", "contributor", (id: string) => ({ packId: id })],
-    ["@/app/actions/unwatch-pack", "unwatchPack", "contributor", (id: string) => ({ packId: id })],
+    ["@/app/actions/start-pack-emails", "startPackEmails", "contributor", (id: string) => ({ packId: id })],
+    ["@/app/actions/stop-pack-emails", "stopPackEmails", "contributor", (id: string) => ({ packId: id })],
     [
       "@/app/(admin)/admin/catalogue/actions/merge-makers",
       "mergeMakers",

@@ -128,7 +128,7 @@ describe("resubmitResult", () => {
     expect(events[2]).toMatchObject({ actorId: me.id, note: "Probe position added; cut-off corrected." });
     // The answer's receipt was queued with it; the worker's step sends it, with the result's number and link.
     await deliverQueuedMail();
-    const mail = await newestMailFor(me.email);
+    const mail = await newestMailFor(me.email, 5000, /^Answer received/);
     expect(mail.subject).toMatch(new RegExp(`^Answer received: result #${id}, `));
     expect(mail.text).toContain(`${env().APP_URL}/account/results/${id}`);
   });
