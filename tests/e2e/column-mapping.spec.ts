@@ -4,7 +4,7 @@
 // an equivalent-circuit pack, no header row).
 import { expect, test } from "@playwright/test";
 import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
-import { signIn } from "./sign-in-helpers";
+import { choosePublicName, signIn } from "./sign-in-helpers";
 
 function fourCycles(): Buffer {
   const { rows } = generateLog({
@@ -30,8 +30,9 @@ function fourCycles(): Buffer {
 test("a tester maps the columns of a header-less log on /submit and sees its four discharges and one headline", async ({
   page,
 }) => {
-  await signIn(page, `e2e-map-${Date.now()}@test.sagline.localhost`);
-  await page.goto("/submit");
+  await signIn(page, `e2e-map-${Date.now()}@test.sagline.localhost`, "/sign-in?callbackUrl=%2Fsubmit");
+  await choosePublicName(page, null);
+  await expect(page).toHaveURL(/\/submit$/);
   await page.evaluate(() => localStorage.clear());
   await page.reload();
 
