@@ -49,7 +49,7 @@ describe("CSV downloads", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8; header=present");
     expect(res.headers.get("content-disposition")).toMatch(
-      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.0\.0\.csv"/,
+      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.1\.0\.csv"/,
     );
     const text = await res.text();
     const lines = text.split("\r\n");
