@@ -1,44 +1,89 @@
 import Link from "next/link";
-import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import { fmt, fmtDate } from "@/lib/format";
 import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/server/public-data";
-import { HomeLabelCheck, type HomeGroup } from "./_components/home-label-check-client";
+import type { LabelCheckPoint } from "@/components/charts/label-check-chart";
+import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
+import { rankingVerdict } from "@/lib/maker-ranking";
+import { HomeLabelCheck, type HomeGroup, type HomeRating } from "./_components/home-label-check-client";
 
 // Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.
 export const revalidate = 3600;
 /** Groups offered by the switcher: those with at least this many packs, most populated first. */
 const MIN_PACKS_FOR_CHART = 3;
 
+type PackRow = Awaited<ReturnType<typeof cachedPacksInGroup>>[number];
+type RankRow = Awaited<ReturnType<typeof cachedMakerRanking>>[number];
+
+function estimatePoints(packs: PackRow[]): LabelCheckPoint[] {
+  return packs.flatMap((p) =>
+    p.measuredC
+      ? [
+          {
+            packSlug: p.packSlug,
+            label: p.model,
+            makerName: p.makerName,
+            labelledC: p.labelledC,
+            measuredC: Math.round(p.measuredC.median * 10) / 10,
+            n: p.measuredC.n,
+          },
+        ]
+      : [],
+  );
+}
+
+function measuredPoints(packs: PackRow[]): LabelCheckPoint[] {
+  return packs.flatMap((p) =>
+    p.sustainedC
+      ? [
+          {
+            packSlug: p.packSlug,
+            label: p.model,
+            makerName: p.makerName,
+            labelledC: p.labelledC,
+            measuredC: Math.round(p.sustainedC.value * 10) / 10,
+            n: p.sustainedC.n,
+          },
+        ]
+      : [],
+  );
+}
+
+function ranked(rows: RankRow[]): HomeRating["ranking"] {
+  const verdict = rankingVerdict(rows);
+  return {
+    leader: verdict.leader,
+    verdict: verdict.words,
+    makers: rows.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }, i) => ({
+      makerSlug,
+      makerName,
+      medianLabelRatio,
+      packs: n,
+      results,
+      interval: verdict.intervals[i]?.meets
+        ? { lower: verdict.intervals[i].lower, upper: verdict.intervals[i].upper }
+        : null,
+    })),
+  };
+}
+
 export default async function HomePage() {
   const [groups, newest] = await Promise.all([cachedGroups(), cachedNewestResults(8)]);
   const shown = groups.filter((g) => g.packCount >= MIN_PACKS_FOR_CHART).slice(0, 8);
   const homeGroups: HomeGroup[] = await Promise.all(
     shown.map(async (g) => {
-      const [packs, ranking] = await Promise.all([cachedPacksInGroup(g.key), cachedMakerRanking(g.key)]);
+      const [packs, byEstimate, byMeasured] = await Promise.all([
+        cachedPacksInGroup(g.key),
+        cachedMakerRanking(g.key, "estimate"),
+        cachedMakerRanking(g.key, "measured"),
+      ]);
       return {
         key: g.key,
         label: g.label,
         packCount: g.packCount,
-        points: packs.flatMap((p) =>
-          p.measuredC
-            ? [
-                {
-                  packSlug: p.packSlug,
-                  label: p.model,
-                  makerName: p.makerName,
-                  labelledC: p.labelledC,
-                  measuredC: Math.round(p.measuredC.median * 10) / 10,
-                  n: p.measuredC.n,
-                },
-              ]
-            : [],
-        ),
-        ranking: ranking.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }) => ({
-          makerSlug,
-          makerName,
-          medianLabelRatio,
-          packs: n,
-          results,
-        })),
+        ratings: {
+          measured: { points: measuredPoints(packs), ranking: ranked(byMeasured) },
+          estimate: { points: estimatePoints(packs), ranking: ranked(byEstimate) },
+        },
       };
     }),
   );
@@ -75,9 +120,13 @@ export default async function HomePage() {
       <section aria-labelledby="label-check-h" className="space-y-3">
         <h2 id="label-check-h">Label check</h2>
         <p className="muted max-w-3xl text-sm">
-          Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited
-          C) up. Points below the dashed line fall short of their label.{" "}
-          <Link href="/methods#sag-limited-c">How sag-limited C is computed</Link>.
+          Each point is a pack: its labelled continuous C across, and up either the{" "}
+          <strong>sag-limited C estimate</strong> from its DC resistance (an estimate, not a tested rate;{" "}
+          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>its assumptions</Link>) or the{" "}
+          <strong>sustained C it was measured to hold</strong> (the current a qualifying run actually drew to its
+          cut-off; <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>the rule</Link>). Below the dashed line a pack
+          falls short of its label by the estimate; by the measured rating it has not shown its label, since a run holds
+          only the rate it was tested at.
         </p>
         <HomeLabelCheck groups={homeGroups} />
       </section>
@@ -91,8 +140,8 @@ export default async function HomePage() {
                 {r.makerName} {r.packModel}
               </Link>
               <p className="num text-sm">
-                {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
-                {fmtRatio(r.labelRatio)}
+                {fmt(r.capacityMah, 0, "mAh")} · sustained {fmt(r.sustainedCMeasured, 1, "C")} (measured) · sag-limited{" "}
+                {fmt(r.sagLimitedC, 1, "C")} (estimate)
               </p>
               <p className="muted text-xs">
                 <Link href={`/results/${r.id}`}>Result #{r.id}</Link> · {fmtDate(r.publishedAt)}

@@ -1,7 +1,7 @@
 "use client";
-// The label check: labelled continuous C (x) against measured sag-limited C (y), one point per pack, with
-// the parity line y = x. Points below the line are packs that fall short of their label. Reused by the
-// chart builder and embeds: it takes prepared points and draws them, nothing else.
+// The label check: labelled continuous C (x) against a rating (y) — the measured sustained C or the
+// sag-limited C estimate, as the `rating` prop says — one point per pack, with the parity line y = x. Points
+// below the line are packs that fall short of their label. It takes prepared points and draws them.
 import { AxisBottom, AxisLeft } from "@visx/axis";
 import { GridColumns, GridRows } from "@visx/grid";
 import { Group } from "@visx/group";
@@ -12,12 +12,14 @@ import { Marker } from "./marker";
 import { MEETS_STYLE, SHORT_STYLE } from "./palette";
 import { Tooltip } from "./tooltip";
 import { useWidth } from "./use-width";
+import { LABEL_CHECK_WORDS, type RatingKind } from "@/lib/figure-words";
 
 export type LabelCheckPoint = {
   packSlug: string;
   label: string;
   makerName: string;
   labelledC: number;
+  /** The y value: the rating the chart's `rating` prop names (measured sustained C, or the estimate). */
   measuredC: number;
   n: number;
 };
@@ -31,13 +33,17 @@ export function LabelCheckChart({
   width: fixedWidth,
   height: fixedHeight,
   title = "Label check",
+  rating,
 }: {
   points: LabelCheckPoint[];
   groupLabel: string;
   width?: number;
   height?: number;
   title?: string;
+  /** Which rating the points carry: it names the axis, the table column and each point's label. */
+  rating: RatingKind;
 }) {
+  const words = LABEL_CHECK_WORDS[rating];
   const { ref, width: measured } = useWidth<HTMLDivElement>(fixedWidth ?? 720);
   const width = fixedWidth ?? measured;
   const height = fixedHeight ?? Math.round(Math.min(460, Math.max(300, width * 0.6)));
@@ -58,19 +64,19 @@ export function LabelCheckChart({
         <svg width="14" height="14" aria-hidden="true">
           <Marker shape={MEETS_STYLE.shape} x={7} y={7} size={9} color={MEETS_STYLE.color} />
         </svg>
-        meets or beats its label
+        {words.meets}
       </li>
       <li className="flex items-center gap-1">
         <svg width="14" height="14" aria-hidden="true">
           <Marker shape={SHORT_STYLE.shape} x={7} y={7} size={9} color={SHORT_STYLE.color} filled={false} />
         </svg>
-        falls short (below the line)
+        {words.below}
       </li>
       <li className="flex items-center gap-1">
         <svg width="22" height="10" aria-hidden="true">
           <line x1="0" y1="5" x2="22" y2="5" stroke="currentColor" strokeDasharray="4 3" />
         </svg>
-        parity: measured = labelled
+        parity: rating = label
       </li>
     </ul>
   );
@@ -81,13 +87,16 @@ export function LabelCheckChart({
       legend={legend}
       notes={
         <p>
-          {groupLabel}. One point per pack: the median of its published results in this like-for-like group. {short} of{" "}
-          {points.length} packs fall short of their label. Select a point to open the pack.
+          {groupLabel}. One point per pack:{" "}
+          {rating === "measured"
+            ? "its sustained C, the highest measured among its approved results in this like-for-like group"
+            : "the median sag-limited C estimate of its published results in this like-for-like group"}
+          . {short} of {points.length} packs {words.belowCount}. Select a point to open the pack.
         </p>
       }
       table={{
         caption: `Label check, ${groupLabel}`,
-        columns: ["Pack", "Labelled C", "Measured C (median)", "Label ratio", "Results"],
+        columns: ["Pack", "Labelled C", words.column, "Label ratio", "Results"],
         rows: sorted.map((p) => [
           { text: `${p.makerName} ${p.label}`, href: `/packs/${p.packSlug}` },
           f1(p.labelledC),
@@ -99,13 +108,13 @@ export function LabelCheckChart({
     >
       <div ref={ref} className="relative w-full" onKeyDown={(e) => e.key === "Escape" && setActive(null)}>
         {points.length === 0 ? (
-          <p className="muted py-12 text-center">No published results with a measured C in this group yet.</p>
+          <p className="muted py-12 text-center">No published results with a {words.short} rating in this group yet.</p>
         ) : (
           <svg
             width={width}
             height={height}
             role="group"
-            aria-label={`${title}: labelled C against measured C, ${points.length} packs`}
+            aria-label={`${title}: labelled C against ${words.short} C, ${points.length} packs`}
             className="block max-w-full overflow-visible"
           >
             <Group left={margin.left} top={margin.top}>
@@ -147,7 +156,7 @@ export function LabelCheckChart({
                   stroke="currentColor"
                   tickStroke="currentColor"
                   tickLabelProps={{ fill: "currentColor", fontSize: 11, textAnchor: "end", dx: -2, dy: 3 }}
-                  label="Measured sag-limited rating (C)"
+                  label={words.axis}
                   labelOffset={36}
                   labelProps={{ fill: "currentColor", fontSize: 12, textAnchor: "middle" }}
                 />
@@ -162,7 +171,7 @@ export function LabelCheckChart({
                     key={p.packSlug}
                     href={`/packs/${p.packSlug}`}
                     data-testid="label-check-point"
-                    aria-label={`${p.makerName} ${p.label}: labelled ${f1(p.labelledC)}C, measured ${f1(p.measuredC)}C from ${p.n} result${p.n === 1 ? "" : "s"}${below ? ", falls short of its label" : ", meets its label"}`}
+                    aria-label={`${p.makerName} ${p.label}: labelled ${f1(p.labelledC)}C, ${words.short} ${f1(p.measuredC)}C from ${p.n} result${p.n === 1 ? "" : "s"}${below ? `, ${words.pointBelow}` : `, ${words.meets}`}`}
                     onMouseEnter={() => setActive(p)}
                     onMouseLeave={() => setActive(null)}
                     onFocus={() => setActive(p)}
@@ -202,7 +211,7 @@ export function LabelCheckChart({
               {active.makerName} {active.label}
             </p>
             <p className="num">
-              labelled {f1(active.labelledC)}C · measured {f1(active.measuredC)}C
+              labelled {f1(active.labelledC)}C · {words.short} {f1(active.measuredC)}C
             </p>
             <p className="num">
               ratio {(active.measuredC / active.labelledC).toFixed(2)} · {active.n} result{active.n === 1 ? "" : "s"}

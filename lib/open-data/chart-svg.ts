@@ -4,7 +4,7 @@
 // Ito, 2008) paired with dash patterns, never colour alone. The layout is computed for the asked size
 // (chart-svg-kit.ts#frameFor): narrow images get wrapped titles, stacked legends and shorter axis titles
 // rather than shrunken text.
-import type { ChartData } from "./chart-data";
+import { CHART_RATING_WORDS, type ChartData } from "./chart-data";
 import { DEFAULT_CHART_SIZE, type ChartSize } from "./chart-size";
 import {
   CELL,
@@ -121,6 +121,7 @@ function legendItems(
 
 function labelCheck(data: ChartData, f: Frame): Kind {
   const pts = data.labelCheck ?? [];
+  const words = CHART_RATING_WORDS[data.rating];
   const max = Math.max(10, ...pts.map((p) => Math.max(p.labelledC, p.measuredC))) * 1.05;
   const ticks = niceTicks(0, max, f.narrow ? 4 : 5);
   const top = ticks[ticks.length - 1] ?? max;
@@ -131,12 +132,12 @@ function labelCheck(data: ChartData, f: Frame): Kind {
     {
       swatch: (x: number, y: number) =>
         `<circle cx="${(x + f.px(10)).toFixed(1)}" cy="${y.toFixed(1)}" r="${r}" fill="${CELL}"/>`,
-      label: "Pack (median sag-limited C)",
+      label: words.legend,
     },
     {
       swatch: (x: number, y: number) =>
         `<line x1="${x.toFixed(1)}" x2="${(x + f.px(26)).toFixed(1)}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${CHARGE}" stroke-width="${f.px(2)}" stroke-dasharray="7 4"/>`,
-      label: "Parity: measured = labelled",
+      label: words.parity,
     },
   ];
   const rows = legendItems(f, 0, 0, avail, items).rows;
@@ -149,7 +150,7 @@ function labelCheck(data: ChartData, f: Frame): Kind {
       const parity = `<line x1="${x(0).toFixed(1)}" y1="${y(0).toFixed(1)}" x2="${x(top).toFixed(1)}" y2="${y(top).toFixed(1)}" stroke="${CHARGE}" stroke-width="${f.px(2)}" stroke-dasharray="7 4"/>`;
       const dots = pts.map(
         (p) =>
-          `<circle cx="${x(p.labelledC).toFixed(1)}" cy="${y(p.measuredC).toFixed(1)}" r="${r}" fill="${CELL}" fill-opacity="0.8" stroke="#ffffff"><title>${escapeXml(`${p.label}: labelled ${p.labelledC}C, measured ${p.measuredC.toFixed(1)}C (median of ${p.n})`)}</title></circle>`,
+          `<circle cx="${x(p.labelledC).toFixed(1)}" cy="${y(p.measuredC).toFixed(1)}" r="${r}" fill="${CELL}" fill-opacity="0.8" stroke="#ffffff"><title>${escapeXml(`${p.label}: labelled ${p.labelledC}C, ${words.point} ${p.measuredC.toFixed(1)}C (of ${p.n})`)}</title></circle>`,
       );
       const legend = legendItems(
         f,
@@ -159,15 +160,7 @@ function labelCheck(data: ChartData, f: Frame): Kind {
         items,
       ).svg;
       return (
-        axes(
-          f,
-          box,
-          { x: ticks, y: ticks },
-          x,
-          y,
-          ["Labelled continuous C", "Labelled C"],
-          ["Measured C (sag-limited)", "Measured C"],
-        ) +
+        axes(f, box, { x: ticks, y: ticks }, x, y, ["Labelled continuous C", "Labelled C"], words.axis) +
         parity +
         dots.join("") +
         legend
@@ -300,11 +293,7 @@ function ranking(data: ChartData, f: Frame): Kind {
           `text-anchor="${metLeft ? "end" : "start"}" font-size="${vf}" fill="${CHARGE}"`,
         ),
       );
-      const xLabels = [
-        "Median label ratio (measured C ÷ labelled C) of the maker's packs",
-        "Median label ratio (measured C ÷ labelled C)",
-        "Median label ratio",
-      ];
+      const xLabels = CHART_RATING_WORDS[data.rating].ranking;
       // Centred under the bars when it fits there, else under the whole width.
       const plotW = box.right - valueW - x(0);
       const underBars = xLabels.find((l) => textWidth(l, lf) <= plotW);

@@ -29,6 +29,8 @@ export type GroupSample = {
   temperatureRiseC: number | null;
   sagLimitedC: number | null;
   labelRatio: number | null;
+  sustainedCMeasured: number | null;
+  sustainedLabelRatio: number | null;
   capacityRatio: number | null;
 };
 
@@ -56,6 +58,8 @@ export async function listGroupSamples(groupKey: string, w: PackWhere): Promise<
       temperatureRiseC: results.temperatureRiseC,
       sagLimitedC: results.sagLimitedC,
       labelRatio: results.labelRatio,
+      sustainedCMeasured: results.sustainedCMeasured,
+      sustainedLabelRatio: results.sustainedLabelRatio,
       capacityRatio: results.capacityRatio,
     })
     .from(results)

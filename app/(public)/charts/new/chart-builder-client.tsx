@@ -2,14 +2,17 @@
 // The chart builder: choose, preview (the server-drawn SVG), then go to the permalink that carries the state.
 import { useRouter, useSearchParams } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
+import { RATING_LABELS } from "@/lib/figure-words";
 import {
   CHART_KINDS,
   CHART_KIND_LABELS,
+  CHART_RATINGS,
   chartState,
   decodeChartState,
   encodeChartState,
   statePath,
   type ChartKind,
+  type ChartRating,
 } from "@/lib/open-data/chart-state";
 
 type Group = { key: string; label: string; resultCount: number; packCount: number };
@@ -18,7 +21,7 @@ type Maker = { slug: string; name: string };
 const input =
   "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
 const defaultTitle: Record<ChartKind, string> = {
-  "label-check": "Labelled C against measured C",
+  "label-check": "Labelled C against the rating",
   curves: "Discharge curves compared",
   "maker-ranking": "How close makers come to their labels",
 };
@@ -32,6 +35,9 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
   const [cells, setCells] = useState(from?.cells ? String(from.cells) : "");
   const [title, setTitle] = useState(from?.title ?? "");
   const [note, setNote] = useState(from?.note ?? "");
+  // A chart copied from an older permalink keeps the estimate it drew (a state without a rating means it).
+  const [rating, setRating] = useState<ChartRating>(from?.rating ?? "estimate");
+  const rated = kind === "label-check" || kind === "maker-ranking";
 
   const parsed = useMemo(
     () =>
@@ -41,10 +47,11 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
         group,
         maker: maker || undefined,
         cells: cells ? Number(cells) : undefined,
+        rating: rated ? rating : undefined,
         title: title.trim() || defaultTitle[kind],
         note: note.trim() || undefined,
       }),
-    [kind, group, maker, cells, title, note],
+    [kind, group, maker, cells, rated, rating, title, note],
   );
   const encoded = parsed.success ? encodeChartState(parsed.data) : null;
   const preview = useDeferredValue(encoded);
@@ -75,6 +82,24 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
             </label>
           ))}
         </fieldset>
+        {rated ? (
+          <fieldset className="space-y-1" data-testid="chart-rating">
+            <legend className="text-sm font-medium">Rating</legend>
+            {CHART_RATINGS.map((r) => (
+              <label key={r} className="flex items-start gap-2 text-sm">
+                <input
+                  type="radio"
+                  name="rating"
+                  value={r}
+                  checked={rating === r}
+                  onChange={() => setRating(r)}
+                  className="mt-1"
+                />
+                <span>{RATING_LABELS[r]}</span>
+              </label>
+            ))}
+          </fieldset>
+        ) : null}
         <label className="block text-sm">
           Like-for-like group
           <select name="group" value={group} onChange={(e) => setGroup(e.target.value)} className={input}>

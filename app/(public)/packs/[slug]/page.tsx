@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LineChart } from "@/components/charts/line-chart";
 import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
+import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
@@ -35,7 +36,7 @@ export default async function PackPage(props: Props) {
   if (!parsed.success) notFound();
   const detail = await cachedPackDetail(parsed.data.slug);
   if (!detail) notFound();
-  const { pack, groups, sustained, cycles, curves, results } = detail;
+  const { pack, groups, sustained, ageing, curves, results } = detail;
   const title = packTitle(pack);
   return (
     <article className="space-y-10">
@@ -60,20 +61,20 @@ export default async function PackPage(props: Props) {
       <section aria-labelledby="measured" className="space-y-3">
         <h2 id="measured">Label vs measured</h2>
         <p className="text-sm">
-          <strong>Sustained C:</strong>{" "}
+          <strong>{RATING_LABELS.measured}:</strong>{" "}
           {sustained ? (
             <>
               <span className="num" data-testid="sustained-c">
                 {fmt(sustained.rateC, 1)}C
               </span>{" "}
               <span className="muted">
-                — highest constant-current rate completed to cut-off without passing the stop temperature (
+                — the highest current a qualifying run actually drew, among approved results (
                 <Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>;{" "}
-                {sustained.groupLabel})
+                {sustained.groupLabel}). <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</Link>.
               </span>
             </>
           ) : (
-            <span className="muted">— no approved constant-current run has completed to cut-off yet</span>
+            <span className="muted">— no approved run has qualified for a measured rating yet</span>
           )}
         </p>
         <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
@@ -109,7 +110,7 @@ export default async function PackPage(props: Props) {
 
       <section aria-labelledby="cycles" className="space-y-3">
         <h2 id="cycles">Over cycles</h2>
-        <CyclesSection cycles={cycles} />
+        <CyclesSection ageing={ageing} />
       </section>
 
       <section aria-labelledby="results" className="space-y-3">

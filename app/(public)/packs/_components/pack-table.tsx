@@ -73,13 +73,13 @@ function columns(): ColumnDef<ApiPackRow>[] {
     },
     {
       id: "measuredC",
-      header: "Measured C",
+      header: "Sag-limited C (estimate)",
       meta: { sort: "measuredC", numeric: true, align: "right" } satisfies Meta,
       cell: ({ row }) => (row.original.measuredC === null ? dash : `${fmt(row.original.measuredC, 1)}C`),
     },
     {
       id: "labelRatio",
-      header: "Label ratio",
+      header: "Label ratio (estimate ÷ label)",
       meta: { sort: "labelRatio", numeric: true, align: "right" } satisfies Meta,
       cell: ({ row }) => (row.original.labelRatio === null ? dash : fmt(row.original.labelRatio, 2)),
     },

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { SummaryValue } from "@/components/summary-value";
+import { LABEL_RATIO_LABELS, METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { GroupFigures } from "@/lib/pack-summary";
 
@@ -39,10 +40,16 @@ export function GroupFiguresTable({
                 Like-for-like group
               </th>
               <th scope="col" className="px-2 py-1 font-medium">
-                Measured C <span className="muted font-normal">(sag-limited)</span>
+                Sag-limited C <span className="muted font-normal">(estimate)</span>
               </th>
               <th scope="col" className="px-2 py-1 font-medium">
-                Label ratio
+                Label ratio <span className="muted font-normal">(estimate ÷ label)</span>
+              </th>
+              <th scope="col" className="px-2 py-1 font-medium">
+                Sustained C <span className="muted font-normal">(measured, highest)</span>
+              </th>
+              <th scope="col" className="px-2 py-1 font-medium">
+                Label ratio <span className="muted font-normal">(measured ÷ label)</span>
               </th>
               <th scope="col" className="px-2 py-1 font-medium">
                 Delivered
@@ -62,9 +69,6 @@ export function GroupFiguresTable({
               <th scope="col" className="px-2 py-1 font-medium">
                 Temp. rise
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Sustained C
-              </th>
             </tr>
           </thead>
           <tbody>
@@ -82,6 +86,12 @@ export function GroupFiguresTable({
                 </td>
                 <td className="px-2 py-2">
                   <SummaryValue s={g.figures.labelRatio} digits={2} />
+                </td>
+                <td className="num px-2 py-2">
+                  {g.sustainedC === null ? <span className="muted">—</span> : `${fmt(g.sustainedC, 1)}C`}
+                </td>
+                <td className="px-2 py-2">
+                  <SummaryValue s={g.figures.sustainedLabelRatio} digits={2} />
                 </td>
                 <td className="px-2 py-2">
                   <SummaryValue s={g.figures.capacityMah} digits={0} unit="mAh" />
@@ -101,18 +111,29 @@ export function GroupFiguresTable({
                 <td className="px-2 py-2">
                   <SummaryValue s={g.figures.temperatureRiseC} digits={1} unit="°C" />
                 </td>
-                <td className="num px-2 py-2">
-                  {g.sustainedC === null ? <span className="muted">—</span> : `${fmt(g.sustainedC, 1)}C`}
-                </td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
-      <p className="muted text-xs">
-        DC resistance is the pack&apos;s, as measured; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE} —
-        always read it beside the raw value. Definitions: <Link href="/methods#figures">methods</Link>.
-      </p>
+      <div className="muted space-y-1 text-xs">
+        <p>
+          <strong>{RATING_LABELS.estimate}</strong> is an estimate from a resistance, not a tested rate: the current at
+          which the pack would sag from 3.7 V nominal to a 3.3 V floor per cell through the resistance read 10 s after
+          the load edge, at each test&apos;s pack temperature (each result lists its own assumptions).{" "}
+          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>Definition</Link>. {LABEL_RATIO_LABELS.estimate}.
+        </p>
+        <p>
+          <strong>{RATING_LABELS.measured}</strong> is measured: the current a run actually drew to its cut-off while
+          holding the floor and staying under the stop temperature; a group shows the highest among its approved
+          results. <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</Link>. {LABEL_RATIO_LABELS.measured}.
+        </p>
+        <p>
+          DC resistance is the pack&apos;s, as measured; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE}{" "}
+          — always read it beside the raw value. Definitions:{" "}
+          <Link href={methodsHref(METHODS_ANCHORS.figures)}>methods</Link>.
+        </p>
+      </div>
     </div>
   );
 }

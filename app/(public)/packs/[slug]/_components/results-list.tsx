@@ -24,8 +24,10 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
           </div>
           <p className="muted text-xs">{r.groupLabel}</p>
           <p className="num text-sm">
-            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmt(r.sagLimitedC, 1, "C")}{" "}
-            sag-limited · DC {fmt(r.dcResistanceMohm, 1, "mΩ")}
+            {fmt(r.capacityMah, 0, "mAh")} delivered · capacity ratio {fmtRatio(r.capacityRatio)} · sustained{" "}
+            {fmt(r.sustainedCMeasured, 1, "C")} (measured) · sag-limited {fmt(r.sagLimitedC, 1, "C")} (estimate) · DC{" "}
+            {fmt(r.dcResistanceMohm, 1, "mΩ")}
+            {r.retention ? ` · ${r.retention.points.length} cycles in one log` : ""}
           </p>
           <details>
             <summary className="cursor-pointer text-sm">Method card</summary>
