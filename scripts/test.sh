@@ -69,7 +69,8 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
     tail -n 40 "$RUN_DIR/build-e2e.log" >&2; status=1; say "next build failed (log in $RUN_DIR/build-e2e.log)"
   else
     port_in_use "$E2E_PORT" && fail "port $E2E_PORT (browser tests) is taken; set TEST_PORT_BASE to move the test world's ports"
-    node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
+    # Every browser test signs in from the same loopback address: raise that address's sign-in limit.
+    SIGN_IN_PER_ADDRESS=500 node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
     APP_PID=$!
     wait_for_port "$E2E_PORT" 60 || fail "the app did not start for browser tests (see $RUN_DIR/app-e2e.log)"
     E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${EXTRA[@]}"

@@ -69,6 +69,14 @@ const envObject = z.object({
     .default(2),
   // Only for load benchmarks on loopback (scripts/bench-load.mjs): switches the request limits off.
   SAGLINE_RATE_LIMITS: z.enum(["on", "off"]).default("on"),
+  // Sign-in links one client address may ask for per 15 minutes (all the people behind one address share it).
+  // The browser tests raise it: every test signs in from the same loopback address.
+  SIGN_IN_PER_ADDRESS: z.coerce
+    .number({ error: "SIGN_IN_PER_ADDRESS must be a whole number" })
+    .int("SIGN_IN_PER_ADDRESS must be a whole number")
+    .min(1, "SIGN_IN_PER_ADDRESS must be at least 1")
+    .max(10_000, "SIGN_IN_PER_ADDRESS must be at most 10000")
+    .default(20),
   LOG_MAX_BYTES: z.coerce
     .number()
     .int()

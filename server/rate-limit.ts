@@ -8,7 +8,7 @@ export type Limit = { limit: number; windowS: number };
 
 export const limits = {
   signInPerEmail: { limit: 5, windowS: 15 * 60 },
-  signInPerIp: { limit: 20, windowS: 15 * 60 },
+  signInPerIp: { limit: 20, windowS: 15 * 60 }, // the limit is SIGN_IN_PER_ADDRESS (server/env.ts), 20 by default
   submitPerUser: { limit: 20, windowS: 60 * 60 },
   uploadPerUser: { limit: 60, windowS: 60 * 60 },
   keepDraftPerUser: { limit: 30, windowS: 60 * 60 },

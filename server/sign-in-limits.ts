@@ -2,6 +2,7 @@
 // Used by the sign-in form's action and by the Auth.js route for direct POSTs.
 import "server-only";
 import { AppError } from "@/lib/errors";
+import { env } from "@/server/env";
 import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { normaliseEmail } from "@/lib/validations/sign-in";
 
@@ -12,7 +13,7 @@ function minutes(s: number | undefined): string {
 
 export async function enforceSignInLimits(email: string, ip: string): Promise<void> {
   try {
-    await enforceRateLimit(`sign-in:ip:${ip}`, limits.signInPerIp);
+    await enforceRateLimit(`sign-in:ip:${ip}`, { ...limits.signInPerIp, limit: env().SIGN_IN_PER_ADDRESS });
     await enforceRateLimit(`sign-in:email:${normaliseEmail(email)}`, limits.signInPerEmail);
   } catch (err) {
     if (err instanceof AppError && err.code === "rate_limited") {
