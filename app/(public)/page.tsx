@@ -1,7 +1,8 @@
-import Link from "next/link";
 import { fmt, fmtDate, fmtRatio } from "@/lib/format";
-import { cachedGroups, cachedMakerRanking, cachedNewestResults, cachedPacksInGroup } from "@/server/public-data";
-import { HomeLabelCheck, type HomeGroup } from "./_components/home-label-check-client";
+import { cachedGroups, cachedNewestResults } from "@/server/public-data";
+import { GroupSwitcher } from "./_components/group-switcher-client";
+import { HomeLabelCheck } from "./_components/home-label-check";
+import { StaticIsland } from "@/components/static-island";
 
 // Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.
 export const revalidate = 3600;
@@ -11,37 +12,8 @@ const MIN_PACKS_FOR_CHART = 3;
 export default async function HomePage() {
   const [groups, newest] = await Promise.all([cachedGroups(), cachedNewestResults(8)]);
   const shown = groups.filter((g) => g.packCount >= MIN_PACKS_FOR_CHART).slice(0, 8);
-  const homeGroups: HomeGroup[] = await Promise.all(
-    shown.map(async (g) => {
-      const [packs, ranking] = await Promise.all([cachedPacksInGroup(g.key), cachedMakerRanking(g.key)]);
-      return {
-        key: g.key,
-        label: g.label,
-        packCount: g.packCount,
-        points: packs.flatMap((p) =>
-          p.measuredC
-            ? [
-                {
-                  packSlug: p.packSlug,
-                  label: p.model,
-                  makerName: p.makerName,
-                  labelledC: p.labelledC,
-                  measuredC: Math.round(p.measuredC.median * 10) / 10,
-                  n: p.measuredC.n,
-                },
-              ]
-            : [],
-        ),
-        ranking: ranking.map(({ makerSlug, makerName, medianLabelRatio, packs: n, results }) => ({
-          makerSlug,
-          makerName,
-          medianLabelRatio,
-          packs: n,
-          results,
-        })),
-      };
-    }),
-  );
+  const first = shown[0];
+  const chart = first ? await HomeLabelCheck({ group: first }) : null;
   return (
     <div className="space-y-10">
       <section className="space-y-4">
@@ -77,9 +49,19 @@ export default async function HomePage() {
         <p className="muted max-w-3xl text-sm">
           Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited
           C) up. Points below the dashed line fall short of their label.{" "}
-          <Link href="/methods#sag-limited-c">How sag-limited C is computed</Link>.
+          <a href="/methods#sag-limited-c">How sag-limited C is computed</a>.
         </p>
-        <HomeLabelCheck groups={homeGroups} />
+        {first && chart ? (
+          <div className="space-y-4">
+            <GroupSwitcher
+              groups={shown.map(({ key, label, packCount }) => ({ key, label, packCount }))}
+              target="home-lc"
+            />
+            <StaticIsland id="home-lc">{chart}</StaticIsland>
+          </div>
+        ) : (
+          <p className="muted">No published results yet.</p>
+        )}
       </section>
 
       <section aria-labelledby="newest-h" className="space-y-3">
@@ -87,21 +69,21 @@ export default async function HomePage() {
         <ul className="grid gap-2 sm:grid-cols-2" data-testid="newest-results">
           {newest.map((r) => (
             <li key={r.id} className="card space-y-1">
-              <Link href={`/packs/${r.packSlug}`} className="font-medium">
+              <a href={`/packs/${r.packSlug}`} className="font-medium">
                 {r.makerName} {r.packModel}
-              </Link>
+              </a>
               <p className="num text-sm">
                 {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
                 {fmtRatio(r.labelRatio)}
               </p>
               <p className="muted text-xs">
-                <Link href={`/results/${r.id}`}>Result #{r.id}</Link> · {fmtDate(r.publishedAt)}
+                <a href={`/results/${r.id}`}>Result #{r.id}</a> · {fmtDate(r.publishedAt)}
               </p>
             </li>
           ))}
         </ul>
         <p className="text-sm">
-          <Link href="/packs">All packs →</Link>
+          <a href="/packs">All packs →</a>
         </p>
       </section>
     </div>

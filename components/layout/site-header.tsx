@@ -1,4 +1,3 @@
-import Link from "next/link";
 import { Logo } from "./logo";
 
 const nav = [
@@ -14,30 +13,30 @@ export function SiteHeader({ accountSlot }: { accountSlot?: React.ReactNode }) {
   return (
     <header className="border-b border-ink/10 bg-paper-raised/80 backdrop-blur dark:border-night-line dark:bg-night-raised/80">
       <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
-        <Link href="/" className="text-ink no-underline hover:no-underline dark:text-paper" aria-label="Sagline home">
+        <a href="/" className="text-ink no-underline hover:no-underline dark:text-paper" aria-label="Sagline home">
           <Logo />
-        </Link>
+        </a>
         <nav
           aria-label="Main"
           className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto text-sm sm:order-none sm:w-auto"
         >
           {nav.map((item) => (
-            <Link
+            <a
               key={item.href}
               href={item.href}
               className="whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper"
             >
               {item.label}
-            </Link>
+            </a>
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-2 text-sm">
-          <Link
+          <a
             href="/submit"
             className="rounded-md bg-charge-500 px-3 py-1.5 font-medium text-night no-underline hover:bg-charge-400 hover:no-underline"
           >
             Submit a result
-          </Link>
+          </a>
           {accountSlot}
         </div>
       </div>

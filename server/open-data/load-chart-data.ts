@@ -3,6 +3,7 @@
 import "server-only";
 import { aggregateByMaker, aggregateByPack, groupLabel } from "@/lib/open-data/aggregate";
 import { MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/chart-data";
+import { labelForGroupKey } from "@/lib/analysis";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
 import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
@@ -14,7 +15,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
   const packs = aggregateByPack(samples);
   const base: ChartData = {
     state,
-    groupLabel: groupLabel(samples[0]) ?? state.group,
+    groupLabel: groupLabel(samples[0]) ?? labelForGroupKey(state.group) ?? "an unnamed like-for-like group",
     counts: { packs: packs.length, results: samples.length },
     leftOut: [],
   };
@@ -26,7 +27,15 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     const points = packs.flatMap((p) => {
       const m = p.figures.sagLimitedC;
       return m
-        ? [{ label: `${p.makerName} ${p.model}`, labelledC: p.labelledContinuousC, measuredC: m.median, n: m.n }]
+        ? [
+            {
+              id: p.packSlug,
+              label: `${p.makerName} ${p.model}`,
+              labelledC: p.labelledContinuousC,
+              ratingC: Math.round(m.median * 10) / 10,
+              n: m.n,
+            },
+          ]
         : [];
     });
     if (points.length < packs.length)

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { Suspense } from "react";
 import { queryPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
@@ -38,7 +37,7 @@ export default async function PacksPage() {
       <h1>Packs</h1>
       <p className="muted max-w-3xl text-sm">
         Measured columns appear when you choose a like-for-like group: figures are only compared between results taken
-        the same way (<Link href="/methods#like-for-like">why</Link>). The same data is at <code>/api/v1/packs</code>.
+        the same way (<a href="/methods#like-for-like">why</a>). The same data is at <code>/api/v1/packs</code>.
       </p>
       {/* Until the client reads the URL the rows are the unfiltered first page, so say they are loading. */}
       <Suspense fallback={<PacksView params={DEFAULT_PACK_PARAMS} page={initial} options={options} loading />}>

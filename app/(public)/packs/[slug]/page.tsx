@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { LineChart } from "@/components/charts/line-chart";
+import { LineFigure } from "@/components/charts/line-figure";
+import { StaticIsland } from "@/components/static-island";
 import { WatchSlot } from "./_components/watch-slot-client";
 import { fmt, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
@@ -48,12 +48,12 @@ export default async function PackPage(props: Props) {
         </div>
         <div className="flex gap-2">
           <WatchSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
-          <Link
+          <a
             href={`/compare?packs=${pack.slug}`}
             className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
           >
             Compare…
-          </Link>
+          </a>
         </div>
       </header>
 
@@ -68,15 +68,16 @@ export default async function PackPage(props: Props) {
               </span>{" "}
               <span className="muted">
                 — highest constant-current rate completed to cut-off without passing the stop temperature (
-                <Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>;{" "}
-                {sustained.groupLabel})
+                <a href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</a>; {sustained.groupLabel})
               </span>
             </>
           ) : (
             <span className="muted">— no approved constant-current run has completed to cut-off yet</span>
           )}
         </p>
-        <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
+        <StaticIsland id="pack-figures">
+          <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
+        </StaticIsland>
       </section>
 
       <section aria-labelledby="curves" className="space-y-3">
@@ -84,37 +85,46 @@ export default async function PackPage(props: Props) {
         {curves.length === 0 ? (
           <p className="muted">No curves yet.</p>
         ) : (
-          <LineChart
-            title="Voltage per cell against capacity delivered"
-            xLabel="Capacity delivered (mAh)"
-            yLabel="Voltage per cell (V)"
-            xDigits={0}
-            yDigits={3}
-            tableCaption={`Discharge curves of ${title}`}
-            notes={
-              <p>
-                The newest {curves.length} published results, downsampled on the server for drawing. Curves from
-                different like-for-like groups are not comparable with each other: each is labelled with its method.
-              </p>
-            }
-            series={curves.map((c) => ({
-              id: String(c.resultId),
-              label: c.label,
-              href: `/results/${c.resultId}`,
-              points: c.points.map((p) => ({ x: p.mah, y: p.vpc })),
-            }))}
-          />
+          <StaticIsland id="pack-curves-island">
+            <LineFigure
+              id="pack-curves"
+              title="Voltage per cell against capacity delivered"
+              xLabel="Capacity delivered (mAh)"
+              yLabel="Voltage per cell, V"
+              xDigits={0}
+              yDigits={3}
+              yUnit="v"
+              cells={pack.cellsInSeries}
+              tableCaption={`Discharge curves of ${title}`}
+              notes={
+                <p>
+                  The newest {curves.length} published results, downsampled on the server for drawing. Curves from
+                  different like-for-like groups are not comparable with each other: each is labelled with its method.
+                </p>
+              }
+              series={curves.map((c) => ({
+                id: String(c.resultId),
+                label: c.label,
+                href: `/results/${c.resultId}`,
+                points: c.points.map((p) => ({ x: p.mah, y: p.vpc })),
+              }))}
+            />
+          </StaticIsland>
         )}
       </section>
 
       <section aria-labelledby="cycles" className="space-y-3">
         <h2 id="cycles">Over cycles</h2>
-        <CyclesSection cycles={cycles} />
+        <StaticIsland id="pack-cycles">
+          <CyclesSection cycles={cycles} />
+        </StaticIsland>
       </section>
 
       <section aria-labelledby="results" className="space-y-3">
         <h2 id="results">Results ({results.length})</h2>
-        <ResultsList results={results} />
+        <StaticIsland id="pack-results-island">
+          <ResultsList results={results} />
+        </StaticIsland>
       </section>
     </article>
   );

@@ -2,13 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { LogFigure } from "@/components/charts/log-figure";
 import { ReviewHistory } from "@/components/review-history";
 import { getReviewDetail } from "@/db/queries/review";
+import { prepareTimeCurve } from "@/lib/curves";
 import { labelSpec, packTitle } from "@/lib/format";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
 import { requirePageUser } from "@/server/page-auth";
 import { FlagChips } from "../_components/flag-chips";
-import { CurveSvg } from "./_components/curve-svg";
 import { DecisionPanel } from "./_components/decision-panel-client";
 import { ContributorHistory, GroupComparison, MethodAndFigures, ReaderFlags } from "./_components/result-sections";
 
@@ -76,7 +77,19 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
 
           <section className="card space-y-3" aria-labelledby="curve-h">
             <h2 id="curve-h">Curves</h2>
-            <CurveSvg curve={r.curve} cells={d.pack.cellsInSeries} />
+            <LogFigure
+              id="review-log"
+              title="Voltage, current and temperature over time"
+              points={prepareTimeCurve(r.curve, d.pack.cellsInSeries, 300).map((q) => ({
+                s: q.s,
+                v: q.vpc,
+                a: q.a,
+                t: q.tc,
+              }))}
+              cells={d.pack.cellsInSeries}
+              stopTemperatureC={r.stopTemperatureC}
+              caption={`Result #${r.id}: the log`}
+            />
           </section>
 
           <MethodAndFigures d={d} />

@@ -1,4 +1,4 @@
-import { LineChart } from "@/components/charts/line-chart";
+import { LineFigure } from "@/components/charts/line-figure";
 import { fmt } from "@/lib/format";
 import type { CycleSeries } from "@/lib/pack-summary";
 
@@ -36,10 +36,11 @@ export function CyclesSection({ cycles }: { cycles: CycleSeries | null }) {
         ) : null}
       </p>
       <div className="grid gap-4 lg:grid-cols-2">
-        <LineChart
+        <LineFigure
+          id="pack-kept"
           title="Capacity kept over cycles"
           xLabel="Cycles before the test"
-          yLabel="Delivered ÷ rated capacity (%)"
+          yLabel="Delivered ÷ rated capacity, %"
           xDigits={0}
           yDigits={1}
           tableCaption="Capacity kept over cycles"
@@ -49,10 +50,11 @@ export function CyclesSection({ cycles }: { cycles: CycleSeries | null }) {
             ...(trendLine.length ? [{ id: "trend", label: "fitted line", points: trendLine, styleIndex: 1 }] : []),
           ]}
         />
-        <LineChart
+        <LineFigure
+          id="pack-dcr"
           title="DC resistance over cycles"
           xLabel="Cycles before the test"
-          yLabel="DC resistance (mΩ)"
+          yLabel="DC resistance, mΩ"
           xDigits={0}
           yDigits={1}
           tableCaption="DC resistance over cycles"

@@ -1,4 +1,3 @@
-import Link from "next/link";
 import { SummaryValue } from "@/components/summary-value";
 import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { GroupFigures } from "@/lib/pack-summary";
@@ -16,7 +15,7 @@ export function GroupFiguresTable({
   if (groups.length === 0)
     return (
       <p className="muted">
-        No published results yet. <Link href="/submit">Submit one</Link>.
+        No published results yet. <a href="/submit">Submit one</a>.
       </p>
     );
   return (
@@ -111,7 +110,7 @@ export function GroupFiguresTable({
       </div>
       <p className="muted text-xs">
         DC resistance is the pack&apos;s, as measured; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE} —
-        always read it beside the raw value. Definitions: <Link href="/methods#figures">methods</Link>.
+        always read it beside the raw value. Definitions: <a href="/methods#figures">methods</a>.
       </p>
     </div>
   );

@@ -1,4 +1,3 @@
-import Link from "next/link";
 import { MethodCard } from "@/components/method-card";
 import { fmt, fmtDate, fmtRatio } from "@/lib/format";
 import type { PublicResultRow } from "@/lib/pack-summary";
@@ -12,9 +11,9 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
       {list.map((r) => (
         <li key={r.id} className="card space-y-2">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <Link href={`/results/${r.id}`} className="font-medium">
+            <a href={`/results/${r.id}`} className="font-medium">
               Result #{r.id}
-            </Link>
+            </a>
             <span className="muted text-xs">
               published {fmtDate(r.publishedAt)}
               {r.status === "disputed" ? (

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { chartSvgMarkup as renderChartSvg } from "@/components/charts/image/render";
 import type { ChartData } from "@/lib/open-data/chart-data";
-import { escapeXml, niceTicks, renderChartSvg, wrapText } from "@/lib/open-data/chart-svg";
+import { escapeXml, wrapText } from "@/lib/open-data/chart-svg-kit";
 
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
   state: { v: 1, kind, group: "g", title: "A <chart> & more", note: "Note" },
@@ -9,11 +10,11 @@ const base = (kind: ChartData["state"]["kind"]): ChartData => ({
   leftOut: ["1 pack without a sag-limited C left out."],
 });
 
-describe("chart SVG", () => {
+describe("chart image", () => {
   it("carries the licence and 'Source: Sagline' inside the drawing (product rule)", () => {
     const svg = renderChartSvg({
       ...base("label-check"),
-      labelCheck: [{ label: "P", labelledC: 50, measuredC: 30, n: 2 }],
+      labelCheck: [{ id: "p", label: "P", labelledC: 50, ratingC: 30, n: 2 }],
     });
     expect(svg).toContain("Source: Sagline");
     expect(svg).toContain("CC BY 4.0");
@@ -40,7 +41,7 @@ describe("chart SVG", () => {
           },
         ],
       }),
-    ).toContain('<path d="M');
+    ).toMatch(/<path d="M[\d.]+,[\d.]+L/);
     expect(
       renderChartSvg({
         ...base("maker-ranking"),
@@ -50,11 +51,6 @@ describe("chart SVG", () => {
     expect(renderChartSvg({ ...base("label-check"), counts: { packs: 0, results: 0 } })).toContain(
       "No approved results match this chart yet.",
     );
-  });
-  it("chooses ticks whose last one covers the maximum (common practice)", () => {
-    expect(niceTicks(0, 107)).toEqual([0, 25, 50, 75, 100, 125]);
-    expect(niceTicks(0, 100)).toEqual([0, 20, 40, 60, 80, 100]);
-    expect(niceTicks(3.4, 4.2).at(-1)).toBeGreaterThanOrEqual(4.2);
   });
   it("wraps long titles and marks cut text with an ellipsis", () => {
     const lines = wrapText("word ".repeat(100), 400, 20, 2);
