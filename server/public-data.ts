@@ -5,7 +5,7 @@ import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
-import { listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
+import { listGroupCoverage, listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
 import {
   getApiPackBySlug,
   getMakerBySlug,
@@ -79,6 +79,14 @@ export const cachedMakers = unstable_cache(listAllMakers, ["open-data-makers"], 
 /** Like-for-like groups with their approved-result counts (/data's download form): every decision revalidates `results`. */
 export function cachedGroupOptions(minResults: number) {
   return unstable_cache(() => listGroupOptions(minResults), ["group-options", String(minResults)], {
+    tags: [t.results, t.packs],
+    revalidate,
+  })();
+}
+
+/** Per group, maker and pack size, how many approved results (the chart builder offers only what has data). */
+export function cachedGroupCoverage(minResults: number) {
+  return unstable_cache(() => listGroupCoverage(minResults), ["group-coverage", String(minResults)], {
     tags: [t.results, t.packs],
     revalidate,
   })();

@@ -66,22 +66,24 @@ export default async function HomePage() {
 
       <section aria-labelledby="newest-h" className="space-y-3">
         <h2 id="newest-h">Newest approved results</h2>
-        <ul className="grid gap-2 sm:grid-cols-2" data-testid="newest-results">
-          {newest.map((r) => (
-            <li key={r.id} className="card space-y-1">
-              <a href={`/packs/${r.packSlug}`} className="font-medium">
-                {r.makerName} {r.packModel}
-              </a>
-              <p className="num text-sm">
-                {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
-                {fmtRatio(r.labelRatio)}
-              </p>
-              <p className="muted text-xs">
-                <a href={`/results/${r.id}`}>Result #{r.id}</a> · {fmtDate(r.publishedAt)}
-              </p>
-            </li>
-          ))}
-        </ul>
+        <StaticIsland id="newest">
+          <ul className="grid gap-2 sm:grid-cols-2" data-testid="newest-results">
+            {newest.map((r) => (
+              <li key={r.id} className="card space-y-1">
+                <a href={`/packs/${r.packSlug}`} className="font-medium">
+                  {r.makerName} {r.packModel}
+                </a>
+                <p className="num text-sm">
+                  {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
+                  {fmtRatio(r.labelRatio)}
+                </p>
+                <p className="muted text-xs">
+                  <a href={`/results/${r.id}`}>Result #{r.id}</a> · {fmtDate(r.publishedAt)}
+                </p>
+              </li>
+            ))}
+          </ul>
+        </StaticIsland>
         <p className="text-sm">
           <a href="/packs">All packs →</a>
         </p>

@@ -6,6 +6,8 @@
 import { useEffect } from "react";
 
 const figureOf = (el: Element) => el.closest<HTMLElement>("[data-chart]");
+/** A chart's point: a link in its drawing, described by its table row. */
+const POINT = ".chart-svg a[aria-describedby]";
 
 function rowText(row: Element | null): string[] {
   if (!row) return [];
@@ -97,16 +99,16 @@ function install(): () => void {
     if (b) toggle(b);
   };
   const onFocusIn = (e: FocusEvent) => {
-    const point = (e.target as Element | null)?.closest?.(".chart-pt");
+    const point = (e.target as Element | null)?.closest?.(POINT);
     if (point) showPoint(point, true);
   };
   const onOver = (e: MouseEvent) => {
-    const point = (e.target as Element | null)?.closest?.(".chart-pt");
+    const point = (e.target as Element | null)?.closest?.(POINT);
     if (point) showPoint(point, false);
   };
   const onOut = (e: Event) => {
     const t = e.target as Element | null;
-    if (t?.closest?.(".chart-pt") || (e.type === "focusout" && t?.closest?.("[data-readings]"))) {
+    if (t?.closest?.(POINT) || (e.type === "focusout" && t?.closest?.("[data-readings]"))) {
       const fig = figureOf(t);
       if (fig) hideTips(fig);
     }

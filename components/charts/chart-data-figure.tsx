@@ -26,7 +26,7 @@ export function ChartDataFigure({ data, id = "ch" }: { data: ChartData; id?: str
       id={id}
       title={title}
       series={curveSeries(data.curves ?? [])}
-      {...curvesAxes(800)}
+      {...curvesAxes(800, data.curvesPerPack)}
       yDigits={2}
       tableCaption={`${title}, ${data.groupLabel}`}
       notes={<p>{data.groupLabel}.</p>}

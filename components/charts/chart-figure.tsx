@@ -3,10 +3,12 @@
 // The numbers are written once, in the table: points are described by their table row (aria-describedby), and
 // tooltips and keyboard readings read the rows (chart-behaviour-client.tsx), so no figure travels twice.
 import type { ReactNode } from "react";
+import type { Quantity } from "@/lib/units";
+import { UnitSymbol } from "../quantity";
 import type { MarkerShape } from "./palette";
 import { MarkerSwatch } from "./draw/kit";
 
-export type TableCell = string | { text: string; href?: string; u?: string; v?: number; s?: number };
+export type TableCell = string | { text: string; href?: string; u?: Quantity; v?: number; s?: number };
 type TableRow = {
   /** Row id suffix: points of a drawing name their row `${id}-r${rowId}` in aria-describedby. */
   rowId?: string;
@@ -14,7 +16,10 @@ type TableRow = {
   xPct?: number;
   cells: TableCell[];
 };
-export type ChartTableData = { caption: string; columns: string[]; rows: TableRow[] };
+/** A column header; one with a quantity gets its unit symbol, and its whole column is converted for the
+ * reader's units (components/units/apply-units.ts reads the numbers from the cells). */
+export type TableColumn = string | { label: string; u: Quantity; s?: number };
+export type ChartTableData = { caption: string; columns: TableColumn[]; rows: TableRow[] };
 export type LegendItem = {
   label: string;
   href?: string;
@@ -44,11 +49,17 @@ function ChartTable({ id, table }: { id: string; table: ChartTableData }) {
       <caption>{table.caption}</caption>
       <thead>
         <tr>
-          {table.columns.map((c) => (
-            <th key={c} scope="col">
-              {c}
-            </th>
-          ))}
+          {table.columns.map((c) =>
+            typeof c === "string" ? (
+              <th key={c} scope="col">
+                {c}
+              </th>
+            ) : (
+              <th key={c.label} scope="col" data-cu={c.u} data-s={c.s}>
+                {c.label}, <UnitSymbol q={c.u} cells={c.s} />
+              </th>
+            ),
+          )}
         </tr>
       </thead>
       <tbody>

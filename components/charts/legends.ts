@@ -29,8 +29,9 @@ export function curveSeries(curves: CurveLine[]): LineSeries[] {
   }));
 }
 
-export function curvesAxes(width: number) {
+export function curvesAxes(width: number, perPack?: { cells: number }) {
+  const y = perPack ? `Pack voltage (${perPack.cells}S)` : "Voltage per cell";
   return width < 420
-    ? { xLabel: "Capacity (% of rated)", yLabel: "Voltage per cell, V" }
-    : { xLabel: "Capacity delivered (% of rated mAh)", yLabel: "Voltage per cell under load, V" };
+    ? { xLabel: "Capacity (% of rated)", yLabel: `${y}, V` }
+    : { xLabel: "Capacity delivered (% of rated mAh)", yLabel: `${y} under load, V` };
 }

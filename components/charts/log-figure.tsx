@@ -12,7 +12,7 @@ function nearest(points: LogPoint[], s: number): LogPoint | undefined {
   return best;
 }
 
-function logTable(points: LogPoint[], caption: string, voltageTitle: string, cells?: number): ChartTableData {
+function logTable(points: LogPoint[], caption: string, perCell: boolean, cells?: number): ChartTableData {
   const x = logX(points);
   const time = logTime(points);
   const [d0, d1] = x.domain() as [number, number];
@@ -20,7 +20,12 @@ function logTable(points: LogPoint[], caption: string, voltageTitle: string, cel
   const hasT = points.some((p) => p.t !== null);
   return {
     caption: `${caption} (the reading nearest to ${READING_STEPS + 1} evenly spaced times)`,
-    columns: [time.title, voltageTitle, ...(hasA ? ["Current, A"] : []), ...(hasT ? ["Pack temperature, °C"] : [])],
+    columns: [
+      time.title,
+      perCell ? { label: "Voltage", u: "v", s: cells } : "Pack voltage, V",
+      ...(hasA ? ["Current, A"] : []),
+      ...(hasT ? [{ label: "Pack temperature", u: "temp" as const }] : []),
+    ],
     rows: Array.from({ length: READING_STEPS + 1 }, (_, i) => d0 + ((d1 - d0) * i) / READING_STEPS).flatMap((t) => {
       const p = nearest(points, t * time.div);
       if (!p) return [];
@@ -29,9 +34,9 @@ function logTable(points: LogPoint[], caption: string, voltageTitle: string, cel
           xPct: Math.round(x(t) * 100) / 100,
           cells: [
             fmt(t, time.div === 1 ? 0 : 1),
-            { text: fmt(p.v, 3), u: "v", v: p.v, s: cells },
+            fmt(p.v, perCell ? 3 : 2),
             ...(hasA ? [fmt(p.a, 2)] : []),
-            ...(hasT ? [p.t === null ? "—" : { text: fmt(p.t, 1), u: "temp", v: p.t }] : []),
+            ...(hasT ? [fmt(p.t, 1)] : []),
           ],
         },
       ];
@@ -62,19 +67,18 @@ export function LogFigure({
   caption: string;
   headingLevel?: 2 | 3;
 }) {
-  const voltageTitle = perCell ? "Voltage per cell, V" : "Pack voltage, V";
   return (
     <ChartFigure
       id={id}
       title={title}
       headingLevel={headingLevel}
-      table={logTable(points, caption, voltageTitle, perCell ? cells : undefined)}
+      table={logTable(points, caption, perCell, perCell ? cells : undefined)}
       notes={notes}
       empty={points.length < 2 ? "No curve stored for this log." : undefined}
     >
       <LogPanels
         points={points}
-        voltageTitle={voltageTitle}
+        perCell={perCell}
         stopTemperatureC={stopTemperatureC}
         interactive
         cells={perCell ? cells : undefined}

@@ -22,6 +22,8 @@ export type ChartData = {
   leftOut: string[];
   labelCheck?: LabelCheckPoint[];
   curves?: CurveLine[];
+  /** Curves of one pack size drawn per pack (the reader's units, `units: "pack"`): voltages are the pack's. */
+  curvesPerPack?: { cells: number };
   ranking?: RankingBar[];
 };
 

@@ -6,6 +6,7 @@ import { MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/char
 import { labelForGroupKey } from "@/lib/analysis";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
+import { parseUnitsParam } from "@/lib/units";
 import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
 
 export async function loadChartData(state: ChartState): Promise<ChartData> {
@@ -75,5 +76,17 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
       `${plural(seen.size - MAX_CURVES, "more pack")} not drawn (at most ${MAX_CURVES} curves, first result of each pack).`,
     );
   else base.leftOut.push("One curve per pack: its first approved result in the group.");
+  // Per pack only where every curve is one pack size; across sizes the pack voltages would not compare.
+  if (parseUnitsParam(state.units).basis === "pack") {
+    if (state.cells) {
+      const cells = state.cells;
+      const perPack = curves.map((c) => ({
+        ...c,
+        points: c.points.map((p) => ({ ...p, voltagePerCellV: Math.round(p.voltagePerCellV * cells * 1000) / 1000 })),
+      }));
+      return { ...base, curves: perPack, curvesPerPack: { cells } };
+    }
+    base.leftOut.push("Voltages per cell: packs of different sizes are compared (choose one pack size for per pack).");
+  }
   return { ...base, curves };
 }

@@ -72,7 +72,10 @@ describe("contrast (WCAG 2.2)", () => {
   });
 
   it("the compare picker's remove button (×) is at least 4.5:1 in both schemes", () => {
-    const file = fs.readFileSync(path.join(process.cwd(), "app/(public)/compare/_components/compare-picker-client.tsx"), "utf8");
+    const file = fs.readFileSync(
+      path.join(process.cwd(), "app/(public)/compare/_components/compare-picker-client.tsx"),
+      "utf8",
+    );
     const dark = /dark:text-\[(#[0-9a-f]{6})\]/i.exec(file)?.[1] ?? "";
     expect(contrast(token("warn"), token("paper"))).toBeGreaterThanOrEqual(4.5);
     expect(contrast(dark, token("night-raised"))).toBeGreaterThanOrEqual(4.5);

@@ -3,14 +3,13 @@
 // its true size: on a page the <svg> is 100% wide; in an image it is nested at a known width. Lines and areas
 // live in a stretched inner <svg> (viewBox 0..1000 wide, preserveAspectRatio none) with non-scaling strokes;
 // markers are <use> of shapes defined once per drawing, placed with percentage x. Hook-free: see markup.ts.
+import { DEFAULT_UNITS, symbol, type Quantity } from "@/lib/units";
 import type { MarkerShape } from "../palette";
 
 /** A percentage as an attribute value, rounded to 0.01 %. */
 export const pct = (v: number) => `${Math.round(v * 100) / 100}%`;
 /** Pixels rounded to 0.1. */
 export const px = (v: number) => Math.round(v * 10) / 10;
-/** Stretched-canvas x (0..1000) from a percentage. */
-export const canvasX = (percent: number) => Math.round(percent * 100) / 10;
 
 const MARKER_SIZE = 9;
 /** Pixels left of a drawing for its y values and titles: a page gives the <svg> a margin of this much (the
@@ -26,6 +25,30 @@ export function fmtNum(v: number, digits: number): string {
 
 /** How many y ticks a plot of this height has room for (about one per 30 px, 2 to 5). */
 export const yTickCount = (plotPx: number) => Math.max(2, Math.min(5, Math.floor(plotPx / 30)));
+
+/**
+ * Path data for a line on the stretched canvas: points as (x in percent, y in pixels), written as one absolute
+ * move and then whole-unit relative steps (x in 0.1 % of the width, y in pixels) — the shortest text for a
+ * line that is exact to a pixel. Each step is taken between rounded absolute points, so no error piles up.
+ */
+export function linePath(points: { xPct: number; y: number }[]): string {
+  let out = "";
+  let px0 = 0;
+  let py0 = 0;
+  points.forEach((p, k) => {
+    const x = Math.round(p.xPct * 10);
+    const y = Math.round(p.y);
+    if (k === 0) out += `M${x},${y}`;
+    else {
+      const dx = x - px0;
+      const dy = y - py0;
+      out += `l${dx}${dy < 0 ? "" : ","}${dy}`;
+    }
+    px0 = x;
+    py0 = y;
+  });
+  return out;
+}
 
 /** The fewest decimals (up to `max`) that write every tick exactly: 0.05 steps need 2, 0.2 steps 1. */
 export function tickDigits(ticks: number[], max = 3): number {
@@ -143,7 +166,7 @@ export function YGrid({
   y: (v: number) => number;
   format: (v: number) => string;
   /** Marks the tick labels for the reader's units (data-u, converted in the browser). */
-  unit?: string;
+  unit?: Quantity;
   /** Cells in series, for per-cell ↔ per-pack conversion. */
   cells?: number;
 }) {
@@ -213,6 +236,15 @@ export function XAxis({
         </text>
       ) : null}
     </g>
+  );
+}
+
+/** A unit symbol inside an SVG text, marked for the reader's units (components/units/apply-units.ts). */
+export function UnitTspan({ q, cells }: { q: Quantity; cells?: number }) {
+  return (
+    <tspan data-usym={q} data-s={cells}>
+      {symbol(q, DEFAULT_UNITS, cells)}
+    </tspan>
   );
 }
 

@@ -4,6 +4,7 @@
 // The rating is a prop (a label and whether it is an estimate or a measurement), so a second rating is a
 // second series, not a second chart.
 import { scaleLinear } from "@visx/scale";
+import { Fragment } from "react";
 import type { LabelCheckPoint } from "@/lib/open-data/chart-data";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
 import { MarkerDefs, MarkerUse, XAxis, YGrid, YTitle, fmtNum, pct, px, yTickCount } from "./kit";
@@ -95,15 +96,9 @@ export function LabelCheckPlot({
             filled={s.filled}
           />
         );
-        if (!interactive) return <g key={p.id}>{mark}</g>;
+        if (!interactive) return <Fragment key={p.id}>{mark}</Fragment>;
         return (
-          <a
-            key={p.id}
-            href={`/packs/${p.id}`}
-            className="chart-pt"
-            aria-label={p.label}
-            aria-describedby={`${prefix}-r${i}`}
-          >
+          <a key={p.id} href={`/packs/${p.id}`} aria-label={p.label} aria-describedby={`${prefix}-r${i}`}>
             {mark}
           </a>
         );

@@ -3,7 +3,20 @@
 // plot is focusable and ← → read the chart's table rows (chart-behaviour-client.tsx).
 import { scaleLinear } from "@visx/scale";
 import { seriesStyle } from "../palette";
-import { MarkerDefs, MarkerUse, XAxis, YGrid, YTitle, canvasX, fmtNum, px, tickDigits, yTickCount } from "./kit";
+import type { Quantity } from "@/lib/units";
+import {
+  MarkerDefs,
+  MarkerUse,
+  UnitTspan,
+  XAxis,
+  YGrid,
+  YTitle,
+  linePath,
+  fmtNum,
+  px,
+  tickDigits,
+  yTickCount,
+} from "./kit";
 
 export type XY = { x: number; y: number };
 export type LineSeries = {
@@ -96,8 +109,8 @@ export function LinePlot({
   y?: number;
   /** On a page: focusable, with a cursor the keyboard moves through the table's readings. */
   interactive?: boolean;
-  /** The y values' quantity for the reader's units (lib/units.ts), when they have one. */
-  yUnit?: string;
+  /** The y values' quantity for the reader's units (lib/units.ts); its symbol is added to the y title. */
+  yUnit?: Quantity;
   /** Cells in series when every series is one pack size (per-cell ↔ per-pack conversion). */
   cells?: number;
 }) {
@@ -120,7 +133,14 @@ export function LinePlot({
   return (
     <svg width={width} height={height} x={left} y={top} className="chart-svg" overflow="visible" {...a11y}>
       <MarkerDefs prefix={prefix} shapes={styles.map((s) => s.shape)} />
-      <YTitle y={12}>{yLabel}</YTitle>
+      <YTitle y={12}>
+        {yLabel}
+        {yUnit ? (
+          <>
+            , <UnitTspan q={yUnit} cells={cells} />
+          </>
+        ) : null}
+      </YTitle>
       <YGrid ticks={yTicks} y={y} format={(v) => fmtNum(v, yTickDigits)} unit={yUnit} cells={cells} />
       {(opts.refLines ?? []).map((r) => (
         <g key={r.label}>
@@ -136,7 +156,7 @@ export function LinePlot({
           s.mode === "points" || s.points.length === 0 ? null : (
             <path
               key={s.id}
-              d={s.points.map((p, k) => `${k ? "L" : "M"}${canvasX(x(p.x))},${px(y(p.y))}`).join("")}
+              d={linePath(s.points.map((p) => ({ xPct: x(p.x), y: y(p.y) })))}
               fill="none"
               stroke={styles[i]?.color}
               strokeWidth={2}

@@ -4,26 +4,35 @@
 // draw this one component.
 import { scaleLinear } from "@visx/scale";
 import { seriesStyle } from "../palette";
-import { GUTTER, XAxis, YGrid, canvasX, fmtNum, px, tickDigits } from "./kit";
+import type { Quantity } from "@/lib/units";
+import { GUTTER, UnitTspan, XAxis, YGrid, fmtNum, linePath, px, tickDigits } from "./kit";
 
 /** One reading of a log: time (s), voltage (V, per cell or per pack as the drawing's title says), current (A)
  * and pack temperature (°C); a panel is drawn for current and temperature only when the log has them. */
 export type LogPoint = { s: number; v: number; a: number | null; t: number | null };
 
-type Panel = { key: "v" | "a" | "t"; title: string; unit?: string; color: string; dash?: string; digits: number };
+type Panel = { key: "v" | "a" | "t"; title: string; unit?: Quantity; color: string; dash?: string; digits: number };
 
 const PANEL_H = 96;
 const GAP = 30;
 const BOTTOM = 44;
 
-function logPanels(points: LogPoint[], voltageTitle: string): Panel[] {
-  const panels: Panel[] = [{ key: "v", title: voltageTitle, unit: "v", color: seriesStyle(0).color, digits: 2 }];
+function logPanels(points: LogPoint[], perCell: boolean): Panel[] {
+  const panels: Panel[] = [
+    {
+      key: "v",
+      title: perCell ? "Voltage" : "Pack voltage, V",
+      unit: perCell ? "v" : undefined,
+      color: seriesStyle(0).color,
+      digits: 2,
+    },
+  ];
   if (points.some((p) => p.a !== null))
     panels.push({ key: "a", title: "Current, A", color: seriesStyle(1).color, dash: seriesStyle(1).dash, digits: 1 });
   if (points.some((p) => p.t !== null))
     panels.push({
       key: "t",
-      title: "Pack temperature, °C",
+      title: "Pack temperature",
       unit: "temp",
       color: seriesStyle(3).color,
       dash: seriesStyle(3).dash,
@@ -50,7 +59,7 @@ export function logX(points: LogPoint[]) {
 
 export function LogPanels({
   points,
-  voltageTitle = "Voltage per cell, V",
+  perCell = true,
   stopTemperatureC,
   width = "100%",
   x: left,
@@ -60,7 +69,8 @@ export function LogPanels({
   tickCount = 5,
 }: {
   points: LogPoint[];
-  voltageTitle?: string;
+  /** Whether the voltages are per cell (else the pack's). */
+  perCell?: boolean;
   stopTemperatureC?: number | null;
   width?: number | "100%";
   x?: number;
@@ -70,7 +80,7 @@ export function LogPanels({
   cells?: number;
   tickCount?: number;
 }) {
-  const panels = logPanels(points, voltageTitle);
+  const panels = logPanels(points, perCell);
   const height = logHeight(panels.length);
   const time = logTime(points);
   const x = logX(points);
@@ -94,17 +104,21 @@ export function LogPanels({
         const pad = (hi - lo) * 0.08 || 1;
         const y = scaleLinear<number>({ domain: [lo - pad, hi + pad], range: [y0 + PANEL_H, y0 + 8], nice: true });
         const ticks = y.ticks(3);
-        const d = points
-          .flatMap((p) => {
+        const d = linePath(
+          points.flatMap((p) => {
             const v = valueOf(p);
-            return v === null ? [] : [`${canvasX(x(p.s / time.div))},${px(y(v))}`];
-          })
-          .map((xy, k) => `${k ? "L" : "M"}${xy}`)
-          .join("");
+            return v === null ? [] : [{ xPct: x(p.s / time.div), y: y(v) }];
+          }),
+        );
         return (
           <g key={panel.key} data-panel={panel.key}>
             <text x={-GUTTER} y={y0 - 8} fontSize={12} fontWeight={600} fill="currentColor">
               {panel.title}
+              {panel.unit ? (
+                <>
+                  , <UnitTspan q={panel.unit} cells={panel.key === "v" ? cells : undefined} />
+                </>
+              ) : null}
             </text>
             <YGrid
               ticks={ticks}

@@ -28,7 +28,15 @@ function Drawing({ data }: { data: ChartData }) {
   if (data.state.kind === "label-check")
     return <LabelCheckPlot prefix="e" points={data.labelCheck ?? []} rating={SAG_LIMITED_RATING} height={320} />;
   if (data.state.kind === "maker-ranking") return <RankingPlot bars={data.ranking ?? []} />;
-  return <LinePlot prefix="e" series={curveSeries(data.curves ?? [])} {...curvesAxes(360)} yDigits={2} height={300} />;
+  return (
+    <LinePlot
+      prefix="e"
+      series={curveSeries(data.curves ?? [])}
+      {...curvesAxes(360, data.curvesPerPack)}
+      yDigits={2}
+      height={300}
+    />
+  );
 }
 
 export function EmbedDocument({ data, permalink }: { data: ChartData; permalink: string }) {

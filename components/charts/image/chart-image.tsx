@@ -92,7 +92,7 @@ function Plot({ data, box }: { data: ChartData; box: { x: number; y: number; wid
     );
   if (data.state.kind === "maker-ranking")
     return <RankingPlot bars={data.ranking ?? []} tickCount={ticks} compact={box.width < 500} {...box} />;
-  const axes = curvesAxes(box.width);
+  const axes = curvesAxes(box.width, data.curvesPerPack);
   return (
     <LinePlot
       prefix="img"

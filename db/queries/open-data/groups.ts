@@ -104,3 +104,26 @@ export async function listGroupOptions(minResults = 3): Promise<GroupOption[]> {
   const byKey = new Map(cards.map((c) => [c.key, c]));
   return groups.map((g) => ({ ...g, label: groupLabelOf(byKey.get(g.key)) }));
 }
+
+/** What a like-for-like group holds, per maker and pack size: approved results, and those with a label ratio
+ * (the label check and maker ranking draw only those). The chart builder offers only what has data. */
+export type GroupCoverageRow = { group: string; maker: string; cells: number; results: number; rated: number };
+
+export async function listGroupCoverage(minResults = 3): Promise<GroupCoverageRow[]> {
+  const groups = new Set((await listGroups(minResults)).map((g) => g.key));
+  const rows = await db
+    .select({
+      group: results.groupKey,
+      maker: makers.slug,
+      cells: packs.cellsInSeries,
+      results: sql<number>`count(*)::int`,
+      rated: sql<number>`count(${results.labelRatio})::int`,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(eq(results.status, "approved"))
+    .groupBy(results.groupKey, makers.slug, packs.cellsInSeries)
+    .orderBy(results.groupKey, makers.slug, packs.cellsInSeries);
+  return rows.filter((r) => groups.has(r.group));
+}

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
+import { labelForGroupKey } from "@/lib/analysis";
+import { cachedGroupCoverage, cachedGroupOptions, cachedMakers } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
@@ -12,7 +13,9 @@ export const metadata: Metadata = {
 };
 
 export default async function NewChartPage() {
-  const [groups, makers] = await Promise.all([cachedGroupOptions(3), cachedMakers()]);
+  const [groups, makers, coverage] = await Promise.all([cachedGroupOptions(3), cachedMakers(), cachedGroupCoverage(3)]);
+  // Only makers with approved results in some offered group.
+  const withData = new Set(coverage.map((c) => c.maker));
   return (
     <div className="space-y-4">
       <h1>Build a chart</h1>
@@ -24,11 +27,13 @@ export default async function NewChartPage() {
         <ChartBuilder
           groups={groups.map((g) => ({
             key: g.key,
-            label: g.label ?? g.key,
+            // In words, always: a group whose card cannot be read back is named from its key.
+            label: g.label ?? labelForGroupKey(g.key) ?? "a like-for-like group without a readable name",
             resultCount: g.resultCount,
             packCount: g.packCount,
           }))}
-          makers={makers.map((m) => ({ slug: m.slug, name: m.name }))}
+          makers={makers.filter((m) => withData.has(m.slug)).map((m) => ({ slug: m.slug, name: m.name }))}
+          coverage={coverage}
         />
       </Suspense>
     </div>

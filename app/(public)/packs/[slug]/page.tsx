@@ -4,7 +4,9 @@ import { z } from "zod";
 import { LineFigure } from "@/components/charts/line-figure";
 import { StaticIsland } from "@/components/static-island";
 import { WatchSlot } from "./_components/watch-slot-client";
-import { fmt, labelSpec, packTitle } from "@/lib/format";
+import { LabelPairNote } from "@/components/label-pair-note";
+import { Qty } from "@/components/quantity";
+import { fmtC, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
 import { GroupFiguresTable } from "./_components/group-figures";
@@ -43,7 +45,8 @@ export default async function PackPage(props: Props) {
         <div className="space-y-1">
           <h1>{title}</h1>
           <p className="num muted">
-            {labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}
+            {labelSpec(pack)} <LabelPairNote burst={pack.labelledBurstC !== null} /> ·{" "}
+            <Qty q="mass" v={pack.weightG} digits={0} /> · {pack.connector}
           </p>
         </div>
         <div className="flex gap-2">
@@ -64,7 +67,7 @@ export default async function PackPage(props: Props) {
           {sustained ? (
             <>
               <span className="num" data-testid="sustained-c">
-                {fmt(sustained.rateC, 1)}C
+                {fmtC(sustained.rateC)}
               </span>{" "}
               <span className="muted">
                 — highest constant-current rate completed to cut-off without passing the stop temperature (
@@ -76,7 +79,12 @@ export default async function PackPage(props: Props) {
           )}
         </p>
         <StaticIsland id="pack-figures">
-          <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
+          <GroupFiguresTable
+            groups={groups}
+            labelledC={pack.labelledContinuousC}
+            ratedMah={pack.ratedCapacityMah}
+            cells={pack.cellsInSeries}
+          />
         </StaticIsland>
       </section>
 
@@ -116,14 +124,14 @@ export default async function PackPage(props: Props) {
       <section aria-labelledby="cycles" className="space-y-3">
         <h2 id="cycles">Over cycles</h2>
         <StaticIsland id="pack-cycles">
-          <CyclesSection cycles={cycles} />
+          <CyclesSection cycles={cycles} cells={pack.cellsInSeries} />
         </StaticIsland>
       </section>
 
       <section aria-labelledby="results" className="space-y-3">
         <h2 id="results">Results ({results.length})</h2>
         <StaticIsland id="pack-results-island">
-          <ResultsList results={results} />
+          <ResultsList results={results} cells={pack.cellsInSeries} />
         </StaticIsland>
       </section>
     </article>

@@ -5,6 +5,17 @@ import { buildDownload } from "@/server/open-data/downloads";
 import { apiGet, corsHeaders, parseQuery } from "@/server/api";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { resultFilters } from "@/lib/validations/open-data";
+import { parseUnitsParam } from "@/lib/units";
+
+const unitsQuery = z.object({
+  units: z
+    .string()
+    .regex(
+      /^(C|F|g|oz|cell|pack)(,(C|F|g|oz|cell|pack))*$/,
+      "units takes C or F, g or oz, cell or pack, comma-separated.",
+    )
+    .optional(),
+});
 
 const fileParam = z.object({
   file: z
@@ -18,7 +29,9 @@ export const GET = apiGet<{ file: string }>(async (req, params) => {
   const dataset = z.enum(DATASETS).parse(name);
   const format = z.enum(["csv", "json"]).parse(ext);
   const filters = parseQuery(req, resultFilters);
-  const out = await buildDownload(dataset, format, filters);
+  // The reader's units for CSV (lib/units.ts): "units=F,oz,pack"; anything else is refused with 422.
+  const units = parseUnitsParam(parseQuery(req, unitsQuery).units);
+  const out = await buildDownload(dataset, format, filters, new Date(), units);
   return new Response(out.body, {
     headers: {
       ...corsHeaders,

@@ -3,7 +3,7 @@ import { fmt } from "@/lib/format";
 import type { CycleSeries } from "@/lib/pack-summary";
 
 /** Capacity kept and resistance over cycles, with the fitted line and where it reaches 80 %. */
-export function CyclesSection({ cycles }: { cycles: CycleSeries | null }) {
+export function CyclesSection({ cycles, cells }: { cycles: CycleSeries | null; cells: number }) {
   if (!cycles)
     return (
       <p className="muted">Not enough results at different cycle counts (under the same method) to draw a trend yet.</p>
@@ -19,7 +19,7 @@ export function CyclesSection({ cycles }: { cycles: CycleSeries | null }) {
     : [];
   const resistance = cycles.points
     .filter((p) => p.dcResistanceMohm !== null)
-    .map((p) => ({ x: p.cycles, y: p.dcResistanceMohm as number }));
+    .map((p) => ({ x: p.cycles, y: Math.round(((p.dcResistanceMohm as number) / cells) * 1000) / 1000 }));
   return (
     <div className="space-y-4">
       <p className="text-sm">
@@ -54,9 +54,11 @@ export function CyclesSection({ cycles }: { cycles: CycleSeries | null }) {
           id="pack-dcr"
           title="DC resistance over cycles"
           xLabel="Cycles before the test"
-          yLabel="DC resistance, mΩ"
+          yLabel="DC resistance"
+          yUnit="r"
+          cells={cells}
           xDigits={0}
-          yDigits={1}
+          yDigits={2}
           tableCaption="DC resistance over cycles"
           series={[{ id: "r", label: "measured", points: resistance, mode: "points", styleIndex: 2 }]}
         />

@@ -1,9 +1,16 @@
 import { MethodCard } from "@/components/method-card";
-import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import { Qty } from "@/components/quantity";
+import { fmt, fmtC, fmtDate, fmtRatio } from "@/lib/format";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 /** The pack's published results, newest first, each with its method card. */
-export function ResultsList({ results }: { results: (PublicResultRow & { groupLabel: string })[] }) {
+export function ResultsList({
+  results,
+  cells,
+}: {
+  results: (PublicResultRow & { groupLabel: string })[];
+  cells: number;
+}) {
   const list = [...results].sort((a, b) => (b.publishedAt ?? "").localeCompare(a.publishedAt ?? "") || b.id - a.id);
   if (list.length === 0) return <p className="muted">No published results yet.</p>;
   return (
@@ -23,8 +30,9 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
           </div>
           <p className="muted text-xs">{r.groupLabel}</p>
           <p className="num text-sm">
-            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmt(r.sagLimitedC, 1, "C")}{" "}
-            sag-limited · DC {fmt(r.dcResistanceMohm, 1, "mΩ")}
+            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmtC(r.sagLimitedC)}{" "}
+            sag-limited · DC{" "}
+            <Qty q="r" v={r.dcResistanceMohm === null ? null : r.dcResistanceMohm / cells} digits={2} cells={cells} />
           </p>
           <details>
             <summary className="cursor-pointer text-sm">Method card</summary>

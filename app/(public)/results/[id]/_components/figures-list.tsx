@@ -1,9 +1,10 @@
+import { Qty } from "@/components/quantity";
 import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { Figures } from "@/lib/analysis";
 
 /** Every figure computed from the log, with its unit; missing ones show "—". */
 export function FiguresList({ f }: { f: Figures }) {
-  const rows: [string, string, string?][] = [
+  const rows: [string, React.ReactNode, React.ReactNode?][] = [
     ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
     ["Capacity ratio", fmt(f.capacityRatio, 2), "delivered ÷ rated"],
     ["Delivered energy", fmt(f.energyWh, 2, "Wh")],
@@ -22,14 +23,18 @@ export function FiguresList({ f }: { f: Figures }) {
     [
       "DC resistance at 25 °C",
       fmt(f.resistanceAt25CMohm, 1, "mΩ"),
-      `estimate from ${fmt(f.resistanceTemperatureC, 1, "°C")}: ${RESISTANCE_25C_SOURCE}`,
+      <>
+        estimate from <Qty q="temp" v={f.resistanceTemperatureC} digits={1} />: {RESISTANCE_25C_SOURCE}
+      </>,
     ],
     ["Sag-limited C", fmt(f.sagLimitedC, 1, "C"), "from the DC resistance; see methods"],
     ["Label ratio", fmt(f.labelRatio, 2), "measured C ÷ labelled C"],
     [
       "Temperature rise",
-      fmt(f.temperatureRiseC, 1, "°C"),
-      `${fmt(f.startTemperatureC, 1, "°C")} → ${fmt(f.peakTemperatureC, 1, "°C")}`,
+      <Qty key="r" q="dtemp" v={f.temperatureRiseC} digits={1} />,
+      <>
+        <Qty q="temp" v={f.startTemperatureC} digits={1} /> → <Qty q="temp" v={f.peakTemperatureC} digits={1} />
+      </>,
     ],
     ["Time to cut-off", fmt(f.timeToCutoffS, 0, "s")],
     [
