@@ -9,8 +9,8 @@ type Change = (patch: Partial<PackParams>, mode?: "push" | "replace") => void;
 const input = "input w-full";
 
 /**
- * A text or number box that commits a moment after the reader stops typing, and follows the URL (back
- * button) while it is not being edited.
+ * A text or number box that commits a moment after the reader stops typing, and otherwise shows the URL
+ * (the back button included).
  */
 function SyncedInput({
   value,
@@ -22,10 +22,10 @@ function SyncedInput({
   "value" | "onChange"
 >) {
   const [draft, setDraft] = useState(value);
-  const ref = useRef<HTMLInputElement>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  // The URL is the truth: the box shows it, except while what was typed here has not been committed yet.
   useEffect(() => {
-    if (document.activeElement !== ref.current) setDraft(value);
+    if (!timer.current) setDraft(value);
   }, [value]);
   useEffect(
     () => () => {
@@ -35,7 +35,6 @@ function SyncedInput({
   );
   return (
     <input
-      ref={ref}
       {...rest}
       value={draft}
       className={input}
@@ -43,7 +42,10 @@ function SyncedInput({
         const v = e.target.value;
         setDraft(v);
         if (timer.current) clearTimeout(timer.current);
-        timer.current = setTimeout(() => commit(v), ms);
+        timer.current = setTimeout(() => {
+          timer.current = null;
+          commit(v);
+        }, ms);
       }}
     />
   );

@@ -3,14 +3,14 @@
 // moment, merges its patch in and writes it back (history.pushState, or replaceState while a search is refined),
 // so changes made in quick succession build on each other and never on an older render. The unfiltered first
 // page is the server's static island; any other page comes from the public API and is drawn by the same markup.
-import { useEffect, useState, useSyncExternalStore, type ReactNode } from "react";
+import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from "react";
 import {
+  PACK_SORT_KEYS,
   PAGE_SIZES,
   isDefaultPackParams,
   readPackParams,
   writePackParams,
   type PackParams,
-  type PackSortKey,
 } from "@/lib/pack-query-params";
 import { PackFilters } from "./pack-filters";
 import { PACK_COLUMNS, PackTable } from "./pack-table";
@@ -34,7 +34,7 @@ const useCanonicalQuery = () =>
   );
 
 /** Merges a patch into the URL as it is now; refining a search word by word replaces the entry. */
-export function changeFilters(patch: Partial<PackParams>, mode: "push" | "replace" = "push") {
+function changeFilters(patch: Partial<PackParams>, mode: "push" | "replace" = "push") {
   const now = new URLSearchParams(window.location.search);
   const base = readPackParams(now);
   const next = { ...base, ...patch };
@@ -51,13 +51,18 @@ export function changeFilters(patch: Partial<PackParams>, mode: "push" | "replac
 
 type Fetched = { key: string; page: ApiPackPage | null; error: string | null };
 
-function onTableClick(e: React.MouseEvent) {
+/** The first click in the server's table swaps it for the client's: the same control there takes the focus. */
+let refocusIndex: number | null = null;
+
+function onTableClick(e: React.MouseEvent<HTMLElement>) {
   const el = (e.target as Element).closest<HTMLButtonElement>(
     "button[data-sort], button[data-page], button[data-clear]",
   );
   if (!el || el.disabled) return;
+  if (el.closest("[data-k]")) refocusIndex = [...e.currentTarget.querySelectorAll("button")].indexOf(el);
   const d = el.dataset;
-  if (d.sort) changeFilters({ sort: d.sort as PackSortKey, dir: d.dir === "desc" ? "desc" : "asc", page: 1 });
+  const sort = PACK_SORT_KEYS.find((k) => k === d.sort);
+  if (sort) changeFilters({ sort, dir: d.dir === "desc" ? "desc" : "asc", page: 1 });
   else if (d.page) changeFilters({ page: Number(d.page) });
   else
     changeFilters({
@@ -82,9 +87,13 @@ export function PacksClient({ first, options }: { first: ReactNode; options: Fil
   const isDefault = isDefaultPackParams(params);
   const [fetched, setFetched] = useState<Fetched>({ key: "", page: null, error: null });
   const [hidden, setHidden] = useState<string[]>(["capacityRatio"]);
+  // The server's first page shows until the reader filters; back on the defaults, the API answers like for any page.
+  const [filtered, setFiltered] = useState(false);
+  if (!isDefault && !filtered) setFiltered(true);
+  const island = isDefault && !filtered;
 
   useEffect(() => {
-    if (isDefault) return;
+    if (island) return;
     const ctrl = new AbortController();
     fetch(`/api/v1/packs?${canonical}`, { signal: ctrl.signal, headers: { Accept: "application/json" } })
       .then(async (res) => {
@@ -101,9 +110,15 @@ export function PacksClient({ first, options }: { first: ReactNode; options: Fil
         setFetched({ key: canonical, page: null, error: err instanceof Error ? err.message : String(err) });
       });
     return () => ctrl.abort();
-  }, [canonical, isDefault]);
+  }, [canonical, island]);
 
-  const loading = !isDefault && fetched.key !== canonical;
+  const loading = !island && fetched.key !== canonical;
+  const tableBox = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (island || refocusIndex === null) return;
+    tableBox.current?.querySelectorAll("button")[refocusIndex]?.focus();
+    refocusIndex = null;
+  }, [island]);
   const suggested = options.groups[0] ?? null;
   return (
     <div className="space-y-4">
@@ -151,10 +166,10 @@ export function PacksClient({ first, options }: { first: ReactNode; options: Fil
         </details>
       </div>
       {/* The hidden columns are a class on the wrapper, so the static island obeys them as well. */}
-      <div onClick={onTableClick} className={hidden.map((h) => `hide-${h}`).join(" ")}>
-        {/* The island stays mounted (hidden) while a filtered page shows: it holds the first page's markup. */}
-        <div hidden={!isDefault}>{first}</div>
-        {isDefault ? null : (
+      <div ref={tableBox} onClick={onTableClick} className={hidden.map((h) => `hide-${h}`).join(" ")}>
+        {island ? (
+          first
+        ) : (
           <PackTable
             page={fetched.key === canonical && fetched.page ? fetched.page : emptyPage(params)}
             params={params}
