@@ -6,7 +6,7 @@ import { parseUnitsParam, writeUnitsParam } from "../units";
 export const CHART_KINDS = ["label-check", "curves", "maker-ranking"] as const;
 export type ChartKind = (typeof CHART_KINDS)[number];
 export const CHART_KIND_LABELS: Record<ChartKind, string> = {
-  "label-check": "Label check (labelled C against measured C)",
+  "label-check": "Label check (labelled C against sag-limited C)",
   curves: "Discharge curves overlay",
   "maker-ranking": "Maker ranking (median label ratio)",
 };
