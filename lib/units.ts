@@ -5,10 +5,10 @@
 // ounce (avoirdupois) = 2.834 952 E+01 g (exactly 28.349 523 125 g); degree Fahrenheit:
 // t/°C = (t/°F − 32)/1.8, and a temperature difference of 1 °F = 1/1.8 K = 1/1.8 °C.
 
-export type TemperatureUnit = "C" | "F";
-export type MassUnit = "g" | "oz";
+type TemperatureUnit = "C" | "F";
+type MassUnit = "g" | "oz";
 /** Voltages and resistances of a pack in series: per cell (pack ÷ cells) or for the whole pack. */
-export type Basis = "cell" | "pack";
+type Basis = "cell" | "pack";
 export type UnitPrefs = { temperature: TemperatureUnit; mass: MassUnit; basis: Basis };
 
 /** What pages are rendered in. */
@@ -27,7 +27,7 @@ export const ouncesToGrams = (oz: number) => oz * GRAMS_PER_OUNCE;
  * temp — a temperature, °C; dtemp — a temperature difference (rise), °C; mass — grams;
  * v — a voltage per cell, V; r — a resistance per cell, mΩ. (v and r need the pack's cells in series.)
  */
-export const QUANTITIES = ["temp", "dtemp", "mass", "v", "r"] as const;
+const QUANTITIES = ["temp", "dtemp", "mass", "v", "r"] as const;
 export type Quantity = (typeof QUANTITIES)[number];
 export const isQuantity = (q: string | undefined): q is Quantity => (QUANTITIES as readonly string[]).includes(q ?? "");
 

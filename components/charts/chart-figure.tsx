@@ -18,7 +18,7 @@ type TableRow = {
 };
 /** A column header; one with a quantity gets its unit symbol, and its whole column is converted for the
  * reader's units (components/units/apply-units.ts reads the numbers from the cells). */
-export type TableColumn = string | { label: string; u: Quantity; s?: number };
+type TableColumn = string | { label: string; u: Quantity; s?: number };
 export type ChartTableData = { caption: string; columns: TableColumn[]; rows: TableRow[] };
 export type LegendItem = {
   label: string;

@@ -16,7 +16,7 @@ function remembered(): string {
 }
 
 /** The units parameter in force on this page ("" for the defaults). */
-export function currentUnitsParam(): string {
+function currentUnitsParam(): string {
   const fromUrl = new URLSearchParams(window.location.search).get("units");
   return writeUnitsParam(parseUnitsParam(fromUrl ?? remembered()));
 }
@@ -65,8 +65,4 @@ function subscribe(onChange: () => void) {
 export function useUnits(): UnitPrefs {
   const param = useSyncExternalStore(subscribe, currentUnitsParam, () => "");
   return param ? parseUnitsParam(param) : DEFAULT_UNITS;
-}
-
-export function onUnitsChange(fn: () => void): () => void {
-  return subscribe(fn);
 }
