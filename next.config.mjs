@@ -31,6 +31,10 @@ const securityHeaders = [
   { key: "Content-Security-Policy", value: csp("'none'") },
 ];
 const embedHeaders = [...common, { key: "Content-Security-Policy", value: csp("*") }];
+// Chart pages and embeds are drawn per request (app/(public)/charts/view, app/embed/chart): shared caches may
+// keep them an hour and serve them stale a day while refreshing; browsers check again each time. Next.js
+// keeps a Cache-Control set here instead of its own no-store for dynamic pages (send-payload.js).
+const chartCache = [{ key: "Cache-Control", value: "public, max-age=0, s-maxage=3600, stale-while-revalidate=86400" }];
 
 // npm test builds into its own folder (.next-test) so it never replaces the files a running `npm start` serves.
 const distDir = process.env.NEXT_DIST_DIR || ".next";
@@ -44,7 +48,8 @@ const nextConfig = {
   typedRoutes: false,
   serverExternalPackages: ["pg", "nodemailer", "s3rver", "smtp-server", "mailparser", "@resvg/resvg-js"],
   // authInterrupts: forbidden() renders app/forbidden.tsx with a real 403 status.
-  experimental: { serverActions: { bodySizeLimit: "60mb" }, authInterrupts: true },
+  // Server actions take form fields and small JSON only (uploads stream through /api/v1/uploads/*): 1 MB.
+  experimental: { serverActions: { bodySizeLimit: "1mb" }, authInterrupts: true },
   async headers() {
     return [
       // Embeds are the only routes other sites may frame.
@@ -53,6 +58,8 @@ const nextConfig = {
         source: "/embed/:path*",
         headers: embedHeaders,
       },
+      { source: "/charts/view/:path+", headers: chartCache },
+      { source: "/embed/chart/:path+", headers: chartCache },
     ];
   },
 };

@@ -14,6 +14,7 @@ export type PackLabelFields = {
 export type PackSummary = {
   id: number;
   slug: string;
+  makerId: number;
   model: string;
   makerName: string;
   makerSlug: string;

@@ -4,14 +4,9 @@
 export const userRoles = ["contributor", "moderator", "admin"] as const;
 export type UserRole = (typeof userRoles)[number];
 
-export const reviewStatuses = [
-  "pending",
-  "changes_requested",
-  "approved",
-  "rejected",
-  "withdrawn",
-  "disputed",
-] as const;
+// A reader's flag never changes a result's status: it opens a case (an open row in reader_flags) that
+// moderators resolve, and the result stays approved and counted until they decide.
+export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn"] as const;
 export type ReviewStatus = (typeof reviewStatuses)[number];
 
 export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;

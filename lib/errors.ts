@@ -33,7 +33,7 @@ export class AppError extends Error {
   }
 }
 
-export function fieldErrorsOf(err: ZodError): FieldErrors {
+function fieldErrorsOf(err: ZodError): FieldErrors {
   const out: FieldErrors = {};
   for (const issue of err.issues) {
     const key = issue.path.length ? issue.path.join(".") : "_form";

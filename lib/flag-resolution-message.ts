@@ -11,12 +11,14 @@ export type ResolvedFlag = {
   status: ReviewStatus;
   /** Other open flags on the same result closed with this one (only a withdrawal closes them). */
   alsoClosed: number;
+  /** Open flags left on the result after this one. */
+  stillOpen: number;
 };
 
 const how: Record<ResolvedFlag["resolution"], string> = {
-  kept: "result kept",
-  corrected: "result corrected",
-  withdrawn: "result withdrawn",
+  kept: "dismissed, result kept",
+  corrected: "dismissed, correction noted",
+  withdrawn: "result taken out of publication",
 };
 
 export function flagResolutionMessage(r: ResolvedFlag, packTitle?: string): string {
@@ -28,14 +30,9 @@ export function flagResolutionMessage(r: ResolvedFlag, packTitle?: string): stri
       : r.alsoClosed > 1
         ? ` ${r.alsoClosed} other open flags on it were closed with this one.`
         : "";
-  switch (r.status) {
-    case "approved":
-      return `${head} It is published again and no longer shows as disputed.`;
-    case "withdrawn":
-      return `${head} It is withdrawn; it and its history stay in the audit log.${others}`;
-    case "disputed":
-      return `${head} Other flags on it are still open, so it still shows as disputed.`;
-    default:
-      return head;
-  }
+  if (r.status === "withdrawn") return `${head} It is withdrawn; it and its history stay in the audit log.${others}`;
+  if (r.status !== "approved") return head;
+  if (r.stillOpen === 0) return `${head} It stays published and counted, and no longer shows an open check.`;
+  const left = r.stillOpen === 1 ? "1 other flag on it is" : `${r.stillOpen} other flags on it are`;
+  return `${head} It stays published and counted; ${left} still open.`;
 }

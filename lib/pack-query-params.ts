@@ -1,22 +1,12 @@
-// The packs table's state as URL search params, shared by the /packs page, its client and the public API.
-// No zod here on purpose: this file reaches the browser, and the page must turn bad params into sensible
-// defaults (the API validates strictly with lib/validations/pack-query.ts and answers 422).
-export const PACK_SORT_KEYS = [
-  "maker",
-  "model",
-  "cells",
-  "capacity",
-  "labelledC",
-  "weight",
-  "connector",
-  "results",
-  "measuredC",
-  "labelRatio",
-  "capacityRatio",
-] as const;
-export type PackSortKey = (typeof PACK_SORT_KEYS)[number];
-export const PAGE_SIZES = [10, 25, 50, 100] as const;
-export const DEFAULT_PAGE_SIZE = 25;
+// The packs table's state as URL search params, read with the one packs-list contract
+// (lib/api-contract/queries.ts: GET /api/v1/packs validates strictly and answers 422). The /packs page reads the
+// same schema leniently: each parameter is checked on its own with its own schema, and an unreadable one falls
+// back to its default, so a hand-edited URL still shows a table.
+import type { z } from "zod";
+import { PACK_SORT_KEYS, packListShape, type PackSortKey } from "@/lib/api-contract/queries";
+import { DEFAULT_PAGE_SIZE, PAGE_SIZES } from "@/lib/api-contract/params";
+
+export { PACK_SORT_KEYS, PAGE_SIZES, type PackSortKey };
 
 export type PackParams = {
   q: string;
@@ -55,40 +45,42 @@ export const DEFAULT_PACK_PARAMS: PackParams = {
 };
 
 const NUMBER_PARAMS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG"] as const;
+const TEXT_PARAMS = ["connector", "maker", "group"] as const;
 
-const SLUG = /^[a-z0-9-]{1,80}$/;
-const GROUP = /^[a-z0-9._-]{3,120}$/;
-
-function num(v: string | null, min: number, max: number, integer: boolean): number | null {
-  if (v === null || v.trim() === "") return null;
-  const n = Number(v);
-  if (!Number.isFinite(n) || n < min || n > max || (integer && !Number.isInteger(n))) return null;
-  return n;
+/** One parameter through its own schema; undefined when absent or unreadable. */
+function field<T>(sp: URLSearchParams, key: keyof typeof packListShape, schema: z.ZodType<T | undefined>) {
+  const raw = sp.get(key);
+  if (raw === null || raw.trim() === "") return undefined;
+  const parsed = schema.safeParse(raw);
+  return parsed.success ? parsed.data : undefined;
 }
 
 /** Lenient: anything unreadable falls back to its default. */
 export function readPackParams(sp: URLSearchParams): PackParams {
-  const sort = sp.get("sort");
-  const size = Number(sp.get("size"));
-  const connector = sp.get("connector");
-  const maker = sp.get("maker");
-  const group = sp.get("group");
+  const p: PackParams = { ...DEFAULT_PACK_PARAMS, q: (sp.get("q") ?? "").slice(0, 100) };
+  for (const k of NUMBER_PARAMS) p[k] = field(sp, k, packListShape[k]) ?? null;
+  for (const k of TEXT_PARAMS) p[k] = field(sp, k, packListShape[k]) ?? null;
+  p.sort = field(sp, "sort", packListShape.sort) ?? DEFAULT_PACK_PARAMS.sort;
+  p.dir = field(sp, "dir", packListShape.dir) ?? DEFAULT_PACK_PARAMS.dir;
+  p.page = field(sp, "page", packListShape.page) ?? 1;
+  p.size = field(sp, "size", packListShape.size) ?? DEFAULT_PAGE_SIZE;
+  return p;
+}
+
+/** The strict query's output as the table's state (absent filters are null). */
+export function toPackParams(v: {
+  [K in keyof PackParams]?: PackParams[K] extends infer T ? Exclude<T, null> : never;
+}): PackParams {
+  const p: PackParams = { ...DEFAULT_PACK_PARAMS };
+  for (const k of NUMBER_PARAMS) p[k] = v[k] ?? null;
+  for (const k of TEXT_PARAMS) p[k] = v[k] ?? null;
   return {
-    q: (sp.get("q") ?? "").slice(0, 100),
-    cells: num(sp.get("cells"), 1, 14, true),
-    minMah: num(sp.get("minMah"), 0, 100_000, false),
-    maxMah: num(sp.get("maxMah"), 0, 100_000, false),
-    minC: num(sp.get("minC"), 0, 1000, false),
-    maxC: num(sp.get("maxC"), 0, 1000, false),
-    minG: num(sp.get("minG"), 0, 100_000, false),
-    maxG: num(sp.get("maxG"), 0, 100_000, false),
-    connector: connector && connector.length <= 30 ? connector : null,
-    maker: maker && SLUG.test(maker) ? maker : null,
-    group: group && GROUP.test(group) ? group : null,
-    sort: (PACK_SORT_KEYS as readonly string[]).includes(sort ?? "") ? (sort as PackSortKey) : "maker",
-    dir: sp.get("dir") === "desc" ? "desc" : "asc",
-    page: num(sp.get("page"), 1, 100_000, true) ?? 1,
-    size: (PAGE_SIZES as readonly number[]).includes(size) ? size : DEFAULT_PAGE_SIZE,
+    ...p,
+    q: v.q ?? "",
+    sort: v.sort ?? DEFAULT_PACK_PARAMS.sort,
+    dir: v.dir ?? DEFAULT_PACK_PARAMS.dir,
+    page: v.page ?? 1,
+    size: v.size ?? DEFAULT_PAGE_SIZE,
   };
 }
 
@@ -100,9 +92,10 @@ export function writePackParams(p: PackParams): URLSearchParams {
     const v = p[k];
     if (v !== null) sp.set(k, String(v));
   }
-  if (p.connector) sp.set("connector", p.connector);
-  if (p.maker) sp.set("maker", p.maker);
-  if (p.group) sp.set("group", p.group);
+  for (const k of TEXT_PARAMS) {
+    const v = p[k];
+    if (v) sp.set(k, v);
+  }
   if (p.sort !== DEFAULT_PACK_PARAMS.sort || p.dir !== DEFAULT_PACK_PARAMS.dir) {
     sp.set("sort", p.sort);
     sp.set("dir", p.dir);

@@ -1,6 +1,7 @@
-// Filters, fuzzy search (Fuse.js over maker and model), sorting and paging of the pack catalogue. Runs on
-// the server (API and the first page of /packs) over the cached catalogue — thousands of rows at most —
-// so the browser never downloads the search index.
+// The one pack filter: the packs table's filters, fuzzy search (Fuse.js over maker and model), sorting and
+// paging of the pack catalogue. Runs on the server over the cached catalogue — thousands of rows at most — for
+// /packs, GET /api/v1/packs and the packs download; the results and group lists and their downloads take the ids
+// of the packs it matches (server/open-data/pack-filter.ts), so a filter or `q` means the same everywhere.
 import Fuse from "fuse.js";
 import type { PackRow } from "@/lib/catalogue";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
@@ -24,7 +25,7 @@ const sortValue: Record<PackSortKey, (r: PackRow) => string | number | null> = {
 const within = (v: number | null, min: number | null, max: number | null) =>
   (min === null || (v !== null && v >= min)) && (max === null || (v !== null && v <= max));
 
-function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
+function filterPacks<R extends PackRow>(rows: R[], p: PackParams): R[] {
   return rows.filter(
     (r) =>
       (p.cells === null || r.cellsInSeries === p.cells) &&
@@ -43,7 +44,7 @@ function filterPacks(rows: PackRow[], p: PackParams): PackRow[] {
  * word must match somewhere in "maker model" (Fuse's extended search: a space means AND); Fuse's operator
  * characters are dropped from the reader's text so they search as plain words.
  */
-function searchPacks(rows: PackRow[], q: string): PackRow[] {
+function searchPacks<R extends PackRow>(rows: R[], q: string): R[] {
   const query = q
     .replace(/[\^!'=$|"]/g, " ")
     .replace(/\s+/g, " ")
@@ -58,7 +59,7 @@ function searchPacks(rows: PackRow[], q: string): PackRow[] {
   return fuse.search(query).map((m) => m.item);
 }
 
-export function sortPacks(rows: PackRow[], key: PackSortKey, dir: "asc" | "desc"): PackRow[] {
+export function sortPacks<R extends PackRow>(rows: R[], key: PackSortKey, dir: "asc" | "desc"): R[] {
   const get = sortValue[key];
   const sign = dir === "asc" ? 1 : -1;
   return [...rows].sort((a, b) => {
@@ -73,18 +74,27 @@ export function sortPacks(rows: PackRow[], key: PackSortKey, dir: "asc" | "desc"
   });
 }
 
-export function queryPacks(rows: PackRow[], p: PackParams): PackPage {
+/** Every pack matching the filters and the search, in the table's order (relevance first for a search on the
+ * default sort). */
+export function matchPacks<R extends PackRow>(rows: R[], p: PackParams): R[] {
   const filtered = filterPacks(rows, p);
   // A text search orders by relevance unless the reader picked a column to sort by.
   const searched = searchPacks(filtered, p.q);
-  const sorted = p.q.trim() && p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
-  const pageCount = Math.max(1, Math.ceil(sorted.length / p.size));
-  const page = Math.min(p.page, pageCount);
+  return p.q.trim() && p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
+}
+
+export function pageCountOf(total: number, size: number): number {
+  return Math.max(1, Math.ceil(total / size));
+}
+
+/** One page of the matching packs. A page past the last is empty (the API answers 422 for it). */
+export function queryPacks(rows: PackRow[], p: PackParams): PackPage {
+  const sorted = matchPacks(rows, p);
   return {
-    rows: sorted.slice((page - 1) * p.size, page * p.size),
+    rows: sorted.slice((p.page - 1) * p.size, p.page * p.size),
     total: sorted.length,
-    page,
-    pageCount,
+    page: p.page,
+    pageCount: pageCountOf(sorted.length, p.size),
     size: p.size,
   };
 }

@@ -9,7 +9,8 @@ export type Summary = NonNullable<ReturnType<typeof summarise>>;
 export type PublicResultRow = {
   id: number;
   packId: number;
-  status: "approved" | "disputed";
+  /** A reader asked moderators to check it and they have not decided yet (it still counts meanwhile). */
+  openCase: boolean;
   groupKey: string;
   ratedCapacityMah: number;
   ambientTemperatureC: number;
@@ -55,9 +56,10 @@ export type SummaryFigure = (typeof SUMMARY_FIGURES)[number];
 
 export type GroupFigures = {
   group: DescribedGroup;
-  /** Published results in the group (approved and disputed). */
+  /** Published results in the group. */
   n: number;
-  disputed: number;
+  /** Of those, results a reader asked moderators to check (still counted until they decide). */
+  openCases: number;
   figures: Record<SummaryFigure, Summary | null>;
   /** Sustained C inside this group, from approved results only. */
   sustainedC: number | null;
@@ -92,13 +94,12 @@ export function summariseFigures(rows: PublicResultRow[]): Record<SummaryFigure,
 
 /**
  * Sustained C: the highest constant-current rate completed to cut-off without passing the stop
- * temperature, from approved results (disputed ones do not count until resolved).
+ * temperature, from published (approved) results — one with an open reader case counts until moderators decide.
  */
 export function sustainedC(rows: PublicResultRow[]): { rateC: number; resultId: number } | null {
   let best: { rateC: number; resultId: number } | null = null;
   for (const r of rows) {
-    if (r.status !== "approved" || r.loadMode !== "constant-current" || !r.reachedCutoff || r.passedStopTemperature)
-      continue;
+    if (r.loadMode !== "constant-current" || !r.reachedCutoff || r.passedStopTemperature) continue;
     if (!best || r.loadRateC > best.rateC) best = { rateC: r.loadRateC, resultId: r.id };
   }
   return best;
@@ -115,7 +116,7 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
     out.push({
       group: { ...describeResultGroup(first), key: first.groupKey },
       n: list.length,
-      disputed: list.filter((r) => r.status === "disputed").length,
+      openCases: list.filter((r) => r.openCase).length,
       figures: summariseFigures(list),
       sustainedC: sustainedC(list)?.rateC ?? null,
     });
@@ -134,12 +135,11 @@ export type CycleSeries = {
 /**
  * Capacity and resistance over cycles. Ageing moves a result into another age band, so the series takes
  * results that share every group part except age (same method, ambient, cut-off and rate) — the series
- * with the most distinct cycle counts. Only approved results; null when no series has two cycle counts.
+ * with the most distinct cycle counts. Published results only (the rows are); null when no series has two cycle counts.
  */
 export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
   const series = new Map<string, { label: string; rows: PublicResultRow[] }>();
   for (const r of rows) {
-    if (r.status !== "approved") continue;
     const g = describeResultGroup(r);
     const k = keyWithoutAge(g);
     const label = [g.parts.resistance.label, g.parts.ambient.label, g.parts.cutoff.label, g.parts.rate.label].join(

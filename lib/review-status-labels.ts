@@ -7,7 +7,6 @@ export const reviewStatusLabels: Record<ReviewStatus, string> = {
   approved: "Approved",
   rejected: "Rejected",
   withdrawn: "Withdrawn",
-  disputed: "Disputed",
 };
 
 // Words for the reasons stored on review events (reject reasons, reader flags and their resolutions).
@@ -18,5 +17,5 @@ export const reviewReasonLabels: Record<string, string> = {
   "reader-flag": "Flagged by a reader",
   "flag-kept": "Flag resolved: kept",
   "flag-corrected": "Flag resolved: corrected",
-  "flag-withdrawn": "Flag resolved: withdrawn",
+  "flag-withdrawn": "Taken out of publication after a reader's flag",
 };

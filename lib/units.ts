@@ -100,7 +100,11 @@ export function writeUnitsParam(prefs: UnitPrefs): string {
 export const isDefaultUnits = (prefs: UnitPrefs) => writeUnitsParam(prefs) === "";
 
 /** A CSV column of the SI download, in the reader's units: the column keeps its unit in its name. */
-export type UnitColumn<R> = { name: string; value: (row: R) => string | number | boolean | null | undefined };
+export type UnitColumn<R> = {
+  name: string;
+  digits?: number;
+  value: (row: R) => string | number | boolean | null | undefined;
+};
 
 /**
  * The download's columns in the reader's units. Columns are recognised by the unit their name ends in
@@ -111,30 +115,37 @@ export function convertColumns<R, C extends UnitColumn<R>>(
   columns: C[],
   prefs: UnitPrefs,
   cellsOf?: (row: R) => number | null | undefined,
-): (C | UnitColumn<R>)[] {
+): C[] {
   const num = (v: unknown) => (typeof v === "number" && Number.isFinite(v) ? v : null);
-  return columns.map((c): C | UnitColumn<R> => {
+  // Each converted column keeps everything else of the SI one (type, description, …) and states its rounding.
+  return columns.map((c): C => {
     const rise = /RiseC$/.test(c.name);
     if (prefs.temperature === "F" && /(Temperature|Rise)C$/.test(c.name))
       return {
+        ...c,
         name: c.name.replace(/C$/, "F"),
-        value: (r) => {
+        digits: 2,
+        value: (r: R) => {
           const v = num(c.value(r));
           return v === null ? c.value(r) : round(convert(rise ? "dtemp" : "temp", v, prefs), 2);
         },
       };
     if (prefs.mass === "oz" && /[a-z]G$/.test(c.name))
       return {
+        ...c,
         name: c.name.replace(/G$/, "Oz"),
-        value: (r) => {
+        digits: 3,
+        value: (r: R) => {
           const v = num(c.value(r));
           return v === null ? c.value(r) : round(gramsToOunces(v), 3);
         },
       };
     if (prefs.basis === "pack" && cellsOf && /PerCell(V|Mohm)$/.test(c.name))
       return {
+        ...c,
         name: c.name.replace(/PerCell(V|Mohm)$/, "Pack$1"),
-        value: (r) => {
+        digits: 4,
+        value: (r: R) => {
           const v = num(c.value(r));
           const cells = cellsOf(r);
           return v === null || !cells ? null : round(v * cells, 4);

@@ -40,7 +40,7 @@ const portOpen = (p) =>
     s.on("error", () => resolve(false));
   });
 if (await portOpen(port)) fail(`port ${port} is taken; set BENCH_PORT`);
-const server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+const server = spawn(process.execPath, [path.join(root, "scripts/serve.mjs"), "-H", "127.0.0.1", "-p", String(port)], {
   cwd: root,
   env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", SAGLINE_RATE_LIMITS: "off", APP_URL: base },
   stdio: ["ignore", "ignore", "inherit"],

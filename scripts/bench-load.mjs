@@ -1,5 +1,5 @@
 // npm run bench:load — load figures for the production build on loopback (a script, not a test).
-// Starts `next start` on BENCH_PORT against the local database (npm start must have built and seeded
+// Starts the production server (scripts/serve.mjs) on BENCH_PORT against the local database (npm start must have built and seeded
 // it), then for each route: 50 connections for BENCH_DURATION_S (default 60) s, and 10 connections for
 // BENCH_LATENCY_S (default 20) s. Prints requests/s, p50/p99 latency, errors and each route's
 // throughput as a ratio of a static file served by the same server. Then, for context, each route's exact
@@ -39,7 +39,7 @@ const portOpen = (p) =>
   });
 if (await portOpen(port)) fail(`port ${port} is taken; set BENCH_PORT`);
 
-const server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+const server = spawn(process.execPath, [path.join(root, "scripts/serve.mjs"), "-H", "127.0.0.1", "-p", String(port)], {
   cwd: root,
   env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", SAGLINE_RATE_LIMITS: "off" },
   stdio: ["ignore", "ignore", "inherit"],

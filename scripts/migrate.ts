@@ -4,11 +4,17 @@ import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { Pool } from "pg";
 import path from "node:path";
 import { parseEnv } from "@/server/env";
+import { backfillCurveFingerprints } from "@/db/mutations/curve-fingerprints";
+import * as schema from "@/db/schema";
 
 export async function runMigrations(databaseUrl: string): Promise<void> {
   const pool = new Pool({ connectionString: databaseUrl, max: 1 });
   try {
-    await migrate(drizzle(pool), { migrationsFolder: path.resolve(__dirname, "../db/migrations") });
+    const db = drizzle(pool, { schema });
+    await migrate(db, { migrationsFolder: path.resolve(__dirname, "../db/migrations") });
+    // Results stored before curve fingerprints existed get theirs (a no-op once every curve has one).
+    const filled = await backfillCurveFingerprints(db);
+    if (filled > 0) console.log(`sagline: curve fingerprints computed for ${filled} results`);
   } finally {
     await pool.end();
   }

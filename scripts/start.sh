@@ -18,4 +18,4 @@ rm -rf "$DIST_DIR/cache/fetch-cache"
 node_modules/.bin/next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; fail "next build failed (full log in .run/build.log)"; }
 say "serving on http://localhost:$PORT  (open this address; npm run stop stops everything)"
 echo $$ >"$RUN_DIR/app.pid"
-exec node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"
+exec node scripts/serve.mjs -H 127.0.0.1 -p "$PORT"

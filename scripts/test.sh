@@ -7,6 +7,8 @@
 export SAGLINE_MODE=test
 source "$(dirname "$0")/lib.sh"
 ONLY="${1:-all}"
+# `bash scripts/test.sh e2e tests/e2e/x.spec.ts` passes the rest on to Playwright (one spec while iterating).
+E2E_ARGS=("${@:2}")
 E2E_DB="${E2E_DB:-sagline_e2e}"
 case "$ONLY" in all|unit|integration|e2e) ;; *) fail "usage: scripts/test.sh [all|unit|integration|e2e]" ;; esac
 
@@ -64,10 +66,10 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
     tail -n 40 "$RUN_DIR/build-e2e.log" >&2; status=1; say "next build failed (log in $RUN_DIR/build-e2e.log)"
   else
     port_in_use "$E2E_PORT" && fail "port $E2E_PORT (browser tests) is taken; set TEST_PORT_BASE to move the test world's ports"
-    node_modules/.bin/next start -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
+    node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
     APP_PID=$!
     wait_for_port "$E2E_PORT" 60 || fail "the app did not start for browser tests (see $RUN_DIR/app-e2e.log)"
-    E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test
+    E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${E2E_ARGS[@]}"
   fi
 fi
 

@@ -10,7 +10,7 @@ import { accounts, sessions, users, verificationTokens } from "@/db/schema";
 import { env } from "@/server/env";
 import { sendMail } from "@/server/mail/outbox";
 import { signInLinkMail } from "@/server/mail/templates";
-import { normaliseEmail } from "@/lib/validations/sign-in";
+import { parseSignInEmail } from "@/lib/validations/sign-in";
 
 const SIGN_IN_LINK_MAX_AGE_S = 24 * 60 * 60;
 const SESSION_MAX_AGE_S = 30 * 24 * 60 * 60;
@@ -29,7 +29,9 @@ export const { handlers, signIn, signOut } = NextAuth(() => ({
       server: env().SMTP_URL, // a URL string (STACK.md gotcha 2)
       from: env().MAIL_FROM,
       maxAge: SIGN_IN_LINK_MAX_AGE_S,
-      normalizeIdentifier: normaliseEmail,
+      // The same one-address rule as the sign-in form and the route (lib/validations/sign-in.ts): a list or
+      // a display-name form throws here, so Auth.js sends nothing.
+      normalizeIdentifier: parseSignInEmail,
       // Through the outbox: if the relay is down the link is queued and retried, and its body is wiped
       // once sent (the token itself is stored hashed by Auth.js).
       async sendVerificationRequest({ identifier, url, expires }) {

@@ -34,6 +34,10 @@ export function authedAction<S extends z.ZodType, T>(
     try {
       const user = await requireUser(permission);
       const raw = payload instanceof FormData ? formDataToObject(payload) : payload;
+      // A hand-made request can call an action with anything (a JSON body decodes to a bare object or a
+      // string): only a form or an object of fields is an input; the rest is a bad request, not a crash.
+      if (raw === null || typeof raw !== "object" || Array.isArray(raw))
+        throw new AppError("bad_request", "Send the form's fields.");
       const input = schema.parse(raw);
       return { ok: true, data: await fn(input, user) };
     } catch (err) {

@@ -10,6 +10,8 @@ export const cacheTags = {
   maker: (slug: string) => `maker:${slug}`,
   group: (key: string) => `group:${key}`,
   result: (id: number) => `result:${id}`,
+  /** The featured charts (/charts and GET /api/v1/charts): featuring or unfeaturing one revalidates it. */
+  charts: "charts",
   /** The site settings (the notice every page shows, the submissions pause). */
   settings: "settings",
 } as const;

@@ -51,6 +51,22 @@ const envObject = z.object({
     .enum(["0", "1"])
     .default("0")
     .transform((v) => v === "1"),
+  // How many proxies in front of the app append to X-Forwarded-For (0: clients connect to the app itself).
+  // The client's address is read that many entries from the right (server/client-address.ts).
+  TRUSTED_PROXY_HOPS: z.coerce
+    .number({ error: "TRUSTED_PROXY_HOPS must be a whole number of proxies" })
+    .int("TRUSTED_PROXY_HOPS must be a whole number of proxies")
+    .min(0, "TRUSTED_PROXY_HOPS must be 0 (no proxy) or more")
+    .max(10, "TRUSTED_PROXY_HOPS must be at most 10")
+    .default(0),
+  // Analyses of logs sent by visitors who are not signed in, running at once in one app process; more
+  // wait for nothing — they get 503 with Retry-After.
+  ANALYSE_MAX_CONCURRENT: z.coerce
+    .number({ error: "ANALYSE_MAX_CONCURRENT must be a whole number" })
+    .int("ANALYSE_MAX_CONCURRENT must be a whole number")
+    .min(1, "ANALYSE_MAX_CONCURRENT must be at least 1")
+    .max(64, "ANALYSE_MAX_CONCURRENT must be at most 64")
+    .default(2),
   // Only for load benchmarks on loopback (scripts/bench-load.mjs): switches the request limits off.
   SAGLINE_RATE_LIMITS: z.enum(["on", "off"]).default("on"),
   LOG_MAX_BYTES: z.coerce

@@ -5,20 +5,15 @@ import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
-import { listGroupCoverage, listGroupOptions, listGroupSamples, listGroups } from "@/db/queries/open-data/groups";
-import {
-  getApiPackBySlug,
-  getMakerBySlug,
-  listAllMakers,
-  listMakersPage,
-  type Page,
-} from "@/db/queries/open-data/packs";
-import { listGroupCurves, listResultsPage } from "@/db/queries/open-data/results";
+import { listFeaturedCharts } from "@/db/queries/open-data/charts";
+import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/groups";
+import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
+import type { PackWhere, ResultWhere } from "@/db/queries/open-data/where";
 import { getPackDetail } from "@/db/queries/pack-detail";
-import { listActivePacks, listPackRows } from "@/db/queries/packs";
+import { listActiveMakers, listActivePacks, listPackRows } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { getSiteSettings } from "@/db/queries/site-settings";
-import type { PackFilters, ResultFilters } from "@/lib/validations/open-data";
+import type { PackFilters, ResultFilters } from "@/lib/api-contract/queries";
 import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/server/cache-tags";
 
 export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.results, t.packs], revalidate });
@@ -73,24 +68,14 @@ export function cachedComparison(slugs: string[], group: string | null) {
   })();
 }
 
-/** Active makers with their active pack counts (/data's download form): catalogue edits and merges revalidate `packs`. */
-export const cachedMakers = unstable_cache(listAllMakers, ["open-data-makers"], { tags: [t.packs], revalidate });
+/** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `packs`. */
+export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], { tags: [t.packs], revalidate });
 
-/** Like-for-like groups with their approved-result counts (/data's download form): every decision revalidates `results`. */
-export function cachedGroupOptions(minResults: number) {
-  return unstable_cache(() => listGroupOptions(minResults), ["group-options", String(minResults)], {
-    tags: [t.results, t.packs],
-    revalidate,
-  })();
-}
-
-/** Per group, maker and pack size, how many approved results (the chart builder offers only what has data). */
-export function cachedGroupCoverage(minResults: number) {
-  return unstable_cache(() => listGroupCoverage(minResults), ["group-coverage", String(minResults)], {
-    tags: [t.results, t.packs],
-    revalidate,
-  })();
-}
+/** Per group, maker and pack size, how many published results (the chart builder offers only what has data). */
+export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-coverage"], {
+  tags: [t.results, t.packs],
+  revalidate,
+});
 
 // ── The public API's reads (app/api/v1) and chart data. Filters are validated by zod before they reach here.
 // The cache keeps one entry per key on disk, and anyone can make up queries, so only bounded key spaces are
@@ -110,7 +95,8 @@ function keyOf(value: Record<string, unknown>): string {
   );
 }
 
-async function knownGroup(key: string): Promise<boolean> {
+/** Whether a like-for-like group has published results (unknown groups answer 404 everywhere). */
+export async function knownGroup(key: string): Promise<boolean> {
   return (await cachedGroups()).some((g) => g.key === key);
 }
 
@@ -126,62 +112,47 @@ async function boundedFilters(
   return true;
 }
 
-export function cachedApiMakersPage(page: Page) {
-  if (page.page > CACHED_PAGES) return listMakersPage(page);
-  return unstable_cache(() => listMakersPage(page), ["api-makers", keyOf(page)], { tags: [t.packs], revalidate })();
-}
-
-export async function cachedApiMaker(slug: string) {
-  if (!(await cachedPacks()).some((p) => p.makerSlug === slug)) return getMakerBySlug(slug); // makers without active packs are rare: no entry for them
-  return unstable_cache(() => getMakerBySlug(slug), ["api-maker", slug], {
-    tags: [t.packs, t.maker(slug)],
-    revalidate,
-  })();
-}
-
-export async function cachedApiPack(slug: string) {
-  if (!(await cachedPacks()).some((p) => p.slug === slug)) return getApiPackBySlug(slug);
-  return unstable_cache(() => getApiPackBySlug(slug), ["api-pack", slug], {
-    tags: [t.packs, t.results, t.pack(slug)],
-    revalidate,
-  })();
-}
-
-export async function cachedApiResultsPage(filters: ResultFilters, page: Page) {
-  if (page.page > CACHED_PAGES || !(await boundedFilters(filters))) return listResultsPage(filters, page);
+/** A page of published results; `filters` (as asked) make the cache key, `where` (resolved) the query. */
+export async function cachedApiResultsPage(filters: ResultFilters, where: ResultWhere, page: Page) {
+  if (page.page > CACHED_PAGES || !(await boundedFilters(filters))) return listResultsPage(where, page);
   const tags = [
     t.results,
     t.packs,
     ...(filters.group ? [t.group(filters.group)] : []),
     ...(filters.pack ? [t.pack(filters.pack)] : []),
   ];
-  return unstable_cache(() => listResultsPage(filters, page), ["api-results", keyOf(filters), keyOf(page)], {
+  return unstable_cache(() => listResultsPage(where, page), ["api-results", keyOf(filters), keyOf(page)], {
     tags,
     revalidate,
   })();
 }
 
-export function cachedApiGroups(minResults: number) {
-  return unstable_cache(() => listGroups(minResults), ["api-groups", String(minResults)], {
-    tags: [t.results, t.packs],
-    revalidate,
-  })();
-}
-
-export async function cachedGroupSamples(groupKey: string, filters: PackFilters) {
+export async function cachedGroupSamples(groupKey: string, filters: PackFilters, where: PackWhere) {
   if (!(await knownGroup(groupKey))) return [];
-  if (!(await boundedFilters(filters))) return listGroupSamples(groupKey, filters);
-  return unstable_cache(() => listGroupSamples(groupKey, filters), ["group-samples", groupKey, keyOf(filters)], {
+  if (!(await boundedFilters(filters))) return listGroupSamples(groupKey, where);
+  return unstable_cache(() => listGroupSamples(groupKey, where), ["group-samples", groupKey, keyOf(filters)], {
     tags: [t.results, t.packs, t.group(groupKey)],
     revalidate,
   })();
 }
 
-export async function cachedGroupCurves(groupKey: string, filters: ResultFilters) {
+export async function cachedGroupCurves(groupKey: string, filters: PackFilters, where: PackWhere) {
   if (!(await knownGroup(groupKey))) return [];
-  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, filters);
-  return unstable_cache(() => listGroupCurves(groupKey, filters), ["group-curves", groupKey, keyOf(filters)], {
+  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, where);
+  return unstable_cache(() => listGroupCurves(groupKey, where), ["group-curves", groupKey, keyOf(filters)], {
     tags: [t.results, t.packs, t.group(groupKey)],
+    revalidate,
+  })();
+}
+
+/** Pages of featured charts kept in the data cache; later pages (rare) are read each time. */
+const CACHED_CHART_PAGES = 10;
+
+/** One page of the featured charts (/charts, GET /api/v1/charts): featuring a chart revalidates `charts`. */
+export function cachedFeaturedCharts(page: number, size: number) {
+  if (page > CACHED_CHART_PAGES) return listFeaturedCharts(page, size);
+  return unstable_cache(() => listFeaturedCharts(page, size), ["featured-charts", String(page), String(size)], {
+    tags: [t.charts],
     revalidate,
   })();
 }

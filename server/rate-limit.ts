@@ -13,7 +13,10 @@ export const limits = {
   uploadPerUser: { limit: 60, windowS: 60 * 60 },
   keepDraftPerUser: { limit: 30, windowS: 60 * 60 },
   analysePerIp: { limit: 30, windowS: 60 },
-  flagPerIp: { limit: 10, windowS: 60 * 60 },
+  analysePerUser: { limit: 60, windowS: 60 },
+  flagPerUser: { limit: 10, windowS: 60 * 60 },
+  flagPerIp: { limit: 20, windowS: 60 * 60 },
+  chartSavePerUser: { limit: 20, windowS: 60 * 60 },
   apiPerIp: { limit: 600, windowS: 60 },
 } as const satisfies Record<string, Limit>;
 
@@ -29,8 +32,4 @@ export async function enforceRateLimit(key: string, { limit, windowS }: Limit): 
       (resetAt.getTime() - Date.now()) / 1000,
     );
   }
-}
-
-export function clientIp(headers: Headers): string {
-  return headers.get("x-forwarded-for")?.split(",")[0]?.trim() || headers.get("x-real-ip") || "local";
 }

@@ -14,7 +14,7 @@ import {
 import { listWatcherEmails } from "@/db/queries/watches";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { rejectReasonLabels, type FlagResolution, type ReaderFlagInput } from "@/lib/validations/review";
-import { tagsForResult } from "@/server/cache-tags";
+import { cacheTags, tagsForResult } from "@/server/cache-tags";
 import { env } from "@/server/env";
 import { reviewDecisionMail, sendMail, watchedPackResultMail, type ReviewDecision } from "@/server/mail";
 import { revalidateTags } from "@/server/revalidate";
@@ -72,7 +72,11 @@ export async function decideResult(
   return { resultId, status };
 }
 
-/** Resolves an open reader flag (keep, correct or withdraw the result); then revalidates its pages. */
+/**
+ * Resolves an open reader flag: dismiss it (kept, or corrected with a note) or take the result out of
+ * publication. Dismissing changes no figure or count, so only the result's page and its pack's list (which
+ * show the open check) are refreshed; a withdrawal refreshes everything that counted the result.
+ */
 export async function resolveReaderFlag(
   actorId: string,
   flagId: number,
@@ -80,17 +84,25 @@ export async function resolveReaderFlag(
   note: string | null,
 ): Promise<ResolvedFlag> {
   const { ctx, resolved } = await writeFlagResolution(actorId, flagId, resolution, note);
-  revalidateResult(ctx);
+  if (resolved.status === "withdrawn") revalidateResult(ctx);
+  else revalidateOpenCase(ctx);
   return resolved;
 }
 
-/** A reader flags a published result (it turns disputed); then its pages are revalidated. */
+function revalidateOpenCase(c: ResultContext): void {
+  revalidateTags([cacheTags.result(c.resultId), cacheTags.pack(c.packSlug)]);
+}
+
+/**
+ * A signed-in reader flags a published result: a case opens for moderators, nothing else changes (the
+ * result stays published and counted). Its page and its pack's list then show the open check.
+ */
 export async function fileReaderFlag(
   resultId: number,
   input: ReaderFlagInput,
-  reporter: { userId: string | null; reporterHash: string | null },
+  reporter: { userId: string; reporterHash: string | null },
 ): Promise<{ flagId: number }> {
   const { ctx, flagId } = await insertReaderFlag(resultId, input, reporter);
-  revalidateResult(ctx);
+  revalidateOpenCase(ctx);
   return { flagId };
 }

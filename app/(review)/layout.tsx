@@ -11,6 +11,7 @@ export default function ReviewLayout({ children }: { children: React.ReactNode }
       >
         <Link href="/review">Review queue</Link>
         <Link href="/review/flags">Reader flags</Link>
+        <Link href="/review/charts">Saved charts</Link>
       </nav>
       {children}
     </SiteShell>

@@ -1,4 +1,4 @@
-export const DATA_LICENCE = { name: "CC BY 4.0", url: "https://creativecommons.org/licenses/by/4.0/" } as const;
+import { ATTRIBUTION, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 export function SiteFooter() {
   return (
@@ -7,10 +7,10 @@ export function SiteFooter() {
         <div className="space-y-2">
           <p>
             Data on Sagline is published under{" "}
-            <a href={DATA_LICENCE.url} rel="license">
-              {DATA_LICENCE.name}
+            <a href={DATA_LICENCE_URL} rel="license">
+              {DATA_LICENCE_LABEL}
             </a>{" "}
-            — credit “Sagline contributors”. The code is MIT-licensed (see LICENSE).
+            — credit “{ATTRIBUTION}”. The code is MIT-licensed (see LICENSE).
           </p>
           <p className="muted">
             Sagline reports measurements; it does not certify packs. Charging and high-current use of lithium packs can

@@ -1,6 +1,6 @@
 // Bench profile writes. Every write names the owner explicitly and puts it in the WHERE clause, so a user
-// can only change their own profiles; when nothing matched we say whether the profile is missing (404)
-// or someone else's (403).
+// can only change their own profiles; when nothing matched the answer is 404 whether the profile is missing
+// or someone else's, so nobody learns which ids exist.
 import "server-only";
 import { and, count, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
@@ -10,10 +10,8 @@ import type { BenchProfileInput } from "@/lib/validations/bench-profile";
 
 const MAX_BENCH_PROFILES_PER_USER = 50;
 
-async function missingOrForeign(id: number): Promise<never> {
-  const rows = await db.select({ id: benchProfiles.id }).from(benchProfiles).where(eq(benchProfiles.id, id)).limit(1);
-  if (rows.length === 0) throw new AppError("not_found", "That bench profile does not exist (any more).");
-  throw new AppError("forbidden", "That bench profile belongs to someone else.");
+function notFound(): never {
+  throw new AppError("not_found", "That bench profile does not exist (any more).");
 }
 
 export async function createBenchProfile(userId: string, input: BenchProfileInput): Promise<{ id: number }> {
@@ -46,7 +44,7 @@ export async function updateBenchProfile(
     .set({ ...input, updatedAt: new Date() })
     .where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId)))
     .returning({ id: benchProfiles.id });
-  return row ?? missingOrForeign(id);
+  return row ?? notFound();
 }
 
 export async function deleteBenchProfile(userId: string, id: number): Promise<{ id: number }> {
@@ -54,5 +52,5 @@ export async function deleteBenchProfile(userId: string, id: number): Promise<{ 
     .delete(benchProfiles)
     .where(and(eq(benchProfiles.id, id), eq(benchProfiles.userId, userId)))
     .returning({ id: benchProfiles.id });
-  return row ?? missingOrForeign(id);
+  return row ?? notFound();
 }

@@ -1,22 +1,35 @@
-// A reader flags a published result: the flag is stored and the result turns disputed for everyone (with
-// its review event) in one transaction; the service (server/review.ts) revalidates the pages after it.
+// A signed-in reader flags a published result: the flag opens a case for moderators and changes nothing
+// else — the result stays approved and counted until a moderator decides (db/mutations/review.ts).
 import "server-only";
+import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { readerFlags } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { ReaderFlagInput } from "@/lib/validations/review";
-import { lockResult, transition, type ResultContext } from "./review";
+import { lockResult, type ResultContext } from "./review";
 
 export async function insertReaderFlag(
   resultId: number,
   input: ReaderFlagInput,
-  reporter: { userId: string | null; reporterHash: string | null },
+  reporter: { userId: string; reporterHash: string | null },
 ): Promise<{ ctx: ResultContext; flagId: number }> {
   return db.transaction(async (tx) => {
     const c = await lockResult(tx, resultId);
     // Only published results can be flagged; anything else is not public, so it "does not exist" here.
-    if (c.status !== "approved" && c.status !== "disputed")
-      throw new AppError("not_found", "That result is not published.");
+    if (c.status !== "approved") throw new AppError("not_found", "That result is not published.");
+    const [open] = await tx
+      .select({ id: readerFlags.id })
+      .from(readerFlags)
+      .where(
+        and(
+          eq(readerFlags.resultId, resultId),
+          eq(readerFlags.reporterId, reporter.userId),
+          eq(readerFlags.status, "open"),
+        ),
+      )
+      .limit(1);
+    if (open)
+      throw new AppError("conflict", "You already asked moderators to check this result; they will look at it.");
     const [row] = await tx
       .insert(readerFlags)
       .values({
@@ -28,16 +41,6 @@ export async function insertReaderFlag(
       })
       .returning({ id: readerFlags.id });
     if (!row) throw new Error("flag insert returned nothing");
-    if (c.status === "approved") {
-      await transition(tx, {
-        resultId,
-        actorId: reporter.userId,
-        from: "approved",
-        to: "disputed",
-        reason: "reader-flag",
-        note: `A reader flagged this result: ${input.reason}.`,
-      });
-    }
     return { ctx: c, flagId: row.id };
   });
 }

@@ -90,9 +90,8 @@ async function lockOwn(
     .from(results)
     .where(eq(results.id, resultId))
     .for("update");
-  if (!row) throw new AppError("not_found", "That result does not exist.");
-  if (row.contributorId !== contributorId)
-    throw new AppError("forbidden", `Only the contributor who submitted a result can ${verb} it.`);
+  // Someone else's result answers exactly like a missing one: no existence oracle.
+  if (!row || row.contributorId !== contributorId) throw new AppError("not_found", "That result does not exist.");
   if (!allowed.includes(row.status)) {
     throw new AppError(
       "conflict",

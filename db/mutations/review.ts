@@ -8,6 +8,7 @@ import { getPlausibilityInput } from "@/db/queries/review";
 import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import { plausibilityFlags } from "@/lib/analysis/plausibility";
+import { storeCurveFingerprint } from "./curve-fingerprints";
 import { AppError } from "@/lib/errors";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { packTitle } from "@/lib/format";
@@ -30,6 +31,8 @@ export type ResultContext = {
  * submission flow calls this right after inserting a result; it is safe to call again.
  */
 export async function computeAndStoreFlags(resultId: number, exec: Executor = db): Promise<PlausibilityFlag[]> {
+  // The curve's fingerprint first: the copy check searches the other results by it.
+  await storeCurveFingerprint(resultId, exec);
   const input = await getPlausibilityInput(resultId, exec);
   if (!input) throw new AppError("not_found", "That result does not exist.");
   const mine = plausibilityFlags(input);
@@ -68,7 +71,7 @@ export async function lockResult(tx: Transaction, resultId: number): Promise<Res
   return { ...row, resultId, packTitle: packTitle({ makerName: row.makerName, model: row.model }) };
 }
 
-export async function transition(
+async function transition(
   tx: Transaction,
   p: {
     resultId: number;
@@ -138,16 +141,12 @@ export async function writeDecision(
   return { ctx, status: to };
 }
 
-const resolutionStatus: Record<FlagResolution, ReviewStatus> = {
-  kept: "approved",
-  corrected: "approved",
-  withdrawn: "withdrawn",
-};
-
 /**
- * Resolves an open reader flag: keep the result, correct it (the note says what), or withdraw it. The result
- * stays disputed while other flags are still open, unless it is withdrawn, which closes them all. A withdrawn
- * result is never deleted: it and its history stay in the audit log.
+ * Resolves an open reader flag. "kept" dismisses it (the result stays published and counted); "corrected"
+ * dismisses it with a note saying what was put right; "withdrawn" takes the result out of publication
+ * (approved → withdrawn, with the moderator's reason as a review event) and closes every other open flag on
+ * it. A flag never changed the result by itself, so dismissing one changes no status. A withdrawn result is
+ * never deleted: it and its history stay in the audit log.
  */
 export async function writeFlagResolution(
   actorId: string,
@@ -155,7 +154,7 @@ export async function writeFlagResolution(
   resolution: FlagResolution,
   note: string | null,
 ): Promise<{ ctx: ResultContext; resolved: ResolvedFlag }> {
-  const { ctx, status, alsoClosed } = await db.transaction(async (tx) => {
+  const { ctx, status, alsoClosed, stillOpen } = await db.transaction(async (tx) => {
     const [flag] = await tx.select().from(readerFlags).where(eq(readerFlags.id, flagId)).for("update");
     if (!flag) throw new AppError("not_found", "That flag does not exist.");
     const c = await lockResult(tx, flag.resultId);
@@ -169,31 +168,31 @@ export async function writeFlagResolution(
       .set(close)
       .where(and(eq(readerFlags.id, flagId), eq(readerFlags.status, "open")));
     let alsoClosed = 0;
+    let status: ReviewStatus = c.status;
     if (resolution === "withdrawn") {
+      if (c.status !== "approved")
+        throw new AppError("conflict", `This result is no longer published (it is ${c.status.replace("_", " ")}).`);
       const others = await tx
         .update(readerFlags)
         .set(close)
         .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open"), ne(readerFlags.id, flagId)))
         .returning({ id: readerFlags.id });
       alsoClosed = others.length;
-    }
-    const stillOpen = await tx
-      .select({ id: readerFlags.id })
-      .from(readerFlags)
-      .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open")));
-    const to = resolutionStatus[resolution];
-    if (c.status === "disputed" && stillOpen.length === 0) {
       await transition(tx, {
         resultId: flag.resultId,
         actorId,
-        from: "disputed",
-        to,
-        reason: `flag-${resolution}`,
+        from: "approved",
+        to: "withdrawn",
+        reason: "flag-withdrawn",
         note,
       });
-      return { ctx: c, status: to, alsoClosed };
+      status = "withdrawn";
     }
-    return { ctx: c, status: c.status, alsoClosed };
+    const open = await tx
+      .select({ id: readerFlags.id })
+      .from(readerFlags)
+      .where(and(eq(readerFlags.resultId, flag.resultId), eq(readerFlags.status, "open")));
+    return { ctx: c, status, alsoClosed, stillOpen: open.length };
   });
-  return { ctx, resolved: { flagId, resolution, resultId: ctx.resultId, status, alsoClosed } };
+  return { ctx, resolved: { flagId, resolution, resultId: ctx.resultId, status, alsoClosed, stillOpen } };
 }

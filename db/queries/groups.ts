@@ -7,44 +7,54 @@ import { and, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import { describeGroup, type DescribedGroup } from "@/lib/like-for-like";
-import { isPublic } from "./results";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 export type GroupSummary = DescribedGroup & { resultCount: number; packCount: number };
 
 /** Groups that hold published results, the most packs first. Labels come from a representative method card. */
 export async function listPublicGroups(): Promise<GroupSummary[]> {
-  const rows = await db.execute<{
-    group_key: string;
-    result_count: string;
-    pack_count: string;
-    resistance_method: string;
-    ambient_temperature_c: number;
-    cutoff_v_per_cell: number;
-    load_current_a: number;
-    rated_capacity_mah: number;
-    cycles_before_test: number;
-  }>(sql`
-    select distinct on (r.group_key) r.group_key, c.result_count, c.pack_count, r.resistance_method, r.ambient_temperature_c,
-           r.cutoff_v_per_cell, r.load_current_a, p.rated_capacity_mah, r.cycles_before_test
-    from ${results} r
-    join ${packs} p on p.id = r.pack_id and p.status = 'active'
-    join (select group_key, count(*) as result_count, count(distinct pack_id) as pack_count
-          from ${results} where status in ('approved', 'disputed') group by group_key) c on c.group_key = r.group_key
-    where r.status in ('approved', 'disputed')
-    order by r.group_key, r.id`);
-  return rows.rows
+  const counts = db
+    .select({
+      key: sql<string>`${results.groupKey}`.as("count_key"),
+      resultCount: sql<number>`count(*)::int`.as("result_count"),
+      packCount: sql<number>`count(distinct ${results.packId})::int`.as("pack_count"),
+      firstId: sql<number>`min(${results.id})`.as("first_id"),
+    })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(isPublished)
+    .groupBy(results.groupKey)
+    .as("counts");
+  // The representative card is the group's oldest published result (its key is computed from its card).
+  const rows = await db
+    .select({
+      key: counts.key,
+      resultCount: counts.resultCount,
+      packCount: counts.packCount,
+      resistanceMethod: results.resistanceMethod,
+      ambientTemperatureC: results.ambientTemperatureC,
+      cutoffVPerCell: results.cutoffVPerCell,
+      loadCurrentA: results.loadCurrentA,
+      cyclesBeforeTest: results.cyclesBeforeTest,
+      ratedCapacityMah: packs.ratedCapacityMah,
+    })
+    .from(counts)
+    .innerJoin(results, eq(results.id, counts.firstId))
+    .innerJoin(packs, packOfResult);
+  return rows
     .map((r) => ({
       ...describeGroup({
-        resistanceMethod: r.resistance_method,
-        ambientC: r.ambient_temperature_c,
-        cutoffVPerCell: r.cutoff_v_per_cell,
-        loadCurrentA: r.load_current_a,
-        ratedMah: r.rated_capacity_mah,
-        cyclesBeforeTest: r.cycles_before_test,
+        resistanceMethod: r.resistanceMethod,
+        ambientC: r.ambientTemperatureC,
+        cutoffVPerCell: r.cutoffVPerCell,
+        loadCurrentA: r.loadCurrentA,
+        ratedMah: r.ratedCapacityMah,
+        cyclesBeforeTest: r.cyclesBeforeTest,
       }),
-      key: r.group_key,
-      resultCount: Number(r.result_count),
-      packCount: Number(r.pack_count),
+      key: r.key,
+      resultCount: r.resultCount,
+      packCount: r.packCount,
     }))
     .sort((a, b) => b.packCount - a.packCount || b.resultCount - a.resultCount || a.key.localeCompare(b.key));
 }
@@ -86,9 +96,9 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
       dcResistanceMohm: sql<number | null>`percentile_cont(0.5) within group (order by ${results.dcResistanceMohm})`,
     })
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(results.groupKey, groupKey), isPublic, eq(packs.status, "active")))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.groupKey, groupKey), isPublished))
     .groupBy(packs.id, makers.id)
     .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
   return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, ...r }) => ({
@@ -125,16 +135,18 @@ export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> 
     max: number;
   }>(sql`
     with per_pack as (
-      select r.pack_id, percentile_cont(0.5) within group (order by r.label_ratio) as m, count(*) as n
-      from ${results} r
-      where r.group_key = ${groupKey} and r.status in ('approved', 'disputed') and r.label_ratio is not null
-      group by r.pack_id
+      select ${results.packId} as pack_id, ${makers.id} as maker_id,
+             percentile_cont(0.5) within group (order by ${results.labelRatio}) as m, count(*) as n
+      from ${results}
+      join ${packs} on ${packOfResult}
+      join ${makers} on ${makerOfPack}
+      where ${results.groupKey} = ${groupKey} and ${isPublished} and ${results.labelRatio} is not null
+      group by ${results.packId}, ${makers.id}
     )
     select mk.slug as maker_slug, mk.name as maker_name, percentile_cont(0.5) within group (order by pp.m) as median,
            count(*)::int as packs, sum(pp.n)::int as results, min(pp.m) as min, max(pp.m) as max
     from per_pack pp
-    join ${packs} p on p.id = pp.pack_id and p.status = 'active'
-    join ${makers} mk on mk.id = p.maker_id
+    join ${makers} mk on mk.id = pp.maker_id
     group by mk.id
     order by median desc, mk.name`);
   return rows.rows.map((r) => ({

@@ -4,7 +4,7 @@ import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { PackRow, PackSummary } from "@/lib/catalogue";
 import { listPacksInGroup } from "./groups";
-import { isPublic } from "./results";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 /** The columns of PackLabelFields, to spread into a select. */
 export const packLabelColumns = {
@@ -19,28 +19,40 @@ export const packLabelColumns = {
 const packColumns = {
   id: packs.id,
   slug: packs.slug,
+  makerId: packs.makerId,
   model: packs.model,
   makerName: makers.name,
   makerSlug: makers.slug,
   ...packLabelColumns,
 };
 
-/** Active packs in the catalogue, maker then model. */
+const activeCatalogue = and(eq(packs.status, "active"), eq(makers.status, "active"));
+
+/** Active packs of active makers in the catalogue, maker then model. */
 export async function listActivePacks(): Promise<PackSummary[]> {
   return db
     .select(packColumns)
     .from(packs)
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(eq(packs.status, "active"))
-    .orderBy(asc(makers.name), asc(packs.model));
+    .innerJoin(makers, makerOfPack)
+    .where(activeCatalogue)
+    .orderBy(asc(makers.name), asc(packs.model), asc(packs.id));
+}
+
+/** Active makers, by name (with or without active packs). */
+export async function listActiveMakers(): Promise<{ id: number; slug: string; name: string }[]> {
+  return db
+    .select({ id: makers.id, slug: makers.slug, name: makers.name })
+    .from(makers)
+    .where(eq(makers.status, "active"))
+    .orderBy(asc(makers.name), asc(makers.id));
 }
 
 export async function getPackBySlug(slug: string): Promise<PackSummary | null> {
   const rows = await db
     .select(packColumns)
     .from(packs)
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(packs.slug, slug), eq(packs.status, "active")))
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(packs.slug, slug), activeCatalogue))
     .limit(1);
   return rows[0] ?? null;
 }
@@ -56,7 +68,9 @@ export async function listPackRows(groupKey: string | null): Promise<PackRow[]> 
         groups: sql<number>`count(distinct ${results.groupKey})::int`,
       })
       .from(results)
-      .where(isPublic)
+      .innerJoin(packs, packOfResult)
+      .innerJoin(makers, makerOfPack)
+      .where(isPublished)
       .groupBy(results.packId),
     groupKey ? listPacksInGroup(groupKey) : Promise.resolve([]),
   ]);
@@ -83,8 +97,8 @@ export async function getPacksBySlugs(slugs: string[]): Promise<PackSummary[]> {
   const rows = await db
     .select(packColumns)
     .from(packs)
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(inArray(packs.slug, slugs), eq(packs.status, "active")));
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(packs.slug, slugs), activeCatalogue));
   const bySlug = new Map(rows.map((r) => [r.slug, r]));
   return slugs.map((s) => bySlug.get(s)).filter((p): p is PackSummary => p !== undefined);
 }

@@ -1,21 +1,24 @@
-// Reads of published results. Public = approved or disputed (disputed stay visible, marked). Dates leave
-// as ISO strings so the cached reads (server/public-data.ts) survive JSON round trips.
+// Reads of published results (the counting rule: ./published.ts). A result a reader asked moderators to check (an
+// open reader flag) stays published and counted, marked with its open case. Dates leave as ISO strings so the cached reads
+// (server/public-data.ts) survive JSON round trips.
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results, reviewEvents, users } from "@/db/schema";
+import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
 import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { FlagReason } from "@/lib/enums";
 import type { PublicResultRow } from "@/lib/pack-summary";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
-const PUBLIC_STATUSES = ["approved", "disputed"] as const;
-export const isPublic = inArray(results.status, [...PUBLIC_STATUSES]);
+/** Whether a reader's flag on the result is open (a case moderators have not decided). */
+const hasOpenCase = sql<boolean>`exists (select 1 from ${readerFlags} where ${readerFlags.resultId} = ${results.id} and ${readerFlags.status} = 'open')`;
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
 const publicResultColumns = {
   id: results.id,
   packId: results.packId,
-  status: results.status,
+  openCase: hasOpenCase,
   groupKey: results.groupKey,
   ratedCapacityMah: packs.ratedCapacityMah,
   ambientTemperatureC: results.ambientTemperatureC,
@@ -44,9 +47,9 @@ const publicResultColumns = {
   passedStopTemperature: sql<boolean>`(${results.figures}->>'timeToStopTemperatureS') is not null`,
 };
 
-type RawRow = Omit<PublicResultRow, "publishedAt" | "status"> & { publishedAt: Date | null; status: string };
+type RawRow = Omit<PublicResultRow, "publishedAt"> & { publishedAt: Date | null };
 function toRow(r: RawRow): PublicResultRow {
-  return { ...r, status: r.status === "disputed" ? "disputed" : "approved", publishedAt: iso(r.publishedAt) };
+  return { ...r, publishedAt: iso(r.publishedAt) };
 }
 
 /** Published results of the given packs (method card and headline figures, no curve), oldest first. */
@@ -55,8 +58,9 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
   const rows = await db
     .select(publicResultColumns)
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .where(and(inArray(results.packId, packIds), isPublic))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.packId, packIds), isPublished))
     .orderBy(asc(results.cyclesBeforeTest), asc(results.id));
   return rows.map(toRow);
 }
@@ -67,7 +71,9 @@ export async function getPublicCurves(resultIds: number[]): Promise<Map<number, 
   const rows = await db
     .select({ id: results.id, curve: results.curve })
     .from(results)
-    .where(and(inArray(results.id, resultIds), isPublic));
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(inArray(results.id, resultIds), isPublished));
   return new Map(rows.map((r) => [r.id, r.curve]));
 }
 
@@ -83,7 +89,7 @@ export type NewestResult = {
   labelRatio: number | null;
 };
 
-/** The newest approved results, for the home page. */
+/** The newest published results, for the home page and the sitemap. */
 export async function listNewestApprovedResults(limit: number): Promise<NewestResult[]> {
   const rows = await db
     .select({
@@ -98,9 +104,9 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
       labelRatio: results.labelRatio,
     })
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(eq(results.status, "approved"), eq(packs.status, "active")))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(isPublished)
     .orderBy(desc(results.publishedAt), desc(results.id))
     .limit(limit);
   return rows.map((r) => ({ ...r, publishedAt: iso(r.publishedAt) }));
@@ -119,6 +125,10 @@ export type ResultDetail = PublicResultRow & {
     connector: string;
   };
   contributor: string;
+  /** Reasons of the open reader flags (each once, in the order they were filed); empty when none is open. */
+  openCaseReasons: FlagReason[];
+  /** The uploaded log's file name (its extension names the download; the name itself is never shown). */
+  logFilename: string;
   notes: string | null;
   submittedAt: string;
   figures: Figures;
@@ -140,6 +150,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .select({
       ...publicResultColumns,
       notes: results.notes,
+      logFilename: results.logFilename,
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
@@ -160,7 +171,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .innerJoin(users, eq(users.id, results.contributorId))
-    .where(and(eq(results.id, id), isPublic))
+    .where(and(eq(results.id, id), isPublished))
     .limit(1);
   if (!row) return null;
   const events = await db
@@ -176,6 +187,11 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     .from(reviewEvents)
     .where(eq(reviewEvents.resultId, id))
     .orderBy(asc(reviewEvents.createdAt), asc(reviewEvents.id));
+  const open = await db
+    .select({ reason: readerFlags.reason })
+    .from(readerFlags)
+    .where(and(eq(readerFlags.resultId, id), eq(readerFlags.status, "open")))
+    .orderBy(asc(readerFlags.createdAt), asc(readerFlags.id));
   const {
     contributorId,
     contributorName,
@@ -190,6 +206,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     weightG,
     connector,
     notes,
+    logFilename,
     submittedAt,
     figures,
     curve,
@@ -209,7 +226,9 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       connector,
     },
     contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
+    openCaseReasons: [...new Set(open.map((o) => o.reason))],
     notes,
+    logFilename,
     submittedAt: new Date(submittedAt).toISOString(),
     figures,
     curve,
@@ -224,4 +243,24 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),
   };
+}
+
+export type PublishedLog = { resultId: number; key: string; sha256: string; bytes: number; filename: string };
+
+/** The stored log of a published result (its raw data, CC BY 4.0 like the figures); null otherwise. */
+export async function getPublishedLog(id: number): Promise<PublishedLog | null> {
+  const [row] = await db
+    .select({
+      resultId: results.id,
+      key: results.logKey,
+      sha256: results.logSha256,
+      bytes: results.logBytes,
+      filename: results.logFilename,
+    })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.id, id), isPublished))
+    .limit(1);
+  return row ?? null;
 }

@@ -2,12 +2,14 @@
 // one result's review page (method card, figures, contributor history, the pack's group median before and
 // after approval) and the review history shown publicly.
 import "server-only";
-import { and, asc, count, desc, eq, inArray, ne, sql, type SQL } from "drizzle-orm";
+import { and, asc, between, count, desc, eq, isNotNull, ne, sql, type SQL } from "drizzle-orm";
 import { db, type Executor } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import { summarise, type PlausibilityInput } from "@/lib/analysis";
+import { CURVE_KEY_TOLERANCE } from "@/lib/analysis/curve-fingerprint";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import type { ReviewQueueFilter } from "@/lib/validations/review";
+import { isPublished, makerOfPack, packOfResult } from "./published";
 
 const finiteOnly = (xs: (number | null)[]) => xs.filter((x): x is number => x !== null && Number.isFinite(x));
 
@@ -20,6 +22,8 @@ export async function getPlausibilityInput(resultId: number, exec: Executor = db
       cutoffVPerCell: results.cutoffVPerCell,
       groupKey: results.groupKey,
       logSha256: results.logSha256,
+      curve: results.curve,
+      curveKey: results.curveKey,
       cellsInSeries: packs.cellsInSeries,
       ratedCapacityMah: packs.ratedCapacityMah,
       packStatus: packs.status,
@@ -41,6 +45,8 @@ export async function getPlausibilityInput(resultId: number, exec: Executor = db
     .orderBy(asc(results.id));
   return {
     figures: r.figures,
+    curve: r.curve,
+    curveCandidates: await curveCandidates(resultId, r.curveKey, exec),
     method: { ambientTemperatureC: r.ambientTemperatureC, cutoffVPerCell: r.cutoffVPerCell },
     pack: { cellsInSeries: r.cellsInSeries, ratedCapacityMah: r.ratedCapacityMah },
     group: {
@@ -52,6 +58,27 @@ export async function getPlausibilityInput(resultId: number, exec: Executor = db
     makerProposed: r.makerStatus === "proposed",
     packProposed: r.packStatus === "proposed",
   };
+}
+
+/** Closest first, so a copy is among them however many tests of one pack share the key's neighbourhood. */
+const MAX_CURVE_CANDIDATES = 200;
+
+/** Other results whose curve key is within CURVE_KEY_TOLERANCE of this one's (results_curve_key_idx). */
+async function curveCandidates(resultId: number, key: number | null, exec: Executor) {
+  if (key === null) return [];
+  const rows = await exec
+    .select({ resultId: results.id, fingerprint: results.curveFingerprint })
+    .from(results)
+    .where(
+      and(
+        ne(results.id, resultId),
+        between(results.curveKey, key - CURVE_KEY_TOLERANCE, key + CURVE_KEY_TOLERANCE),
+        isNotNull(results.curveFingerprint),
+      ),
+    )
+    .orderBy(sql`abs(${results.curveKey} - ${key})`, asc(results.id))
+    .limit(MAX_CURVE_CANDIDATES);
+  return rows.flatMap((r) => (r.fingerprint ? [{ resultId: r.resultId, fingerprint: r.fingerprint }] : []));
 }
 
 type QueueItem = {
@@ -231,14 +258,9 @@ export async function getReviewDetail(resultId: number) {
   const groupRows = await db
     .select(figureCols)
     .from(results)
-    .where(
-      and(
-        eq(results.packId, r.packId),
-        eq(results.groupKey, r.groupKey),
-        inArray(results.status, ["approved", "disputed"]),
-        ne(results.id, r.id),
-      ),
-    );
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(results.packId, r.packId), eq(results.groupKey, r.groupKey), isPublished, ne(results.id, r.id)));
   const history = await db
     .select({ status: results.status, n: count() })
     .from(results)

@@ -1,5 +1,6 @@
 // What readers and journalists leave behind: flags on published results, watches, saved charts.
-import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
 import { users } from "./auth";
 import { packs } from "./catalogue";
 import { results } from "./results";
@@ -27,7 +28,14 @@ export const readerFlags = pgTable(
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     resolvedAt: timestamp("resolved_at", { withTimezone: true }),
   },
-  (t) => [index("reader_flags_result_idx").on(t.resultId), index("reader_flags_status_idx").on(t.status)],
+  (t) => [
+    index("reader_flags_result_idx").on(t.resultId),
+    index("reader_flags_status_idx").on(t.status),
+    // One open case per reader and result: a second flag from the same account waits for the first.
+    uniqueIndex("reader_flags_open_reporter_idx")
+      .on(t.resultId, t.reporterId)
+      .where(sql`${t.status} = 'open' and ${t.reporterId} is not null`),
+  ],
 );
 
 export const watches = pgTable(
@@ -47,7 +55,10 @@ export const watches = pgTable(
 export const chartKinds = ["label-check", "curves", "maker-ranking"] as const;
 export const chartKind = pgEnum("chart_kind", chartKinds);
 
-/** A saved chart keeps its full state, so later changes of defaults never change a published chart. */
+/**
+ * A saved chart keeps its full state, so later changes of defaults never change a published chart. Anyone
+ * signed in may save one; only charts a moderator featured (featuredAt set) are listed on /charts.
+ */
 export const savedCharts = pgTable(
   "saved_charts",
   {
@@ -58,6 +69,13 @@ export const savedCharts = pgTable(
     state: jsonb("state").$type<Record<string, unknown>>().notNull(),
     createdById: text("created_by_id").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    featuredAt: timestamp("featured_at", { withTimezone: true }),
+    featuredById: text("featured_by_id").references(() => users.id, { onDelete: "set null" }),
   },
-  (t) => [index("saved_charts_created_idx").on(t.createdAt)],
+  (t) => [
+    index("saved_charts_created_idx").on(t.createdAt),
+    index("saved_charts_featured_idx")
+      .on(t.featuredAt)
+      .where(sql`${t.featuredAt} is not null`),
+  ],
 );

@@ -15,6 +15,7 @@ import {
   uniqueIndex,
 } from "drizzle-orm/pg-core";
 import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { CurveFingerprint } from "@/lib/analysis/curve-fingerprint";
 import { users } from "./auth";
 import { packs } from "./catalogue";
 import {
@@ -31,7 +32,8 @@ export const reviewStatus = pgEnum("review_status", reviewStatuses);
 export const loadMode = pgEnum("load_mode", loadModes);
 export const resistanceMethod = pgEnum("resistance_method", resistanceMethods);
 
-export type PlausibilityFlag = { code: string; message: string };
+/** A stored plausibility flag; `resultIds` names other results it points at (a copied log), for links. */
+export type PlausibilityFlag = { code: string; message: string; resultIds?: number[] };
 
 export const benchProfiles = pgTable(
   "bench_profiles",
@@ -92,6 +94,10 @@ export const results = pgTable(
     // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
     figures: jsonb("figures").$type<Figures>().notNull(),
     curve: jsonb("curve").$type<CurvePoint[]>().notNull(),
+    // The curve's normalised shape (lib/analysis/curve-fingerprint.ts) and its one-number key, to find
+    // another result whose log is the same samples scaled or shifted. Null until computed.
+    curveFingerprint: jsonb("curve_fingerprint").$type<CurveFingerprint>(),
+    curveKey: real("curve_key"),
     capacityMah: real("capacity_mah"),
     energyWh: real("energy_wh"),
     dcResistanceMohm: real("dc_resistance_mohm"),
@@ -117,9 +123,10 @@ export const results = pgTable(
     // ratios, already in pack order (scripts/bench-pages.sh measures it over 100,000 results).
     index("results_group_public_idx")
       .on(t.groupKey, t.packId, t.labelRatio)
-      .where(sql`${t.status} in ('approved', 'disputed')`),
+      .where(sql`${t.status} = 'approved'`),
     index("results_contributor_idx").on(t.contributorId),
     index("results_log_sha_idx").on(t.logSha256),
+    index("results_curve_key_idx").on(t.curveKey),
     uniqueIndex("results_idempotency_idx").on(t.contributorId, t.idempotencyKey),
     check("results_ambient_range", sql`${t.ambientTemperatureC} between -20 and 60`),
     check("results_cutoff_range", sql`${t.cutoffVPerCell} between 2.5 and 4.2`),

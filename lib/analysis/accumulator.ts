@@ -5,47 +5,15 @@
  * Samples arrive in column batches; the loop keeps its state in locals for speed.
  */
 import { CurveBuckets, type RawCurvePoint } from "./curve-buckets";
+import { GAP_FACTOR, GAP_MIN_S, GapWatch, IntervalSample } from "./intervals";
+import { CHARGE_PHASE_MIN_S, DirectionTotals } from "./phases";
 import { Stretch, type StretchSettings } from "./stretch";
+import type { SampleBatch } from "./sample-batch";
 
-/** Reusable column arrays for one batch of samples (time-ordered). */
-export class SampleBatch {
-  timeS = new Float64Array(0);
-  voltageV = new Float64Array(0);
-  currentA = new Float64Array(0);
-  temperatureC = new Float64Array(0);
-  minCellVoltageV = new Float64Array(0);
-  /** Running charge after each sample, written by the accumulator for the curve. */
-  positiveChargeAs = new Float64Array(0);
-  negativeChargeAs = new Float64Array(0);
+export { DirectionTotals } from "./phases";
+export { SampleBatch } from "./sample-batch";
 
-  reserve(size: number): void {
-    if (this.timeS.length >= size) return;
-    const n = Math.max(size, 1024);
-    this.timeS = new Float64Array(n);
-    this.voltageV = new Float64Array(n);
-    this.currentA = new Float64Array(n);
-    this.temperatureC = new Float64Array(n);
-    this.minCellVoltageV = new Float64Array(n);
-    this.positiveChargeAs = new Float64Array(n);
-    this.negativeChargeAs = new Float64Array(n);
-  }
-}
-
-/** Totals for one current direction, currents counted positive in that direction (stretch figures folded in as each closes). */
-export class DirectionTotals {
-  chargeAs = 0;
-  energyWs = 0;
-  minVoltageV = Number.POSITIVE_INFINITY;
-  minCellVoltageV = Number.POSITIVE_INFINITY;
-  peakCurrentA = 0;
-  loadSamples = 0;
-  open: Stretch | null = null;
-  /** The longest stretch so far (by time from onset to last load sample). */
-  best: Stretch | null = null;
-  /** First stretch holding a two-level (IEC 61960-3) step. */
-  twoLevel: Stretch | null = null;
-  stretches = 0;
-}
+export type AccumulatorSettings = StretchSettings & { stopTemperatureC: number };
 
 export class Accumulator {
   samples = 0;
@@ -57,6 +25,8 @@ export class Accumulator {
   temperatureSamples = 0;
   duplicateTimes = 0;
   maxGapS = 0;
+  readonly intervals = new IntervalSample();
+  readonly gaps = new GapWatch(GAP_MIN_S);
   /** Σ ΔV·ΔI over current steps: negative when voltage falls as positive current rises. */
   stepScore = 0;
   stepScoreAbs = 0;
@@ -71,10 +41,19 @@ export class Accumulator {
   private lastTemperatureC = Number.NaN;
   private lastSign = 0;
   private lastIntervalS = 0;
+  private intervalCountdown = 1;
+  /** The last interval (not yet judged as a hole), where it started, whether a load sample ends it, and the one before. */
+  private midDt = 0;
+  private midStartS = 0;
+  private midLoad = false;
+  private beforeDt = 0;
   /** Lowest temperature that could change a watched stretch (−∞: check every sample). */
   private watchFromC = Number.NEGATIVE_INFINITY;
 
-  constructor(private readonly settings: StretchSettings, curveBuckets = 512) {
+  constructor(
+    private readonly settings: AccumulatorSettings,
+    curveBuckets = 512,
+  ) {
     this.curve = new CurveBuckets(curveBuckets);
   }
 
@@ -115,17 +94,43 @@ export class Accumulator {
     // Kept in locals too: field reads and writes on every sample made V8 box doubles (allocations).
     let temperatureSamples = this.temperatureSamples;
     let watchFromC = this.watchFromC;
+    const intervals = this.intervals;
+    let intervalCountdown = this.intervalCountdown;
+    let gapFloorS = this.gaps.floorS;
+    let beforeDt = this.beforeDt;
+    let midDt = this.midDt;
+    let midStartS = this.midStartS;
+    let midLoad = this.midLoad;
     for (let k = 0; k < count; k++) {
       const t = T[k] as number;
       const v = V[k] as number;
       const i = I[k] as number;
       const temp = TEMP[k] as number;
       const sign = i > thr ? 1 : i < -thr ? -1 : 0;
+      if (samples > 0) {
+        const dt = t - lastT;
+        if (dt === 0) duplicates++;
+        else {
+          if (dt > maxGapS) maxGapS = dt;
+          // The median interval is the one under load (loggers often write rest rows less often).
+          if (sign !== 0 && sign === lastSign && --intervalCountdown === 0) {
+            intervals.keep(dt);
+            intervalCountdown = intervals.stride;
+          }
+          // The interval before this one is judged now that both its neighbours are known.
+          if (midDt > gapFloorS && midLoad && midDt > GAP_FACTOR * dt && midDt > GAP_FACTOR * beforeDt) {
+            this.gaps.offer(midStartS, midDt);
+            gapFloorS = this.gaps.floorS;
+          }
+          beforeDt = midDt;
+          midDt = dt;
+          midStartS = lastT;
+          midLoad = sign !== 0 || lastSign !== 0;
+        }
+      }
       if (samples > 0 && sign === lastSign) {
         // The common case: still in the same stretch (or still at rest).
         const dt = t - lastT;
-        if (dt === 0) duplicates++;
-        else if (dt > maxGapS) maxGapS = dt;
         lastDt = dt;
         const di = i - lastI;
         if (di > thr || di < -thr) {
@@ -161,8 +166,6 @@ export class Accumulator {
           this.firstVoltageV = v;
         } else {
           const dt = t - lastT;
-          if (dt === 0) duplicates++;
-          else if (dt > maxGapS) maxGapS = dt;
           // Trapezoid per direction; the rest end of an interval counts as zero current. At a
           // stretch's edge the ramp counts at most one sampling interval (the one before): a
           // logger that writes rest rows once a minute must not stretch a discharge into its rest.
@@ -204,10 +207,15 @@ export class Accumulator {
           if (v > maxRestV) maxRestV = v;
         } else {
           const side = sign === 1 ? pos : neg;
-          const prev = samples > 0 ? { t: lastT, v: lastV, i: sign * lastI, temp: lastTemp, rest: lastSign === 0 } : null;
+          const prev =
+            samples > 0 ? { t: lastT, v: lastV, i: sign * lastI, temp: lastTemp, rest: lastSign === 0 } : null;
           const open = new Stretch(this.settings, prev, { t, v });
           side.open = open;
           side.stretches++;
+          side.opened(open);
+          // Temperature while charging is not the discharge's own (resumed if this turns out a glitch).
+          const otherPhase = (sign === 1 ? neg : pos).openPhase;
+          if (otherPhase) otherPhase.watching = false;
           this.watchFromC = Number.NEGATIVE_INFINITY;
           open.chargeAs += dq;
           open.energyWs += de;
@@ -233,6 +241,11 @@ export class Accumulator {
       lastSign = sign;
     }
     this.samples = samples;
+    this.intervalCountdown = intervalCountdown;
+    this.beforeDt = beforeDt;
+    this.midDt = midDt;
+    this.midStartS = midStartS;
+    this.midLoad = midLoad;
     this.temperatureSamples = temperatureSamples;
     this.lastTimeS = lastT;
     this.lastVoltageV = lastV;
@@ -254,32 +267,44 @@ export class Accumulator {
   }
 
   /**
-   * Temperature is followed from each candidate stretch's onset to the end of the log. Most
-   * samples change nothing (not a new peak, stop temperature not reached): `watchFromC` is the
-   * lowest temperature that could, so the per-sample cost is one comparison.
+   * Temperature is followed by each open phase (both directions: which one is discharge is known only
+   * at the end). Most samples change nothing (not a new peak, stop temperature not reached):
+   * `watchFromC` is the lowest temperature that could, so the per-sample cost is one comparison.
    */
   private watchTemperature(t: number, temp: number): void {
+    const stopC = this.settings.stopTemperatureC;
     let from = Number.POSITIVE_INFINITY;
     for (const side of [this.positive, this.negative]) {
-      for (const s of side.open === side.best ? [side.open] : [side.open, side.best]) {
-        if (s === null) continue;
-        s.watchTemperature(t, temp);
-        from = Math.min(from, s.watchFromC());
-      }
+      const phase = side.openPhase;
+      if (phase === null || !phase.watching) continue;
+      phase.watchTemperature(t, temp, stopC);
+      from = Math.min(from, phase.watchFromC(stopC));
     }
     this.watchFromC = from;
   }
 
   /** The curve's kept samples, the log's last sample included. */
   curvePoints(): RawCurvePoint[] {
-    const last: RawCurvePoint | null = this.samples > 0
-      ? { timeS: this.lastTimeS, voltageV: this.lastVoltageV, currentA: this.lastCurrentA, temperatureC: this.lastTemperatureC, positiveChargeAs: this.positive.chargeAs, negativeChargeAs: this.negative.chargeAs }
-      : null;
+    const last: RawCurvePoint | null =
+      this.samples > 0
+        ? {
+            timeS: this.lastTimeS,
+            voltageV: this.lastVoltageV,
+            currentA: this.lastCurrentA,
+            temperatureC: this.lastTemperatureC,
+            positiveChargeAs: this.positive.chargeAs,
+            negativeChargeAs: this.negative.chargeAs,
+          }
+        : null;
     return this.curve.points(last);
   }
 
   /** Closes any stretch still open when the log ends. */
   finish(): void {
+    // The log's last interval has nothing after it: judged against the one before only.
+    if (this.midDt > this.gaps.floorS && this.midLoad && this.midDt > GAP_FACTOR * this.beforeDt)
+      this.gaps.offer(this.midStartS, this.midDt);
+    this.midDt = 0;
     if (this.positive.open) this.close(this.positive);
     if (this.negative.open) this.close(this.negative);
   }
@@ -288,12 +313,17 @@ export class Accumulator {
     const stretch = side.open;
     if (!stretch) return;
     side.open = null;
+    stretch.close();
     this.watchFromC = Number.NEGATIVE_INFINITY;
-    side.loadSamples += stretch.samples;
-    if (stretch.minVoltageV < side.minVoltageV) side.minVoltageV = stretch.minVoltageV;
-    if (stretch.minCellVoltageV < side.minCellVoltageV) side.minCellVoltageV = stretch.minCellVoltageV;
-    if (stretch.peakCurrentA > side.peakCurrentA) side.peakCurrentA = stretch.peakCurrentA;
-    if (!side.best || stretch.durationS > side.best.durationS) side.best = stretch;
-    if (!side.twoLevel && stretch.twoLevel) side.twoLevel = stretch;
+    side.closed(stretch);
+    // A charge long enough to be a charge phase ends the other direction's open phase.
+    if (stretch.durationS >= CHARGE_PHASE_MIN_S) {
+      const other = side === this.positive ? this.negative : this.positive;
+      const phase = other.openPhase;
+      if (phase) phase.open = false;
+    } else {
+      const phase = (side === this.positive ? this.negative : this.positive).openPhase;
+      if (phase) phase.watching = true;
+    }
   }
 }

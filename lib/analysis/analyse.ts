@@ -7,6 +7,7 @@ import { DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL } from "./arrhenius";
 import { lttb } from "./downsample";
 import { LogError } from "./errors";
 import { computeFigures } from "./figures";
+import { DEFAULT_RATING_STOP_TEMPERATURE_C } from "./ratings";
 import { type ChunkSource, DEFAULT_MAX_BYTES, readRows, textChunks } from "./reader";
 import { SampleSink } from "./sample-sink";
 import type { AnalyseOptions, Analysis, CurvePoint, ResolvedOptions } from "./types";
@@ -24,13 +25,17 @@ export const DEFAULT_FLOOR_V_PER_CELL = 3.3;
 function positive(name: string, value: number | undefined, integer = false): void {
   if (value === undefined) return;
   if (typeof value !== "number" || !Number.isFinite(value) || value <= 0 || (integer && !Number.isInteger(value))) {
-    throw new LogError("bad-option", `${name} must be a positive ${integer ? "whole " : ""}number, got ${String(value)}.`);
+    throw new LogError(
+      "bad-option",
+      `${name} must be a positive ${integer ? "whole " : ""}number, got ${String(value)}.`,
+    );
   }
 }
 
 export function resolveOptions(options: AnalyseOptions = {}): ResolvedOptions {
   positive("cells", options.cells, true);
-  if (options.cells !== undefined && options.cells > 24) throw new LogError("bad-option", `cells must be at most 24, got ${options.cells}.`);
+  if (options.cells !== undefined && options.cells > 24)
+    throw new LogError("bad-option", `cells must be at most 24, got ${options.cells}.`);
   positive("ratedMah", options.ratedMah);
   positive("labelledC", options.labelledC);
   positive("weightG", options.weightG);
@@ -44,11 +49,13 @@ export function resolveOptions(options: AnalyseOptions = {}): ResolvedOptions {
   positive("floorVPerCell", options.floorVPerCell);
   for (const key of ["stopTemperatureC", "packStartTemperatureC"] as const) {
     const v = options[key];
-    if (v !== undefined && (typeof v !== "number" || !Number.isFinite(v))) throw new LogError("bad-option", `${key} must be a number, got ${String(v)}.`);
+    if (v !== undefined && (typeof v !== "number" || !Number.isFinite(v)))
+      throw new LogError("bad-option", `${key} must be a number, got ${String(v)}.`);
   }
   const resolved: ResolvedOptions = {
     ...options,
     holdDelayS: options.holdDelayS ?? DEFAULT_HOLD_DELAY_S,
+    ratingStopTemperatureC: options.stopTemperatureC ?? DEFAULT_RATING_STOP_TEMPERATURE_C,
     maxBytes: options.maxBytes ?? DEFAULT_MAX_BYTES,
     curvePoints: Math.min(options.curvePoints ?? DEFAULT_CURVE_POINTS, MAX_CURVE_POINTS),
     loadThresholdA: options.loadThresholdA ?? DEFAULT_LOAD_THRESHOLD_A,
@@ -57,7 +64,10 @@ export function resolveOptions(options: AnalyseOptions = {}): ResolvedOptions {
     floorVPerCell: options.floorVPerCell ?? DEFAULT_FLOOR_V_PER_CELL,
   };
   if (!(resolved.nominalVPerCell > resolved.floorVPerCell)) {
-    throw new LogError("bad-option", `nominalVPerCell (${resolved.nominalVPerCell} V) must be above floorVPerCell (${resolved.floorVPerCell} V).`);
+    throw new LogError(
+      "bad-option",
+      `nominalVPerCell (${resolved.nominalVPerCell} V) must be above floorVPerCell (${resolved.floorVPerCell} V).`,
+    );
   }
   return resolved;
 }
@@ -67,7 +77,7 @@ export async function analyseLog(chunks: ChunkSource, options?: AnalyseOptions):
   const opts = resolveOptions(options);
   const acc = new Accumulator({
     holdDelayS: opts.holdDelayS,
-    stopTemperatureC: opts.stopTemperatureC ?? Number.POSITIVE_INFINITY,
+    stopTemperatureC: opts.ratingStopTemperatureC,
     loadThresholdA: opts.loadThresholdA,
   });
   const sink = new SampleSink(acc, opts.mapping);
@@ -78,7 +88,10 @@ export async function analyseLog(chunks: ChunkSource, options?: AnalyseOptions):
   } catch (error) {
     if (error instanceof LogError) throw error;
     // A fault in our own code still reaches callers as one plain message, never a stack.
-    throw new LogError("internal", `The log could not be analysed (internal error: ${error instanceof Error ? error.message : String(error)}).`);
+    throw new LogError(
+      "internal",
+      `The log could not be analysed (internal error: ${error instanceof Error ? error.message : String(error)}).`,
+    );
   }
   const { figures, sign } = computed;
   const raw = acc.curvePoints();
@@ -89,12 +102,18 @@ export async function analyseLog(chunks: ChunkSource, options?: AnalyseOptions):
     temperatureC: Number.isFinite(p.temperatureC) ? p.temperatureC : null,
     capacityMah: (sign === 1 ? p.positiveChargeAs : p.negativeChargeAs) / 3.6,
   }));
-  const curve = lttb(points, opts.curvePoints, (p) => p.timeS, (p) => p.voltageV);
+  const curve = lttb(
+    points,
+    opts.curvePoints,
+    (p) => p.timeS,
+    (p) => p.voltageV,
+  );
   return {
     figures,
     curve,
     parameters: {
       holdDelayS: opts.holdDelayS,
+      stopTemperatureC: opts.ratingStopTemperatureC,
       activationEnergyKJPerMol: opts.activationEnergyKJPerMol,
       nominalVPerCell: opts.nominalVPerCell,
       floorVPerCell: opts.floorVPerCell,

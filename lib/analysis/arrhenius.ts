@@ -20,13 +20,17 @@ export const ZERO_CELSIUS_K = 273.15;
 export const REFERENCE_TEMPERATURE_C = 25;
 
 /** Ecker et al., J. Electrochem. Soc. 162 (2015) A1836: electrolyte conductivity. Our default. */
-export const ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL = 17.1;
+const ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL = 17.1;
 /** Yamada et al., J. Phys. Chem. C 113 (2009) 14528: interfacial Li-ion transfer in EC-based electrolytes, about 50 kJ/mol. */
 export const ACTIVATION_ENERGY_INTERFACE_KJ_PER_MOL = 50;
 export const DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL = ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL;
 
 /** Factor f with R(toC) = f · R(fromC). Greater than 1 when cooling. */
-export function arrheniusFactor(fromC: number, toC: number, activationEnergyKJPerMol = DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL): number {
+export function arrheniusFactor(
+  fromC: number,
+  toC: number,
+  activationEnergyKJPerMol = DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL,
+): number {
   const fromK = fromC + ZERO_CELSIUS_K;
   const toK = toC + ZERO_CELSIUS_K;
   if (!(fromK > 0) || !(toK > 0)) return Number.NaN;

@@ -6,7 +6,10 @@
 import { inferCells } from "./cells";
 import type { Figures } from "./types";
 
-export type CardCheck = { code: "cutoff-not-reached" | "cells-mismatch" | "load-mismatch" | "stop-temperature-passed"; message: string };
+export type CardCheck = {
+  code: "cutoff-not-reached" | "cells-mismatch" | "load-mismatch" | "stop-temperature-passed";
+  message: string;
+};
 
 export type StatedCard = {
   packCells: number;
@@ -42,7 +45,12 @@ export function checkAgainstCard(figures: Figures, card: StatedCard): CardCheck[
     }
   }
   const mainA = figures.mainDischargeCurrentA;
-  if (card.loadCurrentA !== undefined && (card.loadMode ?? "constant-current") === "constant-current" && mainA !== null && card.loadCurrentA > 0) {
+  if (
+    card.loadCurrentA !== undefined &&
+    (card.loadMode ?? "constant-current") === "constant-current" &&
+    mainA !== null &&
+    card.loadCurrentA > 0
+  ) {
     if (Math.abs(mainA - card.loadCurrentA) / card.loadCurrentA > LOAD_TOLERANCE) {
       out.push({
         code: "load-mismatch",
@@ -50,7 +58,11 @@ export function checkAgainstCard(figures: Figures, card: StatedCard): CardCheck[
       });
     }
   }
-  if (card.stopTemperatureC !== undefined && figures.peakTemperatureC !== null && figures.peakTemperatureC > card.stopTemperatureC) {
+  if (
+    card.stopTemperatureC !== undefined &&
+    figures.peakTemperatureC !== null &&
+    figures.peakTemperatureC > card.stopTemperatureC
+  ) {
     out.push({
       code: "stop-temperature-passed",
       message: `The pack reached ${figures.peakTemperatureC.toFixed(1)} °C, above your stated stop temperature of ${card.stopTemperatureC.toFixed(0)} °C. A pack that overheated may be damaged: follow the maker's instructions.`,

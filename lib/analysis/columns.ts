@@ -5,8 +5,17 @@
 import { LogError } from "./errors";
 import { type HeaderGuess, guessHeader } from "./header-names";
 import {
-  CURRENT_UNITS, type CurrentUnit, type Dimension, TEMPERATURE_UNITS, TIME_UNITS, type TemperatureUnit,
-  type TimeUnit, type UnitInfo, VOLTAGE_UNITS, type VoltageUnit, parseField,
+  CURRENT_UNITS,
+  type CurrentUnit,
+  type Dimension,
+  TEMPERATURE_UNITS,
+  TIME_UNITS,
+  type TemperatureUnit,
+  type TimeUnit,
+  type UnitInfo,
+  VOLTAGE_UNITS,
+  type VoltageUnit,
+  parseField,
 } from "./units";
 
 export type ColumnRef = string | number;
@@ -22,6 +31,8 @@ export type ColumnMapping = {
   currentUnit?: CurrentUnit;
   temperatureUnit?: TemperatureUnit;
   hasHeader?: boolean;
+  /** Which sign the log gives discharge current; detected from the data when not given. */
+  dischargeSign?: "positive" | "negative";
 };
 
 export type SampleRow = { fields: string[]; line: number };
@@ -76,22 +87,46 @@ function numericShare(rows: SampleRow[], index: number, decimalComma: boolean): 
 
 function resolveRef(ref: ColumnRef, header: string[] | null, what: string): number {
   if (typeof ref === "number") {
-    if (!Number.isInteger(ref) || ref < 0) throw new LogError("bad-mapping", `The mapping for ${what} must be a column number from 0, got ${ref}.`);
+    if (!Number.isInteger(ref) || ref < 0)
+      throw new LogError("bad-mapping", `The mapping for ${what} must be a column number from 0, got ${ref}.`);
     if (header && ref >= header.length) {
-      throw new LogError("bad-mapping", `The mapping for ${what} is column ${ref}, but the header ${quoteHeader(header)} has only ${header.length} columns (numbered from 0).`);
+      throw new LogError(
+        "bad-mapping",
+        `The mapping for ${what} is column ${ref}, but the header ${quoteHeader(header)} has only ${header.length} columns (numbered from 0).`,
+      );
     }
     return ref;
   }
-  if (!header) throw new LogError("bad-mapping", `The mapping names ${what} as "${ref}", but the log has no header row: use a column number (from 0).`);
+  if (!header)
+    throw new LogError(
+      "bad-mapping",
+      `The mapping names ${what} as "${ref}", but the log has no header row: use a column number (from 0).`,
+    );
   const wanted = ref.trim().toLowerCase();
-  const index = header.findIndex((h) => h.replace(/^\uFEFF/, "").trim().toLowerCase() === wanted);
-  if (index === -1) throw new LogError("bad-mapping", `The mapping names ${what} as "${ref}", which is not in the header ${quoteHeader(header)}.`);
+  const index = header.findIndex(
+    (h) =>
+      h
+        .replace(/^\uFEFF/, "")
+        .trim()
+        .toLowerCase() === wanted,
+  );
+  if (index === -1)
+    throw new LogError(
+      "bad-mapping",
+      `The mapping names ${what} as "${ref}", which is not in the header ${quoteHeader(header)}.`,
+    );
   return index;
 }
 
 type Chosen = { index: number; unit: UnitInfo | null };
 
-function pick(guesses: HeaderGuess[], dimension: Dimension, data: SampleRow[], decimalComma: boolean, taken: Set<number>): Chosen | null {
+function pick(
+  guesses: HeaderGuess[],
+  dimension: Dimension,
+  data: SampleRow[],
+  decimalComma: boolean,
+  taken: Set<number>,
+): Chosen | null {
   const candidates = guesses
     .filter((g) => g.dimension === dimension && g.cellNumber === null && g.score > 0 && !taken.has(g.index))
     .sort((a, b) => b.score - a.score || a.index - b.index);
@@ -106,7 +141,12 @@ function unitFor(guesses: HeaderGuess[] | null, index: number, dimension: Dimens
   return g && g.unit && g.unit.dimension === dimension ? g.unit : null;
 }
 
-function tryPlan(headerRow: SampleRow | null, data: SampleRow[], decimalComma: boolean, mapping: ColumnMapping): ColumnPlan | { missing: string[] } {
+function tryPlan(
+  headerRow: SampleRow | null,
+  data: SampleRow[],
+  decimalComma: boolean,
+  mapping: ColumnMapping,
+): ColumnPlan | { missing: string[] } {
   const header = headerRow ? headerRow.fields : null;
   const guesses = header ? header.map((h, i) => guessHeader(h, i)) : null;
   const taken = new Set<number>();
@@ -128,7 +168,8 @@ function tryPlan(headerRow: SampleRow | null, data: SampleRow[], decimalComma: b
   const time = choose("time");
   const current = choose("current");
   let cells: number[] = [];
-  if (mapping.cellVoltages) cells = mapping.cellVoltages.map((ref, i) => resolveRef(ref, header, `cell ${i + 1} voltage`));
+  if (mapping.cellVoltages)
+    cells = mapping.cellVoltages.map((ref, i) => resolveRef(ref, header, `cell ${i + 1} voltage`));
   else if (guesses) {
     cells = guesses
       .filter((g) => g.cellNumber !== null && numericShare(data, g.index, decimalComma) >= 0.5)
@@ -145,9 +186,12 @@ function tryPlan(headerRow: SampleRow | null, data: SampleRow[], decimalComma: b
 
   const timeUnit = mapping.timeUnit ? TIME_UNITS[mapping.timeUnit] : (time.unit ?? TIME_UNITS.s);
   const voltageStated = mapping.voltageUnit ?? (voltage ? voltage.unit : unitFor(guesses, cells[0] ?? -1, "voltage"));
-  const voltageUnit = typeof voltageStated === "string" ? VOLTAGE_UNITS[voltageStated] : (voltageStated ?? VOLTAGE_UNITS.V);
+  const voltageUnit =
+    typeof voltageStated === "string" ? VOLTAGE_UNITS[voltageStated] : (voltageStated ?? VOLTAGE_UNITS.V);
   const currentUnit = mapping.currentUnit ? CURRENT_UNITS[mapping.currentUnit] : (current.unit ?? CURRENT_UNITS.A);
-  const temperatureUnit = mapping.temperatureUnit ? TEMPERATURE_UNITS[mapping.temperatureUnit] : (temperature?.unit ?? TEMPERATURE_UNITS.C);
+  const temperatureUnit = mapping.temperatureUnit
+    ? TEMPERATURE_UNITS[mapping.temperatureUnit]
+    : (temperature?.unit ?? TEMPERATURE_UNITS.C);
   // Temperature is optional per row, so a short row without it is still a sample.
   const used = [time.index, current.index, voltage?.index ?? 0, ...cells];
   return {
@@ -176,7 +220,10 @@ export function planColumns(rows: SampleRow[], decimalComma: boolean, mapping: C
   if (mapping.hasHeader === false) {
     const plan = tryPlan(null, rows, decimalComma, mapping);
     if ("missing" in plan) {
-      throw new LogError("bad-mapping", `With hasHeader: false the mapping must give column numbers for time, voltage and current; missing: ${listed(plan.missing)}.`);
+      throw new LogError(
+        "bad-mapping",
+        `With hasHeader: false the mapping must give column numbers for time, voltage and current; missing: ${listed(plan.missing)}.`,
+      );
     }
     return plan;
   }
@@ -195,7 +242,12 @@ export function planColumns(rows: SampleRow[], decimalComma: boolean, mapping: C
     }
   }
   if (!firstText) {
-    if (mapping.hasHeader === true) throw new LogError("columns-not-found", `The mapping says the log has a header row, but line ${rows[0]?.line ?? 1} holds only numbers.`, rows[0]?.line);
+    if (mapping.hasHeader === true)
+      throw new LogError(
+        "columns-not-found",
+        `The mapping says the log has a header row, but line ${rows[0]?.line ?? 1} holds only numbers.`,
+        rows[0]?.line,
+      );
     const plan = tryPlan(null, rows, decimalComma, mapping);
     if (!("missing" in plan)) return plan;
     throw new LogError(

@@ -97,8 +97,12 @@ export class CurveBuckets {
         const aBase = a * size;
         const bBase = b * size;
         const first = aBase;
-        const min = (d[aBase + FIELDS + 1] as number) <= (d[bBase + FIELDS + 1] as number) ? aBase + FIELDS : bBase + FIELDS;
-        const max = (d[aBase + 2 * FIELDS + 1] as number) >= (d[bBase + 2 * FIELDS + 1] as number) ? aBase + 2 * FIELDS : bBase + 2 * FIELDS;
+        const min =
+          (d[aBase + FIELDS + 1] as number) <= (d[bBase + FIELDS + 1] as number) ? aBase + FIELDS : bBase + FIELDS;
+        const max =
+          (d[aBase + 2 * FIELDS + 1] as number) >= (d[bBase + 2 * FIELDS + 1] as number)
+            ? aBase + 2 * FIELDS
+            : bBase + 2 * FIELDS;
         const tmp = new Float64Array(size);
         tmp.set(d.subarray(first, first + FIELDS), 0);
         tmp.set(d.subarray(min, min + FIELDS), FIELDS);

@@ -11,6 +11,8 @@ export type LogErrorCode =
   | "too-few-samples"
   | "time-backwards"
   | "too-many-broken-lines"
+  /** A quote opened and never closed: the rest of the log would be one field. */
+  | "unclosed-quote"
   | "no-discharge"
   | "bad-option"
   /** A fault in Sagline's own code, reported as a message instead of a stack. Tests treat it as a failure. */

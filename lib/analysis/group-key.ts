@@ -4,6 +4,10 @@
  * close enough to compare (reasons in content/methods-figures.md):
  *   resistance method · ambient band · cut-off per cell (0.1 V) · load-rate band · pack age band.
  * Key strings use only [a-z0-9.-_] so they are safe in URLs and file names.
+ *
+ * The resistance part is what the LOG shows (groupKeyForAnalysis): the method the analysis used to
+ * read the DC resistance, not the one typed on the method card — a result whose card says "charger
+ * read-out" carries a resistance Sagline read from its log's step, and is compared as such.
  */
 export type ResistanceMethod = "iec-61960-two-level" | "dc-step" | "ac-1khz" | "charger-readout";
 
@@ -81,12 +85,43 @@ export function ageBand(cyclesBeforeTest: number): Band {
 export function resistanceBand(method: string): Band {
   const known = RESISTANCE_METHODS[method as ResistanceMethod];
   if (known) return { key: method, label: known };
-  const slug = method.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "unknown";
+  const slug =
+    method
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "") || "unknown";
   return { key: `other-${slug}`.slice(0, 40), label: method || "unknown method" };
 }
 
+/** The method the analysis used (Figures.dcResistanceMethod): two-level, step, or none. */
+export type AnalysedResistanceMethod = "iec-61960-two-level" | "step" | null;
+/** Key part for results whose log gave no DC resistance. */
+export const NO_DC_RESISTANCE_KEY = "dc-none";
+const NO_DC_RESISTANCE_LABEL = "no DC resistance in the log";
+
+export function analysedResistanceBand(method: AnalysedResistanceMethod): Band {
+  if (method === "iec-61960-two-level") return { key: method, label: RESISTANCE_METHODS[method] };
+  if (method === "step") return { key: "dc-step", label: RESISTANCE_METHODS["dc-step"] };
+  return { key: NO_DC_RESISTANCE_KEY, label: NO_DC_RESISTANCE_LABEL };
+}
+
+/**
+ * The like-for-like key of an analysed result: the resistance part from the analysis
+ * (figures.dcResistanceMethod), the other parts from the method card. Use this for new results.
+ */
+export function groupKeyForAnalysis(
+  method: AnalysedResistanceMethod,
+  card: Omit<MethodCardForKey, "resistanceMethod">,
+): GroupKey {
+  return keyFromBands(analysedResistanceBand(method), card);
+}
+
+/** The key from a method card's typed resistance method (older results, and cards without a log). */
 export function groupKey(card: MethodCardForKey): GroupKey {
-  const resistance = resistanceBand(card.resistanceMethod);
+  return keyFromBands(resistanceBand(card.resistanceMethod), card);
+}
+
+function keyFromBands(resistance: Band, card: Omit<MethodCardForKey, "resistanceMethod">): GroupKey {
   const ambient = ambientBand(card.ambientC);
   const cutoff = cutoffBand(card.cutoffVPerCell);
   const rate = rateBand(card.loadCurrentA, card.ratedMah);
@@ -116,6 +151,7 @@ function same(band: Band, key: string): string | null {
 }
 
 function resistanceFromKey(key: string): string | null {
+  if (key === NO_DC_RESISTANCE_KEY) return NO_DC_RESISTANCE_LABEL;
   if (key in RESISTANCE_METHODS) return RESISTANCE_METHODS[key as ResistanceMethod];
   const m = /^other-([a-z0-9-]+)$/.exec(key);
   return m?.[1] ? m[1].replace(/-/g, " ") : null;

@@ -23,9 +23,37 @@ const TEMP_WORDS = new Set(["temperature", "temp", "tbat", "tpack", "ntc", "ther
 const TEMP_PREFER = new Set(["pack", "cell", "batt", "battery", "probe", "external", "ext", "surface"]);
 /** Columns that name a limit, a setting or a part other than the pack: never a measured pack value. */
 const EXCLUDE = new Set([
-  "limit", "set", "setpoint", "target", "max", "min", "input", "supply", "cutoff", "cut", "stop",
-  "ambient", "amb", "room", "air", "internal", "int", "charger", "board", "fet", "mosfet", "cpu",
-  "capacity", "energy", "power", "resistance", "ir", "soc", "mah", "wh", "ah",
+  "limit",
+  "set",
+  "setpoint",
+  "target",
+  "max",
+  "min",
+  "input",
+  "supply",
+  "cutoff",
+  "cut",
+  "stop",
+  "ambient",
+  "amb",
+  "room",
+  "air",
+  "internal",
+  "int",
+  "charger",
+  "board",
+  "fet",
+  "mosfet",
+  "cpu",
+  "capacity",
+  "energy",
+  "power",
+  "resistance",
+  "ir",
+  "soc",
+  "mah",
+  "wh",
+  "ah",
 ]);
 const NAME_PREFIXES = ["temperature", "voltage", "current", "time", "temp"];
 
@@ -41,14 +69,20 @@ function extractUnit(text: string): { name: string; unit: string | null } {
     return { name, unit: (bracket[1] ?? "").trim() };
   }
   const slash = text.lastIndexOf("/");
-  if (slash > 0 && lookUpUnit(text.slice(slash + 1))) return { name: text.slice(0, slash), unit: text.slice(slash + 1).trim() };
+  if (slash > 0 && lookUpUnit(text.slice(slash + 1)))
+    return { name: text.slice(0, slash), unit: text.slice(slash + 1).trim() };
   const inUnit = /^(.*)\s+in\s+(\S+)$/.exec(text);
   if (inUnit && lookUpUnit(inUnit[2] ?? "")) return { name: inUnit[1] ?? "", unit: (inUnit[2] ?? "").trim() };
   return { name: text, unit: null };
 }
 
 function normalise(raw: string): string {
-  return splitCamel(raw.replace(/^\uFEFF/, "").trim().replace(/^"|"$/g, ""))
+  return splitCamel(
+    raw
+      .replace(/^\uFEFF/, "")
+      .trim()
+      .replace(/^"|"$/g, ""),
+  )
     .toLowerCase()
     .replace(/µ/g, "u")
     .replace(/℃/g, "°c")
@@ -58,7 +92,9 @@ function normalise(raw: string): string {
 }
 
 function cellNumberOf(words: string[], joined: string): number | null {
-  const cell = /(?:^|\s)(?:cell|vcell|zelle)\s*[-_#]?\s*(\d{1,2})(?:\s|$)/.exec(joined) ?? /^(?:v|u|vc|c)\s*[-_]?\s*(\d{1,2})$/.exec(joined);
+  const cell =
+    /(?:^|\s)(?:cell|vcell|zelle)\s*[-_#]?\s*(\d{1,2})(?:\s|$)/.exec(joined) ??
+    /^(?:v|u|vc|c)\s*[-_]?\s*(\d{1,2})$/.exec(joined);
   if (!cell) return null;
   const n = Number(cell[1]);
   if (!(n >= 1 && n <= 24)) return null;

@@ -3,10 +3,13 @@
  * label, the like-for-like group's approved values and the duplicate/proposed facts from the database.
  * A flag never decides anything; it points a moderator at something to check, in plain words.
  */
-import type { Figures } from "./types";
+import type { CurvePoint, Figures } from "./types";
 import { median, modifiedZScores, MODIFIED_Z_THRESHOLD } from "./statistics";
+import { compareFingerprints, curveFingerprint, type CurveFingerprint } from "./curve-fingerprint";
+import { noiseCheck } from "./log-noise";
 
-export type PlausibilityFlag = { code: PlausibilityCode; message: string };
+/** `resultIds`: the other results a flag points at (a copied log), so the review page can link them. */
+export type PlausibilityFlag = { code: PlausibilityCode; message: string; resultIds?: number[] };
 
 export const plausibilityCodes = [
   "capacity-above-rated",
@@ -17,6 +20,8 @@ export const plausibilityCodes = [
   "temperature-mismatch",
   "cells-mismatch",
   "duplicate-log",
+  "copied-curve",
+  "no-noise",
   "proposed-catalogue",
 ] as const;
 export type PlausibilityCode = (typeof plausibilityCodes)[number];
@@ -30,6 +35,8 @@ export const plausibilityLabels: Record<PlausibilityCode, string> = {
   "temperature-mismatch": "Ambient vs start temperature",
   "cells-mismatch": "Cells in series disagree",
   "duplicate-log": "Log already submitted",
+  "copied-curve": "Same curve as another log",
+  "no-noise": "No measurement noise",
   "proposed-catalogue": "New maker or pack",
 };
 
@@ -51,7 +58,14 @@ export const START_TEMPERATURE_GAP_C = 5;
 export type PlausibilityInput = {
   figures: Pick<
     Figures,
-    "capacityMah" | "capacityRatio" | "labelRatio" | "sagLimitedC" | "minVoltagePerCellV" | "startTemperatureC" | "cells" | "timeToStopTemperatureS"
+    | "capacityMah"
+    | "capacityRatio"
+    | "labelRatio"
+    | "sagLimitedC"
+    | "minVoltagePerCellV"
+    | "startTemperatureC"
+    | "cells"
+    | "timeToStopTemperatureS"
   >;
   method: { ambientTemperatureC: number; cutoffVPerCell: number };
   pack: { cellsInSeries: number; ratedCapacityMah: number };
@@ -59,6 +73,10 @@ export type PlausibilityInput = {
   group: { labelRatios: number[]; sagLimitedCs: number[]; capacityRatios: number[] };
   /** Another result already carries a log with the same SHA-256. */
   duplicateLogResultIds: number[];
+  /** The result's stored chart curve (for the copy and noise checks; left out, neither is judged). */
+  curve?: CurvePoint[];
+  /** Other results whose curve key is near this one's, with their fingerprints (db/queries gathers them). */
+  curveCandidates?: { resultId: number; fingerprint: CurveFingerprint }[];
   makerProposed: boolean;
   packProposed: boolean;
 };
@@ -115,7 +133,8 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
   const zCap = groupModifiedZ(capacityRatio, group.capacityRatios);
   if (zCap !== null && Math.abs(zCap) > MODIFIED_Z_THRESHOLD) outliers.push(`capacity ratio (modified z ${n2(zCap)})`);
   const zLabel = groupModifiedZ(f.labelRatio, group.labelRatios);
-  if (zLabel !== null && Math.abs(zLabel) > MODIFIED_Z_THRESHOLD) outliers.push(`label ratio (modified z ${n2(zLabel)})`);
+  if (zLabel !== null && Math.abs(zLabel) > MODIFIED_Z_THRESHOLD)
+    outliers.push(`label ratio (modified z ${n2(zLabel)})`);
   if (outliers.length) {
     flags.push({
       code: "group-outlier",
@@ -138,7 +157,10 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
     }
   }
 
-  if (f.startTemperatureC !== null && Math.abs(f.startTemperatureC - method.ambientTemperatureC) > START_TEMPERATURE_GAP_C) {
+  if (
+    f.startTemperatureC !== null &&
+    Math.abs(f.startTemperatureC - method.ambientTemperatureC) > START_TEMPERATURE_GAP_C
+  ) {
     flags.push({
       code: "temperature-mismatch",
       message: `The stated ambient is ${n2(method.ambientTemperatureC)} °C but the log starts at ${n2(f.startTemperatureC)} °C, more than ${START_TEMPERATURE_GAP_C} °C apart: the pack was not at room temperature, or a probe was misplaced.`,
@@ -156,13 +178,54 @@ export function plausibilityFlags(input: PlausibilityInput): PlausibilityFlag[] 
     flags.push({
       code: "duplicate-log",
       message: `The same log file (identical content hash) was already submitted as result ${input.duplicateLogResultIds.map((id) => `#${id}`).join(", ")}.`,
+      resultIds: input.duplicateLogResultIds,
     });
   }
 
+  flags.push(...curveFlags(input));
+
   if (input.makerProposed || input.packProposed) {
-    const what = [input.makerProposed ? "a new maker" : null, input.packProposed ? "a new pack" : null].filter(Boolean).join(" and ");
-    flags.push({ code: "proposed-catalogue", message: `This result proposes ${what}; check the label details before approving.` });
+    const what = [input.makerProposed ? "a new maker" : null, input.packProposed ? "a new pack" : null]
+      .filter(Boolean)
+      .join(" and ");
+    flags.push({
+      code: "proposed-catalogue",
+      message: `This result proposes ${what}; check the label details before approving.`,
+    });
   }
 
+  return flags;
+}
+
+/**
+ * The log's curve is another result's samples scaled or shifted (a byte-identical file is already
+ * "duplicate-log"), or it has no measurement noise at all. See curve-fingerprint.ts and log-noise.ts.
+ */
+function curveFlags(input: PlausibilityInput): PlausibilityFlag[] {
+  if (!input.curve) return [];
+  const flags: PlausibilityFlag[] = [];
+  const own = curveFingerprint(input.curve);
+  if (own) {
+    const sameFile = new Set(input.duplicateLogResultIds);
+    const copies = (input.curveCandidates ?? [])
+      .filter((c) => !sameFile.has(c.resultId) && compareFingerprints(own, c.fingerprint).same)
+      .map((c) => c.resultId)
+      .sort((a, b) => a - b);
+    if (copies.length) {
+      flags.push({
+        code: "copied-curve",
+        message: `The discharge curve is the same as the log of result ${copies.map((id) => `#${id}`).join(", ")}, only scaled or shifted: the same samples, not a new measurement. Compare the two before approving.`,
+        resultIds: copies,
+      });
+    }
+  }
+  const noise = noiseCheck(input.curve);
+  if (noise.judged && noise.noiseless) {
+    const mv = (v: number) => `${Math.round(v * 1e6) / 1000} mV`;
+    flags.push({
+      code: "no-noise",
+      message: `The voltage under load is smooth down to the log's last digit (${mv(noise.medianResidualV)} typical wobble at a resolution of ${mv(noise.resolutionV)}): real readings always carry some noise, so this log may have been computed rather than measured.`,
+    });
+  }
   return flags;
 }

@@ -2,8 +2,10 @@
  * The public JSON shape of an analysis: every figure at the top level (the agreed fields among
  * them: samples, durationS, cells, capacityMah, energyWh, meanVoltageV, minVoltageV, peakCurrentA,
  * peakTemperatureC, temperatureRiseC, holdVoltagePerCellV, dcResistanceMohm, dcResistanceMethod,
- * resistanceAt25CMohm, sagLimitedC, capacityRatio, labelRatio, specificEnergyWhKg, warnings), then
- * the parameters used. The command-line tool and POST /api/v1/analyse both answer with it.
+ * resistanceAt25CMohm, sagLimitedC, capacityRatio, labelRatio, specificEnergyWhKg, warnings; since
+ * issue 12 also discharges, headlineDischarge, retention, sampleIntervalS, reachedCutoff, warningCodes,
+ * sagLimitedCEstimate with sagLimitedCAssumptions, sustainedCMeasured with sustainedCReason and
+ * sustainedCRule), then the parameters used. The command-line tool and POST /api/v1/analyse both answer with it.
  */
 import type { CardCheck } from "./card-checks";
 import type { Analysis, AnalysisParameters, CurvePoint, Figures } from "./types";

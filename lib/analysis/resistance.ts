@@ -6,8 +6,10 @@
  * end of the low step and U2, I2 read 1 s into the high step, R = (U1 − U2) / (I2 − I1).
  * It is the rated capacity divided by one hour (5000 mAh → It = 5 A).
  * Step method (our fallback, labelled as such): the same formula across the rest → load step
- * of the main discharge, U1/I1 the last rest sample, U2/I2 1 s after it.
+ * of the main discharge, U1/I1 the last rest sample, U2/I2 1 s after the current edge.
+ * Both read U2 at 1 s after the edge, interpolated (readings.ts).
  */
+import { PointReading } from "./readings";
 
 /** R = (U1 − U2) / (I2 − I1), in ohms. NaN when the step carries no current change. */
 export function twoLevelResistanceOhm(u1V: number, i1A: number, u2V: number, i2A: number): number {
@@ -18,14 +20,18 @@ export function twoLevelResistanceOhm(u1V: number, i1A: number, u2V: number, i2A
 
 export type TwoLevelReading = {
   lowStartT: number;
+  /** The current edge between the levels: midway between the last low and the first high sample. */
   stepT: number;
+  /** Sample interval around that edge. */
+  edgeIntervalS: number;
+  /** The last sample of the low level, and the means over its last second (for a rippling current). */
   u1V: number;
   i1A: number;
-  u2V: number;
-  i2A: number;
-  temperatureC: number;
-  /** True when no sample fell close to 1 s into the high step and the nearest one was used. */
-  late: boolean;
+  u1MeanV: number;
+  i1MeanA: number;
+  lowWindowSamples: number;
+  /** The high level read 1 s after the edge. */
+  high: PointReading;
 };
 
 export const TWO_LEVEL_MIN_LOW_S = 5;
@@ -33,12 +39,27 @@ export const TWO_LEVEL_MIN_LOW_S = 5;
 export const TWO_LEVEL_MAX_LOW_S = 60;
 export const TWO_LEVEL_RATIO_MIN = 3;
 export const TWO_LEVEL_RATIO_MAX = 8;
+/** Samples of the current level kept for the means over its last second. */
+const RING = 64;
 
 function levelTolerance(currentA: number, thresholdA: number): number {
   return Math.max(0.25 * Math.abs(currentA), 2 * thresholdA);
 }
 
-type Pending = { lowStartT: number; stepT: number; u1: number; i1: number; pT: number; pV: number; pI: number; pTemp: number; hasPrev: boolean };
+type Pending = {
+  lowStartT: number;
+  lastLowT: number;
+  u1: number;
+  i1: number;
+  u1Mean: number;
+  i1Mean: number;
+  lowN: number;
+  high: PointReading;
+  pT: number;
+  pV: number;
+  pI: number;
+  pTemp: number;
+};
 
 /**
  * Watches the samples of one load stretch for a low current level held at least 5 s followed
@@ -58,13 +79,20 @@ export class TwoLevelDetector {
   private lastTimeS = Number.NaN;
   private lastVoltageV = Number.NaN;
   private lastCurrentA = Number.NaN;
+  private readonly ringT = new Float64Array(RING);
+  private readonly ringV = new Float64Array(RING);
+  private readonly ringA = new Float64Array(RING);
+  private ringAt = 0;
   private pending: Pending | null = null;
   private pendingLowA = 0;
   private pendingHighA = 0;
   /** Nothing more to look for in this stretch. */
   finished = false;
 
-  constructor(private readonly thresholdA: number, onsetTimeS: number) {
+  constructor(
+    private readonly thresholdA: number,
+    onsetTimeS = 0,
+  ) {
     this.levelStartS = onsetTimeS;
   }
 
@@ -72,77 +100,137 @@ export class TwoLevelDetector {
     if (this.pending === null && i >= this.lowA && i <= this.highA) {
       if (t - this.levelStartS > TWO_LEVEL_MAX_LOW_S) this.finished = true;
       // The common case, once per sample: still on the same level.
-      this.n++;
-      this.sumA += i;
-      this.lastTimeS = t;
-      this.lastVoltageV = v;
-      this.lastCurrentA = i;
+      this.onLevel(t, v, i);
       return null;
     }
     return this.addSlow(t, v, i, temp);
+  }
+
+  private onLevel(t: number, v: number, i: number): void {
+    this.n++;
+    this.sumA += i;
+    this.lastTimeS = t;
+    this.lastVoltageV = v;
+    this.lastCurrentA = i;
+    const at = this.ringAt++ % RING;
+    this.ringT[at] = t;
+    this.ringV[at] = v;
+    this.ringA[at] = i;
+  }
+
+  /** Means of voltage and current over the current level's last second (from its last RING samples). */
+  private lastSecond(): { v: number; a: number; n: number } {
+    let n = 0;
+    let sv = 0;
+    let sa = 0;
+    const count = Math.min(this.ringAt, RING, this.n);
+    for (let k = 1; k <= count; k++) {
+      const at = (this.ringAt - k) % RING;
+      if ((this.ringT[at] as number) < this.lastTimeS - 1) break;
+      n++;
+      sv += this.ringV[at] as number;
+      sa += this.ringA[at] as number;
+    }
+    return n > 0 ? { v: sv / n, a: sa / n, n } : { v: this.lastVoltageV, a: this.lastCurrentA, n: 1 };
   }
 
   private addSlow(t: number, v: number, i: number, temp: number): TwoLevelReading | null {
     let reading: TwoLevelReading | null = null;
     const p = this.pending;
     if (p) {
-      if (i < this.pendingLowA || i > this.pendingHighA) {
-        this.pending = null;
-        this.finished = true;
-      } else reading = this.readHigh(p, t, v, i, temp);
+      if (i < this.pendingLowA || i > this.pendingHighA) reading = this.close();
+      else reading = this.readHigh(p, true, t, v, i, temp);
     }
     if (this.n > 0 && i >= this.lowA && i <= this.highA) {
-      this.n++;
-      this.sumA += i;
-      this.lastTimeS = t;
-      this.lastVoltageV = v;
-      this.lastCurrentA = i;
+      this.onLevel(t, v, i);
       return reading;
     }
-    if (this.n > 0) {
+    if (this.n > 0 && !this.finished) {
       const lowS = this.lastTimeS - this.levelStartS;
       const ratio = i / (this.sumA / this.n);
-      if (lowS >= TWO_LEVEL_MIN_LOW_S - 0.1 && lowS <= TWO_LEVEL_MAX_LOW_S && ratio >= TWO_LEVEL_RATIO_MIN && ratio <= TWO_LEVEL_RATIO_MAX) {
-        const fresh: Pending = { lowStartT: this.levelStartS, stepT: this.lastTimeS, u1: this.lastVoltageV, i1: this.lastCurrentA, pT: t, pV: v, pI: i, pTemp: temp, hasPrev: false };
+      if (
+        lowS >= TWO_LEVEL_MIN_LOW_S - 0.1 &&
+        lowS <= TWO_LEVEL_MAX_LOW_S &&
+        ratio >= TWO_LEVEL_RATIO_MIN &&
+        ratio <= TWO_LEVEL_RATIO_MAX
+      ) {
+        const edge = (this.lastTimeS + t) / 2;
+        const mean = this.lastSecond();
+        const fresh: Pending = {
+          lowStartT: this.levelStartS,
+          lastLowT: this.lastTimeS,
+          u1: this.lastVoltageV,
+          i1: this.lastCurrentA,
+          u1Mean: mean.v,
+          i1Mean: mean.a,
+          lowN: mean.n,
+          high: new PointReading(edge + 1),
+          pT: t,
+          pV: v,
+          pI: i,
+          pTemp: temp,
+        };
         const tol = levelTolerance(i, this.thresholdA);
         this.pending = fresh;
         this.pendingLowA = i - tol;
         this.pendingHighA = i + tol;
-        reading = this.readHigh(fresh, t, v, i, temp) ?? reading;
+        reading = this.readHigh(fresh, false, t, v, i, temp) ?? reading;
       } else if (lowS >= 1) this.finished = true;
       this.levelStartS = this.lastTimeS;
     }
     const tol = levelTolerance(i, this.thresholdA);
-    this.n = 1;
-    this.sumA = i;
+    this.n = 0;
+    this.sumA = 0;
+    this.ringAt = 0;
     this.lowA = i - tol;
     this.highA = i + tol;
-    this.lastTimeS = t;
-    this.lastVoltageV = v;
-    this.lastCurrentA = i;
+    this.onLevel(t, v, i);
     return reading;
   }
 
-  private readHigh(p: Pending, t: number, v: number, i: number, temp: number): TwoLevelReading | null {
-    const target = p.stepT + 1;
-    if (t < target) {
-      p.pT = t;
-      p.pV = v;
-      p.pI = i;
-      p.pTemp = temp;
-      p.hasPrev = true;
-      return null;
-    }
+  /** The high level (or the stretch) ended: a pending reading keeps what it has. */
+  close(): TwoLevelReading | null {
+    const p = this.pending;
     this.pending = null;
     this.finished = true;
-    const base = { lowStartT: p.lowStartT, stepT: p.stepT, u1V: p.u1, i1A: p.i1 };
-    if (p.hasPrev && p.pT < target) {
-      const f = (target - p.pT) / (t - p.pT);
-      const tempAt = p.pTemp === p.pTemp && temp === temp ? p.pTemp + f * (temp - p.pTemp) : temp;
-      return { ...base, u2V: p.pV + f * (v - p.pV), i2A: p.pI + f * (i - p.pI), temperatureC: tempAt, late: false };
-    }
-    if (t - target <= 0.5) return { ...base, u2V: v, i2A: i, temperatureC: temp, late: t - target > 0.25 };
-    return null;
+    if (!p) return null;
+    // A 1 s pulse ends at most half the edge's interval before its stated 1 s point.
+    p.high.close(p.high.atS - 1 - p.lastLowT + 1e-9);
+    return p.high.valid ? this.finish(p) : null;
+  }
+
+  private readHigh(
+    p: Pending,
+    hasPrev: boolean,
+    t: number,
+    v: number,
+    i: number,
+    temp: number,
+  ): TwoLevelReading | null {
+    p.high.add(hasPrev, p.pT, p.pV, p.pI, p.pTemp, t, v, i, temp);
+    p.pT = t;
+    p.pV = v;
+    p.pI = i;
+    p.pTemp = temp;
+    if (!p.high.done) return null;
+    this.pending = null;
+    this.finished = true;
+    return p.high.valid ? this.finish(p) : null;
+  }
+
+  private finish(p: Pending): TwoLevelReading {
+    const edge = p.high.atS - 1;
+    return {
+      lowStartT: p.lowStartT,
+      stepT: edge,
+      edgeIntervalS: 2 * (edge - p.lastLowT),
+      u1V: p.u1,
+      i1A: p.i1,
+      u1MeanV: p.u1Mean,
+      i1MeanA: p.i1Mean,
+      lowWindowSamples: p.lowN,
+      high: p.high,
+    };
   }
 }
 
@@ -150,13 +238,24 @@ export class TwoLevelDetector {
  * Current at which a pack resting at `nominalVPerCell` would sag to `floorVPerCell` through its
  * DC resistance: I = S · (Vnominal − Vfloor) / Rpack = (Vnominal − Vfloor) / Rcell.
  */
-export function sagLimitedCurrentA(resistancePackOhm: number, cells: number, nominalVPerCell: number, floorVPerCell: number): number {
+export function sagLimitedCurrentA(
+  resistancePackOhm: number,
+  cells: number,
+  nominalVPerCell: number,
+  floorVPerCell: number,
+): number {
   if (!(resistancePackOhm > 0) || !(cells > 0)) return Number.NaN;
   return (cells * (nominalVPerCell - floorVPerCell)) / resistancePackOhm;
 }
 
 /** Sag-limited current ÷ rated capacity in Ah: a C rate comparable with the label. */
-export function sagLimitedC(resistancePackOhm: number, cells: number, ratedMah: number, nominalVPerCell: number, floorVPerCell: number): number {
+export function sagLimitedC(
+  resistancePackOhm: number,
+  cells: number,
+  ratedMah: number,
+  nominalVPerCell: number,
+  floorVPerCell: number,
+): number {
   if (!(ratedMah > 0)) return Number.NaN;
   return sagLimitedCurrentA(resistancePackOhm, cells, nominalVPerCell, floorVPerCell) / (ratedMah / 1000);
 }

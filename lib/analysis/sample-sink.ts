@@ -26,6 +26,9 @@ const MAX_TEMP_C = 300;
 const MILLIVOLT_GUESS_V = 150;
 /** Samples in a row with time earlier than the last good one before the log is refused. */
 export const BACKWARDS_RUN_LIMIT = 3;
+const DAY_S = 86400;
+/** A clock that jumps back by more than this (and lands within an hour after midnight's worth) passed midnight. */
+const MIDNIGHT_JUMP_MIN_S = DAY_S / 2;
 
 export class SampleSink implements RowHandler {
   plan: ColumnPlan | null = null;
@@ -44,6 +47,9 @@ export class SampleSink implements RowHandler {
   private lastTimeS = Number.NEGATIVE_INFINITY;
   private lastGoodLine = 0;
   private backwardsRun = 0;
+  /** Added to every time read after a clock-time log passed midnight (one day per passing). */
+  private dayOffsetS = 0;
+  midnights = 0;
 
   constructor(
     private readonly accumulator: Accumulator,
@@ -97,7 +103,10 @@ export class SampleSink implements RowHandler {
       }
     }
     if (data.length > 0) this.read(data, 0, data.length, firstLine);
-    if (this.preambleLines > 0) this.warnings.push(`${this.preambleLines} line${this.preambleLines > 1 ? "s" : ""} before the header row skipped.`);
+    if (this.preambleLines > 0)
+      this.warnings.push(
+        `${this.preambleLines} line${this.preambleLines > 1 ? "s" : ""} before the header row skipped.`,
+      );
   }
 
   private guessMillivolts(plan: ColumnPlan): void {
@@ -112,7 +121,9 @@ export class SampleSink implements RowHandler {
     const middle = values[Math.floor(values.length / 2)];
     if (middle !== undefined && middle > MILLIVOLT_GUESS_V) {
       this.voltageScale = VOLTAGE_UNITS.mV.scale;
-      this.warnings.push("The voltage column states no unit and its values are too large for volts: read as millivolts.");
+      this.warnings.push(
+        "The voltage column states no unit and its values are too large for volts: read as millivolts.",
+      );
     }
   }
 
@@ -132,6 +143,7 @@ export class SampleSink implements RowHandler {
     const I = batch.currentA;
     const TEMP = batch.temperatureC;
     const CELL = batch.minCellVoltageV;
+    const SPREAD = batch.cellSpreadV;
     const dc = this.decimalComma;
     const width = plan.width;
     const ti = plan.time;
@@ -145,27 +157,36 @@ export class SampleSink implements RowHandler {
     const tempScale = plan.temperatureUnit.scale;
     const tempOffset = plan.temperatureUnit.offset;
     let lastT = this.lastTimeS;
+    let dayOffsetS = this.dayOffsetS;
     let lastGood = -1;
     let n = 0;
     for (let k = from; k < to; k++) {
       const fields = rows[k] as string[];
       if (fields.length < width) {
         if (fields.length === 1 && (fields[0] as string).trim().length === 0) this.blankLines++;
-        else this.broken(firstLine + k - from, `it has ${fields.length} field${fields.length === 1 ? "" : "s"}, ${width} needed`);
+        else
+          this.broken(
+            firstLine + k - from,
+            `it has ${fields.length} field${fields.length === 1 ? "" : "s"}, ${width} needed`,
+          );
         continue;
       }
-      const t = readNumber(fields[ti], dc) * tScale;
+      let t = readNumber(fields[ti], dc) * tScale + dayOffsetS;
       const i = readNumber(fields[ii], dc) * iScale;
       let v: number;
       let minCell = Number.POSITIVE_INFINITY;
+      let spread = 0;
       if (cells.length > 0) {
         v = 0;
+        let maxCell = Number.NEGATIVE_INFINITY;
         for (let c = 0; c < cells.length; c++) {
           const x = readNumber(fields[cells[c] as number], dc) * vScale;
           v += x;
           if (x < minCell) minCell = x;
+          if (x > maxCell) maxCell = x;
         }
         if (!(minCell >= 0 && minCell <= MAX_PACK_V)) minCell = Number.POSITIVE_INFINITY;
+        else spread = maxCell - minCell;
         if (vi >= 0) v = readNumber(fields[vi], dc) * vScale;
       } else v = readNumber(fields[vi], dc) * vScale;
       if (!(t >= -MAX_ABS_TIME_S && t <= MAX_ABS_TIME_S)) {
@@ -173,12 +194,27 @@ export class SampleSink implements RowHandler {
         continue;
       }
       if (!(v >= 0 && v <= MAX_PACK_V)) {
-        this.broken(firstLine + k - from, `voltage "${vi >= 0 ? fields[vi] : "(sum of cells)"}" is not a usable number`);
+        this.broken(
+          firstLine + k - from,
+          `voltage "${vi >= 0 ? fields[vi] : "(sum of cells)"}" is not a usable number`,
+        );
         continue;
       }
       if (!(i >= -MAX_ABS_CURRENT_A && i <= MAX_ABS_CURRENT_A)) {
         this.broken(firstLine + k - from, `current "${fields[ii]}" is not a usable number`);
         continue;
+      }
+      if (
+        t < lastT &&
+        lastT - t > MIDNIGHT_JUMP_MIN_S &&
+        t + DAY_S - lastT < 3600 &&
+        (fields[ti] as string).includes(":")
+      ) {
+        // Clock time ("hh:mm:ss") that passed midnight: the clock runs on, a day later.
+        dayOffsetS += DAY_S;
+        this.dayOffsetS = dayOffsetS;
+        this.midnights++;
+        t += DAY_S;
       }
       if (t < lastT) {
         if (lastGood >= 0) {
@@ -201,6 +237,7 @@ export class SampleSink implements RowHandler {
       I[n] = i;
       TEMP[n] = temp;
       CELL[n] = minCell;
+      SPREAD[n] = spread;
       n++;
     }
     this.lastTimeS = lastT;

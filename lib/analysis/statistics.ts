@@ -67,7 +67,9 @@ export function outlierIndexes(values: number[], threshold = MODIFIED_Z_THRESHOL
 }
 
 /** Median, count and spread of a group's values; null when there is no finite value. */
-export function summarise(values: number[]): { median: number; n: number; min: number; max: number; q1: number; q3: number } | null {
+export function summarise(
+  values: number[],
+): { median: number; n: number; min: number; max: number; q1: number; q3: number } | null {
   const s = sorted(values);
   if (s.length === 0) return null;
   return {

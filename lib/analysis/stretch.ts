@@ -1,46 +1,57 @@
 /**
  * One load stretch: consecutive samples with current above the load threshold in one
- * direction. Everything a figure needs from "the main discharge" is gathered here as the
- * samples go by, in constant memory, because which stretch is the longest is known only at
- * the end. Currents are in the stretch's own frame (always positive).
+ * direction. Everything a figure needs from a stretch is gathered here as the samples go by, in
+ * constant memory, because which stretch matters is known only at the end. Currents are in the
+ * stretch's own frame (always positive). Readings at stated times (1 s for the step resistance, the
+ * hold delay for the hold voltage) are measured from the current edge (readings.ts).
  */
-import type { SampleBatch } from "./accumulator";
+import type { SampleBatch } from "./sample-batch";
+import { PointReading } from "./readings";
 import { type TwoLevelReading, TwoLevelDetector } from "./resistance";
 
-export type StretchSettings = { holdDelayS: number; stopTemperatureC: number; loadThresholdA: number };
+export type StretchSettings = { holdDelayS: number; loadThresholdA: number };
 
-/** How far past the wanted instant the first sample may fall and still be used ("sampled late"). */
-const STEP_LATE_S = 1;
+/** Entries of the minimum-voltage trail: previous time and voltage, time, voltage, charge so far. */
+const TRAIL_FIELDS = 5;
 
 export class Stretch {
+  /** The last sample before the load (the earliest the load can have started); durations count from here. */
   readonly onsetTimeS: number;
+  /** Best estimate of when the current changed: midway between the last sample before and the first under load. */
+  readonly edgeTimeS: number;
+  /** The sample interval around the edge (NaN when the log starts under load). */
+  readonly edgeIntervalS: number;
   readonly restValid: boolean;
   readonly restVoltageV: number;
   readonly restCurrentA: number;
+  startTemperatureC: number;
   lastTimeS: number;
+  lastVoltageV: number;
+  /** The sample before the last one, for the slope at the end of the stretch. */
+  endPrevTimeS = Number.NaN;
+  endPrevVoltageV = Number.NaN;
   samples = 0;
   chargeAs = 0;
   energyWs = 0;
   minVoltageV = Number.POSITIVE_INFINITY;
   minCellVoltageV = Number.POSITIVE_INFINITY;
+  /** Largest difference between the highest and lowest cell of one sample (0 without cell columns). */
+  maxCellSpreadV = 0;
   peakCurrentA = 0;
-  holdVoltageV = Number.NaN;
-  holdSampledLate = false;
-  stepVoltageV = Number.NaN;
-  stepCurrentA = Number.NaN;
-  stepTemperatureC = Number.NaN;
-  stepSampledLate = false;
-  startTemperatureC: number;
-  peakTemperatureC: number;
-  stopTemperatureTimeS = Number.NaN;
+  /** Σ I, Σ I² and Σ (ΔI)² over the stretch's samples: mean, spread and sample-to-sample ripple of the current. */
+  sumA = 0;
+  sumSqA = 0;
+  sumSqDiffA = 0;
+  diffSamples = 0;
+  readonly hold: PointReading;
+  /** 1 s after the edge, for the rest → load step resistance; null when the stretch does not start from rest. */
+  readonly step: PointReading | null;
   twoLevel: TwoLevelReading | null = null;
-  /** Where the running minimum voltage fell: [prevT, prevV, t, v] per entry, so a cut-off crossing can be found later for any threshold. */
+  /** Where the running minimum voltage fell, so a cut-off or floor crossing can be found later for any threshold. */
   readonly minTrail: number[] = [];
   private trailMinVoltageV = Number.POSITIVE_INFINITY;
   private readonly trailStepV: number;
-  private holdDone = false;
-  private stepDone = false;
-  /** Earliest time at which a hold or step reading is due; skips both checks on most samples. */
+  /** Earliest time at which a pending reading needs a sample; skips the readings on most samples. */
   private nextCaptureTimeS: number;
   private prevTimeS: number;
   private prevVoltageV: number;
@@ -50,39 +61,43 @@ export class Stretch {
   private detecting = true;
 
   constructor(
-    private readonly settings: StretchSettings,
+    settings: StretchSettings,
     prev: { t: number; v: number; i: number; temp: number; rest: boolean } | null,
     first: { t: number; v: number },
   ) {
     this.onsetTimeS = prev ? prev.t : first.t;
+    this.edgeTimeS = prev ? (prev.t + first.t) / 2 : first.t;
+    this.edgeIntervalS = prev ? first.t - prev.t : Number.NaN;
     this.restValid = prev !== null && prev.rest;
     this.restVoltageV = prev ? prev.v : Number.NaN;
     this.restCurrentA = prev ? prev.i : Number.NaN;
     this.startTemperatureC = prev ? prev.temp : Number.NaN;
-    this.peakTemperatureC = this.startTemperatureC;
-    this.prevTimeS = prev ? prev.t : first.t;
-    this.prevVoltageV = prev ? prev.v : first.v;
-    this.prevCurrentA = prev ? prev.i : 0;
-    this.prevTemperatureC = this.startTemperatureC;
+    this.prevTimeS = Number.NaN;
+    this.prevVoltageV = Number.NaN;
+    this.prevCurrentA = Number.NaN;
+    this.prevTemperatureC = Number.NaN;
     this.lastTimeS = first.t;
+    this.lastVoltageV = first.v;
     this.trailStepV = Math.max(0.0005, 5e-5 * Math.abs(first.v));
-    this.detector = new TwoLevelDetector(settings.loadThresholdA, this.onsetTimeS);
-    this.nextCaptureTimeS = this.onsetTimeS + Math.min(1, settings.holdDelayS);
-    if (this.startTemperatureC === this.startTemperatureC) this.watchTemperature(this.onsetTimeS, this.startTemperatureC);
+    this.detector = new TwoLevelDetector(settings.loadThresholdA, this.edgeTimeS);
+    this.hold = new PointReading(this.edgeTimeS + settings.holdDelayS);
+    this.step = this.restValid ? new PointReading(this.edgeTimeS + 1) : null;
+    this.nextCaptureTimeS = Math.min(this.hold.fromS, this.step ? this.step.fromS : Number.POSITIVE_INFINITY);
   }
 
   get durationS(): number {
     return this.lastTimeS - this.onsetTimeS;
   }
 
-  /** A load sample of this stretch; `i` is positive in the stretch's frame. */
-  add(t: number, v: number, i: number, temp: number, minCellVoltageV: number): void {
+  /** A load sample of this stretch; `i` is positive in the stretch's frame (tests and single samples). */
+  add(t: number, v: number, i: number, temp: number, minCellVoltageV: number, cellSpreadV = 0): void {
     const b = scratch;
     b.timeS[0] = t;
     b.voltageV[0] = v;
     b.currentA[0] = i;
     b.temperatureC[0] = temp;
     b.minCellVoltageV[0] = minCellVoltageV;
+    b.cellSpreadV[0] = cellSpreadV;
     this.addAt(b, 0, 1);
   }
 
@@ -96,18 +111,36 @@ export class Stretch {
     const i = sign * (batch.currentA[k] as number);
     const temp = batch.temperatureC[k] as number;
     const minCellVoltageV = batch.minCellVoltageV[k] as number;
+    const spread = batch.cellSpreadV[k] as number;
+    const hasPrev = this.samples > 0;
     this.samples++;
+    if (hasPrev) {
+      // A change of more than half the current is a step between levels, not ripple.
+      const p = this.prevCurrentA;
+      const d = i - p;
+      const limit = 0.5 * (i > p ? i : p);
+      if (d < limit && d > -limit) {
+        this.sumSqDiffA += d * d;
+        this.diffSamples++;
+      }
+    }
+    this.sumA += i;
+    this.sumSqA += i * i;
+    this.endPrevTimeS = this.lastTimeS;
+    this.endPrevVoltageV = this.lastVoltageV;
     this.lastTimeS = t;
+    this.lastVoltageV = v;
     if (i > this.peakCurrentA) this.peakCurrentA = i;
     if (minCellVoltageV < this.minCellVoltageV) this.minCellVoltageV = minCellVoltageV;
+    if (spread > this.maxCellSpreadV) this.maxCellSpreadV = spread;
     if (v < this.minVoltageV) {
       this.minVoltageV = v;
       if (v < this.trailMinVoltageV - this.trailStepV) {
-        this.minTrail.push(this.prevTimeS, this.prevVoltageV, t, v);
+        this.minTrail.push(hasPrev ? this.prevTimeS : t, hasPrev ? this.prevVoltageV : v, t, v, this.chargeAs);
         this.trailMinVoltageV = v;
       }
     }
-    if (t >= this.nextCaptureTimeS) this.capture(t, v, i, temp);
+    if (t >= this.nextCaptureTimeS) this.capture(hasPrev, t, v, i, temp);
     if (this.startTemperatureC !== this.startTemperatureC && temp === temp) this.startTemperatureC = temp;
     if (this.detecting) {
       const reading = this.detector.add(t, v, i, temp);
@@ -120,71 +153,74 @@ export class Stretch {
     this.prevTemperatureC = temp;
   }
 
-  private capture(t: number, v: number, i: number, temp: number): void {
-    if (!this.holdDone) this.captureHold(t, v);
-    if (!this.stepDone) {
-      if (this.restValid) this.captureStep(t, v, i, temp);
-      else this.stepDone = true;
+  private capture(hasPrev: boolean, t: number, v: number, i: number, temp: number): void {
+    const { prevTimeS: pt, prevVoltageV: pv, prevCurrentA: pi, prevTemperatureC: ptemp } = this;
+    let next = Number.POSITIVE_INFINITY;
+    for (const r of [this.step, this.hold]) {
+      if (r === null || r.done) continue;
+      r.add(hasPrev, pt, pv, pi, ptemp, t, v, i, temp);
+      if (!r.done) next = Math.min(next, r.fromS);
     }
-    const hold = this.holdDone ? Number.POSITIVE_INFINITY : this.onsetTimeS + this.settings.holdDelayS;
-    const step = this.stepDone ? Number.POSITIVE_INFINITY : this.onsetTimeS + 1;
-    this.nextCaptureTimeS = Math.min(hold, step);
+    this.nextCaptureTimeS = next;
   }
 
-  /** Temperature is followed from the onset to the end of the log, after the stretch closes too. */
-  /** Below this temperature a sample changes nothing here (−∞ before any temperature is known). */
-  watchFromC(): number {
-    if (this.peakTemperatureC !== this.peakTemperatureC) return Number.NEGATIVE_INFINITY;
-    const stop = this.stopTemperatureTimeS !== this.stopTemperatureTimeS ? this.settings.stopTemperatureC : Number.POSITIVE_INFINITY;
-    return Math.min(this.peakTemperatureC + Number.EPSILON * Math.abs(this.peakTemperatureC), stop);
-  }
-
-  watchTemperature(t: number, temp: number): void {
-    if (!(this.peakTemperatureC >= temp)) this.peakTemperatureC = temp; // also when no peak yet (NaN)
-    if (this.stopTemperatureTimeS !== this.stopTemperatureTimeS && temp >= this.settings.stopTemperatureC) this.stopTemperatureTimeS = t;
-  }
-
-  private captureHold(t: number, v: number): void {
-    const target = this.onsetTimeS + this.settings.holdDelayS;
-    if (t < target) return;
-    this.holdDone = true;
-    if (this.samples > 1 && this.prevTimeS < target) this.holdVoltageV = lerp(this.prevTimeS, this.prevVoltageV, t, v, target);
-    else if (t === target || this.samples > 1) this.holdVoltageV = v;
-    else if (t - target <= STEP_LATE_S) {
-      this.holdVoltageV = v;
-      this.holdSampledLate = true;
+  /** The stretch ended: readings still waiting keep what they have. */
+  close(): void {
+    this.step?.close();
+    this.hold.close();
+    if (this.detecting) {
+      const reading = this.detector.close();
+      if (reading !== null && this.twoLevel === null) this.twoLevel = reading;
+      this.detecting = false;
     }
   }
 
-  private captureStep(t: number, v: number, i: number, temp: number): void {
-    const target = this.onsetTimeS + 1;
-    if (t < target) return;
-    this.stepDone = true;
-    if (this.samples > 1 && this.prevTimeS < target) {
-      this.stepVoltageV = lerp(this.prevTimeS, this.prevVoltageV, t, v, target);
-      this.stepCurrentA = lerp(this.prevTimeS, this.prevCurrentA, t, i, target);
-      this.stepTemperatureC = this.prevTemperatureC === this.prevTemperatureC ? lerp(this.prevTimeS, this.prevTemperatureC, t, temp, target) : temp;
-    } else if (t - target <= STEP_LATE_S) {
-      this.stepVoltageV = v;
-      this.stepCurrentA = i;
-      this.stepTemperatureC = temp;
-      this.stepSampledLate = t - target > 0.25;
-    }
+  /** Mean current over the stretch's samples. */
+  get meanCurrentA(): number {
+    return this.samples > 0 ? this.sumA / this.samples : Number.NaN;
+  }
+
+  /**
+   * Sample-to-sample ripple of the current ÷ its mean: √(Σ(ΔI)² ÷ 2(n − 1)) ÷ mean I (the mean
+   * square successive difference, J. von Neumann et al., Ann. Math. Statist. 12 (1941) 153). A slow
+   * drift (constant-power loads) hardly moves it; ripple from sample to sample does. Steps between
+   * levels (a change of more than half the current) are left out.
+   */
+  get currentRipple(): number {
+    if (this.diffSamples < 2) return 0;
+    return Math.sqrt(this.sumSqDiffA / (2 * this.diffSamples)) / this.meanCurrentA;
+  }
+
+  /** Volts per second at the end of the stretch (positive when falling), from its last two samples. */
+  get endFallVPerS(): number {
+    const dt = this.lastTimeS - this.endPrevTimeS;
+    return dt > 0 ? (this.endPrevVoltageV - this.lastVoltageV) / dt : 0;
   }
 
   /** Time from onset to the first moment the voltage reached `thresholdV`, interpolated; NaN if never. */
   timeToVoltageS(thresholdV: number): number {
+    const at = this.crossing(thresholdV);
+    return at === null ? Number.NaN : at.timeS - this.onsetTimeS;
+  }
+
+  /** Charge delivered (A·s) when the voltage first reached `thresholdV` (to within one sample); NaN if never. */
+  chargeAtVoltageAs(thresholdV: number): number {
+    const at = this.crossing(thresholdV);
+    return at === null ? Number.NaN : at.chargeAs;
+  }
+
+  private crossing(thresholdV: number): { timeS: number; chargeAs: number } | null {
     const trail = this.minTrail;
-    for (let k = 0; k + 3 < trail.length; k += 4) {
+    for (let k = 0; k + TRAIL_FIELDS - 1 < trail.length; k += TRAIL_FIELDS) {
       const v = trail[k + 3] as number;
       if (v > thresholdV) continue;
       const pT = trail[k] as number;
       const pV = trail[k + 1] as number;
       const t = trail[k + 2] as number;
-      const at = pV > thresholdV && pV !== v ? pT + ((pV - thresholdV) / (pV - v)) * (t - pT) : t;
-      return at - this.onsetTimeS;
+      const timeS = pV > thresholdV && pV !== v ? pT + ((pV - thresholdV) / (pV - v)) * (t - pT) : t;
+      return { timeS, chargeAs: trail[k + 4] as number };
     }
-    return Number.NaN;
+    return null;
   }
 }
 
@@ -195,9 +231,5 @@ const scratch = {
   currentA: new Float64Array(1),
   temperatureC: new Float64Array(1),
   minCellVoltageV: new Float64Array(1),
+  cellSpreadV: new Float64Array(1),
 } as SampleBatch;
-
-function lerp(t0: number, y0: number, t1: number, y1: number, t: number): number {
-  if (t1 === t0) return y1;
-  return y0 + ((y1 - y0) * (t - t0)) / (t1 - t0);
-}

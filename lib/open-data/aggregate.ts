@@ -1,8 +1,10 @@
 // Per-pack aggregates inside one like-for-like group: the median of approved results with n and spread
 // (pure; fed by db/queries/open-data/groups.ts).
 import { groupKey as computeGroupKey, summarise } from "@/lib/analysis";
+import { roundTo } from "./field-kit";
+import { figureDigits } from "./result-fields";
 
-const AGGREGATE_FIGURES = [
+export const AGGREGATE_FIGURES = [
   "capacityMah",
   "dcResistanceMohm",
   "resistanceAt25CMohm",
@@ -15,6 +17,20 @@ const AGGREGATE_FIGURES = [
 type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
 
 type Summary = { median: number; n: number; min: number; max: number } | null;
+
+/** A summary as published: median, min and max rounded to the figure's digits. */
+function roundSummary(s: Summary, figure: AggregateFigure): Summary {
+  const digits = figureDigits(figure);
+  if (!s || digits === undefined) return s;
+  return { median: roundTo(s.median, digits), n: s.n, min: roundTo(s.min, digits), max: roundTo(s.max, digits) };
+}
+
+/** A pack's aggregates as the API publishes them. */
+export function publishedAggregate(p: PackAggregate): PackAggregate {
+  const figures = { ...p.figures };
+  for (const f of AGGREGATE_FIGURES) figures[f] = roundSummary(p.figures[f], f);
+  return { ...p, figures };
+}
 
 type Sample = {
   packId: number;

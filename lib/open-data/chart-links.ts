@@ -1,5 +1,5 @@
 // Every address a chart has: permalink, embed, images (with their sizes), oEmbed; and the snippets to paste.
-import { ATTRIBUTION, DATA_LICENCE_SHORT } from "./licence";
+import { ATTRIBUTION, DATA_LICENCE_LABEL } from "./licence";
 import { DEFAULT_PNG_SCALE, defaultHeight, imageSizeQuery, type ChartImageFormat } from "./chart-size";
 import { CHART_HEIGHT, CHART_WIDTH, chartState, encodeChartState, statePath, type ChartState } from "./chart-state";
 
@@ -69,7 +69,7 @@ export function imageSnippet(state: ChartState, baseUrl: string): string {
   const png = (size: { width?: number; scale?: number }) =>
     escapeHtmlAttr(`${baseUrl}${chartImagePath(state, "png", size)}`);
   const srcset = (width: number) => [1, 2, 3].map((scale) => `${png({ width, scale })} ${scale}x`).join(", ");
-  const alt = escapeHtmlAttr(`${state.title} — chart by ${ATTRIBUTION} (Sagline), licensed ${DATA_LICENCE_SHORT}`);
+  const alt = escapeHtmlAttr(`${state.title} — chart by ${ATTRIBUTION} (Sagline), licensed ${DATA_LICENCE_LABEL}`);
   return [
     `<a href="${baseUrl}${chartLinks(state).permalink}"><picture>`,
     `<source media="(max-width: ${NARROW_VIEWPORT_PX - 1}px)" srcset="${srcset(NARROW_WIDTH)}" width="${NARROW_WIDTH}" height="${defaultHeight(NARROW_WIDTH)}">`,
@@ -84,7 +84,10 @@ type SavedChart = {
   title: string;
   note: string | null;
   state: Record<string, unknown>;
-  createdAt: Date;
+  /** Dates, or their ISO strings after a cached read's JSON round trip. */
+  createdAt: Date | string;
+  /** When a moderator featured it on /charts; null when it is only saved. */
+  featuredAt: Date | string | null;
 };
 
 /** A saved chart as the API returns it; a stored state that no longer parses is reported, not hidden. */
@@ -95,7 +98,8 @@ export function savedChartJson(row: SavedChart) {
     kind: row.kind,
     title: row.title,
     note: row.note,
-    createdAt: row.createdAt.toISOString(),
+    createdAt: new Date(row.createdAt).toISOString(),
+    featuredAt: row.featuredAt === null ? null : new Date(row.featuredAt).toISOString(),
     state: row.state,
     links: parsed.success ? chartLinks(parsed.data) : null,
   };

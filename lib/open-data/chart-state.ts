@@ -2,6 +2,7 @@
 // defaults change later. Version 1 of the state; a new version gets a new literal and its own reader.
 import { z } from "zod";
 import { parseUnitsParam, writeUnitsParam } from "../units";
+import { GROUP_KEY_PATTERN, SLUG_PATTERN } from "@/lib/api-contract/params";
 
 export const CHART_KINDS = ["label-check", "curves", "maker-ranking"] as const;
 export type ChartKind = (typeof CHART_KINDS)[number];
@@ -14,11 +15,8 @@ export const CHART_KIND_LABELS: Record<ChartKind, string> = {
 export const chartState = z.object({
   v: z.literal(1),
   kind: z.enum(CHART_KINDS),
-  group: z.string().regex(/^[a-z0-9._-]{1,160}$/, "Choose a like-for-like group."),
-  maker: z
-    .string()
-    .regex(/^[a-z0-9-]{1,80}$/)
-    .optional(),
+  group: z.string().regex(GROUP_KEY_PATTERN, "Choose a like-for-like group."),
+  maker: z.string().regex(SLUG_PATTERN).optional(),
   cells: z.number().int().min(1).max(14).optional(),
   title: z.string().trim().min(1, "Give the chart a title.").max(120),
   note: z.string().trim().max(400).optional(),

@@ -3,6 +3,8 @@
 // Free-text fields are also guarded against spreadsheet formula injection following the OWASP
 // "CSV Injection" guidance: a cell starting with = + - @ TAB or CR gets a leading single quote.
 
+import { fieldValue, type Field } from "./field-kit";
+
 export type CsvCell = string | number | boolean | null | undefined;
 
 const FORMULA_START = /^[=+\-@\t\r]/;
@@ -25,13 +27,13 @@ export function csvCell(value: CsvCell, freeText = false): string {
   return escapeCsvField(freeText ? guardFormula(value) : value);
 }
 
-export type CsvColumn<R> = { name: string; freeText?: boolean; value: (row: R) => CsvCell };
-
-/** A whole CSV document: optional comment lines (declared as commentChar "#" in the descriptor), the
- * header row, then one record per row, every line ending in CRLF. */
-export function toCsv<R>(columns: CsvColumn<R>[], rows: Iterable<R>, noteLines: string[] = []): string {
-  const lines: string[] = noteLines.map((l) => `# ${l.replace(/[\r\n]+/g, " ")}`);
-  lines.push(columns.map((c) => escapeCsvField(c.name)).join(","));
-  for (const row of rows) lines.push(columns.map((c) => csvCell(c.value(row), c.freeText)).join(","));
+/**
+ * A whole CSV document: the header row (the field names), then one record per row with each field's published
+ * (rounded) value, every line ending in CRLF. Nothing else: no comment lines, which RFC 4180 does not have (the
+ * licence and credit live in the Data Package descriptor and the README beside the files).
+ */
+export function toCsv<R>(fields: Field<R>[], rows: Iterable<R>): string {
+  const lines = [fields.map((f) => escapeCsvField(f.name)).join(",")];
+  for (const row of rows) lines.push(fields.map((f) => csvCell(fieldValue(f, row), f.freeText)).join(","));
   return lines.join("\r\n") + "\r\n";
 }

@@ -3,7 +3,7 @@ import { z } from "zod";
 import { NARROW_VIEWPORT_PX, NARROW_WIDTH, chartImagePath, chartLinks, escapeHtmlAttr } from "./chart-links";
 import { CHART_MIN_WIDTH, defaultHeight, heightRange } from "./chart-size";
 import { CHART_HEIGHT, CHART_WIDTH, decodeChartStateSegments, type ChartState } from "./chart-state";
-import { ATTRIBUTION, DATA_LICENCE_NAME, DATA_LICENCE_URL } from "./licence";
+import { ATTRIBUTION, DATA_LICENCE_SPDX, DATA_LICENCE_URL } from "./licence";
 
 export const oembedQuery = z.object({
   url: z.string().min(1).max(5000),
@@ -74,7 +74,7 @@ export function oembedResponse(url: string, baseUrl: string, maxwidth?: number, 
     width,
     height,
     ...thumbnail(state, baseUrl, maxwidth, maxheight),
-    license: DATA_LICENCE_NAME,
+    license: DATA_LICENCE_SPDX,
     license_url: DATA_LICENCE_URL,
   };
 }

@@ -1,14 +1,15 @@
-// The published records of the open data (API, downloads, Data Package): active makers and packs, and
-// approved results with their method card and figures — never files or contributor identities. The data
-// layer (db/queries/open-data/) fills them; lib/open-data/fields.ts lists their published fields.
+// The rows the data layer (db/queries/open-data/) hands over, and the published records made from them through
+// the field lists (fields.ts, result-fields.ts): active makers and packs, published results with their method
+// card and figures — never files or contributor identities.
 import type { Figures } from "@/lib/analysis";
 import type { PackSummary } from "@/lib/catalogue";
 import type { LoadMode, ResistanceMethod } from "@/lib/enums";
+import { fieldValue, type Field, type FieldValue } from "./field-kit";
 
-export type MakerRow = { id: number; slug: string; name: string; packCount: number };
+export type MakerRow = { id: number; slug: string; name: string; packCount: number; resultCount: number };
 
-/** A pack as published: the catalogue's summary, its maker's id and how many approved results it has. */
-export type PackRecord = PackSummary & { makerId: number; approvedResultCount: number };
+/** A pack as published: the catalogue's summary, its maker's id and how many published results it has. */
+export type PackRecordRow = PackSummary & { resultCount: number };
 
 type MethodCard = {
   ambientTemperatureC: number;
@@ -24,12 +25,11 @@ type MethodCard = {
   cyclesBeforeTest: number;
 };
 
-export type ResultRow = {
+export type ResultFlatRow = {
   id: number;
   packId: number;
   packSlug: string;
   makerSlug: string;
-  status: "approved";
   groupKey: string;
   testedOn: string | null;
   publishedAt: string | null;
@@ -37,3 +37,24 @@ export type ResultRow = {
   methodCard: MethodCard;
   figures: Figures;
 };
+
+export type FlatRecord = Record<string, FieldValue>;
+
+/** A flat record: every field by name, rounded (makers, packs, and a result's CSV row). */
+export function flatRecord<R>(fields: Field<R>[], row: R): FlatRecord {
+  return Object.fromEntries(fields.map((f) => [f.name, fieldValue(f, row)]));
+}
+
+export type NestedRecord = { [name: string]: FieldValue | FlatRecord; methodCard: FlatRecord; figures: FlatRecord };
+
+/** A result as the API publishes it: top-level fields, then `methodCard` and `figures` by the fields' section. */
+export function nestedRecord<R>(fields: Field<R>[], row: R): NestedRecord {
+  const top: FlatRecord = {};
+  const methodCard: FlatRecord = {};
+  const figures: FlatRecord = {};
+  for (const f of fields) {
+    const into = f.section === "methodCard" ? methodCard : f.section === "figures" ? figures : top;
+    into[f.name] = fieldValue(f, row);
+  }
+  return { ...top, methodCard, figures };
+}

@@ -2,6 +2,7 @@
 // schema for the form (react-hook-form + zodResolver) and the server action. Ranges match the method card
 // (and the results table's checks): ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C.
 import { z } from "zod";
+import { recordIdSchema } from "./ids";
 import { loadModes, resistanceMethods } from "@/lib/enums";
 import { optionalEnum, optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
 
@@ -64,7 +65,7 @@ export const emptyBenchProfile: BenchProfileFormValues = {
   defaultSampleRateHz: "",
 };
 
-export const benchProfileId = z.coerce.number({ error: "Not a bench profile id." }).int().positive().max(2_147_483_647);
+export const benchProfileId = recordIdSchema("Not a bench profile id.");
 
 /** The save action's input: a profile, plus the id when editing one. */
 export const saveBenchProfileSchema = benchProfileSchema.and(

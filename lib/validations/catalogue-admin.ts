@@ -1,7 +1,8 @@
 // Inputs of the admin catalogue actions: a pack's label figures, and merges of duplicate makers or packs.
 import { z } from "zod";
+import { recordId } from "./ids";
 
-const id = z.coerce.number().int().positive();
+const id = recordId;
 const optionalNumber = (schema: z.ZodNumber) =>
   z.preprocess(
     (v) => (v === "" || v === null || v === undefined ? null : typeof v === "string" ? v.replace(",", ".") : v),

@@ -2,6 +2,7 @@
 // actions. Inputs hold strings as typed; the schema turns them into numbers. The method-card bounds match
 // the results table's checks: ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C, load > 0.
 import { z } from "zod";
+import { isRecordIdText, recordIdSchema } from "./ids";
 import { loadModes, resistanceMethods } from "@/lib/enums";
 import { PHOTO_EXTENSIONS } from "@/lib/storage-keys";
 import { optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
@@ -63,7 +64,7 @@ const packStepSchema = z
       if (!ok) ctx.addIssue({ code: "custom", path: [path], message });
     };
     if (v.mode === "existing") {
-      need("packId", /^\d{1,10}$/.test(v.packId), "Choose a pack from the catalogue, or propose a new one.");
+      need("packId", isRecordIdText(v.packId), "Choose a pack from the catalogue, or propose a new one.");
       return;
     }
     need("makerName", v.makerId !== "" || v.makerName !== null, "Choose the maker, or give the new maker's name.");
@@ -84,7 +85,7 @@ const methodCardSchema = z
     benchProfileId: z
       .string()
       .trim()
-      .regex(/^(\d{1,10})?$/, "Choose a bench profile.")
+      .refine((v) => v === "" || isRecordIdText(v), "Choose a bench profile.")
       .transform((v) => (v === "" ? null : Number(v))),
     ambientTemperatureC: requiredNumber("Ambient temperature", "°C", (n) =>
       n.min(-20, "Ambient temperature must be at least −20 °C.").max(60, "Ambient temperature must be at most 60 °C."),
@@ -159,7 +160,7 @@ export const submitResultSchema = z.object({
 export type SubmitResultValues = z.input<typeof submitResultSchema>;
 export type SubmitResultInput = z.output<typeof submitResultSchema>;
 
-const resultIdSchema = z.coerce.number({ error: "Not a result id." }).int().positive().max(2_147_483_647);
+const resultIdSchema = recordIdSchema("Not a result id.");
 export const withdrawResultSchema = z.object({ resultId: resultIdSchema, note: optionalText("Note", 500).optional() });
 
 export const resubmitResultSchema = z.object({

@@ -1,5 +1,6 @@
 // Inputs of the moderation actions and the reader-flag endpoint. Shared by forms and server.
 import { z } from "zod";
+import { recordId } from "./ids";
 import { flagReasons } from "@/lib/enums";
 import { flagCodes } from "@/lib/flag-labels";
 
@@ -22,10 +23,20 @@ export const flagReasonLabels: Record<(typeof flagReasons)[number], string> = {
   other: "Other",
 };
 
+/** The reason of an open case as the public result page says it (our words; the reader's note is not shown). */
+export const openCaseReasonWords: Record<(typeof flagReasons)[number], string> = {
+  "wrong-figures": "the figures may be wrong",
+  "wrong-pack": "it may be filed under the wrong pack",
+  duplicate: "it may repeat another result",
+  "not-a-measurement": "it may not come from a real measurement",
+  unsafe: "the test method may be unsafe",
+  other: "a reason the reader explained to the moderators",
+};
+
 const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
 export type FlagResolution = (typeof flagResolutions)[number];
 
-const id = z.coerce.number().int().positive();
+const id = recordId;
 const note = (max: number) =>
   z
     .string()
@@ -54,6 +65,10 @@ export const resolveFlagSchema = z
   .refine((v) => v.resolution !== "corrected" || (v.note?.length ?? 0) >= 3, {
     path: ["note"],
     message: "Say what was corrected.",
+  })
+  .refine((v) => v.resolution !== "withdrawn" || (v.note?.length ?? 0) >= 3, {
+    path: ["note"],
+    message: "Say why the result is taken out of publication; the reason is shown on its page.",
   });
 
 /** /review search params: filters by flag, maker and group; anything unknown falls back to "all". */

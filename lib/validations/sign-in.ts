@@ -13,16 +13,37 @@ export const callbackPath = z
   .refine((v) => /^\/(?![/\\])[\x21-\x7e]*$/.test(v), "Not a path on this site")
   .catch("/account");
 
+/**
+ * The one rule for the address a sign-in link goes to, on every path into Auth.js (the sign-in action, a
+ * raw POST to /api/auth/signin/nodemailer, and Auth.js's own normalizeIdentifier): one address, after the
+ * same normalisation Auth.js applies — no list ("a@x.test, b@x.test"), no display-name form
+ * ("Name <a@x.test>"), nothing a mail library could split into several recipients.
+ */
+export const signInEmail = z
+  .string({ error: "Enter your e-mail address." })
+  .transform(normaliseEmail)
+  .pipe(
+    z
+      .string()
+      .min(1, "Enter your e-mail address.")
+      .max(254, "That address is too long.")
+      .refine((v) => !/[,;\s]/.test(v) && v.split("@").length <= 2, {
+        message: "Enter one e-mail address only.",
+        abort: true,
+      })
+      .refine((v) => !/[<>"()]/.test(v), {
+        message: "Enter the address alone, like name@example.com, without a name.",
+        abort: true,
+      })
+      .pipe(z.email({ error: "Enter an e-mail address like name@example.com." })),
+  );
+
+/** The rule as a function for Auth.js's normalizeIdentifier: the normalised address, or a thrown ZodError. */
+export function parseSignInEmail(value: unknown): string {
+  return signInEmail.parse(value);
+}
+
 export const signInSchema = z.object({
-  email: z
-    .string({ error: "Enter your e-mail address." })
-    .transform(normaliseEmail)
-    .pipe(
-      z
-        .string()
-        .min(1, "Enter your e-mail address.")
-        .max(254, "That address is too long.")
-        .pipe(z.email({ error: "Enter an e-mail address like name@example.com." })),
-    ),
+  email: signInEmail,
   callbackUrl: callbackPath.optional().transform((v) => v ?? "/account"),
 });

@@ -1,6 +1,7 @@
 // Watching a pack (an e-mail when a new result on it is published).
 import { z } from "zod";
+import { recordIdSchema } from "./ids";
 
 export const watchPackSchema = z.object({
-  packId: z.coerce.number({ error: "Not a pack id." }).int().positive().max(2_147_483_647),
+  packId: recordIdSchema("Not a pack id."),
 });

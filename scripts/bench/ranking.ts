@@ -25,13 +25,13 @@ async function seed(): Promise<string> {
     insert into packs (slug, maker_id, model, cells_in_series, rated_capacity_mah, labelled_continuous_c, connector)
     select 'pack-' || g, 1 + (g % ${MAKERS}), 'Model ' || g, 2 + (g % 5), 1000 + (g % 8) * 500, 25 + (g % 10) * 10, 'XT60'
     from generate_series(1, ${PACKS}) g`);
-  // Group 0 gets 30 % of the rows, the other 19 share the rest; 80 % approved, 2 % disputed, the rest not public.
+  // Group 0 gets 30 % of the rows, the other 19 share the rest; 82 % approved, the rest not public.
   await db.execute(sql`
     insert into results (pack_id, contributor_id, status, ambient_temperature_c, load_mode, load_current_a, cutoff_v_per_cell,
       stop_temperature_c, resistance_method, equipment, log_key, log_sha256, log_bytes, log_filename, figures, curve,
       sag_limited_c, label_ratio, capacity_ratio, load_rate_c, group_key)
     select 1 + (hashint % ${PACKS}), 'bench-user',
-      (case when g % 50 = 0 then 'disputed' when g % 5 = 0 then 'pending' else 'approved' end)::review_status,
+      (case when g % 5 = 0 then 'pending' else 'approved' end)::review_status,
       22, 'constant-current', 10, 3.3, 60, 'dc-step', 'bench', 'k' || g, 's' || g, 1, 'x.csv', '{}'::jsonb, '[]'::jsonb,
       20 + (hashint % 100), 0.3 + (hashint % 90) / 100.0, 0.9, 8,
       case when g % 10 < 3 then 'group-0' else 'group-' || (1 + g % (${GROUPS} - 1)) end
@@ -60,7 +60,7 @@ async function main() {
   const q = (p: number) => times[Math.min(times.length - 1, Math.floor(p * times.length))] ?? Number.NaN;
   const [{ n } = { n: 0 }] = (
     await db.execute<{ n: number }>(
-      sql`select count(*)::int as n from results where group_key = ${key} and status in ('approved','disputed')`,
+      sql`select count(*)::int as n from results where group_key = ${key} and status = 'approved'`,
     )
   ).rows;
   console.log(

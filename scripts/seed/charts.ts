@@ -1,4 +1,5 @@
-// A few published charts for the demo scenario, on the groups with the most approved results.
+// A few saved charts for the demo scenario, on the groups with the most approved results: three featured by a
+// moderator (listed on /charts) and one a contributor saved that nobody has featured yet (/review/charts).
 // Idempotent: charts are keyed by a fixed id.
 import { desc, eq, sql } from "drizzle-orm";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
@@ -36,18 +37,44 @@ export async function seedCharts(db: NodePgDatabase<typeof schema>): Promise<num
       title: "Discharge curves in one like-for-like group",
       note: "Voltage per cell under load against capacity delivered.",
     },
+    {
+      id: "demo-saved-not-featured",
+      kind: "label-check" as const,
+      group: (second ?? first).key,
+      title: "My packs against their labels",
+      note: "Saved by a contributor; a moderator has not featured it.",
+    },
   ];
+  const [moderator] = await db
+    .select({ id: schema.users.id })
+    .from(schema.users)
+    .where(eq(schema.users.role, "moderator"))
+    .orderBy(schema.users.email)
+    .limit(1);
+  const [contributor] = await db
+    .select({ id: schema.users.id })
+    .from(schema.users)
+    .where(eq(schema.users.role, "contributor"))
+    .orderBy(schema.users.email)
+    .limit(1);
   await db
     .insert(schema.savedCharts)
     .values(
-      charts.map((c, i) => ({
-        id: c.id,
-        kind: c.kind,
-        title: c.title,
-        note: c.note,
-        state: { v: 1, kind: c.kind, group: c.group, title: c.title, note: c.note },
-        createdAt: new Date(Date.UTC(2026, 10, 20 + i)),
-      })),
+      charts.map((c, i) => {
+        const createdAt = new Date(Date.UTC(2026, 10, 20 + i));
+        const featured = c.id !== "demo-saved-not-featured";
+        return {
+          id: c.id,
+          kind: c.kind,
+          title: c.title,
+          note: c.note,
+          state: { v: 1, kind: c.kind, group: c.group, title: c.title, note: c.note },
+          createdAt,
+          createdById: featured ? (moderator?.id ?? null) : (contributor?.id ?? null),
+          featuredAt: featured ? createdAt : null,
+          featuredById: featured ? (moderator?.id ?? null) : null,
+        };
+      }),
     )
     .onConflictDoNothing();
   return charts.length;

@@ -10,6 +10,7 @@ import { buildPacks, demoMakers, demoUsers } from "./scenario";
 import { seedResults } from "./results";
 import { seedCharts } from "./charts";
 import { computeAndStoreFlags } from "@/db/mutations/review";
+import { backfillCurveFingerprints } from "@/db/mutations/curve-fingerprints";
 
 export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?: (s: string) => void } = {}) {
   const log = opts.log ?? (() => {});
@@ -55,6 +56,8 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
       )
       .onConflictDoNothing();
     const made = await seedResults(db, packs, log);
+    // Every result's curve fingerprint, so a new log copied from a demo result is recognised.
+    await backfillCurveFingerprints(db);
     // Pending results carry their automatic plausibility flags, as they would after a real submission.
     const pending = await db
       .select({ id: schema.results.id })

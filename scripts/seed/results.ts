@@ -94,7 +94,8 @@ const campaigns: Campaign[] = [
   },
 ];
 
-type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "disputed";
+// "flagged": approved, with a reader's open flag (a case for moderators; the result stays published and counted).
+type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "flagged";
 function outcomeFor(r: Random): Outcome {
   const x = r.next();
   if (x < 0.8) return "approved";
@@ -102,7 +103,7 @@ function outcomeFor(r: Random): Outcome {
   if (x < 0.92) return "changes_requested";
   if (x < 0.96) return "rejected";
   if (x < 0.98) return "withdrawn";
-  return "disputed";
+  return "flagged";
 }
 
 const rejectReasons = ["incomplete-method", "wrong-data", "not-a-measurement"] as const;
@@ -116,6 +117,8 @@ export async function seedResults(
   const users = await db.select({ id: schema.users.id, email: schema.users.email }).from(schema.users);
   const userId = new Map(users.map((u) => [u.email, u.id]));
   const moderatorId = userId.get("moderator@sagline.localhost");
+  // Reader flags come from signed-in readers: a demo account other than the result's contributor.
+  const readers = ["anon@sagline.localhost", "slipway@sagline.localhost"].map((e) => userId.get(e));
   const packRows = await db.select({ id: schema.packs.id, slug: schema.packs.slug }).from(schema.packs);
   const packId = new Map(packRows.map((p) => [p.slug, p.id]));
   let made = 0;
@@ -187,13 +190,13 @@ export async function seedResults(
         });
         const submittedAt = new Date(start + n * 3.7 * 3600 * 1000);
         const outcome = outcomeFor(rnd);
-        const published = outcome === "approved" || outcome === "disputed";
+        const published = outcome === "approved" || outcome === "flagged";
         const inserted = await db
           .insert(schema.results)
           .values({
             packId: id,
             contributorId,
-            status: outcome,
+            status: outcome === "flagged" ? "approved" : outcome,
             ambientTemperatureC: ambientC,
             packStartTemperatureC: f.startTemperatureC,
             loadMode: "constant-current",
@@ -242,23 +245,13 @@ export async function seedResults(
           },
         ];
         const later = (h: number) => new Date(submittedAt.getTime() + h * 3600 * 1000);
-        if (outcome === "approved" || outcome === "disputed")
+        if (outcome === "approved" || outcome === "flagged")
           events.push({
             resultId,
             actorId: moderatorId,
             fromStatus: "pending",
             toStatus: "approved",
             createdAt: later(20),
-          });
-        if (outcome === "disputed")
-          events.push({
-            resultId,
-            actorId: null,
-            fromStatus: "approved",
-            toStatus: "disputed",
-            reason: "reader-flag",
-            note: "A reader flagged the figures.",
-            createdAt: later(60),
           });
         if (outcome === "rejected")
           events.push({
@@ -289,9 +282,11 @@ export async function seedResults(
             createdAt: later(5),
           });
         await db.insert(schema.reviewEvents).values(events);
-        if (outcome === "disputed") {
+        if (outcome === "flagged") {
+          const readerId = readers.find((r) => r !== undefined && r !== contributorId) ?? null;
           await db.insert(schema.readerFlags).values({
             resultId,
+            reporterId: readerId,
             reason: "wrong-figures",
             note: "Capacity looks high for this pack.",
             createdAt: later(60),

@@ -7,12 +7,14 @@ import { labelForGroupKey } from "@/lib/analysis";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
 import { parseUnitsParam } from "@/lib/units";
+import { packWhere } from "@/server/open-data/catalogue";
 import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
 
 export async function loadChartData(state: ChartState): Promise<ChartData> {
   const filters = { maker: state.maker, cells: state.cells };
+  const where = await packWhere(filters);
   // Tagged cached reads: a moderation decision in this group refreshes embeds, views and images at once.
-  const samples = await cachedGroupSamples(state.group, filters);
+  const samples = await cachedGroupSamples(state.group, filters, where);
   const packs = aggregateByPack(samples);
   const base: ChartData = {
     state,
@@ -51,7 +53,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     );
     return { ...base, ranking };
   }
-  const series = await cachedGroupCurves(state.group, filters);
+  const series = await cachedGroupCurves(state.group, filters, where);
   const seen = new Set<string>();
   const curves: CurveLine[] = [];
   for (const s of series) {

@@ -9,7 +9,9 @@ import { checkAgainstCard, groupKey, type Analysis, type CardCheck } from "@/lib
 import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { isOwnIncomingLogKey, isOwnIncomingPhotoKey, objectBytes } from "@/server/storage";
+import { analyseOptionsFor } from "@/lib/open-data/recompute";
 import { analyseStored } from "@/server/uploads/log-upload";
+import { isRecordIdText } from "@/lib/validations/ids";
 import type { MethodCard, PackStep } from "@/lib/validations/result";
 
 export type PackFacts = { title: string; cells: number; ratedMah: number; labelledC: number; weightG: number | null };
@@ -37,7 +39,7 @@ export async function resolvePack(step: PackStep, userId: string): Promise<{ tar
   let makerName = step.makerName;
   let makerId: number | null = null;
   if (step.makerId !== "") {
-    const maker = /^\d{1,10}$/.test(step.makerId) ? await getMakerChoice(Number(step.makerId), userId) : null;
+    const maker = isRecordIdText(step.makerId) ? await getMakerChoice(Number(step.makerId), userId) : null;
     if (!maker)
       throw new AppError("validation", "That maker is not in the catalogue.", {
         "pack.makerId": ["That maker is not in the catalogue. Choose it again, or give a new maker's name."],
@@ -98,17 +100,18 @@ export async function checkFiles(logKey: string | null, photoKeys: string[], use
 export type Figured = { sha256: string; bytes: number; analysis: Analysis; checks: CardCheck[] };
 
 export async function analyseForCard(logKey: string, facts: PackFacts, card: MethodCard): Promise<Figured> {
+  // The same options a result's page gives the open CLI to recompute the figures (lib/open-data/recompute.ts).
   const { sha256, bytes, analysis } = await analyseStored(
     logKey,
-    {
+    analyseOptionsFor({
       cells: facts.cells,
       ratedMah: facts.ratedMah,
       labelledC: facts.labelledC,
-      ...(facts.weightG !== null ? { weightG: facts.weightG } : {}),
+      weightG: facts.weightG,
       cutoffVPerCell: card.cutoffVPerCell,
       stopTemperatureC: card.stopTemperatureC,
-      ...(card.packStartTemperatureC !== null ? { packStartTemperatureC: card.packStartTemperatureC } : {}),
-    },
+      packStartTemperatureC: card.packStartTemperatureC,
+    }),
     env().LOG_MAX_BYTES,
     "log",
   );
@@ -139,6 +142,7 @@ export async function resultFields(
           {
             code: "duplicate-log",
             message: `The same log file is already on result${same.length > 1 ? "s" : ""} ${same.map((id) => `#${id}`).join(", ")}.`,
+            resultIds: same,
           },
         ]
       : []),

@@ -15,9 +15,8 @@ import { analyseForCard, checkFiles, resultFields, type PackFacts } from "./prep
 
 export async function resubmitResultFor(input: ResubmitResultInput, user: SessionUser): Promise<{ resultId: number }> {
   const current = await getResultForEdit(input.resultId);
-  if (!current) throw new AppError("not_found", "That result does not exist.");
-  if (current.contributorId !== user.id)
-    throw new AppError("forbidden", "Only the contributor who submitted a result can resubmit it.");
+  // Someone else's result answers exactly like a missing one: no existence oracle.
+  if (!current || current.contributorId !== user.id) throw new AppError("not_found", "That result does not exist.");
   if (current.status !== "changes_requested")
     throw new AppError("conflict", "Only a result with changes requested can be resubmitted.");
   if (current.photoKeys.length + input.photoKeys.length > MAX_PHOTOS) {

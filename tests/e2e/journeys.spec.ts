@@ -130,7 +130,9 @@ test("a contributor answers a change request and the result is back in the queue
   await expect(page.getByText(/only a result with changes requested can be edited/)).toBeVisible();
 });
 
-test("a moderator keeps a reader-flagged result and it is no longer shown as disputed", async ({ page }) => {
+test("a moderator dismisses a reader's flag: the result stayed published throughout and its open check goes", async ({
+  page,
+}) => {
   await signIn(page, "moderator@sagline.localhost");
   await page.goto("/review/flags");
   await expect(page.getByRole("heading", { level: 1, name: "Reader flags" })).toBeVisible();
@@ -138,44 +140,52 @@ test("a moderator keeps a reader-flagged result and it is no longer shown as dis
     .getByTestId("flag-queue")
     .getByRole("listitem")
     .filter({ hasText: "Capacity looks high for this pack." })
-    .filter({ hasText: "Disputed" })
+    .filter({ hasText: "Approved" })
     .first();
   const resultHref = (await flag.getByRole("link", { name: /^result #\d+$/ }).getAttribute("href")) ?? "";
   const resultId = resultHref.replace("/review/", "");
   expect(resultId).toMatch(/^\d+$/);
 
-  // The public page says disputed before (and so holds a cached copy that the resolution must expire).
+  // The public page shows the open check before (and so holds a cached copy that the resolution must expire);
+  // the result is published and counted meanwhile.
   await page.goto(`/results/${resultId}`);
-  await expect(page.getByText("Disputed: a reader flagged this result")).toBeVisible();
+  await expect(page.getByTestId("open-case")).toContainText("the figures may be wrong — it still counts");
+  expect((await page.request.get(`/api/v1/results/${resultId}`)).status()).toBe(200);
 
   await page.goto("/review/flags");
   const row = page
     .getByTestId("flag-queue")
     .getByRole("listitem")
     .filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
-  await row.getByLabel("Note (required when correcting)").fill("Capacity checked against the log; it matches.");
+  await row
+    .getByLabel("Note (required when noting a correction or taking the result out)")
+    .fill("Capacity checked against the log; it matches.");
   const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
   expect(flagId).toMatch(/^\d+$/);
-  await row.getByRole("button", { name: "Keep" }).click();
+  await row.getByRole("button", { name: "Dismiss, result stays" }).click();
   // The action refreshes the queue: the resolved flag leaves it (and its form with it)…
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
   // …while the confirmation, outside the list, stays: it names the flag, the result and the outcome, and
   // holds the focus that the removed button had.
   const done = page.getByRole("status").filter({ hasText: `Flag #${flagId} on result #${resultId}` });
   await expect(done).toBeVisible();
-  await expect(done).toContainText("resolved: result kept. It is published again and no longer shows as disputed.");
+  await expect(done).toContainText(
+    "resolved: dismissed, result kept. It stays published and counted, and no longer shows an open check.",
+  );
   await expect(done).toBeFocused();
   await expect(page.getByTestId("flag-queue").getByText(`Flag #${flagId} on`)).toHaveCount(0);
   await page.goto("/review/flags");
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
 
   await page.goto(`/results/${resultId}`);
-  await expect(page.getByText("Disputed: a reader flagged this result")).toHaveCount(0);
-  await expect(page.getByTestId("review-history")).toContainText("disputed → approved");
-  await expect(page.getByTestId("review-history")).toContainText("Flag resolved: kept");
+  await expect(page.getByTestId("open-case")).toHaveCount(0);
+  // A flag never changed the status, so the public history has no step for it.
+  await expect(page.getByTestId("review-history")).not.toContainText("disputed");
 });
 
-test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the licence note", async ({ page }) => {
+test("a shopper downloads a filtered packs CSV from /data: strict RFC 4180, the licence in the README beside it", async ({
+  page,
+}) => {
   await page.goto("/data");
   await page.getByLabel("Cells in series (S)").fill("4");
   await page.getByLabel("Connector").fill("XT60");
@@ -188,16 +198,14 @@ test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the lic
   expect(download.url()).toMatch(/connector=XT60/);
   const text = await readFile((await download.path()) ?? "", "utf8");
 
-  const records = parseCsv(text);
-  const notes = records.filter((r) => r[0]?.startsWith("#")).map((r) => r.join(","));
-  expect(notes.join(" ")).toContain("CC BY 4.0");
-  expect(notes.join(" ")).toContain("https://creativecommons.org/licenses/by/4.0/");
-  const data = records.filter((r) => !r[0]?.startsWith("#"));
-  const [header, ...body] = data;
+  // Nothing but a header and records: no comment lines for a CSV reader to mistake for the header.
+  const [header, ...body] = parseCsv(text);
   expect(header).toEqual([
     "id",
     "slug",
     "makerId",
+    "makerSlug",
+    "makerName",
     "model",
     "cellsInSeries",
     "ratedCapacityMah",
@@ -205,14 +213,24 @@ test("a shopper downloads a filtered packs CSV from /data: RFC 4180 with the lic
     "labelledBurstC",
     "weightG",
     "connector",
-    "approvedResultCount",
+    "resultCount",
   ]);
+  // The licence and the credit are in the README the page links, beside the files.
+  const readme = await page.request.get(
+    (await page
+      .getByRole("link", { name: /README/ })
+      .first()
+      .getAttribute("href")) ?? "",
+  );
+  const notes = await readme.text();
+  expect(notes).toContain("CC BY 4.0");
+  expect(notes).toContain("https://creativecommons.org/licenses/by/4.0/");
   expect(body.length).toBeGreaterThan(0);
   for (const r of body) {
     expect(r).toHaveLength(header?.length ?? 0);
-    expect(r[4]).toBe("4");
-    expect(r[9]).toBe("XT60");
-    expect(Number(r[5])).toBeGreaterThan(0);
+    expect(r[6]).toBe("4");
+    expect(r[11]).toBe("XT60");
+    expect(Number(r[7])).toBeGreaterThan(0);
   }
   // The same filter through the public API gives the same packs.
   const api = (await (await page.request.get("/api/v1/packs?cells=4&connector=XT60&size=100")).json()) as {

@@ -98,21 +98,6 @@ test("a moderator approves one flagged result, rejects another, and the approved
   ).toBeVisible();
 });
 
-test("a reader flags a published result and everyone sees it as disputed", async ({ page }) => {
-  await page.goto("/");
-  const href = (await page.locator('main a[href^="/results/"]').first().getAttribute("href")) ?? "";
-  expect(href).toMatch(/^\/results\/\d+$/);
-  await page.goto(href);
-  await expect(page.getByText("Disputed: a reader flagged this result")).toHaveCount(0);
-  await page.getByRole("button", { name: "Flag this result" }).click();
-  await page.getByLabel("What is wrong?").selectOption("wrong-figures");
-  await page.getByLabel("Note for the moderators (optional)").fill("The capacity is above the label.");
-  await page.getByRole("button", { name: "Send flag" }).click();
-  await expect(page.getByText("The result now shows as disputed")).toBeVisible();
-  await page.reload();
-  await expect(page.getByText("Disputed: a reader flagged this result")).toBeVisible();
-});
-
 test("a contributor opening the review queue gets the 403 page", async ({ page }) => {
   await signIn(page, "ridgeline@sagline.localhost");
   const res = await page.goto("/review");

@@ -161,3 +161,24 @@ test("the open-data page offers downloads, the licence and Dataset markup", asyn
   await page.getByRole("link", { name: "API guide" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("API guide");
 });
+
+test("a result's page links its raw log and shows the command that recomputes its figures", async ({ page }) => {
+  await page.goto("/");
+  const href =
+    (await page.getByTestId("newest-results").locator('a[href^="/results/"]').first().getAttribute("href")) ?? "";
+  expect(href).toMatch(/^\/results\/\d+$/);
+  await page.goto(href);
+  const section = page.getByTestId("raw-log");
+  await expect(section.getByRole("heading", { name: /Raw log/ })).toBeVisible();
+  const link = section.getByRole("link", { name: /Download the log/ });
+  const logHref = (await link.getAttribute("href")) ?? "";
+  expect(logHref).toBe(`/api/v1${href}/log`);
+  const command = (await section.getByTestId("recompute-command").textContent()) ?? "";
+  expect(command).toMatch(/^npm run analyse -- sagline-result-\d+-log\.csv --cells \d+ --rated-mah \d+ /);
+  const log = await page.request.get(logHref);
+  expect(log.status()).toBe(200);
+  expect(log.headers()["content-type"]).toBe("text/csv; charset=utf-8");
+  expect(log.headers()["etag"]).toMatch(/^"[0-9a-f]{64}"$/);
+  expect(log.headers()["content-disposition"]).toContain(command.split(" ")[4] ?? "none");
+  expect((await log.body()).byteLength).toBeGreaterThan(1000);
+});

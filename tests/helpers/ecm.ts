@@ -10,3 +10,4 @@ export {
   type CsvDialect,
   type EcmOptions,
 } from "@/lib/synthetic/equivalent-circuit";
+export { clock, decimate } from "./logs";

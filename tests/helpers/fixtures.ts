@@ -69,6 +69,8 @@ export type ResultOpts = {
   loadMode?: "constant-current" | "constant-power" | "constant-resistance";
   publishedAt?: Date;
   curve?: CurvePoint[];
+  /** A reader's open flag on it (an open case: the result stays approved and counted). */
+  openCase?: boolean;
 };
 
 export async function makeResult(
@@ -121,13 +123,14 @@ export async function makeResult(
       dcResistanceMohm: o.dcResistanceMohm === undefined ? 12 : o.dcResistanceMohm,
       loadRateC: rateC,
       groupKey: groupKey(card).key,
-      publishedAt: status === "approved" || status === "disputed" ? (o.publishedAt ?? new Date()) : null,
+      publishedAt: status === "approved" ? (o.publishedAt ?? new Date()) : null,
     })
     .returning();
   if (!r) throw new Error("no result");
   await db
     .insert(reviewEvents)
     .values({ resultId: r.id, actorId: contributorId, toStatus: "pending", note: "Submitted." });
+  if (o.openCase) await db.insert(readerFlags).values({ resultId: r.id, reason: "wrong-figures", note: "Check it." });
   return r;
 }
 
@@ -138,4 +141,17 @@ export async function emptyCatalogue() {
   await db.delete(results).where(sql`true`);
   await db.delete(packs).where(sql`true`);
   await db.delete(makers).where(sql`true`);
+}
+
+/**
+ * An open reader case on a result, as a signed-in reader's flag leaves it: the result stays approved and keeps
+ * counting (the counting rule, lib/open-data/licence.ts#PUBLISHED_RULE) until a moderator resolves the case.
+ */
+export async function openReaderCase(resultId: number, reporterId: string) {
+  const [flag] = await db
+    .insert(readerFlags)
+    .values({ resultId, reporterId, reason: "wrong-figures", note: "The capacity looks high." })
+    .returning();
+  if (!flag) throw new Error("no flag");
+  return flag;
 }

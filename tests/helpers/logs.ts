@@ -1,5 +1,5 @@
 // Invented logs for tests: the equivalent-circuit generator in the dialects testers' loggers write.
-import { generateLog, toCsv, type CsvDialect, type EcmOptions } from "@/lib/synthetic/equivalent-circuit";
+import { generateLog, toCsv, type CsvDialect, type EcmOptions, type EcmRow } from "@/lib/synthetic/equivalent-circuit";
 
 export const SEMICOLON_DIALECT: CsvDialect = {
   delimiter: ";",
@@ -30,6 +30,22 @@ export function sampleLog(
     ...options,
   });
   return { csv: toCsv(rows, dialect), truth };
+}
+
+/**
+ * A slower logger beside a faster tester: keeps one row in `every`, starting at row `offset`. The
+ * tester stops the load by its own fast meter, so the kept log usually ends its discharge a little
+ * above the cut-off, as real logs do.
+ */
+export function decimate(rows: EcmRow[], every: number, offset = 0): EcmRow[] {
+  return rows.filter((_, k) => k % every === offset % every);
+}
+
+/** hh:mm:ss for a time of day in seconds (wraps at 24 h, as a logger's clock does). */
+export function clock(seconds: number): string {
+  const s = Math.round(seconds) % 86400;
+  const pad = (n: number) => String(n).padStart(2, "0");
+  return `${pad(Math.floor(s / 3600))}:${pad(Math.floor(s / 60) % 60)}:${pad(s % 60)}`;
 }
 
 /** A request as the browser or curl would send it. */

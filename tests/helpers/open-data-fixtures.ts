@@ -2,7 +2,7 @@
 // throwaway database never collide.
 import { db } from "@/db";
 import { makers, packs, results, users, type ReviewStatus } from "@/db/schema";
-import type { Figures } from "@/lib/analysis";
+import { sustainedRule, type Figures } from "@/lib/analysis";
 
 function figures(over: Partial<Figures> = {}): Figures {
   return {
@@ -10,10 +10,11 @@ function figures(over: Partial<Figures> = {}): Figures {
     skippedLines: 0,
     durationS: 600,
     cells: 4,
-    capacityMah: 1250,
-    energyWh: 18.2,
+    // Float noise as a double sum leaves it: the published figures must come out rounded (1250, 18.2, 3.652).
+    capacityMah: 1250.4321,
+    energyWh: 18.2049999,
     meanVoltageV: 14.6,
-    meanVoltagePerCellV: 3.65,
+    meanVoltagePerCellV: 3.652431030273438,
     minVoltageV: 13.2,
     minVoltagePerCellV: 3.3,
     peakCurrentA: 30,
@@ -42,6 +43,21 @@ function figures(over: Partial<Figures> = {}): Figures {
     dischargeCurrentSign: "positive",
     cellsSource: "given",
     warnings: [],
+    reachedCutoff: true,
+    cutoffSource: "stated",
+    dcResistanceIndicative: false,
+    sagLimitedCEstimate: 40,
+    sagLimitedCAssumptions: null,
+    sustainedCMeasured: null,
+    sustainedCReason: "no-temperature",
+    sustainedCRule: sustainedRule(3.3, 60),
+    sustainedLabelRatio: null,
+    cellSpreadV: null,
+    sampleIntervalS: 1,
+    discharges: [],
+    headlineDischarge: 1,
+    retention: null,
+    warningCodes: [],
     ...over,
   };
 }

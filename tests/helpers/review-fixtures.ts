@@ -2,7 +2,7 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
-import type { Figures } from "@/lib/analysis";
+import { sustainedRule, type Figures } from "@/lib/analysis";
 
 function figures(over: Partial<Figures> = {}): Figures {
   return {
@@ -42,6 +42,21 @@ function figures(over: Partial<Figures> = {}): Figures {
     dischargeCurrentSign: "positive",
     cellsSource: "rest-voltage",
     warnings: [],
+    reachedCutoff: true,
+    cutoffSource: "stated",
+    dcResistanceIndicative: false,
+    sagLimitedCEstimate: 50,
+    sagLimitedCAssumptions: null,
+    sustainedCMeasured: null,
+    sustainedCReason: "no-temperature",
+    sustainedCRule: sustainedRule(3.3, 60),
+    sustainedLabelRatio: null,
+    cellSpreadV: null,
+    sampleIntervalS: 1,
+    discharges: [],
+    headlineDischarge: 1,
+    retention: null,
+    warningCodes: [],
     ...over,
   };
 }
@@ -110,7 +125,7 @@ export async function makeResult(p: {
       capacityRatio: f.capacityRatio,
       loadRateC: 10,
       groupKey: p.groupKey ?? `fixture-group-${randomUUID().slice(0, 8)}`,
-      publishedAt: p.status === "approved" || p.status === "disputed" ? new Date() : null,
+      publishedAt: p.status === "approved" ? new Date() : null,
       ...(p.submittedAt ? { submittedAt: p.submittedAt } : {}),
     })
     .returning();

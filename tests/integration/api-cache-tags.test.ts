@@ -10,6 +10,7 @@ import { db } from "@/db";
 import { decideResult } from "@/server/review";
 import { makers, users } from "@/db/schema";
 import { taggedCache } from "../helpers/next-mocks";
+import { makeResult } from "../helpers/fixtures";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).taggedCache);
@@ -31,6 +32,8 @@ beforeAll(async () => {
     .returning();
   if (!mod) throw new Error("no moderator");
   moderatorId = mod.id;
+  // Enough published results (in a group of their own) for a page beyond the cached first twenty.
+  for (let i = 0; i < 21; i++) await makeResult(fx.packs[2]!, mod.id, { ambientC: 30 });
 });
 
 async function total(path: string): Promise<number> {
@@ -91,9 +94,11 @@ describe("tagged caching of the public API", () => {
     await getPack(req(`/api/v1/packs/${fx.packs[0]!.slug}`), { params: Promise.resolve({ slug: fx.packs[0]!.slug }) });
     const size = taggedCache.store.size;
     expect(await total(`/api/v1/results?q=${encodeURIComponent("anything at all")}`)).toBeGreaterThanOrEqual(0);
-    expect(await total(`/api/v1/results?group=${P}_made_up_group`)).toBe(0);
+    const madeUp = await getResults(req(`/api/v1/results?group=${P}_made_up_group`), noParams);
+    expect(madeUp.status).toBe(404);
     expect(await total(`/api/v1/results?minMah=1000&maxMah=1400`)).toBeGreaterThan(0);
-    expect(await total(`/api/v1/results?page=500&size=1`)).toBeGreaterThan(0);
+    expect(await total(`/api/v1/results?page=21&size=1`)).toBeGreaterThanOrEqual(21);
+    expect((await getResults(req(`/api/v1/results?page=500&size=1`), noParams)).status).toBe(422);
     const missing = await getPack(req(`/api/v1/packs/${P}-no-such-pack`), {
       params: Promise.resolve({ slug: `${P}-no-such-pack` }),
     });

@@ -1,4 +1,5 @@
-// GET /api/v1/packs: filters, fuzzy search, sorting, pages, 422 on bad params, ETag/304, CORS.
+// GET /api/v1/packs: filters, fuzzy search, sorting, pages ({ data, meta, links }), 422 on bad params and pages past
+// the end, 404 for an unknown group, ETag/304, CORS.
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { groupKey } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
@@ -16,10 +17,9 @@ const G = groupKey({
   cyclesBeforeTest: 0,
 }).key;
 const call = (qs: string, headers: Record<string, string> = {}) =>
-  GET(
-    new Request(`http://localhost/api/v1/packs${qs}`, { headers: { "x-forwarded-for": "10.9.9.9", ...headers } }),
-    {},
-  );
+  GET(new Request(`http://localhost/api/v1/packs${qs}`, { headers: { "x-forwarded-for": "10.9.9.9", ...headers } }), {
+    params: Promise.resolve({}),
+  });
 
 beforeAll(async () => {
   await emptyCatalogue();
@@ -66,10 +66,11 @@ describe("GET /api/v1/packs", () => {
     expect(res.headers.get("cache-control")).toMatch(/public, max-age=\d+/);
     expect(res.headers.get("etag")).toMatch(/^"[\w-]+"$/);
     const body = await res.json();
-    expect(body.total).toBe(2);
+    expect(body.meta).toMatchObject({ page: 1, size: 10, total: 2, pageCount: 1, sort: "capacity", dir: "desc" });
+    expect(body.links).toMatchObject({ next: null, prev: null });
     expect(body.data.map((p: { model: string }) => p.model)).toEqual(["Torrent 1500 4S 50C", "Trail 1300 4S 95C"]);
-    expect(body.licence.name).toBe("CC BY 4.0");
-    expect(body.data[0]).not.toHaveProperty("id");
+    expect(body.meta.licence).toMatchObject({ identifier: "CC-BY-4.0", name: "CC BY 4.0" });
+    expect(body.data[0]).toMatchObject({ resultCount: 1, makerSlug: expect.any(String), makerId: expect.any(Number) });
   });
 
   it("answers 304 when the client holds the same ETag", async () => {
@@ -82,6 +83,7 @@ describe("GET /api/v1/packs", () => {
 
   it("finds packs by a misspelt maker and model (fuzzy)", async () => {
     const body = await (await call("?q=brakwater%20torent")).json();
+    expect(body.meta.filters).toEqual({ q: "brakwater torent" });
     expect(body.data[0]?.model).toBe("Torrent 1500 4S 50C");
   });
 
@@ -89,21 +91,34 @@ describe("GET /api/v1/packs", () => {
     expect(
       (await (await call("?minMah=1400&maxMah=2500&minG=180")).json()).data.map((p: { model: string }) => p.model),
     ).toEqual(["Surge 2200 3S 60C"]);
-    expect((await (await call("?minC=90")).json()).total).toBe(1);
+    expect((await (await call("?minC=90")).json()).meta.total).toBe(1);
     const fell = await (await call("?maker=fellrunner-test")).json();
-    expect(fell.total).toBe(0); // fixture maker slugs are generated; unknown slug → empty, not an error
+    expect(fell.meta.total).toBe(0); // fixture maker slugs are generated; unknown slug → empty, not an error
     const grouped = await (await call(`?group=${G}`)).json();
-    expect(grouped.total).toBe(1);
+    expect(grouped.meta.total).toBe(1);
     expect(grouped.data[0]).toMatchObject({ model: "Torrent 1500 4S 50C", measuredC: 40, groupN: 1 });
   });
 
   it("refuses bad search params with 422 and field errors, keeping CORS", async () => {
-    const bad = await call("?cells=abc&size=7&sort=colour");
+    const bad = await call("?cells=abc&size=700&sort=colour");
     expect(bad.status).toBe(422);
     expect(bad.headers.get("access-control-allow-origin")).toBe("*");
     const body = await bad.json();
     expect(Object.keys(body.error.fieldErrors).sort()).toEqual(["cells", "size", "sort"]);
     expect((await call("?minMah=3000&maxMah=1000")).status).toBe(422);
+  });
+
+  it("answers 422 for a page past the last (never silently the last page) and 404 for an unknown group", async () => {
+    const last = await (await call("?size=1&page=4")).json();
+    expect(last.data).toHaveLength(1);
+    expect(last.links.next).toBeNull();
+    expect(last.links.prev).toContain("page=3");
+    const past = await call("?size=1&page=5");
+    expect(past.status).toBe(422);
+    expect((await past.json()).error.fieldErrors).toEqual({ page: ["page must be at most 4."] });
+    const unknown = await call("?group=dc-step_no_such_group");
+    expect(unknown.status).toBe(404);
+    expect(unknown.headers.get("access-control-allow-origin")).toBe("*");
   });
 
   it("answers the CORS preflight", () => {

@@ -1,5 +1,5 @@
 // Bench profiles: create, update, delete through the server actions, with ownership enforced in the
-// mutations' WHERE clauses (someone else's profile → 403, a missing one → 404).
+// mutations' WHERE clauses (someone else's profile answers exactly like a missing one: 404, no existence oracle).
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
@@ -100,7 +100,7 @@ describe("bench profiles", () => {
     expect(r.error?.issues[0]?.path).toEqual(["defaultStopTemperatureC"]);
   });
 
-  it("updates only the owner's profile: another user gets 403, a missing id 404", async () => {
+  it("updates only the owner's profile: another user's id answers exactly like a missing one (404)", async () => {
     const owner = await signedIn("contributor", "owner");
     const other = await signedIn("contributor", "other");
     requestState.token = owner.token;
@@ -113,15 +113,15 @@ describe("bench profiles", () => {
 
     requestState.token = other.token;
     const hijack = await saveBenchProfile(null, form({ ...valid, id: String(id), name: "Not mine" }));
-    expect(hijack).toMatchObject({ ok: false, code: "forbidden" });
     const missing = await saveBenchProfile(null, form({ ...valid, id: "99999999" }));
     expect(missing).toMatchObject({ ok: false, code: "not_found" });
+    expect(hijack).toEqual(missing);
 
     const [row] = await db.select().from(benchProfiles).where(eq(benchProfiles.id, id));
     expect(row?.name).toBe("Summer bench");
     // The mutation itself enforces ownership, whoever calls it.
     await expect(updateBenchProfile(other.id, id, benchProfileSchema.parse(valid))).rejects.toMatchObject({
-      code: "forbidden",
+      code: "not_found",
     });
   });
 
@@ -134,8 +134,10 @@ describe("bench profiles", () => {
     const id = created.data.id;
 
     requestState.token = other.token;
-    expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: false, code: "forbidden" });
-    await expect(deleteRow(other.id, id)).rejects.toMatchObject({ code: "forbidden" });
+    const foreign = await deleteBenchProfile(null, { id });
+    expect(foreign).toMatchObject({ ok: false, code: "not_found" });
+    expect(foreign).toEqual(await deleteBenchProfile(null, { id: 2_000_000_000 }));
+    await expect(deleteRow(other.id, id)).rejects.toMatchObject({ code: "not_found" });
     expect(await db.select().from(benchProfiles).where(eq(benchProfiles.id, id))).toHaveLength(1);
 
     requestState.token = owner.token;

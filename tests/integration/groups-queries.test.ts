@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
 import { listPackRows } from "@/db/queries/packs";
 import { groupKey, summarise } from "@/lib/analysis";
-import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
+import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 
 const warm = {
   resistanceMethod: "dc-step",
@@ -29,10 +29,12 @@ beforeAll(async () => {
   const b1 = await makePack(makerB.id, { labelledContinuousC: 100 });
   const c1 = await makePack(makerC.id, { labelledContinuousC: 40 });
   ids = { a1: a1.id, a2: a2.id, b1: b1.id, c1: c1.id };
-  // a1 in G: sag-limited C 10, 20, 40, 100 → median 30 (type-7 interpolation), and one disputed result that counts.
+  // a1 in G: sag-limited C 10, 20, 40, 100 → median 30 (type-7 interpolation); the 100 has an open reader case
+  // and still counts (the counting rule: approved is published).
   for (const c of [10, 20, 40]) await makeResult(a1, tester.id, { sagLimitedC: c });
-  await makeResult(a1, tester.id, { sagLimitedC: 100, status: "disputed" });
-  // Not public: never counted.
+  await openReaderCase((await makeResult(a1, tester.id, { sagLimitedC: 100 })).id, tester.id);
+  // Not published: never counted (nor is a result on a pack that is only proposed).
+  await makeResult(await makePack(makerA.id, { status: "proposed" }), tester.id, { sagLimitedC: 500 });
   await makeResult(a1, tester.id, { sagLimitedC: 500, status: "pending" });
   await makeResult(a1, tester.id, { sagLimitedC: 500, status: "rejected" });
   await makeResult(a1, tester.id, { sagLimitedC: 500, status: "withdrawn" });

@@ -21,7 +21,9 @@ const req = (path: string) =>
 beforeAll(async () => {
   const fx = await seedOpenData(P);
   state = { v: 1, kind: "label-check", group: fx.group, title: `${P} label check` };
-  await db.insert(savedCharts).values({ id: `${P}-one`, kind: "label-check", title: state.title, state });
+  await db
+    .insert(savedCharts)
+    .values({ id: `${P}-one`, kind: "label-check", title: state.title, state, featuredAt: new Date() });
 });
 
 describe("GET /api/oembed (oembed.com §2.3)", () => {
@@ -173,7 +175,7 @@ describe("chart image sizes (width, height, PNG scale)", () => {
 });
 
 describe("GET /api/v1/charts", () => {
-  it("lists saved charts with their links", async () => {
+  it("lists featured charts with their links", async () => {
     const body = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as {
       data: { id: string; links: { permalink: string; embed: string } | null }[];
     };
@@ -183,7 +185,7 @@ describe("GET /api/v1/charts", () => {
   });
 });
 
-describe("POST /api/v1/charts (curated list, chart.save)", () => {
+describe("POST /api/v1/charts (saving a chart, chart.save; listing it is a moderator's decision)", () => {
   const post = (body: unknown, headers: Record<string, string> = {}) =>
     import("@/app/api/v1/charts/route").then(({ POST }) =>
       POST(
@@ -200,7 +202,7 @@ describe("POST /api/v1/charts (curated list, chart.save)", () => {
     expect((await post({ state })).status).toBe(401);
   });
 
-  it("saves for a signed-in contributor, refuses other origins and invalid states", async () => {
+  it("saves for a signed-in contributor (not listed until featured), refuses other origins and invalid states", async () => {
     const { sessions, users } = await import("@/db/schema");
     const [u] = await db
       .insert(users)
@@ -215,8 +217,10 @@ describe("POST /api/v1/charts (curated list, chart.save)", () => {
     expect(res.status).toBe(201);
     const saved = ((await res.json()) as { data: { id: string } }).data;
     expect(saved.id).toMatch(/^saved-by-a-contributor-[0-9a-f]{8}$/);
+    expect(saved).toMatchObject({ featuredAt: null });
     const list = (await (await listCharts(req("/api/v1/charts"), noParams)).json()) as { data: { id: string }[] };
-    expect(list.data.map((c) => c.id)).toContain(saved.id);
+    expect(list.data.map((c) => c.id)).not.toContain(saved.id);
+    expect(list.data.map((c) => c.id)).toContain(`${P}-one`);
     expect((await post({ state }, { ...cookie, origin: "https://elsewhere.example" })).status).toBe(403);
     expect((await post({ state: { ...state, kind: "pie" } }, cookie)).status).toBe(422);
   });

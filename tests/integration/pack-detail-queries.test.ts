@@ -2,7 +2,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackDetail } from "@/db/queries/pack-detail";
 import { retentionTrend } from "@/lib/analysis";
-import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
+import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 
 let slug = "";
 
@@ -14,9 +14,11 @@ beforeAll(async () => {
   slug = pack.slug;
   // Sustained C candidates (all new packs, warm, 3.3 V; rate bands differ so groups differ too).
   await makeResult(pack, tester.id, { rateC: 5, sagLimitedC: 30 });
-  await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32 }); // the answer: completed, cool enough
+  await makeResult(pack, tester.id, { rateC: 8, sagLimitedC: 32 }); // completed, cool enough
   await makeResult(pack, tester.id, { rateC: 15, passedStop: true }); // passed the stop temperature
-  await makeResult(pack, tester.id, { rateC: 20, status: "disputed" }); // disputed: not counted for sustained C
+  // The answer: completed and cool enough; an open reader case leaves it published, so it counts.
+  await openReaderCase((await makeResult(pack, tester.id, { rateC: 20 })).id, tester.id);
+  await makeResult(pack, tester.id, { rateC: 25, status: "rejected" }); // not published
   await makeResult(pack, tester.id, { rateC: 12, reachedCutoff: false }); // stopped before cut-off
   await makeResult(pack, tester.id, { rateC: 30, loadMode: "constant-power" }); // not constant current
   await makeResult(pack, tester.id, { rateC: 40, status: "pending" }); // not public
@@ -37,14 +39,14 @@ describe("pack detail", () => {
     expect(keys.size).toBe(d?.groups.length);
     const byKeyEnd = (end: string) => d?.groups.find((g) => g.group.key.endsWith(end));
     expect(byKeyEnd("_r5-10_new")?.n).toBe(1); // the new 8C run
-    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, disputed: 1 }); // 12C, 15C and the disputed 20C
+    expect(byKeyEnd("_r10-20_new")).toMatchObject({ n: 3, openCases: 1 }); // 12C, 15C and 20C (with its open case)
     expect(byKeyEnd("_r5-10_c50-199")?.n).toBe(3); // aged 60, 120 and 180 cycles
     expect(byKeyEnd("_r5-10_c50-199")?.figures.capacityMah?.median).toBe(1800);
   });
 
   it("takes sustained C from approved constant-current results completed to cut-off below the stop temperature", async () => {
     const d = await getPackDetail(slug);
-    expect(d?.sustained?.rateC).toBe(8);
+    expect(d?.sustained?.rateC).toBe(20);
   });
 
   it("builds the cycling series from results differing only by age, with the retention trend", async () => {

@@ -115,7 +115,9 @@ describe("computeAndStoreFlags", () => {
     const first = await makeResult({ packId: pack.id, contributorId: u.id, logSha256: sha });
     const second = await makeResult({ packId: pack.id, contributorId: u.id, logSha256: sha });
     const flags = await computeAndStoreFlags(second.id);
-    expect(flags).toEqual([{ code: "duplicate-log", message: expect.stringContaining(`#${first.id}`) }]);
+    expect(flags).toEqual([
+      { code: "duplicate-log", message: expect.stringContaining(`#${first.id}`), resultIds: [first.id] },
+    ]);
   });
 
   it("proposed-catalogue: a result on a proposed pack of a proposed maker", async () => {

@@ -3,9 +3,9 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { reviewEvents } from "@/db/schema";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
-import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
+import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 
-const ids = { approved: 0, anon: 0, pending: 0, disputed: 0, older: 0 };
+const ids = { approved: 0, anon: 0, pending: 0, openCase: 0, older: 0, proposedPack: 0 };
 
 beforeAll(async () => {
   await emptyCatalogue();
@@ -19,21 +19,18 @@ beforeAll(async () => {
   ids.approved = (await makeResult(pack, named.id, { publishedAt: day(3) })).id;
   ids.anon = (await makeResult(pack, anon.id, { publishedAt: day(2) })).id;
   ids.pending = (await makeResult(pack, named.id, { status: "pending" })).id;
-  ids.disputed = (await makeResult(pack, named.id, { status: "disputed", publishedAt: day(5) })).id;
+  ids.openCase = (await makeResult(pack, named.id, { publishedAt: day(5) })).id;
+  await openReaderCase(ids.openCase, anon.id);
+  // Approved, but its pack is only proposed: not in the catalogue, so not published (the counting rule).
+  ids.proposedPack = (
+    await makeResult(await makePack(m.id, { status: "proposed" }), named.id, { publishedAt: day(6) })
+  ).id;
   await db.insert(reviewEvents).values([
     {
       resultId: ids.approved,
       actorId: moderator.id,
       fromStatus: "pending",
       toStatus: "approved",
-      createdAt: new Date(Date.now() + 1000),
-    },
-    {
-      resultId: ids.disputed,
-      actorId: null,
-      fromStatus: "approved",
-      toStatus: "disputed",
-      reason: "reader-flag",
       createdAt: new Date(Date.now() + 1000),
     },
   ]);
@@ -56,15 +53,19 @@ describe("published results", () => {
     expect(JSON.stringify(r)).not.toContain("Secret Name");
   });
 
-  it("keeps disputed results visible and hides pending ones", async () => {
-    expect((await getPublicResult(ids.disputed))?.status).toBe("disputed");
-    expect((await getPublicResult(ids.disputed))?.events.at(-1)?.actor).toBe("system");
+  it("keeps a result with an open reader case published, with the case's reason; hides pending ones and those off the catalogue", async () => {
+    const flagged = await getPublicResult(ids.openCase);
+    expect(flagged).toMatchObject({ openCase: true, openCaseReasons: ["wrong-figures"] });
+    // A flag changes no status: the history has no step for it.
+    expect(flagged?.events.map((e) => e.to)).toEqual(["pending"]);
+    expect(await getPublicResult(ids.approved)).toMatchObject({ openCase: false, openCaseReasons: [] });
     expect(await getPublicResult(ids.pending)).toBeNull();
+    expect(await getPublicResult(ids.proposedPack)).toBeNull();
     expect(await getPublicResult(999_999)).toBeNull();
   });
 
-  it("lists the newest approved results first (not disputed, not pending)", async () => {
+  it("lists the newest published results first (an open case counts; pending and proposed packs do not)", async () => {
     const list = await listNewestApprovedResults(10);
-    expect(list.map((r) => r.id)).toEqual([ids.approved, ids.anon, ids.older]);
+    expect(list.map((r) => r.id)).toEqual([ids.openCase, ids.approved, ids.anon, ids.older]);
   });
 });

@@ -12,6 +12,7 @@ vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCa
 const { default: ReviewQueuePage } = await import("@/app/(review)/review/page");
 const { default: ReaderFlagsPage } = await import("@/app/(review)/review/flags/page");
 const { default: CataloguePage } = await import("@/app/(admin)/admin/catalogue/page");
+const { default: SavedChartsPage } = await import("@/app/(review)/review/charts/page");
 
 const pages: { name: string; allowed: string[]; render: () => Promise<unknown> }[] = [
   {
@@ -20,6 +21,11 @@ const pages: { name: string; allowed: string[]; render: () => Promise<unknown> }
     render: () => ReviewQueuePage({ searchParams: Promise.resolve({ flag: "bogus" }) }),
   },
   { name: "/review/flags", allowed: ["moderator", "admin"], render: () => ReaderFlagsPage() },
+  {
+    name: "/review/charts",
+    allowed: ["moderator", "admin"],
+    render: () => SavedChartsPage({ searchParams: Promise.resolve({}) }),
+  },
   { name: "/admin/catalogue", allowed: ["admin"], render: () => CataloguePage() },
 ];
 

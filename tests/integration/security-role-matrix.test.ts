@@ -44,11 +44,12 @@ const EXPECTED_ACTIONS: Record<string, Permission> = {
   rejectResult: "result.review",
   requestChanges: "result.review",
   resolveFlag: "flag.resolve",
+  featureChart: "chart.feature",
 };
 const EXPECTED_ROUTES: Record<string, Permission | "public"> = {
   "POST api/auth/[...nextauth]": "public",
   "POST api/v1/analyse": "public",
-  "POST api/v1/results/[id]/flags": "public",
+  "POST api/v1/results/[id]/flags": "result.flag",
   "POST api/v1/charts": "chart.save",
   "POST api/v1/uploads/log": "upload.create",
   "POST api/v1/uploads/photo": "upload.create",

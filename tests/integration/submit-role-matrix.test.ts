@@ -1,6 +1,6 @@
 // The role matrix for submissions: every action, route handler and page added for submitting, called with
 // no session and with each role. Every role may submit, so the wrong-role cases are about ownership:
-// someone else's result → 403 (or 404 when it does not exist).
+// someone else's result answers exactly like a missing one (404), so nobody learns which ids exist.
 import { eq } from "drizzle-orm";
 import { describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
@@ -76,12 +76,12 @@ describe("submission role matrix", () => {
       expect(await SubmitPage().then(() => "render", outcomeOf)).toBe(allowed ? "render" : "redirect to sign-in");
     });
 
-    it(`/submit/[id] of someone else's result as ${who} → ${role ? "403" : "redirect to sign-in"}; own → render`, async () => {
+    it(`/submit/[id] of someone else's result as ${who} → ${role ? "404" : "redirect to sign-in"}; own → render`, async () => {
       const id = await someonesResult("changes_requested");
       const me = await as(role);
       const page = (resultId: number) =>
         ResubmitPage({ params: Promise.resolve({ resultId: String(resultId) }) }).then(() => "render", outcomeOf);
-      expect(await page(id)).toBe(role ? "403" : "redirect to sign-in");
+      expect(await page(id)).toBe(role ? "404" : "redirect to sign-in");
       if (me) {
         expect(await page(2_000_000_000)).toBe("404");
         expect(await page(await someonesResult("changes_requested", me))).toBe("render");
@@ -129,11 +129,11 @@ describe("submission role matrix", () => {
         expect(res).toMatchObject(allowed ? { ok: true } : { ok: false, code: "unauthenticated" });
     });
 
-    it(`withdrawResult and resubmitResult of someone else's result as ${who} → ${role ? "forbidden" : "unauthenticated"}`, async () => {
+    it(`withdrawResult and resubmitResult of someone else's result as ${who} → ${role ? "not_found" : "unauthenticated"}`, async () => {
       const pending = await someonesResult("pending");
       const asked = await someonesResult("changes_requested");
       await as(role);
-      const expected = role ? "forbidden" : "unauthenticated";
+      const expected = role ? "not_found" : "unauthenticated";
       expect(await withdrawResult(null, { resultId: String(pending) })).toMatchObject({ ok: false, code: expected });
       const answer = {
         resultId: String(asked),

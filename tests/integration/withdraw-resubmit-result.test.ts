@@ -70,13 +70,15 @@ describe("withdrawResult", () => {
   );
 
   it.each(["contributor", "moderator", "admin"] as const)(
-    "refuses a %s withdrawing someone else's result (403), and a result that does not exist (404)",
+    "refuses a %s withdrawing someone else's result exactly like one that does not exist (404)",
     async (role) => {
       const { id } = await resultOf();
       const other = await signedIn(role);
       requestState.token = other.token;
-      expect(await withdrawResult(null, { resultId: String(id) })).toMatchObject({ ok: false, code: "forbidden" });
-      expect(await withdrawResult(null, { resultId: "2000000000" })).toMatchObject({ ok: false, code: "not_found" });
+      const foreign = await withdrawResult(null, { resultId: String(id) });
+      const missing = await withdrawResult(null, { resultId: "2000000000" });
+      expect(missing).toMatchObject({ ok: false, code: "not_found" });
+      expect(foreign).toEqual(missing);
       expect(await statusOf(id)).toBe("pending");
     },
   );
@@ -140,14 +142,14 @@ describe("resubmitResult", () => {
     expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
   });
 
-  it("refuses someone else's result (403), a pending one (409), no session (401), and an answer without a note (422)", async () => {
+  it("refuses someone else's result (404, like a missing one), a pending one (409), no session (401), and an answer without a note (422)", async () => {
     const { id } = await resultOf("contributor", "changes_requested");
     expect((await resubmitResult(null, answer(id, { note: "" }))).fieldErrors?.note?.[0]).toMatch(
       /Enter the answer to the moderator/,
     );
     const other = await signedIn("admin");
     requestState.token = other.token;
-    expect(await resubmitResult(null, answer(id))).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await resubmitResult(null, answer(id))).toMatchObject({ ok: false, code: "not_found" });
     requestState.token = null;
     expect(await resubmitResult(null, answer(id))).toMatchObject({ ok: false, code: "unauthenticated" });
     const pending = await resultOf();

@@ -1,4 +1,5 @@
-// proxy.ts only redirects: no session cookie on a signed-in area → /sign-in with a way back.
+// proxy.ts: no session cookie on a signed-in area → /sign-in with a way back; old chart links → their canonical
+// split; too many new chart states from one client → 429; a server action call with a non-form body → 400.
 import { describe, expect, it } from "vitest";
 import { NextRequest } from "next/server";
 import { encodeChartState, statePath } from "@/lib/open-data/chart-state";
@@ -37,11 +38,12 @@ describe("proxy redirects", () => {
     expect(
       config.matcher.some(
         (m) =>
-          m.startsWith("/packs") ||
-          m === "/" ||
-          m.startsWith("/sign-in") ||
-          m === "/charts" ||
-          m.startsWith("/charts/new"),
+          typeof m === "string" &&
+          (m.startsWith("/packs") ||
+            m === "/" ||
+            m.startsWith("/sign-in") ||
+            m === "/charts" ||
+            m.startsWith("/charts/new")),
       ),
     ).toBe(false);
   });
@@ -68,5 +70,56 @@ describe("proxy redirects", () => {
       proxy(new NextRequest("http://localhost:3011/charts/view/not%20a%20state")).headers.get("location"),
     ).toBeNull();
     expect(config.matcher).toEqual(expect.arrayContaining(["/charts/view/:path+", "/embed/chart/:path+"]));
+  });
+
+  it("lets at most 30 charts nobody asked for lately be drawn per client and minute (429 + Retry-After); seen ones pass", () => {
+    const state = (i: number) =>
+      statePath(
+        encodeChartState({ v: 1, kind: "label-check", group: "dc-step_a15-25_co3.3_r5-10_new", title: `Gate ${i}` }),
+      );
+    const ask = (i: number, ip: string) =>
+      proxy(new NextRequest(`http://localhost:3011/charts/view/${state(i)}`, { headers: { "x-forwarded-for": ip } }));
+    for (let i = 0; i < 30; i++) expect(ask(i, "192.0.2.50").status, `chart ${i}`).toBe(200);
+    const refused = ask(30, "192.0.2.50");
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers.get("retry-after"))).toBeGreaterThan(0);
+    expect(refused.headers.get("cache-control")).toBe("no-store");
+    // A chart already drawn passes for anyone; another client has its own allowance.
+    expect(ask(3, "192.0.2.50").status).toBe(200);
+    expect(ask(30, "192.0.2.51").status).toBe(200);
+  });
+
+  it("refuses a server action call with a JSON body (400) and lets form bodies through to the action", () => {
+    const call = (type: string) =>
+      proxy(
+        new NextRequest("http://localhost:3011/sign-in", {
+          method: "POST",
+          headers: { "next-action": "60ccd1d914250047f581accb72c7d4ce757ac1b94e", "content-type": type },
+          body: "{}",
+        }),
+      );
+    expect(call("application/json").status).toBe(400);
+    const big = proxy(
+      new NextRequest("http://localhost:3011/sign-in", {
+        method: "POST",
+        headers: {
+          "next-action": "60ccd1",
+          "content-type": "multipart/form-data; boundary=x",
+          "content-length": "2000000",
+        },
+        body: "x",
+      }),
+    );
+    expect(big.status).toBe(413);
+    expect(call("application/xml").status).toBe(400);
+    for (const type of [
+      "multipart/form-data; boundary=x",
+      "application/x-www-form-urlencoded",
+      "text/plain;charset=UTF-8",
+    ])
+      expect(call(type).headers.get("x-middleware-next"), type).toBe("1");
+    expect(config.matcher).toEqual(
+      expect.arrayContaining([{ source: "/:path*", has: [{ type: "header", key: "next-action" }] }]),
+    );
   });
 });

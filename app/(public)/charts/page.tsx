@@ -1,18 +1,27 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { listSavedCharts } from "@/db/queries/open-data/charts";
+import { notFound } from "next/navigation";
+import { z } from "zod";
 import { chartLinks } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, chartState } from "@/lib/open-data/chart-state";
+import { cachedFeaturedCharts } from "@/server/public-data";
 
-export const revalidate = 600;
 export const metadata: Metadata = {
   title: "Charts",
-  description: "Published charts from Sagline open data, ready to embed or download.",
+  description: "Charts from Sagline open data chosen by its moderators, ready to embed or download.",
 };
 
-export default async function ChartsPage() {
-  const saved = await listSavedCharts();
-  const charts = saved.flatMap((c) => {
+const CHARTS_PER_PAGE = 12;
+const query = z.object({ page: z.coerce.number().int().min(1).max(10_000).catch(1) });
+
+// Lists only charts a moderator featured (anyone signed in may save a chart and share its link; listing it
+// here is a moderator's decision). Reads the tagged cache of featured charts; no cookies.
+export default async function ChartsPage(props: { searchParams: Promise<Record<string, string | string[]>> }) {
+  const { page } = query.parse(await props.searchParams);
+  const { rows, total } = await cachedFeaturedCharts(page, CHARTS_PER_PAGE);
+  const pageCount = Math.max(1, Math.ceil(total / CHARTS_PER_PAGE));
+  if (page > pageCount) notFound();
+  const charts = rows.flatMap((c) => {
     const parsed = chartState.safeParse(c.state);
     return parsed.success ? [{ ...c, state: parsed.data, links: chartLinks(parsed.data) }] : [];
   });
@@ -22,8 +31,9 @@ export default async function ChartsPage() {
         <div className="space-y-1">
           <h1>Charts</h1>
           <p className="muted max-w-2xl">
-            Charts built from one like-for-like group at a time. Each can be embedded, downloaded as PNG or SVG, and
-            cited under CC BY 4.0.
+            Charts built from one like-for-like group at a time and chosen by Sagline’s moderators. Each can be
+            embedded, downloaded as PNG or SVG, and cited under CC BY 4.0. Build your own: its link works for anyone at
+            once.
           </p>
         </div>
         <Link
@@ -33,7 +43,7 @@ export default async function ChartsPage() {
           Build a chart
         </Link>
       </div>
-      {charts.length === 0 ? <p className="muted">No published charts yet.</p> : null}
+      {charts.length === 0 ? <p className="muted">No featured charts yet.</p> : null}
       <ul className="grid gap-4 md:grid-cols-2" data-testid="chart-list">
         {charts.map((c) => (
           <li key={c.id} className="card space-y-2">
@@ -55,6 +65,15 @@ export default async function ChartsPage() {
           </li>
         ))}
       </ul>
+      {pageCount > 1 ? (
+        <nav aria-label="Pages of charts" className="flex items-center gap-4 text-sm">
+          {page > 1 ? <Link href={page === 2 ? "/charts" : `/charts?page=${page - 1}`}>← Newer</Link> : null}
+          <span className="muted">
+            Page {page} of {pageCount}
+          </span>
+          {page < pageCount ? <Link href={`/charts?page=${page + 1}`}>Older →</Link> : null}
+        </nav>
+      ) : null}
     </div>
   );
 }

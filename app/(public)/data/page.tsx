@@ -1,16 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { env } from "@/server/env";
-import { DATASETS, dataPackageDescriptor } from "@/lib/open-data/datapackage";
+import { DATASETS, dataPackageDescriptor, README_FILE } from "@/lib/open-data/datapackage";
 import {
   ATTRIBUTION,
   ATTRIBUTION_TEXT,
-  DATA_LICENCE_SHORT,
+  DATA_LICENCE_LABEL,
   DATA_LICENCE_TITLE,
   DATA_LICENCE_URL,
   DATA_SCHEMA_VERSION,
+  PUBLISHED_RULE,
 } from "@/lib/open-data/licence";
-import { cachedGroupOptions, cachedMakers } from "@/server/public-data";
+import { makerRows } from "@/server/open-data/catalogue";
+import { cachedGroups } from "@/server/public-data";
 import { DownloadForm } from "./_components/download-form";
 
 // Refreshed by tag (server/public-data.ts: `results`, `packs`) the moment a decision or a catalogue change lands;
@@ -18,17 +20,17 @@ import { DownloadForm } from "./_components/download-form";
 export const revalidate = 3600;
 export const metadata: Metadata = {
   title: "Open data and API",
-  description: `Download every approved Sagline result as CSV or JSON, with a Data Package descriptor, or read it through the API. ${DATA_LICENCE_SHORT}.`,
+  description: `Download every published Sagline result as CSV or JSON, with a Data Package descriptor and the raw logs, or read it through the API. ${DATA_LICENCE_LABEL}.`,
 };
 
 const descriptions = {
   makers: "Makers (brands on labels)",
   packs: "Packs as labelled",
-  results: "Approved results: method card and figures",
+  results: "Published results: method card and figures",
 } as const;
 
 export default async function DataPage() {
-  const [makers, groups] = await Promise.all([cachedMakers(), cachedGroupOptions(1)]);
+  const [makers, groups] = await Promise.all([makerRows(), cachedGroups()]);
   const base = env().APP_URL;
   const desc = dataPackageDescriptor(base, new Date());
   const jsonLd = {
@@ -67,8 +69,15 @@ export default async function DataPage() {
       <section className="space-y-3">
         <h1>Open data</h1>
         <p className="max-w-3xl">
-          Every approved result on Sagline — its method card and the figures computed from its log — is yours to
-          download, reuse and republish. Pending, rejected and withdrawn results are never included.
+          Every published result on Sagline — its method card, the figures computed from its log, and the log itself —
+          is yours to download, reuse and republish.
+        </p>
+      </section>
+
+      <section aria-labelledby="counting-heading" className="space-y-2">
+        <h2 id="counting-heading">Which results count</h2>
+        <p className="max-w-3xl" data-testid="counting-rule">
+          {PUBLISHED_RULE}
         </p>
       </section>
 
@@ -77,7 +86,7 @@ export default async function DataPage() {
         <p>
           The data is published under{" "}
           <a href={DATA_LICENCE_URL} rel="license">
-            {DATA_LICENCE_TITLE} ({DATA_LICENCE_SHORT})
+            {DATA_LICENCE_TITLE} ({DATA_LICENCE_LABEL})
           </a>
           . You may copy, adapt and publish it, commercially too, if you credit <strong>{ATTRIBUTION}</strong> and link
           the licence.
@@ -91,9 +100,13 @@ export default async function DataPage() {
         <h2 id="downloads-heading">Downloads</h2>
         <p className="muted">
           Schema version <span className="num">{DATA_SCHEMA_VERSION}</span> (semantic versioning: a new major version
-          means a breaking change). Files are RFC 4180 CSV in UTF-8 with <code>#</code> comment lines at the top
-          carrying the licence; free-text cells that could start a spreadsheet formula begin with a <code>&apos;</code>.
-          File names carry the date of export and the schema version.
+          means a breaking change). Files are strict RFC 4180 CSV in UTF-8: a header row, then one record per line,
+          nothing else, so any CSV reader (Python&apos;s <code>csv</code> module, spreadsheets, R) takes them as they
+          are. Numbers are rounded to the decimal places each field states; free-text cells that could start a
+          spreadsheet formula begin with a <code>&apos;</code>. File names carry the date of export and the schema
+          version; every file has an ETag, so an unchanged file downloads as a bodiless 304. The licence, the credit and
+          the counting rule are in the <a href={`/data/download/${README_FILE}`}>README ({README_FILE})</a> beside the
+          files and in the Data Package descriptor.
         </p>
         <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Downloads">
           <table className="w-full min-w-[28rem] text-sm">
@@ -130,6 +143,16 @@ export default async function DataPage() {
           dump: a Table Schema for each file with types, units, constraints, primary and foreign keys.
         </p>
         <DownloadForm makers={makers} groups={groups} />
+      </section>
+
+      <section aria-labelledby="logs-heading" className="space-y-2">
+        <h2 id="logs-heading">Raw logs</h2>
+        <p className="max-w-3xl">
+          The log behind every published result is downloadable as it was uploaded, under the same licence, at{" "}
+          <code className="num">/api/v1/results/&#123;id&#125;/log</code> (its ETag is the file&apos;s SHA-256). Each
+          result&apos;s page links its log and shows the command that recomputes its figures with Sagline&apos;s open
+          command-line tool (<code>npm run analyse</code>), so anyone can check a figure from the raw data.
+        </p>
       </section>
 
       <section aria-labelledby="api-heading" className="space-y-2">

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { PUBLISHED_RULE } from "@/lib/open-data/licence";
 import { readContent, renderMarkdown } from "@/server/markdown";
 
 export const metadata: Metadata = {
@@ -13,6 +14,7 @@ export const dynamic = "force-static";
 const SECTIONS = [
   ["methods-figures", "methods/figures"],
   ["methods/like-for-like"],
+  ["methods/checks"],
   ["methods/running-a-test"],
   ["methods/safety"],
 ] as const;
@@ -24,6 +26,9 @@ export default async function MethodsPage() {
       const text = await readContent(name);
       if (text) {
         parts.push(renderMarkdown(text));
+        // The counting rule, in the one wording the Data Package, the README and /data use too.
+        if (name === "methods/like-for-like")
+          parts.push(renderMarkdown(`## Which results count {#which-results-count}\n\n${PUBLISHED_RULE}\n`));
         break;
       }
     }
@@ -42,6 +47,12 @@ export default async function MethodsPage() {
           </li>
           <li>
             <a href="#like-for-like">Like-for-like groups</a>
+          </li>
+          <li>
+            <a href="#which-results-count">Which results count</a>
+          </li>
+          <li>
+            <a href="#checks">Checks</a>
           </li>
           <li>
             <a href="#running-a-test">Running a test</a>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { packListRecord } from "@/lib/open-data/pack-list";
 import { queryPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
 import { cachedGroups, cachedPackRows } from "@/server/public-data";
@@ -18,13 +19,12 @@ export const revalidate = 3600;
 export default async function PacksPage() {
   const [rows, groups] = await Promise.all([cachedPackRows(null), cachedGroups()]);
   const first = queryPacks(rows, DEFAULT_PACK_PARAMS);
+  // The same rows, rounded the same way, as GET /api/v1/packs answers for the default view.
   const initial: ApiPackPage = {
-    data: first.rows.map(({ id: _id, ...r }) => r),
+    data: first.rows.map((r) => ({ ...r, ...packListRecord(r) })),
     page: first.page,
-    pageSize: first.size,
     pageCount: first.pageCount,
     total: first.total,
-    group: null,
   };
   const makers = new Map(rows.map((r) => [r.makerSlug, r.makerName]));
   const options: FilterOptions = {

@@ -1,8 +1,9 @@
 // GET /api/oembed — oEmbed for Sagline charts: JSON only (501 otherwise), 404 for URLs that are not charts.
-import { env } from "@/server/env";
+import { oembedResponse as oembedSchema } from "@/lib/api-contract/service-responses";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiOptions, corsHeaders, parseQuery } from "@/server/api";
 import { oembedQuery, oembedResponse } from "@/lib/open-data/oembed";
+import { apiGet, apiOptions, corsHeaders, parseQuery, plainJson } from "@/server/api";
+import { env } from "@/server/env";
 
 export const GET = apiGet(async (req) => {
   const q = parseQuery(req, oembedQuery);
@@ -14,13 +15,6 @@ export const GET = apiGet(async (req) => {
   }
   const body = oembedResponse(q.url, env().APP_URL, q.maxwidth, q.maxheight);
   if (!body) throw new AppError("not_found", "That URL is not a Sagline chart.");
-  const text = JSON.stringify(body);
-  return new Response(text, {
-    headers: {
-      ...corsHeaders,
-      "Content-Type": "application/json; charset=utf-8",
-      "Cache-Control": "public, max-age=3600",
-    },
-  });
+  return plainJson(req, oembedSchema, body, { "Cache-Control": "public, max-age=3600" });
 });
 export const OPTIONS = apiOptions;

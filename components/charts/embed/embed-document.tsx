@@ -5,7 +5,7 @@
 // ≥ 3:1 against the embed's background in both (tests/unit/contrast.test.ts).
 import type { ChartData } from "@/lib/open-data/chart-data";
 import { plural } from "@/lib/open-data/chart-svg-kit";
-import { ATTRIBUTION, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { ATTRIBUTION, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { ChartLegend } from "../chart-figure";
 import { LabelCheckPlot, SAG_LIMITED_RATING } from "../draw/label-check-plot";
 import { LinePlot } from "../draw/line-plot";
@@ -81,7 +81,7 @@ export function EmbedDocument({ data, permalink }: { data: ChartData; permalink:
             </a>{" "}
             · Data: {ATTRIBUTION}, licensed{" "}
             <a href={DATA_LICENCE_URL} target="_blank" rel="license noopener">
-              {DATA_LICENCE_SHORT}
+              {DATA_LICENCE_LABEL}
             </a>
           </p>
         </main>

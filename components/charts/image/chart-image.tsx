@@ -6,7 +6,7 @@
 import type { ChartData } from "@/lib/open-data/chart-data";
 import type { ChartSize } from "@/lib/open-data/chart-size";
 import { EM_BOLD, plural, textWidth, wrapText, flow, clip } from "@/lib/open-data/chart-svg-kit";
-import { ATTRIBUTION, DATA_LICENCE_SHORT } from "@/lib/open-data/licence";
+import { ATTRIBUTION, DATA_LICENCE_LABEL } from "@/lib/open-data/licence";
 import type { LegendItem } from "../chart-figure";
 import { GUTTER, Shape, px } from "../draw/kit";
 import { LabelCheckPlot, SAG_LIMITED_RATING } from "../draw/label-check-plot";
@@ -121,7 +121,7 @@ export function ChartImage({
   const pad = Math.round(Math.min(28, Math.max(12, W * 0.025)));
   const lineW = W - 2 * pad;
   const narrow = W < 560;
-  const dataCredit = `Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_SHORT}`;
+  const dataCredit = `Data: ${ATTRIBUTION}, licensed ${DATA_LICENCE_LABEL}`;
   const oneLine = `Source: Sagline · ${dataCredit}`;
   const credit =
     textWidth(oneLine, 12, EM_BOLD) <= lineW

@@ -1,13 +1,16 @@
-// Approved results for the public API, downloads and charts: method card and figures, never files or
+// Published results for the public API, downloads and charts: method card and figures, never files or
 // contributor identities.
 import "server-only";
-import { and, asc, count, eq, type SQL } from "drizzle-orm";
+import { and, asc, count, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { CurvePoint } from "@/lib/analysis";
-import type { ResultRow } from "@/lib/open-data/records";
-import type { ResultFilters } from "@/lib/validations/open-data";
-import { packConditions, type Page, type Paged } from "./packs";
+import type { ResultFlatRow } from "@/lib/open-data/records";
+import { isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
+import { resultConditions, type ResultWhere } from "./where";
+
+export type Page = { page: number; size: number };
+export type Paged<T> = { rows: T[]; total: number };
 
 const columns = {
   id: results.id,
@@ -33,24 +36,20 @@ const columns = {
 };
 
 function baseQuery() {
-  return db
-    .select(columns)
-    .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId));
+  return db.select(columns).from(results).innerJoin(packs, packOfResult).innerJoin(makers, makerOfPack);
 }
 type Raw = Awaited<ReturnType<typeof baseQuery>>[number];
 
-function toRow(r: Raw): ResultRow {
+function toRow(r: Raw): ResultFlatRow {
   return {
     id: r.id,
     packId: r.packId,
     packSlug: r.packSlug,
     makerSlug: r.makerSlug,
-    status: "approved",
     groupKey: r.groupKey,
     testedOn: r.testedOn,
-    publishedAt: r.publishedAt ? r.publishedAt.toISOString() : null,
+    // Whole seconds in UTC: Table Schema's default datetime format (YYYY-MM-DDThh:mm:ssZ) has no fractions.
+    publishedAt: r.publishedAt ? new Date(r.publishedAt).toISOString().replace(/\.\d{3}Z$/, "Z") : null,
     notes: r.notes,
     methodCard: {
       ambientTemperatureC: r.ambientTemperatureC,
@@ -69,43 +68,31 @@ function toRow(r: Raw): ResultRow {
   };
 }
 
-function conditions(f: ResultFilters): SQL[] {
-  const where = [eq(results.status, "approved"), ...packConditions(f)];
-  if (f.pack) where.push(eq(packs.slug, f.pack));
-  if (f.group) where.push(eq(results.groupKey, f.group));
-  return where;
-}
-
-export async function listResultsPage(f: ResultFilters, { page, size }: Page): Promise<Paged<ResultRow>> {
-  const where = and(...conditions(f));
-  const rows = await baseQuery()
-    .where(where)
-    .orderBy(asc(results.id))
-    .limit(size)
-    .offset((page - 1) * size);
-  const [total] = await db
-    .select({ n: count() })
-    .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(where);
+export async function listResultsPage(w: ResultWhere, { page, size }: Page): Promise<Paged<ResultFlatRow>> {
+  const where = and(isPublished, ...resultConditions(w));
+  const [rows, [total]] = await Promise.all([
+    baseQuery()
+      .where(where)
+      .orderBy(asc(results.id))
+      .limit(size)
+      .offset((page - 1) * size),
+    db.select({ n: count() }).from(results).innerJoin(packs, packOfResult).innerJoin(makers, makerOfPack).where(where),
+  ]);
   return { rows: rows.map(toRow), total: total?.n ?? 0 };
 }
 
-export async function getApprovedResult(id: number): Promise<ResultRow | null> {
-  const { rows } = await listResultsPageById(id);
-  return rows[0] ?? null;
-}
-
-async function listResultsPageById(id: number): Promise<Paged<ResultRow>> {
+export async function getPublishedResult(id: number): Promise<ResultFlatRow | null> {
   const rows = await baseQuery()
-    .where(and(eq(results.id, id), eq(results.status, "approved")))
+    .where(and(isPublished, eq(results.id, id)))
     .limit(1);
-  return { rows: rows.map(toRow), total: rows.length };
+  return rows[0] ? toRow(rows[0]) : null;
 }
 
-export async function listAllResults(f: ResultFilters = {}): Promise<ResultRow[]> {
-  return (await listResultsPage(f, { page: 1, size: 1_000_000 })).rows;
+export async function listAllResults(w: ResultWhere): Promise<ResultFlatRow[]> {
+  const rows = await baseQuery()
+    .where(and(isPublished, ...resultConditions(w)))
+    .orderBy(asc(results.id));
+  return rows.map(toRow);
 }
 
 export type CurveSeries = {
@@ -119,8 +106,8 @@ export type CurveSeries = {
   curve: CurvePoint[];
 };
 
-/** Discharge curves of approved results in one like-for-like group (for the curves chart). */
-export async function listGroupCurves(groupKey: string, f: ResultFilters = {}): Promise<CurveSeries[]> {
+/** Discharge curves of published results in one like-for-like group (for the curves chart). */
+export async function listGroupCurves(groupKey: string, w: ResultWhere): Promise<CurveSeries[]> {
   return db
     .select({
       resultId: results.id,
@@ -133,8 +120,8 @@ export async function listGroupCurves(groupKey: string, f: ResultFilters = {}): 
       curve: results.curve,
     })
     .from(results)
-    .innerJoin(packs, eq(packs.id, results.packId))
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .where(and(...conditions({ ...f, group: groupKey })))
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(isPublished, ...resultConditions({ ...w, group: groupKey })))
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
 }

@@ -53,7 +53,11 @@ function medianOf(values: readonly number[]): number {
 }
 
 /** One step: winsorise around (x, s), return the new x*, s* and how many values were pulled in. */
-export function algorithmAStep(values: readonly number[], x: number, s: number): { x: number; s: number; winsorised: number } {
+export function algorithmAStep(
+  values: readonly number[],
+  x: number,
+  s: number,
+): { x: number; s: number; winsorised: number } {
   const delta = ALGORITHM_A_WINSOR_FACTOR * s;
   let winsorised = 0;
   const w = values.map((v) => {

@@ -10,7 +10,12 @@
 import { Z_FLAG_THRESHOLD } from "./scores";
 
 export const AGREEMENT_FIGURES = [
-  "capacityMah", "energyWh", "meanVoltageV", "holdVoltagePerCellV", "dcResistanceMohm", "resistanceAt25CMohm",
+  "capacityMah",
+  "energyWh",
+  "meanVoltageV",
+  "holdVoltagePerCellV",
+  "dcResistanceMohm",
+  "resistanceAt25CMohm",
 ] as const;
 export type AgreementFigure = (typeof AGREEMENT_FIGURES)[number];
 
@@ -63,32 +68,45 @@ export type BenchAgreementSummary = {
 
 const ADVICE: Record<AgreementFigure, Partial<Record<Tendency, string>>> = {
   capacityMah: {
-    "runs-high": "Capacity reads high across several packs. Check the current shunt or sensor against a reference meter in series at a steady load, and that the logger's clock keeps time.",
-    "runs-low": "Capacity reads low across several packs. Check the current calibration, that the cut-off voltage is sensed at the pack's connector rather than at the load, and that packs are charged and rested as the method card says.",
+    "runs-high":
+      "Capacity reads high across several packs. Check the current shunt or sensor against a reference meter in series at a steady load, and that the logger's clock keeps time.",
+    "runs-low":
+      "Capacity reads low across several packs. Check the current calibration, that the cut-off voltage is sensed at the pack's connector rather than at the load, and that packs are charged and rested as the method card says.",
   },
   energyWh: {
-    "runs-high": "Energy reads high across several packs. Check both the voltage and the current calibration against reference meters.",
-    "runs-low": "Energy reads low across several packs. Check the voltage is sensed at the pack's connector, not through the load leads, and check the current calibration.",
+    "runs-high":
+      "Energy reads high across several packs. Check both the voltage and the current calibration against reference meters.",
+    "runs-low":
+      "Energy reads low across several packs. Check the voltage is sensed at the pack's connector, not through the load leads, and check the current calibration.",
   },
   meanVoltageV: {
-    "runs-high": "Voltage under load reads high across several packs. Check the voltmeter against a reference, and that the load current matches the method card.",
-    "runs-low": "Voltage under load reads low across several packs. The voltage may be sensed through the load leads and connectors: sense it at the pack's connector, and check the voltmeter against a reference.",
+    "runs-high":
+      "Voltage under load reads high across several packs. Check the voltmeter against a reference, and that the load current matches the method card.",
+    "runs-low":
+      "Voltage under load reads low across several packs. The voltage may be sensed through the load leads and connectors: sense it at the pack's connector, and check the voltmeter against a reference.",
   },
   holdVoltagePerCellV: {
-    "runs-high": "Hold voltage reads high across several packs. Check the voltmeter against a reference and that the reading is taken the stated time after the load starts.",
-    "runs-low": "Hold voltage reads low across several packs. Sense the voltage at the pack's connector rather than through the load leads, and check the load current against the method card.",
+    "runs-high":
+      "Hold voltage reads high across several packs. Check the voltmeter against a reference and that the reading is taken the stated time after the load starts.",
+    "runs-low":
+      "Hold voltage reads low across several packs. Sense the voltage at the pack's connector rather than through the load leads, and check the load current against the method card.",
   },
   dcResistanceMohm: {
-    "runs-high": "Resistance reads high across several packs. Check the resistance of leads and connectors (sense the voltage at the pack's connector with separate leads if you can), that connectors are clean and tight, and that the step reading is taken 1 s after the step, not later.",
-    "runs-low": "Resistance reads low across several packs. Check that the step reading is taken 1 s after the step and not sooner, and the current calibration (a current that reads high makes resistance read low).",
+    "runs-high":
+      "Resistance reads high across several packs. Check the resistance of leads and connectors (sense the voltage at the pack's connector with separate leads if you can), that connectors are clean and tight, and that the step reading is taken 1 s after the step, not later.",
+    "runs-low":
+      "Resistance reads low across several packs. Check that the step reading is taken 1 s after the step and not sooner, and the current calibration (a current that reads high makes resistance read low).",
   },
   resistanceAt25CMohm: {
-    "runs-high": "Resistance at 25 °C reads high across several packs. Check leads and connectors as for DC resistance, and that the temperature sensor touches the pack and reads true.",
-    "runs-low": "Resistance at 25 °C reads low across several packs. Check the step timing and the temperature sensor: a sensor that reads cold corrects the resistance too far down.",
+    "runs-high":
+      "Resistance at 25 °C reads high across several packs. Check leads and connectors as for DC resistance, and that the temperature sensor touches the pack and reads true.",
+    "runs-low":
+      "Resistance at 25 °C reads low across several packs. Check the step timing and the temperature sensor: a sensor that reads cold corrects the resistance too far down.",
   },
 };
 
-const SCATTER_ADVICE = "readings scatter both ways from other benches. Check that connectors are tight, that packs start at the stated temperature after the stated rest, and that the sampling interval is short enough for the step.";
+const SCATTER_ADVICE =
+  "readings scatter both ways from other benches. Check that connectors are tight, that packs start at the stated temperature after the stated rest, and that the sampling interval is short enough for the step.";
 
 function medianOf(values: readonly number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -96,7 +114,10 @@ function medianOf(values: readonly number[]): number {
   return ((s[Math.floor(mid)] as number) + (s[Math.ceil(mid)] as number)) / 2;
 }
 
-function tendencyOf(zs: readonly number[], packs: number): { medianZ: number; medianAbsZ: number; tendency: Tendency | null } {
+function tendencyOf(
+  zs: readonly number[],
+  packs: number,
+): { medianZ: number; medianAbsZ: number; tendency: Tendency | null } {
   const medianZ = medianOf(zs);
   const medianAbsZ = medianOf(zs.map(Math.abs));
   let tendency: Tendency | null = null;
@@ -120,16 +141,32 @@ export function benchAgreementSummary(comparisons: readonly BenchComparison[]): 
   for (const figure of AGREEMENT_FIGURES) {
     const own = scored.filter((c) => c.figure === figure);
     if (own.length === 0) continue;
-    const t = tendencyOf(own.map((c) => c.z), new Set(own.map((c) => c.packId)).size);
+    const t = tendencyOf(
+      own.map((c) => c.z),
+      new Set(own.map((c) => c.packId)).size,
+    );
     figures.push({ figure, compared: own.length, ...t });
-    if (t.tendency === "scatters") suggestions.push({ figure, tendency: t.tendency, words: `${AGREEMENT_FIGURE_LABELS[figure]}: ${SCATTER_ADVICE}` });
+    if (t.tendency === "scatters")
+      suggestions.push({
+        figure,
+        tendency: t.tendency,
+        words: `${AGREEMENT_FIGURE_LABELS[figure]}: ${SCATTER_ADVICE}`,
+      });
     else if (t.tendency !== null) {
       const words = ADVICE[figure][t.tendency];
       if (words) suggestions.push({ figure, tendency: t.tendency, words });
     }
   }
   if (n === 0) {
-    return { resultsCompared: 0, packsCompared: 0, medianAbsZ: null, shareAbsZOver3: null, figures, suggestions, words: "Not compared yet: no pack this bench tested has been tested by enough other benches in the same group." };
+    return {
+      resultsCompared: 0,
+      packsCompared: 0,
+      medianAbsZ: null,
+      shareAbsZOver3: null,
+      figures,
+      suggestions,
+      words: "Not compared yet: no pack this bench tested has been tested by enough other benches in the same group.",
+    };
   }
   const medianAbsZ = medianOf(scored.map((c) => Math.abs(c.z)));
   const over = scored.filter((c) => Math.abs(c.z) > Z_FLAG_THRESHOLD).length;

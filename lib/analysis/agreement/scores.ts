@@ -90,15 +90,22 @@ export type ComparisonScores = {
  * With two benches that consensus would be their mean, with a U_X that grows with their difference (Eₙ could never
  * pass 0.36), so each is scored against the other instead: Eₙ = (x − x_other)/√(U_x² + U_other²).
  */
-export function scoreParticipants(participants: readonly Participant[], options: AlgorithmAOptions & { sigmaPt?: number } = {}): ComparisonScores {
+export function scoreParticipants(
+  participants: readonly Participant[],
+  options: AlgorithmAOptions & { sigmaPt?: number } = {},
+): ComparisonScores {
   const usable = participants.filter((p) => Number.isFinite(p.value));
-  const consensus = algorithmA(usable.map((p) => p.value), options);
+  const consensus = algorithmA(
+    usable.map((p) => p.value),
+    options,
+  );
   let sigmaPt: number | null = null;
   let zMissing: string | null = null;
   if (consensus === null) zMissing = "Fewer than two benches measured this pack in this group.";
   else if (options.sigmaPt !== undefined) sigmaPt = options.sigmaPt > 0 ? options.sigmaPt : null;
   else if (consensus.p < MIN_BENCHES_FOR_Z) zMissing = "Two benches: z needs at least three; compare their ± instead.";
-  else if (consensus.degenerate || !(consensus.s > 0)) zMissing = "The benches agree exactly on most values, so there is no spread to score against.";
+  else if (consensus.degenerate || !(consensus.s > 0))
+    zMissing = "The benches agree exactly on most values, so there is no spread to score against.";
   else sigmaPt = consensus.s;
   if (consensus !== null && sigmaPt === null && zMissing === null) zMissing = "No positive σ_pt was given.";
   const scores = usable.map((p, k): ParticipantScore => {

@@ -8,8 +8,11 @@
  * large rather than too small.
  */
 import {
-  describeChannel, instrumentAccuracySchema,
-  type AccuracyResistanceMethod, type InstrumentAccuracy, type StatedAccuracy,
+  describeChannel,
+  instrumentAccuracySchema,
+  type AccuracyResistanceMethod,
+  type InstrumentAccuracy,
+  type StatedAccuracy,
 } from "./accuracy";
 
 export const ACCURACY_CLASS_KEYS = ["hobby-charger-readout", "electronic-load-logger", "bench-meter-logger"] as const;
@@ -23,7 +26,8 @@ export type AccuracyClass = {
   source: string;
 };
 
-const FROM_MEMORY = "Sagline's assumption, from memory of what instruments of this class commonly state (common practice); not a maker's specification";
+const FROM_MEMORY =
+  "Sagline's assumption, from memory of what instruments of this class commonly state (common practice); not a maker's specification";
 
 export const ACCURACY_CLASSES: Record<AccuracyClassKey, AccuracyClass> = {
   "hobby-charger-readout": {
@@ -80,10 +84,17 @@ export const ACCURACY_CLASSES: Record<AccuracyClassKey, AccuracyClass> = {
 export const DEFAULT_ACCURACY_CLASS: AccuracyClassKey = "hobby-charger-readout";
 
 export type AccuracyField =
-  | "voltage.percentOfReading" | "voltage.offsetV" | "voltage.resolutionV"
-  | "current.percentOfReading" | "current.offsetA" | "current.resolutionA"
-  | "temperature.percentOfReading" | "temperature.offsetC" | "temperature.resolutionC"
-  | "samplingIntervalS" | "resistanceMethod";
+  | "voltage.percentOfReading"
+  | "voltage.offsetV"
+  | "voltage.resolutionV"
+  | "current.percentOfReading"
+  | "current.offsetA"
+  | "current.resolutionA"
+  | "temperature.percentOfReading"
+  | "temperature.offsetC"
+  | "temperature.resolutionC"
+  | "samplingIntervalS"
+  | "resistanceMethod";
 
 export type AccuracyAssumption = {
   field: AccuracyField;
@@ -120,16 +131,28 @@ const FIELD_WORDS: Record<AccuracyField, { what: string; unit: string }> = {
  * Fill what the tester did not state from a class (the widest by default) and list each value assumed.
  * The result passes `instrumentAccuracySchema` (checked here, so a bad class table fails loudly in tests).
  */
-export function resolveAccuracy(stated: StatedAccuracy | null | undefined, classKey: AccuracyClassKey = DEFAULT_ACCURACY_CLASS): ResolvedAccuracy {
+export function resolveAccuracy(
+  stated: StatedAccuracy | null | undefined,
+  classKey: AccuracyClassKey = DEFAULT_ACCURACY_CLASS,
+): ResolvedAccuracy {
   const cls = ACCURACY_CLASSES[classKey];
   const d = cls.accuracy;
   const s = stated ?? {};
   const assumptions: AccuracyAssumption[] = [];
-  function pick<T extends number | AccuracyResistanceMethod>(field: AccuracyField, given: T | null | undefined, fallback: T): T {
+  function pick<T extends number | AccuracyResistanceMethod>(
+    field: AccuracyField,
+    given: T | null | undefined,
+    fallback: T,
+  ): T {
     if (given !== null && given !== undefined) return given;
     const w = FIELD_WORDS[field];
     const shown = typeof fallback === "number" ? `${fallback}${w.unit ? ` ${w.unit}` : ""}` : fallback;
-    assumptions.push({ field, value: fallback, words: `${w.what} ${shown} assumed for a ${cls.name}.`, source: cls.source });
+    assumptions.push({
+      field,
+      value: fallback,
+      words: `${w.what} ${shown} assumed for a ${cls.name}.`,
+      source: cls.source,
+    });
     return fallback;
   }
   const accuracy = instrumentAccuracySchema.parse({
@@ -144,7 +167,11 @@ export function resolveAccuracy(stated: StatedAccuracy | null | undefined, class
       resolutionA: pick("current.resolutionA", s.current?.resolutionA, d.current.resolutionA),
     },
     temperature: {
-      percentOfReading: pick("temperature.percentOfReading", s.temperature?.percentOfReading, d.temperature.percentOfReading),
+      percentOfReading: pick(
+        "temperature.percentOfReading",
+        s.temperature?.percentOfReading,
+        d.temperature.percentOfReading,
+      ),
       offsetC: pick("temperature.offsetC", s.temperature?.offsetC, d.temperature.offsetC),
       resolutionC: pick("temperature.resolutionC", s.temperature?.resolutionC, d.temperature.resolutionC),
     },

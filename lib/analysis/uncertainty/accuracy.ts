@@ -46,7 +46,9 @@ export const samplingIntervalSchema = z
   .gt(0, "Sampling interval must be above 0 s.")
   .max(600, "Sampling interval must be at most 600 s.");
 
-export const resistanceMethodSchema = z.enum(ACCURACY_RESISTANCE_METHODS, { error: "Choose how resistance is measured." });
+export const resistanceMethodSchema = z.enum(ACCURACY_RESISTANCE_METHODS, {
+  error: "Choose how resistance is measured.",
+});
 
 /** A complete statement of a bench's accuracy: what the propagation functions use. */
 export const instrumentAccuracySchema = z.object({
@@ -76,7 +78,14 @@ export type StatedAccuracy = z.infer<typeof statedAccuracySchema>;
  * One channel in unit-free form for the propagation: standard uncertainties (GUM 4.3.7 for the ± limits,
  * F.2.2.1 for the resolution). gain is relative (0.01 = 1 %); offset and resolution are in the channel's unit.
  */
-export type ChannelU = { gainRelU: number; offsetU: number; resolutionU: number; percentOfReading: number; offset: number; resolution: number };
+export type ChannelU = {
+  gainRelU: number;
+  offsetU: number;
+  resolutionU: number;
+  percentOfReading: number;
+  offset: number;
+  resolution: number;
+};
 
 function channel(percent: number, offset: number, resolution: number): ChannelU {
   return {

@@ -23,7 +23,11 @@ export type MedianComparison = {
 /** Compare pack A's median interval with pack B's (null = no result in the group). */
 export function compareMedianIntervals(a: MedianInterval | null, b: MedianInterval | null): MedianComparison {
   if (a === null || b === null) {
-    return { verdict: "not distinguishable", reason: "no-results", words: "Not distinguishable: one of the packs has no result in this group." };
+    return {
+      verdict: "not distinguishable",
+      reason: "no-results",
+      words: "Not distinguishable: one of the packs has no result in this group.",
+    };
   }
   if (!a.meets || !b.meets) {
     return {
@@ -32,9 +36,15 @@ export function compareMedianIntervals(a: MedianInterval | null, b: MedianInterv
       words: "Not distinguishable: one of the packs has too few results for a 95 % interval (6 are needed).",
     };
   }
-  if (a.lower > b.upper) return { verdict: "higher", reason: "intervals-apart", words: "Higher: the two 95 % intervals do not overlap." };
-  if (a.upper < b.lower) return { verdict: "lower", reason: "intervals-apart", words: "Lower: the two 95 % intervals do not overlap." };
-  return { verdict: "not distinguishable", reason: "intervals-overlap", words: "Not distinguishable: the two 95 % intervals overlap." };
+  if (a.lower > b.upper)
+    return { verdict: "higher", reason: "intervals-apart", words: "Higher: the two 95 % intervals do not overlap." };
+  if (a.upper < b.lower)
+    return { verdict: "lower", reason: "intervals-apart", words: "Lower: the two 95 % intervals do not overlap." };
+  return {
+    verdict: "not distinguishable",
+    reason: "intervals-overlap",
+    words: "Not distinguishable: the two 95 % intervals overlap.",
+  };
 }
 
 export type BestDirection = "higher-is-better" | "lower-is-better";
@@ -44,10 +54,15 @@ export type BestDirection = "higher-is-better" | "lower-is-better";
  * ranking), or null when no pack does — then no pack may be called best. Packs without a result in the group
  * (null) are not contenders; at least two contenders are needed.
  */
-export function distinguishedBest(intervals: readonly (MedianInterval | null)[], direction: BestDirection): number | null {
+export function distinguishedBest(
+  intervals: readonly (MedianInterval | null)[],
+  direction: BestDirection,
+): number | null {
   const wanted: ComparisonVerdict = direction === "higher-is-better" ? "higher" : "lower";
   const contenders = intervals.flatMap((m, index) => (m === null ? [] : [{ m, index }]));
   if (contenders.length < 2) return null;
-  const best = contenders.find(({ m, index }) => contenders.every((o) => o.index === index || compareMedianIntervals(m, o.m).verdict === wanted));
+  const best = contenders.find(({ m, index }) =>
+    contenders.every((o) => o.index === index || compareMedianIntervals(m, o.m).verdict === wanted),
+  );
   return best ? best.index : null;
 }

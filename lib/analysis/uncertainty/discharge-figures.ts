@@ -28,7 +28,13 @@ export type DischargeSummary = {
 };
 
 function validSummary(d: DischargeSummary): boolean {
-  return allFinite(d.meanCurrentA, d.durationS, d.samples, d.samplingIntervalS) && d.meanCurrentA > 0 && d.durationS > 0 && d.samples >= 1 && d.samplingIntervalS > 0;
+  return (
+    allFinite(d.meanCurrentA, d.durationS, d.samples, d.samplingIntervalS) &&
+    d.meanCurrentA > 0 &&
+    d.durationS > 0 &&
+    d.samples >= 1 &&
+    d.samplingIntervalS > 0
+  );
 }
 
 function gainLabel(what: string, c: ChannelU): string {
@@ -46,14 +52,38 @@ const EDGES_LABEL = "Where the load's start and end fall between two samples";
  * Delivered capacity Q = ∫ I dt (mAh). Q_read = (1 + g)·Q + o·T + Σ eᵢ·Δt, so
  *   u(Q)² = (Q·u_g)² + (T·u_o)² + (T·u_e/√N)² + (I·Δt/√6)²   (then ÷ 3.6 for mAh).
  */
-export function capacityUncertainty(capacityMah: number, d: DischargeSummary, current: ChannelU): FigureUncertainty | null {
+export function capacityUncertainty(
+  capacityMah: number,
+  d: DischargeSummary,
+  current: ChannelU,
+): FigureUncertainty | null {
   if (!Number.isFinite(capacityMah) || !validSummary(d)) return null;
   const toMah = 1 / 3.6;
   const contributions: Contribution[] = [
-    { source: "current-gain", label: gainLabel("Current", current), kind: "systematic", u: capacityMah * current.gainRelU },
-    { source: "current-offset", label: offsetLabel("Current", current, "A"), kind: "systematic", u: d.durationS * current.offsetU * toMah },
-    { source: "current-resolution", label: resolutionLabel("Current", current, "A", true), kind: "random", u: (d.durationS * current.resolutionU * toMah) / Math.sqrt(d.samples) },
-    { source: "sampling-edges", label: EDGES_LABEL, kind: "random", u: (d.meanCurrentA * d.samplingIntervalS * toMah) / Math.sqrt(6) },
+    {
+      source: "current-gain",
+      label: gainLabel("Current", current),
+      kind: "systematic",
+      u: capacityMah * current.gainRelU,
+    },
+    {
+      source: "current-offset",
+      label: offsetLabel("Current", current, "A"),
+      kind: "systematic",
+      u: d.durationS * current.offsetU * toMah,
+    },
+    {
+      source: "current-resolution",
+      label: resolutionLabel("Current", current, "A", true),
+      kind: "random",
+      u: (d.durationS * current.resolutionU * toMah) / Math.sqrt(d.samples),
+    },
+    {
+      source: "sampling-edges",
+      label: EDGES_LABEL,
+      kind: "random",
+      u: (d.meanCurrentA * d.samplingIntervalS * toMah) / Math.sqrt(6),
+    },
   ];
   return combine(capacityMah, contributions);
 }
@@ -75,13 +105,48 @@ export function energyUncertainty(
   const chargeAh = d.meanCurrentA * d.durationS * toWh;
   const rootN = Math.sqrt(d.samples);
   const contributions: Contribution[] = [
-    { source: "voltage-gain", label: gainLabel("Voltage", voltage), kind: "systematic", u: energyWh * voltage.gainRelU },
-    { source: "voltage-offset", label: offsetLabel("Voltage", voltage, "V"), kind: "systematic", u: chargeAh * voltage.offsetU },
-    { source: "current-gain", label: gainLabel("Current", current), kind: "systematic", u: energyWh * current.gainRelU },
-    { source: "current-offset", label: offsetLabel("Current", current, "A"), kind: "systematic", u: meanVoltageV * d.durationS * current.offsetU * toWh },
-    { source: "voltage-resolution", label: resolutionLabel("Voltage", voltage, "V", true), kind: "random", u: (d.meanCurrentA * d.durationS * voltage.resolutionU * toWh) / rootN },
-    { source: "current-resolution", label: resolutionLabel("Current", current, "A", true), kind: "random", u: (meanVoltageV * d.durationS * current.resolutionU * toWh) / rootN },
-    { source: "sampling-edges", label: EDGES_LABEL, kind: "random", u: (meanVoltageV * d.meanCurrentA * d.samplingIntervalS * toWh) / Math.sqrt(6) },
+    {
+      source: "voltage-gain",
+      label: gainLabel("Voltage", voltage),
+      kind: "systematic",
+      u: energyWh * voltage.gainRelU,
+    },
+    {
+      source: "voltage-offset",
+      label: offsetLabel("Voltage", voltage, "V"),
+      kind: "systematic",
+      u: chargeAh * voltage.offsetU,
+    },
+    {
+      source: "current-gain",
+      label: gainLabel("Current", current),
+      kind: "systematic",
+      u: energyWh * current.gainRelU,
+    },
+    {
+      source: "current-offset",
+      label: offsetLabel("Current", current, "A"),
+      kind: "systematic",
+      u: meanVoltageV * d.durationS * current.offsetU * toWh,
+    },
+    {
+      source: "voltage-resolution",
+      label: resolutionLabel("Voltage", voltage, "V", true),
+      kind: "random",
+      u: (d.meanCurrentA * d.durationS * voltage.resolutionU * toWh) / rootN,
+    },
+    {
+      source: "current-resolution",
+      label: resolutionLabel("Current", current, "A", true),
+      kind: "random",
+      u: (meanVoltageV * d.durationS * current.resolutionU * toWh) / rootN,
+    },
+    {
+      source: "sampling-edges",
+      label: EDGES_LABEL,
+      kind: "random",
+      u: (meanVoltageV * d.meanCurrentA * d.samplingIntervalS * toWh) / Math.sqrt(6),
+    },
   ];
   return combine(energyWh, contributions);
 }
@@ -103,20 +168,51 @@ export type LoadEdges = {
  *   V̄ error ≈ [ε_s·(V_start − V̄) + ε_e·(V_end − V̄)] / T,  u = (Δt/√12)·√((V_start − V̄)² + (V_end − V̄)²) / T.
  * It matters for short discharges sampled coarsely; without `edges` it is left out and the note says so.
  */
-export function meanVoltageUncertainty(meanVoltageV: number, samples: number, voltage: ChannelU, edges?: LoadEdges | null): FigureUncertainty | null {
+export function meanVoltageUncertainty(
+  meanVoltageV: number,
+  samples: number,
+  voltage: ChannelU,
+  edges?: LoadEdges | null,
+): FigureUncertainty | null {
   if (!allFinite(meanVoltageV, samples) || samples < 1) return null;
-  if (edges && (!allFinite(edges.samplingIntervalS, edges.durationS, edges.startVoltageV, edges.endVoltageV) || edges.samplingIntervalS <= 0 || edges.durationS <= 0)) return null;
+  if (
+    edges &&
+    (!allFinite(edges.samplingIntervalS, edges.durationS, edges.startVoltageV, edges.endVoltageV) ||
+      edges.samplingIntervalS <= 0 ||
+      edges.durationS <= 0)
+  )
+    return null;
   const contributions: Contribution[] = [
-    { source: "voltage-gain", label: gainLabel("Voltage", voltage), kind: "systematic", u: meanVoltageV * voltage.gainRelU },
+    {
+      source: "voltage-gain",
+      label: gainLabel("Voltage", voltage),
+      kind: "systematic",
+      u: meanVoltageV * voltage.gainRelU,
+    },
     { source: "voltage-offset", label: offsetLabel("Voltage", voltage, "V"), kind: "systematic", u: voltage.offsetU },
-    { source: "voltage-resolution", label: resolutionLabel("Voltage", voltage, "V", true), kind: "random", u: voltage.resolutionU / Math.sqrt(samples) },
+    {
+      source: "voltage-resolution",
+      label: resolutionLabel("Voltage", voltage, "V", true),
+      kind: "random",
+      u: voltage.resolutionU / Math.sqrt(samples),
+    },
   ];
   if (edges) {
     const spread = Math.hypot(edges.startVoltageV - meanVoltageV, edges.endVoltageV - meanVoltageV);
-    contributions.push({ source: "sampling-edges", label: EDGES_LABEL, kind: "random", u: (edges.samplingIntervalS * spread) / Math.sqrt(12) / edges.durationS });
+    contributions.push({
+      source: "sampling-edges",
+      label: EDGES_LABEL,
+      kind: "random",
+      u: (edges.samplingIntervalS * spread) / Math.sqrt(12) / edges.durationS,
+    });
   }
-  const cancels = "The current reading's gain error cancels in energy ÷ charge, and so does its offset under constant current.";
-  return combine(meanVoltageV, contributions, edges ? cancels : `${cancels} Where the load's start and end fall between samples is not included.`);
+  const cancels =
+    "The current reading's gain error cancels in energy ÷ charge, and so does its offset under constant current.";
+  return combine(
+    meanVoltageV,
+    contributions,
+    edges ? cancels : `${cancels} Where the load's start and end fall between samples is not included.`,
+  );
 }
 
 /**
@@ -133,9 +229,19 @@ export function holdVoltageUncertainty(
   if (!Number.isFinite(holdVoltageV)) return null;
   if (timing && (!allFinite(timing.samplingIntervalS, timing.slopeVPerS) || timing.samplingIntervalS <= 0)) return null;
   const contributions: Contribution[] = [
-    { source: "voltage-gain", label: gainLabel("Voltage", voltage), kind: "systematic", u: holdVoltageV * voltage.gainRelU },
+    {
+      source: "voltage-gain",
+      label: gainLabel("Voltage", voltage),
+      kind: "systematic",
+      u: holdVoltageV * voltage.gainRelU,
+    },
     { source: "voltage-offset", label: offsetLabel("Voltage", voltage, "V"), kind: "systematic", u: voltage.offsetU },
-    { source: "voltage-resolution", label: resolutionLabel("Voltage", voltage, "V", false), kind: "random", u: voltage.resolutionU },
+    {
+      source: "voltage-resolution",
+      label: resolutionLabel("Voltage", voltage, "V", false),
+      kind: "random",
+      u: voltage.resolutionU,
+    },
   ];
   if (timing) {
     contributions.push({
@@ -145,22 +251,50 @@ export function holdVoltageUncertainty(
       u: (Math.abs(timing.slopeVPerS) * timing.samplingIntervalS) / Math.sqrt(12),
     });
   }
-  return combine(holdVoltageV, contributions, timing ? undefined : "The voltage's fall at the reading time is not included.");
+  return combine(
+    holdVoltageV,
+    contributions,
+    timing ? undefined : "The voltage's fall at the reading time is not included.",
+  );
 }
 
 /**
  * Sustained C (measured) = mean current ÷ rated capacity in Ah. The rated capacity is exact by definition
  * (it is the label's number), so only the current channel counts: gain, offset and the averaged resolution.
  */
-export function sustainedCUncertainty(meanCurrentA: number, samples: number, ratedMah: number, current: ChannelU): FigureUncertainty | null {
+export function sustainedCUncertainty(
+  meanCurrentA: number,
+  samples: number,
+  ratedMah: number,
+  current: ChannelU,
+): FigureUncertainty | null {
   if (!allFinite(meanCurrentA, samples, ratedMah) || ratedMah <= 0 || samples < 1) return null;
   const ratedAh = ratedMah / 1000;
   const contributions: Contribution[] = [
-    { source: "current-gain", label: gainLabel("Current", current), kind: "systematic", u: (meanCurrentA * current.gainRelU) / ratedAh },
-    { source: "current-offset", label: offsetLabel("Current", current, "A"), kind: "systematic", u: current.offsetU / ratedAh },
-    { source: "current-resolution", label: resolutionLabel("Current", current, "A", true), kind: "random", u: current.resolutionU / Math.sqrt(samples) / ratedAh },
+    {
+      source: "current-gain",
+      label: gainLabel("Current", current),
+      kind: "systematic",
+      u: (meanCurrentA * current.gainRelU) / ratedAh,
+    },
+    {
+      source: "current-offset",
+      label: offsetLabel("Current", current, "A"),
+      kind: "systematic",
+      u: current.offsetU / ratedAh,
+    },
+    {
+      source: "current-resolution",
+      label: resolutionLabel("Current", current, "A", true),
+      kind: "random",
+      u: current.resolutionU / Math.sqrt(samples) / ratedAh,
+    },
   ];
-  return combine(meanCurrentA / ratedAh, contributions, "The rated capacity is the label's number, exact by definition.");
+  return combine(
+    meanCurrentA / ratedAh,
+    contributions,
+    "The rated capacity is the label's number, exact by definition.",
+  );
 }
 
 /** Capacity ratio = delivered ÷ rated mAh; the rated value is exact by definition. */

@@ -72,7 +72,11 @@ export function resolutionU(resolution: number): number {
 }
 
 /** u_c = √Σ uᵢ² and U = 2 u_c; contributions sorted largest first, zero ones dropped. Null on non-finite input. */
-export function combine(value: number, contributions: readonly Contribution[], note?: string): FigureUncertainty | null {
+export function combine(
+  value: number,
+  contributions: readonly Contribution[],
+  note?: string,
+): FigureUncertainty | null {
   if (!Number.isFinite(value) || contributions.some((c) => !Number.isFinite(c.u))) return null;
   const kept = contributions.filter((c) => c.u !== 0).map((c) => ({ ...c, u: Math.abs(c.u) }));
   kept.sort((a, b) => b.u - a.u);

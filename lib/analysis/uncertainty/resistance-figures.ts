@@ -20,7 +20,8 @@ import { allFinite, combine, rectangularU, type Contribution, type FigureUncerta
  * assumption, used only when the log's own slope is not given.
  */
 export const DEFAULT_RESISTANCE_RISE_PER_S = 0.05;
-export const RESISTANCE_RISE_SOURCE = "assumed: resistance still rises about 5 % per second one second after the step (from memory, common practice)";
+export const RESISTANCE_RISE_SOURCE =
+  "assumed: resistance still rises about 5 % per second one second after the step (from memory, common practice)";
 
 /**
  * Half-width of the activation energy's range around the value used (kJ/mol), rectangular. Our stated
@@ -39,15 +40,39 @@ export type ResistanceStep = {
   risePerS?: number;
 };
 
-export function dcResistanceUncertainty(step: ResistanceStep, voltage: ChannelU, current: ChannelU): FigureUncertainty | null {
+export function dcResistanceUncertainty(
+  step: ResistanceStep,
+  voltage: ChannelU,
+  current: ChannelU,
+): FigureUncertainty | null {
   const rho = step.risePerS ?? DEFAULT_RESISTANCE_RISE_PER_S;
   const { resistanceMohm: r, currentStepA: di, samplingIntervalS: dt } = step;
   if (!allFinite(r, di, dt, rho) || r <= 0 || di <= 0 || dt <= 0) return null;
   const contributions: Contribution[] = [
-    { source: "voltage-gain", label: `Voltage reading, gain error (±${voltage.percentOfReading} % of reading)`, kind: "systematic", u: r * voltage.gainRelU },
-    { source: "current-gain", label: `Current reading, gain error (±${current.percentOfReading} % of reading)`, kind: "systematic", u: r * current.gainRelU },
-    { source: "voltage-resolution", label: `Voltage read-out resolution (${voltage.resolution} V), two readings`, kind: "random", u: (Math.SQRT2 * voltage.resolutionU * 1000) / di },
-    { source: "current-resolution", label: `Current read-out resolution (${current.resolution} A), two readings`, kind: "random", u: (Math.SQRT2 * r * current.resolutionU) / di },
+    {
+      source: "voltage-gain",
+      label: `Voltage reading, gain error (±${voltage.percentOfReading} % of reading)`,
+      kind: "systematic",
+      u: r * voltage.gainRelU,
+    },
+    {
+      source: "current-gain",
+      label: `Current reading, gain error (±${current.percentOfReading} % of reading)`,
+      kind: "systematic",
+      u: r * current.gainRelU,
+    },
+    {
+      source: "voltage-resolution",
+      label: `Voltage read-out resolution (${voltage.resolution} V), two readings`,
+      kind: "random",
+      u: (Math.SQRT2 * voltage.resolutionU * 1000) / di,
+    },
+    {
+      source: "current-resolution",
+      label: `Current read-out resolution (${current.resolution} A), two readings`,
+      kind: "random",
+      u: (Math.SQRT2 * r * current.resolutionU) / di,
+    },
     {
       source: "read-timing",
       label: `When the step happened, known only to one sampling interval (${dt} s)${step.risePerS === undefined ? `; ${RESISTANCE_RISE_SOURCE}` : ""}`,
@@ -55,7 +80,11 @@ export function dcResistanceUncertainty(step: ResistanceStep, voltage: ChannelU,
       u: (r * Math.abs(rho) * dt) / Math.sqrt(12),
     },
   ];
-  return combine(r, contributions, "Offsets cancel: both readings of each channel come from the same instrument a second apart. Lead and connector resistance is not an instrument error and is not included.");
+  return combine(
+    r,
+    contributions,
+    "Offsets cancel: both readings of each channel come from the same instrument a second apart. Lead and connector resistance is not an instrument error and is not included.",
+  );
 }
 
 export type Resistance25CInput = {
@@ -91,9 +120,24 @@ export function resistanceAt25CUncertainty(input: Resistance25CInput): FigureUnc
   const dEaPerJ = (r25 * inverseGap) / GAS_CONSTANT_J_PER_MOL_K;
   const contributions: Contribution[] = [
     ...resistance.contributions.map((c) => ({ ...c, u: c.u * f })),
-    { source: "temperature-gain", label: `Temperature reading, gain error (±${tc.percentOfReading} % of reading)`, kind: "systematic", u: dT * Math.abs(temperatureC) * tc.gainRelU },
-    { source: "temperature-offset", label: `Temperature reading, offset (±${tc.offset} °C)`, kind: "systematic", u: dT * tc.offsetU },
-    { source: "temperature-resolution", label: `Temperature read-out resolution (${tc.resolution} °C)`, kind: "random", u: dT * tc.resolutionU },
+    {
+      source: "temperature-gain",
+      label: `Temperature reading, gain error (±${tc.percentOfReading} % of reading)`,
+      kind: "systematic",
+      u: dT * Math.abs(temperatureC) * tc.gainRelU,
+    },
+    {
+      source: "temperature-offset",
+      label: `Temperature reading, offset (±${tc.offset} °C)`,
+      kind: "systematic",
+      u: dT * tc.offsetU,
+    },
+    {
+      source: "temperature-resolution",
+      label: `Temperature read-out resolution (${tc.resolution} °C)`,
+      kind: "random",
+      u: dT * tc.resolutionU,
+    },
     {
       source: "activation-energy",
       label: `Activation energy ${activationEnergyKJPerMol} ± ${halfWidth} kJ/mol (our stated assumption)`,
@@ -101,7 +145,11 @@ export function resistanceAt25CUncertainty(input: Resistance25CInput): FigureUnc
       u: Math.abs(dEaPerJ) * rectangularU(halfWidth * 1000),
     },
   ];
-  return combine(r25, contributions, "An estimate: the Arrhenius correction with a stated activation energy, whose range is part of the ±.");
+  return combine(
+    r25,
+    contributions,
+    "An estimate: the Arrhenius correction with a stated activation energy, whose range is part of the ±.",
+  );
 }
 
 export type SagLimitedInput = {
@@ -120,7 +168,13 @@ export type SagLimitedInput = {
  */
 export function sagLimitedCUncertainty(input: SagLimitedInput): FigureUncertainty | null {
   const { resistance, cells, ratedMah, nominalVPerCell, floorVPerCell } = input;
-  if (!allFinite(cells, ratedMah, nominalVPerCell, floorVPerCell) || !(resistance.value > 0) || !(ratedMah > 0) || !(cells > 0)) return null;
+  if (
+    !allFinite(cells, ratedMah, nominalVPerCell, floorVPerCell) ||
+    !(resistance.value > 0) ||
+    !(ratedMah > 0) ||
+    !(cells > 0)
+  )
+    return null;
   const c = (cells * (nominalVPerCell - floorVPerCell)) / (resistance.value / 1000) / (ratedMah / 1000);
   const relative = c / resistance.value;
   return combine(

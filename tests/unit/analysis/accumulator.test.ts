@@ -34,7 +34,11 @@ function series(from: number, to: number, dt: number, f: (t: number) => [number,
 
 describe("coulomb counting and energy (trapezoid rule; exact for piecewise-linear signals — numerical analysis, e.g. Burden & Faires)", () => {
   it("constant current I from rest for T seconds delivers I·T (closed form)", () => {
-    const log = [...series(0, 10, 1, () => [16.8, 0]), ...series(11, 3610, 1, () => [16.0, 5]), ...series(3611, 3620, 1, () => [16.4, 0])];
+    const log = [
+      ...series(0, 10, 1, () => [16.8, 0]),
+      ...series(11, 3610, 1, () => [16.0, 5]),
+      ...series(3611, 3620, 1, () => [16.4, 0]),
+    ];
     const acc = accumulate(log);
     // Load samples from 11 s to 3610 s; the ramps in and out count half an interval each: 5 A × 3600 s.
     expect(acc.positive.chargeAs).toBeCloseTo(5 * 3600, 9);
@@ -51,7 +55,7 @@ describe("coulomb counting and energy (trapezoid rule; exact for piecewise-linea
   it("constant current with voltage falling linearly gives I·T·(V0 + V1)/2", () => {
     const acc = accumulate([[0, 16.8, 0], ...series(1, 1001, 1, (t) => [16.5 - 0.001 * (t - 1), 10]), [1002, 16.0, 0]]);
     // Exact for the linear part plus the two half-interval ramps at the edges.
-    const middle = 10 * 1000 * (16.5 + 15.5) / 2;
+    const middle = (10 * 1000 * (16.5 + 15.5)) / 2;
     const edges = 0.5 * 10 * 16.5 + 0.5 * 10 * 15.5;
     expect(acc.positive.energyWs).toBeCloseTo(middle + edges, 6);
   });

@@ -2,7 +2,15 @@ import { describe, expect, it } from "vitest";
 import { LogError, analyseLog, analyseText } from "@/lib/analysis";
 import { type CsvDialect, type EcmOptions, generateLog, toCsv } from "../../helpers/ecm";
 
-const ECM: EcmOptions = { seed: 5, cells: 4, capacityMah: 3000, cRate: 4, sampleIntervalS: 0.2, iecPrelude: true, cellSpreadV: 0.005 };
+const ECM: EcmOptions = {
+  seed: 5,
+  cells: 4,
+  capacityMah: 3000,
+  cRate: 4,
+  sampleIntervalS: 0.2,
+  iecPrelude: true,
+  cellSpreadV: 0.005,
+};
 const { rows, truth } = generateLog(ECM);
 
 async function figures(dialect: CsvDialect, options: Parameters<typeof analyseText>[1] = {}) {
@@ -73,7 +81,9 @@ describe("reading logs as testers have them, without configuration", async () =>
   });
 
   it("says when discharge current was logged negative", async () => {
-    expect((await figures({ dischargeNegative: true })).warnings).toContain("Discharge current is logged as negative; figures use it as positive.");
+    expect((await figures({ dischargeNegative: true })).warnings).toContain(
+      "Discharge current is logged as negative; figures use it as positive.",
+    );
     expect((await figures({ dischargeNegative: true })).dischargeCurrentSign).toBe("negative");
   });
 
@@ -110,7 +120,8 @@ describe("messy logs: skipped and counted, not fatal", () => {
 
   it("reads clock-style time (hh:mm:ss)", async () => {
     const whole = generateLog({ cells: 2, cRate: 1, sampleIntervalS: 1 }).rows;
-    const clock = (s: number) => `${String(Math.floor(s / 3600)).padStart(2, "0")}:${String(Math.floor(s / 60) % 60).padStart(2, "0")}:${String(Math.round(s % 60)).padStart(2, "0")}`;
+    const clock = (s: number) =>
+      `${String(Math.floor(s / 3600)).padStart(2, "0")}:${String(Math.floor(s / 60) % 60).padStart(2, "0")}:${String(Math.round(s % 60)).padStart(2, "0")}`;
     const csv = `Time,Voltage (V),Current (A)\n${whole.map((r) => `${clock(r.timeS)},${r.voltageV.toFixed(4)},${r.currentA.toFixed(3)}`).join("\n")}\n`;
     const f = (await analyseText(csv)).figures;
     expect(f.durationS).toBeCloseTo(whole[whole.length - 1]?.timeS ?? 0, 6);
@@ -153,7 +164,9 @@ describe("clear errors (LogError, with the line where it applies)", () => {
     const csv = toCsv(rows).replace("Time (s),Voltage (V),Current (A),Temperature (°C)", "clock,pack,load,probe");
     const e = await expectLogError(analyseText(csv), "columns-not-found", 1);
     expect(e.message).toContain('"clock", "pack", "load", "probe"');
-    const f = (await analyseText(csv, { mapping: { time: "clock", voltage: "pack", current: "load", temperature: "probe" } })).figures;
+    const f = (
+      await analyseText(csv, { mapping: { time: "clock", voltage: "pack", current: "load", temperature: "probe" } })
+    ).figures;
     expect(f.capacityMah).toBeCloseTo(truth.deliveredMah, 0);
   });
 
@@ -164,7 +177,11 @@ describe("clear errors (LogError, with the line where it applies)", () => {
   });
 
   it("refuses a log with no discharge in it", async () => {
-    const charge = rows.map((r) => ({ ...r, currentA: r.currentA > 0 ? -r.currentA : 0, voltageV: r.currentA > 0 ? 16.9 + r.timeS / 1e4 : 16.8 }));
+    const charge = rows.map((r) => ({
+      ...r,
+      currentA: r.currentA > 0 ? -r.currentA : 0,
+      voltageV: r.currentA > 0 ? 16.9 + r.timeS / 1e4 : 16.8,
+    }));
     await expectLogError(analyseText(toCsv(charge)), "no-discharge");
   });
 
@@ -192,16 +209,24 @@ describe("the chart curve", async () => {
     expect(Math.max(...neg.curve.map((p) => p.currentA))).toBeGreaterThan(10);
     const last = a.curve[a.curve.length - 1];
     expect(last?.capacityMah).toBeCloseTo(a.figures.capacityMah ?? 0, 6);
-    for (let k = 1; k < a.curve.length; k++) expect(a.curve[k]?.capacityMah).toBeGreaterThanOrEqual(a.curve[k - 1]?.capacityMah ?? 0);
+    for (let k = 1; k < a.curve.length; k++)
+      expect(a.curve[k]?.capacityMah).toBeGreaterThanOrEqual(a.curve[k - 1]?.capacityMah ?? 0);
   });
 
   it("reports the parameters used", () => {
-    expect(a.parameters).toMatchObject({ holdDelayS: 10, activationEnergyKJPerMol: 17.1, nominalVPerCell: 3.7, floorVPerCell: 3.3 });
+    expect(a.parameters).toMatchObject({
+      holdDelayS: 10,
+      activationEnergyKJPerMol: 17.1,
+      nominalVPerCell: 3.7,
+      floorVPerCell: 3.3,
+    });
   });
 
   it("takes a stream of byte chunks as well as text", async () => {
     const bytes = new TextEncoder().encode(toCsv(rows));
-    const chunks = Array.from({ length: Math.ceil(bytes.length / 999) }, (_, k) => bytes.subarray(k * 999, (k + 1) * 999));
+    const chunks = Array.from({ length: Math.ceil(bytes.length / 999) }, (_, k) =>
+      bytes.subarray(k * 999, (k + 1) * 999),
+    );
     const b = await analyseLog(chunks, { curvePoints: 300 });
     expect(b.figures).toEqual(a.figures);
   });

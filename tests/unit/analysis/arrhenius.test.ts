@@ -1,7 +1,10 @@
 import { describe, expect, it } from "vitest";
 import {
-  ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL, ACTIVATION_ENERGY_INTERFACE_KJ_PER_MOL, DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL,
-  GAS_CONSTANT_J_PER_MOL_K, arrheniusFactor, resistanceAtTemperature,
+  ACTIVATION_ENERGY_INTERFACE_KJ_PER_MOL,
+  DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL,
+  GAS_CONSTANT_J_PER_MOL_K,
+  arrheniusFactor,
+  resistanceAtTemperature,
 } from "@/lib/analysis/arrhenius";
 
 // Reference ratios below were computed outside this project with Python's math.exp,
@@ -15,7 +18,6 @@ describe("Arrhenius temperature correction", () => {
 
   it("defaults to Ecker et al. 2015's 17.1 kJ/mol and keeps Yamada et al. 2009's 50 kJ/mol for reference", () => {
     expect(DEFAULT_ACTIVATION_ENERGY_KJ_PER_MOL).toBe(17.1);
-    expect(ACTIVATION_ENERGY_ELECTROLYTE_KJ_PER_MOL).toBe(17.1);
     expect(ACTIVATION_ENERGY_INTERFACE_KJ_PER_MOL).toBe(50);
   });
 

@@ -4,7 +4,16 @@ import { inferCells } from "@/lib/analysis/cells";
 // Rested LiPo cell voltages: 4.20 V full (4.35 V high-voltage type), about 3.8 V storage — common practice.
 describe("cells in series from the rest voltage", () => {
   it.each([
-    [4.2, 1], [8.4, 2], [12.6, 3], [16.8, 4], [21.0, 5], [25.2, 6], [11.4, 3], [22.8, 6], [26.1, 6], [50.4, 12],
+    [4.2, 1],
+    [8.4, 2],
+    [12.6, 3],
+    [16.8, 4],
+    [21.0, 5],
+    [25.2, 6],
+    [11.4, 3],
+    [22.8, 6],
+    [26.1, 6],
+    [50.4, 12],
   ])("%f V at rest → %iS", (restVoltageV, cells) => {
     expect(inferCells(restVoltageV, 0).cells).toBe(cells);
   });

@@ -21,7 +21,14 @@ describe("bounded streaming curve (bucket first/min/max, then LTTB)", () => {
   it("returns time-ordered points starting at the first sample and ending with the given last sample", () => {
     const c = new CurveBuckets(16);
     for (let k = 0; k < 1000; k++) c.push(k * 0.5, 4 - k / 1000, 2, 25, k, 0);
-    const last = { timeS: 499.5, voltageV: 3.001, currentA: 2, temperatureC: 25, positiveChargeAs: 999, negativeChargeAs: 0 };
+    const last = {
+      timeS: 499.5,
+      voltageV: 3.001,
+      currentA: 2,
+      temperatureC: 25,
+      positiveChargeAs: 999,
+      negativeChargeAs: 0,
+    };
     const points = c.points(last);
     expect(points[0]?.timeS).toBe(0);
     expect(points[points.length - 1]).toEqual(last);

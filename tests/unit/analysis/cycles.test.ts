@@ -37,13 +37,45 @@ describe("capacity retained over cycles, least-squares line (checked against sim
   });
 
   it("gives no projection when capacity does not fall, and null with too little data", () => {
-    expect(retentionTrend([{ cycles: 0, capacityMah: 1000 }, { cycles: 10, capacityMah: 1010 }], 1000)?.cyclesTo80).toBeNull();
+    expect(
+      retentionTrend(
+        [
+          { cycles: 0, capacityMah: 1000 },
+          { cycles: 10, capacityMah: 1010 },
+        ],
+        1000,
+      )?.cyclesTo80,
+    ).toBeNull();
     expect(retentionTrend([{ cycles: 0, capacityMah: 1000 }], 1000)).toBeNull();
-    expect(retentionTrend([{ cycles: 5, capacityMah: 1000 }, { cycles: 5, capacityMah: 990 }], 1000)).toBeNull();
-    expect(retentionTrend([{ cycles: 0, capacityMah: 1000 }, { cycles: 10, capacityMah: 990 }], 0)).toBeNull();
+    expect(
+      retentionTrend(
+        [
+          { cycles: 5, capacityMah: 1000 },
+          { cycles: 5, capacityMah: 990 },
+        ],
+        1000,
+      ),
+    ).toBeNull();
+    expect(
+      retentionTrend(
+        [
+          { cycles: 0, capacityMah: 1000 },
+          { cycles: 10, capacityMah: 990 },
+        ],
+        0,
+      ),
+    ).toBeNull();
   });
 
   it("r² is null with two points (a line through two points always fits)", () => {
-    expect(retentionTrend([{ cycles: 0, capacityMah: 1000 }, { cycles: 10, capacityMah: 990 }], 1000)?.r2).toBeNull();
+    expect(
+      retentionTrend(
+        [
+          { cycles: 0, capacityMah: 1000 },
+          { cycles: 10, capacityMah: 990 },
+        ],
+        1000,
+      )?.r2,
+    ).toBeNull();
   });
 });

@@ -27,7 +27,12 @@ describe("dialect sniffing", () => {
   });
 
   it("keeps decimal points as points", () => {
-    expect(detectDecimalComma([["0", "16.8", "0"], ["1", "16.7", "10.5"]])).toBe(false);
+    expect(
+      detectDecimalComma([
+        ["0", "16.8", "0"],
+        ["1", "16.7", "10.5"],
+      ]),
+    ).toBe(false);
   });
 
   it("ignores a cut last line when the sample is not the whole log", () => {

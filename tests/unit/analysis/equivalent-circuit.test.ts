@@ -40,7 +40,14 @@ describe("equivalent-circuit log generator (the synthetic truth other tests rely
   });
 
   it("truth: the step resistance is the first-order RC step response R0 + R1(1 − e^(−1/τ)) plus the OCV fall in 1 s (circuit theory)", () => {
-    const { truth } = generateLog({ cells: 4, r0PerCellMohm: 3, r1PerCellMohm: 2, tau1S: 10, cRate: 1, capacityMah: 5000 });
+    const { truth } = generateLog({
+      cells: 4,
+      r0PerCellMohm: 3,
+      r1PerCellMohm: 2,
+      tau1S: 10,
+      cRate: 1,
+      capacityMah: 5000,
+    });
     const rc = 4 * (3 + 2 * (1 - Math.exp(-1 / 10)));
     const ocvFallMohm = ((4 * (ocvPerCellV(1) - ocvPerCellV(1 - 5 / 3.6 / 5000))) / 5) * 1000;
     expect(truth.stepResistanceMohm).toBeCloseTo(rc + ocvFallMohm, 2);
@@ -72,7 +79,15 @@ describe("equivalent-circuit log generator (the synthetic truth other tests rely
 
   it("writes the dialects testers' loggers use", () => {
     const { rows } = generateLog({ cells: 2, sampleIntervalS: 1, initialRestS: 2 });
-    const csv = toCsv(rows.slice(0, 3), { delimiter: "\t", timeUnit: "ms", voltageUnit: "mV", currentUnit: "mA", headerStyle: "brackets", crlf: true, columns: ["current", "time", "cells", "voltage", "extra"] });
+    const csv = toCsv(rows.slice(0, 3), {
+      delimiter: "\t",
+      timeUnit: "ms",
+      voltageUnit: "mV",
+      currentUnit: "mA",
+      headerStyle: "brackets",
+      crlf: true,
+      columns: ["current", "time", "cells", "voltage", "extra"],
+    });
     const [header, first] = csv.split("\r\n");
     expect(header).toBe("I [mA]\ttime [ms]\tV1 [mV]\tV2 [mV]\tU [mV]\tPower (W)\tCapacity (mAh)\tMode");
     expect(first?.split("\t")).toEqual(["0", "0", "4200.0", "4200.0", "8400.0", "0.0", "0.0", "REST"]);

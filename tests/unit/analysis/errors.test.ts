@@ -5,7 +5,12 @@ describe("LogError", () => {
   it("carries a code, a message and an optional line", () => {
     const e = new LogError("time-backwards", "Time goes backwards from line 12.", 12);
     expect(e).toBeInstanceOf(Error);
-    expect(e).toMatchObject({ name: "LogError", code: "time-backwards", message: "Time goes backwards from line 12.", line: 12 });
+    expect(e).toMatchObject({
+      name: "LogError",
+      code: "time-backwards",
+      message: "Time goes backwards from line 12.",
+      line: 12,
+    });
     expect(isLogError(e)).toBe(true);
   });
 

@@ -13,8 +13,24 @@ async function run(ecm: EcmOptions, options: Parameters<typeof analyseText>[1] =
 }
 
 describe("figures of a constant-current discharge with an IEC two-level prelude", async () => {
-  const ecm: EcmOptions = { cells: 4, capacityMah: 5000, cRate: 5, r0PerCellMohm: 3, r1PerCellMohm: 1.5, tau1S: 20, sampleIntervalS: 0.1, iecPrelude: true, cutoffVPerCell: 3.3 };
-  const { rows, truth, f } = await run(ecm, { ratedMah: 5000, labelledC: 25, weightG: 560, cutoffVPerCell: 3.3, stopTemperatureC: 30 });
+  const ecm: EcmOptions = {
+    cells: 4,
+    capacityMah: 5000,
+    cRate: 5,
+    r0PerCellMohm: 3,
+    r1PerCellMohm: 1.5,
+    tau1S: 20,
+    sampleIntervalS: 0.1,
+    iecPrelude: true,
+    cutoffVPerCell: 3.3,
+  };
+  const { rows, truth, f } = await run(ecm, {
+    ratedMah: 5000,
+    labelledC: 25,
+    weightG: 560,
+    cutoffVPerCell: 3.3,
+    stopTemperatureC: 30,
+  });
 
   it("delivered capacity = ∫I dt: coulomb counting matches I × t for constant current (closed form)", () => {
     expect(f.capacityMah).toBeCloseTo(truth.deliveredMah, 3);
@@ -44,8 +60,10 @@ describe("figures of a constant-current discharge with an IEC two-level prelude"
     expect(f.timeToCutoffS).toBeGreaterThan(truth.mainDurationS - 0.1 - 1e-9);
   });
 
-  it("hold voltage per cell 10 s into the main discharge matches the circuit within 0.1 mV", () => {
-    expect(f.holdVoltagePerCellV).toBeCloseTo(truth.holdVoltagePerCellV, 4);
+  it("hold voltage per cell 10 s after the current edge matches the circuit within 0.5 mV", () => {
+    // The generator switches the load exactly on a sample; the analysis places the edge midway between
+    // the last rest and the first load sample (0.05 s later here), which the voltage's slope turns into ≈0.15 mV.
+    expect(f.holdVoltagePerCellV).toBeCloseTo(truth.holdVoltagePerCellV, 3);
   });
 
   it("DC resistance by the IEC 61960-3 two-level method matches the circuit's noise-free reading within 0.5 %", () => {
@@ -66,10 +84,18 @@ describe("figures of a constant-current discharge with an IEC two-level prelude"
     expect(f.timeToStopTemperatureS).toBeCloseTo((first?.timeS ?? 0) - truth.mainStartS, 6);
   });
 
-  it("sag-limited C = S·(3.7 − 3.3 V) / R ÷ rated Ah (Ohm's law; 3.7/3.3 V are common practice)", () => {
-    const r = (f.dcResistanceMohm ?? 0) / 1000;
-    expect(f.sagLimitedC).toBeCloseTo((4 * 0.4) / r / 5, 9);
-    expect(f.labelRatio).toBeCloseTo((f.sagLimitedC ?? 0) / 25, 12);
+  it("sag-limited C estimate = S·(3.7 − 3.3 V) / R(10 s) ÷ rated Ah, R read at the hold point (HPPC-style 10 s resistance; 3.7/3.3 V common practice)", () => {
+    const a = f.sagLimitedCAssumptions;
+    expect(a).toMatchObject({ nominalVPerCell: 3.7, floorVPerCell: 3.3, resistancePoint: "hold", resistanceAtS: 10 });
+    const r = (a?.resistanceMohm ?? 0) / 1000;
+    expect(f.sagLimitedCEstimate).toBeCloseTo((4 * 0.4) / r / 5, 9);
+    expect(f.sagLimitedC).toBe(f.sagLimitedCEstimate);
+    expect(f.labelRatio).toBeCloseTo((f.sagLimitedCEstimate ?? 0) / 25, 12);
+    // R(10 s) by Ohm's law from the circuit: rest voltage before the main load minus the voltage 10 s in, ÷ 25 A.
+    const restV = rows.find((row) => row.timeS === truth.mainStartS)?.voltageV ?? 0;
+    expect(r).toBeCloseTo((restV - 4 * truth.holdVoltagePerCellV) / 25, 4);
+    // It includes the first 10 s of polarisation, so it is above the 1 s two-level reading.
+    expect(r * 1000).toBeGreaterThan(f.dcResistanceMohm ?? Number.POSITIVE_INFINITY);
   });
 
   it("capacity ratio, specific energy and specific power (SI definitions)", () => {
@@ -96,7 +122,10 @@ describe("DC resistance from the rest → load step, and its 25 °C estimate", (
     const cold = await run({ cells: 4, cRate: 2, sampleIntervalS: 0.1, ambientC: 5 });
     expect(cold.f.dcResistanceMohm).toBeGreaterThan((warm.f.dcResistanceMohm ?? 0) * 1.3);
     expect(cold.f.resistanceTemperatureC).toBeCloseTo(5, 1);
-    expect(cold.f.resistanceAt25CMohm).toBeCloseTo((cold.f.dcResistanceMohm ?? 0) * arrheniusFactor(cold.f.resistanceTemperatureC ?? 0, 25), 9);
+    expect(cold.f.resistanceAt25CMohm).toBeCloseTo(
+      (cold.f.dcResistanceMohm ?? 0) * arrheniusFactor(cold.f.resistanceTemperatureC ?? 0, 25),
+      9,
+    );
     expect(Math.abs((cold.f.resistanceAt25CMohm ?? 0) / (warm.f.dcResistanceMohm ?? 1) - 1)).toBeLessThan(0.02);
   });
 
@@ -113,14 +142,33 @@ describe("DC resistance from the rest → load step, and its 25 °C estimate", (
 describe("noisy and irregular logs", () => {
   it("finds the two-level step of a small pack through 20 mA of current noise (the low step is only 0.44 A)", async () => {
     for (const seed of [1, 2, 3]) {
-      const { truth, f } = await run({ seed, cells: 3, capacityMah: 2200, cRate: 3, sampleIntervalS: 1, iecPrelude: true, noise: { voltageV: 0.0005, currentA: 0.02 } }, { ratedMah: 2200 });
+      const { truth, f } = await run(
+        {
+          seed,
+          cells: 3,
+          capacityMah: 2200,
+          cRate: 3,
+          sampleIntervalS: 1,
+          iecPrelude: true,
+          noise: { voltageV: 0.0005, currentA: 0.02 },
+        },
+        { ratedMah: 2200 },
+      );
       expect(f.dcResistanceMethod).toBe("iec-61960-two-level");
       expect(Math.abs((f.dcResistanceMohm ?? 0) / (truth.iecResistanceMohm ?? 1) - 1)).toBeLessThan(0.25);
     }
   });
 
   it("noise of 2 mV and 20 mA on an irregularly sampled log keeps capacity within 0.5 % and resistance within 5 %", async () => {
-    const { truth, f } = await run({ cells: 6, capacityMah: 4000, cRate: 3, sampleIntervalS: 0.2, jitter: 0.4, noise: { voltageV: 0.002, currentA: 0.02, temperatureC: 0.05 }, seed: 11 });
+    const { truth, f } = await run({
+      cells: 6,
+      capacityMah: 4000,
+      cRate: 3,
+      sampleIntervalS: 0.2,
+      jitter: 0.4,
+      noise: { voltageV: 0.002, currentA: 0.02, temperatureC: 0.05 },
+      seed: 11,
+    });
     expect(Math.abs((f.capacityMah ?? 0) / truth.deliveredMah - 1)).toBeLessThan(0.005);
     expect(Math.abs((f.energyWh ?? 0) / truth.deliveredWh - 1)).toBeLessThan(0.005);
     expect(Math.abs((f.dcResistanceMohm ?? 0) / truth.stepResistanceMohm - 1)).toBeLessThan(0.05);
@@ -134,9 +182,13 @@ describe("time to cut-off", () => {
   });
 
   it("a discharge that stops a few mV above the stated cut-off counts as reaching it, with a note", async () => {
-    const { f } = await run({ cells: 2, cRate: 2, sampleIntervalS: 0.5, cutoffVPerCell: 3.305 }, { cutoffVPerCell: 3.3 });
+    const { f } = await run(
+      { cells: 2, cRate: 2, sampleIntervalS: 0.5, cutoffVPerCell: 3.305 },
+      { cutoffVPerCell: 3.3 },
+    );
     expect(f.timeToCutoffS).not.toBeNull();
-    expect(f.warnings.join(" ")).toMatch(/within 10 mV per cell/);
+    expect(f.reachedCutoff).toBe(true);
+    expect(f.warnings.join(" ")).toMatch(/within what one sample interval can show/);
   });
 
   it("a discharge stopped well above the cut-off has no time to cut-off, and says so", async () => {

@@ -44,12 +44,20 @@ describe("header cells with units in the forms testers write them", () => {
     expect(g(raw)).toMatchObject({ dimension: "voltage", cell: 1 });
   });
 
-  it.each(["Capacity (mAh)", "Energy (Wh)", "Power (W)", "Mode", "Cycle", "Ambient temp (°C)", "Input voltage (V)", "Charger temp", "Resistance (mOhm)", ""])(
-    "%j is not a pack measurement and is ignored",
-    (raw) => {
-      expect(g(raw).dimension).toBeNull();
-    },
-  );
+  it.each([
+    "Capacity (mAh)",
+    "Energy (Wh)",
+    "Power (W)",
+    "Mode",
+    "Cycle",
+    "Ambient temp (°C)",
+    "Input voltage (V)",
+    "Charger temp",
+    "Resistance (mOhm)",
+    "",
+  ])("%j is not a pack measurement and is ignored", (raw) => {
+    expect(g(raw).dimension).toBeNull();
+  });
 
   it("reads a cell's temperature probe as temperature, not as a cell voltage", () => {
     expect(g("Cell 1 temp")).toMatchObject({ dimension: "temperature", cell: null });

@@ -5,7 +5,16 @@ import type { AnalyseOptions, Analysis, ColumnMapping, CurvePoint, Figures, Meth
 // The public surface other parts of Sagline (server, seed, CLI) are built against.
 describe("public API of lib/analysis", () => {
   it("exports the agreed functions and class", () => {
-    for (const name of ["analyseLog", "analyseText", "groupKey", "modifiedZScores", "summarise", "retentionTrend", "lttb", "LogError"] as const) {
+    for (const name of [
+      "analyseLog",
+      "analyseText",
+      "groupKey",
+      "modifiedZScores",
+      "summarise",
+      "retentionTrend",
+      "lttb",
+      "LogError",
+    ] as const) {
       expect(typeof api[name]).toBe("function");
     }
   });
@@ -24,7 +33,14 @@ describe("public API of lib/analysis", () => {
   });
 
   it("groupKey returns key, parts and a human label", () => {
-    const g = api.groupKey({ resistanceMethod: "iec-61960-two-level", ambientC: 22, cutoffVPerCell: 3.0, loadCurrentA: 15, ratedMah: 5000, cyclesBeforeTest: 0 });
+    const g = api.groupKey({
+      resistanceMethod: "iec-61960-two-level",
+      ambientC: 22,
+      cutoffVPerCell: 3.0,
+      loadCurrentA: 15,
+      ratedMah: 5000,
+      cyclesBeforeTest: 0,
+    });
     expect(g).toEqual({
       key: "iec-61960-two-level_a15-25_co3.0_r2-5_new",
       parts: { resistance: "iec-61960-two-level", ambient: "a15-25", cutoff: "co3.0", rate: "r2-5", age: "new" },

@@ -5,8 +5,14 @@ import { groupModifiedZ, plausibilityFlags, type PlausibilityInput } from "@/lib
 function clean(): PlausibilityInput {
   return {
     figures: {
-      capacityMah: 1280, capacityRatio: 1280 / 1300, labelRatio: 0.5, sagLimitedC: 50, minVoltagePerCellV: 3.3,
-      startTemperatureC: 22, cells: 4, timeToStopTemperatureS: null,
+      capacityMah: 1280,
+      capacityRatio: 1280 / 1300,
+      labelRatio: 0.5,
+      sagLimitedC: 50,
+      minVoltagePerCellV: 3.3,
+      startTemperatureC: 22,
+      cells: 4,
+      timeToStopTemperatureS: null,
     },
     method: { ambientTemperatureC: 21, cutoffVPerCell: 3.3 },
     pack: { cellsInSeries: 4, ratedCapacityMah: 1300 },
@@ -100,22 +106,35 @@ describe("plausibility flags", () => {
     expect(codes(i)).toEqual(["cells-mismatch"]);
   });
 
-  it("duplicate-log: the same content hash was already submitted", () => {
+  it("duplicate-log: the same content hash was already submitted (with the other result's id, for a link)", () => {
     const i = clean();
     i.duplicateLogResultIds = [17];
-    expect(plausibilityFlags(i)).toEqual([{ code: "duplicate-log", message: expect.stringMatching(/#17/) }]);
+    expect(plausibilityFlags(i)).toEqual([
+      { code: "duplicate-log", message: expect.stringMatching(/#17/), resultIds: [17] },
+    ]);
   });
 
   it("proposed-catalogue: a new maker and pack are proposed", () => {
     const i = clean();
     i.makerProposed = true;
     i.packProposed = true;
-    expect(plausibilityFlags(i)).toEqual([{ code: "proposed-catalogue", message: expect.stringMatching(/a new maker and a new pack/) }]);
+    expect(plausibilityFlags(i)).toEqual([
+      { code: "proposed-catalogue", message: expect.stringMatching(/a new maker and a new pack/) },
+    ]);
   });
 
   it("missing figures raise nothing rather than guessing", () => {
     const i = clean();
-    i.figures = { capacityMah: null, capacityRatio: null, labelRatio: null, sagLimitedC: null, minVoltagePerCellV: null, startTemperatureC: null, cells: null, timeToStopTemperatureS: null };
+    i.figures = {
+      capacityMah: null,
+      capacityRatio: null,
+      labelRatio: null,
+      sagLimitedC: null,
+      minVoltagePerCellV: null,
+      startTemperatureC: null,
+      cells: null,
+      timeToStopTemperatureS: null,
+    };
     expect(codes(i)).toEqual([]);
   });
 });

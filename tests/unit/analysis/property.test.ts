@@ -19,8 +19,23 @@ const dialectArb: fc.Arbitrary<CsvDialect> = fc.record({
   headerStyle: fc.constantFrom("parens", "brackets", "snake", "slash"),
   // Mostly the columns a log needs, sometimes not (then the reader must say so).
   columns: fc.oneof(
-    { weight: 4, arbitrary: fc.shuffledSubarray(["temperature", "cells", "extra"] as const).chain((extra) => fc.shuffledSubarray(["time", "voltage", "current", ...extra] as CsvColumn[], { minLength: 3 + extra.length })).map((c) => [...c]) },
-    { weight: 1, arbitrary: fc.shuffledSubarray(["time", "voltage", "current", "temperature", "cells", "extra"] as CsvColumn[], { minLength: 1 }).map((c) => [...c]) },
+    {
+      weight: 4,
+      arbitrary: fc
+        .shuffledSubarray(["temperature", "cells", "extra"] as const)
+        .chain((extra) =>
+          fc.shuffledSubarray(["time", "voltage", "current", ...extra] as CsvColumn[], { minLength: 3 + extra.length }),
+        )
+        .map((c) => [...c]),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .shuffledSubarray(["time", "voltage", "current", "temperature", "cells", "extra"] as CsvColumn[], {
+          minLength: 1,
+        })
+        .map((c) => [...c]),
+    },
   ),
 });
 
@@ -33,12 +48,32 @@ function mappingFor(d: CsvDialect, cells: number): ColumnMapping | undefined {
     at[c] = k;
     k += c === "cells" ? cells : c === "extra" ? 3 : 1;
   }
-  return { time: at.time, voltage: at.voltage, current: at.current, temperature: at.temperature, hasHeader: false, timeUnit: d.timeUnit, voltageUnit: d.voltageUnit, currentUnit: d.currentUnit };
+  return {
+    time: at.time,
+    voltage: at.voltage,
+    current: at.current,
+    temperature: at.temperature,
+    hasHeader: false,
+    timeUnit: d.timeUnit,
+    voltageUnit: d.voltageUnit,
+    currentUnit: d.currentUnit,
+  };
 }
 
 // A small pool of realistic logs (circuit-generated), each a few dozen samples.
-const pool = [1, 2, 3, 4].map((seed) =>
-  generateLog({ seed, cells: seed, capacityMah: 60, cRate: 10 + seed * 5, sampleIntervalS: 4, initialRestS: 8, finalRestS: 8, iecPrelude: seed % 2 === 0, noise: { voltageV: 0.003, currentA: 0.002 } }).rows,
+const pool = [1, 2, 3, 4].map(
+  (seed) =>
+    generateLog({
+      seed,
+      cells: seed,
+      capacityMah: 60,
+      cRate: 10 + seed * 5,
+      sampleIntervalS: 4,
+      initialRestS: 8,
+      finalRestS: 8,
+      iecPrelude: seed % 2 === 0,
+      noise: { voltageV: 0.003, currentA: 0.002 },
+    }).rows,
 );
 
 const randomRowsArb = fc.array(
@@ -52,11 +87,34 @@ const randomRowsArb = fc.array(
   { minLength: 0, maxLength: 30 },
 );
 
-type Mutation = { kind: "delete" | "insert" | "replace" | "dupLine" | "dropLine" | "truncate" | "swapLines"; at: number; text: string };
+type Mutation = {
+  kind: "delete" | "insert" | "replace" | "dupLine" | "dropLine" | "truncate" | "swapLines";
+  at: number;
+  text: string;
+};
 const mutationArb: fc.Arbitrary<Mutation> = fc.record({
   kind: fc.constantFrom("delete", "insert", "replace", "dupLine", "dropLine", "truncate", "swapLines"),
   at: fc.nat(),
-  text: fc.oneof(fc.string({ maxLength: 4 }), fc.constantFrom(",", ";", "\t", "\n", "\r\n", '"', "-", ".", "e", "1e308", "NaN", "Infinity", "°", "\uFEFF", "\u0000")),
+  text: fc.oneof(
+    fc.string({ maxLength: 4 }),
+    fc.constantFrom(
+      ",",
+      ";",
+      "\t",
+      "\n",
+      "\r\n",
+      '"',
+      "-",
+      ".",
+      "e",
+      "1e308",
+      "NaN",
+      "Infinity",
+      "°",
+      "\uFEFF",
+      "\u0000",
+    ),
+  ),
 });
 
 function mutate(text: string, mutations: Mutation[]): string {
@@ -66,13 +124,34 @@ function mutate(text: string, mutations: Mutation[]): string {
     const lines = out.split("\n");
     const li = lines.length === 0 ? 0 : m.at % lines.length;
     switch (m.kind) {
-      case "delete": out = out.slice(0, at) + out.slice(at + 1 + (m.at % 5)); break;
-      case "insert": out = out.slice(0, at) + m.text + out.slice(at); break;
-      case "replace": out = out.slice(0, at) + m.text + out.slice(at + m.text.length); break;
-      case "dupLine": lines.splice(li, 0, lines[li] ?? ""); out = lines.join("\n"); break;
-      case "dropLine": lines.splice(li, 1); out = lines.join("\n"); break;
-      case "truncate": out = out.slice(0, at); break;
-      case "swapLines": { const j = (li + 1) % lines.length; const a = lines[li] ?? ""; lines[li] = lines[j] ?? ""; lines[j] = a; out = lines.join("\n"); break; }
+      case "delete":
+        out = out.slice(0, at) + out.slice(at + 1 + (m.at % 5));
+        break;
+      case "insert":
+        out = out.slice(0, at) + m.text + out.slice(at);
+        break;
+      case "replace":
+        out = out.slice(0, at) + m.text + out.slice(at + m.text.length);
+        break;
+      case "dupLine":
+        lines.splice(li, 0, lines[li] ?? "");
+        out = lines.join("\n");
+        break;
+      case "dropLine":
+        lines.splice(li, 1);
+        out = lines.join("\n");
+        break;
+      case "truncate":
+        out = out.slice(0, at);
+        break;
+      case "swapLines": {
+        const j = (li + 1) % lines.length;
+        const a = lines[li] ?? "";
+        lines[li] = lines[j] ?? "";
+        lines[j] = a;
+        out = lines.join("\n");
+        break;
+      }
     }
   }
   return out;
@@ -81,13 +160,20 @@ function mutate(text: string, mutations: Mutation[]): string {
 /** Plain checks, one expect at the end: expect() per value would dominate the run time. */
 function checkFinite(a: Analysis): void {
   const bad: string[] = [];
-  for (const [key, value] of Object.entries(a.figures)) {
-    if (typeof value === "number" && !Number.isFinite(value)) bad.push(`${key} = ${value}`);
-    else if (key === "warnings" && !(Array.isArray(value) && value.every((w) => typeof w === "string"))) bad.push("warnings");
-    else if (key !== "warnings" && typeof value !== "number" && value !== null && typeof value !== "string") bad.push(key);
-  }
+  // Every number anywhere in the figures (discharges, assumptions, retention included) is finite.
+  const visit = (key: string, value: unknown): void => {
+    if (typeof value === "number") {
+      if (!Number.isFinite(value)) bad.push(`${key} = ${value}`);
+    } else if (Array.isArray(value)) value.forEach((v, k) => visit(`${key}[${k}]`, v));
+    else if (value !== null && typeof value === "object")
+      for (const [k, v] of Object.entries(value)) visit(`${key}.${k}`, v);
+    else if (value !== null && typeof value !== "string" && typeof value !== "boolean") bad.push(key);
+  };
+  visit("figures", a.figures);
+  if (!a.figures.warnings.every((w) => typeof w === "string")) bad.push("warnings");
   for (const p of a.curve) {
-    if (![p.timeS, p.voltageV, p.currentA, p.capacityMah].every(Number.isFinite)) bad.push(`curve point ${JSON.stringify(p)}`);
+    if (![p.timeS, p.voltageV, p.currentA, p.capacityMah].every(Number.isFinite))
+      bad.push(`curve point ${JSON.stringify(p)}`);
     if (p.temperatureC !== null && !Number.isFinite(p.temperatureC)) bad.push("curve temperature");
   }
   if (a.curve.length > 400) bad.push(`curve has ${a.curve.length} points`);
@@ -97,7 +183,12 @@ function checkFinite(a: Analysis): void {
 const outcomes = new Map<string, number>();
 const count = (key: string) => outcomes.set(key, (outcomes.get(key) ?? 0) + 1);
 
-async function property(text: string, chunkSize: number, asBytes: boolean, mapping: ColumnMapping | undefined): Promise<void> {
+async function property(
+  text: string,
+  chunkSize: number,
+  asBytes: boolean,
+  mapping: ColumnMapping | undefined,
+): Promise<void> {
   const bytes = asBytes ? new TextEncoder().encode(text) : null;
   const chunks: (string | Uint8Array)[] = [];
   const whole = bytes ?? text;
@@ -119,7 +210,10 @@ describe("property: 10,000 generated and mutated logs give figures or a LogError
     let figures = 0;
     await fc.assert(
       fc.asyncProperty(
-        fc.oneof(fc.nat({ max: pool.length - 1 }).map((k) => pool[k] ?? []), randomRowsArb),
+        fc.oneof(
+          fc.nat({ max: pool.length - 1 }).map((k) => pool[k] ?? []),
+          randomRowsArb,
+        ),
         dialectArb,
         fc.array(mutationArb, { maxLength: 4 }),
         fc.integer({ min: 1, max: 4096 }),

@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { TwoLevelDetector, matchesTwoLevelCurrents, sagLimitedC, sagLimitedCurrentA, twoLevelResistanceOhm } from "@/lib/analysis/resistance";
+import {
+  TwoLevelDetector,
+  matchesTwoLevelCurrents,
+  sagLimitedC,
+  sagLimitedCurrentA,
+  twoLevelResistanceOhm,
+} from "@/lib/analysis/resistance";
 
 describe("DC resistance, IEC 61960-3 two-level formula R = (U1 − U2)/(I2 − I1)", () => {
   it("worked example: 5 Ah cell, 0.2 It = 1 A at 3.9500 V, 1 It = 5 A at 3.9300 V → 5 mΩ (IEC 61960-3 formula, hand-computed)", () => {
@@ -29,7 +35,8 @@ describe("two-level step detector", () => {
     const d = new TwoLevelDetector(0.02, 0);
     let found = null;
     for (const [t, v, i] of samples) found = d.add(t, v, i, 25) ?? found;
-    return found;
+    // The load stretch ends after the last sample: a reading still waiting keeps what it has.
+    return d.close() ?? found;
   }
 
   it("reads U1/I1 at the end of a ≥5 s low step and U2/I2 1 s into the high step", () => {
@@ -40,8 +47,12 @@ describe("two-level step detector", () => {
     expect(r).not.toBeNull();
     expect(r?.u1V).toBe(3.95);
     expect(r?.i1A).toBe(1);
-    expect(r?.u2V).toBeCloseTo(3.93 - 10 * 0.0001, 9);
-    expect(r?.stepT).toBeCloseTo(10, 9);
+    // The edge lies between the last low (10.0 s) and first high (10.1 s) sample: taken at 10.05 s, so
+    // U2 is interpolated 1 s later, at 11.05 s.
+    expect(r?.stepT).toBeCloseTo(10.05, 9);
+    expect(r?.edgeIntervalS).toBeCloseTo(0.1, 9);
+    expect(r?.high.voltageV).toBeCloseTo(3.93 - 10.5 * 0.0001, 9);
+    expect(r?.high.currentA).toBe(5);
   });
 
   it("ignores a low step shorter than 5 s", () => {

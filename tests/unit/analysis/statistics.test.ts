@@ -1,8 +1,15 @@
 import * as ss from "simple-statistics";
 import { describe, expect, it } from "vitest";
 import {
-  MEAN_AD_CONSTANT, MODIFIED_Z_CONSTANT, MODIFIED_Z_THRESHOLD, median, medianAbsoluteDeviation, modifiedZScores,
-  outlierIndexes, quantileSorted, summarise,
+  MEAN_AD_CONSTANT,
+  MODIFIED_Z_CONSTANT,
+  MODIFIED_Z_THRESHOLD,
+  median,
+  medianAbsoluteDeviation,
+  modifiedZScores,
+  outlierIndexes,
+  quantileSorted,
+  summarise,
 } from "@/lib/analysis/statistics";
 
 const groups = [
@@ -27,12 +34,15 @@ describe("modified z-score, Iglewicz & Hoaglin (1993): Mᵢ = 0.6745 (xᵢ − x
     expect(MODIFIED_Z_THRESHOLD).toBe(3.5);
   });
 
-  it.each(groups.map((g) => [g]))("scores of %j equal the published definition computed with simple-statistics", (g) => {
-    const med = ss.median(g);
-    const mad = ss.medianAbsoluteDeviation(g);
-    const expected = g.map((x) => (0.6745 * (x - med)) / mad);
-    modifiedZScores(g).forEach((z, k) => expect(z).toBeCloseTo(expected[k] as number, 10));
-  });
+  it.each(groups.map((g) => [g]))(
+    "scores of %j equal the published definition computed with simple-statistics",
+    (g) => {
+      const med = ss.median(g);
+      const mad = ss.medianAbsoluteDeviation(g);
+      const expected = g.map((x) => (0.6745 * (x - med)) / mad);
+      modifiedZScores(g).forEach((z, k) => expect(z).toBeCloseTo(expected[k] as number, 10));
+    },
+  );
 
   it("hand-worked example: [1, 2, 3, 4, 100] → median 3, MAD 1, score of 100 = 0.6745 × 97 = 65.4265", () => {
     const z = modifiedZScores([1, 2, 3, 4, 100]);

@@ -5,12 +5,18 @@ import { lookUpUnit, parseClock, parseField } from "@/lib/analysis/units";
 describe("reading numbers from log fields", () => {
   it("the fast path gives exactly the double that Number() gives (ECMAScript's correctly rounded conversion is the reference)", () => {
     fc.assert(
-      fc.property(fc.integer({ min: -999_999_999, max: 999_999_999 }), fc.integer({ min: 0, max: 6 }), (mantissa, decimals) => {
-        const digits = Math.abs(mantissa).toString().padStart(decimals + 1, "0");
-        const text = `${mantissa < 0 ? "-" : ""}${digits.slice(0, digits.length - decimals)}${decimals > 0 ? `.${digits.slice(-decimals)}` : ""}`;
-        expect(parseField(text, false)).toBe(Number(text));
-        expect(parseField(text.replace(".", ","), true)).toBe(Number(text));
-      }),
+      fc.property(
+        fc.integer({ min: -999_999_999, max: 999_999_999 }),
+        fc.integer({ min: 0, max: 6 }),
+        (mantissa, decimals) => {
+          const digits = Math.abs(mantissa)
+            .toString()
+            .padStart(decimals + 1, "0");
+          const text = `${mantissa < 0 ? "-" : ""}${digits.slice(0, digits.length - decimals)}${decimals > 0 ? `.${digits.slice(-decimals)}` : ""}`;
+          expect(parseField(text, false)).toBe(Number(text));
+          expect(parseField(text.replace(".", ","), true)).toBe(Number(text));
+        },
+      ),
       { numRuns: 20_000 },
     );
   });
@@ -39,9 +45,12 @@ describe("reading numbers from log fields", () => {
     expect(parseField(text, decimalComma)).toBe(expected);
   });
 
-  it.each(["", " ", "-", ".", "abc", "1.2.3", "Infinity", "NaN", "12,5", "1 2"])("%j is not a number in a decimal-point log", (text) => {
-    expect(parseField(text, false)).toBeNaN();
-  });
+  it.each(["", " ", "-", ".", "abc", "1.2.3", "Infinity", "NaN", "12,5", "1 2"])(
+    "%j is not a number in a decimal-point log",
+    (text) => {
+      expect(parseField(text, false)).toBeNaN();
+    },
+  );
 
   it("reads clock times hh:mm:ss(.s) as seconds", () => {
     expect(parseField("01:02:03.5", false)).toBe(3723.5);

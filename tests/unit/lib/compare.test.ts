@@ -6,7 +6,7 @@ let id = 0;
 const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
   id: ++id,
   packId: 1,
-  status: "approved",
+  openCase: false,
   groupKey: "k",
   ratedCapacityMah: 2000,
   ambientTemperatureC: 22,
@@ -58,10 +58,11 @@ describe("sustained C (definition on /methods)", () => {
       r({ loadRateC: 10 }),
       r({ loadRateC: 20, passedStopTemperature: true }),
       r({ loadRateC: 25, reachedCutoff: false }),
-      r({ loadRateC: 30, status: "disputed" }),
       r({ loadRateC: 40, loadMode: "constant-power" }),
     ];
     expect(sustainedC(rows)?.rateC).toBe(10);
+    // A reader's open case does not stop a result counting: it counts until moderators decide.
+    expect(sustainedC([...rows, r({ loadRateC: 30, openCase: true })])?.rateC).toBe(30);
     expect(sustainedC([r({ passedStopTemperature: true })])).toBeNull();
   });
 });

@@ -3,29 +3,33 @@
 import { describe, expect, it } from "vitest";
 import { flagResolutionMessage } from "@/lib/flag-resolution-message";
 
-const base = { flagId: 7, resultId: 42, alsoClosed: 0 } as const;
+const base = { flagId: 7, resultId: 42, alsoClosed: 0, stillOpen: 0 } as const;
 
 describe("flagResolutionMessage", () => {
-  it("kept and the last open flag: published again", () => {
+  it("dismissed, the last open flag: the result stays published and counted, no open check left", () => {
     expect(
       flagResolutionMessage({ ...base, resolution: "kept", status: "approved" }, "Ashcombe Cells Ridge 1300"),
     ).toBe(
-      "Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: result kept. It is published again and no longer shows as disputed.",
+      "Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: dismissed, result kept. It stays published and counted, and no longer shows an open check.",
     );
   });
 
-  it("corrected while other flags stay open: still disputed", () => {
+  it("dismissed with a correction while other flags stay open: says how many remain", () => {
     const text = flagResolutionMessage(
-      { ...base, resolution: "corrected", status: "disputed" },
+      { ...base, resolution: "corrected", status: "approved", stillOpen: 2 },
       "Ashcombe Cells Ridge 1300",
     );
-    expect(text).toMatch(/^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: result corrected\./);
-    expect(text).toContain("still shows as disputed");
+    expect(text).toMatch(
+      /^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: dismissed, correction noted\. It stays published and counted; 2 other flags on it are still open\.$/,
+    );
+    expect(flagResolutionMessage({ ...base, resolution: "kept", status: "approved", stillOpen: 1 })).toMatch(
+      /; 1 other flag on it is still open\.$/,
+    );
   });
 
-  it("withdrawn: says so and counts the other flags closed with it", () => {
+  it("taken out of publication: says so and counts the other flags closed with it", () => {
     expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn" })).toBe(
-      "Flag #7 on result #42 resolved: result withdrawn. It is withdrawn; it and its history stay in the audit log.",
+      "Flag #7 on result #42 resolved: result taken out of publication. It is withdrawn; it and its history stay in the audit log.",
     );
     expect(flagResolutionMessage({ ...base, resolution: "withdrawn", status: "withdrawn", alsoClosed: 1 })).toMatch(
       / 1 other open flag on it was closed with this one\.$/,

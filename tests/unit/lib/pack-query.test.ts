@@ -2,12 +2,14 @@ import { describe, expect, it } from "vitest";
 import type { PackRow } from "@/lib/catalogue";
 import { queryPacks, sortPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams } from "@/lib/pack-query-params";
-import { parsePackQuery } from "@/lib/validations/pack-query";
+import { packListQuery } from "@/lib/api-contract/queries";
+import { searchParamsObject } from "@/lib/api-contract/params";
 
 let id = 0;
 const row = (o: Partial<PackRow>): PackRow => ({
   id: ++id,
   slug: `p${id}`,
+  makerId: 1,
   model: "Model",
   makerName: "Maker",
   makerSlug: "maker",
@@ -43,11 +45,21 @@ describe("pack table state in the URL", () => {
     expect(writePackParams(DEFAULT_PACK_PARAMS).toString()).toBe("");
   });
 
-  it("turns bad params into defaults on the page, and into field errors in the API", () => {
-    const sp = new URLSearchParams("cells=abc&size=7&sort=colour&page=-1&minMah=12.5");
+  it("turns bad params into defaults on the page, and into field errors in the API (one schema for both)", () => {
+    const sp = new URLSearchParams("cells=abc&size=500&sort=colour&page=-1&minMah=12.5&group=Not%20a%20key");
     expect(readPackParams(sp)).toEqual({ ...DEFAULT_PACK_PARAMS, minMah: 12.5 });
-    const parsed = parsePackQuery(sp);
+    const parsed = packListQuery.safeParse(searchParamsObject(sp));
     expect(parsed.success).toBe(false);
+    const fields = new Set(parsed.error?.issues.map((i) => String(i.path[0])));
+    expect([...fields].sort()).toEqual(["cells", "group", "page", "size", "sort"]);
+  });
+
+  it("reads what the API accepts the same way: any size from 1 to 200, a group key of up to 120 characters", () => {
+    const sp = new URLSearchParams("size=7&group=dc-step_a15-25_co3.3_r5-10_new&maxMah=900&minMah=1000");
+    const strict = packListQuery.safeParse(searchParamsObject(sp));
+    // The API refuses an empty range; the page keeps both numbers and shows no packs.
+    expect(strict.error?.issues.map((i) => i.path.join("."))).toEqual(["maxMah"]);
+    expect(readPackParams(sp)).toMatchObject({ size: 7, group: "dc-step_a15-25_co3.3_r5-10_new", minMah: 1000 });
   });
 });
 
@@ -58,11 +70,12 @@ describe("pack table query", () => {
     expect(sortPacks(rows, "measuredC", "asc").map((r) => r.measuredC)).toEqual([20, 40, null]);
   });
 
-  it("pages and clamps the page number", () => {
+  it("pages; a page past the last is empty, never silently the last (the API answers 422)", () => {
     const rows = Array.from({ length: 30 }, () => row({}));
-    const page = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 9 });
-    expect(page).toMatchObject({ total: 30, page: 3, pageCount: 3 });
-    expect(page.rows).toHaveLength(10);
+    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 3 }).rows).toHaveLength(10);
+    const past = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 9 });
+    expect(past).toMatchObject({ total: 30, page: 9, pageCount: 3 });
+    expect(past.rows).toHaveLength(0);
   });
 
   it("searches fuzzily across maker and model, every word must match", () => {

@@ -12,7 +12,10 @@ describe("CSV escaping (RFC 4180 §2)", () => {
     expect(escapeCsvField("cr\rhere")).toBe('"cr\rhere"');
   });
   it("ends every record with CRLF, header first (RFC 4180 §2.1, §2.3)", () => {
-    const csv = toCsv([{ name: "id", value: (r: { id: number }) => r.id }], [{ id: 1 }, { id: 2 }]);
+    const csv = toCsv(
+      [{ name: "id", type: "integer", description: "", value: (r: { id: number }) => r.id }],
+      [{ id: 1 }, { id: 2 }],
+    );
     expect(csv).toBe("id\r\n1\r\n2\r\n");
   });
   it("writes missing values as empty fields and numbers without separators", () => {
@@ -21,9 +24,16 @@ describe("CSV escaping (RFC 4180 §2)", () => {
     expect(csvCell(Number.NaN)).toBe("");
     expect(csvCell(12345.5)).toBe("12345.5");
   });
-  it("writes header notes as # comment lines before the header", () => {
-    const csv = toCsv([{ name: "id", value: (r: { id: number }) => r.id }], [], ["Licence: CC BY 4.0"]);
-    expect(csv).toBe("# Licence: CC BY 4.0\r\nid\r\n");
+  it("starts with the header row: no comment lines, which RFC 4180 does not have", () => {
+    const csv = toCsv([{ name: "id", type: "integer", description: "", value: (r: { id: number }) => r.id }], []);
+    expect(csv).toBe("id\r\n");
+  });
+  it("writes each number rounded to its field's digits (no float noise)", () => {
+    const fields = [
+      { name: "v", type: "number" as const, description: "", digits: 3, value: (r: { v: number }) => r.v },
+      { name: "c", type: "number" as const, description: "", digits: 0, value: (r: { v: number }) => r.v * 10 },
+    ];
+    expect(toCsv(fields, [{ v: 89.32431030273438 }, { v: -0.00001 }])).toBe("v,c\r\n89.324,893\r\n0,0\r\n");
   });
 });
 
@@ -37,7 +47,10 @@ describe("formula-injection guard (OWASP CSV Injection guidance)", () => {
   it("guards only free-text columns, then escapes the result", () => {
     expect(csvCell('=HYPERLINK("x")', true)).toBe('"\'=HYPERLINK(""x"")"');
     expect(csvCell("-5", false)).toBe("-5");
-    const csv = toCsv([{ name: "notes", freeText: true, value: (r: { n: string }) => r.n }], [{ n: "@evil" }]);
+    const csv = toCsv(
+      [{ name: "notes", type: "string", description: "", freeText: true, value: (r: { n: string }) => r.n }],
+      [{ n: "@evil" }],
+    );
     expect(csv).toBe("notes\r\n'@evil\r\n");
   });
 });

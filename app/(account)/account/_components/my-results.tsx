@@ -13,7 +13,6 @@ const statusTone: Record<string, string> = {
   changes_requested: "bg-charge-50 text-charge-700 dark:bg-charge-700/30 dark:text-charge-100",
   rejected: "bg-warn-soft text-warn dark:bg-red-950/50 dark:text-red-200",
   withdrawn: "bg-paper-sunk text-ink-faint dark:bg-night-sunk dark:text-paper/60",
-  disputed: "bg-charge-50 text-charge-700 dark:bg-charge-700/30 dark:text-charge-100",
 };
 
 export function MyResults({ results }: { results: ContributorResult[] }) {

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { forbidden, notFound } from "next/navigation";
+import { notFound } from "next/navigation";
 import { z } from "zod";
+import { recordId } from "@/lib/validations/ids";
 import { Alert } from "@/components/ui/form";
 import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { getLatestChangeRequest, getResultForEdit } from "@/db/queries/submissions";
@@ -15,7 +16,7 @@ import { ResubmitForm } from "./_components/resubmit-form-client";
 export const metadata: Metadata = { title: "Answer a change request" };
 export const dynamic = "force-dynamic";
 
-const params = z.object({ resultId: z.coerce.number().int().positive().max(2_147_483_647) });
+const params = z.object({ resultId: recordId });
 
 export default async function ResubmitPage(props: { params: Promise<{ resultId: string }> }) {
   const parsed = params.safeParse(await props.params);
@@ -23,8 +24,8 @@ export default async function ResubmitPage(props: { params: Promise<{ resultId: 
   const { resultId } = parsed.data;
   const user = await requirePageUser("result.resubmit-own", `/submit/${resultId}`);
   const result = await getResultForEdit(resultId);
-  if (!result) notFound();
-  if (result.contributorId !== user.id) forbidden();
+  // Someone else's result is "not found" here, exactly like a missing one: the page does not confirm it exists.
+  if (!result || result.contributorId !== user.id) notFound();
   const [request, profiles] = await Promise.all([getLatestChangeRequest(resultId), listBenchProfilesForUser(user.id)]);
   const p = result.pack;
   const e = env();

@@ -1,6 +1,6 @@
 "use client";
-// Adds the chart to the curated list on /charts. Needs a signed-in role ("chart.save", checked on the
-// server); the permalink works for everyone without it.
+// Saves the chart (signed in, "chart.save", checked on the server). Moderators choose which saved charts
+// are listed on /charts; the permalink works for everyone either way.
 import { useState } from "react";
 import type { ChartState } from "@/lib/open-data/chart-state";
 
@@ -15,10 +15,11 @@ export function SaveChart({ state }: { state: ChartState }) {
         headers: { "content-type": "application/json" },
         body: JSON.stringify({ state }),
       });
-      if (res.status === 201) setMessage("Added to the published charts.");
-      else if (res.status === 401)
-        setMessage("Sign in to add charts to the published list. The permalink works without it.");
-      else setMessage("Could not add the chart; the permalink still works.");
+      if (res.status === 201)
+        setMessage("Saved. Its link works for everyone; moderators choose which saved charts are listed on /charts.");
+      else if (res.status === 401) setMessage("Sign in to save charts. The permalink works without it.");
+      else if (res.status === 429) setMessage("You saved many charts in the last hour; please try again later.");
+      else setMessage("Could not save the chart; the permalink still works.");
     } catch {
       setMessage("Could not reach Sagline; the permalink still works.");
     } finally {
@@ -33,7 +34,7 @@ export function SaveChart({ state }: { state: ChartState }) {
         disabled={busy}
         className="rounded border border-ink/20 px-3 py-1 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk"
       >
-        Add to published charts
+        Save this chart
       </button>
       {message ? (
         <p className="muted text-xs" role="status">

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { labelForGroupKey } from "@/lib/analysis";
-import { cachedGroupCoverage, cachedGroupOptions, cachedMakers } from "@/server/public-data";
+import { makerRows } from "@/server/open-data/catalogue";
+import { cachedGroupCoverage, cachedGroups } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
@@ -13,8 +13,12 @@ export const metadata: Metadata = {
 };
 
 export default async function NewChartPage() {
-  const [groups, makers, coverage] = await Promise.all([cachedGroupOptions(3), cachedMakers(), cachedGroupCoverage(3)]);
-  // Only makers with approved results in some offered group.
+  const [allGroups, makers, allCoverage] = await Promise.all([cachedGroups(), makerRows(), cachedGroupCoverage()]);
+  // Groups with at least three published results: fewer make no chart worth publishing.
+  const groups = allGroups.filter((g) => g.resultCount >= 3);
+  // Only makers and pack sizes with published results in an offered group.
+  const offered = new Set(groups.map((g) => g.key));
+  const coverage = allCoverage.filter((c) => offered.has(c.group));
   const withData = new Set(coverage.map((c) => c.maker));
   return (
     <div className="space-y-4">
@@ -27,8 +31,7 @@ export default async function NewChartPage() {
         <ChartBuilder
           groups={groups.map((g) => ({
             key: g.key,
-            // In words, always: a group whose card cannot be read back is named from its key.
-            label: g.label ?? labelForGroupKey(g.key) ?? "a like-for-like group without a readable name",
+            label: g.label,
             resultCount: g.resultCount,
             packCount: g.packCount,
           }))}

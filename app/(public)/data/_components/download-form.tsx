@@ -1,11 +1,11 @@
 // Filtered downloads: a plain GET form (works without JavaScript); each button names its file.
-import type { GroupOption } from "@/db/queries/open-data/groups";
+import type { GroupSummary } from "@/db/queries/groups";
 import type { MakerRow } from "@/lib/open-data/records";
 
 const inputClass =
   "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
 
-export function DownloadForm({ makers, groups }: { makers: MakerRow[]; groups: GroupOption[] }) {
+export function DownloadForm({ makers, groups }: { makers: MakerRow[]; groups: GroupSummary[] }) {
   return (
     <form
       method="get"
@@ -52,7 +52,7 @@ export function DownloadForm({ makers, groups }: { makers: MakerRow[]; groups: G
             <option value="">Every group</option>
             {groups.map((g) => (
               <option key={g.key} value={g.key}>
-                {g.label ?? g.key} ({g.resultCount} results)
+                {g.label} ({g.resultCount} results)
               </option>
             ))}
           </select>

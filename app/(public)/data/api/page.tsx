@@ -1,20 +1,24 @@
 import type { Metadata } from "next";
+import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from "@/lib/api-contract/params";
+import { ROUTES } from "@/lib/api-contract/routes";
+import { describeField, type Field } from "@/lib/open-data/field-kit";
+import { makerFields, packFields } from "@/lib/open-data/fields";
+import { ATTRIBUTION_TEXT, DATA_LICENCE_LABEL, DATA_LICENCE_SPDX, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { resultFields } from "@/lib/open-data/result-fields";
 import { env } from "@/server/env";
-import { makerFields, packFields, resultFields, type Field } from "@/lib/open-data/fields";
-import { ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
-import { openApiDocument } from "@/lib/open-data/openapi";
 
-// This guide reads nothing from the database (endpoints and fields come from lib/open-data in code), so no
-// moderation decision can make it stale and no tag is needed; the hour only picks up a changed APP_URL.
+// This guide reads nothing from the database (routes and fields come from lib/api-contract and lib/open-data, the
+// same table the OpenAPI document is generated from), so no moderation decision can make it stale; the hour only
+// picks up a changed APP_URL.
 export const revalidate = 3600;
 export const metadata: Metadata = {
   title: "API guide",
   description: "Sagline's public read API: endpoints, filters, paging, caching, rate limits and fields with units.",
 };
 
-function FieldTable<R>({ fields }: { fields: Field<R>[] }) {
+function FieldTable<R>({ fields, label }: { fields: Field<R>[]; label: string }) {
   return (
-    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="API endpoints">
+    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label={label}>
       <table className="w-full min-w-[32rem]">
         <thead>
           <tr>
@@ -30,7 +34,7 @@ function FieldTable<R>({ fields }: { fields: Field<R>[] }) {
                 <code>{f.name}</code>
               </td>
               <td>{f.type}</td>
-              <td>{f.description}</td>
+              <td>{describeField(f)}</td>
             </tr>
           ))}
         </tbody>
@@ -41,17 +45,17 @@ function FieldTable<R>({ fields }: { fields: Field<R>[] }) {
 
 export default function ApiGuidePage() {
   const base = env().APP_URL;
-  const doc = openApiDocument(base);
   return (
     <article className="prose-sagline max-w-4xl">
       <h1>API guide</h1>
       <p>
-        Read-only JSON over HTTPS, no key needed. Every response carries <code>meta.licence</code>: the data is{" "}
+        JSON over HTTPS, no key needed. Every JSON answer carries <code>meta.licence</code>: the data is{" "}
         <a href={DATA_LICENCE_URL} rel="license">
-          {DATA_LICENCE_SHORT}
+          {DATA_LICENCE_LABEL}
         </a>{" "}
-        — {ATTRIBUTION_TEXT} The machine-readable description is the <a href="/api/v1/openapi.json">OpenAPI document</a>
-        .
+        (SPDX <code>{DATA_LICENCE_SPDX}</code>) — {ATTRIBUTION_TEXT} The machine-readable description is the{" "}
+        <a href="/api/v1/openapi.json">OpenAPI document</a>, generated from the same schemas the server checks its
+        answers against.
       </p>
       <p>
         The API is SI, always: temperatures in °C, weights in g, voltages and resistances as each field names them (per
@@ -61,48 +65,62 @@ export default function ApiGuidePage() {
       </p>
       <h2>Endpoints</h2>
       <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="API endpoints">
-        <table className="w-full min-w-[32rem]">
+        <table className="w-full min-w-[32rem]" data-testid="api-endpoints">
           <thead>
             <tr>
-              <th>GET</th>
+              <th>Method and path</th>
               <th>What</th>
-              <th>Parameters</th>
+              <th>Query parameters</th>
             </tr>
           </thead>
           <tbody>
-            {Object.entries(doc.paths).map(([path, op]) => (
-              <tr key={path}>
+            {ROUTES.map((r) => (
+              <tr key={`${r.method} ${r.path}`}>
                 <td>
-                  <code>{path}</code>
+                  <code>
+                    {r.method.toUpperCase()} {r.path}
+                  </code>
                 </td>
-                <td>{op.get.summary}</td>
-                <td>
-                  {op.get.parameters
-                    .filter((p) => p.in === "query")
-                    .map((p) => p.name)
-                    .join(", ") || "—"}
-                </td>
+                <td>{r.summary}</td>
+                <td>{Object.keys(r.query?.shape ?? {}).join(", ") || "—"}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
-      <h2>Paging, caching and limits</h2>
+      <h2>Lists, paging, caching and limits</h2>
       <ul>
         <li>
-          <code>page</code> (from 1) and <code>size</code> (up to 200, default 50; the packs list takes 10, 25, 50 or
-          100 and adds <code>sort</code> and <code>dir</code>); <code>total</code>, <code>links.next</code> and the{" "}
-          <code>X-Total-Count</code> header tell you how far to go.
+          Every list answers <code>{"{ data, meta, links }"}</code>: <code>meta</code> holds <code>page</code>,{" "}
+          <code>size</code>, <code>total</code> and <code>pageCount</code> (and the licence); <code>links</code> holds{" "}
+          <code>self</code>, <code>first</code>, <code>last</code>, <code>next</code> and <code>prev</code> (null past
+          either end). One item answers <code>{"{ data, meta, links }"}</code> too.
         </li>
         <li>
-          Filters are those of the packs table: <code>maker</code>, <code>cells</code>, <code>connector</code>,{" "}
-          <code>minMah</code>/<code>maxMah</code> (rated capacity), <code>minC</code>/<code>maxC</code> (labelled C),{" "}
-          <code>minG</code>/<code>maxG</code> (weight), <code>q</code>; results add <code>pack</code> and{" "}
-          <code>group</code>. A bad value answers <code>422</code> with <code>error.fieldErrors</code>.
+          <code>page</code> (from 1) and <code>size</code> (1 to {MAX_PAGE_SIZE}, default {DEFAULT_PAGE_SIZE}) on every
+          list; a page past the last answers <code>422</code>. The packs list adds <code>sort</code> and{" "}
+          <code>dir</code>. The <code>X-Total-Count</code> header repeats <code>meta.total</code>.
         </li>
         <li>
-          Responses carry an <code>ETag</code>; send it back in <code>If-None-Match</code> and an unchanged answer is a
-          bodiless <code>304</code>. They may be cached for a minute.
+          Filters are those of the packs table, with the same names and meanings everywhere: <code>maker</code>,{" "}
+          <code>cells</code>, <code>connector</code>, <code>minMah</code>/<code>maxMah</code> (rated capacity),{" "}
+          <code>minC</code>/<code>maxC</code> (labelled C), <code>minG</code>/<code>maxG</code> (weight) and{" "}
+          <code>q</code>, a fuzzy search over maker and model (every word must match, a typo or two is forgiven).
+          Results and downloads add <code>pack</code> and <code>group</code>. A bad value answers <code>422</code> with{" "}
+          <code>error.fieldErrors</code>; a like-for-like group with no published results answers <code>404</code>, in a
+          filter and in <code>/api/v1/groups/&#123;key&#125;</code> alike.
+        </li>
+        <li>
+          Figures are rounded to the decimal places each field states below (the same the CSV files and the Data Package
+          carry).
+        </li>
+        <li>
+          Answers and downloads carry an <code>ETag</code>; send it back in <code>If-None-Match</code> and an unchanged
+          answer is a bodiless <code>304</code>. They may be cached for a minute.
+        </li>
+        <li>
+          A published result&apos;s raw log is at <code>/api/v1/results/&#123;id&#125;/log</code>, under the same
+          licence; its ETag is the file&apos;s SHA-256.
         </li>
         <li>
           Chart images (<code>/charts/image/…/chart.svg</code> or <code>chart.png</code>) take <code>width</code>{" "}
@@ -112,24 +130,25 @@ export default function ApiGuidePage() {
         </li>
         <li>CORS is open for GET, so a browser page on any site can read the API.</li>
         <li>
-          600 requests a minute per IP address; beyond that, <code>429</code> with <code>Retry-After</code> in seconds.
+          600 requests a minute per client; beyond that, <code>429</code> with <code>Retry-After</code> in seconds.
         </li>
         <li>
-          Only approved results are served. Figures are medians only where the name says so; units are in the field
-          names.
+          Only published results are served: approved by a moderator, with their pack and maker in the catalogue (a
+          result with an open reader case still counts). Figures are medians only where the name says so; units are in
+          the field names.
         </li>
       </ul>
       <h2>Example</h2>
       <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
-        <code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'`}</code>
+        <code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'\ncurl -sO '${base}/data/download/results.csv'`}</code>
       </pre>
       <h2>Fields</h2>
       <h3>Maker</h3>
-      <FieldTable fields={makerFields} />
+      <FieldTable fields={makerFields} label="Maker fields" />
       <h3>Pack</h3>
-      <FieldTable fields={packFields} />
+      <FieldTable fields={packFields} label="Pack fields" />
       <h3>Result (method card and figures)</h3>
-      <FieldTable fields={resultFields} />
+      <FieldTable fields={resultFields} label="Result fields" />
     </article>
   );
 }

@@ -14,7 +14,7 @@ import {
 } from "@/lib/pack-query-params";
 import { PackFilters } from "./pack-filters";
 import { PACK_COLUMNS, PackTable } from "./pack-table";
-import type { ApiPackPage, FilterOptions } from "./types";
+import type { ApiPackList, ApiPackPage, FilterOptions } from "./types";
 
 const URL_EVENT = "sagline:url";
 const subscribe = (fn: () => void) => {
@@ -101,16 +101,23 @@ export function PacksClient({ first, options }: { first: ReactNode; options: Fil
           throw new Error(
             res.status === 429
               ? "Too many requests — wait a moment and try again."
-              : "The packs could not be loaded. Try again, or clear the filters.",
+              : res.status === 422 && params.page > 1
+                ? `There is no page ${params.page} of these packs: go back to page 1.`
+                : "The packs could not be loaded. Try again, or clear the filters.",
           );
-        setFetched({ key: canonical, page: (await res.json()) as ApiPackPage, error: null });
+        const { data, meta } = (await res.json()) as ApiPackList;
+        setFetched({
+          key: canonical,
+          page: { data, page: meta.page, pageCount: meta.pageCount, total: meta.total },
+          error: null,
+        });
       })
       .catch((err: unknown) => {
         if (ctrl.signal.aborted) return;
         setFetched({ key: canonical, page: null, error: err instanceof Error ? err.message : String(err) });
       });
     return () => ctrl.abort();
-  }, [canonical, island]);
+  }, [canonical, island, params.page]);
 
   const loading = !island && fetched.key !== canonical;
   const tableBox = useRef<HTMLDivElement>(null);
@@ -198,8 +205,6 @@ export function PacksClient({ first, options }: { first: ReactNode; options: Fil
 const emptyPage = (p: PackParams): ApiPackPage => ({
   data: [],
   page: p.page,
-  pageSize: p.size,
   pageCount: 1,
   total: 0,
-  group: p.group,
 });

@@ -1,15 +1,11 @@
 import type { PackRow } from "@/lib/catalogue";
 
-/** A row as the public API sends it (no database id). */
-export type ApiPackRow = Omit<PackRow, "id">;
-export type ApiPackPage = {
-  data: ApiPackRow[];
-  page: number;
-  pageSize: number;
-  pageCount: number;
-  total: number;
-  group: string | null;
-};
+/** A row as GET /api/v1/packs sends it (lib/api-contract/responses.ts#packListItem). */
+export type ApiPackRow = PackRow;
+/** What the table shows of one answer of GET /api/v1/packs ({ data, meta, links }). */
+export type ApiPackPage = { data: ApiPackRow[]; page: number; pageCount: number; total: number };
+/** The answer itself, as far as the table reads it. */
+export type ApiPackList = { data: ApiPackRow[]; meta: { page: number; pageCount: number; total: number } };
 export type FilterOptions = {
   makers: { slug: string; name: string }[];
   connectors: string[];

@@ -3,12 +3,16 @@ import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LogFigure } from "@/components/charts/log-figure";
 import { StaticIsland } from "@/components/static-island";
+import { recordId } from "@/lib/validations/ids";
 import { FlagResultForm } from "@/components/flag-result-form-client";
 import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
+import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { logDownloadName, recomputeCommand } from "@/lib/open-data/recompute";
 import { describeResultGroup } from "@/lib/pack-summary";
 import { reviewReasonLabels } from "@/lib/review-status-labels";
+import { openCaseReasonWords } from "@/lib/validations/review";
 import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
@@ -18,7 +22,7 @@ export async function generateStaticParams() {
   return [];
 }
 
-const params = z.object({ id: z.coerce.number().int().positive().max(2_147_483_647) });
+const params = z.object({ id: recordId });
 type Props = { params: Promise<{ id: string }> };
 
 export async function generateMetadata(props: Props): Promise<Metadata> {
@@ -30,7 +34,6 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
 const statusWords: Record<string, string> = {
   pending: "submitted",
   approved: "approved",
-  disputed: "disputed",
   rejected: "rejected",
   withdrawn: "withdrawn",
   changes_requested: "changes requested",
@@ -43,6 +46,16 @@ export default async function ResultPage(props: Props) {
   if (!r) notFound();
   const group = describeResultGroup(r);
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
+  const logFile = logDownloadName(r.id, r.logFilename);
+  const command = recomputeCommand(logFile, {
+    cells: r.pack.cellsInSeries,
+    ratedMah: r.ratedCapacityMah,
+    labelledC: r.pack.labelledContinuousC,
+    weightG: r.pack.weightG,
+    cutoffVPerCell: r.cutoffVPerCell,
+    stopTemperatureC: r.stopTemperatureC,
+    packStartTemperatureC: r.packStartTemperatureC,
+  });
   return (
     <article className="space-y-8">
       <header className="space-y-2">
@@ -51,15 +64,20 @@ export default async function ResultPage(props: Props) {
           <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span>
         </p>
         <h1>Result #{r.id}</h1>
+        {r.openCaseReasons.length ? (
+          <p
+            className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn"
+            role="note"
+            data-testid="open-case"
+          >
+            A reader asked moderators to check this result:{" "}
+            {r.openCaseReasons.map((reason) => openCaseReasonWords[reason]).join("; ")} — it still counts until they
+            decide.
+          </p>
+        ) : null}
         <div className="max-w-xl">
           <FlagResultForm resultId={r.id} />
         </div>
-        {r.status === "disputed" ? (
-          <p className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn" role="note">
-            Disputed: a reader flagged this result and a moderator has not resolved it yet. Its figures stay visible,
-            marked.
-          </p>
-        ) : null}
         <p className="text-sm">
           Contributor: <strong data-testid="contributor">{r.contributor}</strong> · published {fmtDate(r.publishedAt)}
         </p>
@@ -101,6 +119,23 @@ export default async function ResultPage(props: Props) {
             }
           />
         </StaticIsland>
+      </section>
+
+      <section aria-labelledby="raw-log" className="space-y-2" data-testid="raw-log">
+        <h2 id="raw-log">Raw log and recomputing the figures</h2>
+        <p className="text-sm">
+          <a href={`/api/v1/results/${r.id}/log`} download={logFile}>
+            Download the log ({logFile})
+          </a>{" "}
+          as it was uploaded, under{" "}
+          <a href={DATA_LICENCE_URL} rel="license">
+            {DATA_LICENCE_LABEL}
+          </a>
+          . With Sagline&apos;s open command-line tool, this command computes the same figures from it:
+        </p>
+        <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
+          <code data-testid="recompute-command">{command}</code>
+        </pre>
       </section>
 
       <section aria-labelledby="history" className="space-y-2">

@@ -8,6 +8,7 @@ import { getReviewDetail } from "@/db/queries/review";
 import { prepareTimeCurve } from "@/lib/curves";
 import { labelSpec, packTitle } from "@/lib/format";
 import { reviewStatusLabels } from "@/lib/review-status-labels";
+import { recordId } from "@/lib/validations/ids";
 import { requirePageUser } from "@/server/page-auth";
 import { FlagChips } from "../_components/flag-chips";
 import { DecisionPanel } from "./_components/decision-panel-client";
@@ -16,7 +17,7 @@ import { ContributorHistory, GroupComparison, MethodAndFigures, ReaderFlags } fr
 export const metadata: Metadata = { title: "Review a result" };
 export const dynamic = "force-dynamic";
 
-const params = z.object({ id: z.coerce.number().int().positive() });
+const params = z.object({ id: recordId });
 const when = (d: Date) =>
   d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
 
@@ -67,6 +68,17 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
                   <li key={i} className="space-y-1">
                     <FlagChips flags={[fl]} />
                     <p>{fl.message}</p>
+                    {fl.resultIds?.length ? (
+                      <p>
+                        Compare with:{" "}
+                        {fl.resultIds.map((id, k) => (
+                          <span key={id}>
+                            {k > 0 ? ", " : ""}
+                            <Link href={`/review/${id}`}>result #{id}</Link>
+                          </span>
+                        ))}
+                      </p>
+                    ) : null}
                   </li>
                 ))}
               </ul>

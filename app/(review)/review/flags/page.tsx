@@ -22,9 +22,10 @@ export default async function ReaderFlagsPage() {
       <div className="space-y-1">
         <h1>Reader flags</h1>
         <p className="muted max-w-3xl">
-          {flags.length} open {flags.length === 1 ? "flag" : "flags"}, oldest first. A flagged result shows as disputed
-          to everyone until its flags are resolved. Keep it, correct it (say what changed), or withdraw it — a withdrawn
-          result is never deleted and its history stays public.
+          {flags.length} open {flags.length === 1 ? "flag" : "flags"}, oldest first. A reader’s flag never changes a
+          result by itself: it stays published and counted, and its page says a check is open. Dismiss the flag (the
+          result stays), dismiss it with the correction you made, or take the result out of publication with a reason
+          shown on its page — a withdrawn result is never deleted and its history stays public.
         </p>
       </div>
       {/* Around the list and its empty state alike, so the confirmation survives the last row leaving. */}

@@ -1,24 +1,30 @@
-// GET /api/v1/charts — saved (curated) charts with their full state and links.
-// POST /api/v1/charts — add a chart to the curated list (signed-in, "chart.save"); anyone can publish a permalink without it.
+// GET /api/v1/charts — the featured charts (chosen by moderators), newest feature first, a page at a time, with
+// their full state and links. POST /api/v1/charts — save a chart (signed-in, "chart.save", limited per
+// account): it gets an id whose link anyone can open; moderators decide whether it is listed.
 import { randomBytes } from "node:crypto";
-import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { listSavedCharts } from "@/db/queries/open-data/charts";
 import { insertSavedChart } from "@/db/mutations/saved-charts";
 import { AppError } from "@/lib/errors";
-import { apiGet, apiJson, apiOptions } from "@/server/api";
+import { chartListQuery } from "@/lib/api-contract/queries";
+import { chartList } from "@/lib/api-contract/responses";
+import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
 import { savedChartJson } from "@/lib/open-data/chart-links";
 import { chartState } from "@/lib/open-data/chart-state";
+import { cachedFeaturedCharts } from "@/server/public-data";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 
 export const GET = apiGet(async (req) => {
-  const charts = await listSavedCharts();
-  return apiJson(req, { data: charts.map(savedChartJson) });
+  const q = parseQuery(req, chartListQuery);
+  const { rows, total } = await cachedFeaturedCharts(q.page, q.size);
+  const page = pageOf(req, q, total);
+  return apiJson(req, chartList, { data: rows.map(savedChartJson), meta: page.meta, links: page.links }, page.headers);
 });
 const saveBody = z.object({ state: chartState });
 
 export const POST = withPermission("chart.save", async (req, _ctx, user) => {
   if (!user) throw new AppError("unauthenticated", "Please sign in first.");
+  await enforceRateLimit(`chart-save:user:${user.id}`, limits.chartSavePerUser);
   const body: unknown = await req.json().catch(() => null);
   const { state } = saveBody.parse(body);
   const slug =
@@ -36,13 +42,17 @@ export const POST = withPermission("chart.save", async (req, _ctx, user) => {
     state,
     createdById: user.id,
   });
-  try {
-    revalidatePath("/charts");
-  } catch {
-    // Outside a Next request (tests, scripts) there is no cache to revalidate.
-  }
   return Response.json(
-    { data: savedChartJson({ ...row, kind: state.kind, title: state.title, note: state.note ?? null, state }) },
+    {
+      data: savedChartJson({
+        ...row,
+        kind: state.kind,
+        title: state.title,
+        note: state.note ?? null,
+        state,
+        featuredAt: null,
+      }),
+    },
     { status: 201 },
   );
 });

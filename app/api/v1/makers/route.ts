@@ -1,12 +1,16 @@
-// GET /api/v1/makers — active makers, paginated, with their number of packs.
-import { cachedApiMakersPage } from "@/server/public-data";
-import { apiGet, apiJson, apiOptions, pageEnvelope, parseQuery } from "@/server/api";
-import { pageQuery } from "@/lib/validations/open-data";
+// GET /api/v1/makers — active makers, paged, with their numbers of packs and published results.
+import { pageQuery } from "@/lib/api-contract/queries";
+import { makerList } from "@/lib/api-contract/responses";
+import { makerFields } from "@/lib/open-data/fields";
+import { flatRecord } from "@/lib/open-data/records";
+import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
+import { makerRows } from "@/server/open-data/catalogue";
 
 export const GET = apiGet(async (req) => {
   const q = parseQuery(req, pageQuery);
-  const { rows, total } = await cachedApiMakersPage({ page: q.page, size: q.size });
-  const env = pageEnvelope(req, q.page, q.size, total);
-  return apiJson(req, { data: rows, meta: env.meta, links: env.links }, env.headers);
+  const all = await makerRows();
+  const page = pageOf(req, q, all.length);
+  const data = all.slice((q.page - 1) * q.size, q.page * q.size).map((m) => flatRecord(makerFields, m));
+  return apiJson(req, makerList, { data, meta: page.meta, links: page.links }, page.headers);
 });
 export const OPTIONS = apiOptions;

@@ -1,9 +1,8 @@
-// GET /api/v1/openapi.json — the OpenAPI 3.1 description of the public read API.
+// GET /api/v1/openapi.json — the OpenAPI 3.1 document, generated from the contract's zod schemas.
+import { openApiDocument } from "@/lib/api-contract/openapi";
+import { openApiResponse } from "@/lib/api-contract/service-responses";
+import { apiGet, apiOptions, plainJson } from "@/server/api";
 import { env } from "@/server/env";
-import { apiGet, apiOptions, corsHeaders, API_CACHE_CONTROL } from "@/server/api";
-import { openApiDocument } from "@/lib/open-data/openapi";
 
-export const GET = apiGet(async () =>
-  Response.json(openApiDocument(env().APP_URL), { headers: { ...corsHeaders, "Cache-Control": API_CACHE_CONTROL } }),
-);
+export const GET = apiGet(async (req) => plainJson(req, openApiResponse, openApiDocument(env().APP_URL)));
 export const OPTIONS = apiOptions;

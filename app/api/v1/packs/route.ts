@@ -1,39 +1,31 @@
-// GET /api/v1/packs — the pack catalogue with filters, fuzzy search, sorting and pages (public, CORS, ETag).
-import { withPermission } from "@/server/route";
-import { apiOptions, cachedJson, withCors } from "@/server/api";
-import { AppError, fieldErrorsOf } from "@/lib/errors";
+// GET /api/v1/packs — the pack catalogue with the packs table's filters, fuzzy search, sorting and pages.
+import { packListQuery } from "@/lib/api-contract/queries";
+import { packList } from "@/lib/api-contract/responses";
+import { packFields } from "@/lib/open-data/fields";
+import { packListRecord } from "@/lib/open-data/pack-list";
+import { flatRecord } from "@/lib/open-data/records";
 import { queryPacks } from "@/lib/pack-query";
+import { toPackParams } from "@/lib/pack-query-params";
+import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
+import { requireKnownGroup } from "@/server/open-data/catalogue";
 import { cachedPackRows } from "@/server/public-data";
-import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
-import { parsePackQuery, toPackParams } from "@/lib/validations/pack-query";
-import { DATA_LICENCE } from "@/components/layout/site-footer";
 
-const handler = withPermission("public", async (req) => {
-  await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
-  const parsed = parsePackQuery(new URL(req.url).searchParams);
-  if (!parsed.success)
-    throw new AppError("validation", "Some search parameters are not valid.", fieldErrorsOf(parsed.error));
-  const params = toPackParams(parsed.data);
-  const page = queryPacks(await cachedPackRows(params.group), params);
-  return cachedJson(
+export const GET = apiGet(async (req) => {
+  const query = parseQuery(req, packListQuery);
+  const { sort, dir, page: _page, size: _size, ...filters } = query;
+  const params = toPackParams(query);
+  await requireKnownGroup(filters.group);
+  const result = queryPacks(await cachedPackRows(params.group), params);
+  const page = pageOf(req, params, result.total);
+  return apiJson(
     req,
+    packList,
     {
-      data: page.rows.map(({ id: _id, ...row }) => row),
-      page: page.page,
-      pageSize: page.size,
-      pageCount: page.pageCount,
-      total: page.total,
-      group: params.group,
-      licence: { name: DATA_LICENCE.name, url: DATA_LICENCE.url, credit: "Sagline contributors" },
+      data: result.rows.map((r) => ({ ...flatRecord(packFields, r), ...packListRecord(r) })),
+      meta: { ...page.meta, filters, sort, dir },
+      links: page.links,
     },
-    { "X-Total-Count": String(page.total) },
+    { ...page.headers, "Cache-Control": "public, max-age=60, s-maxage=300, stale-while-revalidate=600" },
   );
 });
-
-export async function GET(req: Request, ctx: unknown): Promise<Response> {
-  return withCors(handler(req, ctx));
-}
-
-export function OPTIONS(): Response {
-  return apiOptions();
-}
+export const OPTIONS = apiOptions;

@@ -1,9 +1,19 @@
 import { describe, expect, it } from "vitest";
 import { RESISTANCE_METHODS } from "@/lib/analysis/group-key";
 import {
-  ACCURACY_RESISTANCE_METHODS, currentChannel, instrumentAccuracySchema, statedAccuracySchema, temperatureChannel, voltageChannel,
+  ACCURACY_RESISTANCE_METHODS,
+  currentChannel,
+  instrumentAccuracySchema,
+  statedAccuracySchema,
+  temperatureChannel,
+  voltageChannel,
 } from "@/lib/analysis/uncertainty/accuracy";
-import { ACCURACY_CLASSES, ACCURACY_CLASS_KEYS, DEFAULT_ACCURACY_CLASS, resolveAccuracy } from "@/lib/analysis/uncertainty/accuracy-classes";
+import {
+  ACCURACY_CLASSES,
+  ACCURACY_CLASS_KEYS,
+  DEFAULT_ACCURACY_CLASS,
+  resolveAccuracy,
+} from "@/lib/analysis/uncertainty/accuracy-classes";
 
 const full = {
   voltage: { percentOfReading: 0.05, offsetV: 0.003, resolutionV: 0.001 },
@@ -20,8 +30,14 @@ describe("instrument accuracy schema (zod, browser-safe)", () => {
 
   it.each([
     [{ ...full, voltage: { ...full.voltage, percentOfReading: -1 } }, "Voltage accuracy cannot be negative."],
-    [{ ...full, current: { ...full.current, percentOfReading: 12 } }, "Current accuracy must be at most 10 % of reading."],
-    [{ ...full, current: { ...full.current, offsetA: Number.POSITIVE_INFINITY } }, "Current offset must be a number (A)."],
+    [
+      { ...full, current: { ...full.current, percentOfReading: 12 } },
+      "Current accuracy must be at most 10 % of reading.",
+    ],
+    [
+      { ...full, current: { ...full.current, offsetA: Number.POSITIVE_INFINITY } },
+      "Current offset must be a number (A).",
+    ],
     [{ ...full, samplingIntervalS: 0 }, "Sampling interval must be above 0 s."],
     [{ ...full, resistanceMethod: "guess" }, "Choose how resistance is measured."],
   ])("refuses bad input with a clear message (%#)", (input, message) => {
@@ -36,7 +52,9 @@ describe("instrument accuracy schema (zod, browser-safe)", () => {
 
   it("a stated accuracy may leave anything out", () => {
     expect(statedAccuracySchema.parse({})).toEqual({});
-    expect(statedAccuracySchema.parse({ current: { percentOfReading: 1 }, voltage: null }).current).toEqual({ percentOfReading: 1 });
+    expect(statedAccuracySchema.parse({ current: { percentOfReading: 1 }, voltage: null }).current).toEqual({
+      percentOfReading: 1,
+    });
   });
 });
 
@@ -79,8 +97,12 @@ describe("resolveAccuracy: stated values win, missing ones are assumed and liste
     expect(r.accuracy).toEqual(ACCURACY_CLASSES[DEFAULT_ACCURACY_CLASS].accuracy);
     expect(r.assumptions).toHaveLength(11);
     expect(r.assumptions.every((a) => a.source === ACCURACY_CLASSES[DEFAULT_ACCURACY_CLASS].source)).toBe(true);
-    expect(r.assumptions.find((a) => a.field === "current.offsetA")?.words).toBe("Current offset 0.05 A assumed for a typical hobby charger or analyser read-out.");
-    expect(r.summary[1]).toBe("Current ±(2 % of reading + 0.05 A), resolution 0.01 A (assumed: typical hobby charger or analyser read-out)");
+    expect(r.assumptions.find((a) => a.field === "current.offsetA")?.words).toBe(
+      "Current offset 0.05 A assumed for a typical hobby charger or analyser read-out.",
+    );
+    expect(r.summary[1]).toBe(
+      "Current ±(2 % of reading + 0.05 A), resolution 0.01 A (assumed: typical hobby charger or analyser read-out)",
+    );
   });
 
   it("everything stated: no assumption", () => {

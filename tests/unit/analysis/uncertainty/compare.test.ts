@@ -27,12 +27,21 @@ describe("compareMedianIntervals", () => {
   });
 
   it("overlap, even by touching → not distinguishable", () => {
-    expect(compareMedianIntervals(overlapping, low)).toMatchObject({ verdict: "not distinguishable", reason: "intervals-overlap" });
-    expect(compareMedianIntervals(touching, low)).toMatchObject({ verdict: "not distinguishable", reason: "intervals-overlap" });
+    expect(compareMedianIntervals(overlapping, low)).toMatchObject({
+      verdict: "not distinguishable",
+      reason: "intervals-overlap",
+    });
+    expect(compareMedianIntervals(touching, low)).toMatchObject({
+      verdict: "not distinguishable",
+      reason: "intervals-overlap",
+    });
   });
 
   it("too few results on either side → not distinguishable, even when the ranges lie far apart", () => {
-    expect(compareMedianIntervals(few, low)).toMatchObject({ verdict: "not distinguishable", reason: "too-few-results" });
+    expect(compareMedianIntervals(few, low)).toMatchObject({
+      verdict: "not distinguishable",
+      reason: "too-few-results",
+    });
     expect(compareMedianIntervals(low, few).words).toMatch(/6 are needed/);
     expect(compareMedianIntervals(null, low)).toMatchObject({ verdict: "not distinguishable", reason: "no-results" });
   });
@@ -45,7 +54,12 @@ describe("distinguishedBest: 'best' only for a pack that beats every other disti
   });
 
   it("no best when the leader overlaps any other pack", () => {
-    expect(distinguishedBest([low, high, interval([4860, 4870, 4880, 4890, 4900, 4910, 4920, 4930, 4940, 4950])], "higher-is-better")).toBeNull();
+    expect(
+      distinguishedBest(
+        [low, high, interval([4860, 4870, 4880, 4890, 4900, 4910, 4920, 4930, 4940, 4950])],
+        "higher-is-better",
+      ),
+    ).toBeNull();
     expect(distinguishedBest([overlapping, high], "higher-is-better")).toBeNull();
   });
 

@@ -1,7 +1,20 @@
 import { describe, expect, it } from "vitest";
-import { COVERAGE_FACTOR, combine, rectangularU, relativeU95, resolutionU, scaleUncertainty, type Contribution } from "@/lib/analysis/uncertainty/gum";
+import {
+  COVERAGE_FACTOR,
+  combine,
+  rectangularU,
+  relativeU95,
+  resolutionU,
+  scaleUncertainty,
+  type Contribution,
+} from "@/lib/analysis/uncertainty/gum";
 
-const c = (source: Contribution["source"], u: number): Contribution => ({ source, label: source, kind: "systematic", u });
+const c = (source: Contribution["source"], u: number): Contribution => ({
+  source,
+  label: source,
+  kind: "systematic",
+  u,
+});
 
 describe("GUM building blocks (JCGM 100:2008)", () => {
   it("rectangular ± a: u = a/√3 (4.3.7), the standard deviation of a uniform distribution of half-width a", () => {
@@ -17,7 +30,10 @@ describe("GUM building blocks (JCGM 100:2008)", () => {
     const r = combine(10, [c("current-gain", 0.3), c("current-offset", -0.4), c("sampling-edges", 0)]);
     expect(COVERAGE_FACTOR).toBe(2);
     expect(r).toMatchObject({ value: 10, u: 0.5, U95: 1, k: 2 });
-    expect(r?.contributions.map((x) => [x.source, x.u])).toEqual([["current-offset", 0.4], ["current-gain", 0.3]]);
+    expect(r?.contributions.map((x) => [x.source, x.u])).toEqual([
+      ["current-offset", 0.4],
+      ["current-gain", 0.3],
+    ]);
     expect(relativeU95(r ?? { value: 0, u: 0, U95: 0, k: 2, contributions: [] })).toBeCloseTo(0.1, 15);
   });
 

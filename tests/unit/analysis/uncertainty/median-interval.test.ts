@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { binomialHalfCdf, medianInterval, minimumCountFor, orderStatisticCoverage } from "@/lib/analysis/uncertainty/median-interval";
+import {
+  binomialHalfCdf,
+  medianInterval,
+  minimumCountFor,
+  orderStatisticCoverage,
+} from "@/lib/analysis/uncertainty/median-interval";
 import { seededRng } from "@/lib/analysis/uncertainty/monte-carlo";
 
 // The order-statistic interval for a median (W. J. Conover, Practical Nonparametric Statistics, 3rd ed. 1999,
@@ -21,7 +26,8 @@ function exactBestRank(n: number): { r: number; confidence: number } | null {
   let best: { r: number; confidence: number } | null = null;
   for (let r = 1; r <= Math.floor((n + 1) / 2); r++) {
     const { num, den } = exactTail(r - 1, n);
-    if (20n * (den - 2n * num) >= 19n * den) best = { r, confidence: 1 - 2 * (Number((num * 10n ** 18n) / den) / 1e18) };
+    if (20n * (den - 2n * num) >= 19n * den)
+      best = { r, confidence: 1 - 2 * (Number((num * 10n ** 18n) / den) / 1e18) };
   }
   return best;
 }
@@ -78,9 +84,17 @@ describe("95 % interval for a median against the exact binomial order-statistic 
   // The same ranks and confidences from SciPy 1.17 (scipy.stats.binom.cdf), computed outside the project; they
   // agree with the tables printed in textbooks (from memory: n = 10 → x₍₂₎–x₍₉₎, 97.9 %; n = 20 → x₍₆₎–x₍₁₅₎, 95.9 %).
   it.each([
-    [6, 1, 0.96875], [9, 2, 0.9609375], [10, 2, 0.978515625], [12, 3, 0.96142578125], [17, 5, 0.950958251953125],
-    [20, 6, 0.9586105346679688], [25, 8, 0.9567147493362427], [30, 10, 0.9572260547429323], [37, 13, 0.952968972560484],
-    [44, 16, 0.9512332340955254], [50, 18, 0.9671608624357315],
+    [6, 1, 0.96875],
+    [9, 2, 0.9609375],
+    [10, 2, 0.978515625],
+    [12, 3, 0.96142578125],
+    [17, 5, 0.950958251953125],
+    [20, 6, 0.9586105346679688],
+    [25, 8, 0.9567147493362427],
+    [30, 10, 0.9572260547429323],
+    [37, 13, 0.952968972560484],
+    [44, 16, 0.9512332340955254],
+    [50, 18, 0.9671608624357315],
   ])("n = %i: rank %i, confidence %f (SciPy reference)", (n, r, confidence) => {
     const got = medianInterval(shuffled(n, 99));
     expect(got?.lowerRank).toBe(r);
@@ -94,7 +108,10 @@ describe("fewer than 6 results: no 95 % interval exists; we return the range and
   });
 
   it.each([
-    [2, 0.5], [3, 0.75], [4, 0.875], [5, 0.9375],
+    [2, 0.5],
+    [3, 0.75],
+    [4, 0.875],
+    [5, 0.9375],
   ])("n = %i: range with confidence %f, meets false, words say why", (n, confidence) => {
     const got = medianInterval(shuffled(n, 5));
     expect(got?.lower).toBe(100);
@@ -115,7 +132,9 @@ describe("the interval in use", () => {
   it("ignores non-finite values, sorts, and gives the median and plain words", () => {
     const got = medianInterval([4810, Number.NaN, 4790, 4850, 4830, 4800, 4820, 4840, 4860, 4780, 4870]);
     expect(got).toMatchObject({ n: 10, median: 4825, lower: 4790, upper: 4860, lowerRank: 2, upperRank: 9 });
-    expect(got?.words).toBe("95 % interval: the 2nd lowest to the 2nd highest of 10 results (exact confidence 97.9 %).");
+    expect(got?.words).toBe(
+      "95 % interval: the 2nd lowest to the 2nd highest of 10 results (exact confidence 97.9 %).",
+    );
   });
 
   it("is distribution-free: on a skewed (exponential) population it covers the true median ln 2 at least as often as it says (simulation, n = 20)", () => {

@@ -1,6 +1,12 @@
 import * as ss from "simple-statistics";
 import { describe, expect, it } from "vitest";
-import { drawNormal, drawRectangular, monteCarlo, seededRng, shareWithin } from "@/lib/analysis/uncertainty/monte-carlo";
+import {
+  drawNormal,
+  drawRectangular,
+  monteCarlo,
+  seededRng,
+  shareWithin,
+} from "@/lib/analysis/uncertainty/monte-carlo";
 
 describe("seeded generator and draws used by the Monte Carlo checks", () => {
   it("is repeatable for a seed and differs between seeds", () => {

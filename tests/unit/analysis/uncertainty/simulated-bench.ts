@@ -16,9 +16,12 @@ export function drawReader(rng: Rng, percentOfReading: number, offset: number, r
   return (x) => x * (1 + g) + o + drawRectangular(rng, resolution / 2);
 }
 
-export const voltageReader = (rng: Rng, a: VoltageAccuracy) => drawReader(rng, a.percentOfReading, a.offsetV, a.resolutionV);
-export const currentReader = (rng: Rng, a: CurrentAccuracy) => drawReader(rng, a.percentOfReading, a.offsetA, a.resolutionA);
-export const temperatureReader = (rng: Rng, a: TemperatureAccuracy) => drawReader(rng, a.percentOfReading, a.offsetC, a.resolutionC);
+export const voltageReader = (rng: Rng, a: VoltageAccuracy) =>
+  drawReader(rng, a.percentOfReading, a.offsetV, a.resolutionV);
+export const currentReader = (rng: Rng, a: CurrentAccuracy) =>
+  drawReader(rng, a.percentOfReading, a.offsetA, a.resolutionA);
+export const temperatureReader = (rng: Rng, a: TemperatureAccuracy) =>
+  drawReader(rng, a.percentOfReading, a.offsetC, a.resolutionC);
 
 export type TrueDischarge = {
   currentA: number;
@@ -31,7 +34,13 @@ export type TrueDischarge = {
  * Log a constant-current discharge sampled every Δt with a random phase, and integrate it like the analysis:
  * samples inside [0, T) are under load; the rest samples on either side read zero current.
  */
-export function simulateDischarge(rng: Rng, d: TrueDischarge, dtS: number, readV: Reader, readI: Reader): { chargeAs: number; energyWs: number } {
+export function simulateDischarge(
+  rng: Rng,
+  d: TrueDischarge,
+  dtS: number,
+  readV: Reader,
+  readI: Reader,
+): { chargeAs: number; energyWs: number } {
   const phase = rng() * dtS;
   let t = phase - dtS; // the last rest sample before the load
   let lastI = 0;

@@ -3,9 +3,22 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { scoreParticipants } from "@/lib/analysis/agreement/scores";
 import {
-  ACCURACY_CLASSES, capacityUncertainty, compareMedianIntervals, currentChannel, dcResistanceUncertainty, energyUncertainty,
-  formatPlusMinus, labelRatioUncertainty, meanVoltageUncertainty, medianInterval, resistanceAt25CUncertainty, resolveAccuracy,
-  sagLimitedCUncertainty, temperatureChannel, voltageChannel, type FigureUncertainty,
+  ACCURACY_CLASSES,
+  capacityUncertainty,
+  compareMedianIntervals,
+  currentChannel,
+  dcResistanceUncertainty,
+  energyUncertainty,
+  formatPlusMinus,
+  labelRatioUncertainty,
+  meanVoltageUncertainty,
+  medianInterval,
+  resistanceAt25CUncertainty,
+  resolveAccuracy,
+  sagLimitedCUncertainty,
+  temperatureChannel,
+  voltageChannel,
+  type FigureUncertainty,
 } from "@/lib/analysis/uncertainty";
 
 // The method page's worked example (content/methods/uncertainty.md) must be what the functions produce: every
@@ -35,18 +48,48 @@ describe("content/methods/uncertainty.md worked example", () => {
     const d = { meanCurrentA: 50, durationS, samples, samplingIntervalS: 1 };
     const r = dcResistanceUncertainty({ resistanceMohm: 19.3, currentStepA: 50, samplingIntervalS: 1 }, v, i);
     if (!r) throw new Error("no resistance");
-    const sag = sagLimitedCUncertainty({ resistance: r, cells: 4, ratedMah: 5000, nominalVPerCell: 3.7, floorVPerCell: 3.3 });
+    const sag = sagLimitedCUncertainty({
+      resistance: r,
+      cells: 4,
+      ratedMah: 5000,
+      nominalVPerCell: 3.7,
+      floorVPerCell: 3.3,
+    });
     if (!sag) throw new Error("no sag-limited C");
     const quoted = [
       pm(capacityUncertainty(4712, d, i), "mAh"),
       pm(energyUncertainty(4.712 * 14.62, 14.62, d, v, i), "Wh"),
-      pm(meanVoltageUncertainty(14.62, samples, v, { samplingIntervalS: 1, durationS, startVoltageV: 15.6, endVoltageV: 14 }), "V"),
+      pm(
+        meanVoltageUncertainty(14.62, samples, v, {
+          samplingIntervalS: 1,
+          durationS,
+          startVoltageV: 15.6,
+          endVoltageV: 14,
+        }),
+        "V",
+      ),
       pm(r, "mΩ"),
-      pm(resistanceAt25CUncertainty({ resistance: r, temperatureC: 22, temperature: temperatureChannel(a.temperature), activationEnergyKJPerMol: 17.1 }), "mΩ"),
+      pm(
+        resistanceAt25CUncertainty({
+          resistance: r,
+          temperatureC: 22,
+          temperature: temperatureChannel(a.temperature),
+          activationEnergyKJPerMol: 17.1,
+        }),
+        "mΩ",
+      ),
       pm(sag, "C"),
       pm(labelRatioUncertainty(sag, 25)),
     ];
-    expect(quoted).toEqual(["4710 ± 110 mAh", "68.9 ± 1.7 Wh", "14.62 ± 0.09 V", "19.3 ± 0.7 mΩ", "18.0 ± 1.3 mΩ", "16.6 ± 0.6 C", "0.663 ± 0.025"]);
+    expect(quoted).toEqual([
+      "4710 ± 110 mAh",
+      "68.9 ± 1.7 Wh",
+      "14.62 ± 0.09 V",
+      "19.3 ± 0.7 mΩ",
+      "18.0 ± 1.3 mΩ",
+      "16.6 ± 0.6 C",
+      "0.663 ± 0.025",
+    ]);
     for (const text of quoted) expect(doc).toContain(text);
   });
 
@@ -55,7 +98,14 @@ describe("content/methods/uncertainty.md worked example", () => {
     const durationS = (4712 * 3.6) / 50;
     const d = { meanCurrentA: 50, durationS, samples: Math.round(durationS / 0.5), samplingIntervalS: 0.5 };
     const cap = pm(capacityUncertainty(4712, d, currentChannel(b.current)), "mAh");
-    const r = pm(dcResistanceUncertainty({ resistanceMohm: 19.3, currentStepA: 50, samplingIntervalS: 0.5 }, voltageChannel(b.voltage), currentChannel(b.current)), "mΩ");
+    const r = pm(
+      dcResistanceUncertainty(
+        { resistanceMohm: 19.3, currentStepA: 50, samplingIntervalS: 0.5 },
+        voltageChannel(b.voltage),
+        currentChannel(b.current),
+      ),
+      "mΩ",
+    );
     expect([cap, r]).toEqual(["4712 ± 12 mAh", "19.30 ± 0.28 mΩ"]);
     for (const text of [cap, r]) expect(doc).toContain(text);
   });
@@ -69,7 +119,11 @@ describe("content/methods/uncertainty.md worked example", () => {
     expect([c?.median, c?.lower, c?.upper]).toEqual([4735.5, 4702, 4775]);
     expect(compareMedianIntervals(b, a).verdict).toBe("higher");
     expect(compareMedianIntervals(c, a).verdict).toBe("not distinguishable");
-    for (const text of ["median 4717 mAh, interval 4688–4760 mAh", "median 4805 mAh, interval 4770–4840 mAh", "median 4736 mAh, interval 4702–4775 mAh"]) {
+    for (const text of [
+      "median 4717 mAh, interval 4688–4760 mAh",
+      "median 4805 mAh, interval 4770–4840 mAh",
+      "median 4736 mAh, interval 4702–4775 mAh",
+    ]) {
       expect(doc).toContain(text);
     }
     expect(medianInterval([1, 2, 3, 4, 5])?.words).toMatch(/93\.8 %/);
@@ -84,6 +138,8 @@ describe("content/methods/uncertainty.md worked example", () => {
     expect(zs[5]).toBe(6);
     expect(Math.min(...zs.slice(0, 5))).toBe(-1);
     expect(Math.max(...zs.slice(0, 5))).toBe(0.4);
-    expect(doc).toContain("The consensus is 4722 mAh with a spread of 31 mAh; the last bench scores z = 6.0 and is flagged, the others lie between −1.0 and +0.4.");
+    expect(doc).toContain(
+      "The consensus is 4722 mAh with a spread of 31 mAh; the last bench scores z = 6.0 and is flagged, the others lie between −1.0 and +0.4.",
+    );
   });
 });

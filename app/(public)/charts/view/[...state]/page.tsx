@@ -12,19 +12,16 @@ import {
   pngPixels,
 } from "@/lib/open-data/chart-links";
 import { CHART_KIND_LABELS, decodeChartStateSegments, encodeChartState } from "@/lib/open-data/chart-state";
-import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_SHORT, DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { ATTRIBUTION, ATTRIBUTION_TEXT, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { EmbedSnippet } from "../../_components/embed-snippet-client";
 import { SaveChart } from "../../_components/save-chart-client";
 
-// The URL carries the whole chart; pages are generated on first request and kept (ISR) so CDNs may cache
-// them (s-maxage). Their data comes from tagged cached reads, so a decision refreshes them at once.
-// The state is split into path segments of at most STATE_SEGMENT characters (statePath), so each stored
-// page's file and folder names stay under the file system's limit whatever the title and note.
-// Known limit: one stored page per distinct URL (anyone can make up states); a CDN in front bounds the load.
-export const revalidate = 3600;
-export async function generateStaticParams(): Promise<{ state: string[] }[]> {
-  return [];
-}
+// The URL carries the whole chart, and anyone can make up a new one, so the page is drawn per request and
+// nothing is stored per link (kept pages cost ≈ 435 KB of cache files each, without bound). Its data comes
+// from the tagged cached reads of one like-for-like group (bounded keys), and next.config.mjs sends
+// Cache-Control with s-maxage so a CDN keeps popular charts; proxy.ts limits how many charts nobody has asked
+// for lately one client can have drawn.
+export const dynamic = "force-dynamic";
 
 type Props = { params: Promise<{ state: string[] }> };
 
@@ -66,7 +63,7 @@ export default async function ChartPage({ params }: Props) {
       <p className="muted text-sm">
         Data: {ATTRIBUTION}, licensed{" "}
         <a href={DATA_LICENCE_URL} rel="license">
-          {DATA_LICENCE_SHORT}
+          {DATA_LICENCE_LABEL}
         </a>
         . Only results in one like-for-like group are compared. {data.leftOut.join(" ")}
       </p>

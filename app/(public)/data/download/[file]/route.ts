@@ -1,44 +1,41 @@
-// GET /data/download/{makers|packs|results}.{csv|json} — complete or filtered downloads (pack filters; results also by pack and group).
-import { z } from "zod";
+// GET /data/download/{makers|packs|results}.{csv|json} and README.txt — complete or filtered downloads (the packs
+// table's filters; results also by pack and group), with ETags (304) and the licence beside them.
+import { downloadPath, downloadQuery } from "@/lib/api-contract/queries";
 import { DATASETS } from "@/lib/open-data/datapackage";
-import { buildDownload } from "@/server/open-data/downloads";
-import { apiGet, corsHeaders, parseQuery } from "@/server/api";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
-import { resultFilters } from "@/lib/validations/open-data";
 import { parseUnitsParam } from "@/lib/units";
-
-const unitsQuery = z.object({
-  units: z
-    .string()
-    .regex(
-      /^(C|F|g|oz|cell|pack)(,(C|F|g|oz|cell|pack))*$/,
-      "units takes C or F, g or oz, cell or pack, comma-separated.",
-    )
-    .optional(),
-});
-
-const fileParam = z.object({
-  file: z
-    .string()
-    .regex(new RegExp(`^(${DATASETS.join("|")})\\.(csv|json)$`), "Ask for makers, packs or results as .csv or .json."),
-});
+import { apiGet, apiOptions, checkContract, parsePath, parseQuery, sendCached } from "@/server/api";
+import { env } from "@/server/env";
+import { buildDownload, readmeFile } from "@/server/open-data/downloads";
 
 export const GET = apiGet<{ file: string }>(async (req, params) => {
-  const { file } = fileParam.parse(params);
+  const { file } = parsePath(
+    params,
+    downloadPath,
+    "No such file: makers, packs or results as .csv or .json, or README.txt.",
+  );
+  const { units, ...filters } = parseQuery(req, downloadQuery);
   const [name, ext] = file.split(".");
-  const dataset = z.enum(DATASETS).parse(name);
-  const format = z.enum(["csv", "json"]).parse(ext);
-  const filters = parseQuery(req, resultFilters);
-  // The reader's units for CSV (lib/units.ts): "units=F,oz,pack"; anything else is refused with 422.
-  const units = parseUnitsParam(parseQuery(req, unitsQuery).units);
-  const out = await buildDownload(dataset, format, filters, new Date(), units);
-  return new Response(out.body, {
+  const dataset = DATASETS.find((d) => d === name);
+  const out = dataset
+    ? await buildDownload(
+        dataset,
+        ext === "json" ? "json" : "csv",
+        filters,
+        env().APP_URL,
+        new Date(),
+        parseUnitsParam(units),
+      )
+    : readmeFile(env().APP_URL);
+  if (out.checked) checkContract(out.checked.schema, out.checked.value);
+  return sendCached(req, {
+    body: out.body,
+    contentType: out.contentType,
     headers: {
-      ...corsHeaders,
-      "Content-Type": out.contentType,
       "Content-Disposition": `attachment; filename="${out.fileName}"`,
       "Cache-Control": "public, max-age=300",
-      Link: `<${DATA_LICENCE_URL}>; rel="license", </data/datapackage.json>; rel="describedby"`,
+      Link: `<${DATA_LICENCE_URL}>; rel="license", </data/datapackage.json>; rel="describedby", </data/download/README.txt>; rel="help"`,
     },
   });
 });
+export const OPTIONS = apiOptions;

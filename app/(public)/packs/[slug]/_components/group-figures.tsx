@@ -59,7 +59,7 @@ export function GroupFiguresTable({
                   {g.group.label}
                   <small>
                     {g.n} result{g.n === 1 ? "" : "s"}
-                    {g.disputed ? `, ${g.disputed} disputed` : ""}
+                    {g.openCases ? `, ${g.openCases} being checked by moderators` : ""}
                   </small>
                 </th>
                 <td>

@@ -23,8 +23,8 @@ export function ResultsList({
             </a>
             <span className="muted text-xs">
               published {fmtDate(r.publishedAt)}
-              {r.status === "disputed" ? (
-                <span className="ml-2 rounded bg-warn-soft px-1.5 py-0.5 font-medium text-warn">disputed</span>
+              {r.openCase ? (
+                <span className="ml-2 rounded bg-warn-soft px-1.5 py-0.5 font-medium text-warn">being checked</span>
               ) : null}
             </span>
           </div>

@@ -144,7 +144,7 @@ export function ContributorHistory({ history }: { history: Detail["contributorHi
       <p className="text-sm">
         {fmt(byStatus.approved ?? 0)} approved · {fmt(byStatus.rejected ?? 0)} rejected ·{" "}
         {fmt(byStatus.changes_requested ?? 0)} sent back · {fmt(byStatus.pending ?? 0)} pending ·{" "}
-        {fmt((byStatus.disputed ?? 0) + (byStatus.withdrawn ?? 0))} disputed or withdrawn
+        {fmt(byStatus.withdrawn ?? 0)} withdrawn
       </p>
       {history.recent.length ? (
         <ul className="space-y-1 text-sm">

@@ -7,7 +7,8 @@ import { resolveFlag } from "../actions/resolve-flag";
 import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";
 
 /**
- * Keep the result, correct it (note required), or withdraw it. The confirmation goes to the page's notice
+ * Dismiss the flag (the result stays), dismiss it with a correction noted (note required), or take the result
+ * out of publication (reason required, shown on its page). The confirmation goes to the page's notice
  * (ResolvedFlagNotice), because this form leaves with its row once the queue refreshes.
  */
 export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTitle: string }) {
@@ -24,7 +25,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
       <input type="hidden" name="flagId" value={flagId} />
       <Field
         id={noteId}
-        label="Note (required when correcting)"
+        label="Note (required when noting a correction or taking the result out)"
         error={state && !state.ok ? state.fieldErrors?.note?.[0] : undefined}
       >
         <textarea id={noteId} name="note" rows={2} maxLength={2000} className={inputClass} />
@@ -32,7 +33,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
       {state && !state.ok && !state.fieldErrors ? <Alert tone="error">{state.error}</Alert> : null}
       <div className="flex flex-wrap gap-2">
         <button type="submit" name="resolution" value="kept" className={buttonClass("primary")} disabled={pending}>
-          Keep
+          Dismiss, result stays
         </button>
         <button
           type="submit"
@@ -41,10 +42,10 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
           className={buttonClass("secondary")}
           disabled={pending}
         >
-          Corrected
+          Dismiss, correction noted
         </button>
         <button type="submit" name="resolution" value="withdrawn" className={buttonClass("danger")} disabled={pending}>
-          Withdraw result
+          Take out of publication
         </button>
       </div>
     </form>

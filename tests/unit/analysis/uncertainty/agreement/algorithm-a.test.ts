@@ -1,7 +1,12 @@
 import * as ss from "simple-statistics";
 import { describe, expect, it } from "vitest";
 import {
-  ALGORITHM_A_MAD_FACTOR, ALGORITHM_A_SD_FACTOR, ALGORITHM_A_WINSOR_FACTOR, CONSENSUS_U_FACTOR, algorithmA, algorithmAStep,
+  ALGORITHM_A_MAD_FACTOR,
+  ALGORITHM_A_SD_FACTOR,
+  ALGORITHM_A_WINSOR_FACTOR,
+  CONSENSUS_U_FACTOR,
+  algorithmA,
+  algorithmAStep,
 } from "@/lib/analysis/agreement/algorithm-a";
 import { drawNormal, seededRng } from "@/lib/analysis/uncertainty/monte-carlo";
 

@@ -10,7 +10,13 @@ const res = (packId: string, z: number | null): BenchComparison => ({ figure: "d
 
 describe("benchAgreementSummary", () => {
   it("counts, median |z| and the share with |z| > 3", () => {
-    const s = benchAgreementSummary([cap("p1", 0.5), cap("p2", -1.5), res("p1", 3.5), res("p2", null), cap("p3", -0.2)]);
+    const s = benchAgreementSummary([
+      cap("p1", 0.5),
+      cap("p2", -1.5),
+      res("p1", 3.5),
+      res("p2", null),
+      cap("p3", -0.2),
+    ]);
     expect(s.resultsCompared).toBe(4);
     expect(s.packsCompared).toBe(3);
     expect(s.medianAbsZ).toBeCloseTo((0.5 + 1.5) / 2, 15); // |z| sorted 0.2, 0.5, 1.5, 3.5
@@ -33,7 +39,9 @@ describe("benchAgreementSummary", () => {
   });
 
   it("low readings, and scatter both ways, get their own suggestions", () => {
-    expect(benchAgreementSummary([cap("p1", -1.4), cap("p2", -2), cap("p3", -1.1)]).suggestions[0]?.tendency).toBe("runs-low");
+    expect(benchAgreementSummary([cap("p1", -1.4), cap("p2", -2), cap("p3", -1.1)]).suggestions[0]?.tendency).toBe(
+      "runs-low",
+    );
     const scatter = benchAgreementSummary([res("p1", 3), res("p2", -3), res("p3", 2.5), res("p4", -2.8)]);
     expect(scatter.suggestions[0]?.tendency).toBe("scatters");
     expect(scatter.suggestions[0]?.words).toMatch(/^DC resistance: readings scatter both ways/);
@@ -44,8 +52,14 @@ describe("benchAgreementSummary", () => {
   });
 
   it("a bench that agrees says so; a bench never compared says that", () => {
-    expect(benchAgreementSummary([cap("p1", 0.3), cap("p2", -0.8), cap("p3", 1.1)]).words).toMatch(/^Agrees with other benches: 3 values on 3 packs/);
-    expect(benchAgreementSummary([cap("p1", null)])).toMatchObject({ resultsCompared: 0, medianAbsZ: null, shareAbsZOver3: null });
+    expect(benchAgreementSummary([cap("p1", 0.3), cap("p2", -0.8), cap("p3", 1.1)]).words).toMatch(
+      /^Agrees with other benches: 3 values on 3 packs/,
+    );
+    expect(benchAgreementSummary([cap("p1", null)])).toMatchObject({
+      resultsCompared: 0,
+      medianAbsZ: null,
+      shareAbsZOver3: null,
+    });
   });
 });
 
@@ -58,13 +72,18 @@ describe("end to end: one of six benches reads capacity 4 % high (issue 16's dem
     for (const packId of packs) {
       const trueMah = 4700 + 60 * packs.indexOf(packId);
       // Benches differ by about 1 % (σ 48 mAh) around the truth; "high" reads 4 % above it.
-      const participants = benches.map((benchId) => ({ benchId, value: trueMah * (benchId === "high" ? 1.04 : 1) + drawNormal(rng, 48) }));
-      for (const s of scoreParticipants(participants).scores) comparisons[s.benchId]?.push({ figure: "capacityMah", packId, z: s.z });
+      const participants = benches.map((benchId) => ({
+        benchId,
+        value: trueMah * (benchId === "high" ? 1.04 : 1) + drawNormal(rng, 48),
+      }));
+      for (const s of scoreParticipants(participants).scores)
+        comparisons[s.benchId]?.push({ figure: "capacityMah", packId, z: s.z });
     }
     const high = benchAgreementSummary(comparisons.high ?? []);
     expect(high.figures[0]?.tendency).toBe("runs-high");
     expect(high.medianAbsZ).toBeGreaterThan(2);
     expect(high.suggestions[0]?.words).toMatch(/current shunt/);
-    for (const b of ["a", "b", "c", "d", "e"]) expect(benchAgreementSummary(comparisons[b] ?? []).suggestions).toEqual([]);
+    for (const b of ["a", "b", "c", "d", "e"])
+      expect(benchAgreementSummary(comparisons[b] ?? []).suggestions).toEqual([]);
   });
 });

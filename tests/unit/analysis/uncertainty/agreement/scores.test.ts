@@ -1,6 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { algorithmA } from "@/lib/analysis/agreement/algorithm-a";
-import { agreementFlag, classifyEn, classifyZ, enNumber, scoreParticipants, zScore } from "@/lib/analysis/agreement/scores";
+import {
+  agreementFlag,
+  classifyEn,
+  classifyZ,
+  enNumber,
+  scoreParticipants,
+  zScore,
+} from "@/lib/analysis/agreement/scores";
 
 // ISO 13528:2015 clause 9: z = (x − x*)/σ_pt; Eₙ = (x − X)/√(U_x² + U_X²). Reading: |z| ≤ 2 satisfactory,
 // 2 < |z| < 3 questionable, |z| ≥ 3 unsatisfactory; |Eₙ| ≤ 1 satisfactory (also ISO/IEC 17043).
@@ -20,7 +27,13 @@ describe("z and Eₙ against their definitions", () => {
   });
 
   it("classes at their boundaries", () => {
-    expect([2, 2.01, 2.99, 3, -3.5].map(classifyZ)).toEqual(["satisfactory", "questionable", "questionable", "unsatisfactory", "unsatisfactory"]);
+    expect([2, 2.01, 2.99, 3, -3.5].map(classifyZ)).toEqual([
+      "satisfactory",
+      "questionable",
+      "questionable",
+      "unsatisfactory",
+      "unsatisfactory",
+    ]);
     expect([1, -1, 1.01].map(classifyEn)).toEqual(["satisfactory", "satisfactory", "unsatisfactory"]);
   });
 });
@@ -59,11 +72,18 @@ describe("scoreParticipants", () => {
   });
 
   it("two benches: z is always ±0.62 with σ_pt = s* (so it is not computed); Eₙ still is", () => {
-    for (const [a, b] of [[4800, 4810], [4800, 5800], [19.3, 25.1]] as const) {
+    for (const [a, b] of [
+      [4800, 4810],
+      [4800, 5800],
+      [19.3, 25.1],
+    ] as const) {
       const c = algorithmA([a, b]);
       expect(zScore(b, c?.x ?? 0, c?.s ?? 0)).toBeCloseTo(0.5 / (1.134 / Math.SQRT2), 12); // (d/2)/(1.134·d/√2)
     }
-    const r = scoreParticipants([{ benchId: "a", value: 4800, U95: 60 }, { benchId: "b", value: 5000, U95: 60 }]);
+    const r = scoreParticipants([
+      { benchId: "a", value: 4800, U95: 60 },
+      { benchId: "b", value: 5000, U95: 60 },
+    ]);
     expect(r.zMissing).toMatch(/at least three/);
     expect(r.scores.every((s) => s.z === null)).toBe(true);
     // Each against the other: Eₙ = (x − x_other)/√(U_x² + U_other²) = ±200/√7200.
@@ -71,7 +91,12 @@ describe("scoreParticipants", () => {
     expect(r.scores[0]?.en).toBeCloseTo(-200 / Math.sqrt(7200), 12);
     expect(r.scores[1]?.enClass).toBe("unsatisfactory");
     // Without the other's uncertainty there is nothing to compare against.
-    expect(scoreParticipants([{ benchId: "a", value: 4800, U95: 60 }, { benchId: "b", value: 5000 }]).scores[0]?.en).toBeNull();
+    expect(
+      scoreParticipants([
+        { benchId: "a", value: 4800, U95: 60 },
+        { benchId: "b", value: 5000 },
+      ]).scores[0]?.en,
+    ).toBeNull();
   });
 
   it("one bench or none: no consensus", () => {

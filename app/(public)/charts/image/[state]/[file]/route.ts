@@ -3,7 +3,8 @@
 import { z } from "zod";
 import { etagOf, ifNoneMatchHits } from "@/server/api";
 import { AppError } from "@/lib/errors";
-import { clientIp, enforceRateLimit, limits } from "@/server/rate-limit";
+import { clientAddress } from "@/server/client-address";
+import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 import { loadChartData } from "@/server/open-data/load-chart-data";
 import { svgToPng } from "@/server/open-data/chart-png";
@@ -15,7 +16,7 @@ import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
 const params = z.object({ state: z.string().min(1).max(4000), file: z.enum(["chart.svg", "chart.png"]) });
 
 export const GET = withPermission<{ params: Promise<{ state: string; file: string }> }>("public", async (req, ctx) => {
-  await enforceRateLimit(`api:${clientIp(req.headers)}`, limits.apiPerIp);
+  await enforceRateLimit(`api:${clientAddress(req.headers)}`, limits.apiPerIp);
   const p = params.safeParse(await ctx.params);
   const state = p.success ? decodeChartState(p.data.state) : null;
   if (!p.success || !state) throw new AppError("not_found", "No such chart.");
