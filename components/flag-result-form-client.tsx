@@ -8,7 +8,7 @@ import { useState } from "react";
 import { z } from "zod";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
 import { flagReasons } from "@/lib/enums";
-import { flagReasonLabels } from "@/lib/validations/review";
+import { flagReasonLabels } from "@/lib/labels";
 
 type State =
   | { kind: "closed" }

@@ -1,6 +1,7 @@
 import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
 import { Qty } from "@/components/quantity";
 import { fmt } from "@/lib/format";
+import { loadModeLabels } from "@/lib/labels";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 export type MethodCardData = Pick<
@@ -19,18 +20,12 @@ export type MethodCardData = Pick<
   | "testedOn"
 >;
 
-const loadModes: Record<string, string> = {
-  "constant-current": "constant current",
-  "constant-power": "constant power",
-  "constant-resistance": "constant resistance",
-};
-
 /** The method attached to every number: how the result was taken. */
 export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?: boolean }) {
   const rows: [string, React.ReactNode][] = [
     ["Ambient", <Qty key="a" q="temp" v={m.ambientTemperatureC} digits={1} />],
     ["Pack at start", <Qty key="p" q="temp" v={m.packStartTemperatureC} digits={1} />],
-    ["Load", `${loadModes[m.loadMode] ?? m.loadMode}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
+    ["Load", `${loadModeLabels[m.loadMode].toLowerCase()}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
     ["Cut-off", fmt(m.cutoffVPerCell, 2, "V per cell")],
     ["Stop temperature", <Qty key="s" q="temp" v={m.stopTemperatureC} digits={0} />],
     ["Resistance method", RESISTANCE_METHODS[m.resistanceMethod as ResistanceMethod] ?? m.resistanceMethod],

@@ -6,8 +6,12 @@ export type UserRole = (typeof userRoles)[number];
 
 // A reader's flag never changes a result's status: it opens a case (an open row in reader_flags) that
 // moderators resolve, and the result stays approved and counted until they decide.
-export const reviewStatuses = ["pending", "changes_requested", "approved", "rejected", "withdrawn"] as const;
+export const reviewStatuses = ["pending", "awaiting_answer", "approved", "rejected", "withdrawn"] as const;
 export type ReviewStatus = (typeof reviewStatuses)[number];
+
+/** Why a moderator did not accept a result (stored as the review event's reason). */
+export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;
+export type RejectReason = (typeof rejectReasons)[number];
 
 export const loadModes = ["constant-current", "constant-power", "constant-resistance"] as const;
 export type LoadMode = (typeof loadModes)[number];

@@ -16,8 +16,8 @@ export type ResolvedFlag = {
 };
 
 const how: Record<ResolvedFlag["resolution"], string> = {
-  kept: "dismissed, result kept",
-  corrected: "dismissed, correction noted",
+  kept: "result kept",
+  corrected: "result kept, with a moderator’s note",
   withdrawn: "result taken out of publication",
 };
 

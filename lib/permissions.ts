@@ -13,17 +13,19 @@ const permissions = {
   "result.withdraw-own": everyone,
   "result.resubmit-own": everyone,
   "upload.create": everyone,
-  "watch.manage": everyone,
+  "pack-emails.manage": everyone,
   "chart.save": everyone,
   "result.flag": everyone,
   "result.review": moderators,
   "review-queue.read": moderators,
+  "result.evidence": moderators,
   "flag.resolve": moderators,
   "chart.feature": moderators,
   "catalogue.edit": admins,
   "catalogue.merge": admins,
   "user.set-role": admins,
   "settings.edit": admins,
+  "mail.retry": admins,
 } as const satisfies Record<string, readonly UserRole[]>;
 
 export type Permission = keyof typeof permissions;

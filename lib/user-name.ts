@@ -1,11 +1,15 @@
-// How a user is named. Published results show the display name, or "Anonymous tester"; the header shows
-// the signed-in person their display name, or the part of their address before the @.
+// How a user is named. Published results show the display name the contributor chose, "Anonymous tester"
+// when they chose anonymity, and "A contributor" while they have made no choice (older accounts with an
+// empty name: they never asked to be anonymous, and no name is invented for them). The header shows the
+// signed-in person their display name, or the part of their address before the @.
 export const ANONYMOUS_NAME = "Anonymous tester";
+export const UNNAMED_CONTRIBUTOR = "A contributor";
 
 export function publicName(u: { displayName: string | null; email: string | null }): string {
   return u.displayName?.trim() || u.email?.split("@")[0] || "Your account";
 }
 
 export function nameOnResults(u: { displayName: string | null; anonymous: boolean }): string {
-  return u.anonymous || !u.displayName?.trim() ? ANONYMOUS_NAME : u.displayName.trim();
+  if (u.anonymous) return ANONYMOUS_NAME;
+  return u.displayName?.trim() || UNNAMED_CONTRIBUTOR;
 }

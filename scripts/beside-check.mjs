@@ -59,7 +59,7 @@ const portTaken = async (port) => {
   }
 };
 
-let started = null; // { child, before: { mail, s3, pg } } when this check started the app
+let started = null; // { child, before: { mail, s3, pg, worker } } when this check started the app
 let base = `http://127.0.0.1:${settings.port}`;
 if (settings.app && (await portTaken(settings.port))) {
   log(`watching this checkout's running app on ${base}`);
@@ -69,7 +69,7 @@ if (settings.app && (await portTaken(settings.port))) {
   base = `http://127.0.0.1:${port}`;
   const before = JSON.parse(
     inAppWorld(
-      `echo "{\\"mail\\": $(svc_running mail && echo true || echo false), \\"s3\\": $(svc_running s3 && echo true || echo false), \\"pg\\": $(pg_running && echo true || echo false)}"`,
+      `echo "{\\"mail\\": $(svc_running mail && echo true || echo false), \\"s3\\": $(svc_running s3 && echo true || echo false), \\"pg\\": $(pg_running && echo true || echo false), \\"worker\\": $(svc_running mail-worker && echo true || echo false)}"`,
     ),
   );
   log(`starting npm start on ${base} (services already running: ${JSON.stringify(before)})`);
@@ -209,7 +209,7 @@ if (started) {
   const { before } = started;
   try {
     inAppWorld(
-      `svc_stop app; ${before.s3 ? "" : "svc_stop s3;"} ${before.mail ? "" : "svc_stop mail;"} ${before.pg ? "" : "pg_stop;"} true`,
+      `svc_stop app; ${before.worker ? "" : "svc_stop mail-worker;"} ${before.s3 ? "" : "svc_stop s3;"} ${before.mail ? "" : "svc_stop mail;"} ${before.pg ? "" : "pg_stop;"} true`,
       { PORT: String(started.port) },
     );
   } catch (err) {

@@ -220,6 +220,27 @@ svc_stop() { # name
   rm -f "$f" "$RUN_DIR/$1.started-by-us"
 }
 
+# ---------- the mail worker ----------
+# scripts/mail-worker.ts sends what requests queue in mail_outbox (README: Operations). It listens on no port:
+# started with setsid and a pid file like the other services, ready once its log says it is listening.
+worker_start() {
+  local name=mail-worker
+  if svc_running "$name"; then say "$name already running"; return 0; fi
+  rm -f "$RUN_DIR/$name.pid"
+  (cd "$ROOT" && exec setsid $TSX scripts/mail-worker.ts) >"$RUN_DIR/$name.log" 2>&1 </dev/null &
+  echo $! >"$RUN_DIR/$name.pid"
+  local i
+  for ((i = 0; i < 300; i++)); do
+    grep -q "mail worker listening" "$RUN_DIR/$name.log" 2>/dev/null && break
+    svc_running "$name" || fail "the mail worker stopped at start; see .run/$name.log: $(tail -n 1 "$RUN_DIR/$name.log" 2>/dev/null)"
+    sleep 0.1
+  done
+  grep -q "mail worker listening" "$RUN_DIR/$name.log" 2>/dev/null \
+    || fail "the mail worker did not start within 30 s; see .run/$name.log"
+  echo started >"$RUN_DIR/$name.started-by-us"
+  say "$name started (sends queued mail through 127.0.0.1:$SMTP_PORT)"
+}
+
 services_start() {
   pg_start
   svc_start mail "$SMTP_PORT" scripts/services/mail-catcher.mjs
@@ -228,6 +249,7 @@ services_start() {
 
 services_stop() {
   svc_stop app || true
+  svc_stop mail-worker || true
   svc_stop s3 || true
   svc_stop mail || true
   pg_stop || true

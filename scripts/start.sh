@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# npm start: install what is missing, start local services, migrate, seed when empty, build, serve.
+# npm start: install what is missing, start local services, migrate, seed when empty, start the mail worker,
+# build, serve.
 source "$(dirname "$0")/lib.sh"
 ensure_postgres_installed
 ensure_node_modules
@@ -11,6 +12,8 @@ port_in_use "$PORT" && fail "port $PORT is taken (is Sagline already running?); 
 services_start
 $TSX scripts/migrate.ts
 $TSX scripts/seed/index.ts --if-empty
+# The mail worker sends what the app queues (sign-in links, receipts, decisions); npm run stop ends it.
+worker_start
 say "building (next build)"
 # The data cache (tagged reads) outlives builds and belongs to whichever database filled it (npm test's
 # browser run uses its own): start from an empty one so the site shows this database.

@@ -7,8 +7,9 @@
 export SAGLINE_MODE=test
 source "$(dirname "$0")/lib.sh"
 ONLY="${1:-all}"
-# `bash scripts/test.sh e2e tests/e2e/x.spec.ts` passes the rest on to Playwright (one spec while iterating).
-E2E_ARGS=("${@:2}")
+shift || true
+# Anything after the suite name goes to that suite's runner (e.g. `npm run test:e2e -- tests/e2e/moderation.spec.ts`).
+EXTRA=("$@")
 E2E_DB="${E2E_DB:-sagline_e2e}"
 case "$ONLY" in all|unit|integration|e2e) ;; *) fail "usage: scripts/test.sh [all|unit|integration|e2e]" ;; esac
 
@@ -51,7 +52,7 @@ if [ "$ONLY" = all ] || [ "$ONLY" = unit ]; then
   run_suite "unit tests" node_modules/.bin/vitest run --project unit --reporter=default --reporter=json --outputFile.json="$RUN_DIR/results-unit.json"
 fi
 if [ "$ONLY" = all ] || [ "$ONLY" = integration ]; then
-  run_suite "integration tests" node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile.json="$RUN_DIR/results-integration.json"
+  run_suite "integration tests" node_modules/.bin/vitest run --project integration --reporter=default --reporter=json --outputFile.json="$RUN_DIR/results-integration.json" "${EXTRA[@]}"
 fi
 if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
   say "── browser tests: fresh database $E2E_DB, production build in $NEXT_DIST_DIR/, app on http://localhost:$E2E_PORT ──"
@@ -60,6 +61,8 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
   export SAGLINE_DEV_TOOLS=1
   $TSX scripts/migrate.ts
   $TSX scripts/seed/index.ts
+  # The browser tests' mail (sign-in links, receipts, decisions) goes out through the mail worker, as in npm start.
+  worker_start
   # The data cache (tagged reads) outlives builds; with a fresh database its entries would be stale.
   rm -rf "$DIST_DIR/cache/fetch-cache"
   if ! node_modules/.bin/next build >"$RUN_DIR/build-e2e.log" 2>&1; then
@@ -69,7 +72,7 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
     node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
     APP_PID=$!
     wait_for_port "$E2E_PORT" 60 || fail "the app did not start for browser tests (see $RUN_DIR/app-e2e.log)"
-    E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${E2E_ARGS[@]}"
+    E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${EXTRA[@]}"
   fi
 fi
 

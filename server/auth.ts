@@ -8,7 +8,7 @@ import Nodemailer from "next-auth/providers/nodemailer";
 import { getDb } from "@/db";
 import { accounts, sessions, users, verificationTokens } from "@/db/schema";
 import { env } from "@/server/env";
-import { sendMail } from "@/server/mail/outbox";
+import { queueMail } from "@/server/mail/outbox";
 import { signInLinkMail } from "@/server/mail/templates";
 import { parseSignInEmail } from "@/lib/validations/sign-in";
 
@@ -32,15 +32,22 @@ export const { handlers, signIn, signOut } = NextAuth(() => ({
       // The same one-address rule as the sign-in form and the route (lib/validations/sign-in.ts): a list or
       // a display-name form throws here, so Auth.js sends nothing.
       normalizeIdentifier: parseSignInEmail,
-      // Through the outbox: if the relay is down the link is queued and retried, and its body is wiped
-      // once sent (the token itself is stored hashed by Auth.js).
+      // Queued in the outbox, never sent inside the request: the mail worker, woken by the insert, sends it at
+      // once and retries it if the relay is down; its body is wiped once sent (Auth.js stores the token hashed).
       async sendVerificationRequest({ identifier, url, expires }) {
-        await sendMail(identifier, signInLinkMail({ url, expires }), { sensitive: true });
+        await queueMail(identifier, signInLinkMail({ url, expires }), { sensitive: true });
       },
     }),
   ],
-  // Our own pages; GET /api/auth/signout goes to the account page, whose button signs out.
-  pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in", signOut: "/account" },
+  // Our own pages; GET /api/auth/signout goes to the account page, whose button signs out. A first sign-in
+  // lands on the choice of public name (with the callbackUrl to go on to).
+  pages: {
+    signIn: "/sign-in",
+    verifyRequest: "/sign-in/check-email",
+    error: "/sign-in",
+    signOut: "/account",
+    newUser: "/account/public-name",
+  },
   trustHost: true, // STACK.md gotchas 4–5: opened at http://localhost:PORT, behind our own host header
   secret: env().AUTH_SECRET,
   // One line per problem in the server log (expired links, missing CSRF tokens are routine), no stacks.

@@ -25,7 +25,7 @@ export async function updatePackLabel(actorId: string, input: PackLabelInput): P
   return { packId: input.packId };
 }
 
-/** Merges a duplicate pack into another: its results and watches move, the duplicate is kept as "merged". */
+/** Merges a duplicate pack into another: its results and new-result e-mail requests move, the duplicate is kept as "merged". */
 export async function mergePacks(
   actorId: string,
   sourceId: number,

@@ -1,75 +1,70 @@
 // Moderation services. Each write runs in its own transaction in the data layer (db/mutations/review.ts,
-// reader-flags.ts); after the commit the public pages that show the result are revalidated by tag, and
-// people are told by e-mail. Mail goes through the outbox, so a relay outage queues it and never undoes
-// the decision; any other failure of an after-effect is logged, not thrown.
+// reader-flags.ts). A decision's e-mails are written here and queued inside the decision's transaction (the
+// mail worker sends them; no request waits on SMTP). After the commit the public pages that show the result
+// — and, when a proposed pack went live, the catalogue, its API and the sitemap — are revalidated by tag.
 import "server-only";
 import { insertReaderFlag } from "@/db/mutations/reader-flags";
 import {
   writeDecision,
   writeFlagResolution,
   type Decision,
+  type DecisionMailInput,
   type DecisionStatus,
   type ResultContext,
 } from "@/db/mutations/review";
-import { listWatcherEmails } from "@/db/queries/watches";
+import type { NewOutboxMessage } from "@/db/mutations/mail-outbox";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
-import { rejectReasonLabels, type FlagResolution, type ReaderFlagInput } from "@/lib/validations/review";
+import { rejectReasonLabels } from "@/lib/labels";
+import type { FlagResolution, ReaderFlagInput } from "@/lib/validations/review";
 import { cacheTags, tagsForResult } from "@/server/cache-tags";
-import { env } from "@/server/env";
-import { reviewDecisionMail, sendMail, watchedPackResultMail, type ReviewDecision } from "@/server/mail";
+import { appUrl, ownResultUrl } from "@/server/links";
+import { newResultOnPackMail, outboxMessage, reviewDecisionMail } from "@/server/mail";
 import { revalidateTags } from "@/server/revalidate";
 
 function revalidateResult(c: ResultContext): void {
   revalidateTags(tagsForResult(c));
 }
 
-async function safely(what: string, fn: () => Promise<unknown>): Promise<void> {
-  try {
-    await fn();
-  } catch (err) {
-    console.error(`[review] ${what} failed after the decision was saved:`, err instanceof Error ? err.message : err);
-  }
-}
-
-async function notifyDecision(c: ResultContext, decision: ReviewDecision, note: string | null): Promise<void> {
-  const base = env().APP_URL.replace(/\/$/, "");
-  if (c.contributorEmail) {
-    const to = c.contributorEmail;
-    await safely("decision mail", () =>
-      sendMail(
-        to,
-        reviewDecisionMail({
-          packTitle: c.packTitle,
-          decision,
-          reason: note,
-          resultUrl: `${base}/results/${c.resultId}`,
-        }),
-      ),
-    );
-  }
-  if (decision !== "approved") return;
-  await safely("watcher mail", async () => {
-    const mail = watchedPackResultMail({
-      packTitle: c.packTitle,
-      packUrl: `${base}/packs/${c.packSlug}`,
-      accountUrl: `${base}/account`,
+function decisionMails(m: DecisionMailInput, said: string | null): NewOutboxMessage[] {
+  const out: NewOutboxMessage[] = [];
+  if (m.contributorEmail) {
+    const content = reviewDecisionMail({
+      resultId: m.resultId,
+      packTitle: m.packTitle,
+      decision: m.status,
+      reason: said,
+      resultUrl: ownResultUrl(m.resultId),
     });
-    for (const to of await listWatcherEmails(c.packId, [c.contributorId])) await sendMail(to, mail);
-  });
+    out.push(outboxMessage(m.contributorEmail, content));
+  }
+  if (m.status === "approved" && m.packEmailRecipients.length > 0) {
+    const content = newResultOnPackMail({
+      packTitle: m.packTitle,
+      packUrl: appUrl(`/packs/${m.packSlug}`),
+      accountUrl: appUrl("/account"),
+    });
+    for (const to of m.packEmailRecipients) out.push(outboxMessage(to, content));
+  }
+  return out;
 }
 
-/** Approve, reject or request changes on a pending result; then revalidate (when published) and tell people. */
+/**
+ * Approve, reject or send back a pending result. Its e-mails are queued in the decision's transaction; after
+ * the commit an approval revalidates the result's pages, its pack (live at once if it was proposed), the
+ * catalogue and the group.
+ */
 export async function decideResult(
   actorId: string,
   resultId: number,
   decision: Decision,
-): Promise<{ resultId: number; status: DecisionStatus }> {
-  const { ctx, status } = await writeDecision(actorId, resultId, decision);
-  if (status === "approved") revalidateResult(ctx);
+): Promise<{ resultId: number; status: DecisionStatus; packSlug: string; queuedMail: number }> {
   const reason = decision.kind === "reject" ? `Reason: ${rejectReasonLabels[decision.reason]}.` : null;
-  const said = [reason, decision.note].filter(Boolean).join(" ");
-  await notifyDecision(ctx, status, said || null);
-  return { resultId, status };
+  const said = [reason, decision.note].filter(Boolean).join(" ") || null;
+  const { ctx, status, oldSlugs, queued } = await writeDecision(actorId, resultId, decision, (m) =>
+    decisionMails(m, said),
+  );
+  if (status === "approved") revalidateTags([...tagsForResult(ctx), ...oldSlugs.map(cacheTags.pack)]);
+  return { resultId, status, packSlug: ctx.packSlug, queuedMail: queued };
 }
 
 /**

@@ -12,6 +12,7 @@ export default function AdminLayout({ children }: { children: React.ReactNode })
         <Link href="/admin/users">Users and roles</Link>
         <Link href="/admin/catalogue">Catalogue</Link>
         <Link href="/admin/settings">Site settings</Link>
+        <Link href="/admin/mail">Mail</Link>
         <Link href="/review">Review queue</Link>
       </nav>
       {children}

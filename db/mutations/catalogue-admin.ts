@@ -4,8 +4,8 @@
 // Each write returns the slugs and packs it touched; the service (server/catalogue-admin.ts) revalidates.
 import "server-only";
 import { and, eq, inArray, ne, sql } from "drizzle-orm";
-import { db } from "@/db";
-import { auditEvents, makers, packs, results, watches } from "@/db/schema";
+import { db, type Transaction } from "@/db";
+import { auditEvents, makers, packEmails, packs, results } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { PackLabelInput } from "@/lib/validations/catalogue-admin";
 
@@ -53,7 +53,42 @@ export async function writePackLabel(actorId: string, input: PackLabelInput): Pr
   });
 }
 
-/** Merges a duplicate pack into another: its results and watches move, the duplicate is kept as "merged". */
+/**
+ * Moves a pack into another inside a transaction the caller holds (both rows locked): its results and new-result
+ * e-mail requests move, the pack is kept as "merged" pointing at the survivor, and an audit event says so.
+ */
+export async function movePackInto(
+  tx: Transaction,
+  actorId: string,
+  sourceId: number,
+  targetId: number,
+  action: "pack.merge" | "pack.merge-proposal",
+  about: Record<string, unknown> = {},
+): Promise<number[]> {
+  const moved = await tx
+    .update(results)
+    .set({ packId: targetId, updatedAt: new Date() })
+    .where(eq(results.packId, sourceId))
+    .returning({ id: results.id });
+  await tx.execute(sql`insert into ${packEmails} (user_id, pack_id, created_at)
+    select user_id, ${targetId}, created_at from ${packEmails} where pack_id = ${sourceId} on conflict do nothing`);
+  await tx.delete(packEmails).where(eq(packEmails.packId, sourceId));
+  await tx
+    .update(packs)
+    .set({ status: "merged", mergedIntoId: targetId, updatedAt: new Date() })
+    .where(eq(packs.id, sourceId));
+  const movedResultIds = moved.map((m) => m.id);
+  await tx.insert(auditEvents).values({
+    actorId,
+    action,
+    entityType: "pack",
+    entityId: String(sourceId),
+    data: { into: targetId, ...about, movedResultIds },
+  });
+  return movedResultIds;
+}
+
+/** Merges a duplicate pack into another: its results and new-result e-mail requests move, the duplicate is kept as "merged". */
 export async function mergePackRows(
   actorId: string,
   sourceId: number,
@@ -81,29 +116,9 @@ export async function mergePackRows(
       throw new AppError("conflict", "One of those packs has already been merged.");
     if (source.cells !== target.cells)
       throw new AppError("conflict", "Those packs have different cell counts; they are not the same product.");
-    const moved = await tx
-      .update(results)
-      .set({ packId: targetId, updatedAt: new Date() })
-      .where(eq(results.packId, sourceId))
-      .returning({ id: results.id });
-    await tx.execute(sql`insert into ${watches} (user_id, pack_id, created_at)
-      select user_id, ${targetId}, created_at from ${watches} where pack_id = ${sourceId} on conflict do nothing`);
-    await tx.delete(watches).where(eq(watches.packId, sourceId));
-    await tx
-      .update(packs)
-      .set({ status: "merged", mergedIntoId: targetId, updatedAt: new Date() })
-      .where(eq(packs.id, sourceId));
-    await tx.insert(auditEvents).values({
-      actorId,
-      action: "pack.merge",
-      entityType: "pack",
-      entityId: String(sourceId),
-      data: {
-        into: targetId,
-        sourceSlug: source.slug,
-        targetSlug: target.slug,
-        movedResultIds: moved.map((m) => m.id),
-      },
+    const moved = await movePackInto(tx, actorId, sourceId, targetId, "pack.merge", {
+      sourceSlug: source.slug,
+      targetSlug: target.slug,
     });
     const touched = {
       packSlugs: [source.slug, target.slug],

@@ -1,21 +1,24 @@
-// The outgoing mail queue. A message is claimed with a short lease (next_attempt_at pushed forward) before
-// it is sent, so two app instances flushing at once never send the same message twice.
+// The outgoing mail queue. Messages are written by the transaction that causes them (a submission, a
+// decision, a sign-in request) and sent by the mail worker (scripts/mail-worker.ts), which claims due rows
+// with a short lease (FOR UPDATE SKIP LOCKED, next_attempt_at pushed forward), so two workers never send the
+// same message twice. An insert wakes the worker when its transaction commits (the mail_outbox_notify trigger).
 import "server-only";
 import { and, eq, isNull, lt, lte, sql } from "drizzle-orm";
-import { db } from "@/db";
-import { mailOutbox } from "@/db/schema";
+import { db, type Executor } from "@/db";
+import { auditEvents, mailOutbox } from "@/db/schema";
+import { AppError } from "@/lib/errors";
 
 export type OutboxMessage = typeof mailOutbox.$inferSelect;
 export type NewOutboxMessage = { to: string; subject: string; text: string; html: string | null; sensitive: boolean };
 
-/** Queue a message already claimed by the caller for `leaseS` seconds (it is about to try sending it). */
-export async function enqueueClaimedMail(message: NewOutboxMessage, leaseS: number): Promise<OutboxMessage> {
-  const [row] = await db
+/** Queue messages in the caller's transaction (or on their own). One statement, however many rows. */
+export async function queueMail(exec: Executor, messages: readonly NewOutboxMessage[]): Promise<number[]> {
+  if (messages.length === 0) return [];
+  const rows = await exec
     .insert(mailOutbox)
-    .values({ ...message, nextAttemptAt: new Date(Date.now() + leaseS * 1000) })
-    .returning();
-  if (!row) throw new Error("mail outbox insert returned nothing");
-  return row;
+    .values([...messages])
+    .returning({ id: mailOutbox.id });
+  return rows.map((r) => r.id);
 }
 
 /** Claim up to `limit` unsent messages that are due and have attempts left, leasing them for `leaseS`. */
@@ -26,7 +29,7 @@ export async function claimDueMail(limit: number, leaseS: number, maxAttempts: n
     .where(
       and(isNull(mailOutbox.sentAt), lte(mailOutbox.nextAttemptAt, sql`now()`), lt(mailOutbox.attempts, maxAttempts)),
     )
-    .orderBy(mailOutbox.nextAttemptAt)
+    .orderBy(mailOutbox.nextAttemptAt, mailOutbox.id)
     .limit(limit)
     .for("update", { skipLocked: true });
   return db
@@ -53,4 +56,33 @@ export async function markMailFailed(id: number, error: string, nextAttemptAt: D
     .update(mailOutbox)
     .set({ attempts: sql`${mailOutbox.attempts} + 1`, lastError: error.slice(0, 500), nextAttemptAt })
     .where(eq(mailOutbox.id, id));
+}
+
+/**
+ * An admin sends an unsent message again: its attempts start over and it is due now (the worker is woken).
+ * The last error stays until a send succeeds. Audited.
+ */
+export async function retryMail(actorId: string, id: number): Promise<{ id: number; to: string }> {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .select({ id: mailOutbox.id, to: mailOutbox.to, sentAt: mailOutbox.sentAt, attempts: mailOutbox.attempts })
+      .from(mailOutbox)
+      .where(eq(mailOutbox.id, id))
+      .for("update");
+    if (!row) throw new AppError("not_found", "That message is not in the outbox.");
+    if (row.sentAt) throw new AppError("conflict", "That message has been sent already.");
+    await tx
+      .update(mailOutbox)
+      .set({ attempts: 0, nextAttemptAt: sql`now()` })
+      .where(eq(mailOutbox.id, id));
+    await tx.insert(auditEvents).values({
+      actorId,
+      action: "mail.retry",
+      entityType: "mail",
+      entityId: String(id),
+      data: { to: row.to, attemptsBefore: row.attempts },
+    });
+    await tx.execute(sql`select pg_notify('mail_outbox', '')`);
+    return { id: row.id, to: row.to };
+  });
 }

@@ -4,9 +4,11 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { db, type Executor } from "@/db";
 import { findResultByIdempotencyKey } from "@/db/queries/submissions";
-import { mailOutbox, results, reviewEvents, type ReviewStatus } from "@/db/schema";
+import { results, reviewEvents, type ReviewStatus } from "@/db/schema";
 import { AppError } from "@/lib/errors";
+import { ownStatusLabels } from "@/lib/labels";
 import { createProposedPack, type PackProposal } from "./catalogue";
+import { queueMail, type NewOutboxMessage } from "./mail-outbox";
 import { computeAndStoreFlags } from "./review";
 
 /** The columns a submission or resubmission sets (method card, stored files, computed figures). */
@@ -14,14 +16,13 @@ export type ResultFields = Omit<
   typeof results.$inferInsert,
   "id" | "packId" | "contributorId" | "status" | "idempotencyKey" | "submittedAt" | "publishedAt" | "updatedAt"
 >;
-type QueuedMail = { to: string; subject: string; text: string; html: string | null };
-
 export type NewSubmission = {
   contributorId: string;
   idempotencyKey: string;
   pack: { packId: number } | { proposal: PackProposal };
   fields: ResultFields;
-  receipt: QueuedMail | null;
+  /** The receipt, written once the result has its number; queued in the same transaction. */
+  receipt: ((resultId: number) => NewOutboxMessage) | null;
 };
 
 /** The PostgreSQL error behind a Drizzle query error (or the error itself). */
@@ -29,10 +30,6 @@ function pgError(err: unknown): { code?: string; constraint?: string } {
   const e = err as { code?: string; constraint?: string; cause?: unknown } | null;
   if (e && typeof e === "object" && !e.code && e.cause) return pgError(e.cause);
   return e && typeof e === "object" ? e : {};
-}
-
-async function queue(tx: Executor, mail: QueuedMail | null): Promise<void> {
-  if (mail) await tx.insert(mailOutbox).values({ ...mail, sensitive: false });
 }
 
 /**
@@ -64,7 +61,7 @@ export async function createSubmission(s: NewSubmission): Promise<{ resultId: nu
       });
       // The automatic plausibility flags arrive with the result (same transaction), ready for the review queue.
       await computeAndStoreFlags(row.id, tx);
-      await queue(tx, s.receipt);
+      if (s.receipt) await queueMail(tx, [s.receipt(row.id)]);
       return { resultId: row.id, created: true };
     });
   } catch (err) {
@@ -95,7 +92,7 @@ async function lockOwn(
   if (!allowed.includes(row.status)) {
     throw new AppError(
       "conflict",
-      `This result is ${row.status.replace("_", " ")}; only a result ${allowed.map((s) => s.replace("_", " ")).join(" or ")} can be ${verb === "withdraw" ? "withdrawn" : "resubmitted"}.`,
+      `This result is now “${ownStatusLabels[row.status].toLowerCase()}”; only a result ${allowed.map((s) => `“${ownStatusLabels[s].toLowerCase()}”`).join(" or ")} can be ${verb === "withdraw" ? "withdrawn" : "answered"}.`,
     );
   }
   return row;
@@ -104,7 +101,7 @@ async function lockOwn(
 /** A contributor takes back a result that is still waiting for review (or for their changes). */
 export async function withdrawOwnResult(resultId: number, contributorId: string, note: string | null): Promise<void> {
   await db.transaction(async (tx) => {
-    const row = await lockOwn(tx, resultId, contributorId, ["pending", "changes_requested"], "withdraw");
+    const row = await lockOwn(tx, resultId, contributorId, ["pending", "awaiting_answer"], "withdraw");
     await tx.update(results).set({ status: "withdrawn", updatedAt: new Date() }).where(eq(results.id, resultId));
     await tx.insert(reviewEvents).values({
       resultId,
@@ -116,23 +113,28 @@ export async function withdrawOwnResult(resultId: number, contributorId: string,
   });
 }
 
-/** The contributor's answer to a change request: new method card and figures, back to pending, history kept. */
+/**
+ * The contributor's answer to a moderator's request: new method card and figures, back to pending, history
+ * kept, and the answer's receipt queued with it.
+ */
 export async function resubmitOwnResult(
   resultId: number,
   contributorId: string,
   fields: Partial<ResultFields>,
   note: string,
+  receipt: NewOutboxMessage | null,
 ): Promise<void> {
   await db.transaction(async (tx) => {
-    await lockOwn(tx, resultId, contributorId, ["changes_requested"], "resubmit");
+    await lockOwn(tx, resultId, contributorId, ["awaiting_answer"], "resubmit");
     await tx
       .update(results)
       .set({ ...fields, status: "pending", updatedAt: new Date() })
       .where(eq(results.id, resultId));
     await tx
       .insert(reviewEvents)
-      .values({ resultId, actorId: contributorId, fromStatus: "changes_requested", toStatus: "pending", note });
+      .values({ resultId, actorId: contributorId, fromStatus: "awaiting_answer", toStatus: "pending", note });
     // New method card or figures: the plausibility flags are computed again.
     await computeAndStoreFlags(resultId, tx);
+    if (receipt) await queueMail(tx, [receipt]);
   });
 }

@@ -1,11 +1,13 @@
 // Moderation writes. Each status change and its review_events row share one transaction, with the result
 // row locked (SELECT … FOR UPDATE) and its status re-checked, so two moderators can never both decide the
-// same result. Revalidation and e-mail run only after the commit, in the service (server/review.ts).
+// same result. A decision's e-mails (the contributor's, and one row per person e-mailed about the pack) are
+// queued in the same transaction: a decision that fails queues nothing, one that commits loses no e-mail.
+// Revalidation runs only after the commit, in the service (server/review.ts).
 import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { db, type Executor, type Transaction } from "@/db";
 import { getPlausibilityInput } from "@/db/queries/review";
-import { makers, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
+import { makers, packEmails, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import { plausibilityFlags } from "@/lib/analysis/plausibility";
 import { storeCurveFingerprint } from "./curve-fingerprints";
@@ -13,6 +15,8 @@ import { AppError } from "@/lib/errors";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { packTitle } from "@/lib/format";
 import type { FlagResolution, RejectReason } from "@/lib/validations/review";
+import { settleProposedPack, type CatalogueChoice } from "./catalogue";
+import { queueMail, type NewOutboxMessage } from "./mail-outbox";
 
 /** What the after-effects of a moderation write need: the result, its pack and group, who submitted it. */
 export type ResultContext = {
@@ -103,30 +107,59 @@ async function transition(
 }
 
 export type Decision =
-  | { kind: "approve"; note: string | null }
+  | { kind: "approve"; note: string | null; catalogue: CatalogueChoice }
   | { kind: "reject"; reason: RejectReason; note: string | null }
-  | { kind: "request-changes"; note: string };
+  | { kind: "ask"; note: string };
 
-const decisionStatus = { approve: "approved", reject: "rejected", "request-changes": "changes_requested" } as const;
+const decisionStatus = { approve: "approved", reject: "rejected", ask: "awaiting_answer" } as const;
 export type DecisionStatus = (typeof decisionStatus)[Decision["kind"]];
 
+/** What a decision's e-mails are written from: the result as it is after the decision, and who is e-mailed. */
+export type DecisionMailInput = ResultContext & { status: DecisionStatus; packEmailRecipients: string[] };
+
+/** Addresses of the people e-mailed new results of a pack, except the result's contributor. */
+async function packEmailRecipients(tx: Transaction, packId: number, exceptUserId: string): Promise<string[]> {
+  const rows = await tx
+    .select({ email: users.email })
+    .from(packEmails)
+    .innerJoin(users, eq(users.id, packEmails.userId))
+    .where(and(eq(packEmails.packId, packId), ne(packEmails.userId, exceptUserId)));
+  return rows.flatMap((r) => (r.email ? [r.email] : []));
+}
+
 /**
- * Approve, reject or request changes on a pending result, in one transaction. A moderator cannot decide
- * their own result. Returns what the after-effects need (server/review.ts#decideResult runs them).
+ * Approve, reject or ask the contributor about a pending result, in one transaction: the status change and
+ * its event; on approval the result's proposed pack (and maker) go live or merge into an existing entry; and
+ * the e-mails `mailFor` writes are queued. A moderator cannot decide their own result. Returns what the
+ * after-effects need (server/review.ts#decideResult revalidates), with the proposal slugs that went away.
  */
 export async function writeDecision(
   actorId: string,
   resultId: number,
   decision: Decision,
-): Promise<{ ctx: ResultContext; status: DecisionStatus }> {
+  mailFor: (m: DecisionMailInput) => NewOutboxMessage[],
+): Promise<{ ctx: ResultContext; status: DecisionStatus; oldSlugs: string[]; queued: number }> {
   const to = decisionStatus[decision.kind];
   const reason = decision.kind === "reject" ? decision.reason : null;
-  const ctx = await db.transaction(async (tx) => {
-    const c = await lockResult(tx, resultId);
+  return db.transaction(async (tx) => {
+    const { status: current, ...locked } = await lockResult(tx, resultId);
+    let c: ResultContext = locked;
     if (c.contributorId === actorId)
       throw new AppError("forbidden", "You cannot review your own result; another moderator has to.");
-    if (c.status !== "pending")
-      throw new AppError("conflict", `This result is no longer pending (it is ${c.status.replace("_", " ")}).`);
+    if (current !== "pending")
+      throw new AppError("conflict", "This result is no longer waiting for review; reload to see what changed.");
+    let oldSlugs: string[] = [];
+    if (decision.kind === "approve") {
+      const settled = await settleProposedPack(tx, actorId, c.packId, decision.catalogue);
+      c = {
+        ...c,
+        packId: settled.packId,
+        packSlug: settled.packSlug,
+        makerSlug: settled.makerSlug,
+        packTitle: settled.title,
+      };
+      oldSlugs = settled.oldSlugs;
+    }
     await transition(tx, {
       resultId,
       actorId,
@@ -136,9 +169,15 @@ export async function writeDecision(
       note: decision.note,
       publish: to === "approved",
     });
-    return c;
+    const recipients = to === "approved" ? await packEmailRecipients(tx, c.packId, c.contributorId) : [];
+    const ids = await queueMail(tx, mailFor({ ...c, status: to, packEmailRecipients: recipients }));
+    return {
+      ctx: c,
+      status: to,
+      oldSlugs,
+      queued: ids.length,
+    };
   });
-  return { ctx, status: to };
 }
 
 /**

@@ -10,7 +10,7 @@ import type { ProfileInput } from "@/lib/validations/account";
 export async function updateProfile(userId: string, input: ProfileInput): Promise<void> {
   const rows = await db
     .update(users)
-    .set({ displayName: input.displayName, anonymous: input.anonymous })
+    .set({ displayName: input.displayName, anonymous: input.anonymous, publicNameChosenAt: new Date() })
     .where(eq(users.id, userId))
     .returning({ id: users.id });
   if (rows.length === 0) throw new AppError("not_found", "Your account was not found.");

@@ -1,5 +1,5 @@
 import "server-only";
-import { desc, eq, inArray, asc } from "drizzle-orm";
+import { asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
 
@@ -67,4 +67,50 @@ export async function listResultsByContributor(userId: string, limit = 200): Pro
     byResult.set(resultId, list);
   }
   return rows.map((r) => ({ ...r, events: byResult.get(r.id) ?? [] }));
+}
+
+/** One result as its contributor sees it, in any state; ownership is the caller's check. */
+export async function getOwnResult(resultId: number) {
+  const [row] = await db
+    .select({
+      id: results.id,
+      contributorId: results.contributorId,
+      status: results.status,
+      submittedAt: results.submittedAt,
+      publishedAt: results.publishedAt,
+      packSlug: packs.slug,
+      packStatus: packs.status,
+      makerName: makers.name,
+      model: packs.model,
+      cellsInSeries: packs.cellsInSeries,
+      ratedCapacityMah: packs.ratedCapacityMah,
+      labelledContinuousC: packs.labelledContinuousC,
+      labelledBurstC: packs.labelledBurstC,
+      weightG: packs.weightG,
+      connector: packs.connector,
+      ambientTemperatureC: results.ambientTemperatureC,
+      packStartTemperatureC: results.packStartTemperatureC,
+      loadMode: results.loadMode,
+      loadCurrentA: results.loadCurrentA,
+      loadRateC: results.loadRateC,
+      cutoffVPerCell: results.cutoffVPerCell,
+      stopTemperatureC: results.stopTemperatureC,
+      resistanceMethod: results.resistanceMethod,
+      equipment: results.equipment,
+      sampleRateHz: results.sampleRateHz,
+      cyclesBeforeTest: results.cyclesBeforeTest,
+      testedOn: results.testedOn,
+      logFilename: results.logFilename,
+      photoCount: sql<number>`jsonb_array_length(${results.photoKeys})::int`,
+      capacityMah: results.capacityMah,
+      dcResistanceMohm: results.dcResistanceMohm,
+      sagLimitedC: results.sagLimitedC,
+      labelRatio: results.labelRatio,
+    })
+    .from(results)
+    .innerJoin(packs, eq(packs.id, results.packId))
+    .innerJoin(makers, eq(makers.id, packs.makerId))
+    .where(eq(results.id, resultId))
+    .limit(1);
+  return row ?? null;
 }

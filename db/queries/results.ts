@@ -9,6 +9,7 @@ import type { CurvePoint, Figures } from "@/lib/analysis";
 import type { FlagReason } from "@/lib/enums";
 import type { PublicResultRow } from "@/lib/pack-summary";
 import { isPublished, makerOfPack, packOfResult } from "./published";
+import { nameOnResults } from "@/lib/user-name";
 
 /** Whether a reader's flag on the result is open (a case moderators have not decided). */
 const hasOpenCase = sql<boolean>`exists (select 1 from ${readerFlags} where ${readerFlags.resultId} = ${results.id} and ${readerFlags.status} = 'open')`;
@@ -131,6 +132,8 @@ export type ResultDetail = PublicResultRow & {
   logFilename: string;
   notes: string | null;
   submittedAt: string;
+  /** How many label photos the contributor sent (served at /results/<id>/photos/<n>, 1-based). */
+  photoCount: number;
   figures: Figures;
   curve: CurvePoint[];
   events: {
@@ -154,6 +157,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
+      photoCount: sql<number>`jsonb_array_length(${results.photoKeys})::int`,
       contributorId: results.contributorId,
       contributorName: users.displayName,
       contributorAnonymous: users.anonymous,
@@ -210,6 +214,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     submittedAt,
     figures,
     curve,
+    photoCount,
     ...rest
   } = row;
   return {
@@ -225,11 +230,12 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       weightG,
       connector,
     },
-    contributor: contributorAnonymous ? "anonymous" : contributorName?.trim() || "anonymous",
+    contributor: nameOnResults({ displayName: contributorName, anonymous: contributorAnonymous }),
     openCaseReasons: [...new Set(open.map((o) => o.reason))],
     notes,
     logFilename,
     submittedAt: new Date(submittedAt).toISOString(),
+    photoCount,
     figures,
     curve,
     events: events.map((e) => ({
@@ -239,7 +245,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       to: e.to,
       reason: e.reason,
       note: e.note,
-      // Reviewers are named by role only; the contributor is already credited above (or anonymous).
+      // Reviewers are named by role only; the contributor is already credited above (as they chose).
       actor: e.actorId === null ? "system" : e.actorId === contributorId ? "contributor" : "moderator",
     })),
   };

@@ -182,7 +182,7 @@ export type HistoryEvent = {
 };
 
 /** The full review history of a result, oldest first. Actor names are for moderators; pages for the public show the role. */
-async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
+export async function getReviewHistory(resultId: number): Promise<HistoryEvent[]> {
   const rows = await db
     .select({
       id: reviewEvents.id,
@@ -266,6 +266,13 @@ export async function getReviewDetail(resultId: number) {
     .from(results)
     .where(and(eq(results.contributorId, r.contributorId), ne(results.id, r.id)))
     .groupBy(results.status);
+  // How often this contributor's results (this one included) were sent back for an answer: counted from the
+  // events, since a result that was answered is no longer in that state.
+  const [asked] = await db
+    .select({ n: count() })
+    .from(reviewEvents)
+    .innerJoin(results, eq(results.id, reviewEvents.resultId))
+    .where(and(eq(results.contributorId, r.contributorId), eq(reviewEvents.toStatus, "awaiting_answer")));
   const recent = await db
     .select({
       id: results.id,
@@ -293,14 +300,66 @@ export async function getReviewDetail(resultId: number) {
   };
   return {
     ...row,
+    proposal: await proposalChoices(row.pack, row.makerStatus, row.pack.makerId),
     groupNow: medians(groupRows),
     groupAfterApproval: medians([...groupRows, self]),
     contributorHistory: {
       byStatus: Object.fromEntries(history.map((h) => [h.status, h.n])) as Partial<Record<ReviewStatus, number>>,
+      timesSentBack: asked?.n ?? 0,
       recent,
     },
     events: await getReviewHistory(r.id),
     readerFlags: flags,
+  };
+}
+
+export type ProposalChoices = {
+  packProposed: boolean;
+  makerProposed: boolean;
+  /** Active packs with the same cells, rated capacity and labelled C: what a proposed pack may merge into. */
+  samePacks: { id: number; title: string }[];
+  /** Active makers: what a proposed maker may be the same as. */
+  makers: { id: number; name: string }[];
+};
+
+/** For a result on a proposed pack or maker: what the moderator may merge the proposal into. */
+async function proposalChoices(
+  pack: typeof packs.$inferSelect,
+  makerStatus: string,
+  makerId: number,
+): Promise<ProposalChoices | null> {
+  const packProposed = pack.status === "proposed";
+  const makerProposed = makerStatus === "proposed";
+  if (!packProposed && !makerProposed) return null;
+  const samePacks = packProposed
+    ? await db
+        .select({ id: packs.id, model: packs.model, makerName: makers.name })
+        .from(packs)
+        .innerJoin(makers, eq(makers.id, packs.makerId))
+        .where(
+          and(
+            eq(packs.status, "active"),
+            eq(makers.status, "active"),
+            eq(packs.cellsInSeries, pack.cellsInSeries),
+            eq(packs.ratedCapacityMah, pack.ratedCapacityMah),
+            eq(packs.labelledContinuousC, pack.labelledContinuousC),
+          ),
+        )
+        .orderBy(asc(makers.name), asc(packs.model))
+        .limit(200)
+    : [];
+  const makerRows = makerProposed
+    ? await db
+        .select({ id: makers.id, name: makers.name })
+        .from(makers)
+        .where(and(eq(makers.status, "active"), ne(makers.id, makerId)))
+        .orderBy(asc(makers.name))
+    : [];
+  return {
+    packProposed,
+    makerProposed,
+    samePacks: samePacks.map((p) => ({ id: p.id, title: `${p.makerName} ${p.model}` })),
+    makers: makerRows,
   };
 }
 

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, gt } from "drizzle-orm";
+import { and, eq, gt, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { sessions, users, type UserRole } from "@/db/schema";
 
@@ -9,6 +9,8 @@ export type SessionUser = {
   role: UserRole;
   displayName: string | null;
   anonymous: boolean;
+  /** Whether they chose how published results name them (a name, or anonymous). */
+  publicNameChosen: boolean;
 };
 
 /** The signed-in user behind a database session token, with the role as it is now (not as it was). */
@@ -20,6 +22,7 @@ export async function getSessionUserByToken(token: string): Promise<SessionUser 
       role: users.role,
       displayName: users.displayName,
       anonymous: users.anonymous,
+      publicNameChosen: sql<boolean>`${users.publicNameChosenAt} is not null`,
     })
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.userId))

@@ -160,14 +160,17 @@ export async function getResultForEdit(resultId: number): Promise<OwnResult | nu
   };
 }
 
-/** The reason given with the latest change request on a result (moderators' internal notes stay out). */
-export async function getLatestChangeRequest(
+/**
+ * The latest time a moderator sent the result back for an answer: what they asked (the event's note, which
+ * the contributor is meant to read — it is also in their e-mail) and when.
+ */
+export async function getLatestRequest(
   resultId: number,
-): Promise<{ reason: string | null; createdAt: Date } | null> {
+): Promise<{ note: string | null; reason: string | null; createdAt: Date } | null> {
   const rows = await db
-    .select({ reason: reviewEvents.reason, createdAt: reviewEvents.createdAt })
+    .select({ note: reviewEvents.note, reason: reviewEvents.reason, createdAt: reviewEvents.createdAt })
     .from(reviewEvents)
-    .where(and(eq(reviewEvents.resultId, resultId), eq(reviewEvents.toStatus, "changes_requested")))
+    .where(and(eq(reviewEvents.resultId, resultId), eq(reviewEvents.toStatus, "awaiting_answer")))
     .orderBy(desc(reviewEvents.createdAt), desc(reviewEvents.id))
     .limit(1);
   return rows[0] ?? null;

@@ -17,9 +17,12 @@ export const users = pgTable(
     emailVerified: timestamp("email_verified", { mode: "date", withTimezone: true }),
     image: text("image"),
     role: userRole("role").notNull().default("contributor"),
-    // Shown on published results unless the contributor chose to stay anonymous.
+    // Shown on published results unless the contributor chose to stay anonymous. The choice is explicit:
+    // until public_name_chosen_at is set, published results say "a contributor" (lib/user-name.ts) and
+    // /submit asks for the choice first.
     displayName: text("display_name"),
     anonymous: boolean("anonymous").notNull().default(false),
+    publicNameChosenAt: timestamp("public_name_chosen_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("users_role_idx").on(t.role)],

@@ -1,4 +1,5 @@
-// What readers and journalists leave behind: flags on published results, watches, saved charts.
+// What readers and journalists leave behind: flags on published results, requests for new-result e-mails
+// about a pack, saved charts.
 import { sql } from "drizzle-orm";
 import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
 import { users } from "./auth";
@@ -38,8 +39,9 @@ export const readerFlags = pgTable(
   ],
 );
 
-export const watches = pgTable(
-  "watches",
+/** A reader asked to be e-mailed when a new result on this pack is published. */
+export const packEmails = pgTable(
+  "pack_emails",
   {
     userId: text("user_id")
       .notNull()
@@ -49,7 +51,7 @@ export const watches = pgTable(
       .references(() => packs.id, { onDelete: "cascade" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [primaryKey({ columns: [t.userId, t.packId] }), index("watches_pack_idx").on(t.packId)],
+  (t) => [primaryKey({ columns: [t.userId, t.packId] }), index("pack_emails_pack_idx").on(t.packId)],
 );
 
 export const chartKinds = ["label-check", "curves", "maker-ranking"] as const;

@@ -2,12 +2,12 @@ import { relations } from "drizzle-orm";
 import { users } from "./auth";
 import { makers, packs } from "./catalogue";
 import { benchProfiles, results, reviewEvents } from "./results";
-import { readerFlags, watches } from "./community";
+import { packEmails, readerFlags } from "./community";
 
 export const usersRelations = relations(users, ({ many }) => ({
   results: many(results),
   benchProfiles: many(benchProfiles),
-  watches: many(watches),
+  packEmails: many(packEmails),
 }));
 export const makersRelations = relations(makers, ({ many }) => ({ packs: many(packs) }));
 export const packsRelations = relations(packs, ({ one, many }) => ({
@@ -31,7 +31,7 @@ export const benchProfilesRelations = relations(benchProfiles, ({ one }) => ({
 export const readerFlagsRelations = relations(readerFlags, ({ one }) => ({
   result: one(results, { fields: [readerFlags.resultId], references: [results.id] }),
 }));
-export const watchesRelations = relations(watches, ({ one }) => ({
-  pack: one(packs, { fields: [watches.packId], references: [packs.id] }),
-  user: one(users, { fields: [watches.userId], references: [users.id] }),
+export const packEmailsRelations = relations(packEmails, ({ one }) => ({
+  pack: one(packs, { fields: [packEmails.packId], references: [packs.id] }),
+  user: one(users, { fields: [packEmails.userId], references: [users.id] }),
 }));

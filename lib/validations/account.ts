@@ -1,6 +1,8 @@
-// The account profile: the name shown on published results, or anonymous.
+// The account profile: how the contributor's published results name them. An explicit choice — a display
+// name, or "anonymous" — never inferred from an empty field.
 import { z } from "zod";
-import { checkbox } from "./form-fields";
+
+const publicNameChoices = ["name", "anonymous"] as const;
 
 export const profileSchema = z
   .object({
@@ -12,15 +14,16 @@ export const profileSchema = z
       .refine((v) => !v.includes("@"), "Please don't use an e-mail address as your display name.")
       .refine((v) => !/[\u0000-\u001f<>]/.test(v), "Letters, digits, spaces and ordinary punctuation only.")
       .transform((v) => (v === "" ? null : v)),
-    anonymous: checkbox,
+    publicName: z.enum(publicNameChoices, { error: "Choose how your published results name you." }),
   })
   .superRefine((v, ctx) => {
-    if (!v.anonymous && v.displayName === null) {
+    if (v.publicName === "name" && v.displayName === null) {
       ctx.addIssue({
         code: "custom",
         path: ["displayName"],
-        message: "Enter a display name, or choose to stay anonymous.",
+        message: "Enter the name to show, or choose to stay anonymous.",
       });
     }
-  });
+  })
+  .transform((v) => ({ displayName: v.displayName, anonymous: v.publicName === "anonymous" }));
 export type ProfileInput = z.output<typeof profileSchema>;

@@ -1,37 +1,9 @@
 // Inputs of the moderation actions and the reader-flag endpoint. Shared by forms and server.
 import { z } from "zod";
 import { recordId } from "./ids";
-import { flagReasons } from "@/lib/enums";
+import { flagReasons, rejectReasons } from "@/lib/enums";
+export type { RejectReason } from "@/lib/enums";
 import { flagCodes } from "@/lib/flag-labels";
-
-export const rejectReasons = ["wrong-data", "incomplete-method", "duplicate", "not-a-measurement", "other"] as const;
-export type RejectReason = (typeof rejectReasons)[number];
-export const rejectReasonLabels: Record<RejectReason, string> = {
-  "wrong-data": "Wrong data",
-  "incomplete-method": "Incomplete method",
-  duplicate: "Duplicate",
-  "not-a-measurement": "Not a measurement",
-  other: "Other (explain in the note)",
-};
-
-export const flagReasonLabels: Record<(typeof flagReasons)[number], string> = {
-  "wrong-figures": "The figures look wrong",
-  "wrong-pack": "Wrong pack",
-  duplicate: "Duplicate of another result",
-  "not-a-measurement": "Not a real measurement",
-  unsafe: "Unsafe method",
-  other: "Other",
-};
-
-/** The reason of an open case as the public result page says it (our words; the reader's note is not shown). */
-export const openCaseReasonWords: Record<(typeof flagReasons)[number], string> = {
-  "wrong-figures": "the figures may be wrong",
-  "wrong-pack": "it may be filed under the wrong pack",
-  duplicate: "it may repeat another result",
-  "not-a-measurement": "it may not come from a real measurement",
-  unsafe: "the test method may be unsafe",
-  other: "a reason the reader explained to the moderators",
-};
 
 const flagResolutions = ["kept", "corrected", "withdrawn"] as const;
 export type FlagResolution = (typeof flagResolutions)[number];
@@ -47,14 +19,33 @@ const note = (max: number) =>
 const requiredNote = (max: number, message: string) =>
   z.string({ error: message }).trim().min(3, message).max(max, `At most ${max} characters.`);
 
-export const approveResultSchema = z.object({ resultId: id, note: note(2000) });
+/** "" (the form's "no, a new entry") or a catalogue id. */
+const optionalId = z
+  .union([z.literal(""), id])
+  .optional()
+  .transform((v) => (v === "" || v === undefined ? null : v));
+
+/**
+ * Approve a pending result. For a result on a proposed pack the moderator may say it is an existing pack
+ * (intoPackId) or that its new maker is an existing maker (intoMakerId); otherwise the proposal goes live.
+ */
+export const approveResultSchema = z.object({
+  resultId: id,
+  note: note(2000),
+  intoPackId: optionalId,
+  intoMakerId: optionalId,
+});
 export const rejectResultSchema = z
   .object({ resultId: id, reason: z.enum(rejectReasons, { error: "Choose a reason." }), note: note(2000) })
   .refine((v) => v.reason !== "other" || (v.note?.length ?? 0) >= 3, {
     path: ["note"],
     message: "Say why in the note when the reason is “other”.",
   });
-export const requestChangesSchema = z.object({ resultId: id, note: requiredNote(2000, "Say what needs to change.") });
+/** Send a pending result back to its contributor: the note is what they are asked to answer or change. */
+export const askContributorSchema = z.object({
+  resultId: id,
+  note: requiredNote(2000, "Say what the contributor should answer or change."),
+});
 
 export const readerFlagSchema = z.object({
   reason: z.enum(flagReasons, { error: "Choose a reason." }),
@@ -64,7 +55,7 @@ export const resolveFlagSchema = z
   .object({ flagId: id, resolution: z.enum(flagResolutions, { error: "Choose how to resolve it." }), note: note(2000) })
   .refine((v) => v.resolution !== "corrected" || (v.note?.length ?? 0) >= 3, {
     path: ["note"],
-    message: "Say what was corrected.",
+    message: "Say in the note what the reader got right.",
   })
   .refine((v) => v.resolution !== "withdrawn" || (v.note?.length ?? 0) >= 3, {
     path: ["note"],

@@ -33,6 +33,7 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
           displayName: u.displayName,
           role: u.role,
           anonymous: u.anonymous ?? false,
+          publicNameChosenAt: new Date("2026-01-01T00:00:00Z"),
           emailVerified: new Date("2026-01-01T00:00:00Z"),
         })),
       )

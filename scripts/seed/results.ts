@@ -95,12 +95,12 @@ const campaigns: Campaign[] = [
 ];
 
 // "flagged": approved, with a reader's open flag (a case for moderators; the result stays published and counted).
-type Outcome = "approved" | "pending" | "changes_requested" | "rejected" | "withdrawn" | "flagged";
+type Outcome = "approved" | "pending" | "awaiting_answer" | "rejected" | "withdrawn" | "flagged";
 function outcomeFor(r: Random): Outcome {
   const x = r.next();
   if (x < 0.8) return "approved";
   if (x < 0.88) return "pending";
-  if (x < 0.92) return "changes_requested";
+  if (x < 0.92) return "awaiting_answer";
   if (x < 0.96) return "rejected";
   if (x < 0.98) return "withdrawn";
   return "flagged";
@@ -263,12 +263,12 @@ export async function seedResults(
             note: "The method card does not match the log.",
             createdAt: later(20),
           });
-        if (outcome === "changes_requested")
+        if (outcome === "awaiting_answer")
           events.push({
             resultId,
             actorId: moderatorId,
             fromStatus: "pending",
-            toStatus: "changes_requested",
+            toStatus: "awaiting_answer",
             note: "Please state where the temperature probe sat.",
             createdAt: later(20),
           });

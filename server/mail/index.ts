@@ -1,2 +1,2 @@
-export { sendMail, flushOutbox } from "./outbox";
+export { outboxMessage } from "./outbox";
 export * from "./templates";

@@ -1,15 +1,17 @@
-// sendMail: every message is written to the mail_outbox table first and sent at once; when the relay is
-// down it stays queued with attempts, lastError and nextAttemptAt (exponential backoff), and flushOutbox()
-// — called after each send and by scripts/flush-mail.ts — retries what is due. A mail outage never loses
-// a message, and never fails the request that caused it.
+// Mail never runs inside a request. A request (or the transaction that causes the mail: a submission, a
+// decision) writes rows to mail_outbox; the mail worker (scripts/mail-worker.ts → ./worker.ts) claims the due
+// ones and sends them through SMTP. A failed send waits with exponential backoff (1 min doubling to 6 h) for
+// MAX_ATTEMPTS attempts, then stays visible to admins at /admin/mail, who can send it again.
 import "server-only";
 import {
   claimDueMail,
-  enqueueClaimedMail,
   markMailFailed,
   markMailSent,
+  queueMail as queueRows,
+  type NewOutboxMessage,
   type OutboxMessage,
 } from "@/db/mutations/mail-outbox";
+import { db } from "@/db";
 import { env } from "@/server/env";
 import { mailTransport, type MailTransport } from "./transport";
 import type { MailContent } from "./templates";
@@ -25,8 +27,22 @@ export function retryDelayS(failedAttempts: number): number {
   return Math.min(MAX_RETRY_S, FIRST_RETRY_S * 2 ** (n - 1));
 }
 
-export type SendOptions = { transport?: MailTransport; sensitive?: boolean; flush?: boolean };
-export type SendOutcome = { id: number; sent: boolean; error?: string };
+/** An outbox row for a message; queue it in the transaction that causes it. */
+export function outboxMessage(to: string, content: MailContent, sensitive = false): NewOutboxMessage {
+  return { to, subject: content.subject, text: content.text, html: content.html, sensitive };
+}
+
+/**
+ * Queue one message on its own (nothing else to commit with it, e.g. a sign-in link). Returns at once; the
+ * worker sends it when the insert commits.
+ */
+export async function queueMail(to: string, content: MailContent, opts: { sensitive?: boolean } = {}): Promise<number> {
+  const [id] = await queueRows(db, [outboxMessage(to, content, opts.sensitive ?? false)]);
+  if (id === undefined) throw new Error("mail outbox insert returned nothing");
+  return id;
+}
+
+type SendOutcome = { id: number; sent: boolean; error?: string };
 
 async function attempt(row: OutboxMessage, transport: MailTransport): Promise<SendOutcome> {
   try {
@@ -49,30 +65,24 @@ async function attempt(row: OutboxMessage, transport: MailTransport): Promise<Se
   }
 }
 
-/** Queue a message and try to send it now. Resolves either way; `sent` says whether it left already. */
-export async function sendMail(to: string, content: MailContent, opts: SendOptions = {}): Promise<SendOutcome> {
-  const transport = opts.transport ?? mailTransport();
-  const row = await enqueueClaimedMail(
-    { to, subject: content.subject, text: content.text, html: content.html, sensitive: opts.sensitive ?? false },
-    LEASE_S,
-  );
-  const outcome = await attempt(row, transport);
-  // The relay just worked: a good moment to send anything still waiting.
-  if (outcome.sent && (opts.flush ?? true)) await flushOutbox({ transport }).catch(() => undefined);
-  return outcome;
-}
-
-/** Retry due messages (oldest first). Safe to run from several processes at once. */
-export async function flushOutbox(
-  opts: { transport?: MailTransport; limit?: number } = {},
+/**
+ * Send the due messages once, oldest first, a few at a time; safe to run from several processes at once.
+ * The worker calls this whenever it wakes; `npm run mail:flush` calls it once.
+ */
+export async function deliverDueMail(
+  opts: { transport?: MailTransport; limit?: number; concurrency?: number } = {},
 ): Promise<{ sent: number; failed: number }> {
   const transport = opts.transport ?? mailTransport();
   const rows = await claimDueMail(opts.limit ?? 50, LEASE_S, MAX_ATTEMPTS);
   let sent = 0;
   let failed = 0;
-  for (const row of rows) {
-    if ((await attempt(row, transport)).sent) sent++;
-    else failed++;
-  }
+  const queue = [...rows];
+  const lanes = Array.from({ length: Math.min(opts.concurrency ?? 4, queue.length) }, async () => {
+    for (let row = queue.shift(); row; row = queue.shift()) {
+      if ((await attempt(row, transport)).sent) sent++;
+      else failed++;
+    }
+  });
+  await Promise.all(lanes);
   return { sent, failed };
 }

@@ -1,10 +1,13 @@
-// Answering a change request: the contributor edits the method card (and may upload a corrected log or
+// Answering a moderator's request: the contributor edits the method card (and may upload a corrected log or
 // add photos); the figures are recomputed from the stored log and the result goes back to pending with a
-// review event (changes_requested → pending) carrying their answer. Earlier events stay as they were.
+// review event (awaiting_answer → pending) carrying their answer, and a receipt queued in the same
+// transaction. Earlier events stay as they were.
 import "server-only";
 import { getResultForEdit } from "@/db/queries/submissions";
 import { resubmitOwnResult } from "@/db/mutations/results";
 import { afterResponse } from "@/server/after-response";
+import { answerReceiptMail, outboxMessage } from "@/server/mail";
+import { ownResultUrl } from "@/server/links";
 import { AppError } from "@/lib/errors";
 import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { assertSubmissionsOpen } from "./pause";
@@ -17,8 +20,8 @@ export async function resubmitResultFor(input: ResubmitResultInput, user: Sessio
   const current = await getResultForEdit(input.resultId);
   // Someone else's result answers exactly like a missing one: no existence oracle.
   if (!current || current.contributorId !== user.id) throw new AppError("not_found", "That result does not exist.");
-  if (current.status !== "changes_requested")
-    throw new AppError("conflict", "Only a result with changes requested can be resubmitted.");
+  if (current.status !== "awaiting_answer")
+    throw new AppError("conflict", "Only a result waiting for your answer can be answered.");
   if (current.photoKeys.length + input.photoKeys.length > MAX_PHOTOS) {
     throw new AppError("validation", "Too many photos.", {
       photoKeys: [`A result can have at most ${MAX_PHOTOS} photos; it has ${current.photoKeys.length} already.`],
@@ -49,7 +52,18 @@ export async function resubmitResultFor(input: ResubmitResultInput, user: Sessio
       },
       current.id,
     );
-    await resubmitOwnResult(current.id, user.id, fields, input.note);
+    const receipt = user.email
+      ? outboxMessage(
+          user.email,
+          answerReceiptMail({
+            resultId: current.id,
+            packTitle: facts.title,
+            resultUrl: ownResultUrl(current.id),
+            answeredAt: new Date(),
+          }),
+        )
+      : null;
+    await resubmitOwnResult(current.id, user.id, fields, input.note, receipt);
   } catch (err) {
     await files.undo();
     throw err;

@@ -1,12 +1,12 @@
 // Submitting a result, start to end: idempotency, rate limit, pack, files, figures recomputed from the
 // stored log, one transaction (result + proposal + review event + receipt in the outbox), then — after
-// the response — the receipt is sent and the drafts are removed. Mail never blocks or undoes it.
+// the response — the drafts are removed. The mail worker sends the receipt; no request waits on SMTP.
 import "server-only";
 import { findResultByIdempotencyKey } from "@/db/queries/submissions";
 import { createSubmission } from "@/db/mutations/results";
 import { afterResponse } from "@/server/after-response";
-import { env } from "@/server/env";
-import { flushOutbox, submissionReceiptMail } from "@/server/mail";
+import { outboxMessage, submissionReceiptMail } from "@/server/mail";
+import { ownResultUrl } from "@/server/links";
 import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { assertSubmissionsOpen } from "./pause";
 import type { SessionUser } from "@/server/session";
@@ -37,15 +37,14 @@ async function submitNew(input: SubmitResultInput, user: SessionUser): Promise<S
   await checkFiles(input.log.key, input.photoKeys, user.id);
   const figured = await analyseForCard(input.log.key, facts, input.method);
   const files = await moveFiles(input.log.key, figured.sha256, input.photoKeys);
-  const receipt = user.email
-    ? {
-        to: user.email,
-        ...submissionReceiptMail({
-          packTitle: facts.title,
-          resultUrl: `${env().APP_URL}/account`,
-          submittedAt: new Date(),
-        }),
-      }
+  const email = user.email;
+  const submittedAt = new Date();
+  const receipt = email
+    ? (resultId: number) =>
+        outboxMessage(
+          email,
+          submissionReceiptMail({ resultId, packTitle: facts.title, resultUrl: ownResultUrl(resultId), submittedAt }),
+        )
     : null;
   let out: Submitted;
   try {
@@ -65,9 +64,6 @@ async function submitNew(input: SubmitResultInput, user: SessionUser): Promise<S
     await files.undo();
     throw err;
   }
-  afterResponse(async () => {
-    await files.discardDrafts();
-    await flushOutbox();
-  });
+  afterResponse(files.discardDrafts);
   return out;
 }

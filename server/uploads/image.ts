@@ -31,3 +31,28 @@ export function detectImage(bytes: Uint8Array): DetectedImage | null {
   const hit = SIGNATURES.find((s) => s.test(bytes));
   return hit ? { ext: hit.ext, contentType: hit.contentType } : null;
 }
+
+/** Pictures larger than this many pixels are refused before decoding (a decompression bomb's defence). */
+const MAX_PIXELS = 60_000_000;
+
+/**
+ * The picture as it is stored: decoded and encoded again in the same format by sharp (libvips), turned upright
+ * from its EXIF orientation first. Nothing of the original's metadata survives — EXIF (with any GPS position
+ * and camera serial), XMP, IPTC and comments are dropped, as sharp does unless asked to keep them. Null when
+ * the bytes do not decode as the picture they claim to be.
+ */
+export async function cleanImage(bytes: Uint8Array, image: DetectedImage): Promise<Uint8Array | null> {
+  const sharp = (await import("sharp")).default;
+  try {
+    const pipeline = sharp(bytes, { failOn: "error", limitInputPixels: MAX_PIXELS }).rotate();
+    const out =
+      image.ext === "jpg"
+        ? pipeline.jpeg({ quality: 90, mozjpeg: true })
+        : image.ext === "png"
+          ? pipeline.png({ compressionLevel: 9 })
+          : pipeline.webp({ quality: 90 });
+    return new Uint8Array(await out.toBuffer());
+  } catch {
+    return null;
+  }
+}

@@ -55,12 +55,15 @@ for (const scheme of ["light", "dark"] as const) {
 // The signed-in areas too, as a moderator (the admin pages are scanned in admin-roles.spec.ts, where an
 // admin is already signed in: sign-in links are rate-limited per address).
 test("no serious accessibility violations in the signed-in areas (account, submit, review)", async ({ page }) => {
+  // A sign-in and six full scans (the review page's chart among them) on a shared 2-core machine.
+  test.setTimeout(150_000);
   await signIn(page, "moderator2@sagline.localhost");
   await page.goto("/review");
   const first = await page.locator("[data-queue-link]").first().getAttribute("href");
   const found: string[] = [];
   for (const path of [
     "/account",
+    "/account/public-name",
     "/account/bench-profiles",
     "/submit",
     "/review",

@@ -1,8 +1,8 @@
 import { expect, test } from "@playwright/test";
-import { linkFromCatcher, requestLink } from "./sign-in-helpers";
+import { choosePublicName, linkFromCatcher, requestLink } from "./sign-in-helpers";
 
-// A new contributor signs in with the link from the caught mail, names themselves, keeps a bench profile,
-// and signs out.
+// A new contributor signs in with the link from the caught mail, chooses how published results name them
+// (explicitly: an empty name is not "anonymous"), keeps a bench profile, and signs out.
 test("sign in through the caught mail, create and edit a bench profile, sign out", async ({ page }) => {
   const email = `e2e-bench-${Date.now()}@sagline.localhost`;
 
@@ -24,6 +24,11 @@ test("sign in through the caught mail, create and edit a bench profile, sign out
   await expect(page.getByRole("heading", { name: "Your Sagline sign-in link" })).toBeVisible();
   await page.getByTestId("mail-body").getByRole("link").first().click();
 
+  // A first sign-in asks for the public name before going on; saving without a choice explains itself.
+  await expect(page).toHaveURL(/\/account\/public-name\?callbackUrl=/);
+  await page.getByRole("button", { name: "Save and continue" }).click();
+  await expect(page.getByText("Choose how your published results name you.")).toBeVisible();
+  await choosePublicName(page, "Shed Tester");
   await expect(page).toHaveURL(/\/account\/bench-profiles$/);
   await expect(page.getByRole("heading", { name: "Bench profiles", level: 1 })).toBeVisible();
   await expect(page.getByTestId("account-menu")).toContainText("Account");
@@ -31,9 +36,10 @@ test("sign in through the caught mail, create and edit a bench profile, sign out
   // Name shown on results.
   await page.getByRole("navigation", { name: "Account" }).getByRole("link", { name: "Overview" }).click();
   await expect(page.getByText(`Signed in as ${email}`)).toBeVisible();
+  await expect(page.getByLabel("Display name")).toHaveValue("Shed Tester");
   await page.getByLabel("Display name").fill("Heron Test Bench");
-  await page.getByRole("button", { name: "Save profile" }).click();
-  await expect(page.getByText("Profile saved.")).toBeVisible();
+  await page.getByRole("button", { name: "Save", exact: true }).click();
+  await expect(page.getByText("Saved: your published results now name you as chosen.")).toBeVisible();
 
   // A bench profile: the form explains what is missing, then saves.
   await page.getByRole("link", { name: "New bench profile" }).click();
@@ -82,7 +88,7 @@ test("the same sign-in link cannot be used twice", async ({ page, browser }) => 
   const since = await requestLink(page, email);
   const link = await linkFromCatcher(email, since);
   await page.goto(link);
-  await expect(page).toHaveURL(/\/account$/);
+  await expect(page).toHaveURL(/\/account\/public-name\?callbackUrl=.*%2Faccount$/);
   const other = await browser.newContext();
   const second = await other.newPage();
   await second.goto(link);
@@ -91,34 +97,36 @@ test("the same sign-in link cannot be used twice", async ({ page, browser }) => 
   await other.close();
 });
 
-// A shopper watches a pack from its (static) page: signed out the control asks them to sign in and brings
-// them back; signed in it is a real toggle, and the watch shows on the account page, where it can be undone.
-test("watch a pack from its page after signing in, see it on the account page, and unwatch it there", async ({
+// A shopper asks for e-mails about new results on a pack from its (static) page: signed out the control asks
+// them to sign in and brings them back; signed in it is a real toggle saying what they will be told about, and
+// the request shows on the account page, where it can be stopped.
+test("ask for a pack's new-result e-mails after signing in, see it on the account page, and stop it there", async ({
   page,
 }) => {
-  const email = `e2e-watch-${Date.now()}@sagline.localhost`;
+  const email = `e2e-packmail-${Date.now()}@sagline.localhost`;
   const packPath = "/packs/ashcombe-cells-ridge-1800-5s-130c";
   await page.goto(packPath);
   const title = (await page.getByRole("heading", { level: 1 }).textContent())?.trim() ?? "";
-  await page.getByRole("link", { name: /^Watch .*sign in/ }).click();
+  await page.getByRole("link", { name: /^E-mail me new results for .*sign in first/ }).click();
   await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Fpacks%2Fashcombe-cells-ridge-1800-5s-130c$/);
   await page.goto(await linkFromCatcher(email, await requestLink(page, email, page.url())));
+  await choosePublicName(page, null);
   await expect(page).toHaveURL(new RegExp(`${packPath}$`));
 
-  const watch = page.getByRole("button", { name: "Watch this pack" });
-  await expect(watch).toHaveAttribute("aria-pressed", "false");
-  await watch.click();
-  const watching = page.getByRole("button", { name: /Watching/ });
-  await expect(watching).toHaveAttribute("aria-pressed", "true");
-  // The state is the server's, not the button's: a reload still says watching.
+  const off = page.getByRole("button", { name: "E-mail me new results for this pack" });
+  await expect(off).toHaveAttribute("aria-pressed", "false");
+  await off.click();
+  const on = page.getByRole("button", { name: "E-mails on: new results for this pack · stop" });
+  await expect(on).toHaveAttribute("aria-pressed", "true");
+  // The state is the server's, not the button's: a reload still says on.
   await page.reload();
-  await expect(page.getByRole("button", { name: /Watching/ })).toBeVisible();
+  await expect(on).toBeVisible();
 
   await page.goto("/account");
-  const list = page.getByTestId("watch-list");
+  const list = page.getByTestId("pack-emails-list");
   await expect(list.getByRole("link", { name: title })).toBeVisible();
-  await list.getByRole("button", { name: "Unwatch" }).click();
-  await expect(page.getByText("You are not watching any packs.")).toBeVisible();
+  await list.getByRole("button", { name: `Stop e-mails about ${title}` }).click();
+  await expect(page.getByText("No e-mails about packs.")).toBeVisible();
   await page.goto(packPath);
-  await expect(page.getByRole("button", { name: "Watch this pack" })).toBeVisible();
+  await expect(page.getByRole("button", { name: "E-mail me new results for this pack" })).toBeVisible();
 });

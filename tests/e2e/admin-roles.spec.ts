@@ -62,7 +62,7 @@ test("an admin sets a site notice and pauses submissions; pages show both at onc
   await signIn(page, "admin@sagline.localhost");
   // The admin pages pass the accessibility scan (see accessibility.spec.ts for the rest of the site).
   const found: string[] = [];
-  for (const path of ["/admin/users", "/admin/catalogue", "/admin/settings"]) {
+  for (const path of ["/admin/users", "/admin/catalogue", "/admin/mail", "/admin/settings"]) {
     await page.goto(path);
     found.push(...(await seriousViolations(page, path)));
   }

@@ -1,10 +1,10 @@
-// Issue 8's remaining journeys, each from the freshly seeded database: a contributor answers a change
+// Issue 8's remaining journeys, each from the freshly seeded database: a contributor answers a moderator's
 // request, a moderator resolves a reader flag, a shopper downloads a filtered CSV, a journalist downloads a
 // chart as PNG and SVG, and two keyboard-only walks (the packs table, the first steps of /submit).
 import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
 import { rows, settled } from "./packs-table-helpers";
-import { signIn } from "./sign-in-helpers";
+import { choosePublicName, signIn } from "./sign-in-helpers";
 
 /** RFC 4180 records (quoted fields may hold commas, doubled quotes and line breaks); every line ends in CRLF. */
 function parseCsv(text: string): string[][] {
@@ -84,7 +84,7 @@ async function expectVisibleFocus(page: Page) {
   expect(style.outline || style.ring, "the focused control shows a focus indicator").toBe(true);
 }
 
-test("a contributor answers a change request and the result is back in the queue with its history", async ({
+test("a contributor answers a moderator's request and the result is back in the queue with its history", async ({
   page,
 }) => {
   await signIn(page, "slipway@sagline.localhost");
@@ -92,17 +92,17 @@ test("a contributor answers a change request and the result is back in the queue
   const item = page
     .getByTestId("my-results")
     .getByRole("listitem")
-    .filter({ hasText: "Changes requested" })
-    .filter({ has: page.getByRole("link", { name: "Answer the change request" }) })
+    .filter({ hasText: "Waiting for your answer" })
+    .filter({ has: page.getByRole("link", { name: "Answer the moderator" }) })
     .first();
   const testId = (await item.getAttribute("data-testid")) ?? "";
   const resultId = testId.replace("my-result-", "");
   expect(resultId).toMatch(/^\d+$/);
 
-  await item.getByRole("link", { name: "Answer the change request" }).click();
+  await item.getByRole("link", { name: "Answer the moderator" }).click();
   await expect(page).toHaveURL(new RegExp(`/submit/${resultId}$`));
-  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answer a change request");
-  await expect(page.getByText("A moderator asked for a change")).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answer the moderator");
+  await expect(page.getByTestId("moderator-request")).toBeVisible();
 
   // The method card arrives as stored; say where the probe sat and correct the ambient.
   await expect(page.getByLabel(/^Equipment/)).not.toHaveValue("");
@@ -110,24 +110,26 @@ test("a contributor answers a change request and the result is back in the queue
   await page.getByLabel("Notes (optional)").fill("Probe taped to the middle of the widest face, under the wrap.");
   // The answer is required.
   await page.getByLabel(/I declare that these are honest measurements/).check();
-  await page.getByRole("button", { name: "Resubmit for review" }).click();
+  await page.getByRole("button", { name: "Send my answer" }).click();
   await expect(page.getByText("Say what you changed, for the moderator.")).toBeVisible();
   await page.getByLabel("Your answer to the moderator").fill("Added where the probe sat; ambient corrected to 22 °C.");
-  await page.getByRole("button", { name: "Resubmit for review" }).click();
+  await page.getByRole("button", { name: "Send my answer" }).click();
 
-  await expect(page).toHaveURL(/\/account$/);
+  await expect(page).toHaveURL(new RegExp(`/account/results/${resultId}\\?sent=answer$`));
+  await expect(page.getByTestId("answer-sent")).toContainText(`result #${resultId}`);
+  await page.goto("/account");
   const mine = page.getByTestId(`my-result-${resultId}`);
-  await expect(mine).toContainText("Pending review");
+  await expect(mine).toContainText("Waiting for review");
   await expect(mine).toContainText("ambient 22 °C");
-  await expect(mine.getByRole("link", { name: "Answer the change request" })).toHaveCount(0);
+  await expect(mine.getByRole("link", { name: "Answer the moderator" })).toHaveCount(0);
   await mine.getByText(/^Review history/).click();
   const history = mine.getByRole("listitem");
-  await expect(history.last()).toContainText("Changes requested → Pending review");
-  await expect(history.nth(-2)).toContainText("Pending review → Changes requested");
+  await expect(history.last()).toContainText("Waiting for your answer → Waiting for review");
+  await expect(history.nth(-2)).toContainText("Waiting for review → Waiting for your answer");
 
   // It can no longer be edited: it waits for a moderator again.
   await page.goto(`/submit/${resultId}`);
-  await expect(page.getByText(/only a result with changes requested can be edited/)).toBeVisible();
+  await expect(page.getByText(/only a result waiting for your answer can be edited/)).toBeVisible();
 });
 
 test("a moderator dismisses a reader's flag: the result stayed published throughout and its open check goes", async ({
@@ -158,11 +160,11 @@ test("a moderator dismisses a reader's flag: the result stayed published through
     .getByRole("listitem")
     .filter({ has: page.getByRole("link", { name: `result #${resultId}`, exact: true }) });
   await row
-    .getByLabel("Note (required when noting a correction or taking the result out)")
+    .getByLabel("Note (required for “keep, with a note” and for taking the result out)")
     .fill("Capacity checked against the log; it matches.");
   const flagId = ((await row.getByRole("form").getAttribute("aria-label")) ?? "").replace("Resolve flag ", "");
   expect(flagId).toMatch(/^\d+$/);
-  await row.getByRole("button", { name: "Dismiss, result stays" }).click();
+  await row.getByRole("button", { name: "Keep the result" }).click();
   // The action refreshes the queue: the resolved flag leaves it (and its form with it)…
   await expect(page.getByRole("link", { name: `result #${resultId}`, exact: true })).toHaveCount(0);
   // …while the confirmation, outside the list, stays: it names the flag, the result and the outcome, and
@@ -170,7 +172,7 @@ test("a moderator dismisses a reader's flag: the result stayed published through
   const done = page.getByRole("status").filter({ hasText: `Flag #${flagId} on result #${resultId}` });
   await expect(done).toBeVisible();
   await expect(done).toContainText(
-    "resolved: dismissed, result kept. It stays published and counted, and no longer shows an open check.",
+    "resolved: result kept. It stays published and counted, and no longer shows an open check.",
   );
   await expect(done).toBeFocused();
   await expect(page.getByTestId("flag-queue").getByText(`Flag #${flagId} on`)).toHaveCount(0);
@@ -308,6 +310,7 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
 
 test("keyboard only: the first steps of /submit, from the pack search to the log upload", async ({ page }) => {
   await signIn(page, `e2e-keys-${Date.now()}@sagline.localhost`);
+  await choosePublicName(page, "Keyboard Bench");
   await page.goto("/submit");
   await page.evaluate(() => localStorage.clear());
   await page.reload();

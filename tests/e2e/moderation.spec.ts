@@ -74,13 +74,13 @@ test("a moderator approves one flagged result, rejects another, and the approved
   expect(await approvedOnDataPage(page)).toBe(approvedBefore + 1);
   expect(await approvedInApi(page)).toBe(approvedBefore + 1);
 
-  // Reject the second with a reason from the list.
+  // Do not accept the second, with a reason from the list.
   await page.goto(`/review/${rejectId}`);
   await page.getByLabel("Reason").selectOption("wrong-data");
   await page.getByLabel("Note (required for “other”)").fill("The current channel reads twice the load.");
-  await page.getByRole("button", { name: "Reject" }).click();
-  await expect(page.getByTestId("decision-done")).toContainText(/rejected/i);
-  await expect(page.getByTestId("result-status")).toHaveText("Rejected");
+  await page.getByRole("button", { name: "Do not accept" }).click();
+  await expect(page.getByTestId("decision-done")).toContainText(/not accepted/i);
+  await expect(page.getByTestId("result-status")).toHaveText("Not accepted");
   await expect(page.getByTestId("review-history")).toContainText("Wrong data");
 
   // Both have left the queue.
@@ -88,7 +88,7 @@ test("a moderator approves one flagged result, rejects another, and the approved
   await expect(page.locator(`[data-result-id="${approveId}"]`)).toHaveCount(0);
   await expect(page.locator(`[data-result-id="${rejectId}"]`)).toHaveCount(0);
 
-  // A rejection publishes nothing: /data still counts one more than before, not two.
+  // Not accepting publishes nothing: /data still counts one more than before, not two.
   expect(await approvedOnDataPage(page)).toBe(approvedBefore + 1);
 
   // The approved result is on the public pack page.

@@ -31,3 +31,19 @@ export async function signIn(page: Page, email: string, from = "/sign-in"): Prom
   await page.goto(await linkFromCatcher(email, since));
   await expect(page.getByTestId("account-menu")).toContainText("Account");
 }
+
+/**
+ * A first sign-in lands on the choice of public name (with the page the person was heading to behind it):
+ * choose a display name (or anonymity when `name` is null) and go on.
+ */
+export async function choosePublicName(page: Page, name: string | null): Promise<void> {
+  await expect(page).toHaveURL(/\/account\/public-name\?callbackUrl=/);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("How should your results name you?");
+  if (name === null) await page.getByLabel(/^Anonymously/).check();
+  else {
+    await page.getByLabel("With a name I choose, shown beside each published result").check();
+    await page.getByLabel("Display name").fill(name);
+  }
+  await page.getByRole("button", { name: "Save and continue" }).click();
+  await expect(page).not.toHaveURL(/\/account\/public-name/);
+}

@@ -1,7 +1,8 @@
-// A contributor's journey: sign in through the mailed link (read from the local mail catcher), keep a
-// bench profile, submit a result with a log upload, and find it waiting for review in /account.
+// A contributor's journey: sign in through the mailed link (read from the local mail catcher), choose a public
+// name, keep a bench profile, submit a result with a log upload, and follow it by its number.
 import { expect, test, type Page } from "@playwright/test";
 import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
+import { choosePublicName } from "./sign-in-helpers";
 
 function log4s(): Buffer {
   const { rows } = generateLog({
@@ -41,6 +42,7 @@ test("a new contributor signs in by e-mail, picks a bench profile, submits a res
 }) => {
   const email = `e2e-${Date.now()}@test.sagline.localhost`;
   await signInByMail(page, email, "/submit");
+  await choosePublicName(page, "Shed Bench Nine");
   await expect(page).toHaveURL(/\/submit$/);
 
   // A bench profile first, so the method card can be filled from it.
@@ -87,21 +89,30 @@ test("a new contributor signs in by e-mail, picks a bench profile, submits a res
 
   // Step 4: declaration and submit (a double click still makes one result).
   await page.getByLabel(/I declare that these are honest measurements/).check();
+  await expect(page.getByTestId("submit-summary")).toContainText("shed-run-1.csv");
   await page.getByRole("button", { name: "Submit the result" }).dblclick();
-  await expect(page.getByTestId("submit-done")).toContainText("waiting for review");
+  const done = page.getByTestId("submit-done");
+  await expect(done).toContainText(/result #\d+ is waiting for review/);
+  const resultId = /result #(\d+)/.exec((await done.textContent()) ?? "")?.[1] ?? "";
 
-  await page.getByRole("link", { name: "Go to your account" }).click();
-  const mine = page.getByTestId("my-results").getByRole("listitem").filter({ hasText: "Pending review" });
+  await page.getByRole("link", { name: `Follow result #${resultId}` }).click();
+  await expect(page).toHaveURL(new RegExp(`/account/results/${resultId}$`));
+  await expect(page.getByTestId("own-status")).toHaveText("Waiting for review");
+  await page.goto("/account");
+  const mine = page.getByTestId("my-results").getByRole("listitem").filter({ hasText: "Waiting for review" });
   await expect(mine).toHaveCount(1);
+  await expect(mine.getByRole("link", { name: new RegExp(`^Result #${resultId} `) })).toHaveAttribute(
+    "href",
+    `/account/results/${resultId}`,
+  );
 
-  // The receipt went through the mail catcher. It is sent after the response, so the page is loaded again
-  // until it shows up.
+  // The receipt went through the mail worker to the mail catcher, with the result's number.
   await expect(async () => {
     await page.goto("/dev/mail");
     await expect(
       page
         .getByTestId("caught-mail")
-        .getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result received`) }),
+        .getByRole("link", { name: new RegExp(`${email.replace(/[.@+]/g, "\\$&")}.*Result #${resultId} received`) }),
     ).toBeVisible({ timeout: 1000 });
   }).toPass({ timeout: 15_000 });
 });

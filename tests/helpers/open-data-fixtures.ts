@@ -150,7 +150,7 @@ export async function seedOpenData(prefix: string) {
       r(p2.id, "approved", 30, "@SUM(A1) warm room"),
       r(p3.id, "approved", 50, "=cmd|' /C calc'!A0"),
       r(p3.id, "withdrawn", 99),
-      r(p3.id, "changes_requested", 98),
+      r(p3.id, "awaiting_answer", 98),
     ])
     .returning({ id: results.id, status: results.status });
   return { makers: [m1, m2], packs: [p1, p2, p3], group, results: rows };

@@ -1,5 +1,6 @@
 // Looks into the S3 stand-in's test bucket (integration tests set S3_BUCKET=sagline-test).
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
+import sharp from "sharp";
 import { env } from "@/server/env";
 import { getObjectText, storageClient } from "@/server/storage";
 
@@ -10,8 +11,22 @@ export async function keysUnder(prefix: string): Promise<string[]> {
 
 export { getObjectText };
 
-/** The smallest byte strings that start like each picture format (enough for the magic-byte check). */
-export const PNG_BYTES = new Uint8Array([
-  0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 1, 2, 3, 4,
-]);
-export const JPEG_BYTES = new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46, 0, 1, 2, 3]);
+const swatch = () => sharp({ create: { width: 8, height: 4, channels: 3, background: "#e08a12" } });
+
+/** Small real pictures (uploads are decoded and encoded again, so a picture's first bytes alone do not pass). */
+export const PNG_BYTES = new Uint8Array(await swatch().png().toBuffer());
+export const JPEG_BYTES = new Uint8Array(await swatch().jpeg().toBuffer());
+
+/** The text a camera would leave in a photo: who took it and where. Uploads must not keep any of it. */
+export const EXIF_SECRETS = { artist: "Private Bench Owner 4711", gps: "GPSLatitude" } as const;
+/** An 8×4 JPEG with EXIF (an artist, a GPS position) saying "rotate 90° to show upright" (orientation 6). */
+export const JPEG_WITH_EXIF = new Uint8Array(
+  await swatch()
+    .jpeg()
+    .withExif({
+      IFD0: { Artist: EXIF_SECRETS.artist },
+      IFD3: { GPSLatitudeRef: "N", GPSLatitude: "51/1 30/1 0/1" },
+    })
+    .withMetadata({ orientation: 6 })
+    .toBuffer(),
+);

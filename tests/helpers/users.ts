@@ -1,4 +1,5 @@
-// Test users and real database sessions (the same rows Auth.js writes after a sign-in link is used).
+// Test users and real database sessions (the same rows Auth.js writes after a sign-in link is used). Test
+// users have chosen their public name (a display name), as a contributor does on their first visit.
 import { randomBytes, randomUUID } from "node:crypto";
 import { db } from "@/db";
 import { sessions, users, type UserRole } from "@/db/schema";
@@ -7,7 +8,7 @@ export async function createUser(role: UserRole, label: string = role): Promise<
   const email = `${label}-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
   const [row] = await db
     .insert(users)
-    .values({ email, role, displayName: `Test ${label}` })
+    .values({ email, role, displayName: `Test ${label}`, publicNameChosenAt: new Date() })
     .returning({ id: users.id, email: users.email });
   if (!row?.email) throw new Error("user insert returned nothing");
   return { id: row.id, email: row.email };

@@ -64,7 +64,11 @@ describe("tagged caching of the public API", () => {
 
     const pending = fx.results.find((r) => r.status === "pending");
     if (!pending) throw new Error("fixture has no pending result");
-    await decideResult(moderatorId, pending.id, { kind: "approve", note: null });
+    await decideResult(moderatorId, pending.id, {
+      kind: "approve",
+      note: null,
+      catalogue: { intoPackId: null, intoMakerId: null },
+    });
 
     expect(await total(path)).toBe(before + 1);
     const groupAfter = (await (

@@ -3,7 +3,7 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { auditEvents, makers, packs, results, watches } from "@/db/schema";
+import { auditEvents, makers, packEmails, packs, results } from "@/db/schema";
 import { requestState } from "../helpers/next-mocks";
 import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser, signedIn } from "../helpers/users";
@@ -91,20 +91,20 @@ describe("catalogue admin", () => {
     expect(res).toMatchObject({ ok: false, code: "validation", fieldErrors: { labelledBurstC: expect.any(Array) } });
   });
 
-  it("merges a duplicate pack: results and watches move, the duplicate is kept as merged, the merge is audited", async () => {
+  it("merges a duplicate pack: results and new-result e-mail requests move, the duplicate is kept as merged, the merge is audited", async () => {
     const u = await createUser("contributor");
     const a = await makePack();
     const b = await makePack();
     const r1 = await makeResult({ packId: a.pack.id, contributorId: u.id, status: "approved" });
     const r2 = await makeResult({ packId: a.pack.id, contributorId: u.id, status: "withdrawn" });
-    await db.insert(watches).values({ userId: u.id, packId: a.pack.id });
+    await db.insert(packEmails).values({ userId: u.id, packId: a.pack.id });
     const res = await mergePacks(null, { sourceId: a.pack.id, targetId: b.pack.id });
     expect(res).toEqual({ ok: true, data: { movedResults: 2 } });
     const moved = await db.select({ packId: results.packId }).from(results).where(eq(results.packId, b.pack.id));
     expect(moved).toHaveLength(2);
     const [src] = await db.select().from(packs).where(eq(packs.id, a.pack.id));
     expect(src).toMatchObject({ status: "merged", mergedIntoId: b.pack.id });
-    expect(await db.select().from(watches).where(eq(watches.packId, b.pack.id))).toHaveLength(1);
+    expect(await db.select().from(packEmails).where(eq(packEmails.packId, b.pack.id))).toHaveLength(1);
     const [ev] = await audit("pack", a.pack.id);
     expect(ev).toMatchObject({ action: "pack.merge", data: { into: b.pack.id, movedResultIds: [r1.id, r2.id] } });
     expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(

@@ -21,7 +21,7 @@ import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCa
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
-type Status = "approved" | "pending" | "rejected" | "withdrawn" | "changes_requested";
+type Status = "approved" | "pending" | "rejected" | "withdrawn" | "awaiting_answer";
 type Spec = { pack: string; ambientC: number; status: Status; openCase?: boolean };
 const WARM = 22;
 const COLD = 8;
@@ -39,7 +39,7 @@ const SPECS: Spec[] = [
   { pack: "a2", ambientC: WARM, status: "withdrawn" },
   { pack: "a3", ambientC: COLD, status: "approved" },
   { pack: "a3", ambientC: COLD, status: "approved" },
-  { pack: "a3", ambientC: COLD, status: "changes_requested" },
+  { pack: "a3", ambientC: COLD, status: "awaiting_answer" },
   { pack: "b1", ambientC: WARM, status: "approved" },
   { pack: "b1", ambientC: WARM, status: "approved" },
   { pack: "b1", ambientC: COLD, status: "approved" },

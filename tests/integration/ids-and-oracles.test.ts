@@ -77,8 +77,8 @@ describe("ids are positive 32-bit integers everywhere", () => {
       (id: string) => ({ resultId: id, reason: "other", note: "why not" }),
     ],
     [
-      "@/app/(review)/review/[id]/actions/request-changes",
-      "requestChanges",
+      "@/app/(review)/review/[id]/actions/ask-contributor",
+      "askContributor",
       "moderator",
       (id: string) => ({ resultId: id, note: "Change it." }),
     ],
@@ -100,8 +100,8 @@ describe("ids are positive 32-bit integers everywhere", () => {
       "contributor",
       (id: string) => ({ id }),
     ],
-    ["@/app/actions/watch-pack", "watchPack", "contributor", (id: string) => ({ packId: id })],
-    ["@/app/actions/unwatch-pack", "unwatchPack", "contributor", (id: string) => ({ packId: id })],
+    ["@/app/actions/start-pack-emails", "startPackEmails", "contributor", (id: string) => ({ packId: id })],
+    ["@/app/actions/stop-pack-emails", "stopPackEmails", "contributor", (id: string) => ({ packId: id })],
     [
       "@/app/(admin)/admin/catalogue/actions/merge-makers",
       "mergeMakers",
@@ -147,7 +147,7 @@ describe("someone else's row answers like a missing one", () => {
     const { default: ResubmitPage } = await import("@/app/(contributor)/submit/[resultId]/page");
     const owner = await signedIn("contributor");
     const { pack } = await makePack();
-    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "changes_requested" });
+    const r = await makeResult({ packId: pack.id, contributorId: owner.id, status: "awaiting_answer" });
     requestState.token = tokens.contributor ?? null;
     for (const id of [String(r.id), "2000000000"])
       await expect(ResubmitPage({ params: Promise.resolve({ resultId: id }) })).rejects.toMatchObject({

@@ -1,12 +1,17 @@
-// The mail outbox: a message that cannot be sent stays queued with attempts, lastError and a backoff; a
-// later flush sends it through the local mail catcher; concurrent flushes never send twice.
+// The mail outbox: requests queue messages; the worker's step (deliverDueMail) sends them. A message that
+// cannot be sent stays queued with attempts, lastError and a backoff; a later step sends it through the local
+// mail catcher; concurrent steps never send twice; one given up on is listed for admins, who can send it again.
 import { describe, expect, it } from "vitest";
 import net from "node:net";
 import { randomUUID } from "node:crypto";
 import { eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { mailOutbox } from "@/db/schema";
-import { flushOutbox, MAX_ATTEMPTS, retryDelayS, sendMail } from "@/server/mail/outbox";
+import { auditEvents, mailOutbox } from "@/db/schema";
+import { retryMail } from "@/db/mutations/mail-outbox";
+import { listUndeliveredMail } from "@/db/queries/mail-outbox";
+import { deliverDueMail, MAX_ATTEMPTS, queueMail, retryDelayS } from "@/server/mail/outbox";
+import type { MailContent } from "@/server/mail/templates";
+import { createUser } from "../helpers/users";
 import { mailTransport, type MailTransport } from "@/server/mail/transport";
 import { signInLinkMail, submissionReceiptMail } from "@/server/mail/templates";
 import { newestMailFor } from "../helpers/mail";
@@ -22,7 +27,39 @@ async function closedPort(): Promise<number> {
 const catcher = () => mailTransport(process.env.SMTP_URL);
 const address = (label: string) => `${label}-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
 const receipt = (title: string) =>
-  submissionReceiptMail({ packTitle: title, resultUrl: "http://localhost:3011/results/1", submittedAt: new Date() });
+  submissionReceiptMail({
+    resultId: 1,
+    packTitle: title,
+    resultUrl: "http://localhost:3011/account/results/1",
+    submittedAt: new Date(),
+  });
+
+/**
+ * The worker's step until nothing due is left (other test files may have left due messages in this database;
+ * each step takes 50, oldest first).
+ */
+async function flushOutbox(opts: { transport: MailTransport }): Promise<{ sent: number; failed: number }> {
+  const total = { sent: 0, failed: 0 };
+  for (;;) {
+    const round = await deliverDueMail(opts);
+    total.sent += round.sent;
+    total.failed += round.failed;
+    if (round.sent + round.failed === 0) return total;
+  }
+}
+
+/** Queue a message and make one delivery attempt through `transport`, as the worker would on waking. */
+async function sendMail(
+  to: string,
+  content: MailContent,
+  opts: { transport: MailTransport; sensitive?: boolean },
+): Promise<{ id: number; sent: boolean }> {
+  const id = await queueMail(to, content, { sensitive: opts.sensitive ?? false });
+  const queued = await row(id);
+  expect(queued).toMatchObject({ sentAt: null, attempts: 0 }); // queuing sends nothing
+  await flushOutbox({ transport: opts.transport });
+  return { id, sent: (await row(id)).sentAt !== null };
+}
 
 async function row(id: number) {
   const [r] = await db.select().from(mailOutbox).where(eq(mailOutbox.id, id));
@@ -71,8 +108,8 @@ describe("mail outbox", () => {
     expect(r.attempts).toBe(3);
     expect(r.lastError).toBeNull();
     const caught = await newestMailFor(to);
-    expect(caught.subject).toBe("Result received: Queued Pack 1300");
-    expect(caught.html).toContain("View your result");
+    expect(caught.subject).toBe("Result #1 received: Queued Pack 1300");
+    expect(caught.html).toContain("Follow result #1");
   });
 
   it("wipes a sensitive message's body once it is sent, and only then", async () => {
@@ -131,6 +168,34 @@ describe("mail outbox", () => {
     const mine = sentTo.filter((t) => t.includes("race"));
     expect(mine).toHaveLength(6);
     expect(new Set(mine).size).toBe(6);
+  });
+
+  it("lists a message given up on for admins, with its error, and an admin's retry sends it (audited)", async () => {
+    const down = mailTransport(`smtp://127.0.0.1:${await closedPort()}`);
+    const to = address("given-up");
+    const outcome = await sendMail(to, receipt("Given Up Pack"), { transport: down });
+    await db.update(mailOutbox).set({ attempts: MAX_ATTEMPTS }).where(eq(mailOutbox.id, outcome.id));
+    const listed = await listUndeliveredMail(MAX_ATTEMPTS);
+    const mine = listed.rows.find((r) => r.id === outcome.id);
+    expect(mine).toMatchObject({ to, givenUp: true });
+    expect(mine?.lastError).toMatch(/ECONNREFUSED|connect/i);
+    expect(listed.givenUp).toBeGreaterThanOrEqual(1);
+
+    const admin = await createUser("admin");
+    expect(await retryMail(admin.id, outcome.id)).toEqual({ id: outcome.id, to });
+    expect(await row(outcome.id)).toMatchObject({ attempts: 0, sentAt: null });
+    const audit = await db
+      .select()
+      .from(auditEvents)
+      .where(eq(auditEvents.entityId, String(outcome.id)));
+    expect(audit.filter((a) => a.action === "mail.retry")).toMatchObject([
+      { actorId: admin.id, entityType: "mail", data: { to, attemptsBefore: MAX_ATTEMPTS } },
+    ]);
+    await flushOutbox({ transport: catcher() });
+    expect((await row(outcome.id)).sentAt).not.toBeNull();
+    expect((await newestMailFor(to)).subject).toBe("Result #1 received: Given Up Pack");
+    // A sent message is not sent again.
+    await expect(retryMail(admin.id, outcome.id)).rejects.toMatchObject({ code: "conflict" });
   });
 
   it("backs off exponentially from one minute up to six hours", () => {

@@ -146,7 +146,8 @@ describe("migrating flags into cases", () => {
     const labels = await q<{ l: string }>(
       `select enumlabel as l from pg_enum e join pg_type t on t.oid = e.enumtypid where t.typname = 'review_status' order by enumsortorder`,
     );
-    expect(labels.map((x) => x.l)).toEqual(["pending", "changes_requested", "approved", "rejected", "withdrawn"]);
+    // After every migration: 0005 (issue 14) renamed changes_requested to awaiting_answer.
+    expect(labels.map((x) => x.l)).toEqual(["pending", "awaiting_answer", "approved", "rejected", "withdrawn"]);
     const [index] = await q<{ def: string }>(
       `select indexdef as def from pg_indexes where indexname = 'results_group_public_idx'`,
     );

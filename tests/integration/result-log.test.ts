@@ -53,7 +53,11 @@ beforeAll(async () => {
   const res = await submitResult(null, submission(packId, log));
   if (!res.ok) throw new Error(`submit failed: ${res.error}`);
   published = res.data.resultId;
-  await decideResult(mod.id, published, { kind: "approve", note: null });
+  await decideResult(mod.id, published, {
+    kind: "approve",
+    note: null,
+    catalogue: { intoPackId: null, intoMakerId: null },
+  });
   const other = await submitResult(
     null,
     submission(packId, await uploadLog(me.token, sampleLog({ seed: 732 }).csv, "second.csv")),

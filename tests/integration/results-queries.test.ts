@@ -49,7 +49,7 @@ describe("published results", () => {
 
   it("says anonymous when the contributor chose it, never their name", async () => {
     const r = await getPublicResult(ids.anon);
-    expect(r?.contributor).toBe("anonymous");
+    expect(r?.contributor).toBe("Anonymous tester");
     expect(JSON.stringify(r)).not.toContain("Secret Name");
   });
 

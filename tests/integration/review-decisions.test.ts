@@ -1,13 +1,15 @@
-// Review decisions through the server actions: approve, reject (with a reason), request changes — each with
-// its review event in the same transaction, revalidation of the pack/maker/group tags after approval, and
-// e-mails caught by the local mail catcher. A moderator cannot decide their own result; two moderators
-// cannot both decide the same one.
+// Review decisions through the server actions: approve, reject (with a reason), send back for an answer —
+// each with its review event and its e-mails queued in the same transaction, revalidation of the
+// pack/maker/group tags after approval, and the e-mails the worker's step then sends caught by the local mail
+// catcher. Every e-mail about a result links to the contributor's own view of it. A moderator cannot decide
+// their own result; two moderators cannot both decide the same one.
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { asc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { results, reviewEvents, watches } from "@/db/schema";
+import { env } from "@/server/env";
+import { mailOutbox, packEmails, results, reviewEvents } from "@/db/schema";
 import { requestState } from "../helpers/next-mocks";
-import { caughtFor, newestMailFor } from "../helpers/mail";
+import { caughtFor, deliverQueuedMail, newestMailFor } from "../helpers/mail";
 import { makePack, makeResult } from "../helpers/review-fixtures";
 import { signedIn } from "../helpers/users";
 
@@ -18,7 +20,7 @@ vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCa
 
 const { approveResult } = await import("@/app/(review)/review/[id]/actions/approve-result");
 const { rejectResult } = await import("@/app/(review)/review/[id]/actions/reject-result");
-const { requestChanges } = await import("@/app/(review)/review/[id]/actions/request-changes");
+const { askContributor } = await import("@/app/(review)/review/[id]/actions/ask-contributor");
 
 async function events(resultId: number) {
   return db.select().from(reviewEvents).where(eq(reviewEvents.resultId, resultId)).orderBy(asc(reviewEvents.id));
@@ -37,20 +39,23 @@ describe("review decisions", () => {
     revalidate.revalidateTags.mockClear();
   });
 
-  it("approve publishes the result, writes the audit event, revalidates pack, maker and group tags, and e-mails contributor and watchers", async () => {
+  it("approve publishes the result, writes the audit event, revalidates pack, maker and group tags, and e-mails the contributor and the pack's e-mail list", async () => {
     const contributor = await signedIn("contributor", "tester");
-    const watcher = await signedIn("contributor", "watcher");
+    const reader = await signedIn("contributor", "reader");
     const mod = await signedIn("moderator");
     const { maker, pack } = await makePack();
-    await db.insert(watches).values([
-      { userId: watcher.id, packId: pack.id },
+    await db.insert(packEmails).values([
+      { userId: reader.id, packId: pack.id },
       { userId: contributor.id, packId: pack.id },
     ]);
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     requestState.token = mod.token;
 
     const res = await approveResult(null, { resultId: r.id, note: "Log and method card agree." });
-    expect(res).toEqual({ ok: true, data: { resultId: r.id, status: "approved" } });
+    expect(res).toEqual({ ok: true, data: { resultId: r.id, status: "approved", packSlug: pack.slug, queuedMail: 2 } });
+    // Both e-mails were queued with the decision, none sent by the request itself.
+    const queued = await db.select().from(mailOutbox).where(eq(mailOutbox.to, reader.email));
+    expect(queued).toMatchObject([{ sentAt: null, attempts: 0 }]);
     const s = await statusOf(r.id);
     expect(s?.status).toBe("approved");
     expect(s?.publishedAt).toBeInstanceOf(Date);
@@ -69,13 +74,14 @@ describe("review decisions", () => {
       expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`, "packs", "results"]),
     );
 
+    await deliverQueuedMail();
     const decision = await newestMailFor(contributor.email);
-    expect(decision.subject).toMatch(/^Result approved: /);
-    expect(decision.text).toContain(`/results/${r.id}`);
-    const watched = await newestMailFor(watcher.email);
-    expect(watched.subject).toMatch(/^New result: /);
-    expect(watched.text).toContain(`/packs/${pack.slug}`);
-    // The contributor watches the pack too but gets the decision, not a second "new result" message.
+    expect(decision.subject).toMatch(new RegExp(`^Approved and published: result #${r.id}, `));
+    expect(decision.text).toContain(`/account/results/${r.id}`);
+    const news = await newestMailFor(reader.email);
+    expect(news.subject).toMatch(/^New result: /);
+    expect(news.text).toContain(`/packs/${pack.slug}`);
+    // The contributor asked for the pack's e-mails too but gets the decision, not a second "new result" message.
     expect(caughtFor(contributor.email).filter((m) => m.subject.startsWith("New result"))).toHaveLength(0);
   });
 
@@ -97,9 +103,11 @@ describe("review decisions", () => {
       note: "No cut-off stated.",
     });
     expect(revalidate.revalidateTags).not.toHaveBeenCalled();
+    await deliverQueuedMail();
     const mail = await newestMailFor(contributor.email);
-    expect(mail.subject).toMatch(/^Result not accepted: /);
+    expect(mail.subject).toMatch(new RegExp(`^Not accepted: result #${r.id}, `));
     expect(mail.text).toContain("Incomplete method");
+    expect(mail.text).toContain(`/account/results/${r.id}`);
   });
 
   it("reject with reason “other” needs a note; an unknown reason is refused (422)", async () => {
@@ -118,24 +126,26 @@ describe("review decisions", () => {
     expect((await statusOf(r.id))?.status).toBe("pending");
   });
 
-  it("request changes needs a note, sends the result back and e-mails the contributor", async () => {
+  it("sending back needs a note, waits for the contributor's answer and e-mails them a link to their view", async () => {
     const contributor = await signedIn("contributor");
     const mod = await signedIn("moderator");
     const { pack } = await makePack();
     const r = await makeResult({ packId: pack.id, contributorId: contributor.id });
     requestState.token = mod.token;
-    expect(await requestChanges(null, { resultId: r.id, note: "" })).toMatchObject({ ok: false, code: "validation" });
-    const res = await requestChanges(null, { resultId: r.id, note: "Where was the temperature probe?" });
+    expect(await askContributor(null, { resultId: r.id, note: "" })).toMatchObject({ ok: false, code: "validation" });
+    const res = await askContributor(null, { resultId: r.id, note: "Where was the temperature probe?" });
     expect(res.ok).toBe(true);
     expect((await events(r.id)).at(-1)).toMatchObject({
       actorId: mod.id,
       fromStatus: "pending",
-      toStatus: "changes_requested",
+      toStatus: "awaiting_answer",
       note: "Where was the temperature probe?",
     });
+    await deliverQueuedMail();
     const mail = await newestMailFor(contributor.email);
-    expect(mail.subject).toMatch(/^Changes requested: /);
+    expect(mail.subject).toMatch(new RegExp(`^Waiting for your answer: result #${r.id}, `));
     expect(mail.text).toContain("Where was the temperature probe?");
+    expect(mail.text).toContain(`${env().APP_URL}/account/results/${r.id}`);
   });
 
   it("refuses self-review: a moderator (or admin) cannot decide their own result, and nothing is written", async () => {
@@ -147,7 +157,7 @@ describe("review decisions", () => {
       for (const call of [
         () => approveResult(null, { resultId: r.id }),
         () => rejectResult(null, { resultId: r.id, reason: "duplicate" }),
-        () => requestChanges(null, { resultId: r.id, note: "Please fix it." }),
+        () => askContributor(null, { resultId: r.id, note: "Please fix it." }),
       ]) {
         expect(await call()).toMatchObject({
           ok: false,
@@ -176,7 +186,7 @@ describe("review decisions", () => {
     const modB = await signedIn("moderator", "mod-b");
     const r2 = await makeResult({ packId: pack.id, contributorId: contributor.id });
     const outcomes = await Promise.allSettled([
-      decideResult(modA.id, r2.id, { kind: "approve", note: null }),
+      decideResult(modA.id, r2.id, { kind: "approve", note: null, catalogue: { intoPackId: null, intoMakerId: null } }),
       decideResult(modB.id, r2.id, { kind: "reject", reason: "wrong-data", note: null }),
     ]);
     expect(outcomes.filter((o) => o.status === "fulfilled")).toHaveLength(1);

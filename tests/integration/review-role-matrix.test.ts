@@ -11,7 +11,7 @@ vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCa
 
 const { approveResult } = await import("@/app/(review)/review/[id]/actions/approve-result");
 const { rejectResult } = await import("@/app/(review)/review/[id]/actions/reject-result");
-const { requestChanges } = await import("@/app/(review)/review/[id]/actions/request-changes");
+const { askContributor } = await import("@/app/(review)/review/[id]/actions/ask-contributor");
 const { resolveFlag } = await import("@/app/(review)/review/flags/actions/resolve-flag");
 const { editPackLabel } = await import("@/app/(admin)/admin/catalogue/actions/edit-pack-label");
 const { mergePacks } = await import("@/app/(admin)/admin/catalogue/actions/merge-packs");
@@ -27,9 +27,9 @@ const actions: { name: string; allowed: string[]; call: Call }[] = [
     call: () => rejectResult(null, { resultId: missing, reason: "duplicate" }),
   },
   {
-    name: "requestChanges",
+    name: "askContributor",
     allowed: ["moderator", "admin"],
-    call: () => requestChanges(null, { resultId: missing, note: "Please fix." }),
+    call: () => askContributor(null, { resultId: missing, note: "Please fix." }),
   },
   {
     name: "resolveFlag",

@@ -1,5 +1,5 @@
 // The role matrix: every server action, route handler and signed-in page added for sign-in, account,
-// bench profiles, watches and roles, called with no session, with each role, and checked against the
+// bench profiles, new-result e-mails about a pack and roles, called with no session, with each role, and checked against the
 // permission table: no session → 401 / unauthenticated (pages: redirect to sign-in), a role the table
 // does not allow → 403 / forbidden, an allowed role → success.
 import { beforeAll, describe, expect, it, vi } from "vitest";
@@ -19,8 +19,8 @@ const { signOut } = await import("@/app/(account)/account/actions/sign-out");
 const { saveBenchProfile } = await import("@/app/(account)/account/bench-profiles/actions/save-bench-profile");
 const { deleteBenchProfile } = await import("@/app/(account)/account/bench-profiles/actions/delete-bench-profile");
 const { setUserRole } = await import("@/app/(admin)/admin/users/actions/set-user-role");
-const { watchPack } = await import("@/app/actions/watch-pack");
-const { unwatchPack } = await import("@/app/actions/unwatch-pack");
+const { startPackEmails } = await import("@/app/actions/start-pack-emails");
+const { stopPackEmails } = await import("@/app/actions/stop-pack-emails");
 const { requestSignInLink } = await import("@/app/(auth)/sign-in/actions/request-sign-in-link");
 const meRoute = await import("@/app/api/v1/me/route");
 const authRoute = await import("@/app/api/auth/[...nextauth]/route");
@@ -73,7 +73,7 @@ const actions: { name: string; permission: Permission; call: (who: Who) => Promi
   {
     name: "updateProfile",
     permission: "account.update",
-    call: () => updateProfile(null, { displayName: "Matrix Tester", anonymous: false }),
+    call: () => updateProfile(null, { displayName: "Matrix Tester", publicName: "name" }),
   },
   {
     name: "saveBenchProfile (create)",
@@ -90,8 +90,8 @@ const actions: { name: string; permission: Permission; call: (who: Who) => Promi
     permission: "bench-profile.manage",
     call: async (who) => deleteBenchProfile(null, { id: who ? await ownProfile(who.id) : 1 }),
   },
-  { name: "watchPack", permission: "watch.manage", call: () => watchPack(null, { packId }) },
-  { name: "unwatchPack", permission: "watch.manage", call: () => unwatchPack(null, { packId }) },
+  { name: "startPackEmails", permission: "pack-emails.manage", call: () => startPackEmails(null, { packId }) },
+  { name: "stopPackEmails", permission: "pack-emails.manage", call: () => stopPackEmails(null, { packId }) },
   {
     name: "setUserRole",
     permission: "user.set-role",

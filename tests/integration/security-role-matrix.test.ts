@@ -25,8 +25,8 @@ const PUBLIC_ACTIONS = new Set(["requestSignInLink", "signOut"]);
 // What each action and state-changing route must require — the reviewed matrix. A new action or route
 // fails until it is added here, so nobody adds one without deciding who may call it.
 const EXPECTED_ACTIONS: Record<string, Permission> = {
-  watchPack: "watch.manage",
-  unwatchPack: "watch.manage",
+  startPackEmails: "pack-emails.manage",
+  stopPackEmails: "pack-emails.manage",
   updateProfile: "account.update",
   withdrawResult: "result.withdraw-own",
   previewStoredLog: "upload.create",
@@ -40,9 +40,10 @@ const EXPECTED_ACTIONS: Record<string, Permission> = {
   mergePacks: "catalogue.merge",
   setUserRole: "user.set-role",
   saveSiteSettings: "settings.edit",
+  retryMail: "mail.retry",
   approveResult: "result.review",
   rejectResult: "result.review",
-  requestChanges: "result.review",
+  askContributor: "result.review",
   resolveFlag: "flag.resolve",
   featureChart: "chart.feature",
 };

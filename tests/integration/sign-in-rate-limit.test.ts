@@ -4,7 +4,7 @@ import { beforeEach, describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
 import { limits } from "@/server/rate-limit";
 import { requestState } from "../helpers/next-mocks";
-import { caughtFor } from "../helpers/mail";
+import { caughtFor, deliverQueuedMail } from "../helpers/mail";
 
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
@@ -65,6 +65,7 @@ describe("sign-in rate limits", () => {
     const body = (await refused.json()) as { error: { code: string; message: string } };
     expect(body.error.code).toBe("rate_limited");
     expect(body.error.message).toMatch(/wait 15 minutes/);
+    await deliverQueuedMail();
     await new Promise((r) => setTimeout(r, 200));
     expect(caughtFor(email)).toHaveLength(limits.signInPerEmail.limit);
   });

@@ -1,6 +1,7 @@
 // Sign-in by e-mail link, end to end below the browser: the form's action asks Auth.js for a link, the
-// link goes through the outbox to the local mail catcher, following it creates a contributor and a
-// database session, and signing out deletes that session.
+// link is queued in the outbox (the request sends nothing itself) and the mail worker's step sends it to the
+// local mail catcher; following it creates a contributor and a database session, lands a newcomer on the
+// choice of public name, and signing out deletes that session.
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
@@ -8,7 +9,7 @@ import { db } from "@/db";
 import { mailOutbox, sessions, users, verificationTokens } from "@/db/schema";
 import { getSessionUserByToken } from "@/db/queries/sessions";
 import { redirectTarget, requestState } from "../helpers/next-mocks";
-import { firstLink, newestMailFor } from "../helpers/mail";
+import { caughtFor, deliverQueuedMail, firstLink, newestMailFor } from "../helpers/mail";
 
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
@@ -46,7 +47,12 @@ describe("sign-in by e-mail link", () => {
     const email = `newcomer-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
     const { redirect } = await request(signInForm(`  ${email.toUpperCase()} `));
     expect(redirect).toBe("/sign-in/check-email");
+    // The request only queued the link: nothing was sent while it ran.
+    const [waiting] = await db.select().from(mailOutbox).where(eq(mailOutbox.to, email));
+    expect(waiting).toMatchObject({ sentAt: null, attempts: 0, sensitive: true });
+    expect(caughtFor(email)).toHaveLength(0);
 
+    await deliverQueuedMail();
     const mail = await newestMailFor(email);
     expect(mail.subject).toBe("Your Sagline sign-in link");
     const link = firstLink(mail.text);
@@ -63,13 +69,22 @@ describe("sign-in by e-mail link", () => {
 
     const res = await GET(new Request(link, { headers: { host: "localhost:3011" } }), ctx);
     expect(res.status).toBe(302);
-    expect(res.headers.get("location")).toBe("http://localhost:3011/account/bench-profiles");
+    // A first sign-in chooses how published results name them, then goes on to where they were heading.
+    const landing = new URL(res.headers.get("location") ?? "", "http://localhost:3011");
+    expect(landing.pathname).toBe("/account/public-name");
+    expect(landing.searchParams.get("callbackUrl")).toBe("http://localhost:3011/account/bench-profiles");
     const cookie = /authjs\.session-token=([^;]+)/.exec(res.headers.get("set-cookie") ?? "");
     expect(cookie).not.toBeNull();
     const sessionToken = decodeURIComponent(cookie?.[1] ?? "");
 
     const user = await getSessionUserByToken(sessionToken);
-    expect(user).toMatchObject({ email, role: "contributor", displayName: null, anonymous: false });
+    expect(user).toMatchObject({
+      email,
+      role: "contributor",
+      displayName: null,
+      anonymous: false,
+      publicNameChosen: false,
+    });
 
     // The link works once.
     const again = await GET(new Request(link, { headers: { host: "localhost:3011" } }), ctx);
@@ -91,8 +106,11 @@ describe("sign-in by e-mail link", () => {
     const email = `mod-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
     await db.insert(users).values({ email, role: "moderator", displayName: "Moderator Test" });
     await request(signInForm(email, "/account"));
+    await deliverQueuedMail();
     const link = firstLink((await newestMailFor(email)).text);
     const res = await GET(new Request(link, { headers: { host: "localhost:3011" } }), ctx);
+    // Not a newcomer: straight to where they were heading.
+    expect(res.headers.get("location")).toBe("http://localhost:3011/account");
     const token = decodeURIComponent(
       /authjs\.session-token=([^;]+)/.exec(res.headers.get("set-cookie") ?? "")?.[1] ?? "",
     );
@@ -111,6 +129,7 @@ describe("sign-in by e-mail link", () => {
   it("never sends people to another site after signing in", async () => {
     const email = `redirect-${randomUUID().slice(0, 8)}@test.sagline.localhost`;
     await request(signInForm(email, "//evil.example/steal"));
+    await deliverQueuedMail();
     const link = firstLink((await newestMailFor(email)).text);
     expect(new URL(link).searchParams.get("callbackUrl")).toBe("http://localhost:3011/account");
   });

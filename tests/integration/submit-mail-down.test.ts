@@ -1,4 +1,5 @@
-// A mail outage never blocks or undoes a submission: the receipt waits in the outbox and is retried.
+// A mail outage never blocks or undoes a submission: the request never talks to SMTP — the receipt waits in
+// the outbox — and the worker's attempt while the relay is down keeps it queued for a retry.
 import { eq } from "drizzle-orm";
 import { describe, expect, it, vi } from "vitest";
 
@@ -10,6 +11,7 @@ import { db } from "@/db";
 import { mailOutbox, results } from "@/db/schema";
 import { settleAfterResponse } from "@/server/after-response";
 import { requestState } from "../helpers/next-mocks";
+import { deliverQueuedMail } from "../helpers/mail";
 import { makePack, submission, uploadLog } from "../helpers/submission";
 import { signedIn } from "../helpers/users";
 
@@ -27,7 +29,11 @@ describe("submitting while mail is down", () => {
     expect(res.ok).toBe(true);
     await settleAfterResponse();
     expect(await db.$count(results, eq(results.contributorId, me.id))).toBe(1);
-    const [queued] = await db.select().from(mailOutbox).where(eq(mailOutbox.to, me.email));
+    let [queued] = await db.select().from(mailOutbox).where(eq(mailOutbox.to, me.email));
+    expect(queued).toMatchObject({ sentAt: null, attempts: 0, lastError: null });
+    // The worker tries while the relay is down: the receipt stays, with the error and a later attempt.
+    await deliverQueuedMail();
+    [queued] = await db.select().from(mailOutbox).where(eq(mailOutbox.to, me.email));
     expect(queued).toMatchObject({ sentAt: null, attempts: 1 });
     expect(queued?.lastError).toBeTruthy();
     expect(queued?.nextAttemptAt.getTime()).toBeGreaterThan(Date.now());

@@ -3,13 +3,14 @@
 import { and, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
+import { env } from "@/server/env";
 import { mailOutbox, makers, packs, results, reviewEvents } from "@/db/schema";
 import { hitRateLimit } from "@/db/mutations/rate-limits";
 import { settleAfterResponse } from "@/server/after-response";
 import { groupKey } from "@/lib/analysis";
 import { logKey } from "@/server/storage";
 import { sampleLog } from "../helpers/logs";
-import { newestMailFor } from "../helpers/mail";
+import { deliverQueuedMail, newestMailFor } from "../helpers/mail";
 import { requestState } from "../helpers/next-mocks";
 import { getObjectText, keysUnder } from "../helpers/storage";
 import { makePack, noProposal, submission, uploadLog, uploadPhoto, validMethod } from "../helpers/submission";
@@ -96,8 +97,13 @@ describe("submitResult", () => {
       expect(events).toEqual([expect.objectContaining({ actorId: me.id, fromStatus: null, toStatus: "pending" })]);
       await settleAfterResponse();
       expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]); // drafts removed once committed
+      // The receipt was queued with the result and carries its number and the contributor's view of it.
+      const [queued] = await db.select().from(mailOutbox).where(eq(mailOutbox.to, me.email));
+      expect(queued).toMatchObject({ sentAt: null, attempts: 0 });
+      await deliverQueuedMail();
       const mail = await newestMailFor(me.email);
-      expect(mail.subject).toMatch(/^Result received: Testmaker/);
+      expect(mail.subject).toMatch(new RegExp(`^Result #${row.id} received: Testmaker`));
+      expect(mail.text).toContain(`${env().APP_URL}/account/results/${row.id}`);
       expect(requestState.revalidated).toContain("/account");
     },
   );

@@ -39,7 +39,7 @@ async function as(role: UserRole | null) {
 
 /** Someone's submitted result (a fresh contributor's unless an owner is given), in a given state. */
 async function someonesResult(
-  status: "pending" | "changes_requested" = "pending",
+  status: "pending" | "awaiting_answer" = "pending",
   ownerOf?: { id: string; token: string },
 ): Promise<number> {
   const owner = ownerOf ?? (await signedIn("contributor", "owner"));
@@ -77,14 +77,14 @@ describe("submission role matrix", () => {
     });
 
     it(`/submit/[id] of someone else's result as ${who} → ${role ? "404" : "redirect to sign-in"}; own → render`, async () => {
-      const id = await someonesResult("changes_requested");
+      const id = await someonesResult("awaiting_answer");
       const me = await as(role);
       const page = (resultId: number) =>
         ResubmitPage({ params: Promise.resolve({ resultId: String(resultId) }) }).then(() => "render", outcomeOf);
       expect(await page(id)).toBe(role ? "404" : "redirect to sign-in");
       if (me) {
         expect(await page(2_000_000_000)).toBe("404");
-        expect(await page(await someonesResult("changes_requested", me))).toBe("render");
+        expect(await page(await someonesResult("awaiting_answer", me))).toBe("render");
       }
     });
 
@@ -131,7 +131,7 @@ describe("submission role matrix", () => {
 
     it(`withdrawResult and resubmitResult of someone else's result as ${who} → ${role ? "not_found" : "unauthenticated"}`, async () => {
       const pending = await someonesResult("pending");
-      const asked = await someonesResult("changes_requested");
+      const asked = await someonesResult("awaiting_answer");
       await as(role);
       const expected = role ? "not_found" : "unauthenticated";
       expect(await withdrawResult(null, { resultId: String(pending) })).toMatchObject({ ok: false, code: expected });

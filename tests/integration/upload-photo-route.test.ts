@@ -1,4 +1,5 @@
-// POST /api/v1/uploads/photo: label photos, checked by their first bytes, size-limited.
+// POST /api/v1/uploads/photo: label photos, checked by their first bytes, size-limited, and stored re-encoded
+// without their metadata (EXIF with GPS and names), turned upright.
 import { describe, expect, it, vi } from "vitest";
 
 vi.hoisted(() => {
@@ -7,7 +8,9 @@ vi.hoisted(() => {
 
 import { POST } from "@/app/api/v1/uploads/photo/route";
 import { postRequest } from "@/tests/helpers/logs";
-import { JPEG_BYTES, PNG_BYTES, keysUnder } from "@/tests/helpers/storage";
+import sharp from "sharp";
+import { getObjectChunks } from "@/server/storage";
+import { EXIF_SECRETS, JPEG_BYTES, JPEG_WITH_EXIF, PNG_BYTES, keysUnder } from "@/tests/helpers/storage";
 import { signedIn } from "@/tests/helpers/users";
 
 const call = (req: Request) => POST(req, undefined);
@@ -48,6 +51,37 @@ describe("POST /api/v1/uploads/photo", () => {
     expect((await fake.json()).error.fieldErrors.photos[0]).toMatch(/not a JPEG, PNG or WebP picture/);
     const pdf = await call(postRequest("/api/v1/uploads/photo", PNG_BYTES, headers(me.token, "application/pdf")));
     expect(pdf.status).toBe(415);
+    expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
+  });
+
+  it("stores a camera photo without its EXIF (no GPS position, no name), turned upright", async () => {
+    const me = await signedIn("contributor");
+    expect(Buffer.from(JPEG_WITH_EXIF).includes(EXIF_SECRETS.artist)).toBe(true); // the fixture does carry them
+    expect((await sharp(JPEG_WITH_EXIF).metadata()).orientation).toBe(6);
+    const res = await call(postRequest("/api/v1/uploads/photo", JPEG_WITH_EXIF, headers(me.token, "image/jpeg")));
+    expect(res.status).toBe(201);
+    const { key } = await res.json();
+    const chunks = await getObjectChunks(key);
+    if (!chunks) throw new Error("photo not stored");
+    const parts: Uint8Array[] = [];
+    for await (const c of chunks) parts.push(c);
+    const stored = Buffer.concat(parts);
+    expect(stored.includes(EXIF_SECRETS.artist)).toBe(false);
+    expect(stored.includes(EXIF_SECRETS.gps)).toBe(false);
+    expect(stored.includes("Exif")).toBe(false);
+    const meta = await sharp(stored).metadata();
+    expect(meta).toMatchObject({ format: "jpeg", width: 4, height: 8 }); // 8×4 turned upright by orientation 6
+    expect(meta.exif).toBeUndefined();
+    expect(meta.orientation).toBeUndefined();
+  });
+
+  it("refuses a damaged picture that only starts like one (422)", async () => {
+    const me = await signedIn("contributor");
+    const damaged = new Uint8Array(600);
+    damaged.set(JPEG_BYTES.subarray(0, 40));
+    const res = await call(postRequest("/api/v1/uploads/photo", damaged, headers(me.token, "image/jpeg")));
+    expect(res.status).toBe(422);
+    expect((await res.json()).error.fieldErrors.photos[0]).toMatch(/could not be read/);
     expect(await keysUnder(`incoming/${me.id}/`)).toEqual([]);
   });
 

@@ -3,9 +3,11 @@
 import { asc, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
+import { env } from "@/server/env";
 import { results, reviewEvents, type ReviewStatus } from "@/db/schema";
 import { settleAfterResponse } from "@/server/after-response";
 import { sampleLog } from "../helpers/logs";
+import { deliverQueuedMail, newestMailFor } from "../helpers/mail";
 import { requestState } from "../helpers/next-mocks";
 import { keysUnder } from "../helpers/storage";
 import { makePack, submission, uploadLog, uploadPhoto, validMethod } from "../helpers/submission";
@@ -106,8 +108,8 @@ describe("resubmitResult", () => {
     requestState.token = null;
   });
 
-  it("puts a result with changes requested back to pending, with the edited card, recomputed figures and the history kept", async () => {
-    const { me, id } = await resultOf("contributor", "changes_requested");
+  it("puts a result waiting for its contributor's answer back to pending, with the edited card, recomputed figures, the history kept and a receipt", async () => {
+    const { me, id } = await resultOf("contributor", "awaiting_answer");
     const before = (await db.select().from(results).where(eq(results.id, id)))[0];
     const res = await resubmitResult(null, answer(id));
     expect(res).toMatchObject({ ok: true, data: { resultId: id } });
@@ -120,14 +122,19 @@ describe("resubmitResult", () => {
     const events = await eventsOf(id);
     expect(events.map((e) => [e.fromStatus, e.toStatus])).toEqual([
       [null, "pending"],
-      ["pending", "changes_requested"],
-      ["changes_requested", "pending"],
+      ["pending", "awaiting_answer"],
+      ["awaiting_answer", "pending"],
     ]);
     expect(events[2]).toMatchObject({ actorId: me.id, note: "Probe position added; cut-off corrected." });
+    // The answer's receipt was queued with it; the worker's step sends it, with the result's number and link.
+    await deliverQueuedMail();
+    const mail = await newestMailFor(me.email, 5000, /^Answer received/);
+    expect(mail.subject).toMatch(new RegExp(`^Answer received: result #${id}, `));
+    expect(mail.text).toContain(`${env().APP_URL}/account/results/${id}`);
   });
 
   it("takes a corrected log and extra photos", async () => {
-    const { me, id } = await resultOf("moderator", "changes_requested");
+    const { me, id } = await resultOf("moderator", "awaiting_answer");
     const log = await uploadLog(me.token, sampleLog({ seed: 77 }).csv, "corrected.csv");
     const photo = await uploadPhoto(me.token);
     expect(
@@ -143,7 +150,7 @@ describe("resubmitResult", () => {
   });
 
   it("refuses someone else's result (404, like a missing one), a pending one (409), no session (401), and an answer without a note (422)", async () => {
-    const { id } = await resultOf("contributor", "changes_requested");
+    const { id } = await resultOf("contributor", "awaiting_answer");
     expect((await resubmitResult(null, answer(id, { note: "" }))).fieldErrors?.note?.[0]).toMatch(
       /Enter the answer to the moderator/,
     );
@@ -154,7 +161,7 @@ describe("resubmitResult", () => {
     expect(await resubmitResult(null, answer(id))).toMatchObject({ ok: false, code: "unauthenticated" });
     const pending = await resultOf();
     expect(await resubmitResult(null, answer(pending.id))).toMatchObject({ ok: false, code: "conflict" });
-    expect(await statusOf(id)).toBe("changes_requested");
+    expect(await statusOf(id)).toBe("awaiting_answer");
   });
 });
 

@@ -3,23 +3,24 @@ import Link from "next/link";
 import { buttonClass } from "@/components/ui/form";
 import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { listResultsByContributor } from "@/db/queries/results-by-contributor";
-import { listWatchesForUser } from "@/db/queries/watches";
-import { resistanceMethodLabels } from "@/lib/method-labels";
+import { listPackEmailsForUser } from "@/db/queries/pack-emails";
+import { resistanceMethodLabels, roleLabels } from "@/lib/labels";
+import { UNNAMED_CONTRIBUTOR } from "@/lib/user-name";
 import { requirePageUser } from "@/server/page-auth";
 import { signOut } from "./actions/sign-out";
 import { MyResults } from "./_components/my-results";
 import { ProfileForm } from "./_components/profile-form-client";
-import { WatchList } from "./_components/watch-list-client";
+import { PackEmailsList } from "./_components/pack-emails-list-client";
 
 export const metadata: Metadata = { title: "Your account" };
 export const dynamic = "force-dynamic";
 
 export default async function AccountPage() {
   const user = await requirePageUser("account.update", "/account");
-  const [results, profiles, watched] = await Promise.all([
+  const [results, profiles, emailPacks] = await Promise.all([
     listResultsByContributor(user.id),
     listBenchProfilesForUser(user.id),
-    listWatchesForUser(user.id),
+    listPackEmailsForUser(user.id),
   ]);
   return (
     <div className="space-y-10">
@@ -27,7 +28,8 @@ export default async function AccountPage() {
         <div className="space-y-1">
           <h1>Your account</h1>
           <p className="muted text-sm">
-            Signed in as <span className="font-medium text-ink dark:text-paper">{user.email}</span> · role {user.role}
+            Signed in as <span className="font-medium text-ink dark:text-paper">{user.email}</span> · role{" "}
+            {roleLabels[user.role].toLowerCase()}
           </p>
         </div>
         <form action={signOut}>
@@ -38,9 +40,16 @@ export default async function AccountPage() {
       </header>
 
       <section aria-labelledby="profile-heading" className="space-y-3">
-        <h2 id="profile-heading">Profile</h2>
+        <h2 id="profile-heading">Your public name</h2>
+        {!user.publicNameChosen ? (
+          <p className="text-sm" data-testid="name-not-chosen">
+            You have not chosen yet: until you do, your published results say “{UNNAMED_CONTRIBUTOR}”.
+          </p>
+        ) : null}
         <div className="card max-w-xl">
-          <ProfileForm initial={{ displayName: user.displayName ?? "", anonymous: user.anonymous }} />
+          <ProfileForm
+            initial={{ displayName: user.displayName ?? "", anonymous: user.anonymous, chosen: user.publicNameChosen }}
+          />
         </div>
       </section>
 
@@ -77,10 +86,10 @@ export default async function AccountPage() {
         )}
       </section>
 
-      <section aria-labelledby="watches-heading" className="space-y-3">
-        <h2 id="watches-heading">Packs you watch</h2>
-        <WatchList
-          watches={watched.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))}
+      <section aria-labelledby="pack-emails-heading" className="space-y-3">
+        <h2 id="pack-emails-heading">E-mails about new results</h2>
+        <PackEmailsList
+          packs={emailPacks.map((w) => ({ packId: w.packId, slug: w.slug, title: `${w.makerName} ${w.model}` }))}
         />
       </section>
     </div>

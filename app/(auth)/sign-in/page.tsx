@@ -49,8 +49,8 @@ export default async function SignInPage(props: {
         <SignInForm callbackUrl={sp.callbackUrl ?? "/account"} />
       </div>
       <p className="muted text-sm">
-        Reading, comparing and downloading need no account. You sign in to submit results, keep bench profiles and watch
-        packs.
+        Reading, comparing and downloading need no account. You sign in to submit results, keep bench profiles and be
+        e-mailed new results for the packs you choose.
       </p>
     </div>
   );

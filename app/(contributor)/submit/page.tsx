@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { redirect } from "next/navigation";
 import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { getSiteSettings } from "@/db/queries/site-settings";
 import { listMakerChoices, listPackChoices } from "@/db/queries/submissions";
@@ -14,6 +15,8 @@ export const dynamic = "force-dynamic";
 
 export default async function SubmitPage() {
   const user = await requirePageUser("result.submit", "/submit");
+  // Results carry their contributor's public name: it is chosen before the first submission, never assumed.
+  if (!user.publicNameChosen) redirect(`/account/public-name?${new URLSearchParams({ callbackUrl: "/submit" })}`);
   const [packs, makers, profiles, settings] = await Promise.all([
     listPackChoices(user.id),
     listMakerChoices(user.id),

@@ -6,21 +6,21 @@ import { flagResolutionMessage } from "@/lib/flag-resolution-message";
 const base = { flagId: 7, resultId: 42, alsoClosed: 0, stillOpen: 0 } as const;
 
 describe("flagResolutionMessage", () => {
-  it("dismissed, the last open flag: the result stays published and counted, no open check left", () => {
+  it("kept, the last open flag: the result stays published and counted, no open check left", () => {
     expect(
       flagResolutionMessage({ ...base, resolution: "kept", status: "approved" }, "Ashcombe Cells Ridge 1300"),
     ).toBe(
-      "Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: dismissed, result kept. It stays published and counted, and no longer shows an open check.",
+      "Flag #7 on result #42 (Ashcombe Cells Ridge 1300) resolved: result kept. It stays published and counted, and no longer shows an open check.",
     );
   });
 
-  it("dismissed with a correction while other flags stay open: says how many remain", () => {
+  it("kept with a moderator’s note while other flags stay open: says how many remain", () => {
     const text = flagResolutionMessage(
       { ...base, resolution: "corrected", status: "approved", stillOpen: 2 },
       "Ashcombe Cells Ridge 1300",
     );
     expect(text).toMatch(
-      /^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: dismissed, correction noted\. It stays published and counted; 2 other flags on it are still open\.$/,
+      /^Flag #7 on result #42 \(Ashcombe Cells Ridge 1300\) resolved: result kept, with a moderator’s note\. It stays published and counted; 2 other flags on it are still open\.$/,
     );
     expect(flagResolutionMessage({ ...base, resolution: "kept", status: "approved", stillOpen: 1 })).toMatch(
       /; 1 other flag on it is still open\.$/,

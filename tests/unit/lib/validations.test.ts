@@ -64,14 +64,18 @@ describe("bench profile input", () => {
 });
 
 describe("profile input and names", () => {
-  it("reads a checkbox from form data", () => {
-    expect(profileSchema.parse({ displayName: "", anonymous: "on" }).anonymous).toBe(true);
-    expect(profileSchema.parse({ displayName: "Some Name" }).anonymous).toBe(false);
+  it("reads the explicit choice of public name, and never takes an empty name for anonymity", () => {
+    expect(profileSchema.parse({ displayName: "", publicName: "anonymous" }).anonymous).toBe(true);
+    expect(profileSchema.parse({ displayName: "Some Name", publicName: "name" }).anonymous).toBe(false);
+    expect(profileSchema.safeParse({ displayName: "" }).success).toBe(false);
+    expect(profileSchema.safeParse({ displayName: "Some Name" }).success).toBe(false);
   });
 
   it("names people on results and in the header", () => {
     expect(nameOnResults({ displayName: "  Heron ", anonymous: false })).toBe("Heron");
-    expect(nameOnResults({ displayName: null, anonymous: false })).toBe("Anonymous tester");
+    expect(nameOnResults({ displayName: "Heron", anonymous: true })).toBe("Anonymous tester");
+    // No name and no choice of anonymity: not "anonymous", which they never asked for.
+    expect(nameOnResults({ displayName: null, anonymous: false })).toBe("A contributor");
     expect(publicName({ displayName: null, email: "quiet@example.com" })).toBe("quiet");
   });
 });

@@ -4,7 +4,8 @@ import {
   reviewDecisionMail,
   signInLinkMail,
   submissionReceiptMail,
-  watchedPackResultMail,
+  newResultOnPackMail,
+  answerReceiptMail,
 } from "@/server/mail/templates";
 import { linkify } from "@/server/mail/catcher";
 
@@ -22,8 +23,9 @@ describe("mail templates", () => {
 
   it("escapes names from users in the HTML part", () => {
     const m = submissionReceiptMail({
+      resultId: 1,
       packTitle: `Evil <script>alert("x")</script>`,
-      resultUrl: "http://localhost:3011/results/1",
+      resultUrl: "http://localhost:3011/account/results/1",
       submittedAt: new Date(),
     });
     expect(m.html).not.toContain("<script>");
@@ -31,28 +33,48 @@ describe("mail templates", () => {
     expect(m.text).toContain(`Evil <script>`); // the text part is plain text
   });
 
-  it("words each review decision differently and includes the moderator's reason", () => {
-    const base = { packTitle: "Heron 1300", resultUrl: "http://localhost:3011/results/7" };
-    expect(reviewDecisionMail({ ...base, decision: "approved", reason: null }).subject).toBe(
-      "Result approved: Heron 1300",
-    );
-    const changes = reviewDecisionMail({
-      ...base,
-      decision: "changes_requested",
-      reason: "Log is missing the temperature column.",
+  it("carries the result's number and the link to the contributor's view in receipts", () => {
+    const url = "http://localhost:3011/account/results/42";
+    const receipt = submissionReceiptMail({
+      resultId: 42,
+      packTitle: "Heron 1300",
+      resultUrl: url,
+      submittedAt: new Date(),
     });
-    expect(changes.subject).toBe("Changes requested: Heron 1300");
-    expect(changes.text).toContain("Moderator's note: Log is missing the temperature column.");
-    expect(reviewDecisionMail({ ...base, decision: "rejected", reason: " " }).text).not.toContain("Moderator's note");
+    expect(receipt.subject).toBe("Result #42 received: Heron 1300");
+    expect(receipt.text).toContain(`Follow it here: ${url}`);
+    const answer = answerReceiptMail({ resultId: 42, packTitle: "Heron 1300", resultUrl: url, answeredAt: new Date() });
+    expect(answer.subject).toBe("Answer received: result #42, Heron 1300");
+    expect(answer.html).toContain(url);
   });
 
-  it("tells a watcher how to stop watching", () => {
-    const m = watchedPackResultMail({
+  it("names each decision with the result's new state in the contributor's words, and includes the moderator's note", () => {
+    const base = { resultId: 7, packTitle: "Heron 1300", resultUrl: "http://localhost:3011/account/results/7" };
+    expect(reviewDecisionMail({ ...base, decision: "approved", reason: null }).subject).toBe(
+      "Approved and published: result #7, Heron 1300",
+    );
+    const asked = reviewDecisionMail({
+      ...base,
+      decision: "awaiting_answer",
+      reason: "Log is missing the temperature column.",
+    });
+    expect(asked.subject).toBe("Waiting for your answer: result #7, Heron 1300");
+    expect(asked.text).toContain("Moderator's note: Log is missing the temperature column.");
+    expect(asked.text).toContain("Open it here: http://localhost:3011/account/results/7");
+    expect(asked.subject + asked.text).not.toMatch(/changes requested|awaiting_answer/i);
+    const rejected = reviewDecisionMail({ ...base, decision: "rejected", reason: " " });
+    expect(rejected.subject).toBe("Not accepted: result #7, Heron 1300");
+    expect(rejected.text).not.toContain("Moderator's note");
+  });
+
+  it("tells someone on a pack's e-mail list why they get it and how to stop", () => {
+    const m = newResultOnPackMail({
       packTitle: "Heron 1300",
       packUrl: "http://localhost:3011/packs/heron",
       accountUrl: "http://localhost:3011/account",
     });
-    expect(m.text).toMatch(/Stop watching it from your account: http:\/\/localhost:3011\/account/);
+    expect(m.text).toMatch(/Stop these e-mails from your account: http:\/\/localhost:3011\/account/);
+    expect(m.text).not.toMatch(/watch/i);
   });
 
   it("escapes the five HTML-special characters", () => {

@@ -1,6 +1,6 @@
 "use client";
-// What a contributor can do with their own result while it waits: withdraw it (pending or changes
-// requested), or answer a change request. The server checks ownership and state again.
+// What a contributor can do with their own result while it waits: withdraw it (waiting for review or for
+// their answer), or answer the moderator. The server checks ownership and state again.
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
@@ -8,12 +8,21 @@ import { buttonClass } from "@/components/ui/form";
 import type { ReviewStatus } from "@/lib/enums";
 import { withdrawResult } from "../actions/withdraw-result";
 
-export function ResultActions({ resultId, status }: { resultId: number; status: ReviewStatus }) {
+export function ResultActions({
+  resultId,
+  status,
+  answerLink = true,
+}: {
+  resultId: number;
+  status: ReviewStatus;
+  /** Off where the page already offers the answer beside the moderator's request. */
+  answerLink?: boolean;
+}) {
   const router = useRouter();
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();
-  if (status !== "pending" && status !== "changes_requested") return null;
+  if (status !== "pending" && status !== "awaiting_answer") return null;
 
   const withdraw = () =>
     startTransition(async () => {
@@ -26,9 +35,9 @@ export function ResultActions({ resultId, status }: { resultId: number; status: 
 
   return (
     <div className="flex flex-wrap items-center gap-2 text-sm">
-      {status === "changes_requested" && (
+      {status === "awaiting_answer" && answerLink && (
         <Link href={`/submit/${resultId}`} className={buttonClass("primary")}>
-          Answer the change request
+          Answer the moderator
         </Link>
       )}
       {confirming ? (

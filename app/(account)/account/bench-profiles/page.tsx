@@ -3,7 +3,7 @@ import Link from "next/link";
 import { buttonClass } from "@/components/ui/form";
 import { listBenchProfilesForUser, type BenchProfile } from "@/db/queries/bench-profiles";
 import { fmt } from "@/lib/format";
-import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
+import { loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
 import { requirePageUser } from "@/server/page-auth";
 import { DeleteBenchProfileButton } from "./_components/delete-bench-profile-client";
 

@@ -3,7 +3,7 @@
 import { describedBy, Field, inputClass } from "@/components/ui/form";
 import { loadModes, resistanceMethods } from "@/lib/enums";
 import { fmt } from "@/lib/format";
-import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
+import { loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
 import type { MethodCardValues } from "@/lib/validations/result";
 import type { BenchProfileOption, SubmitFormApi } from "./types";
 

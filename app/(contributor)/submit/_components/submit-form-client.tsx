@@ -17,6 +17,7 @@ import { MethodStep } from "./method-step";
 import { PackStep } from "./pack-step";
 import { PhotosStep } from "./photos-step";
 import { StepList } from "./step-list";
+import { SubmitSummary } from "./submit-summary";
 import type { BenchProfileOption, Limits, MakerOption, PackFactsClient, PackOption } from "./types";
 import { draftKey, readDraft, useDraftStorage } from "./use-draft";
 import { useKeepDraftFiles } from "./use-keep-draft-files";
@@ -155,7 +156,10 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
     setFormError(null);
     if (to > step) {
       for (let s = step; s < to; s++) {
-        if (!(await trigger(STEP_FIELDS[s] ?? [], { shouldFocus: true }))) return setStep(s);
+        if (!(await trigger(STEP_FIELDS[s] ?? [], { shouldFocus: true }))) {
+          setFormError({ message: `Some values on “${STEPS[s]}” need a look — see the marked fields.` });
+          return setStep(s);
+        }
       }
     }
     focusStep.current = to !== step;
@@ -198,14 +202,14 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
   if (done) {
     return (
       <div className="card space-y-3" data-testid="submit-done">
-        <h2>Thank you — your result is waiting for review</h2>
+        <h2>Thank you — result #{done.resultId} is waiting for review</h2>
         <p>
-          A moderator will check it against its log and method card. We e-mailed you a receipt; you can follow it, or
-          withdraw it while it waits, from your account.
+          A moderator will check it against its log, photos and method card. We e-mailed you a receipt with its number
+          and a link; you can follow it, or withdraw it while it waits, from its page.
         </p>
         <div className="flex flex-wrap gap-2">
-          <Link href="/account" className={buttonClass("primary")}>
-            Go to your account
+          <Link href={`/account/results/${done.resultId}`} className={buttonClass("primary")}>
+            Follow result #{done.resultId}
           </Link>
           <button
             type="button"
@@ -256,7 +260,12 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
             onRecheck={recheck}
           />
         )}
-        {step === 3 && <PhotosStep form={form} limits={limits} />}
+        {step === 3 && (
+          <>
+            <SubmitSummary values={watch()} facts={facts} preview={preview} onGo={go} />
+            <PhotosStep form={form} limits={limits} />
+          </>
+        )}
       </fieldset>
       {formError && (
         <Alert tone="error">
@@ -281,6 +290,10 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
             key="next"
             type="button"
             className={buttonClass("primary")}
+            // The field being typed in keeps its focus until the click lands: its blur would check it and
+            // remove its error message, moving this button from under the pointer between press and release,
+            // so the first click after fixing a value went nowhere. go() checks the whole step anyway.
+            onMouseDown={(e) => e.preventDefault()}
             onClick={() => go(step + 1)}
             disabled={pending}
           >

@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { z } from "zod";
 import { LineFigure } from "@/components/charts/line-figure";
 import { StaticIsland } from "@/components/static-island";
-import { WatchSlot } from "./_components/watch-slot-client";
+import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
 import { LabelPairNote } from "@/components/label-pair-note";
 import { Qty } from "@/components/quantity";
 import { fmtC, labelSpec, packTitle } from "@/lib/format";
@@ -50,7 +50,7 @@ export default async function PackPage(props: Props) {
           </p>
         </div>
         <div className="flex gap-2">
-          <WatchSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
+          <PackEmailsSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
           <a
             href={`/compare?packs=${pack.slug}`}
             className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"

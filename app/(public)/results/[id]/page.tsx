@@ -11,8 +11,8 @@ import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { logDownloadName, recomputeCommand } from "@/lib/open-data/recompute";
 import { describeResultGroup } from "@/lib/pack-summary";
-import { reviewReasonLabels } from "@/lib/review-status-labels";
-import { openCaseReasonWords } from "@/lib/validations/review";
+import { openCaseReasonWords, reviewReasonLabel, reviewStatusLabels } from "@/lib/labels";
+import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
 import { FiguresList } from "./_components/figures-list";
 
@@ -31,13 +31,8 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
   return r ? { title: `Result #${r.id} — ${packTitle(r.pack)}` } : {};
 }
 
-const statusWords: Record<string, string> = {
-  pending: "submitted",
-  approved: "approved",
-  rejected: "rejected",
-  withdrawn: "withdrawn",
-  changes_requested: "changes requested",
-};
+const isStatus = (s: string): s is ReviewStatus => Object.hasOwn(reviewStatusLabels, s);
+const statusWord = (s: string) => (isStatus(s) ? reviewStatusLabels[s].toLowerCase() : "another state");
 
 export default async function ResultPage(props: Props) {
   const parsed = params.safeParse(await props.params);
@@ -137,6 +132,28 @@ export default async function ResultPage(props: Props) {
           <code data-testid="recompute-command">{command}</code>
         </pre>
       </section>
+      {r.photoCount > 0 ? (
+        <section aria-labelledby="photos" className="space-y-2">
+          <h2 id="photos">Label photos</h2>
+          <p className="muted text-sm">The pack’s label as the contributor photographed it (location data removed).</p>
+          <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="result-photos">
+            {Array.from({ length: r.photoCount }, (_, i) => (
+              <li key={i}>
+                <a href={`/results/${r.id}/photos/${i + 1}`}>
+                  {/* Served from storage through /results/<id>/photos/<n>; next/image's optimiser does not apply. */}
+                  {/* eslint-disable-next-line @next/next/no-img-element */}
+                  <img
+                    src={`/results/${r.id}/photos/${i + 1}`}
+                    alt={`Label photo ${i + 1} of result #${r.id}`}
+                    loading="lazy"
+                    className="aspect-square w-full rounded border border-ink/10 object-cover dark:border-night-line"
+                  />
+                </a>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
 
       <section aria-labelledby="history" className="space-y-2">
         <h2 id="history">Review history</h2>
@@ -145,10 +162,10 @@ export default async function ResultPage(props: Props) {
             <li key={e.id} className="flex flex-wrap gap-x-2">
               <span className="num muted">{fmtDate(e.at)}</span>
               <span>
-                {e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWords[e.from] ?? e.from} → ` : ""}
-                <strong>{statusWords[e.to] ?? e.to}</strong>
+                {e.actor === "system" ? "Sagline" : e.actor}: {e.from ? `${statusWord(e.from)} → ` : ""}
+                <strong>{statusWord(e.to)}</strong>
               </span>
-              {e.reason ? <span className="muted">({reviewReasonLabels[e.reason] ?? e.reason})</span> : null}
+              {e.reason ? <span className="muted">({reviewReasonLabel(e.reason)})</span> : null}
               {e.note ? <span className="muted">— {e.note}</span> : null}
             </li>
           ))}

@@ -7,11 +7,12 @@ import { ReviewHistory } from "@/components/review-history";
 import { getReviewDetail } from "@/db/queries/review";
 import { prepareTimeCurve } from "@/lib/curves";
 import { labelSpec, packTitle } from "@/lib/format";
-import { reviewStatusLabels } from "@/lib/review-status-labels";
+import { catalogueStatusLabels, reviewStatusLabels } from "@/lib/labels";
 import { recordId } from "@/lib/validations/ids";
 import { requirePageUser } from "@/server/page-auth";
 import { FlagChips } from "../_components/flag-chips";
 import { DecisionPanel } from "./_components/decision-panel-client";
+import { Evidence } from "./_components/evidence";
 import { ContributorHistory, GroupComparison, MethodAndFigures, ReaderFlags } from "./_components/result-sections";
 
 export const metadata: Metadata = { title: "Review a result" };
@@ -40,7 +41,9 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
         <p className="muted text-sm">
           Result #{r.id} · <span data-testid="result-status">{reviewStatusLabels[r.status]}</span> · submitted{" "}
           {when(r.submittedAt)} by {d.contributor.displayName ?? d.contributor.email} · label {labelSpec(d.pack)}
-          {d.pack.status === "proposed" || d.makerStatus === "proposed" ? " · proposed catalogue entry" : ""}
+          {d.pack.status === "proposed" || d.makerStatus === "proposed" ? (
+            <span data-testid="proposed-entry"> · {catalogueStatusLabels.proposed.toLowerCase()}</span>
+          ) : null}
           {d.pack.status === "active" ? (
             <>
               {" "}
@@ -87,6 +90,12 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
 
           <GroupComparison d={d} />
 
+          <Evidence
+            resultId={r.id}
+            photoCount={r.photoKeys.length}
+            log={{ filename: r.logFilename, bytes: r.logBytes, sha256: r.logSha256 }}
+          />
+
           <section className="card space-y-3" aria-labelledby="curve-h">
             <h2 id="curve-h">Curves</h2>
             <LogFigure
@@ -115,13 +124,20 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
             ) : r.status !== "pending" ? (
               <div className="space-y-2 text-sm" data-testid="decision-done">
                 <p>
-                  Decided: {reviewStatusLabels[r.status].toLowerCase()}. Only pending results are decided here; the
-                  history below says who decided and why.
+                  Now: {reviewStatusLabels[r.status].toLowerCase()}. Only results waiting for review are decided here;
+                  the history below says who decided and why.
                 </p>
+                {r.status === "approved" && d.pack.status === "active" ? (
+                  <p>
+                    <Link href={`/packs/${d.pack.slug}`} data-testid="live-pack-link">
+                      Open the pack’s public page
+                    </Link>
+                  </p>
+                ) : null}
                 <Link href="/review">Back to the queue</Link>
               </div>
             ) : (
-              <DecisionPanel resultId={r.id} />
+              <DecisionPanel resultId={r.id} proposal={d.proposal} />
             )}
           </section>
           <ReaderFlags flags={d.readerFlags} />

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { listOpenReaderFlags } from "@/db/queries/review";
 import { requirePageUser } from "@/server/page-auth";
-import { reviewStatusLabels } from "@/lib/review-status-labels";
-import { flagReasonLabels } from "@/lib/validations/review";
+import { reviewStatusLabels } from "@/lib/labels";
+import { flagReasonLabels } from "@/lib/labels";
 import type { FlagReason } from "@/lib/enums";
 import { ResolveFlagForm } from "./_components/resolve-flag-client";
 import { ResolvedFlagNotice } from "./_components/resolved-flag-notice-client";
@@ -23,9 +23,9 @@ export default async function ReaderFlagsPage() {
         <h1>Reader flags</h1>
         <p className="muted max-w-3xl">
           {flags.length} open {flags.length === 1 ? "flag" : "flags"}, oldest first. A reader’s flag never changes a
-          result by itself: it stays published and counted, and its page says a check is open. Dismiss the flag (the
-          result stays), dismiss it with the correction you made, or take the result out of publication with a reason
-          shown on its page — a withdrawn result is never deleted and its history stays public.
+          result by itself: it stays published and counted, and its page says a check is open. Keep it, keep it with a
+          note (say what the reader got right), or take it out of publication with a reason shown on its page — a
+          withdrawn result is never deleted and its history stays public.
         </p>
       </div>
       {/* Around the list and its empty state alike, so the confirmation survives the last row leaving. */}

@@ -9,7 +9,7 @@ import { useState, useTransition, type BaseSyntheticEvent } from "react";
 import { useForm, type UseFormRegister } from "react-hook-form";
 import { Alert, buttonClass, describedBy, Field, inputClass } from "@/components/ui/form";
 import { loadModes, resistanceMethods } from "@/lib/enums";
-import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
+import { loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
 import {
   benchProfileSchema,
   type BenchProfileFormValues,

@@ -1,6 +1,7 @@
 "use client";
-// Editing a result after a change request: the method card as stored, an optional corrected log, more
-// photos, and the contributor's answer. The server recomputes the figures and records the resubmission.
+// Answering a moderator's request: the method card as stored, an optional corrected log, more photos, and the
+// contributor's answer. The server recomputes the figures, records the answer and queues its receipt; the
+// browser then lands on the contributor's view of the result, which confirms it with the result's number.
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
@@ -114,8 +115,7 @@ export function ResubmitForm({
         declaration: raw.declaration,
       });
       if (res.ok) {
-        router.push("/account");
-        router.refresh();
+        router.push(`/account/results/${res.data.resultId}?sent=answer`);
         return;
       }
       if (res.code === "unauthenticated") return setFormError({ message: res.error, signIn: true });
@@ -183,11 +183,11 @@ export function ResubmitForm({
         </Alert>
       )}
       <div className="flex flex-wrap justify-between gap-2">
-        <Link href="/account" className={buttonClass("secondary")}>
+        <Link href={`/account/results/${result.id}`} className={buttonClass("secondary")}>
           Cancel
         </Link>
         <button type="submit" className={buttonClass("primary")} disabled={pending}>
-          {pending ? "Resubmitting…" : "Resubmit for review"}
+          {pending ? "Sending…" : "Send my answer"}
         </button>
       </div>
     </form>

@@ -4,9 +4,9 @@ import Link from "next/link";
 import type { getReviewDetail, GroupMedians } from "@/db/queries/review";
 import { labelForGroupKey } from "@/lib/analysis";
 import { fmt } from "@/lib/format";
-import { loadModeLabels, resistanceMethodLabels } from "@/lib/method-labels";
-import { reviewStatusLabels } from "@/lib/review-status-labels";
-import { flagReasonLabels } from "@/lib/validations/review";
+import { computedResistanceMethodLabel, flagOutcomeLabels, loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
+import { reviewStatusLabels } from "@/lib/labels";
+import { flagReasonLabels } from "@/lib/labels";
 
 type Detail = NonNullable<Awaited<ReturnType<typeof getReviewDetail>>>;
 
@@ -103,7 +103,7 @@ export function MethodAndFigures({ d }: { d: Detail }) {
             ["Hold voltage per cell", fmt(f.holdVoltagePerCellV, 3, "V")],
             [
               "DC resistance",
-              `${fmt(f.dcResistanceMohm, 1, "mΩ")}${f.dcResistanceMethod ? ` (${f.dcResistanceMethod})` : ""}`,
+              `${fmt(f.dcResistanceMohm, 1, "mΩ")}${f.dcResistanceMethod ? ` (${computedResistanceMethodLabel(f.dcResistanceMethod)})` : ""}`,
             ],
             ["Resistance at 25 °C (estimate)", fmt(f.resistanceAt25CMohm, 1, "mΩ")],
             ["Temperature start → peak", `${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
@@ -125,7 +125,7 @@ export function ReaderFlags({ flags }: { flags: Detail["readerFlags"] }) {
       <ul className="space-y-2 text-sm">
         {flags.map((fl) => (
           <li key={fl.id}>
-            <span className="font-medium">{flagReasonLabels[fl.reason]}</span> · {fl.status}
+            <span className="font-medium">{flagReasonLabels[fl.reason]}</span> · {flagOutcomeLabels[fl.status]}
             {fl.note ? <span className="muted block">{fl.note}</span> : null}
             {fl.resolutionNote ? <span className="block">Resolution: {fl.resolutionNote}</span> : null}
           </li>
@@ -141,10 +141,15 @@ export function ContributorHistory({ history }: { history: Detail["contributorHi
   return (
     <section className="card space-y-3" aria-labelledby="contributor-h">
       <h2 id="contributor-h">Contributor’s history</h2>
+      <p className="text-sm" data-testid="contributor-counts">
+        Other results: {fmt(byStatus.approved ?? 0)} {reviewStatusLabels.approved.toLowerCase()} ·{" "}
+        {fmt(byStatus.rejected ?? 0)} {reviewStatusLabels.rejected.toLowerCase()} · {fmt(byStatus.pending ?? 0)}{" "}
+        {reviewStatusLabels.pending.toLowerCase()} · {fmt(byStatus.awaiting_answer ?? 0)}{" "}
+        {reviewStatusLabels.awaiting_answer.toLowerCase()} · {fmt(byStatus.withdrawn ?? 0)}{" "}
+        {reviewStatusLabels.withdrawn.toLowerCase()}
+      </p>
       <p className="text-sm">
-        {fmt(byStatus.approved ?? 0)} approved · {fmt(byStatus.rejected ?? 0)} rejected ·{" "}
-        {fmt(byStatus.changes_requested ?? 0)} sent back · {fmt(byStatus.pending ?? 0)} pending ·{" "}
-        {fmt(byStatus.withdrawn ?? 0)} withdrawn
+        Sent back for an answer {fmt(history.timesSentBack)} times in all (this result included).
       </p>
       {history.recent.length ? (
         <ul className="space-y-1 text-sm">

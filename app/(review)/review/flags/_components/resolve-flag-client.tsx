@@ -7,9 +7,9 @@ import { resolveFlag } from "../actions/resolve-flag";
 import { useAnnounceResolvedFlag } from "./resolved-flag-notice-client";
 
 /**
- * Dismiss the flag (the result stays), dismiss it with a correction noted (note required), or take the result
- * out of publication (reason required, shown on its page). The confirmation goes to the page's notice
- * (ResolvedFlagNotice), because this form leaves with its row once the queue refreshes.
+ * Keep the result (the flag is dismissed), keep it with a moderator's note saying what the reader got right (note
+ * required), or take the result out of publication (reason required, shown on its page). The confirmation goes to
+ * the page’s notice (ResolvedFlagNotice), because this form leaves with its row once the queue refreshes.
  */
 export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTitle: string }) {
   const announce = useAnnounceResolvedFlag();
@@ -25,7 +25,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
       <input type="hidden" name="flagId" value={flagId} />
       <Field
         id={noteId}
-        label="Note (required when noting a correction or taking the result out)"
+        label="Note (required for “keep, with a note” and for taking the result out)"
         error={state && !state.ok ? state.fieldErrors?.note?.[0] : undefined}
       >
         <textarea id={noteId} name="note" rows={2} maxLength={2000} className={inputClass} />
@@ -33,7 +33,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
       {state && !state.ok && !state.fieldErrors ? <Alert tone="error">{state.error}</Alert> : null}
       <div className="flex flex-wrap gap-2">
         <button type="submit" name="resolution" value="kept" className={buttonClass("primary")} disabled={pending}>
-          Dismiss, result stays
+          Keep the result
         </button>
         <button
           type="submit"
@@ -42,7 +42,7 @@ export function ResolveFlagForm({ flagId, packTitle }: { flagId: number; packTit
           className={buttonClass("secondary")}
           disabled={pending}
         >
-          Dismiss, correction noted
+          Keep, with a note
         </button>
         <button type="submit" name="resolution" value="withdrawn" className={buttonClass("danger")} disabled={pending}>
           Take out of publication

@@ -1,6 +1,6 @@
 "use server";
-// Resolve a reader flag: dismiss it (the result stays), dismiss it with a correction noted, or take the result
-// out of publication with a reason (approved → withdrawn, with its review event).
+// Resolve a reader flag: keep the result, keep it with a moderator's note, or take the result out of publication
+// with a reason (approved → withdrawn, with its review event).
 import { resolveReaderFlag } from "@/server/review";
 import { authedAction } from "@/server/authed-action";
 import { resolveFlagSchema } from "@/lib/validations/review";

@@ -1,11 +1,12 @@
-// POST /api/v1/uploads/photo — stores one label photo (raw image body), checked by its first bytes and size-limited; answers with its storage key.
+// POST /api/v1/uploads/photo — stores one label photo (raw image body), checked by its first bytes and size-limited,
+// re-encoded without its metadata (EXIF, GPS, XMP: server/uploads/image.ts); answers with its storage key.
 import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 import { incomingPhotoKey, putObject } from "@/server/storage";
 import { readLimited } from "@/server/uploads/body";
-import { detectImage } from "@/server/uploads/image";
+import { cleanImage, detectImage } from "@/server/uploads/image";
 
 export const dynamic = "force-dynamic";
 export const runtime = "nodejs";
@@ -28,10 +29,15 @@ export const POST = withPermission("upload.create", async (req, _ctx, user) => {
   const image = detectImage(bytes);
   if (!image)
     throw new AppError("validation", NOT_AN_IMAGE, { photos: [`${NOT_AN_IMAGE} Only label photos can be attached.`] });
+  const clean = await cleanImage(bytes, image);
+  if (!clean)
+    throw new AppError("validation", "This picture could not be read.", {
+      photos: ["This picture could not be read: it may be damaged. Try another photo."],
+    });
   const key = incomingPhotoKey(user.id, image.ext);
-  await putObject(key, bytes, image.contentType);
+  await putObject(key, clean, image.contentType);
   return Response.json(
-    { key, bytes: bytes.byteLength, contentType: image.contentType },
+    { key, bytes: clean.byteLength, contentType: image.contentType },
     { status: 201, headers: { "Cache-Control": "no-store" } },
   );
 });

@@ -1,7 +1,7 @@
-// Watching a pack (an e-mail when a new result on it is published).
+// New-result e-mails about a pack: which pack.
 import { z } from "zod";
 import { recordIdSchema } from "./ids";
 
-export const watchPackSchema = z.object({
+export const packEmailsSchema = z.object({
   packId: recordIdSchema("Not a pack id."),
 });

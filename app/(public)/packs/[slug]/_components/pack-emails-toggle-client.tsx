@@ -1,24 +1,27 @@
 "use client";
-// Watch / unwatch a pack (an e-mail when a new result on it is published). Signed-out visitors are sent
-// to sign in and brought back. The server action checks the session; this button only reflects state.
+// "E-mail me new results for this pack", and back off again. Signed-out visitors are sent to sign in and
+// brought back. The server action checks the session; this button only reflects state.
 import { usePathname, useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { unwatchPack } from "@/app/actions/unwatch-pack";
-import { watchPack } from "@/app/actions/watch-pack";
+import { startPackEmails } from "@/app/actions/start-pack-emails";
+import { stopPackEmails } from "@/app/actions/stop-pack-emails";
 import { buttonClass } from "@/components/ui/form";
 
-export function WatchButton({ packId, initialWatching }: { packId: number; initialWatching: boolean }) {
+const PACK_EMAILS_OFF = "E-mail me new results for this pack";
+const PACK_EMAILS_ON = "E-mails on: new results for this pack · stop";
+
+export function PackEmailsToggle({ packId, initialOn }: { packId: number; initialOn: boolean }) {
   const router = useRouter();
   const pathname = usePathname();
-  const [watching, setWatching] = useState(initialWatching);
+  const [on, setOn] = useState(initialOn);
   const [error, setError] = useState<string | null>(null);
   const [pending, startTransition] = useTransition();
 
   const toggle = () =>
     startTransition(async () => {
-      const res = watching ? await unwatchPack(null, { packId }) : await watchPack(null, { packId });
+      const res = on ? await stopPackEmails(null, { packId }) : await startPackEmails(null, { packId });
       if (res.ok) {
-        setWatching(res.data.watching);
+        setOn(res.data.emails);
         setError(null);
       } else if (res.code === "unauthenticated") {
         router.push(`/sign-in?${new URLSearchParams({ callbackUrl: pathname })}`);
@@ -31,10 +34,10 @@ export function WatchButton({ packId, initialWatching }: { packId: number; initi
         type="button"
         onClick={toggle}
         disabled={pending}
-        aria-pressed={watching}
-        className={buttonClass(watching ? "secondary" : "primary")}
+        aria-pressed={on}
+        className={buttonClass(on ? "secondary" : "primary")}
       >
-        {watching ? "Watching ✓ — stop" : "Watch this pack"}
+        {on ? PACK_EMAILS_ON : PACK_EMAILS_OFF}
       </button>
       {error ? (
         <span role="alert" className="text-sm text-warn dark:text-red-300">

@@ -1,27 +1,28 @@
 "use client";
+// The packs whose new results the signed-in person is e-mailed about, each with a way to stop.
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Alert, buttonClass } from "@/components/ui/form";
-import { unwatchPack } from "@/app/actions/unwatch-pack";
+import { stopPackEmails } from "@/app/actions/stop-pack-emails";
 
-type Watched = { packId: number; slug: string; title: string };
+type PackRow = { packId: number; slug: string; title: string };
 
-export function WatchList({ watches }: { watches: Watched[] }) {
+export function PackEmailsList({ packs }: { packs: PackRow[] }) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [error, setError] = useState<string | null>(null);
-  if (watches.length === 0) {
+  if (packs.length === 0) {
     return (
       <p className="muted">
-        You are not watching any packs. Use “Watch” on a pack’s page to get an e-mail when a new result on it is
-        published.
+        No e-mails about packs. Use “E-mail me new results for this pack” on a pack’s page to hear when a new result on
+        it is published.
       </p>
     );
   }
-  const unwatch = (packId: number) =>
+  const stop = (packId: number) =>
     startTransition(async () => {
-      const res = await unwatchPack(null, { packId });
+      const res = await stopPackEmails(null, { packId });
       if (res.ok) {
         setError(null);
         router.refresh();
@@ -32,18 +33,19 @@ export function WatchList({ watches }: { watches: Watched[] }) {
       {error ? <Alert tone="error">{error}</Alert> : null}
       <ul
         className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-paper-raised dark:divide-night-line dark:border-night-line dark:bg-night-raised"
-        data-testid="watch-list"
+        data-testid="pack-emails-list"
       >
-        {watches.map((w) => (
-          <li key={w.packId} className="flex items-center justify-between gap-3 px-4 py-2">
-            <Link href={`/packs/${w.slug}`}>{w.title}</Link>
+        {packs.map((p) => (
+          <li key={p.packId} className="flex items-center justify-between gap-3 px-4 py-2">
+            <Link href={`/packs/${p.slug}`}>{p.title}</Link>
             <button
               type="button"
               className={buttonClass("secondary", "shrink-0")}
               disabled={pending}
-              onClick={() => unwatch(w.packId)}
+              onClick={() => stop(p.packId)}
+              aria-label={`Stop e-mails about ${p.title}`}
             >
-              Unwatch
+              Stop e-mails
             </button>
           </li>
         ))}
