@@ -2,7 +2,7 @@
 // brought back), the result stays published and counted with the open check shown; a moderator features a
 // saved chart and it appears on /charts.
 import { expect, test } from "@playwright/test";
-import { signIn } from "./sign-in-helpers";
+import { choosePublicName, signIn } from "./sign-in-helpers";
 
 test("a signed-out reader is asked to sign in first, comes back, flags the result; it stays counted, marked", async ({
   page,
@@ -31,6 +31,8 @@ test("a signed-out reader is asked to sign in first, comes back, flags the resul
   expect(new URL(signInHref, "http://x").searchParams.get("callbackUrl")).toBe(href);
 
   await signIn(page, `flagging-reader-${Date.now().toString(36)}@sagline.test`, signInHref);
+  // A first sign-in asks for the public name first (issue 14), with the result page behind it.
+  await choosePublicName(page, null);
   await expect(page).toHaveURL(new RegExp(`${href}$`));
   await page.getByRole("button", { name: "Ask moderators to check this result" }).click();
   await page.getByLabel("What should they check?").selectOption("wrong-figures");

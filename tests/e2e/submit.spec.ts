@@ -80,7 +80,7 @@ test("a new contributor signs in by e-mail, picks a bench profile, submits a res
   await page.getByTestId("log-file").setInputFiles({ name: "shed-run-1.csv", mimeType: "text/csv", buffer: log4s() });
   await expect(page.getByTestId("log-figures")).toContainText("Delivered capacity");
   await expect(page.getByTestId("log-figures")).toContainText("mAh");
-  await expect(page.getByRole("img", { name: /Voltage and current over time/ })).toBeVisible();
+  await expect(page.getByRole("img", { name: /^Log: Voltage.*; Current, A.*, against time/ })).toBeVisible();
   // A reload keeps the draft and the stored log.
   await page.reload();
   await expect(page.getByTestId("stored-log")).toContainText("shed-run-1.csv");
