@@ -1,10 +1,13 @@
 // Pure side-by-side preparation for /compare: one like-for-like group at a time, never mixed. Picks the
-// group, summarises each pack inside it, says what was left out and why, and marks differences.
+// group, summarises each pack inside it, says what was left out and why, and marks "best" only where a pack's
+// median is distinguishably ahead of every other's (95 % median intervals, lib/analysis/uncertainty).
+import { compareMedianIntervals, distinguishedBest, type MedianInterval } from "@/lib/analysis/uncertainty";
 import type { PackSummary } from "@/lib/catalogue";
 import type { ChartPoint } from "@/lib/curves";
 import { summariseExclusions, type DescribedGroup, type Exclusion } from "@/lib/like-for-like";
 import {
   describeResultGroup,
+  medianIntervals,
   summariseFigures,
   sustainedC,
   type PublicResultRow,
@@ -36,6 +39,9 @@ export type ComparedPack = {
   /** Results of this pack inside the chosen group. */
   n: number;
   figures: Record<SummaryFigure, Summary | null>;
+  /** The 95 % interval of each figure's median in the group (order statistics; meets = false below 6 results). */
+  intervals: Record<SummaryFigure, MedianInterval | null>;
+  /** The pack's sustained C in the group: the highest measured among its approved results. */
   sustainedC: number | null;
   /** The result whose curve stands for the pack: delivered capacity closest to the pack's median. */
   curveResultId: number | null;
@@ -49,6 +55,7 @@ export function comparePacks(rows: PublicResultRow[], packIds: number[], group: 
     const inGroup = mine.filter((r) => r.groupKey === group.key);
     const outside = mine.filter((r) => r.groupKey !== group.key);
     const figures = summariseFigures(inGroup);
+    const intervals = medianIntervals(inGroup);
     const med = figures.capacityMah?.median ?? null;
     let curveResultId: number | null = null;
     let bestGap = Number.POSITIVE_INFINITY;
@@ -63,6 +70,7 @@ export function comparePacks(rows: PublicResultRow[], packIds: number[], group: 
       packId,
       n: inGroup.length,
       figures,
+      intervals,
       sustainedC: sustainedC(inGroup)?.rateC ?? null,
       curveResultId,
       excluded: summariseExclusions(
@@ -75,26 +83,43 @@ export function comparePacks(rows: PublicResultRow[], packIds: number[], group: 
 }
 
 export type Direction = "higher" | "lower";
-export type Mark = {
-  best: boolean;
-  /** Fraction worse than the best (0.12 = 12 % worse); null when missing or best. */ worseBy: number | null;
-};
+export type Mark = { best: boolean; note: string | null };
+export type RowMarks = { marks: Mark[]; note: string | null };
 
-/** Marks the best value in a row and how far behind each other value is. Missing values get no mark. */
-export function markDifferences(values: (number | null)[], direction: Direction): Mark[] {
-  const present = values.filter((v): v is number => v !== null && Number.isFinite(v));
-  if (present.length < 2) return values.map(() => ({ best: false, worseBy: null }));
-  const best = direction === "higher" ? Math.max(...present) : Math.min(...present);
-  return values.map((v) => {
-    if (v === null || !Number.isFinite(v)) return { best: false, worseBy: null };
-    if (v === best) return { best: true, worseBy: null };
-    const worseBy = best === 0 ? null : Math.abs(v - best) / Math.abs(best);
-    return { best: false, worseBy };
-  });
+/**
+ * "Best" only where it means something: the one pack whose 95 % median interval lies wholly beyond every other
+ * pack's (distinguishedBest). Then the others are marked as behind it. Otherwise no pack is marked and the row
+ * says why the packs are not distinguishable. Packs without results in the group get no mark.
+ */
+export function markDistinguished(intervals: (MedianInterval | null)[], direction: Direction): RowMarks {
+  const blank = intervals.map(() => ({ best: false, note: null }));
+  const present = intervals.filter((m): m is MedianInterval => m !== null);
+  if (present.length < 2) return { marks: blank, note: null };
+  const best = distinguishedBest(intervals, direction === "higher" ? "higher-is-better" : "lower-is-better");
+  if (best === null) {
+    const tooFew = present.some((m) => !m.meets);
+    return {
+      marks: blank,
+      note: tooFew
+        ? "Not distinguishable: a pack has too few results for a 95 % interval of its median (6 are needed)."
+        : "Not distinguishable: the 95 % intervals of the medians overlap.",
+    };
+  }
+  const leader = intervals[best] ?? null;
+  return {
+    marks: intervals.map((m, i) =>
+      i === best
+        ? { best: true, note: null }
+        : m === null
+          ? { best: false, note: null }
+          : {
+              best: false,
+              note: compareMedianIntervals(m, leader).verdict === "not distinguishable" ? null : "behind",
+            },
+    ),
+    note: null,
+  };
 }
-
-/** A difference a reader should notice (more than 10 % from the best). */
-export const NOTABLE_DIFFERENCE = 0.1;
 
 export type CompareSuggestion = {
   group: { key: string; label: string };

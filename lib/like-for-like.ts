@@ -1,6 +1,15 @@
 // Names and compares like-for-like groups part by part, so pages can say what they left out and why
 // ("4 results hidden: ambient below 15 °C"). The bands themselves come from lib/analysis.
-import { ageBand, ambientBand, cutoffBand, groupKey, rateBand, type MethodCardForKey } from "@/lib/analysis";
+import {
+  ageBand,
+  ambientBand,
+  cutoffBand,
+  groupKey,
+  labelForGroupKey,
+  rateBand,
+  resistanceBandFromKey,
+  type MethodCardForKey,
+} from "@/lib/analysis";
 import { resistanceBand } from "@/lib/analysis/group-key";
 
 const GROUP_PARTS = ["resistance", "ambient", "cutoff", "rate", "age"] as const;
@@ -21,6 +30,21 @@ export function describeGroup(card: MethodCardForKey): DescribedGroup {
       rate: rateBand(card.loadCurrentA, card.ratedMah),
       age: ageBand(card.cyclesBeforeTest),
     },
+  };
+}
+
+/**
+ * A stored result's group: the key as stored (its resistance part is what the log showed — see
+ * groupKeyForAnalysis), the other parts' bands from the method card that made them.
+ */
+export function describeStoredGroup(key: string, card: MethodCardForKey): DescribedGroup {
+  const fromCard = describeGroup(card);
+  const resistance = resistanceBandFromKey(key) ?? fromCard.parts.resistance;
+  const parts = { ...fromCard.parts, resistance };
+  return {
+    key,
+    label: labelForGroupKey(key) ?? GROUP_PARTS.map((p) => parts[p].label).join(" · "),
+    parts,
   };
 }
 

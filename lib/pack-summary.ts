@@ -1,7 +1,16 @@
-// Pure preparation of a pack's published results for pages: per-group figure summaries, sustained C,
-// and the capacity/resistance-over-cycles series. Statistics come from lib/analysis; no I/O here.
-import { retentionTrend, summarise, type RetentionTrend } from "@/lib/analysis";
-import { describeGroup, keyWithoutAge, type DescribedGroup } from "@/lib/like-for-like";
+// Pure preparation of a pack's published results for pages: per-group figure summaries, sustained C (the
+// measured rating), and the ageing figures — one physical pack's retention series where a result's log holds
+// several cycles, and, labelled as such, results at different cycle counts. Statistics come from lib/analysis.
+import {
+  projectTo80,
+  retentionTrend,
+  summarise,
+  type Projection,
+  type RetentionSeries,
+  type RetentionTrend,
+} from "@/lib/analysis";
+import { medianInterval, type MedianInterval } from "@/lib/analysis/uncertainty";
+import { describeStoredGroup, keyWithoutAge, type DescribedGroup } from "@/lib/like-for-like";
 
 export type Summary = NonNullable<ReturnType<typeof summarise>>;
 
@@ -32,10 +41,18 @@ export type PublicResultRow = {
   resistanceAt25CMohm: number | null;
   holdVoltagePerCellV: number | null;
   temperatureRiseC: number | null;
+  /** Sag-limited C, an ESTIMATE (see figures.sagLimitedCAssumptions). */
   sagLimitedC: number | null;
+  /** Sag-limited C estimate ÷ labelled C. */
   labelRatio: number | null;
+  /** Sustained C MEASURED from the run; null when it did not qualify (or was analysed before issue 12). */
+  sustainedCMeasured: number | null;
+  /** Measured sustained C ÷ labelled C. */
+  sustainedLabelRatio: number | null;
   capacityRatio: number | null;
-  /** The log reached the cut-off voltage (figures.timeToCutoffS is set). */
+  /** Capacity over the cycles of this result's own log (one physical pack); null with fewer than two. */
+  retention: RetentionSeries | null;
+  /** The log reached the cut-off voltage (figures.reachedCutoff, or timeToCutoffS for older results). */
   reachedCutoff: boolean;
   /** The pack passed the stop temperature during the test (figures.timeToStopTemperatureS is set). */
   passedStopTemperature: boolean;
@@ -44,6 +61,8 @@ export type PublicResultRow = {
 const SUMMARY_FIGURES = [
   "sagLimitedC",
   "labelRatio",
+  "sustainedCMeasured",
+  "sustainedLabelRatio",
   "capacityMah",
   "capacityRatio",
   "holdVoltagePerCellV",
@@ -61,13 +80,15 @@ export type GroupFigures = {
   /** Of those, results a reader asked moderators to check (still counted until they decide). */
   openCases: number;
   figures: Record<SummaryFigure, Summary | null>;
-  /** Sustained C inside this group, from approved results only. */
+  /** The pack's sustained C in this group: the highest measured value among its approved results. */
   sustainedC: number | null;
 };
 
+/** A result's group as stored: the key's resistance part is what the log showed, the rest from the card. */
 export function describeResultGroup(
   r: Pick<
     PublicResultRow,
+    | "groupKey"
     | "resistanceMethod"
     | "ambientTemperatureC"
     | "cutoffVPerCell"
@@ -76,7 +97,7 @@ export function describeResultGroup(
     | "cyclesBeforeTest"
   >,
 ): DescribedGroup {
-  return describeGroup({
+  return describeStoredGroup(r.groupKey, {
     resistanceMethod: r.resistanceMethod,
     ambientC: r.ambientTemperatureC,
     cutoffVPerCell: r.cutoffVPerCell,
@@ -92,15 +113,25 @@ export function summariseFigures(rows: PublicResultRow[]): Record<SummaryFigure,
   return out;
 }
 
+/** The 95 % interval of each figure's median (order statistics; lib/analysis/uncertainty medianInterval). */
+export function medianIntervals(rows: PublicResultRow[]): Record<SummaryFigure, MedianInterval | null> {
+  const out = {} as Record<SummaryFigure, MedianInterval | null>;
+  for (const f of SUMMARY_FIGURES)
+    out[f] = medianInterval(rows.map((r) => r[f]).filter((v): v is number => v !== null));
+  return out;
+}
+
 /**
- * Sustained C: the highest constant-current rate completed to cut-off without passing the stop
- * temperature, from published (approved) results — one with an open reader case counts until moderators decide.
+ * Sustained C of a pack: the highest MEASURED sustained C (the current the run actually drew, when the run
+ * qualified — figures.sustainedCRule) among its published (approved) results; one with an open reader case
+ * counts until moderators decide. Call it with one like-for-like group's rows for the group's value
+ * (content/methods/figures.md).
  */
 export function sustainedC(rows: PublicResultRow[]): { rateC: number; resultId: number } | null {
   let best: { rateC: number; resultId: number } | null = null;
   for (const r of rows) {
-    if (r.loadMode !== "constant-current" || !r.reachedCutoff || r.passedStopTemperature) continue;
-    if (!best || r.loadRateC > best.rateC) best = { rateC: r.loadRateC, resultId: r.id };
+    if (r.sustainedCMeasured === null || !Number.isFinite(r.sustainedCMeasured)) continue;
+    if (!best || r.sustainedCMeasured > best.rateC) best = { rateC: r.sustainedCMeasured, resultId: r.id };
   }
   return best;
 }
@@ -114,7 +145,7 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
     const first = list[0];
     if (!first) continue;
     out.push({
-      group: { ...describeResultGroup(first), key: first.groupKey },
+      group: describeResultGroup(first),
       n: list.length,
       openCases: list.filter((r) => r.openCase).length,
       figures: summariseFigures(list),
@@ -125,17 +156,38 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
 }
 
 type CyclePoint = { resultId: number; cycles: number; capacityMah: number | null; dcResistanceMohm: number | null };
+/** Results of one pack at different cycle counts: separate tests, possibly of different physical packs. */
 export type CycleSeries = {
   label: string;
   points: CyclePoint[];
   trend: RetentionTrend | null;
+  projection: Projection;
   ratedCapacityMah: number;
 };
 
+/** One physical pack's capacity over the cycles of one result's log. */
+export type OnePackSeries = { resultId: number; groupLabel: string; retention: RetentionSeries; otherSeries: number };
+
+export type PackAgeing = { onePack: OnePackSeries | null; acrossResults: CycleSeries | null };
+
+/** The published result whose log holds the longest retention series (the newest on a tie). */
+export function onePackSeries(rows: PublicResultRow[]): OnePackSeries | null {
+  const withSeries = rows.filter((r): r is PublicResultRow & { retention: RetentionSeries } => r.retention !== null);
+  const best = [...withSeries].sort((a, b) => b.retention.points.length - a.retention.points.length || b.id - a.id)[0];
+  if (!best) return null;
+  return {
+    resultId: best.id,
+    groupLabel: describeResultGroup(best).label,
+    retention: best.retention,
+    otherSeries: withSeries.length - 1,
+  };
+}
+
 /**
- * Capacity and resistance over cycles. Ageing moves a result into another age band, so the series takes
- * results that share every group part except age (same method, ambient, cut-off and rate) — the series
- * with the most distinct cycle counts. Published results only (the rows are); null when no series has two cycle counts.
+ * Capacity and resistance over cycles ACROSS results. Ageing moves a result into another age band, so the
+ * series takes results that share every group part except age (same method, ambient, cut-off and rate) — the
+ * series with the most distinct cycle counts. These are separate tests, possibly of different physical packs
+ * of one model, so pages say so. Published (approved) results only; null when no series has two cycle counts.
  */
 export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
   const series = new Map<string, { label: string; rows: PublicResultRow[] }>();
@@ -169,9 +221,14 @@ export function cycleSeries(rows: PublicResultRow[]): CycleSeries | null {
       dcResistanceMohm: r.dcResistanceMohm,
     }))
     .sort((a, b) => a.cycles - b.cycles || a.resultId - b.resultId);
-  const trend = retentionTrend(
-    points.filter((p): p is CyclePoint & { capacityMah: number } => p.capacityMah !== null),
-    first.ratedCapacityMah,
-  );
-  return { label: best.label, points, trend, ratedCapacityMah: first.ratedCapacityMah };
+  const withCapacity = points.filter((p): p is CyclePoint & { capacityMah: number } => p.capacityMah !== null);
+  const trend = retentionTrend(withCapacity, first.ratedCapacityMah);
+  const cycles = withCapacity.map((p) => p.cycles);
+  const projection = projectTo80(trend, Math.min(...cycles), Math.max(...cycles), new Set(cycles).size);
+  return { label: best.label, points, trend, projection, ratedCapacityMah: first.ratedCapacityMah };
+}
+
+/** Both ageing views of a pack: one physical pack's series first, results across cycle counts beside it. */
+export function packAgeing(rows: PublicResultRow[]): PackAgeing {
+  return { onePack: onePackSeries(rows), acrossResults: cycleSeries(rows) };
 }

@@ -4,7 +4,7 @@
 import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
-import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
+import { listPacksInGroup, listPublicGroups, rankMakersInGroup, type RankingRating } from "@/db/queries/groups";
 import { listFeaturedCharts } from "@/db/queries/open-data/charts";
 import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/groups";
 import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
@@ -32,8 +32,8 @@ export function cachedPacksInGroup(groupKey: string) {
   })();
 }
 
-export function cachedMakerRanking(groupKey: string) {
-  return unstable_cache(() => rankMakersInGroup(groupKey), ["maker-ranking", groupKey], {
+export function cachedMakerRanking(groupKey: string, rating: RankingRating = "estimate") {
+  return unstable_cache(() => rankMakersInGroup(groupKey, rating), ["maker-ranking", groupKey, rating], {
     tags: [t.group(groupKey), t.results, t.packs],
     revalidate,
   })();

@@ -1,4 +1,5 @@
-import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import { fmt, fmtDate } from "@/lib/format";
+import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { cachedGroups, cachedNewestResults } from "@/server/public-data";
 import { GroupSwitcher } from "./_components/group-switcher-client";
 import { HomeLabelCheck } from "./_components/home-label-check";
@@ -47,9 +48,13 @@ export default async function HomePage() {
       <section aria-labelledby="label-check-h" className="space-y-3">
         <h2 id="label-check-h">Label check</h2>
         <p className="muted max-w-3xl text-sm">
-          Each point is a pack: its labelled continuous C across, the C its measured DC resistance supports (sag-limited
-          C) up. Points below the dashed line fall short of their label.{" "}
-          <a href="/methods#sag-limited-c">How sag-limited C is computed</a>.
+          Each point is a pack: its labelled continuous C across, and up either the{" "}
+          <strong>sag-limited C estimate</strong> from its DC resistance (an estimate, not a tested rate;{" "}
+          <a href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>its assumptions</a>) or the{" "}
+          <strong>sustained C it was measured to hold</strong> (the current a qualifying run actually drew to its
+          cut-off; <a href={methodsHref(METHODS_ANCHORS.sustainedC)}>the rule</a>). Below the dashed line a pack falls
+          short of its label by the estimate; by the measured rating it has not shown its label, since a run holds only
+          the rate it was tested at.
         </p>
         {first && chart ? (
           <div className="space-y-4">
@@ -74,8 +79,8 @@ export default async function HomePage() {
                   {r.makerName} {r.packModel}
                 </a>
                 <p className="num text-sm">
-                  {fmt(r.capacityMah, 0, "mAh")} · {fmt(r.sagLimitedC, 1, "C")} sag-limited · ratio{" "}
-                  {fmtRatio(r.labelRatio)}
+                  {fmt(r.capacityMah, 0, "mAh")} · sustained {fmt(r.sustainedCMeasured, 1, "C")} (measured) ·
+                  sag-limited {fmt(r.sagLimitedC, 1, "C")} (estimate)
                 </p>
                 <p className="muted text-xs">
                   <a href={`/results/${r.id}`}>Result #{r.id}</a> · {fmtDate(r.publishedAt)}

@@ -1,11 +1,17 @@
-// What the measurement core made of a log: the figures with their units and links to their
-// definitions on /methods, the warnings, the checks against the method card, and the curve.
+// What the measurement core made of a log: every discharge (and which one the headline figures describe),
+// the figures with their units and links to their definitions on /methods, both ratings saying what they
+// are, the warnings in words, the checks against the method card, and the curve (stacked panels).
 import { LogFigure } from "@/components/charts/log-figure";
 import type { CardCheck, CurvePoint, PublicFigures } from "@/lib/analysis";
 import { prepareTimeCurve } from "@/lib/curves";
+import { METHODS_ANCHORS, methodsHref, type MethodsAnchor } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
+import { DischargesTable } from "./discharges-table";
+import { RatingFigures } from "./rating-figures";
+import { RetentionSummary } from "./retention-summary";
 
-type Row = { label: string; value: string; anchor: string };
+type Row = { label: string; value: string; anchor: MethodsAnchor };
+const A = METHODS_ANCHORS;
 
 const RESISTANCE_METHOD: Record<string, string> = {
   "iec-61960-two-level": "IEC 61960-3 two-level",
@@ -15,30 +21,30 @@ const RESISTANCE_METHOD: Record<string, string> = {
 function rows(f: PublicFigures): Row[] {
   const perCell = (x: number | null, digits: number) => (x === null ? "" : ` (${fmt(x, digits)} V per cell)`);
   return [
-    { label: "Delivered capacity", value: fmt(f.capacityMah, 0, "mAh"), anchor: "delivered-capacity" },
-    { label: "Delivered energy", value: fmt(f.energyWh, 2, "Wh"), anchor: "delivered-energy" },
+    { label: "Delivered capacity", value: fmt(f.capacityMah, 0, "mAh"), anchor: A.deliveredCapacity },
+    { label: "Delivered energy", value: fmt(f.energyWh, 2, "Wh"), anchor: A.deliveredEnergy },
     {
       label: "Mean voltage under load",
       value: `${fmt(f.meanVoltageV, 2, "V")}${perCell(f.meanVoltagePerCellV, 3)}`,
-      anchor: "mean-voltage",
+      anchor: A.meanVoltage,
     },
     {
       label: "Minimum voltage",
       value: `${fmt(f.minVoltageV, 2, "V")}${perCell(f.minVoltagePerCellV, 3)}`,
-      anchor: "minimum-voltage",
+      anchor: A.minimumVoltage,
     },
     {
       label: `Hold voltage (${f.parameters.holdDelayS} s)`,
       value: fmt(f.holdVoltagePerCellV, 3, "V per cell"),
-      anchor: "hold-voltage",
+      anchor: A.holdVoltage,
     },
     {
       label: "DC resistance",
       value:
         f.dcResistanceMohm === null
           ? fmt(null)
-          : `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ per cell")}; ${RESISTANCE_METHOD[f.dcResistanceMethod ?? ""] ?? "no method"})`,
-      anchor: "dc-resistance",
+          : `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ per cell")}; ${RESISTANCE_METHOD[f.dcResistanceMethod ?? ""] ?? "no method"}${f.dcResistanceIndicative ? "; indicative only" : ""})`,
+      anchor: A.dcResistance,
     },
     {
       label: "Resistance at 25 °C (estimate)",
@@ -46,29 +52,25 @@ function rows(f: PublicFigures): Row[] {
         f.resistanceAt25CMohm === null
           ? fmt(null)
           : `${fmt(f.resistanceAt25CMohm, 1, "mΩ")} (measured at ${fmt(f.resistanceTemperatureC, 1, "°C")}; Ea ${f.parameters.activationEnergyKJPerMol} kJ/mol)`,
-      anchor: "resistance-at-25c",
+      anchor: A.resistanceAt25C,
     },
-    { label: "Peak current", value: fmt(f.peakCurrentA, 1, "A"), anchor: "peak-current" },
+    { label: "Peak current", value: fmt(f.peakCurrentA, 1, "A"), anchor: A.peakCurrent },
     {
       label: "Temperature rise",
       value:
         f.temperatureRiseC === null
           ? fmt(null)
           : `${fmt(f.temperatureRiseC, 1, "°C")} (${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")})`,
-      anchor: "temperature-rise",
+      anchor: A.temperatureRise,
     },
+    { label: "Capacity ratio (delivered ÷ rated)", value: fmt(f.capacityRatio, 2), anchor: A.capacityRatio },
+    { label: "Specific energy", value: fmt(f.specificEnergyWhKg, 0, "Wh/kg"), anchor: A.specificEnergy },
     {
-      label: "Sag-limited C",
-      value:
-        f.sagLimitedC === null
-          ? fmt(null)
-          : `${fmt(f.sagLimitedC, 1)}C (${f.parameters.nominalVPerCell} V nominal → ${f.parameters.floorVPerCell} V floor per cell)`,
-      anchor: "sag-limited-c",
+      label: "Time to cut-off",
+      value: f.reachedCutoff ? fmt(f.timeToCutoffS, 0, "s") : "not reached",
+      anchor: A.timeToCutoff,
     },
-    { label: "Capacity ratio (delivered ÷ rated)", value: fmt(f.capacityRatio, 2), anchor: "capacity-ratio" },
-    { label: "Label ratio (measured C ÷ labelled C)", value: fmt(f.labelRatio, 2), anchor: "label-ratio" },
-    { label: "Specific energy", value: fmt(f.specificEnergyWhKg, 0, "Wh/kg"), anchor: "specific-energy" },
-    { label: "Time to cut-off", value: fmt(f.timeToCutoffS, 0, "s"), anchor: "time-to-cutoff" },
+    { label: "Sample interval (median)", value: fmt(f.sampleIntervalS, 2, "s"), anchor: A.sampleInterval },
   ];
 }
 
@@ -121,12 +123,14 @@ export function LogPreview({
           </ul>
         </div>
       )}
+      <DischargesTable discharges={figures.discharges} headline={figures.headlineDischarge} />
+      <RetentionSummary retention={figures.retention} />
       <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-2" data-testid="log-figures">
         {rows(figures).map((r) => (
           <div key={r.label} className="flex flex-col border-b border-ink/10 pb-1 dark:border-night-line">
             <dt className="muted">
               <a
-                href={`/methods#${r.anchor}`}
+                href={methodsHref(r.anchor)}
                 className="text-inherit underline decoration-dotted underline-offset-2 hover:text-cell-600 dark:hover:text-cell-400"
               >
                 {r.label}
@@ -136,6 +140,7 @@ export function LogPreview({
           </div>
         ))}
       </dl>
+      <RatingFigures f={figures} />
       <LogFigure
         id="log-preview-chart"
         title="Voltage, current and temperature over time"

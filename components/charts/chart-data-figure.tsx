@@ -16,11 +16,20 @@ export function ChartDataFigure({ data, id = "ch" }: { data: ChartData; id?: str
         title={title}
         points={data.labelCheck ?? []}
         groupLabel={data.groupLabel}
+        rating={data.rating}
         headingLevel={2}
       />
     );
   if (data.state.kind === "maker-ranking")
-    return <RankingFigure id={id} title={title} bars={data.ranking ?? []} notes={<p>{data.groupLabel}.</p>} />;
+    return (
+      <RankingFigure
+        id={id}
+        title={title}
+        bars={data.ranking ?? []}
+        rating={data.rating}
+        notes={<p>{data.groupLabel}.</p>}
+      />
+    );
   return (
     <LineFigure
       id={id}

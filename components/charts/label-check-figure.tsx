@@ -1,12 +1,12 @@
 // The label check on a page: the drawing (draw/label-check-plot.tsx, the same one the images and embeds
 // draw), its legend, and the table its points are described by.
 import { fmtC, fmtLabelledC } from "@/lib/format";
+import { LABEL_CHECK_WORDS } from "@/lib/figure-words";
 import { ChartFigure, ChartLegend, type ChartTableData } from "./chart-figure";
 import {
   LabelCheckPlot,
   SAG_LIMITED_RATING,
   fallsShort,
-  ratingTitle,
   type LabelCheckPoint,
   type RatingSeries,
 } from "./draw/label-check-plot";
@@ -19,7 +19,7 @@ function labelCheckTable(points: LabelCheckPoint[], rating: RatingSeries, groupL
     .sort((a, b) => a.p.ratingC / a.p.labelledC - b.p.ratingC / b.p.labelledC);
   return {
     caption: `Label check, ${groupLabel}`,
-    columns: ["Pack", "Labelled C", `${ratingTitle(rating)} (median)`, "Label ratio", "Results"],
+    columns: ["Pack", "Labelled C", LABEL_CHECK_WORDS[rating].column, "Label ratio", "Results"],
     rows: sorted.map(({ p, i }) => ({
       rowId: String(i),
       cells: [
@@ -54,13 +54,20 @@ export function LabelCheckFigure({
       id={id}
       title={title}
       headingLevel={headingLevel}
-      legend={<ChartLegend items={labelCheckLegendItems()} />}
+      legend={<ChartLegend items={labelCheckLegendItems(rating)} />}
       table={labelCheckTable(points, rating, groupLabel)}
-      empty={points.length === 0 ? "No published results with a rating in this group yet." : undefined}
+      empty={
+        points.length === 0
+          ? `No published results with a ${LABEL_CHECK_WORDS[rating].short} rating in this group yet.`
+          : undefined
+      }
       notes={
         <p>
-          {groupLabel}. One point per pack: the median of its published results in this like-for-like group. {short} of{" "}
-          {points.length} packs fall short of their label. Select a point to open the pack.
+          {groupLabel}. One point per pack:{" "}
+          {rating === "measured"
+            ? "its sustained C, the highest measured among its approved results in this like-for-like group"
+            : "the median sag-limited C estimate of its published results in this like-for-like group"}
+          . {short} of {points.length} packs {LABEL_CHECK_WORDS[rating].belowCount}. Select a point to open the pack.
         </p>
       }
     >

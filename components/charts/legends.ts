@@ -1,13 +1,15 @@
 // Legends and series of the chart kinds, one definition for the page (HTML legend) and the image (SVG legend).
 import type { CurveLine } from "@/lib/open-data/chart-data";
+import { LABEL_CHECK_WORDS, type RatingKind } from "@/lib/figure-words";
 import type { LegendItem } from "./chart-figure";
 import type { LineSeries } from "./draw/line-plot";
 import { MEETS_STYLE, SHORT_STYLE, seriesStyle } from "./palette";
 
-export function labelCheckLegendItems(): LegendItem[] {
+export function labelCheckLegendItems(rating: RatingKind): LegendItem[] {
+  const words = LABEL_CHECK_WORDS[rating];
   return [
-    { label: "meets or beats its label", color: MEETS_STYLE.color, shape: MEETS_STYLE.shape, filled: true },
-    { label: "falls short (below the line)", color: SHORT_STYLE.color, shape: SHORT_STYLE.shape, filled: false },
+    { label: words.meets, color: MEETS_STYLE.color, shape: MEETS_STYLE.shape, filled: true },
+    { label: words.below, color: SHORT_STYLE.color, shape: SHORT_STYLE.shape, filled: false },
     { label: "parity: rating = label", color: "currentColor", line: true, dash: "5 4" },
   ];
 }

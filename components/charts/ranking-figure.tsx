@@ -1,5 +1,7 @@
 // The maker ranking on a page: the drawing the images draw, and its table.
 import type { RankingBar } from "@/lib/open-data/chart-data";
+import type { ChartRating } from "@/lib/open-data/chart-state";
+import { LABEL_RATIO_LABELS } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
 import { ChartFigure } from "./chart-figure";
 import { RankingPlot } from "./draw/ranking-plot";
@@ -9,11 +11,13 @@ export function RankingFigure({
   title,
   bars,
   notes,
+  rating,
 }: {
   id: string;
   title: string;
   bars: RankingBar[];
   notes?: React.ReactNode;
+  rating: ChartRating;
 }) {
   return (
     <ChartFigure
@@ -23,11 +27,11 @@ export function RankingFigure({
       empty={bars.length === 0 ? "No label ratios in this group yet." : undefined}
       table={{
         caption: title,
-        columns: ["Maker", "Median label ratio", "Packs", "Results"],
+        columns: ["Maker", `Median ${LABEL_RATIO_LABELS[rating].toLowerCase()}`, "Packs", "Results"],
         rows: bars.map((b) => ({ cells: [b.label, fmt(b.labelRatio, 2), String(b.packCount), String(b.resultCount)] })),
       }}
     >
-      <RankingPlot bars={bars} />
+      <RankingPlot bars={bars} rating={rating} />
     </ChartFigure>
   );
 }

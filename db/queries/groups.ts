@@ -6,7 +6,7 @@ import "server-only";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
-import { describeGroup, type DescribedGroup } from "@/lib/like-for-like";
+import { describeStoredGroup, type DescribedGroup } from "@/lib/like-for-like";
 import { isPublished, makerOfPack, packOfResult } from "./published";
 
 export type GroupSummary = DescribedGroup & { resultCount: number; packCount: number };
@@ -44,7 +44,7 @@ export async function listPublicGroups(): Promise<GroupSummary[]> {
     .innerJoin(packs, packOfResult);
   return rows
     .map((r) => ({
-      ...describeGroup({
+      ...describeStoredGroup(r.key, {
         resistanceMethod: r.resistanceMethod,
         ambientC: r.ambientTemperatureC,
         cutoffVPerCell: r.cutoffVPerCell,
@@ -68,8 +68,15 @@ export type PackInGroup = {
   labelledC: number;
   /** Published results of the pack in the group. */
   n: number;
+  /**
+   * Sag-limited C ESTIMATE: median over the pack's published results (the field keeps its old name, which the
+   * packs API also uses; pages call it "sag-limited C (estimate)").
+   */
   measuredC: { median: number; n: number; min: number; max: number } | null;
+  /** Sag-limited C estimate ÷ labelled C, median. */
   labelRatio: number | null;
+  /** The pack's sustained C (MEASURED) in the group: the highest among its published results, with their count. */
+  sustainedC: { value: number; n: number } | null;
   capacityRatio: number | null;
   capacityMah: number | null;
   dcResistanceMohm: number | null;
@@ -91,6 +98,8 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
       measuredMin: sql<number | null>`min(${results.sagLimitedC})`,
       measuredMax: sql<number | null>`max(${results.sagLimitedC})`,
       labelRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.labelRatio})`,
+      sustainedMax: sql<number | null>`max(${results.sustainedCMeasured})`,
+      sustainedN: sql<number>`count(${results.sustainedCMeasured})::int`,
       capacityRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityRatio})`,
       capacityMah: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityMah})`,
       dcResistanceMohm: sql<number | null>`percentile_cont(0.5) within group (order by ${results.dcResistanceMohm})`,
@@ -101,8 +110,9 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
     .where(and(eq(results.groupKey, groupKey), isPublished))
     .groupBy(packs.id, makers.id)
     .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
-  return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, ...r }) => ({
+  return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, sustainedMax, sustainedN, ...r }) => ({
     ...r,
+    sustainedC: sustainedMax === null || sustainedN === 0 ? null : { value: Number(sustainedMax), n: sustainedN },
     measuredC:
       measuredMedian === null || measuredN === 0
         ? null
@@ -118,13 +128,27 @@ export type MakerRank = {
   results: number;
   min: number;
   max: number;
+  /** Each pack's value once (its median, or its highest measured), for the maker's median interval. */
+  packValues: number[];
 };
 
+/** Which label ratio a ranking orders by: of the sag-limited C estimate, or of the measured sustained C. */
+export type RankingRating = "estimate" | "measured";
+
 /**
- * Makers ranked by the median of their packs' median label ratios inside one group. Each pack counts
- * once, so a pack tested twenty times does not outweigh the rest of its maker's range.
+ * Makers ranked by the median over their packs inside one group; each pack counts once, so a pack tested twenty
+ * times does not outweigh the rest of its maker's range. "estimate": a pack's value is the median label ratio of
+ * its published results (sag-limited C estimate ÷ labelled C). "measured": the pack's sustained C ÷ labelled C,
+ * the highest among its published results (content/methods/figures.md). The order is a listing, not a verdict:
+ * pages mark a maker ahead only where the median intervals say so (lib/analysis/uncertainty distinguishedBest).
  */
-export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> {
+export async function rankMakersInGroup(groupKey: string, rating: RankingRating = "estimate"): Promise<MakerRank[]> {
+  // One value per pack in the catalogue, by the one counting rule (db/queries/published.ts).
+  const m =
+    rating === "estimate"
+      ? sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`
+      : sql`max(${results.sustainedLabelRatio})`;
+  const ratio = rating === "estimate" ? results.labelRatio : results.sustainedLabelRatio;
   const rows = await db.execute<{
     maker_slug: string;
     maker_name: string;
@@ -133,18 +157,20 @@ export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> 
     results: number;
     min: number;
     max: number;
+    pack_values: number[];
   }>(sql`
     with per_pack as (
       select ${results.packId} as pack_id, ${makers.id} as maker_id,
-             percentile_cont(0.5) within group (order by ${results.labelRatio}) as m, count(*) as n
+             ${m} as m, count(*) as n
       from ${results}
       join ${packs} on ${packOfResult}
       join ${makers} on ${makerOfPack}
-      where ${results.groupKey} = ${groupKey} and ${isPublished} and ${results.labelRatio} is not null
+      where ${results.groupKey} = ${groupKey} and ${isPublished} and ${ratio} is not null
       group by ${results.packId}, ${makers.id}
     )
     select mk.slug as maker_slug, mk.name as maker_name, percentile_cont(0.5) within group (order by pp.m) as median,
-           count(*)::int as packs, sum(pp.n)::int as results, min(pp.m) as min, max(pp.m) as max
+           count(*)::int as packs, sum(pp.n)::int as results, min(pp.m) as min, max(pp.m) as max,
+           array_agg(pp.m::float8) as pack_values
     from per_pack pp
     join ${makers} mk on mk.id = pp.maker_id
     group by mk.id
@@ -157,5 +183,6 @@ export async function rankMakersInGroup(groupKey: string): Promise<MakerRank[]> 
     results: Number(r.results),
     min: Number(r.min),
     max: Number(r.max),
+    packValues: r.pack_values.map(Number),
   }));
 }

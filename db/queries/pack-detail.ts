@@ -1,14 +1,15 @@
 // Everything a pack's page shows, from its published results: figures per like-for-like group, sustained
-// C, the cycling series with its trend, and prepared discharge curves.
+// C (measured), the ageing figures (one physical pack's cycles where a log holds them, results across cycle
+// counts beside them), and prepared discharge curves.
 import "server-only";
 import { PACK_PAGE_CURVE_POINTS, prepareCurve, type ChartPoint } from "@/lib/curves";
 import {
-  cycleSeries,
   describeResultGroup,
   figuresByGroup,
+  packAgeing,
   sustainedC,
-  type CycleSeries,
   type GroupFigures,
+  type PackAgeing,
   type PublicResultRow,
 } from "@/lib/pack-summary";
 import type { PackSummary } from "@/lib/catalogue";
@@ -23,7 +24,7 @@ export type PackDetail = {
   results: (PublicResultRow & { groupLabel: string })[];
   groups: GroupFigures[];
   sustained: { rateC: number; resultId: number; groupLabel: string } | null;
-  cycles: CycleSeries | null;
+  ageing: PackAgeing;
   curves: { resultId: number; groupKey: string; label: string; points: ChartPoint[] }[];
 };
 
@@ -53,7 +54,7 @@ export async function getPackDetail(slug: string): Promise<PackDetail | null> {
     results: withLabels,
     groups: figuresByGroup(rows),
     sustained: best ? { ...best, groupLabel: withLabels.find((r) => r.id === best.resultId)?.groupLabel ?? "" } : null,
-    cycles: cycleSeries(rows),
+    ageing: packAgeing(rows),
     curves,
   };
 }

@@ -5,7 +5,8 @@ import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
-import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
+import { headlineCurve } from "@/lib/curves";
 import type { FlagReason } from "@/lib/enums";
 import type { PublicResultRow } from "@/lib/pack-summary";
 import { isPublished, makerOfPack, packOfResult } from "./published";
@@ -13,6 +14,12 @@ import { nameOnResults } from "@/lib/user-name";
 
 /** Whether a reader's flag on the result is open (a case moderators have not decided). */
 const hasOpenCase = sql<boolean>`exists (select 1 from ${readerFlags} where ${readerFlags.resultId} = ${results.id} and ${readerFlags.status} = 'open')`;
+
+/** What headlineCurve needs from the stored figures (absent on results stored before discharges were listed). */
+export const headlineColumns = {
+  discharges: sql<Discharge[] | null>`${results.figures}->'discharges'`,
+  headlineDischarge: sql<number | null>`(${results.figures}->>'headlineDischarge')::int`,
+};
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
@@ -43,8 +50,12 @@ const publicResultColumns = {
   temperatureRiseC: results.temperatureRiseC,
   sagLimitedC: results.sagLimitedC,
   labelRatio: results.labelRatio,
+  sustainedCMeasured: results.sustainedCMeasured,
+  sustainedLabelRatio: results.sustainedLabelRatio,
   capacityRatio: results.capacityRatio,
-  reachedCutoff: sql<boolean>`(${results.figures}->>'timeToCutoffS') is not null`,
+  retention: sql<RetentionSeries | null>`${results.figures}->'retention'`,
+  // Results analysed before issue 12 have no reachedCutoff: a time to cut-off then stood for it.
+  reachedCutoff: sql<boolean>`coalesce((${results.figures}->>'reachedCutoff')::boolean, (${results.figures}->>'timeToCutoffS') is not null)`,
   passedStopTemperature: sql<boolean>`(${results.figures}->>'timeToStopTemperatureS') is not null`,
 };
 
@@ -66,16 +77,16 @@ export async function listPublicResultsForPacks(packIds: number[]): Promise<Publ
   return rows.map(toRow);
 }
 
-/** Stored chart curves of the given published results. */
+/** Stored chart curves of the given published results: the headline discharge of each (lib/curves.ts headlineCurve). */
 export async function getPublicCurves(resultIds: number[]): Promise<Map<number, CurvePoint[]>> {
   if (resultIds.length === 0) return new Map();
   const rows = await db
-    .select({ id: results.id, curve: results.curve })
+    .select({ id: results.id, curve: results.curve, ...headlineColumns })
     .from(results)
     .innerJoin(packs, packOfResult)
     .innerJoin(makers, makerOfPack)
     .where(and(inArray(results.id, resultIds), isPublished));
-  return new Map(rows.map((r) => [r.id, r.curve]));
+  return new Map(rows.map((r) => [r.id, headlineCurve(r.curve, r)]));
 }
 
 export type NewestResult = {
@@ -86,8 +97,11 @@ export type NewestResult = {
   makerName: string;
   groupKey: string;
   capacityMah: number | null;
+  /** Sag-limited C estimate. */
   sagLimitedC: number | null;
+  /** Sag-limited C estimate ÷ labelled C. */
   labelRatio: number | null;
+  sustainedCMeasured: number | null;
 };
 
 /** The newest published results, for the home page and the sitemap. */
@@ -103,6 +117,7 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
       capacityMah: results.capacityMah,
       sagLimitedC: results.sagLimitedC,
       labelRatio: results.labelRatio,
+      sustainedCMeasured: results.sustainedCMeasured,
     })
     .from(results)
     .innerJoin(packs, packOfResult)
@@ -130,6 +145,8 @@ export type ResultDetail = PublicResultRow & {
   openCaseReasons: FlagReason[];
   /** The uploaded log's file name (its extension names the download; the name itself is never shown). */
   logFilename: string;
+  /** The column mapping the log was read with (null: the columns were detected). */
+  logMapping: ColumnMapping | null;
   notes: string | null;
   submittedAt: string;
   /** How many label photos the contributor sent (served at /results/<id>/photos/<n>, 1-based). */
@@ -154,6 +171,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       ...publicResultColumns,
       notes: results.notes,
       logFilename: results.logFilename,
+      logMapping: results.logMapping,
       submittedAt: results.submittedAt,
       figures: results.figures,
       curve: results.curve,
@@ -211,6 +229,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     connector,
     notes,
     logFilename,
+    logMapping,
     submittedAt,
     figures,
     curve,
@@ -234,6 +253,7 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     openCaseReasons: [...new Set(open.map((o) => o.reason))],
     notes,
     logFilename,
+    logMapping,
     submittedAt: new Date(submittedAt).toISOString(),
     photoCount,
     figures,

@@ -211,6 +211,7 @@ export type GroupMedians = {
   capacityMah: number | null;
   labelRatio: number | null;
   sagLimitedC: number | null;
+  sustainedCMeasured: number | null;
   dcResistanceMohm: number | null;
 };
 
@@ -219,6 +220,7 @@ function medians(
     capacityMah: number | null;
     labelRatio: number | null;
     sagLimitedC: number | null;
+    sustainedCMeasured: number | null;
     dcResistanceMohm: number | null;
   }[],
 ): GroupMedians {
@@ -228,6 +230,7 @@ function medians(
     capacityMah: m(rows.map((r) => r.capacityMah)),
     labelRatio: m(rows.map((r) => r.labelRatio)),
     sagLimitedC: m(rows.map((r) => r.sagLimitedC)),
+    sustainedCMeasured: m(rows.map((r) => r.sustainedCMeasured)),
     dcResistanceMohm: m(rows.map((r) => r.dcResistanceMohm)),
   };
 }
@@ -253,6 +256,7 @@ export async function getReviewDetail(resultId: number) {
     capacityMah: results.capacityMah,
     labelRatio: results.labelRatio,
     sagLimitedC: results.sagLimitedC,
+    sustainedCMeasured: results.sustainedCMeasured,
     dcResistanceMohm: results.dcResistanceMohm,
   };
   const groupRows = await db
@@ -296,6 +300,7 @@ export async function getReviewDetail(resultId: number) {
     capacityMah: r.capacityMah,
     labelRatio: r.labelRatio,
     sagLimitedC: r.sagLimitedC,
+    sustainedCMeasured: r.sustainedCMeasured,
     dcResistanceMohm: r.dcResistanceMohm,
   };
   return {

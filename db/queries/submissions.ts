@@ -118,6 +118,8 @@ export type OwnResult = {
   >;
   logKey: string;
   logFilename: string;
+  /** The column mapping the stored log was read with (null: detected). */
+  logMapping: (typeof results.$inferSelect)["logMapping"];
   photoKeys: string[];
 };
 
@@ -156,6 +158,7 @@ export async function getResultForEdit(resultId: number): Promise<OwnResult | nu
     },
     logKey: row.logKey,
     logFilename: row.logFilename,
+    logMapping: row.logMapping,
     photoKeys: row.photoKeys,
   };
 }

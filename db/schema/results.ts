@@ -14,7 +14,7 @@ import {
   timestamp,
   uniqueIndex,
 } from "drizzle-orm/pg-core";
-import type { CurvePoint, Figures } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, Figures } from "@/lib/analysis";
 import type { CurveFingerprint } from "@/lib/analysis/curve-fingerprint";
 import { users } from "./auth";
 import { packs } from "./catalogue";
@@ -54,6 +54,8 @@ export const benchProfiles = pgTable(
     defaultCutoffVPerCell: real("default_cutoff_v_per_cell"),
     defaultStopTemperatureC: real("default_stop_temperature_c"),
     defaultSampleRateHz: real("default_sample_rate_hz"),
+    /** The column mapping this bench's logs need (header-less or oddly named columns); null: detect the columns. */
+    logMapping: jsonb("log_mapping").$type<ColumnMapping>(),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -91,6 +93,8 @@ export const results = pgTable(
     logBytes: integer("log_bytes").notNull(),
     logFilename: text("log_filename").notNull(),
     photoKeys: jsonb("photo_keys").$type<string[]>().notNull().default([]),
+    /** The column mapping the log was analysed with (the tester's, or their bench profile's); null: detected. */
+    logMapping: jsonb("log_mapping").$type<ColumnMapping>(),
     // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
     figures: jsonb("figures").$type<Figures>().notNull(),
     curve: jsonb("curve").$type<CurvePoint[]>().notNull(),
@@ -104,8 +108,14 @@ export const results = pgTable(
     resistanceAt25CMohm: real("resistance_at_25c_mohm"),
     holdVoltagePerCellV: real("hold_voltage_per_cell_v"),
     temperatureRiseC: real("temperature_rise_c"),
+    /** Sag-limited C, an ESTIMATE from a resistance (figures.sagLimitedCAssumptions); never a measured rating. */
     sagLimitedC: real("sag_limited_c"),
+    /** Sag-limited C estimate ÷ labelled continuous C. */
     labelRatio: real("label_ratio"),
+    /** Sustained C MEASURED from the run (figures.sustainedCRule); null when the run does not qualify. */
+    sustainedCMeasured: real("sustained_c_measured"),
+    /** Measured sustained C ÷ labelled continuous C. */
+    sustainedLabelRatio: real("sustained_label_ratio"),
     capacityRatio: real("capacity_ratio"),
     loadRateC: real("load_rate_c").notNull(),
     groupKey: text("group_key").notNull(),
@@ -123,6 +133,10 @@ export const results = pgTable(
     // ratios, already in pack order (scripts/bench-pages.sh measures it over 100,000 results).
     index("results_group_public_idx")
       .on(t.groupKey, t.packId, t.labelRatio)
+      .where(sql`${t.status} = 'approved'`),
+    // The same for the ranking by the measured rating.
+    index("results_group_sustained_idx")
+      .on(t.groupKey, t.packId, t.sustainedLabelRatio)
       .where(sql`${t.status} = 'approved'`),
     index("results_contributor_idx").on(t.contributorId),
     index("results_log_sha_idx").on(t.logSha256),

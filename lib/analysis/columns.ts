@@ -211,6 +211,27 @@ function tryPlan(
   };
 }
 
+/** A header-less mapping must name columns the rows have: otherwise every row would be skipped, saying nothing. */
+function checkWidth(plan: ColumnPlan, rows: SampleRow[]): ColumnPlan {
+  const widest = Math.max(0, ...rows.map((r) => r.fields.length));
+  const used: [string, number | null][] = [
+    ["time", plan.time],
+    ["voltage", plan.voltage],
+    ["current", plan.current],
+    ["temperature", plan.temperature],
+    ...plan.cells.map((c, i): [string, number] => [`cell ${i + 1} voltage`, c]),
+  ];
+  const beyond = used.filter((u): u is [string, number] => u[1] !== null && u[1] >= widest);
+  if (beyond.length > 0) {
+    const what = beyond.map(([name, index]) => `${name} in column ${index}`);
+    throw new LogError(
+      "bad-mapping",
+      `The mapping puts ${listed(what)} (counted from 0), but the log's rows have only ${widest} column${widest === 1 ? "" : "s"} (0–${widest - 1}).`,
+    );
+  }
+  return plan;
+}
+
 /**
  * `rows` are the first non-blank rows of the log with their line numbers. Throws LogError
  * naming the header it saw when the columns cannot be identified.
@@ -225,7 +246,7 @@ export function planColumns(rows: SampleRow[], decimalComma: boolean, mapping: C
         `With hasHeader: false the mapping must give column numbers for time, voltage and current; missing: ${listed(plan.missing)}.`,
       );
     }
-    return plan;
+    return checkWidth(plan, rows);
   }
   const searched = rows.slice(0, HEADER_SEARCH_ROWS);
   let firstText: SampleRow | null = null;
@@ -249,7 +270,7 @@ export function planColumns(rows: SampleRow[], decimalComma: boolean, mapping: C
         rows[0]?.line,
       );
     const plan = tryPlan(null, rows, decimalComma, mapping);
-    if (!("missing" in plan)) return plan;
+    if (!("missing" in plan)) return checkWidth(plan, rows);
     throw new LogError(
       "columns-not-found",
       `Line ${rows[0]?.line ?? 1} holds numbers, not a header row, so the columns cannot be named: pass a column mapping with column numbers from 0, e.g. { time: 0, voltage: 1, current: 2, hasHeader: false }.`,

@@ -1,7 +1,7 @@
 /**
  * The like-for-like key: results are compared only with results that share it. Computed from
  * the method card, never typed. Five parts, each a band chosen so that figures inside it are
- * close enough to compare (reasons in content/methods-figures.md):
+ * close enough to compare (reasons in content/methods/figures.md and content/methods/like-for-like.md):
  *   resistance method · ambient band · cut-off per cell (0.1 V) · load-rate band · pack age band.
  * Key strings use only [a-z0-9.-_] so they are safe in URLs and file names.
  *
@@ -144,6 +144,13 @@ export function labelForGroupKey(key: string): string | null {
   const [res, amb, co, rate, age] = parts as [string, string, string, string, string];
   const labels = [resistanceFromKey(res), ambientFromKey(amb), cutoffFromKey(co), rateFromKey(rate), ageFromKey(age)];
   return labels.every((l): l is string => l !== null) ? labels.join(" · ") : null;
+}
+
+/** The resistance band of a stored key's first part ("dc-step", "dc-none", "charger-readout", …); null when unknown. */
+export function resistanceBandFromKey(key: string): Band | null {
+  const part = key.split("_")[0] ?? "";
+  const label = resistanceFromKey(part);
+  return label === null ? null : { key: part, label };
 }
 
 function same(band: Band, key: string): string | null {

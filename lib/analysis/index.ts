@@ -57,6 +57,7 @@ export {
   groupKeyForAnalysis,
   analysedResistanceBand,
   labelForGroupKey,
+  resistanceBandFromKey,
   ambientBand,
   ageBand,
   cutoffBand,

@@ -1,6 +1,6 @@
 // Per-pack aggregates inside one like-for-like group: the median of approved results with n and spread
 // (pure; fed by db/queries/open-data/groups.ts).
-import { groupKey as computeGroupKey, summarise } from "@/lib/analysis";
+import { groupKey as computeGroupKey, labelForGroupKey, summarise } from "@/lib/analysis";
 import { roundTo } from "./field-kit";
 import { figureDigits } from "./result-fields";
 
@@ -12,6 +12,8 @@ export const AGGREGATE_FIGURES = [
   "temperatureRiseC",
   "sagLimitedC",
   "labelRatio",
+  "sustainedCMeasured",
+  "sustainedLabelRatio",
   "capacityRatio",
 ] as const;
 type AggregateFigure = (typeof AGGREGATE_FIGURES)[number];
@@ -89,10 +91,23 @@ export type MakerAggregate = {
   packCount: number;
   resultCount: number;
   labelRatio: Summary;
+  /** Each pack's value once: what the maker's median (and its interval) is taken over. */
+  packValues: number[];
 };
 
-/** Maker ranking: the median over a maker's packs of each pack's median label ratio. */
-export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
+/**
+ * A pack's label ratio for a maker ranking: the median of its estimate ratios, or — for the measured rating — its
+ * sustained C ÷ labelled C, the highest among its approved results (content/methods/figures.md).
+ */
+function packRatio(p: PackAggregate, rating: "estimate" | "measured"): number | null {
+  return rating === "measured" ? (p.figures.sustainedLabelRatio?.max ?? null) : (p.figures.labelRatio?.median ?? null);
+}
+
+/** Maker ranking: the median over a maker's packs of each pack's label ratio (of the estimate unless told). */
+export function aggregateByMaker(
+  packsAgg: PackAggregate[],
+  rating: "estimate" | "measured" = "estimate",
+): MakerAggregate[] {
   const byMaker = new Map<string, PackAggregate[]>();
   for (const p of packsAgg) byMaker.set(p.makerSlug, [...(byMaker.get(p.makerSlug) ?? []), p]);
   return [...byMaker.values()]
@@ -103,14 +118,19 @@ export function aggregateByMaker(packsAgg: PackAggregate[]): MakerAggregate[] {
         makerName: first.makerName,
         packCount: list.length,
         resultCount: list.reduce((n, p) => n + p.resultCount, 0),
-        labelRatio: summary(list.map((p) => p.figures.labelRatio?.median ?? null)),
+        labelRatio: summary(list.map((p) => packRatio(p, rating))),
+        packValues: list.map((p) => packRatio(p, rating)).filter((v): v is number => v !== null),
       };
     })
     .sort((a, b) => (b.labelRatio?.median ?? -1) - (a.labelRatio?.median ?? -1));
 }
 
-/** A human label for a group key, recomputed from one of its results' method card. */
+/**
+ * A human label for a group key: read from the key itself (its resistance part is what the logs showed), or,
+ * for a key the band functions do not produce, recomputed from one of its results' method card.
+ */
 export function groupLabel(
+  key: string,
   sample:
     | {
         resistanceMethod: string;
@@ -122,6 +142,8 @@ export function groupLabel(
       }
     | undefined,
 ): string | null {
+  const fromKey = labelForGroupKey(key);
+  if (fromKey !== null) return fromKey;
   if (!sample) return null;
   return computeGroupKey({
     resistanceMethod: sample.resistanceMethod,

@@ -7,10 +7,17 @@ import { GROUP_KEY_PATTERN, SLUG_PATTERN } from "@/lib/api-contract/params";
 export const CHART_KINDS = ["label-check", "curves", "maker-ranking"] as const;
 export type ChartKind = (typeof CHART_KINDS)[number];
 export const CHART_KIND_LABELS: Record<ChartKind, string> = {
-  "label-check": "Label check (labelled C against sag-limited C)",
+  "label-check": "Label check (labelled C against a rating)",
   curves: "Discharge curves overlay",
   "maker-ranking": "Maker ranking (median label ratio)",
 };
+
+/**
+ * Which rating a label check or maker ranking uses: the sustained C measured from the runs, or the sag-limited
+ * C estimate. Absent in states published before both existed: those meant the estimate, and still do.
+ */
+export const CHART_RATINGS = ["measured", "estimate"] as const;
+export type ChartRating = (typeof CHART_RATINGS)[number];
 
 export const chartState = z.object({
   v: z.literal(1),
@@ -18,6 +25,7 @@ export const chartState = z.object({
   group: z.string().regex(GROUP_KEY_PATTERN, "Choose a like-for-like group."),
   maker: z.string().regex(SLUG_PATTERN).optional(),
   cells: z.number().int().min(1).max(14).optional(),
+  rating: z.enum(CHART_RATINGS).optional(),
   title: z.string().trim().min(1, "Give the chart a title.").max(120),
   note: z.string().trim().max(400).optional(),
   /** The reader's units (lib/units.ts), e.g. "pack": discharge curves of one pack size per pack instead of per cell. */
@@ -49,6 +57,7 @@ export function encodeChartState(state: ChartState): string {
     group: s.group,
     maker: s.maker,
     cells: s.cells,
+    rating: s.rating,
     title: s.title,
     note: s.note || undefined,
     units: s.units ? writeUnitsParam(parseUnitsParam(s.units)) || undefined : undefined,

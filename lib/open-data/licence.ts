@@ -10,9 +10,11 @@ export const ATTRIBUTION_TEXT = `Data: ${ATTRIBUTION}, Sagline open data, licens
 /**
  * Semantic version of the published data schema (fields, types, units, file format). Bump major on breaking
  * changes. 2.0.0: strict CSV without comment lines, figures rounded to their digits, maker result counts,
- * maker slug and name on packs, `resultCount` for the published-result counts, one list shape.
+ * maker slug and name on packs, `resultCount` for the published-result counts, one list shape. 2.1.0: results gain
+ * the measured rating (sustainedCMeasured, sustainedLabelRatio); sagLimitedC and labelRatio are described as the
+ * estimate they are.
  */
-export const DATA_SCHEMA_VERSION = "2.0.0";
+export const DATA_SCHEMA_VERSION = "2.1.0";
 
 /** meta.licence of every API answer and JSON download. */
 export const licenceInfo = {

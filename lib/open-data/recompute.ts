@@ -1,7 +1,7 @@
 // Recomputing a published figure from its raw log with the open CLI: the options the server analyses a stored
 // log with, the CLI's flags for them, and the command a result's page shows. One table, so the page's command,
 // the CLI and the server can never drift apart.
-import type { AnalyseOptions } from "@/lib/analysis";
+import type { AnalyseOptions, ColumnMapping } from "@/lib/analysis";
 
 export type RecomputeFacts = {
   cells: number;
@@ -11,6 +11,8 @@ export type RecomputeFacts = {
   cutoffVPerCell: number;
   stopTemperatureC: number;
   packStartTemperatureC: number | null;
+  /** The column mapping the log was read with (absent or null: the columns were detected). */
+  mapping?: ColumnMapping | null;
 };
 
 /** The options a stored log is analysed with (server/submissions/prepare.ts): the pack's label and the card. */
@@ -23,6 +25,7 @@ export function analyseOptionsFor(f: RecomputeFacts): AnalyseOptions {
     cutoffVPerCell: f.cutoffVPerCell,
     stopTemperatureC: f.stopTemperatureC,
     ...(f.packStartTemperatureC !== null ? { packStartTemperatureC: f.packStartTemperatureC } : {}),
+    ...(f.mapping ? { mapping: f.mapping } : {}),
   };
 }
 
@@ -40,10 +43,14 @@ export const CLI_NUMBER_FLAGS = {
 
 /** The CLI's arguments for these options (numbers as JavaScript writes them, so they read back exactly). */
 function cliArgs(options: AnalyseOptions): string[] {
-  return Object.entries(CLI_NUMBER_FLAGS).flatMap(([flag, key]) => {
+  const numbers = Object.entries(CLI_NUMBER_FLAGS).flatMap(([flag, key]) => {
     const v = options[key];
     return typeof v === "number" ? [flag, String(v)] : [];
   });
+  // A mapping goes as the JSON the core takes, single-quoted for a POSIX shell (a quote inside a column name
+  // closes the quotes, is escaped, and opens them again).
+  if (!options.mapping) return numbers;
+  return [...numbers, "--map-json", `'${JSON.stringify(options.mapping).replaceAll("'", "'\\''")}'`];
 }
 
 /** The file name a published result's log downloads as (GET /api/v1/results/{id}/log). */

@@ -2,9 +2,24 @@
 // schema for the form (react-hook-form + zodResolver) and the server action. Ranges match the method card
 // (and the results table's checks): ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C.
 import { z } from "zod";
+import { MAPPING_JSON_MAX, parseMappingJson } from "@/lib/analysis";
 import { recordIdSchema } from "./ids";
 import { loadModes, resistanceMethods } from "@/lib/enums";
 import { optionalEnum, optionalNumber, optionalPastDate, optionalText, requiredText } from "./form-fields";
+
+/** The column mapping this bench's logs need, as JSON text ("" → none: the columns are detected). */
+const logMappingField = z
+  .string()
+  .trim()
+  .max(MAPPING_JSON_MAX, `The column mapping can be at most ${MAPPING_JSON_MAX} characters.`)
+  .optional()
+  .transform((text, ctx) => {
+    if (!text) return null;
+    const parsed = parseMappingJson(text);
+    if (parsed.ok) return parsed.mapping;
+    ctx.addIssue({ code: "custom", message: parsed.message });
+    return z.NEVER;
+  });
 
 export const benchProfileSchema = z
   .object({
@@ -30,6 +45,7 @@ export const benchProfileSchema = z
     defaultSampleRateHz: optionalNumber("Sample rate", (n) =>
       n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz."),
     ),
+    logMapping: logMappingField,
   })
   .superRefine((v, ctx) => {
     if (
@@ -63,6 +79,7 @@ export const emptyBenchProfile: BenchProfileFormValues = {
   defaultCutoffVPerCell: "",
   defaultStopTemperatureC: "",
   defaultSampleRateHz: "",
+  logMapping: "",
 };
 
 export const benchProfileId = recordIdSchema("Not a bench profile id.");

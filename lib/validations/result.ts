@@ -2,6 +2,7 @@
 // actions. Inputs hold strings as typed; the schema turns them into numbers. The method-card bounds match
 // the results table's checks: ambient −20…60 °C, cut-off 2.5…4.2 V per cell, stop ≤ 80 °C, load > 0.
 import { z } from "zod";
+import { MAPPING_JSON_MAX, parseMappingJson } from "@/lib/analysis";
 import { isRecordIdText, recordIdSchema } from "./ids";
 import { loadModes, resistanceMethods } from "@/lib/enums";
 import { PHOTO_EXTENSIONS } from "@/lib/storage-keys";
@@ -138,9 +139,27 @@ const LOG_KEY = /^incoming\/[^/]{1,64}\/[0-9a-f-]{36}\.csv$/;
 const PHOTO_KEY = new RegExp(`^incoming/[^/]{1,64}/photo-[0-9a-f-]{36}\\.(${PHOTO_EXTENSIONS.join("|")})$`);
 export const MAX_PHOTOS = 4;
 
+/**
+ * The column mapping the log was read with, as JSON text ("" or absent: the columns were detected). The server
+ * re-analyses the stored log with it, so the figures it keeps are the ones the tester saw.
+ */
+const logMappingSchema = z
+  .string()
+  .trim()
+  .max(MAPPING_JSON_MAX, `The column mapping can be at most ${MAPPING_JSON_MAX} characters.`)
+  .optional()
+  .transform((text, ctx) => {
+    if (!text) return null;
+    const parsed = parseMappingJson(text);
+    if (parsed.ok) return parsed.mapping;
+    ctx.addIssue({ code: "custom", message: parsed.message });
+    return z.NEVER;
+  });
+
 const logRefSchema = z.object({
   key: z.string().regex(LOG_KEY, "Upload the log first."),
   filename: z.string().trim().min(1, "Upload the log first.").max(200, "The file name can be at most 200 characters."),
+  mapping: logMappingSchema,
 });
 const photoKeysSchema = z
   .array(z.string().regex(PHOTO_KEY, "That photo upload is not valid; add it again."))

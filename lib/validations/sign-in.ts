@@ -27,10 +27,9 @@ export const signInEmail = z
       .string()
       .min(1, "Enter your e-mail address.")
       .max(254, "That address is too long.")
-      .refine((v) => !/[,;\s]/.test(v) && v.split("@").length <= 2, {
-        message: "Enter one e-mail address only.",
-        abort: true,
-      })
+      .refine((v) => v.split("@").length <= 2, { message: "Enter one e-mail address only.", abort: true })
+      // Separators without a second "@" are not a list, just not an address.
+      .refine((v) => !/[,;\s]/.test(v), { message: "Enter an e-mail address like name@example.com.", abort: true })
       .refine((v) => !/[<>"()]/.test(v), {
         message: "Enter the address alone, like name@example.com, without a name.",
         abort: true,

@@ -8,6 +8,7 @@ import { parseEnv } from "@/server/env";
 import * as schema from "@/db/schema";
 import { buildPacks, demoMakers, demoUsers } from "./scenario";
 import { seedResults } from "./results";
+import { seedCycling } from "./cycling";
 import { seedCharts } from "./charts";
 import { computeAndStoreFlags } from "@/db/mutations/review";
 import { backfillCurveFingerprints } from "@/db/mutations/curve-fingerprints";
@@ -56,7 +57,7 @@ export async function seed(databaseUrl: string, opts: { ifEmpty?: boolean; log?:
         }),
       )
       .onConflictDoNothing();
-    const made = await seedResults(db, packs, log);
+    const made = (await seedResults(db, packs, log)) + (await seedCycling(db, packs));
     // Every result's curve fingerprint, so a new log copied from a demo result is recognised.
     await backfillCurveFingerprints(db);
     // Pending results carry their automatic plausibility flags, as they would after a real submission.

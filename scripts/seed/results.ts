@@ -5,10 +5,11 @@
 import { createHash } from "node:crypto";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import * as schema from "@/db/schema";
-import { analyseText, groupKey } from "@/lib/analysis";
+import { analyseText } from "@/lib/analysis";
 import { generateLog, toCsv, type CsvDialect } from "@/lib/synthetic/equivalent-circuit";
 import { logKey, putObject } from "@/server/storage";
-import { createRandom, type Random } from "./random";
+import { createRandom } from "./random";
+import { figureColumns, outcomeFor, seedHistory } from "./result-rows";
 import type { DemoPack } from "./scenario";
 
 type ResistanceMethod = (typeof schema.resistanceMethods)[number];
@@ -94,20 +95,6 @@ const campaigns: Campaign[] = [
   },
 ];
 
-// "flagged": approved, with a reader's open flag (a case for moderators; the result stays published and counted).
-type Outcome = "approved" | "pending" | "awaiting_answer" | "rejected" | "withdrawn" | "flagged";
-function outcomeFor(r: Random): Outcome {
-  const x = r.next();
-  if (x < 0.8) return "approved";
-  if (x < 0.88) return "pending";
-  if (x < 0.92) return "awaiting_answer";
-  if (x < 0.96) return "rejected";
-  if (x < 0.98) return "withdrawn";
-  return "flagged";
-}
-
-const rejectReasons = ["incomplete-method", "wrong-data", "not-a-measurement"] as const;
-
 export async function seedResults(
   db: NodePgDatabase<typeof schema>,
   packs: DemoPack[],
@@ -180,14 +167,6 @@ export async function seedResults(
         const sha = createHash("sha256").update(csv).digest("hex");
         const key = logKey(sha);
         await putObject(key, csv, "text/csv");
-        const group = groupKey({
-          resistanceMethod: campaign.method,
-          ambientC,
-          cutoffVPerCell: campaign.cutoffVPerCell,
-          loadCurrentA,
-          ratedMah: pack.ratedCapacityMah,
-          cyclesBeforeTest: cycles,
-        });
         const submittedAt = new Date(start + n * 3.7 * 3600 * 1000);
         const outcome = outcomeFor(rnd);
         const published = outcome === "approved" || outcome === "flagged";
@@ -212,19 +191,13 @@ export async function seedResults(
             logSha256: sha,
             logBytes: Buffer.byteLength(csv),
             logFilename: `${pack.slug}-c${cycles}.csv`,
-            figures: f,
-            curve: analysis.curve,
-            capacityMah: f.capacityMah,
-            energyWh: f.energyWh,
-            dcResistanceMohm: f.dcResistanceMohm,
-            resistanceAt25CMohm: f.resistanceAt25CMohm,
-            holdVoltagePerCellV: f.holdVoltagePerCellV,
-            temperatureRiseC: f.temperatureRiseC,
-            sagLimitedC: f.sagLimitedC,
-            labelRatio: f.labelRatio,
-            capacityRatio: f.capacityRatio,
-            loadRateC: loadCurrentA / (pack.ratedCapacityMah / 1000),
-            groupKey: group.key,
+            ...figureColumns(analysis, {
+              ambientC,
+              cutoffVPerCell: campaign.cutoffVPerCell,
+              loadCurrentA,
+              ratedMah: pack.ratedCapacityMah,
+              cyclesBeforeTest: cycles,
+            }),
             idempotencyKey,
             submittedAt,
             publishedAt: published ? new Date(submittedAt.getTime() + 20 * 3600 * 1000) : null,
@@ -234,64 +207,8 @@ export async function seedResults(
         const resultId = inserted[0]?.id;
         if (resultId === undefined) continue;
         made++;
-        const events: (typeof schema.reviewEvents.$inferInsert)[] = [
-          {
-            resultId,
-            actorId: contributorId,
-            fromStatus: null,
-            toStatus: "pending",
-            note: "Submitted.",
-            createdAt: submittedAt,
-          },
-        ];
-        const later = (h: number) => new Date(submittedAt.getTime() + h * 3600 * 1000);
-        if (outcome === "approved" || outcome === "flagged")
-          events.push({
-            resultId,
-            actorId: moderatorId,
-            fromStatus: "pending",
-            toStatus: "approved",
-            createdAt: later(20),
-          });
-        if (outcome === "rejected")
-          events.push({
-            resultId,
-            actorId: moderatorId,
-            fromStatus: "pending",
-            toStatus: "rejected",
-            reason: rnd.pick(rejectReasons),
-            note: "The method card does not match the log.",
-            createdAt: later(20),
-          });
-        if (outcome === "awaiting_answer")
-          events.push({
-            resultId,
-            actorId: moderatorId,
-            fromStatus: "pending",
-            toStatus: "awaiting_answer",
-            note: "Please state where the temperature probe sat.",
-            createdAt: later(20),
-          });
-        if (outcome === "withdrawn")
-          events.push({
-            resultId,
-            actorId: contributorId,
-            fromStatus: "pending",
-            toStatus: "withdrawn",
-            note: "Wrong pack selected.",
-            createdAt: later(5),
-          });
-        await db.insert(schema.reviewEvents).values(events);
-        if (outcome === "flagged") {
-          const readerId = readers.find((r) => r !== undefined && r !== contributorId) ?? null;
-          await db.insert(schema.readerFlags).values({
-            resultId,
-            reporterId: readerId,
-            reason: "wrong-figures",
-            note: "Capacity looks high for this pack.",
-            createdAt: later(60),
-          });
-        }
+        const readerId = readers.find((r) => r !== undefined && r !== contributorId) ?? null;
+        await seedHistory(db, rnd, { resultId, outcome, contributorId, moderatorId, readerId, submittedAt });
       }
     }
   }

@@ -34,6 +34,7 @@ export const demoUsers: DemoUser[] = [
   { email: "quarry@sagline.localhost", displayName: "Quarry Flyers Club", role: "contributor" },
   { email: "slipway@sagline.localhost", displayName: "Slipway Hobby Bench", role: "contributor" },
   { email: "anon@sagline.localhost", displayName: "Tester 9", role: "contributor", anonymous: true },
+  { email: "tidemill@sagline.localhost", displayName: "Tidemill Cycling Rig", role: "contributor" },
 ];
 
 // honesty: measured C ÷ labelled C that this maker's packs tend to reach (their cells are what they are;

@@ -2,8 +2,8 @@
 // at a time, saying what was left out and why.
 import "server-only";
 import { aggregateByMaker, aggregateByPack, groupLabel } from "@/lib/open-data/aggregate";
-import { MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/chart-data";
-import { labelForGroupKey } from "@/lib/analysis";
+import { CHART_RATING_WORDS, MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/chart-data";
+import { rankingVerdict } from "@/lib/maker-ranking";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
 import { parseUnitsParam } from "@/lib/units";
@@ -16,9 +16,13 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
   // Tagged cached reads: a moderation decision in this group refreshes embeds, views and images at once.
   const samples = await cachedGroupSamples(state.group, filters, where);
   const packs = aggregateByPack(samples);
+  // States published before the rating was chosen drew the estimate, and still do.
+  const rating = state.rating ?? "estimate";
+  const words = CHART_RATING_WORDS[rating];
   const base: ChartData = {
     state,
-    groupLabel: groupLabel(samples[0]) ?? labelForGroupKey(state.group) ?? "an unnamed like-for-like group",
+    rating,
+    groupLabel: groupLabel(state.group, samples[0]) ?? "an unnamed like-for-like group",
     counts: { packs: packs.length, results: samples.length },
     leftOut: [],
   };
@@ -27,30 +31,39 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
       `Filtered to ${[state.maker ? `maker ${state.maker}` : "", state.cells ? `${state.cells}S packs` : ""].filter(Boolean).join(", ")}.`,
     );
   if (state.kind === "label-check") {
+    // Measured: the pack's sustained C, the highest among its approved results; estimate: the median.
     const points = packs.flatMap((p) => {
-      const m = p.figures.sagLimitedC;
-      return m
+      const m = rating === "measured" ? p.figures.sustainedCMeasured : p.figures.sagLimitedC;
+      const y = m ? (rating === "measured" ? m.max : m.median) : null;
+      return m && y !== null
         ? [
             {
               id: p.packSlug,
               label: `${p.makerName} ${p.model}`,
               labelledC: p.labelledContinuousC,
-              ratingC: Math.round(m.median * 10) / 10,
+              ratingC: Math.round(y * 10) / 10,
               n: m.n,
             },
           ]
         : [];
     });
     if (points.length < packs.length)
-      base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a sag-limited C left out.`);
+      base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a ${words.point} left out.`);
+    if (rating === "measured")
+      base.leftOut.push(
+        "A run holds only the rate it was tested at, and a group is one band of rates: a pack below the line has not shown its label, which is not failing it.",
+      );
     return { ...base, labelCheck: points };
   }
   if (state.kind === "maker-ranking") {
-    const ranking = aggregateByMaker(packs).flatMap((m) =>
+    const makers = aggregateByMaker(packs, rating);
+    const ranking = makers.flatMap((m) =>
       m.labelRatio
         ? [{ label: m.makerName, labelRatio: m.labelRatio.median, packCount: m.packCount, resultCount: m.resultCount }]
         : [],
     );
+    // The order is drawn; whether any maker is really ahead is said in words (95 % median intervals).
+    base.leftOut.push(rankingVerdict(makers).words);
     return { ...base, ranking };
   }
   const series = await cachedGroupCurves(state.group, filters, where);

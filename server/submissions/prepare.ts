@@ -5,7 +5,13 @@ import "server-only";
 import { getMakerChoice, getPackChoice, listResultIdsWithLog } from "@/db/queries/submissions";
 import type { ResultFields } from "@/db/mutations/results";
 import type { PackProposal } from "@/db/mutations/catalogue";
-import { checkAgainstCard, groupKey, type Analysis, type CardCheck } from "@/lib/analysis";
+import {
+  checkAgainstCard,
+  groupKeyForAnalysis,
+  type Analysis,
+  type CardCheck,
+  type ColumnMapping,
+} from "@/lib/analysis";
 import { AppError } from "@/lib/errors";
 import { env } from "@/server/env";
 import { isOwnIncomingLogKey, isOwnIncomingPhotoKey, objectBytes } from "@/server/storage";
@@ -97,9 +103,21 @@ export async function checkFiles(logKey: string | null, photoKeys: string[], use
   }
 }
 
-export type Figured = { sha256: string; bytes: number; analysis: Analysis; checks: CardCheck[] };
+export type Figured = {
+  sha256: string;
+  bytes: number;
+  analysis: Analysis;
+  checks: CardCheck[];
+  /** The column mapping the log was read with (null: detected). */
+  mapping: ColumnMapping | null;
+};
 
-export async function analyseForCard(logKey: string, facts: PackFacts, card: MethodCard): Promise<Figured> {
+export async function analyseForCard(
+  logKey: string,
+  facts: PackFacts,
+  card: MethodCard,
+  mapping: ColumnMapping | null = null,
+): Promise<Figured> {
   // The same options a result's page gives the open CLI to recompute the figures (lib/open-data/recompute.ts).
   const { sha256, bytes, analysis } = await analyseStored(
     logKey,
@@ -111,6 +129,7 @@ export async function analyseForCard(logKey: string, facts: PackFacts, card: Met
       cutoffVPerCell: card.cutoffVPerCell,
       stopTemperatureC: card.stopTemperatureC,
       packStartTemperatureC: card.packStartTemperatureC,
+      mapping,
     }),
     env().LOG_MAX_BYTES,
     "log",
@@ -122,10 +141,13 @@ export async function analyseForCard(logKey: string, facts: PackFacts, card: Met
     loadMode: card.loadMode,
     stopTemperatureC: card.stopTemperatureC,
   });
-  return { sha256, bytes, analysis, checks };
+  return { sha256, bytes, analysis, checks, mapping };
 }
 
-/** Method card, file references, figures, headline columns, like-for-like key and plausibility flags. */
+/**
+ * Method card, file references, figures, headline columns, like-for-like key and plausibility flags. The key's
+ * resistance part is the method the analysis used on the log (groupKeyForAnalysis), not the one on the card.
+ */
 export async function resultFields(
   card: MethodCard,
   facts: PackFacts,
@@ -166,6 +188,7 @@ export async function resultFields(
     logBytes: f.bytes,
     logFilename: files.logFilename,
     photoKeys: files.photoKeys,
+    logMapping: f.mapping,
     figures: fig,
     curve: f.analysis.curve,
     capacityMah: fig.capacityMah,
@@ -176,10 +199,11 @@ export async function resultFields(
     temperatureRiseC: fig.temperatureRiseC,
     sagLimitedC: fig.sagLimitedC,
     labelRatio: fig.labelRatio,
+    sustainedCMeasured: fig.sustainedCMeasured,
+    sustainedLabelRatio: fig.sustainedLabelRatio,
     capacityRatio: fig.capacityRatio,
     loadRateC: card.loadCurrentA / (facts.ratedMah / 1000),
-    groupKey: groupKey({
-      resistanceMethod: card.resistanceMethod,
+    groupKey: groupKeyForAnalysis(fig.dcResistanceMethod, {
       ambientC: card.ambientTemperatureC,
       cutoffVPerCell: card.cutoffVPerCell,
       loadCurrentA: card.loadCurrentA,

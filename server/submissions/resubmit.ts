@@ -38,7 +38,13 @@ export async function resubmitResultFor(input: ResubmitResultInput, user: Sessio
     weightG: p.weightG,
   };
   await checkFiles(input.log?.key ?? null, input.photoKeys, user.id);
-  const figured = await analyseForCard(input.log?.key ?? current.logKey, facts, input.method);
+  // A new log comes with the mapping it was read with; the stored log keeps the one it was stored with.
+  const figured = await analyseForCard(
+    input.log?.key ?? current.logKey,
+    facts,
+    input.method,
+    input.log ? input.log.mapping : current.logMapping,
+  );
   const files = await moveFiles(input.log?.key ?? null, input.log ? figured.sha256 : null, input.photoKeys);
   try {
     const fields = await resultFields(

@@ -35,7 +35,7 @@ async function submitNew(input: SubmitResultInput, user: SessionUser): Promise<S
   await enforceRateLimit(`submit:${user.id}`, limits.submitPerUser);
   const { target, facts } = await resolvePack(input.pack, user.id);
   await checkFiles(input.log.key, input.photoKeys, user.id);
-  const figured = await analyseForCard(input.log.key, facts, input.method);
+  const figured = await analyseForCard(input.log.key, facts, input.method, input.log.mapping);
   const files = await moveFiles(input.log.key, figured.sha256, input.photoKeys);
   const email = user.email;
   const submittedAt = new Date();

@@ -6,12 +6,14 @@ import type { AnalyseOptions, Analysis, LogPreview, StatedCard } from "@/lib/ana
 import { AppError } from "@/lib/errors";
 import { tooLarge } from "./body";
 
-function logErrorToAppError(err: unknown, maxBytes: number, field = "file"): unknown {
+function logErrorToAppError(err: unknown, maxBytes: number, field: string, mappingField: string): unknown {
   if (!isLogError(err)) return err;
   if (err.code === "too-large") return tooLarge(maxBytes, field);
   if (err.code === "internal") return new AppError("internal", err.message);
   const message = err.line !== undefined ? `Line ${err.line}: ${err.message}` : err.message;
-  return new AppError("validation", `The log could not be read: ${message}`, { [field]: [message] });
+  // A mapping that names columns the log does not have is the mapping's fault, not the file's.
+  const on = err.code === "bad-mapping" ? mappingField : field;
+  return new AppError("validation", `The log could not be read: ${message}`, { [on]: [message] });
 }
 
 export async function analyseChunks(
@@ -19,6 +21,7 @@ export async function analyseChunks(
   options: AnalyseOptions,
   maxBytes: number,
   field = "file",
+  mappingField = field,
 ): Promise<Analysis> {
   // The core reports anything but its own LogError as an internal fault, so an error from the source
   // (too large, not text, storage gone) is kept here and thrown as it was.
@@ -34,7 +37,7 @@ export async function analyseChunks(
   try {
     return await analyseLog(source, { ...options, maxBytes });
   } catch (err) {
-    throw sourceError ?? logErrorToAppError(err, maxBytes, field);
+    throw sourceError ?? logErrorToAppError(err, maxBytes, field, mappingField);
   }
 }
 

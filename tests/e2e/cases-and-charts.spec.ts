@@ -31,7 +31,7 @@ test("a signed-out reader is asked to sign in first, comes back, flags the resul
   expect(new URL(signInHref, "http://x").searchParams.get("callbackUrl")).toBe(href);
 
   await signIn(page, `flagging-reader-${Date.now().toString(36)}@sagline.test`, signInHref);
-  // A first sign-in asks for the public name first (issue 14), with the result page behind it.
+  // A first sign-in asks for the public name, then goes on to the result.
   await choosePublicName(page, null);
   await expect(page).toHaveURL(new RegExp(`${href}$`));
   await page.getByRole("button", { name: "Ask moderators to check this result" }).click();

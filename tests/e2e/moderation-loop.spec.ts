@@ -51,8 +51,11 @@ async function mailTo(address: string, subject: RegExp): Promise<{ subject: stri
 async function photosLoaded(page: Page, testId: string, n: number) {
   const imgs = page.getByTestId(testId).getByRole("img");
   await expect(imgs).toHaveCount(n);
-  for (let i = 0; i < n; i++)
+  for (let i = 0; i < n; i++) {
+    // The photos load lazily: bring each into view as a reader scrolling down would.
+    await imgs.nth(i).scrollIntoViewIfNeeded();
     await expect.poll(() => imgs.nth(i).evaluate((el) => (el as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+  }
 }
 
 async function asModerator(browser: Browser): Promise<Page> {

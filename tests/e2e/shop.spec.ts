@@ -101,9 +101,23 @@ test("a pack page's figures table fits a desktop screen and its over-cycles char
   // No hidden columns at 1280 px: the scroll region does not need scrolling.
   const overflow = await region.evaluate((el) => el.scrollWidth - el.clientWidth);
   expect(overflow).toBeLessThanOrEqual(1);
-  const cycles = page.getByRole("figure", { name: "Capacity kept over cycles" });
+  const cycles = page.getByRole("figure", { name: "Capacity of results at different cycle counts" });
   await expect(cycles.locator(".chart-svg .chart-axis")).toBeVisible();
   const ticks = await cycles.locator(".chart-svg .chart-axis > g > text").allTextContents();
+  expect(ticks.length).toBeGreaterThan(1);
+  for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
+});
+
+test("a pack whose log holds ten cycles shows that one pack's capacity kept, and says whether it may be projected", async ({
+  page,
+}) => {
+  await page.goto("/packs/nettlefield-sting-1800-3s-50c");
+  const one = page.getByTestId("ageing-one-pack");
+  await expect(one).toContainText("10 discharges of one physical pack");
+  // 0.4 % lost per cycle over 10 cycles: 80 % lies far beyond what ten cycles support, and the page says so.
+  await expect(one.getByTestId("cycles-to-80")).toContainText("No projection");
+  const chart = page.getByRole("figure", { name: "Capacity kept over the cycles of one pack" });
+  const ticks = await chart.locator(".chart-svg .chart-axis > g > text").allTextContents();
   expect(ticks.length).toBeGreaterThan(1);
   for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
 });
@@ -143,7 +157,11 @@ test("compares three packs in one like-for-like group and lists what it left out
   const table = page.getByTestId("compare-table");
   await expect(table.locator("thead th")).toHaveCount(4);
   await expect(page.getByTestId("compare-group")).toHaveText("DC step · 15–25 °C · 3.3 V cut-off · 5–10C · new");
-  await expect(table).toContainText("★ best");
+  // One or two demo results per pack: no 95 % interval, so no pack is called best — each ranked row says why.
+  await expect(table).not.toContainText("★ best");
+  await expect(table.getByTestId("not-distinguishable").first()).toContainText(
+    "Not distinguishable: a pack has too few results",
+  );
   await expect(page.getByTestId("excluded").first()).toBeVisible();
   // Reorder and remove.
   await page
@@ -162,7 +180,7 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
   page,
 }) => {
   await page.goto("/");
-  const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against sag-limited C" });
+  const frame = page.locator("figure").filter({ hasText: "Label check: labelled C against sag-limited C (estimate)" });
   await frame.getByRole("button", { name: "Show as table" }).click();
   await expect(frame.getByRole("columnheader", { name: "Labelled C" })).toBeVisible();
   expect(await frame.locator("tbody tr").count()).toBeGreaterThanOrEqual(40);
@@ -178,6 +196,29 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
   const before = await chart.locator("a").count();
   await page.getByTestId("group-switcher").selectOption({ index: 1 });
   await expect(chart.locator("a")).not.toHaveCount(before);
+});
+
+test("the label check offers both ratings, each named in the chart's title and axis, and crowns no maker on overlap", async ({
+  page,
+}) => {
+  await page.goto("/");
+  const switcher = page.getByTestId("rating-switch");
+  // The estimate is shown first; the measured rating is one click away and says what "below the line" means for it.
+  await expect(switcher.getByLabel("Sag-limited C (estimate)")).toBeChecked();
+  const estimate = page
+    .locator("figure")
+    .filter({ hasText: "Label check: labelled C against sag-limited C (estimate)" });
+  await expect(estimate).toContainText("Sag-limited C, an estimate from resistance (C)");
+  await expect(estimate.locator(".chart-svg a").first()).toBeVisible();
+  await expect(page.getByText("Label ratio (sag-limited C estimate ÷ labelled C)")).toBeVisible();
+  await switcher.getByLabel("Sustained C (measured)").check();
+  const measured = page.locator("figure").filter({ hasText: "against sustained C (measured)" });
+  await expect(measured).toContainText("Sustained C, measured from the run (C)");
+  await expect(measured).toContainText("label not shown (held less, or tested lower)");
+  await expect(measured.locator(".chart-svg a").first()).toBeVisible();
+  // Makers with fewer than 6 packs have no 95 % interval: the list must not name a leader.
+  await expect(page.getByTestId("ranking-verdict")).toContainText("No maker is distinguishably ahead");
+  await expect(page.getByTestId("maker-ranking")).not.toContainText("ahead");
 });
 
 test("sorts the packs table from the keyboard through the header buttons", async ({ page }) => {

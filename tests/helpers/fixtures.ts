@@ -3,7 +3,7 @@
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
-import { groupKey, type CurvePoint, type Figures } from "@/lib/analysis";
+import { groupKey, type CurvePoint, type Figures, type RetentionSeries } from "@/lib/analysis";
 
 let seq = 0;
 const next = () => `${process.pid}-${++seq}`;
@@ -61,6 +61,10 @@ export type ResultOpts = {
   method?: "iec-61960-two-level" | "dc-step" | "ac-1khz" | "charger-readout";
   sagLimitedC?: number | null;
   labelRatio?: number | null;
+  /** The measured rating (null unless given). */
+  sustainedCMeasured?: number | null;
+  /** A retention series in the stored figures (a log of several cycles). */
+  retention?: RetentionSeries;
   capacityMah?: number | null;
   capacityRatio?: number | null;
   dcResistanceMohm?: number | null;
@@ -94,6 +98,8 @@ export async function makeResult(
     timeToCutoffS: o.reachedCutoff === false ? null : 400,
     timeToStopTemperatureS: o.passedStop ? 300 : null,
     sagLimitedC: sag,
+    sustainedCMeasured: o.sustainedCMeasured ?? null,
+    retention: o.retention ?? null,
   } as unknown as Figures;
   const status = o.status ?? "approved";
   const [r] = await db
@@ -118,6 +124,11 @@ export async function makeResult(
       curve: o.curve ?? [],
       sagLimitedC: sag,
       labelRatio: o.labelRatio === undefined ? (sag === null ? null : sag / pack.labelledContinuousC) : o.labelRatio,
+      sustainedCMeasured: o.sustainedCMeasured ?? null,
+      sustainedLabelRatio:
+        o.sustainedCMeasured === undefined || o.sustainedCMeasured === null
+          ? null
+          : o.sustainedCMeasured / pack.labelledContinuousC,
       capacityMah: o.capacityMah === undefined ? pack.ratedCapacityMah * 0.95 : o.capacityMah,
       capacityRatio: o.capacityRatio ?? 0.95,
       dcResistanceMohm: o.dcResistanceMohm === undefined ? 12 : o.dcResistanceMohm,

@@ -5,6 +5,7 @@ import { POST as uploadLogRoute } from "@/app/api/v1/uploads/log/route";
 import { POST as uploadPhotoRoute } from "@/app/api/v1/uploads/photo/route";
 import { db } from "@/db";
 import { makers, packs } from "@/db/schema";
+import type { ColumnMapping } from "@/lib/analysis";
 import type { SubmitResultValues } from "@/lib/validations/result";
 import { postRequest, sampleLog } from "./logs";
 import { PNG_BYTES } from "./storage";
@@ -40,9 +41,11 @@ export async function uploadLog(
   token: string,
   csv = sampleLog().csv,
   filename = "bench.csv",
+  mapping?: ColumnMapping,
 ): Promise<{ key: string; filename: string; sha256: string }> {
+  const map = mapping ? `&mapping=${encodeURIComponent(JSON.stringify(mapping))}` : "";
   const res = await uploadLogRoute(
-    postRequest(`/api/v1/uploads/log?filename=${encodeURIComponent(filename)}`, csv, {
+    postRequest(`/api/v1/uploads/log?filename=${encodeURIComponent(filename)}${map}`, csv, {
       "content-type": "text/csv",
       cookie: `authjs.session-token=${token}`,
     }),

@@ -160,6 +160,7 @@ describe("the OpenAPI document", () => {
       "post /api/auth/{...nextauth}",
       "get /embed/chart/{...state}",
       "get /fragments/label-check/{group}",
+      "get /fragments/label-check/{group}/{rating}",
       "get /results/{id}/photos/{n}",
     ]);
     // Every public handler is documented; a documented route may also need a session (a reader's flag), but it

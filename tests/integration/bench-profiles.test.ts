@@ -5,6 +5,8 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { benchProfiles } from "@/db/schema";
 import { deleteBenchProfile as deleteRow, updateBenchProfile } from "@/db/mutations/bench-profiles";
+import { profileOption } from "@/app/(contributor)/submit/_components/profile-option";
+import { listBenchProfilesForUser } from "@/db/queries/bench-profiles";
 import { benchProfileSchema } from "@/lib/validations/bench-profile";
 import { requestState } from "../helpers/next-mocks";
 import { signedIn } from "../helpers/users";
@@ -144,5 +146,43 @@ describe("bench profiles", () => {
     expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: true, data: { id } });
     expect(await db.select().from(benchProfiles).where(eq(benchProfiles.id, id))).toHaveLength(0);
     expect(await deleteBenchProfile(null, { id })).toMatchObject({ ok: false, code: "not_found" });
+  });
+
+  it("remembers the column mapping its logs need, edits and removes it, and refuses one that is not usable", async () => {
+    const me = await signedIn("contributor");
+    requestState.token = me.token;
+    const mapping = { time: 0, current: 1, voltage: 2, temperature: 3, hasHeader: false };
+    const created = await saveBenchProfile(null, form({ ...valid, logMapping: JSON.stringify(mapping) }));
+    if (!created.ok) throw new Error(created.error);
+    const id = created.data.id;
+    const stored = async () => (await db.select().from(benchProfiles).where(eq(benchProfiles.id, id)))[0];
+    expect((await stored())?.logMapping).toEqual(mapping);
+    // The submit form receives it with the profile, so choosing the profile reads logs with it.
+    const [option] = (await listBenchProfilesForUser(me.id)).map(profileOption);
+    expect(option?.logMapping).toEqual(mapping);
+
+    const edited = { ...mapping, currentUnit: "mA", dischargeSign: "negative" };
+    expect(
+      await saveBenchProfile(null, form({ ...valid, id: String(id), logMapping: JSON.stringify(edited) })),
+    ).toMatchObject({
+      ok: true,
+    });
+    expect((await stored())?.logMapping).toEqual(edited);
+
+    const bad = await saveBenchProfile(
+      null,
+      form({ ...valid, id: String(id), logMapping: '{"time":"Time","hasHeader":false}' }),
+    );
+    expect(bad).toMatchObject({ ok: false, code: "validation" });
+    if (!bad.ok) expect(bad.fieldErrors?.logMapping?.[0]).toMatch(/column number/);
+    const notJson = await saveBenchProfile(null, form({ ...valid, id: String(id), logMapping: "time=0" }));
+    if (!notJson.ok) expect(notJson.fieldErrors?.logMapping?.[0]).toMatch(/not valid JSON/);
+    expect(notJson.ok).toBe(false);
+    expect((await stored())?.logMapping).toEqual(edited); // refused saves change nothing
+
+    expect(await saveBenchProfile(null, form({ ...valid, id: String(id), logMapping: "" }))).toMatchObject({
+      ok: true,
+    });
+    expect((await stored())?.logMapping).toBeNull();
   });
 });

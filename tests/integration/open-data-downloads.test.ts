@@ -49,7 +49,7 @@ describe("CSV downloads", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8; header=present");
     expect(res.headers.get("content-disposition")).toMatch(
-      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.0\.0\.csv"/,
+      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.1\.0\.csv"/,
     );
     const text = await res.text();
     const lines = text.split("\r\n");
@@ -212,7 +212,7 @@ describe("Data Package", () => {
   it("declares v2, a semantic version, the SPDX licence, the counting rule and a dialect without comments", async () => {
     const desc = await getDescriptor();
     expect(desc.$schema).toBe("https://datapackage.org/profiles/2.0/datapackage.json");
-    expect(desc.version).toBe("2.0.0");
+    expect(desc.version).toBe("2.1.0");
     expect(desc.licenses[0]?.name).toBe("CC-BY-4.0");
     expect(desc.description).toContain(PUBLISHED_RULE);
     for (const r of desc.resources) {

@@ -63,6 +63,10 @@ describe("the one-address rule", () => {
     expect(signInSchema.safeParse({ email: "a@x.test, b@x.test" }).error?.issues[0]?.message).toBe(
       "Enter one e-mail address only.",
     );
+    // Spaces without a second address are no list, just not an address.
+    expect(signInSchema.safeParse({ email: "not an address" }).error?.issues[0]?.message).toBe(
+      "Enter an e-mail address like name@example.com.",
+    );
   });
 });
 

@@ -6,20 +6,19 @@
 import { scaleLinear } from "@visx/scale";
 import { Fragment } from "react";
 import type { LabelCheckPoint } from "@/lib/open-data/chart-data";
+import { LABEL_CHECK_WORDS, RATING_LABELS, type RatingKind } from "@/lib/figure-words";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
 import { MarkerDefs, MarkerUse, XAxis, YGrid, YTitle, fmtNum, pct, px, yTickCount } from "./kit";
 
-export type RatingSeries = {
-  /** "Sag-limited C", "Sustained C" … — the axis title adds the unit and the kind. */
-  label: string;
-  kind: "estimate" | "measured";
-};
+/** Which rating the points carry up the y axis: the sag-limited C estimate or the sustained C measured. */
+export type RatingSeries = RatingKind;
 
 export type { LabelCheckPoint };
 
-export const SAG_LIMITED_RATING: RatingSeries = { label: "Sag-limited C", kind: "estimate" };
+export const SAG_LIMITED_RATING: RatingSeries = "estimate";
 
-export const ratingTitle = (r: RatingSeries) => `${r.label} (${r.kind === "estimate" ? "estimate" : "measured"})`;
+/** "Sag-limited C (estimate)", "Sustained C (measured)". */
+export const ratingTitle = (r: RatingSeries) => RATING_LABELS[r];
 /** Below the line: the rating falls short of the labelled C. */
 export const fallsShort = (p: LabelCheckPoint) => p.ratingC < p.labelledC;
 const pointStyle = (p: LabelCheckPoint) =>
@@ -72,7 +71,7 @@ export function LabelCheckPlot({
       aria-label={`${ratingTitle(rating)} against labelled C, ${points.length} packs`}
     >
       <MarkerDefs prefix={prefix} shapes={[MEETS_STYLE.shape, SHORT_STYLE.shape]} />
-      <YTitle y={12}>{ratingTitle(rating)}, C</YTitle>
+      <YTitle y={12}>{LABEL_CHECK_WORDS[rating].axis}</YTitle>
       <YGrid ticks={ys.ticks(yTickCount(bottom - TOP))} y={ys} format={f0} />
       <XAxis ticks={xs.ticks(tickCount)} x={xs} y={bottom} format={f0} title="Labelled continuous C" />
       <line

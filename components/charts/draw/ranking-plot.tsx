@@ -1,7 +1,8 @@
 // Maker ranking: each maker's median label ratio as a bar, the maker's name above it, with the "label met"
 // line at 1.0. Bars that fall short are vermillion, the others blue (palette.ts, as the label check).
 import { scaleLinear } from "@visx/scale";
-import type { RankingBar } from "@/lib/open-data/chart-data";
+import { CHART_RATING_WORDS, type RankingBar } from "@/lib/open-data/chart-data";
+import type { ChartRating } from "@/lib/open-data/chart-state";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
 import { GUTTER, XAxis, fmtNum, pct, px } from "./kit";
 
@@ -20,6 +21,7 @@ export function RankingPlot({
   y: top,
   tickCount = 5,
   compact = false,
+  rating,
 }: {
   bars: RankingBar[];
   height?: number;
@@ -29,6 +31,8 @@ export function RankingPlot({
   tickCount?: number;
   /** Narrow images: the value without the pack count. */
   compact?: boolean;
+  /** Which rating the label ratios divide (named on the axis). */
+  rating: ChartRating;
 }) {
   const bottom = height - BOTTOM;
   const rowH = Math.min(ROW, (bottom - TOP - 6) / Math.max(1, bars.length));
@@ -86,7 +90,7 @@ export function RankingPlot({
         x={x}
         y={bottom}
         format={(v) => fmtNum(v, 1)}
-        title="Median label ratio (rating ÷ labelled C)"
+        title={CHART_RATING_WORDS[rating].ranking[compact ? 2 : 1]}
       />
     </svg>
   );

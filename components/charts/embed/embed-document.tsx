@@ -7,7 +7,7 @@ import type { ChartData } from "@/lib/open-data/chart-data";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import { ATTRIBUTION, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { ChartLegend } from "../chart-figure";
-import { LabelCheckPlot, SAG_LIMITED_RATING } from "../draw/label-check-plot";
+import { LabelCheckPlot } from "../draw/label-check-plot";
 import { LinePlot } from "../draw/line-plot";
 import { RankingPlot } from "../draw/ranking-plot";
 import { curveSeries, curvesAxes, labelCheckLegendItems, lineLegendItems } from "../legends";
@@ -26,8 +26,8 @@ const RESIZE_SCRIPT = `(function(){var el=document.getElementById("sagline-embed
 
 function Drawing({ data }: { data: ChartData }) {
   if (data.state.kind === "label-check")
-    return <LabelCheckPlot prefix="e" points={data.labelCheck ?? []} rating={SAG_LIMITED_RATING} height={320} />;
-  if (data.state.kind === "maker-ranking") return <RankingPlot bars={data.ranking ?? []} />;
+    return <LabelCheckPlot prefix="e" points={data.labelCheck ?? []} rating={data.rating} height={320} />;
+  if (data.state.kind === "maker-ranking") return <RankingPlot bars={data.ranking ?? []} rating={data.rating} />;
   return (
     <LinePlot
       prefix="e"
@@ -44,7 +44,7 @@ export function EmbedDocument({ data, permalink }: { data: ChartData; permalink:
   const empty = data.counts.results === 0;
   const legend =
     state.kind === "label-check"
-      ? labelCheckLegendItems()
+      ? labelCheckLegendItems(data.rating)
       : state.kind === "curves"
         ? lineLegendItems(curveSeries(data.curves ?? []))
         : [];

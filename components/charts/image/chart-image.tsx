@@ -9,7 +9,7 @@ import { EM_BOLD, plural, textWidth, wrapText, flow, clip } from "@/lib/open-dat
 import { ATTRIBUTION, DATA_LICENCE_LABEL } from "@/lib/open-data/licence";
 import type { LegendItem } from "../chart-figure";
 import { GUTTER, Shape, px } from "../draw/kit";
-import { LabelCheckPlot, SAG_LIMITED_RATING } from "../draw/label-check-plot";
+import { LabelCheckPlot } from "../draw/label-check-plot";
 import { LinePlot } from "../draw/line-plot";
 import { RankingPlot } from "../draw/ranking-plot";
 import { curveSeries, curvesAxes, labelCheckLegendItems, lineLegendItems } from "../legends";
@@ -21,7 +21,7 @@ const FONT = "Inter, 'Inter Variable', system-ui, sans-serif";
 const imageScale = (width: number) => Math.min(1.45, Math.max(0.92, Math.sqrt(width / 800)));
 
 function legendFor(data: ChartData): LegendItem[] {
-  if (data.state.kind === "label-check") return labelCheckLegendItems();
+  if (data.state.kind === "label-check") return labelCheckLegendItems(data.rating);
   if (data.state.kind === "curves") return lineLegendItems(curveSeries(data.curves ?? []));
   return [];
 }
@@ -82,16 +82,18 @@ function Plot({ data, box }: { data: ChartData; box: { x: number; y: number; wid
   const ticks = box.width < 500 ? 4 : 6;
   if (data.state.kind === "label-check")
     return (
-      <LabelCheckPlot
-        prefix="img"
-        points={data.labelCheck ?? []}
-        rating={SAG_LIMITED_RATING}
+      <LabelCheckPlot prefix="img" points={data.labelCheck ?? []} rating={data.rating} tickCount={ticks} {...box} />
+    );
+  if (data.state.kind === "maker-ranking")
+    return (
+      <RankingPlot
+        bars={data.ranking ?? []}
+        rating={data.rating}
         tickCount={ticks}
+        compact={box.width < 500}
         {...box}
       />
     );
-  if (data.state.kind === "maker-ranking")
-    return <RankingPlot bars={data.ranking ?? []} tickCount={ticks} compact={box.width < 500} {...box} />;
   const axes = curvesAxes(box.width, data.curvesPerPack);
   return (
     <LinePlot

@@ -29,6 +29,8 @@ export type GroupSample = {
   temperatureRiseC: number | null;
   sagLimitedC: number | null;
   labelRatio: number | null;
+  sustainedCMeasured: number | null;
+  sustainedLabelRatio: number | null;
   capacityRatio: number | null;
 };
 
@@ -56,6 +58,8 @@ export async function listGroupSamples(groupKey: string, w: PackWhere): Promise<
       temperatureRiseC: results.temperatureRiseC,
       sagLimitedC: results.sagLimitedC,
       labelRatio: results.labelRatio,
+      sustainedCMeasured: results.sustainedCMeasured,
+      sustainedLabelRatio: results.sustainedLabelRatio,
       capacityRatio: results.capacityRatio,
     })
     .from(results)
@@ -65,9 +69,17 @@ export async function listGroupSamples(groupKey: string, w: PackWhere): Promise<
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
 }
 
-/** What each like-for-like group holds, per maker and pack size: published results, and those with a label ratio
- * (the label check and maker ranking draw only those). The chart builder offers only what has data. */
-export type GroupCoverageRow = { group: string; maker: string; cells: number; results: number; rated: number };
+/** What each like-for-like group holds, per maker and pack size: published results, those with a label ratio by
+ * the estimate (`rated`) and by the measured rating (`measured`) — the label check and maker ranking draw only
+ * those. The chart builder offers only what has data. */
+export type GroupCoverageRow = {
+  group: string;
+  maker: string;
+  cells: number;
+  results: number;
+  rated: number;
+  measured: number;
+};
 
 export async function listGroupCoverage(): Promise<GroupCoverageRow[]> {
   return db
@@ -77,6 +89,7 @@ export async function listGroupCoverage(): Promise<GroupCoverageRow[]> {
       cells: packs.cellsInSeries,
       results: sql<number>`count(*)::int`,
       rated: sql<number>`count(${results.labelRatio})::int`,
+      measured: sql<number>`count(${results.sustainedLabelRatio})::int`,
     })
     .from(results)
     .innerJoin(packs, packOfResult)

@@ -5,7 +5,9 @@ import { and, asc, count, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import type { CurvePoint } from "@/lib/analysis";
+import { headlineCurve } from "@/lib/curves";
 import type { ResultFlatRow } from "@/lib/open-data/records";
+import { headlineColumns } from "../results";
 import { isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
 import { resultConditions, type ResultWhere } from "./where";
 
@@ -106,9 +108,9 @@ export type CurveSeries = {
   curve: CurvePoint[];
 };
 
-/** Discharge curves of published results in one like-for-like group (for the curves chart). */
+/** Discharge curves of published results in one like-for-like group (for the curves chart): each its headline discharge. */
 export async function listGroupCurves(groupKey: string, w: ResultWhere): Promise<CurveSeries[]> {
-  return db
+  const rows = await db
     .select({
       resultId: results.id,
       packSlug: packs.slug,
@@ -118,10 +120,15 @@ export async function listGroupCurves(groupKey: string, w: ResultWhere): Promise
       ratedCapacityMah: packs.ratedCapacityMah,
       loadRateC: results.loadRateC,
       curve: results.curve,
+      ...headlineColumns,
     })
     .from(results)
     .innerJoin(packs, packOfResult)
     .innerJoin(makers, makerOfPack)
     .where(and(isPublished, ...resultConditions({ ...w, group: groupKey })))
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
+  return rows.map(({ discharges, headlineDischarge, curve, ...r }) => ({
+    ...r,
+    curve: headlineCurve(curve, { discharges, headlineDischarge }),
+  }));
 }

@@ -12,7 +12,7 @@ import {
   resistanceBand,
 } from "@/lib/analysis/group-key";
 
-// Band edges are Sagline's own rules, published in content/methods-figures.md.
+// Band edges are Sagline's own rules, published in content/methods/figures.md and content/methods/like-for-like.md.
 describe("like-for-like group key", () => {
   it("builds the documented key and label", () => {
     const g = groupKey({

@@ -18,6 +18,7 @@ const labels = [
   "Osprey Flux 1550 5S",
 ];
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
+  rating: "estimate",
   state: {
     v: 1,
     kind,

@@ -4,6 +4,7 @@ import type { ChartData } from "@/lib/open-data/chart-data";
 import { escapeXml, wrapText } from "@/lib/open-data/chart-svg-kit";
 
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
+  rating: "estimate",
   state: { v: 1, kind, group: "g", title: "A <chart> & more", note: "Note" },
   groupLabel: "DC step · 15–25 °C",
   counts: { packs: 2, results: 3 },
@@ -20,6 +21,22 @@ describe("chart image", () => {
     expect(svg).toContain("CC BY 4.0");
     expect(svg).toContain("1 pack without a sag-limited C left out.");
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+  });
+  it("names the rating it draws: the estimate as an estimate, the measured rating as measured", () => {
+    const point = [{ id: "p", label: "P", labelledC: 50, ratingC: 30, n: 2 }];
+    const estimate = renderChartSvg({ ...base("label-check"), labelCheck: point });
+    expect(estimate).toContain("Sag-limited C, an estimate from resistance (C)");
+    expect(estimate).not.toMatch(/Measured C/);
+    const measured = renderChartSvg({ ...base("label-check"), rating: "measured", labelCheck: point });
+    expect(measured).toContain("Sustained C, measured from the run (C)");
+    expect(measured).toContain("held its label or more");
+    expect(measured).not.toContain("an estimate");
+    const ranking = renderChartSvg({
+      ...base("maker-ranking"),
+      rating: "measured",
+      ranking: [{ label: "M", labelRatio: 0.8, packCount: 2, resultCount: 3 }],
+    });
+    expect(ranking).toMatch(/label ratio \(sustained C measured ÷ labelled C\)|label ratio \(measured\)/);
   });
   it("escapes text as XML", () => {
     const svg = renderChartSvg(base("maker-ranking"));

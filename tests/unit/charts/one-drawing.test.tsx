@@ -27,6 +27,7 @@ const curves: CurveLine[] = ["Alder 1300", "Birch 1500", "Cedar 850"].map((label
 }));
 const data = (kind: ChartData["state"]["kind"], extra: Partial<ChartData>): ChartData => ({
   state: { v: 1, kind, group: "g", title: "T" },
+  rating: "estimate",
   groupLabel: "DC step · 15–25 °C",
   counts: { packs: 4, results: 11 },
   leftOut: [],
@@ -91,7 +92,11 @@ describe("the static markup writer", () => {
     const trees = [
       <LabelCheckFigure key="a" id="lc" points={points} groupLabel="DC step · 15–25 °C & <more>" />,
       <LineFigure key="b" id="cv" title="Curves" series={curveSeries(curves)} xLabel="x" yLabel="y" tableCaption="c" />,
-      <RankingPlot key="c" bars={[{ label: "Alder & Co", labelRatio: 0.8, packCount: 2, resultCount: 4 }]} />,
+      <RankingPlot
+        key="c"
+        rating="measured"
+        bars={[{ label: "Alder & Co", labelRatio: 0.8, packCount: 2, resultCount: 4 }]}
+      />,
       <LogPanels
         key="d"
         points={Array.from({ length: 30 }, (_, i) => ({ s: i * 20, v: 4.1 - i * 0.02, a: 20, t: 25 + i * 0.5 }))}

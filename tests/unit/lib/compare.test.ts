@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { markDifferences, suggestComparisons } from "@/lib/compare";
-import { cycleSeries, sustainedC, type PublicResultRow } from "@/lib/pack-summary";
+import { medianInterval } from "@/lib/analysis/uncertainty";
+import { markDistinguished, suggestComparisons } from "@/lib/compare";
+import { retentionSeries } from "@/lib/analysis";
+import { cycleSeries, onePackSeries, sustainedC, type PublicResultRow } from "@/lib/pack-summary";
 
 let id = 0;
 const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
@@ -30,40 +32,83 @@ const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
   temperatureRiseC: 10,
   sagLimitedC: 40,
   labelRatio: 0.8,
+  sustainedCMeasured: 8,
+  sustainedLabelRatio: 0.16,
   capacityRatio: 0.95,
+  retention: null,
   reachedCutoff: true,
   passedStopTemperature: false,
   ...o,
 });
 
-describe("differences between compared packs", () => {
-  it("marks the best value and how far the others trail; missing values get no mark", () => {
-    expect(markDifferences([40, null, 30], "higher")).toEqual([
-      { best: true, worseBy: null },
-      { best: false, worseBy: null },
-      { best: false, worseBy: 0.25 },
+describe("best on /compare only where packs really differ (95 % median intervals, order statistics)", () => {
+  const six = (base: number) => [0, 1, 2, 3, 4, 5].map((k) => base + k * 0.1);
+  it("marks the one pack whose interval lies wholly above every other's, and the others as behind", () => {
+    // Six results each: the 95 % interval is the lowest to the highest (coverage 1 − 2/64 = 96.9 %).
+    const out = markDistinguished([medianInterval(six(40)), null, medianInterval(six(30))], "higher");
+    expect(out.marks).toEqual([
+      { best: true, note: null },
+      { best: false, note: null },
+      { best: false, note: "behind" },
     ]);
-    expect(markDifferences([10, 12.5], "lower")[1]?.worseBy).toBeCloseTo(0.25, 9);
-    expect(markDifferences([10, null], "lower")).toEqual([
-      { best: false, worseBy: null },
-      { best: false, worseBy: null },
-    ]);
+    expect(out.note).toBeNull();
+    expect(markDistinguished([medianInterval(six(10)), medianInterval(six(12))], "lower").marks[0]?.best).toBe(true);
+  });
+
+  it("crowns nobody when the intervals overlap, and says so", () => {
+    const out = markDistinguished([medianInterval(six(8)), medianInterval(six(8.3))], "higher");
+    expect(out.marks.every((m) => !m.best)).toBe(true);
+    expect(out.note).toBe("Not distinguishable: the 95 % intervals of the medians overlap.");
+  });
+
+  it("crowns nobody with too few results for an interval, however far apart the medians are (four packs at 8C each)", () => {
+    const one = (v: number) => medianInterval([v]);
+    const out = markDistinguished([one(8), one(8), one(8), one(8)], "higher");
+    expect(out.marks.some((m) => m.best)).toBe(false);
+    expect(out.note).toMatch(/too few results/);
+    expect(markDistinguished([medianInterval([50, 51]), medianInterval([10, 11])], "higher").note).toMatch(
+      /too few results/,
+    );
+  });
+
+  it("marks nothing with fewer than two packs holding results", () => {
+    expect(markDistinguished([medianInterval(six(5)), null], "higher")).toEqual({
+      marks: [
+        { best: false, note: null },
+        { best: false, note: null },
+      ],
+      note: null,
+    });
   });
 });
 
-describe("sustained C (definition on /methods)", () => {
-  it("is the highest approved constant-current rate completed to cut-off without passing the stop temperature", () => {
+describe("sustained C (definition on /methods#sustained-c)", () => {
+  it("is the highest MEASURED value among approved results, whatever rate the tester stated", () => {
     const rows = [
-      r({ loadRateC: 5 }),
-      r({ loadRateC: 10 }),
-      r({ loadRateC: 20, passedStopTemperature: true }),
-      r({ loadRateC: 25, reachedCutoff: false }),
-      r({ loadRateC: 40, loadMode: "constant-power" }),
+      r({ loadRateC: 5, sustainedCMeasured: 4.9 }),
+      r({ loadRateC: 10, sustainedCMeasured: 9.7 }),
+      r({ loadRateC: 20, sustainedCMeasured: null }), // did not qualify
     ];
-    expect(sustainedC(rows)?.rateC).toBe(10);
+    expect(sustainedC(rows)).toEqual({ rateC: 9.7, resultId: rows[1]?.id });
+    expect(sustainedC([r({ sustainedCMeasured: null })])).toBeNull();
     // A reader's open case does not stop a result counting: it counts until moderators decide.
-    expect(sustainedC([...rows, r({ loadRateC: 30, openCase: true })])?.rateC).toBe(30);
-    expect(sustainedC([r({ passedStopTemperature: true })])).toBeNull();
+    expect(sustainedC([...rows, r({ loadRateC: 30, sustainedCMeasured: 29, openCase: true })])?.rateC).toBe(29);
+  });
+});
+
+describe("one pack's ageing", () => {
+  const s = (n: number) =>
+    retentionSeries(
+      Array.from({ length: n }, (_, i) => ({ cycle: i + 1, capacityMah: 2000 - 5 * i })),
+      2000,
+    );
+  it("comes from the published result with the longest retention series", () => {
+    const rows = [r({ retention: s(3) }), r({ retention: s(10) }), r({ retention: s(5) })];
+    const one = onePackSeries(rows);
+    expect(one?.resultId).toBe(rows[1]?.id);
+    expect(one?.retention.points).toHaveLength(10);
+    expect(one?.otherSeries).toBe(2);
+    expect(onePackSeries([r({})])).toBeNull();
   });
 });
 
@@ -76,8 +121,10 @@ describe("cycling series", () => {
       r({ cyclesBeforeTest: 50, ambientTemperatureC: 8 }),
     ]);
     expect(s?.points.map((p) => p.cycles)).toEqual([0, 100]);
-    // Straight line through (0, 100 %) and (100, 95 %) reaches 80 % at cycle 400 (arithmetic).
+    // Straight line through (0, 100 %) and (100, 95 %) reaches 80 % at cycle 400 (arithmetic) — but two cycle
+    // counts support no projection (at least 3 are needed, lib/analysis/cycles.ts).
     expect(s?.trend?.cyclesTo80).toBeCloseTo(400, 6);
+    expect(s?.projection.cyclesTo80).toBeNull();
   });
 });
 

@@ -9,6 +9,7 @@ import { DATA_LICENCE_SPDX, licenceInfo } from "@/lib/open-data/licence";
 import { nestedRecord } from "@/lib/open-data/records";
 import { resultFields } from "@/lib/open-data/result-fields";
 import { analyseOptionsFor, recomputeCommand } from "@/lib/open-data/recompute";
+import { execFileSync } from "node:child_process";
 
 const LISTS = { makers: makerFields, packs: packFields, results: resultFields } as Record<string, Field<never>[]>;
 
@@ -114,5 +115,15 @@ describe("the recompute command", () => {
     expect(recomputeCommand("log.csv", facts)).toBe(
       "npm run analyse -- log.csv --cells 4 --rated-mah 1300 --labelled-c 75 --cutoff-v 3.3 --stop-temp-c 60 --pack-start-temp-c 22.5",
     );
+  });
+  it("passes a log's column mapping as --map-json, quoted so a POSIX shell (/bin/sh) hands the CLI the JSON back", () => {
+    const mapping = { time: "Zeit (s)", voltage: "Tom's V", current: 3, hasHeader: true };
+    const command = recomputeCommand("log.csv", { ...facts, mapping });
+    expect(analyseOptionsFor({ ...facts, mapping }).mapping).toEqual(mapping);
+    const quoted = command.split(" --map-json ")[1] ?? "";
+    expect(quoted.startsWith("'")).toBe(true);
+    const echoed = execFileSync("/bin/sh", ["-c", `printf %s ${quoted}`], { encoding: "utf8" });
+    expect(JSON.parse(echoed)).toEqual(mapping);
+    expect(recomputeCommand("log.csv", { ...facts, mapping: null })).not.toContain("--map-json");
   });
 });

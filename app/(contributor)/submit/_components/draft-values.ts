@@ -38,7 +38,7 @@ export function blankValues(profiles: BenchProfileOption[]): SubmitResultValues 
       notes: "",
       ...(first ? methodFromProfile(first) : {}),
     },
-    log: { key: "", filename: "" },
+    log: { key: "", filename: "", mapping: "" },
     photoKeys: [],
     declaration: false,
   };
@@ -53,13 +53,14 @@ function strings<K extends string>(blank: Record<K, string>) {
 /** The stored draft's values over the blank ones. */
 export function valuesFromDraft(blank: SubmitResultValues, raw: Record<string, unknown>): SubmitResultValues {
   const { mode: _mode, ...packStrings } = blank.pack;
+  const blankLog = { key: blank.log.key, filename: blank.log.filename, mapping: blank.log.mapping ?? "" };
   const schema = z.object({
     idempotencyKey: z.uuid().catch(blank.idempotencyKey),
     pack: strings(packStrings)
       .extend({ mode: z.enum(["existing", "new"]).catch(blank.pack.mode) })
       .catch(blank.pack),
     method: strings(blank.method).catch(blank.method),
-    log: strings(blank.log).catch(blank.log),
+    log: strings(blankLog).catch(blankLog),
     photoKeys: z.array(z.string().max(300)).max(10).catch(blank.photoKeys),
     declaration: z.boolean().catch(false),
   });

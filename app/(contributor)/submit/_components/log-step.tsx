@@ -1,21 +1,29 @@
 "use client";
 // Step 3: the log upload, streamed to storage with a real progress bar, then the figures, curves,
-// warnings and checks against the method card — all before confirming.
+// warnings and checks against the method card — all before confirming. The first rows are read in the
+// browser first: a log whose columns cannot be named (no header row) waits for the tester's column mapping,
+// or the chosen bench profile's; the mapping travels with the upload and the submission.
 import Link from "next/link";
+import { useState } from "react";
+import { ColumnMappingPicker } from "@/components/analysis/column-mapping-client";
 import { LogPreview } from "@/components/analysis/log-preview";
+import { previewFile } from "@/components/analysis/preview-file";
 import { FileDrop } from "@/components/forms/file-drop";
 import { UploadProgress } from "@/components/forms/upload-progress";
 import { useXhrUpload } from "@/components/forms/use-xhr-upload";
 import { Alert, buttonClass } from "@/components/ui/form";
-import type { LogPreview as LogPreviewData } from "@/lib/analysis";
+import type { ColumnMapping, LogPreview as LogPreviewData, LogTablePreview } from "@/lib/analysis";
+import { mappingJson, waitsForMapping } from "@/lib/column-mapping-form";
 import type { SubmitResultValues } from "@/lib/validations/result";
-import type { Limits, PackFactsClient, SubmitFormApi } from "./types";
+import type { BenchProfileOption, Limits, PackFactsClient, SubmitFormApi } from "./types";
 
 type UploadAnswer = { log: { key: string; sha256: string; bytes: number; filename: string }; preview: LogPreviewData };
 type Props = {
   form: SubmitFormApi;
   facts: PackFactsClient | null;
   limits: Limits;
+  /** Bench profiles: the one chosen on the method card may remember the column mapping its logs need. */
+  profiles: BenchProfileOption[];
   preview: LogPreviewData | null;
   previewState: "idle" | "loading" | "error";
   onPreview: (p: LogPreviewData | null) => void;
@@ -23,8 +31,14 @@ type Props = {
   optional?: boolean;
 };
 
-function uploadUrl(filename: string, facts: PackFactsClient | null, m: SubmitResultValues["method"]): string {
+function uploadUrl(
+  filename: string,
+  facts: PackFactsClient | null,
+  m: SubmitResultValues["method"],
+  mapping: ColumnMapping | null,
+): string {
   const q = new URLSearchParams({ filename });
+  if (mapping) q.set("mapping", mappingJson(mapping));
   const put = (k: string, v: string | number | null | undefined) => {
     const s = v === null || v === undefined ? "" : String(v).trim().replace(",", ".");
     if (s !== "" && Number.isFinite(Number(s))) q.set(k, s);
@@ -43,7 +57,17 @@ function uploadUrl(filename: string, facts: PackFactsClient | null, m: SubmitRes
   return `/api/v1/uploads/log?${q}`;
 }
 
-export function LogStep({ form, facts, limits, preview, previewState, onPreview, onRecheck, optional = false }: Props) {
+export function LogStep({
+  form,
+  facts,
+  limits,
+  profiles,
+  preview,
+  previewState,
+  onPreview,
+  onRecheck,
+  optional = false,
+}: Props) {
   const {
     setValue,
     getValues,
@@ -55,20 +79,38 @@ export function LogStep({ form, facts, limits, preview, previewState, onPreview,
   const log = watch("log");
   const busy = upload.state.phase === "uploading" || upload.state.phase === "processing";
   const uploadError = upload.state.phase === "error" ? upload.state.error : null;
-  const fieldError = errors.log?.message ?? errors.log?.key?.message;
+  const fieldError = errors.log?.message ?? errors.log?.key?.message ?? errors.log?.mapping?.message;
+  const [file, setFile] = useState<File | null>(null);
+  const [table, setTable] = useState<LogTablePreview | null>(null);
+  const [mapping, setMapping] = useState<ColumnMapping | null>(null);
+  const profile = profiles.find((p) => String(p.id) === watch("method.benchProfileId"));
+  const profileMapping = profile?.logMapping ?? null;
 
-  const send = async (file: File) => {
+  const send = async (f: File, m: ColumnMapping | null) => {
     clearErrors("log");
-    const answer = await upload.send(uploadUrl(file.name, facts, getValues("method")), file, file.type || "text/csv");
+    setMapping(m);
+    const answer = await upload.send(uploadUrl(f.name, facts, getValues("method"), m), f, f.type || "text/csv");
     if (!answer) return;
     setValue(
       "log",
-      { key: answer.log.key, filename: answer.log.filename },
+      { key: answer.log.key, filename: answer.log.filename, mapping: mappingJson(m) },
       { shouldDirty: true, shouldValidate: true },
     );
     onPreview(answer.preview);
   };
+  const choose = async (f: File) => {
+    setFile(f);
+    upload.reset();
+    const t = await previewFile(f);
+    setTable(t);
+    // The bench profile's mapping when it has one; a log without a header row waits for the tester's mapping;
+    // anything else goes as it is (the server says what is wrong with a file that is not a log).
+    if (profileMapping) await send(f, profileMapping);
+    else if (!waitsForMapping(t)) await send(f, null);
+    else setMapping(null);
+  };
   const errorText = uploadError ? (uploadError.fieldErrors?.log?.[0] ?? uploadError.message) : fieldError;
+  const needsMapping = table !== null && waitsForMapping(table) && !log?.key;
 
   return (
     <div className="space-y-5">
@@ -76,12 +118,33 @@ export function LogStep({ form, facts, limits, preview, previewState, onPreview,
         accept=".csv,.txt,.tsv,.log,.dat,text/csv,text/plain"
         label={log?.key ? "Replace the log" : "Drop the log here, or choose a file"}
         hint={`CSV from your logger (time, voltage, current, optionally temperature); up to ${limits.logMaxMb} MB. ${optional ? "Leave it to keep the stored log." : ""}`}
-        onFile={send}
+        onFile={(f) => void choose(f)}
         disabled={busy}
         error={errorText}
         testId="log-file"
       />
       <UploadProgress state={upload.state} label="Uploading the log" />
+      {file && table ? (
+        <details
+          open={needsMapping || (uploadError !== null && !table.detected)}
+          key={`${file.name}-${file.size}-${file.lastModified}`}
+        >
+          <summary className="cursor-pointer text-sm">
+            {needsMapping
+              ? "Columns: say what each column holds before the log is uploaded"
+              : mapping
+                ? `Columns as mapped${mapping === profileMapping && profile ? ` by your bench profile “${profile.name}”` : ""} — open to change`
+                : "Columns (detected — open to change)"}
+          </summary>
+          <ColumnMappingPicker
+            preview={table}
+            initial={mapping ?? profileMapping}
+            disabled={busy}
+            applyLabel={log?.key ? "Upload again with these columns" : "Upload with these columns"}
+            onApply={(m) => void send(file, m)}
+          />
+        </details>
+      ) : null}
       {uploadError?.status === 401 && (
         <Alert tone="error">
           Your session has ended. <Link href="/sign-in?callbackUrl=/submit">Sign in again</Link> — this draft is kept in

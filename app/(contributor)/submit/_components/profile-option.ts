@@ -13,5 +13,6 @@ export function profileOption(p: BenchProfile): BenchProfileOption {
     defaultCutoffVPerCell: p.defaultCutoffVPerCell,
     defaultStopTemperatureC: p.defaultStopTemperatureC,
     defaultSampleRateHz: p.defaultSampleRateHz,
+    logMapping: p.logMapping,
   };
 }

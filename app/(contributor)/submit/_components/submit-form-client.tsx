@@ -254,6 +254,7 @@ export function SubmitForm({ userId, packs, makers, profiles, limits }: Props) {
             form={form}
             facts={facts}
             limits={limits}
+            profiles={profiles}
             preview={preview}
             previewState={previewState}
             onPreview={setPreview}

@@ -1,5 +1,6 @@
 // What the submit page hands its client components (plain data, no Date objects).
 import type { PackChoice } from "@/db/queries/submissions";
+import type { ColumnMapping } from "@/lib/analysis";
 import type { LoadMode, ResistanceMethod } from "@/lib/enums";
 
 export type PackOption = PackChoice;
@@ -14,6 +15,8 @@ export type BenchProfileOption = {
   defaultCutoffVPerCell: number | null;
   defaultStopTemperatureC: number | null;
   defaultSampleRateHz: number | null;
+  /** The column mapping this bench's logs need; null: detect the columns. */
+  logMapping: ColumnMapping | null;
 };
 /** The pack's label figures the analysis needs, whether chosen or proposed. */
 export type PackFactsClient = {

@@ -8,7 +8,7 @@ import { previewStoredLogSchema } from "@/lib/validations/result";
 export const previewStoredLog = authedAction("upload.create", previewStoredLogSchema, async (input, user) => {
   const { facts } = await resolvePack(input.pack, user.id);
   await checkFiles(input.log.key, [], user.id);
-  const { analysis } = await analyseForCard(input.log.key, facts, input.method);
+  const { analysis } = await analyseForCard(input.log.key, facts, input.method, input.log.mapping);
   const m = input.method;
   return previewOf(analysis, {
     packCells: facts.cells,

@@ -1,11 +1,16 @@
 "use client";
-// Drop a log, optionally give the pack's label figures, and see what the measurement core makes of it.
+// Drop a log, optionally give the pack's label figures, and see what the measurement core makes of it. The
+// first rows are previewed in the browser: when the columns cannot be named (a log without a header row),
+// the tester names them in the column picker and the mapping goes with the log as `mapping`.
 import { useState } from "react";
+import { ColumnMappingPicker } from "@/components/analysis/column-mapping-client";
 import { LogPreview } from "@/components/analysis/log-preview";
+import { previewFile } from "@/components/analysis/preview-file";
 import { FileDrop } from "@/components/forms/file-drop";
 import { UploadProgress } from "@/components/forms/upload-progress";
 import { useXhrUpload } from "@/components/forms/use-xhr-upload";
-import type { CurvePoint, PublicFigures } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, LogTablePreview, PublicFigures } from "@/lib/analysis";
+import { mappingJson, waitsForMapping } from "@/lib/column-mapping-form";
 
 type Answer = PublicFigures & { curve: CurvePoint[] };
 const FIELDS = [
@@ -25,14 +30,26 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
     weightG: "",
   });
   const [file, setFile] = useState<File | null>(null);
+  const [table, setTable] = useState<LogTablePreview | null>(null);
+  const [mapping, setMapping] = useState<ColumnMapping | null>(null);
   const busy = upload.state.phase === "uploading" || upload.state.phase === "processing";
   const error = upload.state.phase === "error" ? upload.state.error : null;
 
-  const run = (f: File) => {
-    setFile(f);
+  const run = (f: File, m: ColumnMapping | null) => {
     const params = new URLSearchParams({ include: "curve" });
     for (const { name } of FIELDS) if (values[name].trim() !== "") params.set(name, values[name].trim());
+    if (m) params.set("mapping", mappingJson(m));
     void upload.send(`/api/v1/analyse?${params}`, f, "text/csv");
+  };
+  const choose = async (f: File) => {
+    setFile(f);
+    setMapping(null);
+    upload.reset();
+    const t = await previewFile(f);
+    setTable(t);
+    // A log without a header row waits for the tester's mapping; anything else goes at once (the server says
+    // what is wrong with a file that is not a log).
+    if (!waitsForMapping(t)) run(f, null);
   };
 
   return (
@@ -42,9 +59,13 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
           accept=".csv,.txt,.tsv,.log,text/csv,text/plain"
           label="Drop a log here, or choose a file"
           hint={`CSV from your logger, comma, semicolon or tab separated; up to ${maxMb} MB`}
-          onFile={run}
+          onFile={(f) => void choose(f)}
           disabled={busy}
-          error={error?.fieldErrors?.file?.[0] ?? (error && !error.fieldErrors ? error.message : undefined)}
+          error={
+            error?.fieldErrors?.file?.[0] ??
+            error?.fieldErrors?.mapping?.[0] ??
+            (error && !error.fieldErrors ? error.message : undefined)
+          }
           testId="analyse-file"
         />
         <UploadProgress state={upload.state} label={`Sending ${file?.name ?? "the log"}`} />
@@ -78,7 +99,7 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
           <button
             type="button"
             disabled={!file || busy}
-            onClick={() => file && run(file)}
+            onClick={() => file && run(file, mapping)}
             className="rounded-md border border-ink/20 px-3 py-1.5 text-sm hover:bg-paper-sunk disabled:opacity-50 dark:border-night-line dark:hover:bg-night-sunk"
           >
             Analyse again with these figures
@@ -86,6 +107,23 @@ export function AnalyseClient({ maxMb }: { maxMb: number }) {
         </fieldset>
       </div>
       <section aria-labelledby="analysis-heading" className="min-w-0 space-y-3">
+        {file && table ? (
+          <details open={!table.detected} className="space-y-2" key={`${file.name}-${file.size}-${file.lastModified}`}>
+            <summary className="cursor-pointer text-sm">
+              {table.detected ? "Columns (detected — open to change)" : "Columns: say what each column holds"}
+            </summary>
+            <ColumnMappingPicker
+              preview={table}
+              initial={mapping}
+              disabled={busy}
+              applyLabel="Analyse with these columns"
+              onApply={(m) => {
+                setMapping(m);
+                run(file, m);
+              }}
+            />
+          </details>
+        ) : null}
         <h2 id="analysis-heading">{upload.state.phase === "done" && file ? `Figures for ${file.name}` : "Figures"}</h2>
         {upload.state.phase === "done" ? (
           <LogPreview figures={upload.state.data} curve={upload.state.data.curve} />

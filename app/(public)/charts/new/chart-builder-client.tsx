@@ -4,33 +4,44 @@
 // not publish a chart that would come out empty.
 import { useRouter, useSearchParams } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
+import { RATING_LABELS } from "@/lib/figure-words";
 import {
   CHART_KINDS,
   CHART_KIND_LABELS,
+  CHART_RATINGS,
   chartState,
   decodeChartState,
   encodeChartState,
   statePath,
   type ChartKind,
+  type ChartRating,
 } from "@/lib/open-data/chart-state";
 
 type Group = { key: string; label: string; resultCount: number; packCount: number };
 type Maker = { slug: string; name: string };
-/** Approved results per group, maker and pack size; `rated` have a label ratio (label check, ranking). */
-type Coverage = { group: string; maker: string; cells: number; results: number; rated: number };
+/** Approved results per group, maker and pack size; `rated` have a label ratio by the estimate, `measured` by the
+ * measured rating (label check, ranking). */
+type Coverage = { group: string; maker: string; cells: number; results: number; rated: number; measured: number };
 
 const input = "input mt-1 block w-full";
 const defaultTitle: Record<ChartKind, string> = {
-  "label-check": "Labelled C against sag-limited C",
+  "label-check": "Labelled C against the rating",
   curves: "Discharge curves compared",
   "maker-ranking": "How close makers come to their labels",
 };
 
 /** What a chart of this kind, group, maker and size would draw. */
-function countFor(coverage: Coverage[], kind: ChartKind, group: string, maker: string, cells: string): number {
+function countFor(
+  coverage: Coverage[],
+  kind: ChartKind,
+  rating: ChartRating,
+  group: string,
+  maker: string,
+  cells: string,
+): number {
   return coverage
     .filter((c) => c.group === group && (!maker || c.maker === maker) && (!cells || c.cells === Number(cells)))
-    .reduce((n, c) => n + (kind === "curves" ? c.results : c.rated), 0);
+    .reduce((n, c) => n + (kind === "curves" ? c.results : rating === "measured" ? c.measured : c.rated), 0);
 }
 
 export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; makers: Maker[]; coverage: Coverage[] }) {
@@ -43,6 +54,9 @@ export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; ma
   const [title, setTitle] = useState(from?.title ?? "");
   const [note, setNote] = useState(from?.note ?? "");
   const [perPack, setPerPack] = useState(from?.units === "pack");
+  // A chart copied from an older permalink keeps the estimate it drew (a state without a rating means it).
+  const [rating, setRating] = useState<ChartRating>(from?.rating ?? "estimate");
+  const rated = kind === "label-check" || kind === "maker-ranking";
 
   const inGroup = coverage.filter((c) => c.group === group);
   const makerOptions = makers.filter((m) =>
@@ -51,7 +65,7 @@ export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; ma
   const cellOptions = [...new Set(inGroup.filter((c) => !maker || c.maker === maker).map((c) => c.cells))].sort(
     (a, b) => a - b,
   );
-  const count = countFor(coverage, kind, group, maker, cells);
+  const count = countFor(coverage, kind, rating, group, maker, cells);
 
   const parsed = useMemo(
     () =>
@@ -61,12 +75,13 @@ export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; ma
         group,
         maker: maker || undefined,
         cells: cells ? Number(cells) : undefined,
+        rating: rated ? rating : undefined,
         title: title.trim() || defaultTitle[kind],
         note: note.trim() || undefined,
         // Per pack only for curves of one pack size (the reader's units, lib/units.ts).
         units: kind === "curves" && cells && perPack ? "pack" : undefined,
       }),
-    [kind, group, maker, cells, title, note, perPack],
+    [kind, group, maker, cells, rated, rating, title, note, perPack],
   );
   const encoded = parsed.success ? encodeChartState(parsed.data) : null;
   const preview = useDeferredValue(encoded);
@@ -106,6 +121,24 @@ export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; ma
             </label>
           ))}
         </fieldset>
+        {rated ? (
+          <fieldset className="space-y-1" data-testid="chart-rating">
+            <legend className="text-sm font-medium">Rating</legend>
+            {CHART_RATINGS.map((r) => (
+              <label key={r} className="flex items-start gap-2 text-sm">
+                <input
+                  type="radio"
+                  name="rating"
+                  value={r}
+                  checked={rating === r}
+                  onChange={() => setRating(r)}
+                  className="mt-1"
+                />
+                <span>{RATING_LABELS[r]}</span>
+              </label>
+            ))}
+          </fieldset>
+        ) : null}
         <label className="block text-sm">
           Like-for-like group
           <select name="group" value={group} onChange={(e) => chooseGroup(e.target.value)} className={input}>

@@ -1,6 +1,7 @@
 import { SummaryValue } from "@/components/summary-value";
 import type { PackSummary } from "@/lib/catalogue";
-import { markDifferences, NOTABLE_DIFFERENCE, type ComparedPack, type Direction } from "@/lib/compare";
+import { markDistinguished, type ComparedPack, type Direction, type Mark } from "@/lib/compare";
+import { RATING_LABELS } from "@/lib/figure-words";
 import { exclusionText } from "@/lib/like-for-like";
 import { LabelPairNote } from "@/components/label-pair-note";
 import { Qty } from "@/components/quantity";
@@ -21,8 +22,16 @@ type Row = {
   perCell?: boolean;
 };
 const ROWS: Row[] = [
-  { label: "Sag-limited C (estimate)", figure: "sagLimitedC", digits: 1, unit: "C", better: "higher" },
-  { label: "Label ratio", figure: "labelRatio", digits: 2, unit: "", better: "higher" },
+  { label: "Sustained C (measured, median)", figure: "sustainedCMeasured", digits: 1, unit: "C", better: "higher" },
+  {
+    label: "Label ratio (measured ÷ label)",
+    figure: "sustainedLabelRatio",
+    digits: 2,
+    unit: "",
+    better: "higher",
+  },
+  { label: RATING_LABELS.estimate, figure: "sagLimitedC", digits: 1, unit: "C", better: "higher" },
+  { label: "Label ratio (estimate ÷ label)", figure: "labelRatio", digits: 2, unit: "", better: "higher" },
   { label: "Delivered capacity", figure: "capacityMah", digits: 0, unit: "mAh", better: null },
   { label: "Capacity ratio", figure: "capacityRatio", digits: 2, unit: "", better: "higher" },
   { label: "Hold voltage", figure: "holdVoltagePerCellV", digits: 3, unit: "", better: "higher", q: "v" },
@@ -39,19 +48,14 @@ const ROWS: Row[] = [
   { label: "Temperature rise", figure: "temperatureRiseC", digits: 1, unit: "", better: "lower", q: "dtemp" },
 ];
 
-function MarkNote({ best, worseBy }: { best: boolean; worseBy: number | null }) {
+function MarkNote({ best, note }: Mark) {
   if (best)
     return (
       <span className="mt-0.5 inline-block rounded bg-cell-100 px-1 text-xs font-medium text-cell-700 dark:bg-cell-700/40 dark:text-cell-100">
         ★ best
       </span>
     );
-  if (worseBy !== null && worseBy > NOTABLE_DIFFERENCE)
-    return (
-      <span className="mt-0.5 inline-block text-xs text-charge-700 dark:text-charge-400">
-        {Math.round(worseBy * 100)} % behind
-      </span>
-    );
+  if (note) return <span className="mt-0.5 inline-block text-xs text-charge-700 dark:text-charge-400">{note}</span>;
   return null;
 }
 
@@ -63,7 +67,9 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
     <div className="card -mx-4 overflow-x-auto p-0 sm:mx-0" tabIndex={0} role="region" aria-label="Comparison table">
       <table className="w-full min-w-[40rem] border-collapse text-sm" data-testid="compare-table">
         <caption className="sr-only">
-          Figures of the compared packs in one like-for-like group. ★ marks the best value of a row.
+          Figures of the compared packs in one like-for-like group. ★ marks a pack whose median is distinguishably
+          better than every other pack&apos;s (95 % intervals apart); otherwise the row says the packs are not
+          distinguishable.
         </caption>
         <thead>
           <tr>
@@ -94,12 +100,13 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
           </tr>
           {ROWS.map((row) => {
             const summaries = compared.map((c) => c.figures[row.figure] as Summary | null);
-            const marks = row.better
-              ? markDifferences(
-                  summaries.map((s) => s?.median ?? null),
+            const rowMarks = row.better
+              ? markDistinguished(
+                  compared.map((c) => c.intervals[row.figure]),
                   row.better,
                 )
-              : [];
+              : null;
+            const marks = rowMarks?.marks ?? [];
             return (
               <tr key={row.figure}>
                 <th scope="row" className={`${cell} ${head}`}>
@@ -107,6 +114,11 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
                   <span className="muted block text-xs">
                     {row.better ? `${row.better} is better` : "not ranked: sizes differ"}
                   </span>
+                  {rowMarks?.note ? (
+                    <span className="block text-xs font-normal" data-testid="not-distinguishable">
+                      {rowMarks.note}
+                    </span>
+                  ) : null}
                 </th>
                 {summaries.map((s, i) => (
                   <td
@@ -129,24 +141,16 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
           })}
           <tr>
             <th scope="row" className={`${cell} ${head}`}>
-              Sustained C<span className="muted block text-xs">higher is better</span>
+              Sustained C (the pack&apos;s rating)
+              <span className="muted block text-xs">
+                highest measured among approved results; ranked by the median above
+              </span>
             </th>
-            {(() => {
-              const marks = markDifferences(
-                compared.map((c) => c.sustainedC),
-                "higher",
-              );
-              return compared.map((c, i) => (
-                <td key={c.packId} className={`${cell} num ${marks[i]?.best ? "bg-cell-50 dark:bg-cell-700/15" : ""}`}>
-                  {c.sustainedC === null ? <span className="muted">—</span> : fmtC(c.sustainedC)}
-                  {marks[i] ? (
-                    <div>
-                      <MarkNote {...marks[i]} />
-                    </div>
-                  ) : null}
-                </td>
-              ));
-            })()}
+            {compared.map((c) => (
+              <td key={c.packId} className={`${cell} num`}>
+                {c.sustainedC === null ? <span className="muted">—</span> : fmtC(c.sustainedC)}
+              </td>
+            ))}
           </tr>
           <tr>
             <th scope="row" className={`${cell} ${head}`}>

@@ -138,6 +138,24 @@ export default function ApiGuidePage() {
           the field names.
         </li>
       </ul>
+      <h2 id="analyse">Checking a log: POST /api/v1/analyse</h2>
+      <p>
+        Send a log as the raw body (<code>text/csv</code>) or as a multipart field <code>file</code>, and get the
+        figures Sagline computes from it — every discharge, both ratings with their assumptions, the warnings in words
+        and as codes — as the command-line tool prints them. Nothing is stored. Query parameters, all optional:{" "}
+        <code>cells</code>, <code>ratedMah</code>, <code>labelledC</code>, <code>weightG</code> (the pack&apos;s label
+        figures that some figures need), <code>include=curve</code> (add the chart curve), and <code>mapping</code>: the
+        column mapping as JSON for a log whose columns cannot be named from its header — columns by number from 0 (or by
+        header name), <code>timeUnit</code>, <code>voltageUnit</code>, <code>currentUnit</code>,{" "}
+        <code>temperatureUnit</code>, <code>cellVoltages</code>, <code>hasHeader</code> and <code>dischargeSign</code>.
+        Bad JSON, an unusable mapping or columns the log does not have answer <code>422</code> with the reason in{" "}
+        <code>error.fieldErrors.mapping</code>. 30 logs a minute per IP address.
+      </p>
+      <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
+        <code>{`curl -s -X POST -H 'Content-Type: text/csv' --data-binary @log.csv \\
+  '${base}/api/v1/analyse?cells=4&ratedMah=1300' \\
+  --url-query 'mapping={"time":1,"voltage":9,"current":8,"hasHeader":false}'`}</code>
+      </pre>
       <h2>Example</h2>
       <pre tabIndex={0} className="overflow-x-auto rounded bg-paper-sunk p-3 text-sm dark:bg-night-sunk">
         <code>{`curl -s '${base}/api/v1/packs?cells=4&size=10'\ncurl -s '${base}/api/v1/results?pack=SLUG'\ncurl -sO '${base}/data/download/results.csv'`}</code>

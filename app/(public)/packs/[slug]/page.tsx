@@ -6,6 +6,7 @@ import { StaticIsland } from "@/components/static-island";
 import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
 import { LabelPairNote } from "@/components/label-pair-note";
 import { Qty } from "@/components/quantity";
+import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmtC, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
@@ -37,7 +38,7 @@ export default async function PackPage(props: Props) {
   if (!parsed.success) notFound();
   const detail = await cachedPackDetail(parsed.data.slug);
   if (!detail) notFound();
-  const { pack, groups, sustained, cycles, curves, results } = detail;
+  const { pack, groups, sustained, ageing, curves, results } = detail;
   const title = packTitle(pack);
   return (
     <article className="space-y-10">
@@ -63,19 +64,20 @@ export default async function PackPage(props: Props) {
       <section aria-labelledby="measured" className="space-y-3">
         <h2 id="measured">Label vs measured</h2>
         <p className="text-sm">
-          <strong>Sustained C:</strong>{" "}
+          <strong>{RATING_LABELS.measured}:</strong>{" "}
           {sustained ? (
             <>
               <span className="num" data-testid="sustained-c">
                 {fmtC(sustained.rateC)}
               </span>{" "}
               <span className="muted">
-                — highest constant-current rate completed to cut-off without passing the stop temperature (
-                <a href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</a>; {sustained.groupLabel})
+                — the highest current a qualifying run actually drew, among approved results (
+                <a href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</a>; {sustained.groupLabel}).{" "}
+                <a href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</a>.
               </span>
             </>
           ) : (
-            <span className="muted">— no approved constant-current run has completed to cut-off yet</span>
+            <span className="muted">— no approved run has qualified for a measured rating yet</span>
           )}
         </p>
         <StaticIsland id="pack-figures">
@@ -124,7 +126,7 @@ export default async function PackPage(props: Props) {
       <section aria-labelledby="cycles" className="space-y-3">
         <h2 id="cycles">Over cycles</h2>
         <StaticIsland id="pack-cycles">
-          <CyclesSection cycles={cycles} cells={pack.cellsInSeries} />
+          <CyclesSection ageing={ageing} cells={pack.cellsInSeries} />
         </StaticIsland>
       </section>
 

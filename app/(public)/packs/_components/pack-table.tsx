@@ -79,8 +79,12 @@ export const PACK_COLUMNS: Column[] = [
   },
   {
     id: "labelRatio",
-    header: "Label ratio",
-    name: "Label ratio",
+    header: (
+      <>
+        Label ratio<span className="block text-xs font-normal">estimate ÷ label</span>
+      </>
+    ),
+    name: "Label ratio (estimate ÷ label)",
     sort: "labelRatio",
     numeric: true,
     cell: (r) => (r.labelRatio === null ? dash : fmtRatio(r.labelRatio)),

@@ -4,9 +4,12 @@ import { z } from "zod";
 import { LogFigure } from "@/components/charts/log-figure";
 import { StaticIsland } from "@/components/static-island";
 import { recordId } from "@/lib/validations/ids";
+import { DischargesTable } from "@/components/analysis/discharges-table";
+import { RetentionSummary } from "@/components/analysis/retention-summary";
 import { FlagResultForm } from "@/components/flag-result-form-client";
 import { MethodCard } from "@/components/method-card";
 import { prepareTimeCurve } from "@/lib/curves";
+import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmtDate, labelSpec, packTitle } from "@/lib/format";
 import { DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 import { logDownloadName, recomputeCommand } from "@/lib/open-data/recompute";
@@ -50,6 +53,7 @@ export default async function ResultPage(props: Props) {
     cutoffVPerCell: r.cutoffVPerCell,
     stopTemperatureC: r.stopTemperatureC,
     packStartTemperatureC: r.packStartTemperatureC,
+    mapping: r.logMapping,
   });
   return (
     <article className="space-y-8">
@@ -91,10 +95,17 @@ export default async function ResultPage(props: Props) {
           <h2 id="figures">Figures</h2>
           <FiguresList f={r.figures} />
           <p className="muted text-xs">
-            Computed by Sagline from the uploaded log. <a href="/methods#figures">How each figure is defined</a>.
+            Computed by Sagline from the uploaded log.{" "}
+            <a href={methodsHref(METHODS_ANCHORS.figures)}>How each figure is defined</a>.
           </p>
         </section>
       </div>
+
+      <section aria-labelledby="discharges-h" className="card space-y-3">
+        <h2 id="discharges-h">Discharges</h2>
+        <DischargesTable discharges={r.figures.discharges} headline={r.figures.headlineDischarge} />
+        <RetentionSummary retention={r.figures.retention} />
+      </section>
 
       <section aria-labelledby="log" className="space-y-4">
         <h2 id="log">Log</h2>

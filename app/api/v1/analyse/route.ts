@@ -1,4 +1,5 @@
 // POST /api/v1/analyse — figures, curves and warnings for a log sent as the raw body (text/csv) or a multipart field `file`; nothing is stored.
+// `?mapping=<JSON>` names the columns of a log detection cannot read (lib/validations/analyse.ts).
 // Strangers are limited per client address and share ANALYSE_MAX_CONCURRENT analyses at a time (503 + Retry-After
 // past it); signed-in accounts are limited per account.
 import type { SessionUser } from "@/server/session";
@@ -18,7 +19,7 @@ async function analyse(req: Request): Promise<Response> {
   const { include, ...options } = analyseQuerySchema.parse(searchParamsObject(req.url));
   const maxBytes = env().LOG_MAX_BYTES;
   const log = await logFromRequest(req, maxBytes);
-  const analysis = await analyseChunks(textOnly(log.chunks), options, maxBytes);
+  const analysis = await analyseChunks(textOnly(log.chunks), options, maxBytes, "file", "mapping");
   const { figures, curve } = previewOf(analysis);
   const body = include === "curve" ? { ...figures, curve } : figures;
   return Response.json(body, { headers: { "Cache-Control": "no-store" } });

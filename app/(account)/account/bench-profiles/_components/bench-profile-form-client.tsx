@@ -16,6 +16,7 @@ import {
   type BenchProfileInput,
 } from "@/lib/validations/bench-profile";
 import { saveBenchProfile } from "../actions/save-bench-profile";
+import { MappingField } from "./mapping-field-client";
 
 type Name = keyof BenchProfileFormValues;
 const isName = (field: string, values: BenchProfileFormValues): field is Name => Object.hasOwn(values, field);
@@ -55,6 +56,8 @@ export function BenchProfileForm({ id, initial }: { id: number | null; initial: 
     register,
     handleSubmit,
     setError,
+    setValue,
+    watch,
     formState: { errors },
   } = useForm<BenchProfileFormValues, unknown, BenchProfileInput>({
     resolver: zodResolver(benchProfileSchema),
@@ -219,6 +222,20 @@ export function BenchProfileForm({ id, initial }: { id: number | null; initial: 
           Safety: stay within the pack maker’s limits, which may be lower than these. Never leave a pack under test or
           on charge unattended, test on a fire-safe surface, and retire swollen or damaged packs as local rules require.
         </p>
+      </fieldset>
+
+      <fieldset className="card grid gap-4 md:grid-cols-2">
+        <legend className="px-1 text-base font-semibold">Log columns (optional)</legend>
+        <p className="muted text-sm md:col-span-2">
+          If your logger writes no header row, or names its columns in a way Sagline does not recognise, say once which
+          column holds what. Choosing this profile on the submit form then reads your logs with it.
+        </p>
+        <MappingField
+          value={watch("logMapping") ?? ""}
+          onChange={(json) => setValue("logMapping", json, { shouldDirty: true, shouldValidate: true })}
+          error={err("logMapping")}
+          registration={register("logMapping")}
+        />
       </fieldset>
 
       {formError ? <Alert tone="error">{formError}</Alert> : null}

@@ -20,7 +20,7 @@ import { resubmitResult } from "../actions/resubmit-result";
 
 // The same values as a new submission, except that a new log is optional (empty keeps the stored one).
 const resubmitFormSchema = submitResultSchema.extend({
-  log: z.object({ key: z.string().max(300), filename: z.string().max(200) }),
+  log: z.object({ key: z.string().max(300), filename: z.string().max(200), mapping: z.string().max(2100).optional() }),
 });
 const noteSchema = z
   .string()
@@ -63,7 +63,7 @@ function initialValues(r: OwnResult): SubmitResultValues {
       testedOn: m.testedOn ?? "",
       notes: m.notes ?? "",
     },
-    log: { key: "", filename: "" },
+    log: { key: "", filename: "", mapping: "" },
     photoKeys: [],
     declaration: false,
   };
@@ -149,6 +149,7 @@ export function ResubmitForm({
           form={form}
           facts={facts}
           limits={limits}
+          profiles={profiles}
           preview={preview}
           previewState="idle"
           onPreview={setPreview}

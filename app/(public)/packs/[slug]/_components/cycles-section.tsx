@@ -1,68 +1,172 @@
 import { LineFigure } from "@/components/charts/line-figure";
+import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
-import type { CycleSeries } from "@/lib/pack-summary";
+import type { CycleSeries, OnePackSeries, PackAgeing } from "@/lib/pack-summary";
 
-/** Capacity kept and resistance over cycles, with the fitted line and where it reaches 80 %. */
-export function CyclesSection({ cycles, cells }: { cycles: CycleSeries | null; cells: number }) {
-  if (!cycles)
-    return (
-      <p className="muted">Not enough results at different cycle counts (under the same method) to draw a trend yet.</p>
-    );
-  const retained = cycles.points
-    .filter((p) => p.capacityMah !== null)
-    .map((p) => ({ x: p.cycles, y: Math.round(((p.capacityMah as number) / cycles.ratedCapacityMah) * 1000) / 10 }));
-  const t = cycles.trend;
-  const lastX = Math.max(...cycles.points.map((p) => p.cycles));
-  const trendTo = t?.cyclesTo80 && t.cyclesTo80 > 0 ? Math.min(t.cyclesTo80, lastX * 3) : lastX;
-  const trendLine = t
-    ? [0, trendTo].map((x) => ({ x, y: Math.round((t.intercept + t.slopePerCycle * x) * 1000) / 10 }))
-    : [];
-  const resistance = cycles.points
-    .filter((p) => p.dcResistanceMohm !== null)
-    .map((p) => ({ x: p.cycles, y: Math.round(((p.dcResistanceMohm as number) / cells) * 1000) / 1000 }));
+const pct = (x: number) => Math.round(x * 1000) / 10;
+
+/** The fitted line from the first cycle to the last measured — or to the projection where the data supports it. */
+function trendLine(
+  t: { intercept: number; slopePerCycle: number } | null,
+  firstX: number,
+  lastX: number,
+  cyclesTo80: number | null,
+) {
+  if (!t) return [];
+  const to = cyclesTo80 !== null && cyclesTo80 > lastX ? cyclesTo80 : lastX;
+  return [firstX, to].map((x) => ({ x, y: pct(t.intercept + t.slopePerCycle * x) }));
+}
+
+function projectionWords(cyclesTo80: number | null, extrapolated: boolean, note: string): string {
+  if (cyclesTo80 === null) return note;
+  return `80 % at about cycle ${fmt(cyclesTo80, 0)}${extrapolated ? " (projected past the cycles measured, within the range the data supports)" : ""}. ${note}`;
+}
+
+/** One physical pack: the discharges of one result's log against their cycle. */
+function OnePack({ s }: { s: OnePackSeries }) {
+  const r = s.retention;
+  const first = r.points[0]?.cycle ?? 1;
+  const last = r.points[r.points.length - 1]?.cycle ?? first;
+  const t = r.trend;
   return (
-    <div className="space-y-4">
+    <div className="space-y-3" data-testid="ageing-one-pack">
+      <h3 className="text-base">Capacity kept over the cycles of one pack</h3>
       <p className="text-sm">
-        Series: {cycles.label} (results alike except for pack age). Projected cycles to 80 % of rated capacity:{" "}
+        From the log of <a href={`/results/${s.resultId}`}>result #{s.resultId}</a>: {r.points.length} discharges of one
+        physical pack to its cut-off, in one log ({s.groupLabel}). Kept ={" "}
+        {r.reference === "rated" ? "capacity ÷ rated capacity" : "capacity ÷ the first cycle's capacity"}
+        {t
+          ? `; straight-line fit ${fmt(t.slopePerCycle * 100, 3)} % per cycle${t.r2 !== null ? `, r² ${fmt(t.r2, 2)}` : ""}`
+          : ""}
+        .{" "}
         <strong className="num" data-testid="cycles-to-80">
-          {t?.cyclesTo80 != null && t.cyclesTo80 > 0 ? `about ${fmt(t.cyclesTo80, 0)}` : "—"}
+          {projectionWords(r.cyclesTo80, r.extrapolated, r.projectionNote)}
         </strong>
-        {t ? (
+        {s.otherSeries > 0 ? (
           <span className="muted">
             {" "}
-            (straight-line fit, {fmt(t.slopePerCycle * 100, 3)} % per cycle{t.r2 !== null ? `, r² ${fmt(t.r2, 2)}` : ""}
-            ; a projection, not a promise)
+            ({s.otherSeries} other result{s.otherSeries === 1 ? "" : "s"} of this pack also hold several cycles.)
           </span>
-        ) : null}
+        ) : null}{" "}
+        <a href={methodsHref(METHODS_ANCHORS.discharges)}>How it is computed</a>.
+      </p>
+      <LineFigure
+        id="pack-one-kept"
+        title="Capacity kept over the cycles of one pack"
+        xLabel="Cycle in the log"
+        yLabel={r.reference === "rated" ? "Delivered ÷ rated capacity, %" : "Delivered ÷ first cycle, %"}
+        xDigits={0}
+        yDigits={1}
+        tableCaption={`Capacity kept per cycle, result #${s.resultId}`}
+        refLines={[{ y: 80, label: "80 %" }]}
+        series={[
+          {
+            id: "kept",
+            label: "measured",
+            points: r.points.map((p) => ({ x: p.cycle, y: pct(p.retained) })),
+            mode: "points",
+          },
+          ...(t
+            ? [
+                {
+                  id: "fit",
+                  label: "fitted line",
+                  points: trendLine(t, first, last, r.cyclesTo80),
+                  styleIndex: 1,
+                },
+              ]
+            : []),
+        ]}
+      />
+    </div>
+  );
+}
+
+/** Results at different cycle counts: separate tests, possibly of different packs — said plainly. */
+function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
+  const retained = c.points.flatMap((p) =>
+    p.capacityMah === null ? [] : [{ x: p.cycles, y: pct(p.capacityMah / c.ratedCapacityMah) }],
+  );
+  const xs = c.points.map((p) => p.cycles);
+  const resistance = c.points.flatMap((p) =>
+    p.dcResistanceMohm === null ? [] : [{ x: p.cycles, y: Math.round((p.dcResistanceMohm / cells) * 1000) / 1000 }],
+  );
+  const t = c.trend;
+  return (
+    <div className="space-y-3" data-testid="ageing-across-results">
+      <h3 className="text-base">Results at different cycle counts</h3>
+      <p className="text-sm">
+        Series: {c.label} (results alike except for pack age). <strong>Each point is a separate test</strong>, possibly
+        of a different physical pack of this model, at the cycle count its tester stated — not one pack&apos;s ageing.
+        The line through them is a hint, not a measurement
+        {t
+          ? ` (straight-line fit, ${fmt(t.slopePerCycle * 100, 3)} % per cycle${t.r2 !== null ? `, r² ${fmt(t.r2, 2)}` : ""})`
+          : ""}
+        .{" "}
+        <span className="muted">
+          {projectionWords(c.projection.cyclesTo80, c.projection.extrapolated, c.projection.projectionNote)}
+        </span>
       </p>
       <div className="grid gap-4 lg:grid-cols-2">
         <LineFigure
           id="pack-kept"
-          title="Capacity kept over cycles"
-          xLabel="Cycles before the test"
+          title="Capacity of results at different cycle counts"
+          xLabel="Cycles before the test (stated)"
           yLabel="Delivered ÷ rated capacity, %"
           xDigits={0}
           yDigits={1}
-          tableCaption="Capacity kept over cycles"
+          tableCaption="Capacity of results at different cycle counts"
           refLines={[{ y: 80, label: "80 %" }]}
           series={[
-            { id: "retained", label: "measured", points: retained, mode: "points" },
-            ...(trendLine.length ? [{ id: "trend", label: "fitted line", points: trendLine, styleIndex: 1 }] : []),
+            { id: "retained", label: "one result", points: retained, mode: "points" },
+            ...(t
+              ? [
+                  {
+                    id: "trend",
+                    label: "fitted line",
+                    points: trendLine(t, Math.min(...xs), Math.max(...xs), c.projection.cyclesTo80),
+                    styleIndex: 1,
+                  },
+                ]
+              : []),
           ]}
         />
         <LineFigure
           id="pack-dcr"
-          title="DC resistance over cycles"
-          xLabel="Cycles before the test"
+          title="DC resistance of results at different cycle counts"
+          xLabel="Cycles before the test (stated)"
           yLabel="DC resistance"
           yUnit="r"
           cells={cells}
           xDigits={0}
           yDigits={2}
-          tableCaption="DC resistance over cycles"
-          series={[{ id: "r", label: "measured", points: resistance, mode: "points", styleIndex: 2 }]}
+          tableCaption="DC resistance of results at different cycle counts"
+          series={[{ id: "r", label: "one result", points: resistance, mode: "points", styleIndex: 2 }]}
         />
       </div>
+    </div>
+  );
+}
+
+/** A pack's ageing figures: one pack's series from a multi-cycle log first; results across cycle counts beside it. */
+export function CyclesSection({ ageing, cells }: { ageing: PackAgeing; cells: number }) {
+  if (!ageing.onePack && !ageing.acrossResults)
+    return (
+      <p className="muted">
+        No published log holds several cycles of this pack yet, and there are not enough results at different cycle
+        counts (under the same method) to show a trend.
+      </p>
+    );
+  return (
+    <div className="space-y-8">
+      {ageing.onePack ? (
+        <OnePack s={ageing.onePack} />
+      ) : (
+        <p className="muted text-sm">
+          No published log holds several cycles of one pack yet: a log of many cycles gives this pack&apos;s own ageing.
+        </p>
+      )}
+      {ageing.acrossResults ? <AcrossResults c={ageing.acrossResults} cells={cells} /> : null}
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import { SummaryValue } from "@/components/summary-value";
+import { LABEL_RATIO_LABELS, METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmt, fmtC, fmtLabelledC, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { GroupFigures } from "@/lib/pack-summary";
 
@@ -40,7 +41,15 @@ export function GroupFiguresTable({
               <th scope="col">
                 Sag-limited C <span className="muted font-normal">(estimate)</span>
               </th>
-              <th scope="col">Label ratio</th>
+              <th scope="col">
+                Label ratio <span className="muted font-normal">(estimate ÷ label)</span>
+              </th>
+              <th scope="col">
+                Sustained C <span className="muted font-normal">(measured, highest)</span>
+              </th>
+              <th scope="col">
+                Label ratio <span className="muted font-normal">(measured ÷ label)</span>
+              </th>
               <th scope="col">Delivered</th>
               <th scope="col">Capacity ratio</th>
               <th scope="col">Hold voltage</th>
@@ -49,7 +58,6 @@ export function GroupFiguresTable({
                 At 25 °C <span className="muted font-normal">(estimate)</span>
               </th>
               <th scope="col">Temp. rise</th>
-              <th scope="col">Sustained C</th>
             </tr>
           </thead>
           <tbody>
@@ -67,6 +75,10 @@ export function GroupFiguresTable({
                 </td>
                 <td>
                   <SummaryValue s={g.figures.labelRatio} digits={2} />
+                </td>
+                <td className="num">{g.sustainedC === null ? <span className="muted">—</span> : fmtC(g.sustainedC)}</td>
+                <td>
+                  <SummaryValue s={g.figures.sustainedLabelRatio} digits={2} />
                 </td>
                 <td>
                   <SummaryValue s={g.figures.capacityMah} digits={0} unit="mAh" />
@@ -86,17 +98,29 @@ export function GroupFiguresTable({
                 <td>
                   <SummaryValue s={g.figures.temperatureRiseC} digits={1} q="dtemp" />
                 </td>
-                <td className="num">{g.sustainedC === null ? <span className="muted">—</span> : fmtC(g.sustainedC)}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
-      <p className="muted text-xs">
-        DC resistance is measured on the pack and shown per cell (the pack&apos;s ÷ {cells} cells) unless you choose per
-        pack under Units; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE} — always read it beside the raw
-        value. Definitions: <a href="/methods#figures">methods</a>.
-      </p>
+      <div className="muted space-y-1 text-xs">
+        <p>
+          <strong>{RATING_LABELS.estimate}</strong> is an estimate from a resistance, not a tested rate: the current at
+          which the pack would sag from 3.7 V nominal to a 3.3 V floor per cell through the resistance read 10 s after
+          the load edge, at each test&apos;s pack temperature (each result lists its own assumptions).{" "}
+          <a href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>Definition</a>. {LABEL_RATIO_LABELS.estimate}.
+        </p>
+        <p>
+          <strong>{RATING_LABELS.measured}</strong> is measured: the current a run actually drew to its cut-off while
+          holding the floor and staying under the stop temperature; a group shows the highest among its approved
+          results. <a href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</a>. {LABEL_RATIO_LABELS.measured}.
+        </p>
+        <p>
+          DC resistance is measured on the pack and shown per cell (the pack&apos;s ÷ {cells} cells) unless you choose
+          per pack under Units; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE} — always read it beside
+          the raw value. Definitions: <a href={methodsHref(METHODS_ANCHORS.figures)}>methods</a>.
+        </p>
+      </div>
     </div>
   );
 }

@@ -30,9 +30,10 @@ export function ResultsList({
           </div>
           <p className="muted text-xs">{r.groupLabel}</p>
           <p className="num text-sm">
-            {fmt(r.capacityMah, 0, "mAh")} delivered · ratio {fmtRatio(r.capacityRatio)} · {fmtC(r.sagLimitedC)}{" "}
-            sag-limited · DC{" "}
+            {fmt(r.capacityMah, 0, "mAh")} delivered · capacity ratio {fmtRatio(r.capacityRatio)} · sustained{" "}
+            {fmtC(r.sustainedCMeasured)} (measured) · sag-limited {fmtC(r.sagLimitedC)} (estimate) · DC{" "}
             <Qty q="r" v={r.dcResistanceMohm === null ? null : r.dcResistanceMohm / cells} digits={2} cells={cells} />
+            {r.retention ? ` · ${r.retention.points.length} cycles in one log` : ""}
           </p>
           <details>
             <summary className="cursor-pointer text-sm">Method card</summary>

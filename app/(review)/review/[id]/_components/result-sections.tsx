@@ -2,7 +2,12 @@
 // flags and the contributor's record.
 import Link from "next/link";
 import type { getReviewDetail, GroupMedians } from "@/db/queries/review";
+import { DischargesTable } from "@/components/analysis/discharges-table";
+import { RatingFigures } from "@/components/analysis/rating-figures";
+import { RetentionSummary } from "@/components/analysis/retention-summary";
 import { labelForGroupKey } from "@/lib/analysis";
+import { describeMapping } from "@/lib/column-mapping-form";
+import { RATING_LABELS } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
 import { computedResistanceMethodLabel, flagOutcomeLabels, loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
 import { reviewStatusLabels } from "@/lib/labels";
@@ -27,8 +32,9 @@ export function GroupComparison({ d }: { d: Detail }) {
   const r = d.result;
   const compare: [string, number | null, keyof Omit<GroupMedians, "n">, number, string][] = [
     ["Delivered capacity", r.capacityMah, "capacityMah", 0, "mAh"],
-    ["Label ratio", r.labelRatio, "labelRatio", 2, ""],
-    ["Sag-limited C", r.sagLimitedC, "sagLimitedC", 1, "C"],
+    ["Label ratio (estimate ÷ label)", r.labelRatio, "labelRatio", 2, ""],
+    [RATING_LABELS.estimate, r.sagLimitedC, "sagLimitedC", 1, "C"],
+    [RATING_LABELS.measured, r.sustainedCMeasured, "sustainedCMeasured", 1, "C"],
     ["DC resistance", r.dcResistanceMohm, "dcResistanceMohm", 1, "mΩ"],
   ];
   return (
@@ -87,6 +93,7 @@ export function MethodAndFigures({ d }: { d: Detail }) {
             ["Sample rate", fmt(r.sampleRateHz, 1, "Hz")],
             ["Cycles before test", fmt(r.cyclesBeforeTest)],
             ["Log", `${r.logFilename} · sha256 ${r.logSha256.slice(0, 12)}…`, "text"],
+            ["Log columns", r.logMapping ? `mapped: ${describeMapping(r.logMapping)}` : "detected", "text"],
           ]}
         />
         {r.notes ? <p className="text-sm">{r.notes}</p> : null}
@@ -107,11 +114,23 @@ export function MethodAndFigures({ d }: { d: Detail }) {
             ],
             ["Resistance at 25 °C (estimate)", fmt(f.resistanceAt25CMohm, 1, "mΩ")],
             ["Temperature start → peak", `${fmt(f.startTemperatureC, 1)} → ${fmt(f.peakTemperatureC, 1, "°C")}`],
-            ["Sag-limited C", fmt(f.sagLimitedC, 1, "C")],
-            ["Label ratio", fmt(f.labelRatio, 2)],
             ["Cells seen in log", fmt(f.cells)],
+            ["Median sample interval", fmt(f.sampleIntervalS ?? null, 2, "s")],
           ]}
         />
+        <RatingFigures f={f} />
+        {f.warnings.length > 0 ? (
+          <ul className="list-disc space-y-1 pl-5 text-sm" data-testid="review-warnings" aria-label="Warnings">
+            {f.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        ) : null}
+      </section>
+      <section className="card space-y-3 md:col-span-2" aria-labelledby="discharges-h">
+        <h2 id="discharges-h">Discharges</h2>
+        <DischargesTable discharges={f.discharges} headline={f.headlineDischarge} />
+        <RetentionSummary retention={f.retention} />
       </section>
     </div>
   );

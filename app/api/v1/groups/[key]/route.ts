@@ -13,7 +13,7 @@ export const GET = apiGet<{ key: string }>(async (req, params) => {
   const samples = await cachedGroupSamples(key, filters, await packWhere(filters));
   const packs = aggregateByPack(samples).map(publishedAggregate);
   return apiJson(req, groupItem, {
-    data: { key, label: groupLabel(samples[0]), resultCount: samples.length, packCount: packs.length, packs },
+    data: { key, label: groupLabel(key, samples[0]), resultCount: samples.length, packCount: packs.length, packs },
     meta: { aggregate: "median of published results per pack, with n, min and max" },
     links: { results: `/api/v1/results?group=${key}`, packs: `/api/v1/packs?group=${key}` },
   });

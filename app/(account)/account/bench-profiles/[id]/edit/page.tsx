@@ -27,6 +27,7 @@ function toFormValues(p: BenchProfile): BenchProfileFormValues {
     defaultCutoffVPerCell: str(p.defaultCutoffVPerCell),
     defaultStopTemperatureC: str(p.defaultStopTemperatureC),
     defaultSampleRateHz: str(p.defaultSampleRateHz),
+    logMapping: p.logMapping ? JSON.stringify(p.logMapping) : "",
   };
 }
 
