@@ -9,7 +9,7 @@ test("sign in through the caught mail, create and edit a bench profile, sign out
   // A signed-out visitor is sent to sign in, and the link brings them back.
   await page.goto("/account/bench-profiles");
   await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Faccount%2Fbench-profiles$/);
-  await page.getByLabel("E-mail address").fill("not-an-address");
+  await page.getByLabel("E-mail address").fill("not an address");
   await page.getByRole("button", { name: "E-mail me a sign-in link" }).click();
   await expect(page.getByText("Enter an e-mail address like name@example.com.")).toBeVisible();
   await requestLink(page, email, "/sign-in?callbackUrl=%2Faccount%2Fbench-profiles");
