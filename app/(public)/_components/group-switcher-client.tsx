@@ -32,8 +32,8 @@ export function GroupSwitcher({ groups, target }: { groups: Group[]; target: str
     }
   };
   return (
-    <div className="flex flex-wrap items-end gap-x-6 gap-y-2 text-sm">
-      <div className="flex flex-wrap items-center gap-2">
+    <div className="space-y-2 text-sm">
+      <div className="flex max-w-full flex-wrap items-center gap-2">
         <label htmlFor="group-switcher" className="font-medium">
           Like-for-like group
         </label>

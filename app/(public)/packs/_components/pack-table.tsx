@@ -81,7 +81,7 @@ export const PACK_COLUMNS: Column[] = [
     id: "labelRatio",
     header: (
       <>
-        Label ratio<span className="block text-xs font-normal">estimate ÷ label</span>
+        Label ratio<span className="block text-xs font-normal">estimate</span>
       </>
     ),
     name: "Label ratio (estimate ÷ label)",

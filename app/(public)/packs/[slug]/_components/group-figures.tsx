@@ -39,23 +39,23 @@ export function GroupFiguresTable({
             <tr>
               <th scope="col">Like-for-like group</th>
               <th scope="col">
-                Sag-limited C <span className="muted font-normal">(estimate)</span>
+                Sag-limited C <small className="font-normal">estimate</small>
               </th>
               <th scope="col">
-                Label ratio <span className="muted font-normal">(estimate ÷ label)</span>
+                Label ratio <small className="font-normal">estimate ÷ label</small>
               </th>
               <th scope="col">
-                Sustained C <span className="muted font-normal">(measured, highest)</span>
+                Sustained C <small className="font-normal">measured, highest</small>
               </th>
               <th scope="col">
-                Label ratio <span className="muted font-normal">(measured ÷ label)</span>
+                Label ratio <small className="font-normal">measured ÷ label</small>
               </th>
               <th scope="col">Delivered</th>
               <th scope="col">Capacity ratio</th>
               <th scope="col">Hold voltage</th>
               <th scope="col">DC resistance</th>
               <th scope="col">
-                At 25 °C <span className="muted font-normal">(estimate)</span>
+                At 25 °C <small className="font-normal">estimate</small>
               </th>
               <th scope="col">Temp. rise</th>
             </tr>
