@@ -100,6 +100,9 @@ export default defineConfig([
           ignoreRestSiblings: true,
         },
       ],
+      // Public pages with static islands (components/static-island.tsx) are reached by whole page loads, which
+      // bring their markup once; a client-side navigation would have to load them again.
+      "@next/next/no-html-link-for-pages": "off",
       // Says only that the React Compiler would skip a component using react-hook-form's watch() or TanStack
       // Table; this project does not run the compiler.
       "react-hooks/incompatible-library": "off",

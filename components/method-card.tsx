@@ -1,4 +1,5 @@
 import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
+import { Qty } from "@/components/quantity";
 import { fmt } from "@/lib/format";
 import { loadModeLabels } from "@/lib/labels";
 import type { PublicResultRow } from "@/lib/pack-summary";
@@ -21,12 +22,12 @@ export type MethodCardData = Pick<
 
 /** The method attached to every number: how the result was taken. */
 export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?: boolean }) {
-  const rows: [string, string][] = [
-    ["Ambient", fmt(m.ambientTemperatureC, 1, "°C")],
-    ["Pack at start", fmt(m.packStartTemperatureC, 1, "°C")],
+  const rows: [string, React.ReactNode][] = [
+    ["Ambient", <Qty key="a" q="temp" v={m.ambientTemperatureC} digits={1} />],
+    ["Pack at start", <Qty key="p" q="temp" v={m.packStartTemperatureC} digits={1} />],
     ["Load", `${loadModeLabels[m.loadMode].toLowerCase()}, ${fmt(m.loadCurrentA, 1, "A")} (${fmt(m.loadRateC, 1)}C)`],
     ["Cut-off", fmt(m.cutoffVPerCell, 2, "V per cell")],
-    ["Stop temperature", fmt(m.stopTemperatureC, 0, "°C")],
+    ["Stop temperature", <Qty key="s" q="temp" v={m.stopTemperatureC} digits={0} />],
     ["Resistance method", RESISTANCE_METHODS[m.resistanceMethod as ResistanceMethod] ?? m.resistanceMethod],
     ["Cycles before test", String(m.cyclesBeforeTest)],
   ];

@@ -1,9 +1,27 @@
 import { fmt } from "@/lib/format";
+import type { Quantity } from "@/lib/units";
+import { Qty } from "./quantity";
 
 type Summary = { median: number; n: number; min: number; max: number } | null;
 
-/** A group figure: the median, with n and the spread (min–max) underneath. Missing shows as "—", never 0. */
-export function SummaryValue({ s, digits = 1, unit = "" }: { s: Summary; digits?: number; unit?: string }) {
+/** A group figure: the median, with n and the spread (min–max) underneath. Missing shows as "—", never 0. A
+ * quantity the reader may see in other units (`q`) is marked up for conversion; `divide` turns a pack's
+ * figure into a per-cell one (resistances are stored per pack, shown per cell by default). */
+export function SummaryValue({
+  s,
+  digits = 1,
+  unit = "",
+  q,
+  cells,
+  divide = 1,
+}: {
+  s: Summary;
+  digits?: number;
+  unit?: string;
+  q?: Quantity;
+  cells?: number;
+  divide?: number;
+}) {
   if (!s)
     return (
       <span className="muted" title="no value in this group">
@@ -11,14 +29,23 @@ export function SummaryValue({ s, digits = 1, unit = "" }: { s: Summary; digits?
       </span>
     );
   return (
-    <span className="num whitespace-nowrap">
-      {fmt(s.median, digits, unit)}
-      <span className="muted block text-xs">n={s.n}</span>
+    <span className="sv">
+      {q ? <Qty q={q} v={s.median / divide} digits={digits} cells={cells} /> : fmt(s.median, digits, unit)}
+      <small>n={s.n}</small>
       {/* The spread on a line of its own keeps wide tables narrow enough for a desktop screen. */}
       {s.n > 1 ? (
-        <span className="muted block text-xs">
-          {fmt(s.min, digits)}–{fmt(s.max, digits)}
-        </span>
+        <small>
+          {q ? (
+            <>
+              <Qty q={q} v={s.min / divide} digits={digits} cells={cells} bare />–
+              <Qty q={q} v={s.max / divide} digits={digits} cells={cells} bare />
+            </>
+          ) : (
+            <>
+              {fmt(s.min, digits)}–{fmt(s.max, digits)}
+            </>
+          )}
+        </small>
       ) : null}
     </span>
   );

@@ -5,8 +5,10 @@ import { lttb, type CurvePoint, type Discharge } from "@/lib/analysis";
 /** One prepared point: capacity delivered (mAh), voltage per cell (V), time (s), pack temperature (°C). */
 export type ChartPoint = { mah: number; vpc: number; s: number; tc: number | null };
 
-export const PACK_PAGE_CURVE_POINTS = 120;
-export const COMPARE_CURVE_POINTS = 120;
+// Sixty points draw a discharge curve without a visible corner at any page width (largest-triangle
+// downsampling keeps the knee); more only adds bytes to the page.
+export const PACK_PAGE_CURVE_POINTS = 60;
+export const COMPARE_CURVE_POINTS = 60;
 
 const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
 

@@ -4,7 +4,18 @@ const MISSING = "—";
 export function fmt(value: number | null | undefined, digits = 0, unit = ""): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   const s = value.toLocaleString("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits });
-  return unit ? `${s} ${unit}` : s;
+  // C ratings are written as the trade prints them, "42.3C"; every other unit after a space ("1,300 mAh").
+  return unit === "C" ? `${s}C` : unit ? `${s} ${unit}` : s;
+}
+
+/** A C rating, one spelling everywhere: "42.3C" (no space, as the trade prints it on labels). */
+export function fmtC(value: number | null | undefined, digits = 1): string {
+  return fmt(value, digits, "C");
+}
+
+/** A labelled C as printed: whole numbers without decimals ("75C"), others with one ("37.5C"). */
+export function fmtLabelledC(value: number): string {
+  return fmtC(value, Number.isInteger(value) ? 0 : 1);
 }
 
 export function packTitle(p: { makerName: string; model: string }): string {
@@ -17,8 +28,8 @@ export function labelSpec(p: {
   labelledContinuousC: number;
   labelledBurstC: number | null;
 }): string {
-  const burst = p.labelledBurstC ? `/${fmt(p.labelledBurstC)}C` : "";
-  return `${p.cellsInSeries}S ${fmt(p.ratedCapacityMah)} mAh ${fmt(p.labelledContinuousC)}C${burst}`;
+  const burst = p.labelledBurstC ? `/${fmtLabelledC(p.labelledBurstC)}` : "";
+  return `${p.cellsInSeries}S ${fmt(p.ratedCapacityMah)} mAh ${fmtLabelledC(p.labelledContinuousC)}${burst}`;
 }
 
 /** "1,234 mAh" style, or the em dash; ratios as 0.82. */

@@ -3,10 +3,10 @@
 // same schema leniently: each parameter is checked on its own with its own schema, and an unreadable one falls
 // back to its default, so a hand-edited URL still shows a table.
 import type { z } from "zod";
-import { packListShape, type PackSortKey } from "@/lib/api-contract/queries";
+import { PACK_SORT_KEYS, packListShape, type PackSortKey } from "@/lib/api-contract/queries";
 import { DEFAULT_PAGE_SIZE, PAGE_SIZES } from "@/lib/api-contract/params";
 
-export { PAGE_SIZES, type PackSortKey };
+export { PACK_SORT_KEYS, PAGE_SIZES, type PackSortKey };
 
 export type PackParams = {
   q: string;

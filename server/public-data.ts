@@ -6,7 +6,7 @@ import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup, type RankingRating } from "@/db/queries/groups";
 import { listFeaturedCharts } from "@/db/queries/open-data/charts";
-import { listGroupSamples } from "@/db/queries/open-data/groups";
+import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/groups";
 import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
 import type { PackWhere, ResultWhere } from "@/db/queries/open-data/where";
 import { getPackDetail } from "@/db/queries/pack-detail";
@@ -70,6 +70,12 @@ export function cachedComparison(slugs: string[], group: string | null) {
 
 /** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `packs`. */
 export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], { tags: [t.packs], revalidate });
+
+/** Per group, maker and pack size, how many published results (the chart builder offers only what has data). */
+export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-coverage"], {
+  tags: [t.results, t.packs],
+  revalidate,
+});
 
 // ── The public API's reads (app/api/v1) and chart data. Filters are validated by zod before they reach here.
 // The cache keeps one entry per key on disk, and anyone can make up queries, so only bounded key spaces are

@@ -1,6 +1,5 @@
 // Every discharge of a log, in log order, with the one the headline figures describe marked. Shared by
 // /analyse, /submit, the review page and the result page (a plain component: no state, no effects).
-import Link from "next/link";
 import type { Discharge } from "@/lib/analysis";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
@@ -39,9 +38,9 @@ export function DischargesTable({
     <div className="space-y-2" data-testid="discharges">
       <p className="text-sm" data-testid="headline-discharge">
         {headlineWords(discharges, head)}{" "}
-        <Link href={methodsHref(METHODS_ANCHORS.discharges)} className="text-inherit underline decoration-dotted">
+        <a href={methodsHref(METHODS_ANCHORS.discharges)} className="text-inherit underline decoration-dotted">
           How discharges are split
-        </Link>
+        </a>
       </p>
       {discharges.length > 0 ? (
         <div className="-mx-1 overflow-x-auto px-1" tabIndex={0} role="region" aria-label={caption}>

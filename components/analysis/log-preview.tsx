@@ -1,9 +1,9 @@
 // What the measurement core made of a log: every discharge (and which one the headline figures describe),
 // the figures with their units and links to their definitions on /methods, both ratings saying what they
-// are, the warnings in words, the checks against the method card, and the curve.
-import Link from "next/link";
-import { LogCurveChart } from "@/components/charts/log-curve-chart";
+// are, the warnings in words, the checks against the method card, and the curve (stacked panels).
+import { LogFigure } from "@/components/charts/log-figure";
 import type { CardCheck, CurvePoint, PublicFigures } from "@/lib/analysis";
+import { prepareTimeCurve } from "@/lib/curves";
 import { METHODS_ANCHORS, methodsHref, type MethodsAnchor } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
 import { DischargesTable } from "./discharges-table";
@@ -129,22 +129,29 @@ export function LogPreview({
         {rows(figures).map((r) => (
           <div key={r.label} className="flex flex-col border-b border-ink/10 pb-1 dark:border-night-line">
             <dt className="muted">
-              <Link
+              <a
                 href={methodsHref(r.anchor)}
                 className="text-inherit underline decoration-dotted underline-offset-2 hover:text-cell-600 dark:hover:text-cell-400"
               >
                 {r.label}
-              </Link>
+              </a>
             </dt>
             <dd className="num">{r.value}</dd>
           </div>
         ))}
       </dl>
       <RatingFigures f={figures} />
-      <LogCurveChart points={curve} />
+      <LogFigure
+        id="log-preview-chart"
+        title="Voltage, current and temperature over time"
+        points={prepareTimeCurve(curve, figures.cells ?? 1, 300).map((q) => ({ s: q.s, v: q.vpc, a: q.a, t: q.tc }))}
+        perCell={figures.cells !== null}
+        cells={figures.cells ?? undefined}
+        caption="The log"
+      />
       <p className="muted text-xs">
-        How each figure is computed: <Link href="/methods">Methods</Link>. Figures describe this log only; they are not
-        a rating or a safety assessment of the pack.
+        How each figure is computed: <a href="/methods">Methods</a>. Figures describe this log only; they are not a
+        rating or a safety assessment of the pack.
       </p>
     </div>
   );

@@ -1,7 +1,6 @@
 // The two ratings of one log, each saying what it is: the sag-limited C ESTIMATE with its assumptions one
 // click away ("i"), and the sustained C MEASURED with its rule (or why the run has none), each with the
 // label ratio that divides it. Works without JavaScript (<details>).
-import Link from "next/link";
 import type { Figures } from "@/lib/analysis";
 import {
   estimateAssumptions,
@@ -54,9 +53,9 @@ export function RatingFigures({ f }: { f: RatingFiguresInput }) {
     <dl className="grid gap-x-6 gap-y-3 text-sm sm:grid-cols-2" data-testid="ratings">
       <div className="border-b border-ink/10 pb-1 dark:border-night-line">
         <dt className="muted">
-          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)} className={link}>
+          <a href={methodsHref(METHODS_ANCHORS.sagLimitedC)} className={link}>
             {RATING_LABELS.estimate}
-          </Link>
+          </a>
         </dt>
         <dd className="num flex flex-wrap items-baseline gap-2" data-testid="rating-estimate">
           <span>{fmt(estimate, 1, "C")}</span>
@@ -72,9 +71,9 @@ export function RatingFigures({ f }: { f: RatingFiguresInput }) {
       </div>
       <div className="border-b border-ink/10 pb-1 dark:border-night-line">
         <dt className="muted">
-          <Link href={methodsHref(METHODS_ANCHORS.sustainedC)} className={link}>
+          <a href={methodsHref(METHODS_ANCHORS.sustainedC)} className={link}>
             {RATING_LABELS.measured}
-          </Link>
+          </a>
         </dt>
         <dd className="num flex flex-wrap items-baseline gap-2" data-testid="rating-measured">
           <span>{fmt(f.sustainedCMeasured ?? null, 1, "C")}</span>

@@ -1,4 +1,3 @@
-import Link from "next/link";
 import { ATTRIBUTION, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 export function SiteFooter() {
@@ -16,14 +15,14 @@ export function SiteFooter() {
           <p className="muted">
             Sagline reports measurements; it does not certify packs. Charging and high-current use of lithium packs can
             start fires: follow the maker’s instructions, never charge unattended, and retire swollen packs.{" "}
-            <Link href="/methods#safety">Safety notes</Link>.
+            <a href="/methods#safety">Safety notes</a>.
           </p>
         </div>
         <nav aria-label="Footer" className="flex flex-wrap gap-x-4 gap-y-1 sm:justify-end">
-          <Link href="/methods">Methods</Link>
-          <Link href="/data">Open data &amp; API</Link>
-          <Link href="/charts">Charts</Link>
-          <Link href="/account">Account</Link>
+          <a href="/methods">Methods</a>
+          <a href="/data">Open data &amp; API</a>
+          <a href="/charts">Charts</a>
+          <a href="/account">Account</a>
         </nav>
       </div>
     </footer>

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { UnitsControl } from "@/components/units/units-control-client";
 import { Logo } from "./logo";
 
 const nav = [
@@ -10,35 +10,47 @@ const nav = [
   { href: "/data", label: "Data" },
 ];
 
+// Wide screens show the links in a row; below 768 px they fold into a menu that lists every one of them
+// (a <details>, so it opens without a script). The reader's units sit beside them.
 export function SiteHeader({ accountSlot }: { accountSlot?: React.ReactNode }) {
   return (
     <header className="border-b border-ink/10 bg-paper-raised/80 backdrop-blur dark:border-night-line dark:bg-night-raised/80">
-      <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
-        <Link href="/" className="text-ink no-underline hover:no-underline dark:text-paper" aria-label="Sagline home">
+      <div className="mx-auto flex max-w-page items-center gap-x-4 gap-y-2 px-4 py-3">
+        <a href="/" className="text-ink no-underline hover:no-underline dark:text-paper" aria-label="Sagline home">
           <Logo />
-        </Link>
-        <nav
-          aria-label="Main"
-          className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto text-sm sm:order-none sm:w-auto"
-        >
+        </a>
+        <nav aria-label="Main" className="hidden gap-1 text-sm md:flex">
           {nav.map((item) => (
-            <Link
-              key={item.href}
-              href={item.href}
-              className="whitespace-nowrap rounded px-2 py-1 text-ink-soft no-underline hover:bg-paper-sunk hover:text-ink hover:no-underline dark:text-paper/75 dark:hover:bg-night-sunk dark:hover:text-paper"
-            >
+            <a key={item.href} href={item.href} className="nav-link">
               {item.label}
-            </Link>
+            </a>
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-2 text-sm">
-          <Link
-            href="/submit"
-            className="rounded-md bg-charge-500 px-3 py-1.5 font-medium text-night no-underline hover:bg-charge-400 hover:no-underline"
-          >
-            Submit a result
-          </Link>
+          <div className="hidden md:block">
+            <UnitsControl convert />
+          </div>
+          <a href="/submit" className="btn-charge whitespace-nowrap">
+            Submit<span className="hidden sm:inline"> a result</span>
+          </a>
           {accountSlot}
+          <details className="menu md:hidden" data-testid="site-menu">
+            <summary className="btn-sm">Menu</summary>
+            <div className="menu-panel w-60 space-y-3">
+              <nav aria-label="Main menu">
+                <ul className="space-y-1">
+                  {nav.map((item) => (
+                    <li key={item.href}>
+                      <a href={item.href} className="nav-link block">
+                        {item.label}
+                      </a>
+                    </li>
+                  ))}
+                </ul>
+              </nav>
+              <UnitsControl />
+            </div>
+          </details>
         </div>
       </div>
     </header>

@@ -1,4 +1,5 @@
 // The page frame every audience shares: skip link, header (with the account menu), main, footer.
+import { ChartBehaviour } from "@/components/charts/chart-behaviour-client";
 import { AccountMenu } from "./account-menu-client";
 import { SiteFooter } from "./site-footer";
 import { SiteHeader } from "./site-header";
@@ -19,6 +20,7 @@ export function SiteShell({ children }: { children: React.ReactNode }) {
         {children}
       </main>
       <SiteFooter />
+      <ChartBehaviour />
     </>
   );
 }

@@ -77,8 +77,22 @@ export const groupListQuery = z.object({
 /** GET /api/v1/groups/{key}: the pack filters narrow the packs compared. */
 export const groupQuery = withRanges(packFilters);
 
-/** GET /data/download/{file}: the pack filters; results also by pack and group. */
-export const downloadQuery = withRanges(z.object({ ...packFilterShape, pack: packFilter, group: groupFilter }));
+/** The reader's units for CSV downloads (lib/units.ts); JSON files and the API stay SI. */
+const unitsParam = z
+  .string()
+  .regex(
+    /^(C|F|g|oz|cell|pack)(,(C|F|g|oz|cell|pack))*$/,
+    "units takes C or F, g or oz, cell or pack, comma-separated.",
+  )
+  .optional()
+  .describe(
+    "CSV only: the reader's units, e.g. F,oz,pack (°F, ounces, per-pack voltages and resistances); each converted column is named with its unit. JSON files and the API stay SI.",
+  );
+
+/** GET /data/download/{file}: the pack filters; results also by pack and group; CSV in the reader's units. */
+export const downloadQuery = withRanges(
+  z.object({ ...packFilterShape, pack: packFilter, group: groupFilter, units: unitsParam }),
+);
 
 const DOWNLOAD_FILES = [
   "makers.csv",

@@ -1,10 +1,19 @@
 // What one chart draws, prepared from its state (server/open-data/load-chart-data.ts): one like-for-like
-// group at a time, saying what was left out and why.
+// group at a time, saying what was left out and why. The drawings in components/charts/draw/ take these shapes.
 import type { ChartRating, ChartState } from "./chart-state";
 
-type LabelPoint = { label: string; labelledC: number; measuredC: number; n: number };
+/** One pack on the label check: its labelled C and the rating drawn up the y axis (medians in the group). */
+export type LabelCheckPoint = {
+  /** The pack's slug (ids and links). */
+  id: string;
+  /** "Maker Model". */
+  label: string;
+  labelledC: number;
+  ratingC: number;
+  n: number;
+};
 export type CurveLine = { label: string; points: { capacityPercent: number; voltagePerCellV: number }[] };
-type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };
+export type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };
 
 export type ChartData = {
   state: ChartState;
@@ -13,12 +22,15 @@ export type ChartData = {
   groupLabel: string;
   counts: { packs: number; results: number };
   leftOut: string[];
-  labelCheck?: LabelPoint[];
+  labelCheck?: LabelCheckPoint[];
   curves?: CurveLine[];
+  /** Curves of one pack size drawn per pack (the reader's units, `units: "pack"`): voltages are the pack's. */
+  curvesPerPack?: { cells: number };
   ranking?: RankingBar[];
 };
 
-export const MAX_CURVES = 8;
+/** One line style each (components/charts/palette.ts has seven). */
+export const MAX_CURVES = 7;
 
 /** How a drawing names its rating: the label check's legend and y axis, the ranking's x axis. */
 export const CHART_RATING_WORDS: Record<

@@ -1,6 +1,7 @@
 // A chart's full state travels in its URL (base64url JSON), so a published chart never changes when
 // defaults change later. Version 1 of the state; a new version gets a new literal and its own reader.
 import { z } from "zod";
+import { parseUnitsParam, writeUnitsParam } from "../units";
 import { GROUP_KEY_PATTERN, SLUG_PATTERN } from "@/lib/api-contract/params";
 
 export const CHART_KINDS = ["label-check", "curves", "maker-ranking"] as const;
@@ -27,6 +28,11 @@ export const chartState = z.object({
   rating: z.enum(CHART_RATINGS).optional(),
   title: z.string().trim().min(1, "Give the chart a title.").max(120),
   note: z.string().trim().max(400).optional(),
+  /** The reader's units (lib/units.ts), e.g. "pack": discharge curves of one pack size per pack instead of per cell. */
+  units: z
+    .string()
+    .regex(/^[A-Za-z,]{1,20}$/, "Units are words like F, oz, pack.")
+    .optional(),
 });
 export type ChartState = z.infer<typeof chartState>;
 
@@ -54,6 +60,7 @@ export function encodeChartState(state: ChartState): string {
     rating: s.rating,
     title: s.title,
     note: s.note || undefined,
+    units: s.units ? writeUnitsParam(parseUnitsParam(s.units)) || undefined : undefined,
   };
   return toBase64Url(JSON.stringify(ordered));
 }

@@ -12,6 +12,7 @@ import { DATA_LICENCE_URL, DATA_SCHEMA_VERSION, licenceInfo } from "@/lib/open-d
 import { flatRecord, nestedRecord } from "@/lib/open-data/records";
 import { resultFields } from "@/lib/open-data/result-fields";
 import { matchPacks } from "@/lib/pack-query";
+import { convertColumns, DEFAULT_UNITS, type UnitPrefs } from "@/lib/units";
 import { toPackParams } from "@/lib/pack-query-params";
 import { makerRows, packWhere, requireKnownGroup } from "@/server/open-data/catalogue";
 import { cachedPackRows } from "@/server/public-data";
@@ -55,12 +56,19 @@ function json<R>(
   };
 }
 
+/** The row's cells in series, where a dataset has them (per-pack columns need it). */
+const cellsOf = (r: unknown) =>
+  typeof r === "object" && r !== null && "cellsInSeries" in r && typeof r.cellsInSeries === "number"
+    ? r.cellsInSeries
+    : null;
+
 export async function buildDownload(
   dataset: Dataset,
   format: "csv" | "json",
   filters: ResultFilters,
   baseUrl: string,
   now = new Date(),
+  units: UnitPrefs = DEFAULT_UNITS,
 ): Promise<DownloadFile> {
   await requireKnownGroup(filters.group);
   const date = now.toISOString().slice(0, 10);
@@ -80,12 +88,14 @@ export async function buildDownload(
       checked: { schema, value: body },
     };
   }
+  // CSV only: the reader's units (lib/units.ts), each converted column named with its unit; JSON and the API stay SI.
+  const convert = <R>(fields: Field<R>[]) => convertColumns<R, Field<R>>(fields, units, cellsOf);
   const body =
     data.kind === "makers"
-      ? toCsv(makerFields, data.rows)
+      ? toCsv(convert(makerFields), data.rows)
       : data.kind === "packs"
-        ? toCsv(packFields, data.rows)
-        : toCsv(resultFields, data.rows);
+        ? toCsv(convert(packFields), data.rows)
+        : toCsv(convert(resultFields), data.rows);
   return { body, contentType: "text/csv; charset=utf-8; header=present", fileName: name, checked: null };
 }
 

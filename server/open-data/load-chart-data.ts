@@ -6,6 +6,7 @@ import { CHART_RATING_WORDS, MAX_CURVES, type ChartData, type CurveLine } from "
 import { rankingVerdict } from "@/lib/maker-ranking";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
+import { parseUnitsParam } from "@/lib/units";
 import { packWhere } from "@/server/open-data/catalogue";
 import { cachedGroupCurves, cachedGroupSamples } from "@/server/public-data";
 
@@ -21,7 +22,7 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
   const base: ChartData = {
     state,
     rating,
-    groupLabel: groupLabel(state.group, samples[0]) ?? state.group,
+    groupLabel: groupLabel(state.group, samples[0]) ?? "an unnamed like-for-like group",
     counts: { packs: packs.length, results: samples.length },
     leftOut: [],
   };
@@ -35,7 +36,15 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
       const m = rating === "measured" ? p.figures.sustainedCMeasured : p.figures.sagLimitedC;
       const y = m ? (rating === "measured" ? m.max : m.median) : null;
       return m && y !== null
-        ? [{ label: `${p.makerName} ${p.model}`, labelledC: p.labelledContinuousC, measuredC: y, n: m.n }]
+        ? [
+            {
+              id: p.packSlug,
+              label: `${p.makerName} ${p.model}`,
+              labelledC: p.labelledContinuousC,
+              ratingC: Math.round(y * 10) / 10,
+              n: m.n,
+            },
+          ]
         : [];
     });
     if (points.length < packs.length)
@@ -82,5 +91,17 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
       `${plural(seen.size - MAX_CURVES, "more pack")} not drawn (at most ${MAX_CURVES} curves, first result of each pack).`,
     );
   else base.leftOut.push("One curve per pack: its first approved result in the group.");
+  // Per pack only where every curve is one pack size; across sizes the pack voltages would not compare.
+  if (parseUnitsParam(state.units).basis === "pack") {
+    if (state.cells) {
+      const cells = state.cells;
+      const perPack = curves.map((c) => ({
+        ...c,
+        points: c.points.map((p) => ({ ...p, voltagePerCellV: Math.round(p.voltagePerCellV * cells * 1000) / 1000 })),
+      }));
+      return { ...base, curves: perPack, curvesPerPack: { cells } };
+    }
+    base.leftOut.push("Voltages per cell: packs of different sizes are compared (choose one pack size for per pack).");
+  }
   return { ...base, curves };
 }

@@ -36,6 +36,22 @@ test("no serious accessibility violations on a pack page", async ({ page }) => {
   expect(serious.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
 });
 
+// An embed in the reader's dark scheme: its own colours (links, text, focus) must hold there too.
+for (const scheme of ["light", "dark"] as const) {
+  test(`no serious accessibility violations in an embed, ${scheme} scheme`, async ({ page, request }) => {
+    const charts = (await (await request.get("/api/v1/charts")).json()) as { data: { links: { embed: string } }[] };
+    const embeds = charts.data.map((c) => c.links.embed);
+    expect(embeds.length).toBeGreaterThan(0);
+    await page.emulateMedia({ colorScheme: scheme });
+    const found: string[] = [];
+    for (const embed of embeds) {
+      await page.goto(embed);
+      found.push(...(await seriousViolations(page, embed)));
+    }
+    expect(found).toEqual([]);
+  });
+}
+
 // The signed-in areas too, as a moderator (the admin pages are scanned in admin-roles.spec.ts, where an
 // admin is already signed in: sign-in links are rate-limited per address).
 test("no serious accessibility violations in the signed-in areas (account, submit, review)", async ({ page }) => {

@@ -33,9 +33,11 @@ test("a visitor checks a log written with semicolons, decimal commas and mV/mA, 
     "href",
     "/methods#delivered-capacity",
   );
-  await expect(page.getByRole("img", { name: /Voltage and current over time/ })).toBeVisible();
+  // Stacked panels sharing one time axis, each with its own unit (issue 15), and the same readings as a table.
+  await expect(page.getByRole("img", { name: /^Log: Voltage.*; Current, A.*, against time/ })).toBeVisible();
   await page.getByRole("button", { name: "Show as table" }).click();
-  await expect(page.getByRole("table").getByRole("columnheader", { name: "Voltage (V)" })).toBeVisible();
+  await expect(page.getByRole("table").getByRole("columnheader", { name: /^Voltage/ })).toBeVisible();
+  await expect(page.getByRole("table").getByRole("columnheader", { name: "Current, A" })).toBeVisible();
 
   // A file that is not a log gets a clear message on the file field.
   await page

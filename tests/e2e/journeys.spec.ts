@@ -286,9 +286,7 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
   await expect(page).toHaveURL(/q=brakwater/);
   await settled(page);
   await expect
-    .poll(async () => [
-      ...new Set((await rows(page).locator("td:nth-child(1)").allTextContents()).map((t) => t.trim())),
-    ])
+    .poll(async () => [...new Set((await rows(page).locator("th span").allTextContents()).map((t) => t.trim()))])
     .toEqual(["Brackwater Power"]);
 
   // On to the "Rated mAh" header button; Enter sorts, highest first.
@@ -298,8 +296,8 @@ test("keyboard only: search the packs table, sort by a header, and open a pack",
   await expect(page).toHaveURL(/sort=capacity&dir=desc/);
   await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
   await settled(page);
-  const model = ((await rows(page).first().locator("td:nth-child(2) a").textContent()) ?? "").trim();
-  const href = (await rows(page).first().locator("td:nth-child(2) a").getAttribute("href")) ?? "";
+  const model = ((await rows(page).first().locator("th a").textContent()) ?? "").trim();
+  const href = (await rows(page).first().locator("th a").getAttribute("href")) ?? "";
   expect(href).toMatch(/^\/packs\//);
 
   // On to the first pack link in the table; Enter opens it.

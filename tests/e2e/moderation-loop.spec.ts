@@ -139,9 +139,10 @@ test("a proposed pack goes live when its first result is approved, after the mod
   const [download] = await Promise.all([mod.waitForEvent("download"), mod.getByTestId("log-download").click()]);
   expect(download.suggestedFilename()).toBe(`result-${resultId}-skua-run.csv`);
   expect(await readFile((await download.path()) ?? "")).toEqual(csv);
-  const curve = mod.getByRole("img", { name: /^Voltage, current and temperature over time/ });
+  const curve = mod.getByRole("img", { name: /^Log: Voltage.*; Current, A.*; Pack temperature.*, against time/ });
   await expect(curve).toBeVisible();
-  await expect(mod.getByText(/^Temperature \(°C, /)).toBeVisible();
+  // Stacked panels on one time axis (issue 15): the temperature has its own panel, in °C by default.
+  await expect(curve.locator("[data-panel=t] text").first()).toHaveText(/^Pack temperature, °C/);
   await expect(mod.getByLabel("This pack is")).toHaveValue("");
   await mod.getByRole("button", { name: "Approve and publish" }).click();
   await expect(mod.getByTestId("decision-done")).toContainText(/approved/i);

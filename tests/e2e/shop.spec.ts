@@ -3,24 +3,32 @@
 import { expect, test, type Page } from "@playwright/test";
 import { rows, settled } from "./packs-table-helpers";
 
-const column = async (page: Page, index: number) =>
-  (await rows(page).locator(`td:nth-child(${index})`).allTextContents()).map((t) => t.trim());
+// Cells of a column by its header (the pack's name is the row header, th; the figures are td).
+const COLUMN = {
+  cells: "td.c-cells",
+  capacity: "td.c-capacity",
+  connector: "td.c-connector",
+  measuredC: "td.c-measuredC",
+} as const;
+const column = async (page: Page, name: keyof typeof COLUMN) =>
+  (await rows(page).locator(COLUMN[name]).allTextContents()).map((t) => t.trim());
 const mah = (t: string) => Number(t.replace(/,/g, ""));
 
 test("filters the packs table through the URL, and the back button restores the previous filter", async ({ page }) => {
   await page.goto("/packs?cells=4&sort=capacity&dir=desc");
-  await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  // The server's first page shows until the client has read the URL and fetched the filtered rows.
+  await settled(page);
   expect(await rows(page).count()).toBeGreaterThan(0);
   // The first page is server-rendered; the filtered rows arrive after hydration, so poll rather than read once.
-  await expect.poll(async () => [...new Set(await column(page, 3))]).toEqual(["4S"]);
-  const capacities = (await column(page, 4)).map(mah);
+  await expect.poll(async () => [...new Set(await column(page, "cells"))]).toEqual(["4S"]);
+  const capacities = (await column(page, "capacity")).map(mah);
   expect(capacities).toEqual([...capacities].sort((a, b) => b - a));
   await expect(page.getByRole("columnheader", { name: /Rated mAh/ })).toHaveAttribute("aria-sort", "descending");
 
   await page.getByRole("combobox", { name: "Connector" }).selectOption("XT60");
   await expect(page).toHaveURL(/connector=XT60/);
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  await expect.poll(async () => [...new Set(await column(page, 7))]).toEqual(["XT60"]);
+  await expect.poll(async () => [...new Set(await column(page, "connector"))]).toEqual(["XT60"]);
   await page.goBack();
   await expect(page).not.toHaveURL(/connector=/);
   await expect(page.getByRole("combobox", { name: "Connector" })).toHaveValue("");
@@ -39,7 +47,7 @@ test("two filter boxes typed in quick succession both stay: the second builds on
   await settled(page);
   await expect(from).toHaveValue("1000");
   await expect(to).toHaveValue("2000");
-  const capacities = (await column(page, 4)).map(mah);
+  const capacities = (await column(page, "capacity")).map(mah);
   expect(capacities.length).toBeGreaterThan(0);
   expect(capacities.every((c) => c >= 1000 && c <= 2000)).toBe(true);
 });
@@ -53,8 +61,8 @@ test("without a group, one click fills the measured columns from the most tested
   await expect(page).toHaveURL(/[?&]group=dc-step_a15-25_co3\.3_r5-10_new/);
   await settled(page);
   await expect(page.getByTestId("suggested-group")).toHaveCount(0);
-  // Sag-limited C (estimate), the ninth column, now holds figures, not dashes.
-  await expect(rows(page).first().locator("td").nth(8)).toHaveText(/^\d+(\.\d)?C$/);
+  // The sag-limited C column now holds figures, not dashes.
+  await expect(rows(page).first().locator(COLUMN.measuredC)).toHaveText(/^\d+(\.\d)?C$/);
 });
 
 test("finds packs with a misspelt maker name", async ({ page }) => {
@@ -67,13 +75,15 @@ test("finds packs with a misspelt maker name", async ({ page }) => {
     await expect(page).toHaveURL(/q=brakwater/, { timeout: 2000 });
   }).toPass({ timeout: 20_000 });
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
-  await expect.poll(async () => [...new Set(await column(page, 1))]).toEqual(["Brackwater Power"]);
+  await expect
+    .poll(async () => [...new Set((await rows(page).locator("th span").allTextContents()).map((t) => t.trim()))])
+    .toEqual(["Brackwater Power"]);
 });
 
 test("opens a pack from the table and reads its figures by group", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new&sort=labelRatio&dir=desc");
   await settled(page);
-  const link = rows(page).first().locator("td:nth-child(2) a");
+  const link = rows(page).first().locator("th a");
   const model = (await link.textContent())?.trim() ?? "";
   await link.click();
   await expect(page.getByRole("heading", { level: 1 })).toContainText(model);
@@ -92,8 +102,8 @@ test("a pack page's figures table fits a desktop screen and its over-cycles char
   const overflow = await region.evaluate((el) => el.scrollWidth - el.clientWidth);
   expect(overflow).toBeLessThanOrEqual(1);
   const cycles = page.getByRole("figure", { name: "Capacity of results at different cycle counts" });
-  await expect(cycles.locator("svg .visx-axis-bottom")).toBeVisible();
-  const ticks = await cycles.locator("svg .visx-axis-bottom .visx-axis-tick text").allTextContents();
+  await expect(cycles.locator(".chart-svg .chart-axis")).toBeVisible();
+  const ticks = await cycles.locator(".chart-svg .chart-axis > g > text").allTextContents();
   expect(ticks.length).toBeGreaterThan(1);
   for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
 });
@@ -107,7 +117,7 @@ test("a pack whose log holds ten cycles shows that one pack's capacity kept, and
   // 0.4 % lost per cycle over 10 cycles: 80 % lies far beyond what ten cycles support, and the page says so.
   await expect(one.getByTestId("cycles-to-80")).toContainText("No projection");
   const chart = page.getByRole("figure", { name: "Capacity kept over the cycles of one pack" });
-  const ticks = await chart.locator("svg .visx-axis-bottom .visx-axis-tick text").allTextContents();
+  const ticks = await chart.locator(".chart-svg .chart-axis > g > text").allTextContents();
   expect(ticks.length).toBeGreaterThan(1);
   for (const t of ticks) expect(t.trim()).toMatch(/^\d+$/);
 });
@@ -131,14 +141,15 @@ test("an empty comparison suggests packs of one size tested the same way, and a 
 test("compares three packs in one like-for-like group and lists what it left out", async ({ page }) => {
   await page.goto("/packs?group=dc-step_a15-25_co3.3_r5-10_new");
   await expect(page.getByTestId("pack-count")).not.toHaveText(/Loading/);
+  await settled(page);
   const hrefs = await rows(page)
-    .locator("td:nth-child(2) a")
+    .locator("th a")
     .evaluateAll((as) => as.slice(0, 3).map((a) => a.getAttribute("href") ?? ""));
   const slugs = hrefs.map((h) => h.replace("/packs/", ""));
   const third =
-    (await rows(page).nth(2).locator("td:nth-child(1)").textContent())?.trim() +
+    (await rows(page).nth(2).locator("th span").textContent())?.trim() +
     " " +
-    (await rows(page).nth(2).locator("td:nth-child(2)").textContent())?.trim();
+    (await rows(page).nth(2).locator("th a").textContent())?.trim();
   await page.goto(`/compare?packs=${slugs.slice(0, 2).join(",")}&group=dc-step_a15-25_co3.3_r5-10_new`);
   await page.getByPlaceholder("Type a maker or model").fill(third);
   await page.getByRole("button", { name: "Add", exact: true }).click();
@@ -173,17 +184,18 @@ test("toggles a chart to its data table and back; points are keyboard-focusable 
   await frame.getByRole("button", { name: "Show as table" }).click();
   await expect(frame.getByRole("columnheader", { name: "Labelled C" })).toBeVisible();
   expect(await frame.locator("tbody tr").count()).toBeGreaterThanOrEqual(40);
-  await expect(frame.getByTestId("label-check-point")).toHaveCount(0);
+  await expect(frame.locator(".chart-svg a").first()).toBeHidden();
   await frame.getByRole("button", { name: "Show as chart" }).click();
-  const point = frame.getByTestId("label-check-point").first();
+  const point = frame.locator(".chart-svg a").first();
   await point.focus();
-  await expect(frame.getByRole("status")).toContainText("labelled");
+  await expect(frame.getByRole("status")).toContainText(/Labelled C: \d/);
   await page.keyboard.press("Escape");
   await expect(frame.getByRole("status")).toHaveCount(0);
   // Another group from the switcher redraws the chart with its own points.
-  const before = await frame.getByTestId("label-check-point").count();
+  const chart = page.locator("#home-lc .chart-svg");
+  const before = await chart.locator("a").count();
   await page.getByTestId("group-switcher").selectOption({ index: 1 });
-  await expect(frame.getByTestId("label-check-point")).not.toHaveCount(before);
+  await expect(chart.locator("a")).not.toHaveCount(before);
 });
 
 test("the label check offers both ratings, each named in the chart's title and axis, and crowns no maker on overlap", async ({
@@ -197,13 +209,13 @@ test("the label check offers both ratings, each named in the chart's title and a
     .locator("figure")
     .filter({ hasText: "Label check: labelled C against sag-limited C (estimate)" });
   await expect(estimate).toContainText("Sag-limited C, an estimate from resistance (C)");
-  await expect(estimate.getByTestId("label-check-point").first()).toBeVisible();
+  await expect(estimate.locator(".chart-svg a").first()).toBeVisible();
   await expect(page.getByText("Label ratio (sag-limited C estimate ÷ labelled C)")).toBeVisible();
   await switcher.getByLabel("Sustained C (measured)").check();
   const measured = page.locator("figure").filter({ hasText: "against sustained C (measured)" });
   await expect(measured).toContainText("Sustained C, measured from the run (C)");
   await expect(measured).toContainText("label not shown (held less, or tested lower)");
-  await expect(measured.getByTestId("label-check-point").first()).toBeVisible();
+  await expect(measured.locator(".chart-svg a").first()).toBeVisible();
   // Makers with fewer than 6 packs have no 95 % interval: the list must not name a leader.
   await expect(page.getByTestId("ranking-verdict")).toContainText("No maker is distinguishably ahead");
   await expect(page.getByTestId("maker-ranking")).not.toContainText("ahead");
@@ -212,7 +224,7 @@ test("the label check offers both ratings, each named in the chart's title and a
 test("sorts the packs table from the keyboard through the header buttons", async ({ page }) => {
   await page.goto("/packs");
   await settled(page);
-  await page.getByRole("button", { name: /^Maker/ }).focus();
+  await page.getByRole("button", { name: /^Pack/ }).focus();
   for (let i = 0; i < 10; i++) {
     const text = await page.evaluate(() => document.activeElement?.textContent ?? "");
     if (text.startsWith("Rated mAh")) break;
@@ -224,7 +236,7 @@ test("sorts the packs table from the keyboard through the header buttons", async
   await page.keyboard.press("Enter");
   await expect(page).toHaveURL(/sort=capacity&dir=asc/);
   await settled(page);
-  const capacities = (await column(page, 4)).map(mah);
+  const capacities = (await column(page, "capacity")).map(mah);
   expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
 });
 

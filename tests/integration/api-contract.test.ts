@@ -151,11 +151,16 @@ describe("the OpenAPI document", () => {
 
   it("covers every public route handler on disk, and only routes that exist", async () => {
     // Auth.js's own endpoints speak the sign-in protocol of the auth library, not the public data contract.
-    // A result's label photos are evidence served with their own check (server/evidence.ts: moderators, the
-    // contributor, everyone once published), not open data.
+    // The chart embed and the home page's label-check fragment are HTML for people, served by route handlers only
+    // so that they carry no framework script (issue 15): pages, not the data contract. A result's label photos are
+    // evidence served with their own check (server/evidence.ts: moderators, the contributor, everyone once
+    // published), not open data.
     const NOT_THE_API = new Set([
       "get /api/auth/{...nextauth}",
       "post /api/auth/{...nextauth}",
+      "get /embed/chart/{...state}",
+      "get /fragments/label-check/{group}",
+      "get /fragments/label-check/{group}/{rating}",
       "get /results/{id}/photos/{n}",
     ]);
     // Every public handler is documented; a documented route may also need a session (a reader's flag), but it

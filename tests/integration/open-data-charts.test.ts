@@ -99,12 +99,24 @@ describe("chart image sizes (width, height, PNG scale)", () => {
     expect(await pngSize(await get("chart.png", "?width=320"))).toEqual({ width: 640, height: 800 });
   });
 
-  it("gives the SVG the asked width, height and viewBox", async () => {
-    const svg = await (await get("chart.svg", "?width=480")).text();
-    expect(svg).toMatch(/^<svg [^>]*viewBox="0 0 480 400" width="480" height="400"/);
-    const tall = await (await get("chart.svg", "?width=600&height=900")).text();
-    expect(tall).toMatch(/^<svg [^>]*viewBox="0 0 600 900" width="600" height="900"/);
-    expect(await (await get("chart.svg")).text()).toMatch(/^<svg [^>]*viewBox="0 0 800 500" width="800" height="500"/);
+  it("gives the SVG the asked width and height, laid out at its design width (components/charts/image)", async () => {
+    // The viewBox is the size ÷ k, k = √(width ÷ 800) kept within 0.92–1.45: the same shape, type that stays legible.
+    const box = (svg: string) => {
+      const m = /^<svg [^>]*viewBox="0 0 ([\d.]+) ([\d.]+)" width="(\d+)" height="(\d+)"/.exec(svg);
+      return m ? m.slice(1).map(Number) : [];
+    };
+    const k = (w: number) => Math.min(1.45, Math.max(0.92, Math.sqrt(w / 800)));
+    for (const [query, w, h] of [
+      ["?width=480", 480, 400],
+      ["?width=600&height=900", 600, 900],
+      ["", 800, 500],
+      ["?width=1600&height=1000", 1600, 1000],
+    ] as const) {
+      const [vw = 0, vh = 0, width, height] = box(await (await get("chart.svg", query)).text());
+      expect([width, height], query).toEqual([w, h]);
+      expect(vw).toBeCloseTo(w / k(w), 0);
+      expect(vh).toBeCloseTo(h / k(w), 0);
+    }
   });
 
   it.each([

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { env } from "@/server/env";
 import { AnalyseClient } from "./_components/analyse-client";
 
@@ -18,14 +17,14 @@ export default function AnalysePage() {
         <p className="muted">
           Drop a discharge log to see the figures Sagline would compute from it, with the curves and any warnings.
           Nothing is stored and you do not need to sign in. The same check is available as{" "}
-          <code className="num text-sm">POST /api/v1/analyse</code> (see <Link href="/data#api">the API</Link>).
+          <code className="num text-sm">POST /api/v1/analyse</code> (see <a href="/data#api">the API</a>).
         </p>
       </header>
       <AnalyseClient maxMb={maxMb} />
       <aside className="muted max-w-3xl text-sm">
         Discharging packs at high current makes them hot. Test in a fire-safe place, stop at the stop temperature, never
         leave a pack under load or on charge unattended, retire swollen packs, and follow the maker’s instructions and
-        local rules. <Link href="/methods#safety">Safety notes</Link>.
+        local rules. <a href="/methods#safety">Safety notes</a>.
       </aside>
     </div>
   );

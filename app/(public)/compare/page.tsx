@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { z } from "zod";
-import { LineChart } from "@/components/charts/line-chart";
+import { LineFigure } from "@/components/charts/line-figure";
+import { StaticIsland } from "@/components/static-island";
 import { MAX_COMPARE, MIN_COMPARE, suggestComparisons } from "@/lib/compare";
 import { compareChartData } from "@/lib/compare-charts";
 import { packTitle } from "@/lib/format";
@@ -64,7 +64,7 @@ export default async function ComparePage(props: {
       {cmp.packs.length < MIN_COMPARE ? (
         <>
           <p className="muted">
-            Add at least {MIN_COMPARE} packs to compare them. Or start from the <Link href="/packs">packs table</Link>.
+            Add at least {MIN_COMPARE} packs to compare them. Or start from the <a href="/packs">packs table</a>.
           </p>
           {suggestions.length ? (
             <section aria-labelledby="examples-h" className="space-y-2">
@@ -74,12 +74,12 @@ export default async function ComparePage(props: {
               <ul className="space-y-2 text-sm" data-testid="compare-suggestions">
                 {suggestions.map((sug) => (
                   <li key={sug.group.key} className="card space-y-1">
-                    <Link
+                    <a
                       href={`/compare?packs=${sug.packs.map((p) => p.slug).join(",")}&group=${sug.group.key}`}
                       className="font-medium"
                     >
                       {sug.cells}S {sug.capacityMah.toLocaleString("en-GB")} mAh — compare {sug.packs.length} packs
-                    </Link>
+                    </a>
                     <p className="muted text-xs">{sug.packs.map((p) => p.title).join(" · ")}</p>
                     <p className="muted text-xs">{sug.group.label}</p>
                   </li>
@@ -107,7 +107,7 @@ export default async function ComparePage(props: {
                     .filter((g) => g.key !== cmp.group?.key)
                     .map((g) => (
                       <li key={g.key}>
-                        <Link
+                        <a
                           href={qsFor(g.key)}
                           className="inline-block rounded border border-ink/15 px-2 py-0.5 dark:border-night-line"
                         >
@@ -115,7 +115,7 @@ export default async function ComparePage(props: {
                           <span className="muted">
                             ({g.packsCovered} of {cmp.packs.length} packs)
                           </span>
-                        </Link>
+                        </a>
                       </li>
                     ))}
                 </ul>
@@ -126,7 +126,9 @@ export default async function ComparePage(props: {
               under “Left out”.
             </p>
           </section>
-          <CompareTable packs={cmp.packs} compared={cmp.compared} />
+          <StaticIsland id="cmp-table">
+            <CompareTable packs={cmp.packs} compared={cmp.compared} />
+          </StaticIsland>
           {charts ? (
             <section aria-labelledby="curves-h" className="space-y-4">
               <h2 id="curves-h">Curves</h2>
@@ -134,33 +136,39 @@ export default async function ComparePage(props: {
                 One result per pack: the one whose delivered capacity is closest to the pack&apos;s median in this
                 group. Packs without a result here have no curve.
               </p>
-              <LineChart
-                title="Voltage per cell against capacity delivered"
-                xLabel="Capacity delivered (mAh)"
-                yLabel="Voltage per cell (V)"
-                yDigits={3}
-                tableCaption="Discharge curves"
-                series={charts.byCapacity}
-              />
-              <LineChart
-                title="Voltage per cell against share of rated capacity"
-                xLabel="Delivered ÷ rated capacity (%)"
-                yLabel="Voltage per cell (V)"
-                xDigits={0}
-                yDigits={3}
-                tableCaption="Discharge curves by share of rated capacity"
-                series={charts.byShare}
-              />
-              {charts.temperature.length ? (
-                <LineChart
-                  title="Pack temperature over time"
-                  xLabel="Time (s)"
-                  yLabel="Pack temperature (°C)"
-                  yDigits={1}
-                  tableCaption="Pack temperature"
-                  series={charts.temperature}
+              <StaticIsland id="cmp-charts" className="space-y-4">
+                <LineFigure
+                  id="cmp-mah"
+                  title="Voltage per cell against capacity delivered"
+                  xLabel="Capacity delivered (mAh)"
+                  yLabel="Voltage per cell, V"
+                  yDigits={3}
+                  tableCaption="Discharge curves"
+                  series={charts.byCapacity}
                 />
-              ) : null}
+                <LineFigure
+                  id="cmp-share"
+                  title="Voltage per cell against share of rated capacity"
+                  xLabel="Delivered ÷ rated capacity (%)"
+                  yLabel="Voltage per cell, V"
+                  xDigits={0}
+                  yDigits={3}
+                  tableCaption="Discharge curves by share of rated capacity"
+                  series={charts.byShare}
+                />
+                {charts.temperature.length ? (
+                  <LineFigure
+                    id="cmp-temp"
+                    title="Pack temperature over time"
+                    xLabel="Time (s)"
+                    yLabel="Pack temperature, °C"
+                    yUnit="temp"
+                    yDigits={1}
+                    tableCaption="Pack temperature"
+                    series={charts.temperature}
+                  />
+                ) : null}
+              </StaticIsland>
             </section>
           ) : null}
         </>

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
-import Link from "next/link";
-import { Suspense } from "react";
 import { packListRecord } from "@/lib/open-data/pack-list";
 import { queryPacks } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
 import { cachedGroups, cachedPackRows } from "@/server/public-data";
-import { PacksClient, PacksView } from "./_components/packs-client";
+import { StaticIsland } from "@/components/static-island";
+import { PacksClient } from "./_components/packs-client";
+import { PackTable } from "./_components/pack-table";
 import type { ApiPackPage, FilterOptions } from "./_components/types";
 
 export const metadata: Metadata = {
@@ -38,12 +38,16 @@ export default async function PacksPage() {
       <h1>Packs</h1>
       <p className="muted max-w-3xl text-sm">
         Measured columns appear when you choose a like-for-like group: figures are only compared between results taken
-        the same way (<Link href="/methods#like-for-like">why</Link>). The same data is at <code>/api/v1/packs</code>.
+        the same way (<a href="/methods#like-for-like">why</a>). The same data is at <code>/api/v1/packs</code>.
       </p>
-      {/* Until the client reads the URL the rows are the unfiltered first page, so say they are loading. */}
-      <Suspense fallback={<PacksView params={DEFAULT_PACK_PARAMS} page={initial} options={options} loading />}>
-        <PacksClient initial={initial} options={options} />
-      </Suspense>
+      <PacksClient
+        options={options}
+        first={
+          <StaticIsland id="packs-first">
+            <PackTable page={initial} params={DEFAULT_PACK_PARAMS} />
+          </StaticIsland>
+        }
+      />
     </div>
   );
 }

@@ -1,7 +1,7 @@
 // One like-for-like group's samples: the values per-pack aggregates (median of published results, with n and
 // spread) are computed from, with the pack each belongs to.
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import { isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
@@ -67,4 +67,34 @@ export async function listGroupSamples(groupKey: string, w: PackWhere): Promise<
     .innerJoin(makers, makerOfPack)
     .where(and(isPublished, eq(results.groupKey, groupKey), ...resultConditions(w)))
     .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
+}
+
+/** What each like-for-like group holds, per maker and pack size: published results, those with a label ratio by
+ * the estimate (`rated`) and by the measured rating (`measured`) — the label check and maker ranking draw only
+ * those. The chart builder offers only what has data. */
+export type GroupCoverageRow = {
+  group: string;
+  maker: string;
+  cells: number;
+  results: number;
+  rated: number;
+  measured: number;
+};
+
+export async function listGroupCoverage(): Promise<GroupCoverageRow[]> {
+  return db
+    .select({
+      group: results.groupKey,
+      maker: makers.slug,
+      cells: packs.cellsInSeries,
+      results: sql<number>`count(*)::int`,
+      rated: sql<number>`count(${results.labelRatio})::int`,
+      measured: sql<number>`count(${results.sustainedLabelRatio})::int`,
+    })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(isPublished)
+    .groupBy(results.groupKey, makers.slug, packs.cellsInSeries)
+    .orderBy(results.groupKey, makers.slug, packs.cellsInSeries);
 }

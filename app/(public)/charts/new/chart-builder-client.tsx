@@ -1,5 +1,7 @@
 "use client";
 // The chart builder: choose, preview (the server-drawn SVG), then go to the permalink that carries the state.
+// It offers only what has data — makers and pack sizes with approved results in the chosen group — and will
+// not publish a chart that would come out empty.
 import { useRouter, useSearchParams } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
 import { RATING_LABELS } from "@/lib/figure-words";
@@ -17,16 +19,32 @@ import {
 
 type Group = { key: string; label: string; resultCount: number; packCount: number };
 type Maker = { slug: string; name: string };
+/** Approved results per group, maker and pack size; `rated` have a label ratio by the estimate, `measured` by the
+ * measured rating (label check, ranking). */
+type Coverage = { group: string; maker: string; cells: number; results: number; rated: number; measured: number };
 
-const input =
-  "mt-1 block w-full rounded border border-ink/20 bg-paper-raised px-2 py-1 dark:border-night-line dark:bg-night-raised";
+const input = "input mt-1 block w-full";
 const defaultTitle: Record<ChartKind, string> = {
   "label-check": "Labelled C against the rating",
   curves: "Discharge curves compared",
   "maker-ranking": "How close makers come to their labels",
 };
 
-export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Maker[] }) {
+/** What a chart of this kind, group, maker and size would draw. */
+function countFor(
+  coverage: Coverage[],
+  kind: ChartKind,
+  rating: ChartRating,
+  group: string,
+  maker: string,
+  cells: string,
+): number {
+  return coverage
+    .filter((c) => c.group === group && (!maker || c.maker === maker) && (!cells || c.cells === Number(cells)))
+    .reduce((n, c) => n + (kind === "curves" ? c.results : rating === "measured" ? c.measured : c.rated), 0);
+}
+
+export function ChartBuilder({ groups, makers, coverage }: { groups: Group[]; makers: Maker[]; coverage: Coverage[] }) {
   const router = useRouter();
   const from = decodeChartState(useSearchParams().get("from") ?? "");
   const [kind, setKind] = useState<ChartKind>(from?.kind ?? "label-check");
@@ -35,9 +53,19 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
   const [cells, setCells] = useState(from?.cells ? String(from.cells) : "");
   const [title, setTitle] = useState(from?.title ?? "");
   const [note, setNote] = useState(from?.note ?? "");
+  const [perPack, setPerPack] = useState(from?.units === "pack");
   // A chart copied from an older permalink keeps the estimate it drew (a state without a rating means it).
   const [rating, setRating] = useState<ChartRating>(from?.rating ?? "estimate");
   const rated = kind === "label-check" || kind === "maker-ranking";
+
+  const inGroup = coverage.filter((c) => c.group === group);
+  const makerOptions = makers.filter((m) =>
+    inGroup.some((c) => c.maker === m.slug && (!cells || c.cells === Number(cells))),
+  );
+  const cellOptions = [...new Set(inGroup.filter((c) => !maker || c.maker === maker).map((c) => c.cells))].sort(
+    (a, b) => a - b,
+  );
+  const count = countFor(coverage, kind, rating, group, maker, cells);
 
   const parsed = useMemo(
     () =>
@@ -50,12 +78,23 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
         rating: rated ? rating : undefined,
         title: title.trim() || defaultTitle[kind],
         note: note.trim() || undefined,
+        // Per pack only for curves of one pack size (the reader's units, lib/units.ts).
+        units: kind === "curves" && cells && perPack ? "pack" : undefined,
       }),
-    [kind, group, maker, cells, rated, rating, title, note],
+    [kind, group, maker, cells, rated, rating, title, note, perPack],
   );
   const encoded = parsed.success ? encodeChartState(parsed.data) : null;
   const preview = useDeferredValue(encoded);
   const errors = parsed.success ? [] : parsed.error.issues.map((i) => i.message);
+  const empty = count === 0;
+
+  // A group with other makers and sizes keeps only the choices it has data for.
+  const chooseGroup = (key: string) => {
+    const next = coverage.filter((c) => c.group === key);
+    setGroup(key);
+    if (maker && !next.some((c) => c.maker === maker)) setMaker("");
+    if (cells && !next.some((c) => c.cells === Number(cells))) setCells("");
+  };
 
   return (
     <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
@@ -63,7 +102,7 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
         className="card space-y-3"
         onSubmit={(e) => {
           e.preventDefault();
-          if (encoded) router.push(`/charts/view/${statePath(encoded)}`);
+          if (encoded && !empty) router.push(`/charts/view/${statePath(encoded)}`);
         }}
       >
         <fieldset className="space-y-1">
@@ -102,7 +141,7 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
         ) : null}
         <label className="block text-sm">
           Like-for-like group
-          <select name="group" value={group} onChange={(e) => setGroup(e.target.value)} className={input}>
+          <select name="group" value={group} onChange={(e) => chooseGroup(e.target.value)} className={input}>
             {groups.map((g) => (
               <option key={g.key} value={g.key}>
                 {g.label} ({g.packCount} packs, {g.resultCount} results)
@@ -115,7 +154,7 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
             Maker
             <select name="maker" value={maker} onChange={(e) => setMaker(e.target.value)} className={input}>
               <option value="">Any maker</option>
-              {makers.map((m) => (
+              {makerOptions.map((m) => (
                 <option key={m.slug} value={m.slug}>
                   {m.name}
                 </option>
@@ -126,7 +165,7 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
             Cells (S)
             <select name="cells" value={cells} onChange={(e) => setCells(e.target.value)} className={input}>
               <option value="">Any</option>
-              {[1, 2, 3, 4, 5, 6, 8, 10, 12].map((c) => (
+              {cellOptions.map((c) => (
                 <option key={c} value={c}>
                   {c}S
                 </option>
@@ -134,6 +173,12 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
             </select>
           </label>
         </div>
+        {kind === "curves" && cells ? (
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" name="units" checked={perPack} onChange={(e) => setPerPack(e.target.checked)} />
+            Pack voltage ({cells}S) instead of voltage per cell
+          </label>
+        ) : null}
         <label className="block text-sm">
           Title
           <input
@@ -156,16 +201,24 @@ export function ChartBuilder({ groups, makers }: { groups: Group[]; makers: Make
             className={input}
           />
         </label>
-        {errors.length ? (
-          <ul role="alert" className="text-sm text-warn">
+        <p className="muted text-sm" data-testid="chart-count" aria-live="polite">
+          {empty
+            ? kind === "curves"
+              ? "No approved results match these choices."
+              : "No approved result with a label ratio matches these choices."
+            : `${count} approved result${count === 1 ? "" : "s"} match.`}
+        </p>
+        {errors.length || empty ? (
+          <ul role="alert" className="text-sm text-warn dark:text-[#ffb4ab]">
             {errors.map((e) => (
               <li key={e}>{e}</li>
             ))}
+            {empty ? <li>An empty chart cannot be published: choose another group, maker or pack size.</li> : null}
           </ul>
         ) : null}
         <button
           type="submit"
-          disabled={!encoded}
+          disabled={!encoded || empty}
           className="w-full rounded bg-cell-600 px-4 py-2 font-medium text-white hover:bg-cell-700 disabled:opacity-50"
         >
           Publish and get the permalink

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
 import { makerRows } from "@/server/open-data/catalogue";
-import { cachedGroups } from "@/server/public-data";
+import { cachedGroupCoverage, cachedGroups } from "@/server/public-data";
 import { ChartBuilder } from "./chart-builder-client";
 
 // Static; group options and makers come from tagged cached reads, so a decision refreshes them at once.
@@ -13,9 +13,13 @@ export const metadata: Metadata = {
 };
 
 export default async function NewChartPage() {
-  const [allGroups, makers] = await Promise.all([cachedGroups(), makerRows()]);
+  const [allGroups, makers, allCoverage] = await Promise.all([cachedGroups(), makerRows(), cachedGroupCoverage()]);
   // Groups with at least three published results: fewer make no chart worth publishing.
   const groups = allGroups.filter((g) => g.resultCount >= 3);
+  // Only makers and pack sizes with published results in an offered group.
+  const offered = new Set(groups.map((g) => g.key));
+  const coverage = allCoverage.filter((c) => offered.has(c.group));
+  const withData = new Set(coverage.map((c) => c.maker));
   return (
     <div className="space-y-4">
       <h1>Build a chart</h1>
@@ -31,7 +35,8 @@ export default async function NewChartPage() {
             resultCount: g.resultCount,
             packCount: g.packCount,
           }))}
-          makers={makers.map((m) => ({ slug: m.slug, name: m.name }))}
+          makers={makers.filter((m) => withData.has(m.slug)).map((m) => ({ slug: m.slug, name: m.name }))}
+          coverage={coverage}
         />
       </Suspense>
     </div>

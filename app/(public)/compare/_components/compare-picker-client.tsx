@@ -1,6 +1,7 @@
 "use client";
-// Add, remove and reorder the compared packs; the list lives in the URL (?packs=a,b,c&group=…).
-import { useRouter } from "next/navigation";
+// Add, remove and reorder the compared packs; the list lives in the URL (?packs=a,b,c&group=…). Each change
+// loads the page whole: its table and charts are static islands (components/static-island.tsx), sent once in the
+// HTML rather than again in a client navigation's payload.
 import { useId, useState } from "react";
 import { MAX_COMPARE } from "@/lib/compare";
 
@@ -15,7 +16,6 @@ export function ComparePicker({
   options: Option[];
   group: string | null;
 }) {
-  const router = useRouter();
   const listId = useId();
   const [text, setText] = useState("");
   const [error, setError] = useState<string | null>(null);
@@ -23,7 +23,8 @@ export function ComparePicker({
     const qs = new URLSearchParams();
     if (slugs.length) qs.set("packs", slugs.join(","));
     if (group) qs.set("group", group);
-    router.push(`/compare${qs.size ? `?${qs.toString().replace(/%2C/g, ",")}` : ""}`, { scroll: false });
+    // eslint-disable-next-line @next/next/no-location-assign-relative-destination -- a whole page load, on purpose
+    window.location.assign(`/compare${qs.size ? `?${qs.toString().replace(/%2C/g, ",")}` : ""}`);
   };
   const slugs = selected.map((s) => s.slug);
   const move = (i: number, by: -1 | 1) => {
@@ -78,7 +79,7 @@ export function ComparePicker({
               type="button"
               onClick={() => go(slugs.filter((x) => x !== s.slug))}
               aria-label={`Remove ${s.title}`}
-              className="px-1 text-warn"
+              className="px-1 text-warn dark:text-[#ffb4ab]"
             >
               ×
             </button>

@@ -3,11 +3,24 @@ import type { PackSummary } from "@/lib/catalogue";
 import { markDistinguished, type ComparedPack, type Direction, type Mark } from "@/lib/compare";
 import { RATING_LABELS } from "@/lib/figure-words";
 import { exclusionText } from "@/lib/like-for-like";
-import { fmt, labelSpec, packTitle } from "@/lib/format";
+import { LabelPairNote } from "@/components/label-pair-note";
+import { Qty } from "@/components/quantity";
+import { fmtC, labelSpec, packTitle } from "@/lib/format";
+import type { Quantity } from "@/lib/units";
 import type { Summary, SummaryFigure } from "@/lib/pack-summary";
 
 // Delivered capacity has no "better": packs of different sizes differ by design (capacity ratio is the fair one).
-type Row = { label: string; figure: SummaryFigure; digits: number; unit: string; better: Direction | null };
+// Resistances are stored per pack and shown per cell by default (`perCell`: divided by the pack's cells), like
+// every figure the reader's units control (lib/units.ts).
+type Row = {
+  label: string;
+  figure: SummaryFigure;
+  digits: number;
+  unit: string;
+  better: Direction | null;
+  q?: Quantity;
+  perCell?: boolean;
+};
 const ROWS: Row[] = [
   { label: "Sustained C (measured, median)", figure: "sustainedCMeasured", digits: 1, unit: "C", better: "higher" },
   {
@@ -21,10 +34,18 @@ const ROWS: Row[] = [
   { label: "Label ratio (estimate ÷ label)", figure: "labelRatio", digits: 2, unit: "", better: "higher" },
   { label: "Delivered capacity", figure: "capacityMah", digits: 0, unit: "mAh", better: null },
   { label: "Capacity ratio", figure: "capacityRatio", digits: 2, unit: "", better: "higher" },
-  { label: "Hold voltage", figure: "holdVoltagePerCellV", digits: 3, unit: "V/cell", better: "higher" },
-  { label: "DC resistance", figure: "dcResistanceMohm", digits: 1, unit: "mΩ", better: "lower" },
-  { label: "DC resistance at 25 °C (estimate)", figure: "resistanceAt25CMohm", digits: 1, unit: "mΩ", better: "lower" },
-  { label: "Temperature rise", figure: "temperatureRiseC", digits: 1, unit: "°C", better: "lower" },
+  { label: "Hold voltage", figure: "holdVoltagePerCellV", digits: 3, unit: "", better: "higher", q: "v" },
+  { label: "DC resistance", figure: "dcResistanceMohm", digits: 2, unit: "", better: "lower", q: "r", perCell: true },
+  {
+    label: "DC resistance at 25 °C (estimate)",
+    figure: "resistanceAt25CMohm",
+    digits: 2,
+    unit: "",
+    better: "lower",
+    q: "r",
+    perCell: true,
+  },
+  { label: "Temperature rise", figure: "temperatureRiseC", digits: 1, unit: "", better: "lower", q: "dtemp" },
 ];
 
 function MarkNote({ best, note }: Mark) {
@@ -59,7 +80,8 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
               <th key={p.slug} scope="col" className={`${cell} text-left font-medium`}>
                 <a href={`/packs/${p.slug}`}>{packTitle(p)}</a>
                 <span className="num muted block text-xs font-normal">
-                  {labelSpec(p)} · {fmt(p.weightG, 0, "g")}
+                  {labelSpec(p)} <LabelPairNote burst={p.labelledBurstC !== null} /> ·{" "}
+                  <Qty q="mass" v={p.weightG} digits={0} />
                 </span>
               </th>
             ))}
@@ -103,7 +125,14 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
                     key={compared[i]?.packId ?? i}
                     className={`${cell} ${marks[i]?.best ? "bg-cell-50 dark:bg-cell-700/15" : ""}`}
                   >
-                    <SummaryValue s={s} digits={row.digits} unit={row.unit} />
+                    <SummaryValue
+                      s={s}
+                      digits={row.digits}
+                      unit={row.unit}
+                      q={row.q}
+                      cells={packs[i]?.cellsInSeries}
+                      divide={row.perCell ? (packs[i]?.cellsInSeries ?? 1) : 1}
+                    />
                     {marks[i] ? <MarkNote {...marks[i]} /> : null}
                   </td>
                 ))}
@@ -119,7 +148,7 @@ export function CompareTable({ packs, compared }: { packs: PackSummary[]; compar
             </th>
             {compared.map((c) => (
               <td key={c.packId} className={`${cell} num`}>
-                {c.sustainedC === null ? <span className="muted">—</span> : `${fmt(c.sustainedC, 1)}C`}
+                {c.sustainedC === null ? <span className="muted">—</span> : fmtC(c.sustainedC)}
               </td>
             ))}
           </tr>

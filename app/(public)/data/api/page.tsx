@@ -57,6 +57,12 @@ export default function ApiGuidePage() {
         <a href="/api/v1/openapi.json">OpenAPI document</a>, generated from the same schemas the server checks its
         answers against.
       </p>
+      <p>
+        The API is SI, always: temperatures in °C, weights in g, voltages and resistances as each field names them (per
+        cell or per pack), whatever units a reader chose on the site. Only the CSV downloads take the reader&apos;s
+        units, with <code>units=F,oz,pack</code> (any of them), and then name each converted column by its unit (
+        <code>ambientTemperatureF</code>, <code>weightOz</code>, <code>holdVoltagePackV</code>).
+      </p>
       <h2>Endpoints</h2>
       <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="API endpoints">
         <table className="w-full min-w-[32rem]" data-testid="api-endpoints">

@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { LineChart } from "@/components/charts/line-chart";
+import { LineFigure } from "@/components/charts/line-figure";
+import { StaticIsland } from "@/components/static-island";
 import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
+import { LabelPairNote } from "@/components/label-pair-note";
+import { Qty } from "@/components/quantity";
 import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
-import { fmt, labelSpec, packTitle } from "@/lib/format";
+import { fmtC, labelSpec, packTitle } from "@/lib/format";
 import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
 import { GroupFiguresTable } from "./_components/group-figures";
@@ -44,17 +46,18 @@ export default async function PackPage(props: Props) {
         <div className="space-y-1">
           <h1>{title}</h1>
           <p className="num muted">
-            {labelSpec(pack)} · {fmt(pack.weightG, 0, "g")} · {pack.connector}
+            {labelSpec(pack)} <LabelPairNote burst={pack.labelledBurstC !== null} /> ·{" "}
+            <Qty q="mass" v={pack.weightG} digits={0} /> · {pack.connector}
           </p>
         </div>
         <div className="flex gap-2">
           <PackEmailsSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
-          <Link
+          <a
             href={`/compare?packs=${pack.slug}`}
             className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
           >
             Compare…
-          </Link>
+          </a>
         </div>
       </header>
 
@@ -65,19 +68,26 @@ export default async function PackPage(props: Props) {
           {sustained ? (
             <>
               <span className="num" data-testid="sustained-c">
-                {fmt(sustained.rateC, 1)}C
+                {fmtC(sustained.rateC)}
               </span>{" "}
               <span className="muted">
                 — the highest current a qualifying run actually drew, among approved results (
-                <Link href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</Link>;{" "}
-                {sustained.groupLabel}). <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</Link>.
+                <a href={`/results/${sustained.resultId}`}>result #{sustained.resultId}</a>; {sustained.groupLabel}).{" "}
+                <a href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</a>.
               </span>
             </>
           ) : (
             <span className="muted">— no approved run has qualified for a measured rating yet</span>
           )}
         </p>
-        <GroupFiguresTable groups={groups} labelledC={pack.labelledContinuousC} ratedMah={pack.ratedCapacityMah} />
+        <StaticIsland id="pack-figures">
+          <GroupFiguresTable
+            groups={groups}
+            labelledC={pack.labelledContinuousC}
+            ratedMah={pack.ratedCapacityMah}
+            cells={pack.cellsInSeries}
+          />
+        </StaticIsland>
       </section>
 
       <section aria-labelledby="curves" className="space-y-3">
@@ -85,37 +95,46 @@ export default async function PackPage(props: Props) {
         {curves.length === 0 ? (
           <p className="muted">No curves yet.</p>
         ) : (
-          <LineChart
-            title="Voltage per cell against capacity delivered"
-            xLabel="Capacity delivered (mAh)"
-            yLabel="Voltage per cell (V)"
-            xDigits={0}
-            yDigits={3}
-            tableCaption={`Discharge curves of ${title}`}
-            notes={
-              <p>
-                The newest {curves.length} published results, downsampled on the server for drawing. Curves from
-                different like-for-like groups are not comparable with each other: each is labelled with its method.
-              </p>
-            }
-            series={curves.map((c) => ({
-              id: String(c.resultId),
-              label: c.label,
-              href: `/results/${c.resultId}`,
-              points: c.points.map((p) => ({ x: p.mah, y: p.vpc })),
-            }))}
-          />
+          <StaticIsland id="pack-curves-island">
+            <LineFigure
+              id="pack-curves"
+              title="Voltage per cell against capacity delivered"
+              xLabel="Capacity delivered (mAh)"
+              yLabel="Voltage per cell, V"
+              xDigits={0}
+              yDigits={3}
+              yUnit="v"
+              cells={pack.cellsInSeries}
+              tableCaption={`Discharge curves of ${title}`}
+              notes={
+                <p>
+                  The newest {curves.length} published results, downsampled on the server for drawing. Curves from
+                  different like-for-like groups are not comparable with each other: each is labelled with its method.
+                </p>
+              }
+              series={curves.map((c) => ({
+                id: String(c.resultId),
+                label: c.label,
+                href: `/results/${c.resultId}`,
+                points: c.points.map((p) => ({ x: p.mah, y: p.vpc })),
+              }))}
+            />
+          </StaticIsland>
         )}
       </section>
 
       <section aria-labelledby="cycles" className="space-y-3">
         <h2 id="cycles">Over cycles</h2>
-        <CyclesSection ageing={ageing} />
+        <StaticIsland id="pack-cycles">
+          <CyclesSection ageing={ageing} cells={pack.cellsInSeries} />
+        </StaticIsland>
       </section>
 
       <section aria-labelledby="results" className="space-y-3">
         <h2 id="results">Results ({results.length})</h2>
-        <ResultsList results={results} />
+        <StaticIsland id="pack-results-island">
+          <ResultsList results={results} cells={pack.cellsInSeries} />
+        </StaticIsland>
       </section>
     </article>
   );

@@ -1,15 +1,16 @@
 "use client";
 import { useEffect, useId, useRef, useState } from "react";
 import type { PackParams } from "@/lib/pack-query-params";
+import { gramsToOunces, ouncesToGrams } from "@/lib/units";
+import { useUnits } from "@/components/units/units-store";
 import type { FilterOptions } from "./types";
 
 type Change = (patch: Partial<PackParams>, mode?: "push" | "replace") => void;
-const input =
-  "w-full rounded-md border border-ink/20 bg-paper-raised px-2 py-1.5 text-sm dark:border-night-line dark:bg-night-sunk";
+const input = "input w-full";
 
 /**
- * A text or number box that commits a moment after the reader stops typing, and follows the URL (back
- * button) while it is not being edited.
+ * A text or number box that commits a moment after the reader stops typing, and otherwise shows the URL
+ * (the back button included).
  */
 function SyncedInput({
   value,
@@ -21,10 +22,10 @@ function SyncedInput({
   "value" | "onChange"
 >) {
   const [draft, setDraft] = useState(value);
-  const ref = useRef<HTMLInputElement>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  // The URL is the truth: the box shows it, except while what was typed here has not been committed yet.
   useEffect(() => {
-    if (document.activeElement !== ref.current) setDraft(value);
+    if (!timer.current) setDraft(value);
   }, [value]);
   useEffect(
     () => () => {
@@ -34,7 +35,6 @@ function SyncedInput({
   );
   return (
     <input
-      ref={ref}
       {...rest}
       value={draft}
       className={input}
@@ -42,7 +42,10 @@ function SyncedInput({
         const v = e.target.value;
         setDraft(v);
         if (timer.current) clearTimeout(timer.current);
-        timer.current = setTimeout(() => commit(v), ms);
+        timer.current = setTimeout(() => {
+          timer.current = null;
+          commit(v);
+        }, ms);
       }}
     />
   );
@@ -53,6 +56,7 @@ function toNum(v: string): number | null {
   return v.trim() === "" || !Number.isFinite(n) || n < 0 ? null : n;
 }
 
+/** A from–to pair. `toShown`/`fromShown` convert between the URL's unit and the one the reader sees. */
 function Range({
   label,
   unit,
@@ -61,29 +65,39 @@ function Range({
   minKey,
   maxKey,
   onChange,
+  toShown = (v) => v,
+  fromShown = (v) => v,
 }: {
   label: string;
-  unit: string;
+  unit?: string;
   min: number | null;
   max: number | null;
   minKey: keyof PackParams;
   maxKey: keyof PackParams;
   onChange?: Change;
+  toShown?: (v: number) => number;
+  fromShown?: (v: number) => number;
 }) {
+  const shown = (v: number | null) => (v === null ? "" : String(Math.round(toShown(v) * 100) / 100));
+  const stored = (v: string) => {
+    const n = toNum(v);
+    return n === null ? null : Math.round(fromShown(n) * 10) / 10;
+  };
+  const unitText = unit ? ` (${unit})` : "";
   return (
     <fieldset className="space-y-1">
       <legend className="text-xs font-medium">
-        {label} <span className="muted font-normal">({unit})</span>
+        {label} {unit ? <span className="muted font-normal">({unit})</span> : null}
       </legend>
       <div className="flex items-center gap-1">
         <SyncedInput
           type="number"
           inputMode="decimal"
           min={0}
-          aria-label={`${label} from (${unit})`}
+          aria-label={`${label} from${unitText}`}
           placeholder="from"
-          value={min === null ? "" : String(min)}
-          commit={(v) => onChange?.({ [minKey]: toNum(v), page: 1 })}
+          value={shown(min)}
+          commit={(v) => onChange?.({ [minKey]: stored(v), page: 1 })}
           name={String(minKey)}
         />
         <span aria-hidden="true">–</span>
@@ -91,10 +105,10 @@ function Range({
           type="number"
           inputMode="decimal"
           min={0}
-          aria-label={`${label} to (${unit})`}
+          aria-label={`${label} to${unitText}`}
           placeholder="to"
-          value={max === null ? "" : String(max)}
-          commit={(v) => onChange?.({ [maxKey]: toNum(v), page: 1 })}
+          value={shown(max)}
+          commit={(v) => onChange?.({ [maxKey]: stored(v), page: 1 })}
           name={String(maxKey)}
         />
       </div>
@@ -113,6 +127,8 @@ export function PackFilters({
 }) {
   const [open, setOpen] = useState(false);
   const moreId = useId();
+  const units = useUnits();
+  const oz = units.mass === "oz";
   const active = [
     params.group,
     params.maker,
@@ -149,7 +165,7 @@ export function PackFilters({
       {/* On a phone the other filters fold away behind one button; from sm up they are always shown. */}
       <button
         type="button"
-        className="rounded-md border border-ink/20 px-2 py-1.5 text-sm sm:hidden dark:border-night-line"
+        className="btn-sm sm:hidden"
         aria-expanded={open}
         aria-controls={moreId}
         onClick={() => setOpen((v) => !v)}
@@ -219,8 +235,7 @@ export function PackFilters({
           onChange={onChange}
         />
         <Range
-          label="Labelled C"
-          unit="C"
+          label="Labelled continuous C"
           min={params.minC}
           max={params.maxC}
           minKey="minC"
@@ -229,12 +244,14 @@ export function PackFilters({
         />
         <Range
           label="Weight"
-          unit="g"
+          unit={oz ? "oz" : "g"}
           min={params.minG}
           max={params.maxG}
           minKey="minG"
           maxKey="maxG"
           onChange={onChange}
+          toShown={oz ? gramsToOunces : undefined}
+          fromShown={oz ? ouncesToGrams : undefined}
         />
       </div>
     </form>

@@ -1,66 +1,99 @@
 "use client";
-// The /packs state lives in the URL: reading it here, writing it with router.push (so the back button
-// walks through filters), and fetching anything but the server-rendered first page from the public API.
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useEffect, useMemo, useRef, useState } from "react";
-import { isDefaultPackParams, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
+// /packs: the URL is the one source of truth for the filters. Every change reads the URL as it is at that
+// moment, merges its patch in and writes it back (history.pushState, or replaceState while a search is refined),
+// so changes made in quick succession build on each other and never on an older render. The unfiltered first
+// page is the server's static island; any other page comes from the public API and is drawn by the same markup.
+import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from "react";
+import {
+  PACK_SORT_KEYS,
+  PAGE_SIZES,
+  isDefaultPackParams,
+  readPackParams,
+  writePackParams,
+  type PackParams,
+} from "@/lib/pack-query-params";
 import { PackFilters } from "./pack-filters";
-import { PackTable } from "./pack-table";
+import { PACK_COLUMNS, PackTable } from "./pack-table";
 import type { ApiPackList, ApiPackPage, FilterOptions } from "./types";
 
-export function PacksView({
-  params,
-  page,
-  options,
-  loading = false,
-  error = null,
-  onChange,
-}: {
-  params: PackParams;
-  page: ApiPackPage;
-  options: FilterOptions;
-  loading?: boolean;
-  error?: string | null;
-  onChange?: (patch: Partial<PackParams>, mode?: "push" | "replace") => void;
-}) {
-  return (
-    <div className="space-y-4">
-      <PackFilters params={params} options={options} onChange={onChange} />
-      {error ? (
-        <p role="alert" className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn">
-          {error}
-        </p>
-      ) : null}
-      <PackTable
-        page={page}
-        params={params}
-        loading={loading}
-        onChange={onChange}
-        suggestedGroup={options.groups[0] ?? null}
-      />
-    </div>
+const URL_EVENT = "sagline:url";
+const subscribe = (fn: () => void) => {
+  window.addEventListener("popstate", fn);
+  window.addEventListener(URL_EVENT, fn);
+  return () => {
+    window.removeEventListener("popstate", fn);
+    window.removeEventListener(URL_EVENT, fn);
+  };
+};
+/** The filters in the address bar, written canonically ("" on the server: the unfiltered first page). */
+const useCanonicalQuery = () =>
+  useSyncExternalStore(
+    subscribe,
+    () => writePackParams(readPackParams(new URLSearchParams(window.location.search))).toString(),
+    () => "",
   );
+
+/** Merges a patch into the URL as it is now; refining a search word by word replaces the entry. */
+function changeFilters(patch: Partial<PackParams>, mode: "push" | "replace" = "push") {
+  const now = new URLSearchParams(window.location.search);
+  const base = readPackParams(now);
+  const next = { ...base, ...patch };
+  const how = mode === "replace" && base.q !== "" && next.q !== "" ? "replace" : "push";
+  const qs = writePackParams(next);
+  // Parameters that are not filters (the reader's units) stay.
+  const units = now.get("units");
+  if (units) qs.set("units", units);
+  const url = `${window.location.pathname}${qs.size ? `?${qs}` : ""}`;
+  if (how === "replace") window.history.replaceState(window.history.state, "", url);
+  else window.history.pushState(window.history.state, "", url);
+  window.dispatchEvent(new Event(URL_EVENT));
 }
 
-export function PacksClient({ initial, options }: { initial: ApiPackPage; options: FilterOptions }) {
-  const router = useRouter();
-  const pathname = usePathname();
-  const search = useSearchParams();
-  const key = search.toString();
-  const params = useMemo(() => readPackParams(new URLSearchParams(key)), [key]);
-  const canonical = writePackParams(params).toString();
+type Fetched = { key: string; page: ApiPackPage | null; error: string | null };
+
+/** The first click in the server's table swaps it for the client's: the same control there takes the focus. */
+let refocusIndex: number | null = null;
+
+function onTableClick(e: React.MouseEvent<HTMLElement>) {
+  const el = (e.target as Element).closest<HTMLButtonElement>(
+    "button[data-sort], button[data-page], button[data-clear]",
+  );
+  if (!el || el.disabled) return;
+  if (el.closest("[data-k]")) refocusIndex = [...e.currentTarget.querySelectorAll("button")].indexOf(el);
+  const d = el.dataset;
+  const sort = PACK_SORT_KEYS.find((k) => k === d.sort);
+  if (sort) changeFilters({ sort, dir: d.dir === "desc" ? "desc" : "asc", page: 1 });
+  else if (d.page) changeFilters({ page: Number(d.page) });
+  else
+    changeFilters({
+      q: "",
+      cells: null,
+      minMah: null,
+      maxMah: null,
+      minC: null,
+      maxC: null,
+      minG: null,
+      maxG: null,
+      connector: null,
+      maker: null,
+      group: null,
+      page: 1,
+    });
+}
+
+export function PacksClient({ first, options }: { first: ReactNode; options: FilterOptions }) {
+  const canonical = useCanonicalQuery();
+  const params = readPackParams(new URLSearchParams(canonical));
   const isDefault = isDefaultPackParams(params);
-  // The default view is the server-rendered first page; any other comes from the API.
-  const [fetched, setFetched] = useState<{ key: string; page: ApiPackPage; error: string | null }>({
-    key: "",
-    page: initial,
-    error: null,
-  });
-  const shown = isDefault ? { page: initial, error: null } : fetched;
-  const loading = !isDefault && fetched.key !== canonical;
+  const [fetched, setFetched] = useState<Fetched>({ key: "", page: null, error: null });
+  const [hidden, setHidden] = useState<string[]>(["capacityRatio"]);
+  // The server's first page shows until the reader filters; back on the defaults, the API answers like for any page.
+  const [filtered, setFiltered] = useState(false);
+  if (!isDefault && !filtered) setFiltered(true);
+  const island = isDefault && !filtered;
 
   useEffect(() => {
-    if (isDefault) return;
+    if (island) return;
     const ctrl = new AbortController();
     fetch(`/api/v1/packs?${canonical}`, { signal: ctrl.signal, headers: { Accept: "application/json" } })
       .then(async (res) => {
@@ -81,43 +114,97 @@ export function PacksClient({ initial, options }: { initial: ApiPackPage; option
       })
       .catch((err: unknown) => {
         if (ctrl.signal.aborted) return;
-        setFetched((s) => ({
-          key: canonical,
-          page: { ...s.page, data: [], total: 0 },
-          error: err instanceof Error ? err.message : String(err),
-        }));
+        setFetched({ key: canonical, page: null, error: err instanceof Error ? err.message : String(err) });
       });
     return () => ctrl.abort();
-  }, [canonical, isDefault, params.page]);
+  }, [canonical, island, params.page]);
 
-  // Filters changed in quick succession (a second box typed in before the first reached the URL) build on
-  // each other, never on the URL of an earlier render: `heading` holds where the page is going. It follows
-  // the URL once the URL shows what was asked, or when the URL moves some other way (the back button).
-  const heading = useRef<{ params: PackParams; sent: Set<string> }>({ params, sent: new Set() });
+  const loading = !island && fetched.key !== canonical;
+  const tableBox = useRef<HTMLDivElement>(null);
   useEffect(() => {
-    const h = heading.current;
-    if (!h.sent.has(canonical) || writePackParams(h.params).toString() === canonical)
-      heading.current = { params, sent: new Set() };
-  }, [canonical, params]);
-
-  const onChange = (patch: Partial<PackParams>, mode: "push" | "replace" = "push") => {
-    const base = heading.current.params;
-    const next = { ...base, ...patch };
-    // Refining a search word by word replaces the entry; starting or clearing one adds it.
-    const how = mode === "replace" && base.q !== "" && next.q !== "" ? "replace" : "push";
-    const qs = writePackParams(next).toString();
-    heading.current = { params: next, sent: new Set([...heading.current.sent, qs]) };
-    router[how](qs ? `${pathname}?${qs}` : pathname, { scroll: false });
-  };
-
+    if (island || refocusIndex === null) return;
+    tableBox.current?.querySelectorAll("button")[refocusIndex]?.focus();
+    refocusIndex = null;
+  }, [island]);
+  const suggested = options.groups[0] ?? null;
   return (
-    <PacksView
-      params={params}
-      page={shown.page}
-      options={options}
-      loading={loading}
-      error={shown.error}
-      onChange={onChange}
-    />
+    <div className="space-y-4">
+      <PackFilters params={params} options={options} onChange={changeFilters} />
+      {fetched.error && fetched.key === canonical ? (
+        <p role="alert" className="rounded-md border border-warn/40 bg-warn-soft px-3 py-2 text-sm text-warn">
+          {fetched.error}
+        </p>
+      ) : null}
+      <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+        {params.group === null ? (
+          <p className="muted">Choose a like-for-like group to fill the measured columns.</p>
+        ) : (
+          <span />
+        )}
+        {params.group === null && suggested ? (
+          // A link (the state is in the URL), so it works before the page's script has loaded too.
+          <a
+            href={`/packs?${writePackParams({ ...params, group: suggested.key, page: 1 }).toString()}`}
+            onClick={(e) => {
+              e.preventDefault();
+              changeFilters({ group: suggested.key, page: 1 });
+            }}
+            data-testid="suggested-group"
+            className="rounded border border-cell-500/40 px-2 py-1 text-left text-cell-700 no-underline hover:bg-cell-50 hover:no-underline dark:text-cell-100 dark:hover:bg-cell-700/20"
+          >
+            Fill them from the most tested group: {suggested.label} ({suggested.packCount} packs)
+          </a>
+        ) : null}
+        <details className="menu">
+          <summary className="btn-sm">Columns</summary>
+          <fieldset className="menu-panel w-60 space-y-1">
+            <legend className="sr-only">Show columns</legend>
+            {PACK_COLUMNS.map((c) => (
+              <label key={c.id} className="flex items-center gap-2">
+                <input
+                  type="checkbox"
+                  checked={!hidden.includes(c.id)}
+                  onChange={(e) => setHidden((h) => (e.target.checked ? h.filter((x) => x !== c.id) : [...h, c.id]))}
+                />
+                {c.name}
+              </label>
+            ))}
+          </fieldset>
+        </details>
+      </div>
+      {/* The hidden columns are a class on the wrapper, so the static island obeys them as well. */}
+      <div ref={tableBox} onClick={onTableClick} className={hidden.map((h) => `hide-${h}`).join(" ")}>
+        {island ? (
+          first
+        ) : (
+          <PackTable
+            page={fetched.key === canonical && fetched.page ? fetched.page : emptyPage(params)}
+            params={params}
+            loading={loading}
+          />
+        )}
+      </div>
+      <label className="flex items-center justify-end gap-2 text-sm">
+        Per page
+        <select
+          value={params.size}
+          onChange={(e) => changeFilters({ size: Number(e.target.value), page: 1 })}
+          className="input py-0.5"
+        >
+          {PAGE_SIZES.map((s) => (
+            <option key={s} value={s}>
+              {s}
+            </option>
+          ))}
+        </select>
+      </label>
+    </div>
   );
 }
+
+const emptyPage = (p: PackParams): ApiPackPage => ({
+  data: [],
+  page: p.page,
+  pageCount: 1,
+  total: 0,
+});

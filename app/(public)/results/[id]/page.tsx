@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { LogFigure } from "@/components/charts/log-figure";
+import { StaticIsland } from "@/components/static-island";
 import { recordId } from "@/lib/validations/ids";
-import { LineChart } from "@/components/charts/line-chart";
 import { DischargesTable } from "@/components/analysis/discharges-table";
 import { RetentionSummary } from "@/components/analysis/retention-summary";
 import { FlagResultForm } from "@/components/flag-result-form-client";
@@ -44,7 +44,6 @@ export default async function ResultPage(props: Props) {
   if (!r) notFound();
   const group = describeResultGroup(r);
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
-  const temps = time.filter((p): p is typeof p & { tc: number } => p.tc !== null);
   const logFile = logDownloadName(r.id, r.logFilename);
   const command = recomputeCommand(logFile, {
     cells: r.pack.cellsInSeries,
@@ -60,7 +59,7 @@ export default async function ResultPage(props: Props) {
     <article className="space-y-8">
       <header className="space-y-2">
         <p className="muted text-sm">
-          <Link href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</Link> ·{" "}
+          <a href={`/packs/${r.pack.slug}`}>{packTitle(r.pack)}</a> ·{" "}
           <span className="num">{labelSpec({ ...r.pack, ratedCapacityMah: r.ratedCapacityMah })}</span>
         </p>
         <h1>Result #{r.id}</h1>
@@ -97,7 +96,7 @@ export default async function ResultPage(props: Props) {
           <FiguresList f={r.figures} />
           <p className="muted text-xs">
             Computed by Sagline from the uploaded log.{" "}
-            <Link href={methodsHref(METHODS_ANCHORS.figures)}>How each figure is defined</Link>.
+            <a href={methodsHref(METHODS_ANCHORS.figures)}>How each figure is defined</a>.
           </p>
         </section>
       </div>
@@ -110,43 +109,22 @@ export default async function ResultPage(props: Props) {
 
       <section aria-labelledby="log" className="space-y-4">
         <h2 id="log">Log</h2>
-        <LineChart
-          title="Voltage per cell over time"
-          xLabel="Time (s)"
-          yLabel="Voltage per cell (V)"
-          xDigits={0}
-          yDigits={3}
-          tableCaption={`Result #${r.id}: voltage per cell over time`}
-          series={[{ id: "v", label: "voltage per cell", points: time.map((p) => ({ x: p.s, y: p.vpc })) }]}
-          notes={<p>{time.length} points kept of the log by largest-triangle downsampling; rest periods included.</p>}
-        />
-        <div className="grid gap-4 lg:grid-cols-2">
-          <LineChart
-            title="Current over time"
-            xLabel="Time (s)"
-            yLabel="Current (A)"
-            xDigits={0}
-            yDigits={2}
-            tableCaption={`Result #${r.id}: current`}
-            series={[{ id: "a", label: "current", points: time.map((p) => ({ x: p.s, y: p.a })), styleIndex: 1 }]}
+        <StaticIsland id="log-island">
+          <LogFigure
+            id="log-chart"
+            title="Voltage, current and temperature over time"
+            points={time.map((p) => ({ s: p.s, v: p.vpc, a: p.a, t: p.tc }))}
+            cells={r.pack.cellsInSeries}
+            stopTemperatureC={r.stopTemperatureC}
+            caption={`Result #${r.id}: the log`}
+            notes={
+              <p>
+                {time.length} points kept of the log by largest-triangle downsampling; rest periods included. Each panel
+                has its own scale; they share the time axis.
+              </p>
+            }
           />
-          {temps.length ? (
-            <LineChart
-              title="Pack temperature over time"
-              xLabel="Time (s)"
-              yLabel="Pack temperature (°C)"
-              xDigits={0}
-              yDigits={1}
-              tableCaption={`Result #${r.id}: pack temperature`}
-              refLines={[{ y: r.stopTemperatureC, label: `stop ${r.stopTemperatureC} °C` }]}
-              series={[
-                { id: "t", label: "pack temperature", points: temps.map((p) => ({ x: p.s, y: p.tc })), styleIndex: 3 },
-              ]}
-            />
-          ) : (
-            <p className="muted">The log has no temperature column.</p>
-          )}
-        </div>
+        </StaticIsland>
       </section>
 
       <section aria-labelledby="raw-log" className="space-y-2" data-testid="raw-log">

@@ -2,9 +2,10 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { LogCurveChart } from "@/components/charts/log-curve-chart";
+import { LogFigure } from "@/components/charts/log-figure";
 import { ReviewHistory } from "@/components/review-history";
 import { getReviewDetail } from "@/db/queries/review";
+import { prepareTimeCurve } from "@/lib/curves";
 import { labelSpec, packTitle } from "@/lib/format";
 import { catalogueStatusLabels, reviewStatusLabels } from "@/lib/labels";
 import { recordId } from "@/lib/validations/ids";
@@ -97,7 +98,19 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
 
           <section className="card space-y-3" aria-labelledby="curve-h">
             <h2 id="curve-h">Curves</h2>
-            <LogCurveChart points={r.curve} title="Voltage, current and temperature over time" withTemperature />
+            <LogFigure
+              id="review-log"
+              title="Voltage, current and temperature over time"
+              points={prepareTimeCurve(r.curve, d.pack.cellsInSeries, 300).map((q) => ({
+                s: q.s,
+                v: q.vpc,
+                a: q.a,
+                t: q.tc,
+              }))}
+              cells={d.pack.cellsInSeries}
+              stopTemperatureC={r.stopTemperatureC}
+              caption={`Result #${r.id}: the log`}
+            />
           </section>
 
           <MethodAndFigures d={d} />

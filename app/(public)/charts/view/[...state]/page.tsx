@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
-import { ServerChartSvg } from "@/components/charts/server-chart-svg";
+import { ChartDataFigure } from "@/components/charts/chart-data-figure";
 import { env } from "@/server/env";
 import { loadChartData } from "@/server/open-data/load-chart-data";
 import {
@@ -55,20 +54,19 @@ export default async function ChartPage({ params }: Props) {
     <div className="space-y-6">
       <div className="space-y-1">
         <p className="muted text-sm">
-          <Link href="/charts">Charts</Link> · {CHART_KIND_LABELS[state.kind]}
+          <a href="/charts">Charts</a> · {CHART_KIND_LABELS[state.kind]}
         </p>
         <h1>{state.title}</h1>
+        {state.note ? <p className="muted max-w-3xl">{state.note}</p> : null}
       </div>
-      <figure className="card overflow-hidden p-2">
-        <ServerChartSvg data={data} />
-        <figcaption className="muted px-2 pt-2 text-sm">
-          Data: {ATTRIBUTION}, licensed{" "}
-          <a href={DATA_LICENCE_URL} rel="license">
-            {DATA_LICENCE_LABEL}
-          </a>
-          . Only results in one like-for-like group are compared. {data.leftOut.join(" ")}
-        </figcaption>
-      </figure>
+      <ChartDataFigure data={data} />
+      <p className="muted text-sm">
+        Data: {ATTRIBUTION}, licensed{" "}
+        <a href={DATA_LICENCE_URL} rel="license">
+          {DATA_LICENCE_LABEL}
+        </a>
+        . Only results in one like-for-like group are compared. {data.leftOut.join(" ")}
+      </p>
       <section className="grid gap-6 lg:grid-cols-[2fr_1fr]" aria-label="Use this chart">
         <div className="space-y-6">
           <EmbedSnippet snippet={embedSnippet(state, base)} />
@@ -112,7 +110,7 @@ export default async function ChartPage({ params }: Props) {
           <p className="muted">Credit: “{ATTRIBUTION_TEXT}”</p>
           <SaveChart state={state} />
           <p>
-            <Link href={`/charts/new?from=${encodeURIComponent(encodeChartState(state))}`}>Change this chart</Link> ·{" "}
+            <a href={`/charts/new?from=${encodeURIComponent(encodeChartState(state))}`}>Change this chart</a> ·{" "}
             <a href={links.embed}>Open the embed</a>
           </p>
         </div>

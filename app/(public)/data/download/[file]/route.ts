@@ -3,6 +3,7 @@
 import { downloadPath, downloadQuery } from "@/lib/api-contract/queries";
 import { DATASETS } from "@/lib/open-data/datapackage";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
+import { parseUnitsParam } from "@/lib/units";
 import { apiGet, apiOptions, checkContract, parsePath, parseQuery, sendCached } from "@/server/api";
 import { env } from "@/server/env";
 import { buildDownload, readmeFile } from "@/server/open-data/downloads";
@@ -13,11 +14,18 @@ export const GET = apiGet<{ file: string }>(async (req, params) => {
     downloadPath,
     "No such file: makers, packs or results as .csv or .json, or README.txt.",
   );
-  const filters = parseQuery(req, downloadQuery);
+  const { units, ...filters } = parseQuery(req, downloadQuery);
   const [name, ext] = file.split(".");
   const dataset = DATASETS.find((d) => d === name);
   const out = dataset
-    ? await buildDownload(dataset, ext === "json" ? "json" : "csv", filters, env().APP_URL)
+    ? await buildDownload(
+        dataset,
+        ext === "json" ? "json" : "csv",
+        filters,
+        env().APP_URL,
+        new Date(),
+        parseUnitsParam(units),
+      )
     : readmeFile(env().APP_URL);
   if (out.checked) checkContract(out.checked.schema, out.checked.value);
   return sendCached(req, {

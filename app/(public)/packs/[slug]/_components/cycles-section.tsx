@@ -1,5 +1,4 @@
-import Link from "next/link";
-import { LineChart } from "@/components/charts/line-chart";
+import { LineFigure } from "@/components/charts/line-figure";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
 import type { CycleSeries, OnePackSeries, PackAgeing } from "@/lib/pack-summary";
@@ -33,8 +32,8 @@ function OnePack({ s }: { s: OnePackSeries }) {
     <div className="space-y-3" data-testid="ageing-one-pack">
       <h3 className="text-base">Capacity kept over the cycles of one pack</h3>
       <p className="text-sm">
-        From the log of <Link href={`/results/${s.resultId}`}>result #{s.resultId}</Link>: {r.points.length} discharges
-        of one physical pack to its cut-off, in one log ({s.groupLabel}). Kept ={" "}
+        From the log of <a href={`/results/${s.resultId}`}>result #{s.resultId}</a>: {r.points.length} discharges of one
+        physical pack to its cut-off, in one log ({s.groupLabel}). Kept ={" "}
         {r.reference === "rated" ? "capacity ÷ rated capacity" : "capacity ÷ the first cycle's capacity"}
         {t
           ? `; straight-line fit ${fmt(t.slopePerCycle * 100, 3)} % per cycle${t.r2 !== null ? `, r² ${fmt(t.r2, 2)}` : ""}`
@@ -49,12 +48,13 @@ function OnePack({ s }: { s: OnePackSeries }) {
             ({s.otherSeries} other result{s.otherSeries === 1 ? "" : "s"} of this pack also hold several cycles.)
           </span>
         ) : null}{" "}
-        <Link href={methodsHref(METHODS_ANCHORS.discharges)}>How it is computed</Link>.
+        <a href={methodsHref(METHODS_ANCHORS.discharges)}>How it is computed</a>.
       </p>
-      <LineChart
+      <LineFigure
+        id="pack-one-kept"
         title="Capacity kept over the cycles of one pack"
         xLabel="Cycle in the log"
-        yLabel={r.reference === "rated" ? "Delivered ÷ rated capacity (%)" : "Delivered ÷ first cycle (%)"}
+        yLabel={r.reference === "rated" ? "Delivered ÷ rated capacity, %" : "Delivered ÷ first cycle, %"}
         xDigits={0}
         yDigits={1}
         tableCaption={`Capacity kept per cycle, result #${s.resultId}`}
@@ -83,13 +83,13 @@ function OnePack({ s }: { s: OnePackSeries }) {
 }
 
 /** Results at different cycle counts: separate tests, possibly of different packs — said plainly. */
-function AcrossResults({ c }: { c: CycleSeries }) {
+function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
   const retained = c.points.flatMap((p) =>
     p.capacityMah === null ? [] : [{ x: p.cycles, y: pct(p.capacityMah / c.ratedCapacityMah) }],
   );
   const xs = c.points.map((p) => p.cycles);
   const resistance = c.points.flatMap((p) =>
-    p.dcResistanceMohm === null ? [] : [{ x: p.cycles, y: p.dcResistanceMohm }],
+    p.dcResistanceMohm === null ? [] : [{ x: p.cycles, y: Math.round((p.dcResistanceMohm / cells) * 1000) / 1000 }],
   );
   const t = c.trend;
   return (
@@ -108,10 +108,11 @@ function AcrossResults({ c }: { c: CycleSeries }) {
         </span>
       </p>
       <div className="grid gap-4 lg:grid-cols-2">
-        <LineChart
+        <LineFigure
+          id="pack-kept"
           title="Capacity of results at different cycle counts"
           xLabel="Cycles before the test (stated)"
-          yLabel="Delivered ÷ rated capacity (%)"
+          yLabel="Delivered ÷ rated capacity, %"
           xDigits={0}
           yDigits={1}
           tableCaption="Capacity of results at different cycle counts"
@@ -130,12 +131,15 @@ function AcrossResults({ c }: { c: CycleSeries }) {
               : []),
           ]}
         />
-        <LineChart
+        <LineFigure
+          id="pack-dcr"
           title="DC resistance of results at different cycle counts"
           xLabel="Cycles before the test (stated)"
-          yLabel="DC resistance (mΩ)"
+          yLabel="DC resistance"
+          yUnit="r"
+          cells={cells}
           xDigits={0}
-          yDigits={1}
+          yDigits={2}
           tableCaption="DC resistance of results at different cycle counts"
           series={[{ id: "r", label: "one result", points: resistance, mode: "points", styleIndex: 2 }]}
         />
@@ -145,7 +149,7 @@ function AcrossResults({ c }: { c: CycleSeries }) {
 }
 
 /** A pack's ageing figures: one pack's series from a multi-cycle log first; results across cycle counts beside it. */
-export function CyclesSection({ ageing }: { ageing: PackAgeing }) {
+export function CyclesSection({ ageing, cells }: { ageing: PackAgeing; cells: number }) {
   if (!ageing.onePack && !ageing.acrossResults)
     return (
       <p className="muted">
@@ -162,7 +166,7 @@ export function CyclesSection({ ageing }: { ageing: PackAgeing }) {
           No published log holds several cycles of one pack yet: a log of many cycles gives this pack&apos;s own ageing.
         </p>
       )}
-      {ageing.acrossResults ? <AcrossResults c={ageing.acrossResults} /> : null}
+      {ageing.acrossResults ? <AcrossResults c={ageing.acrossResults} cells={cells} /> : null}
     </div>
   );
 }

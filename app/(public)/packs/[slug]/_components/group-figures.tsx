@@ -1,7 +1,6 @@
-import Link from "next/link";
 import { SummaryValue } from "@/components/summary-value";
 import { LABEL_RATIO_LABELS, METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
-import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
+import { fmt, fmtC, fmtLabelledC, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { GroupFigures } from "@/lib/pack-summary";
 
 /** Label vs measured, one row per like-for-like group: medians with n and spread. Groups are never pooled. */
@@ -9,22 +8,24 @@ export function GroupFiguresTable({
   groups,
   labelledC,
   ratedMah,
+  cells,
 }: {
   groups: GroupFigures[];
   labelledC: number;
   ratedMah: number;
+  cells: number;
 }) {
   if (groups.length === 0)
     return (
       <p className="muted">
-        No published results yet. <Link href="/submit">Submit one</Link>.
+        No published results yet. <a href="/submit">Submit one</a>.
       </p>
     );
   return (
     <div className="space-y-2">
       <p className="muted text-xs">
-        Label: {fmt(labelledC)}C continuous, {fmt(ratedMah)} mAh. Each row is one like-for-like group; values are
-        medians of its published results (n, and min–max underneath).
+        Label: {fmtLabelledC(labelledC)} continuous, {fmt(ratedMah)} mAh. Each row is one like-for-like group; values
+        are medians of its published results (n, and min–max underneath).
       </p>
       <div
         className="-mx-4 overflow-x-auto px-4"
@@ -32,84 +33,70 @@ export function GroupFiguresTable({
         role="region"
         aria-label="Figures by like-for-like group"
       >
-        <table className="w-full min-w-[60rem] border-collapse text-sm" data-testid="group-figures">
+        <table className="figs min-w-[60rem]" data-testid="group-figures">
           <caption className="sr-only">Label against measured figures by like-for-like group</caption>
           <thead>
-            <tr className="border-b border-ink/15 text-left align-bottom dark:border-night-line">
-              <th scope="col" className="px-2 py-1 font-medium">
-                Like-for-like group
+            <tr>
+              <th scope="col">Like-for-like group</th>
+              <th scope="col">
+                Sag-limited C <small className="font-normal">estimate</small>
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Sag-limited C <span className="muted font-normal">(estimate)</span>
+              <th scope="col">
+                Label ratio <small className="font-normal">estimate ÷ label</small>
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Label ratio <span className="muted font-normal">(estimate ÷ label)</span>
+              <th scope="col">
+                Sustained C <small className="font-normal">measured, highest</small>
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Sustained C <span className="muted font-normal">(measured, highest)</span>
+              <th scope="col">
+                Label ratio <small className="font-normal">measured ÷ label</small>
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Label ratio <span className="muted font-normal">(measured ÷ label)</span>
+              <th scope="col">Delivered</th>
+              <th scope="col">Capacity ratio</th>
+              <th scope="col">Hold voltage</th>
+              <th scope="col">DC resistance</th>
+              <th scope="col">
+                At 25 °C <small className="font-normal">estimate</small>
               </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Delivered
-              </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Capacity ratio
-              </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Hold voltage
-              </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                DC resistance
-              </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                At 25 °C <span className="muted font-normal">(estimate)</span>
-              </th>
-              <th scope="col" className="px-2 py-1 font-medium">
-                Temp. rise
-              </th>
+              <th scope="col">Temp. rise</th>
             </tr>
           </thead>
           <tbody>
             {groups.map((g) => (
-              <tr key={g.group.key} className="border-b border-ink/5 align-top dark:border-night-line/60">
-                <th scope="row" className="min-w-[13rem] max-w-[18rem] px-2 py-2 text-left font-normal">
+              <tr key={g.group.key}>
+                <th scope="row">
                   {g.group.label}
-                  <span className="muted block text-xs">
+                  <small>
                     {g.n} result{g.n === 1 ? "" : "s"}
                     {g.openCases ? `, ${g.openCases} being checked by moderators` : ""}
-                  </span>
+                  </small>
                 </th>
-                <td className="px-2 py-2">
+                <td>
                   <SummaryValue s={g.figures.sagLimitedC} digits={1} unit="C" />
                 </td>
-                <td className="px-2 py-2">
+                <td>
                   <SummaryValue s={g.figures.labelRatio} digits={2} />
                 </td>
-                <td className="num px-2 py-2">
-                  {g.sustainedC === null ? <span className="muted">—</span> : `${fmt(g.sustainedC, 1)}C`}
-                </td>
-                <td className="px-2 py-2">
+                <td className="num">{g.sustainedC === null ? <span className="muted">—</span> : fmtC(g.sustainedC)}</td>
+                <td>
                   <SummaryValue s={g.figures.sustainedLabelRatio} digits={2} />
                 </td>
-                <td className="px-2 py-2">
+                <td>
                   <SummaryValue s={g.figures.capacityMah} digits={0} unit="mAh" />
                 </td>
-                <td className="px-2 py-2">
+                <td>
                   <SummaryValue s={g.figures.capacityRatio} digits={2} />
                 </td>
-                <td className="px-2 py-2">
-                  <SummaryValue s={g.figures.holdVoltagePerCellV} digits={3} unit="V/cell" />
+                <td>
+                  <SummaryValue s={g.figures.holdVoltagePerCellV} digits={3} q="v" cells={cells} />
                 </td>
-                <td className="px-2 py-2">
-                  <SummaryValue s={g.figures.dcResistanceMohm} digits={1} unit="mΩ" />
+                <td>
+                  <SummaryValue s={g.figures.dcResistanceMohm} digits={2} q="r" cells={cells} divide={cells} />
                 </td>
-                <td className="px-2 py-2">
-                  <SummaryValue s={g.figures.resistanceAt25CMohm} digits={1} unit="mΩ" />
+                <td>
+                  <SummaryValue s={g.figures.resistanceAt25CMohm} digits={2} q="r" cells={cells} divide={cells} />
                 </td>
-                <td className="px-2 py-2">
-                  <SummaryValue s={g.figures.temperatureRiseC} digits={1} unit="°C" />
+                <td>
+                  <SummaryValue s={g.figures.temperatureRiseC} digits={1} q="dtemp" />
                 </td>
               </tr>
             ))}
@@ -121,17 +108,17 @@ export function GroupFiguresTable({
           <strong>{RATING_LABELS.estimate}</strong> is an estimate from a resistance, not a tested rate: the current at
           which the pack would sag from 3.7 V nominal to a 3.3 V floor per cell through the resistance read 10 s after
           the load edge, at each test&apos;s pack temperature (each result lists its own assumptions).{" "}
-          <Link href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>Definition</Link>. {LABEL_RATIO_LABELS.estimate}.
+          <a href={methodsHref(METHODS_ANCHORS.sagLimitedC)}>Definition</a>. {LABEL_RATIO_LABELS.estimate}.
         </p>
         <p>
           <strong>{RATING_LABELS.measured}</strong> is measured: the current a run actually drew to its cut-off while
           holding the floor and staying under the stop temperature; a group shows the highest among its approved
-          results. <Link href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</Link>. {LABEL_RATIO_LABELS.measured}.
+          results. <a href={methodsHref(METHODS_ANCHORS.sustainedC)}>The rule</a>. {LABEL_RATIO_LABELS.measured}.
         </p>
         <p>
-          DC resistance is the pack&apos;s, as measured; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE}{" "}
-          — always read it beside the raw value. Definitions:{" "}
-          <Link href={methodsHref(METHODS_ANCHORS.figures)}>methods</Link>.
+          DC resistance is measured on the pack and shown per cell (the pack&apos;s ÷ {cells} cells) unless you choose
+          per pack under Units; &quot;at 25 °C&quot; is an estimate by {RESISTANCE_25C_SOURCE} — always read it beside
+          the raw value. Definitions: <a href={methodsHref(METHODS_ANCHORS.figures)}>methods</a>.
         </p>
       </div>
     </div>

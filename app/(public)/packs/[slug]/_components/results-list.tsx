@@ -1,10 +1,16 @@
-import Link from "next/link";
 import { MethodCard } from "@/components/method-card";
-import { fmt, fmtDate, fmtRatio } from "@/lib/format";
+import { Qty } from "@/components/quantity";
+import { fmt, fmtC, fmtDate, fmtRatio } from "@/lib/format";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 /** The pack's published results, newest first, each with its method card. */
-export function ResultsList({ results }: { results: (PublicResultRow & { groupLabel: string })[] }) {
+export function ResultsList({
+  results,
+  cells,
+}: {
+  results: (PublicResultRow & { groupLabel: string })[];
+  cells: number;
+}) {
   const list = [...results].sort((a, b) => (b.publishedAt ?? "").localeCompare(a.publishedAt ?? "") || b.id - a.id);
   if (list.length === 0) return <p className="muted">No published results yet.</p>;
   return (
@@ -12,9 +18,9 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
       {list.map((r) => (
         <li key={r.id} className="card space-y-2">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <Link href={`/results/${r.id}`} className="font-medium">
+            <a href={`/results/${r.id}`} className="font-medium">
               Result #{r.id}
-            </Link>
+            </a>
             <span className="muted text-xs">
               published {fmtDate(r.publishedAt)}
               {r.openCase ? (
@@ -25,8 +31,8 @@ export function ResultsList({ results }: { results: (PublicResultRow & { groupLa
           <p className="muted text-xs">{r.groupLabel}</p>
           <p className="num text-sm">
             {fmt(r.capacityMah, 0, "mAh")} delivered · capacity ratio {fmtRatio(r.capacityRatio)} · sustained{" "}
-            {fmt(r.sustainedCMeasured, 1, "C")} (measured) · sag-limited {fmt(r.sagLimitedC, 1, "C")} (estimate) · DC{" "}
-            {fmt(r.dcResistanceMohm, 1, "mΩ")}
+            {fmtC(r.sustainedCMeasured)} (measured) · sag-limited {fmtC(r.sagLimitedC)} (estimate) · DC{" "}
+            <Qty q="r" v={r.dcResistanceMohm === null ? null : r.dcResistanceMohm / cells} digits={2} cells={cells} />
             {r.retention ? ` · ${r.retention.points.length} cycles in one log` : ""}
           </p>
           <details>

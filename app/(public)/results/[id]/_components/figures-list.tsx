@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Qty } from "@/components/quantity";
 import { RatingFigures } from "@/components/analysis/rating-figures";
 import type { Figures } from "@/lib/analysis";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
@@ -12,7 +12,7 @@ function cutoffWords(f: Figures): string {
 
 /** Every figure computed from the log (the headline discharge), with its unit; missing ones show "—". */
 export function FiguresList({ f }: { f: Figures }) {
-  const rows: [string, string, string?][] = [
+  const rows: [string, React.ReactNode, React.ReactNode?][] = [
     ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
     ["Capacity ratio", fmt(f.capacityRatio, 2), "delivered ÷ rated"],
     ["Delivered energy", fmt(f.energyWh, 2, "Wh")],
@@ -36,12 +36,16 @@ export function FiguresList({ f }: { f: Figures }) {
     [
       "DC resistance at 25 °C",
       fmt(f.resistanceAt25CMohm, 1, "mΩ"),
-      `estimate from ${fmt(f.resistanceTemperatureC, 1, "°C")}: ${RESISTANCE_25C_SOURCE}`,
+      <>
+        estimate from <Qty q="temp" v={f.resistanceTemperatureC} digits={1} />: {RESISTANCE_25C_SOURCE}
+      </>,
     ],
     [
       "Temperature rise",
-      fmt(f.temperatureRiseC, 1, "°C"),
-      `${fmt(f.startTemperatureC, 1, "°C")} → ${fmt(f.peakTemperatureC, 1, "°C")}`,
+      <Qty key="r" q="dtemp" v={f.temperatureRiseC} digits={1} />,
+      <>
+        <Qty q="temp" v={f.startTemperatureC} digits={1} /> → <Qty q="temp" v={f.peakTemperatureC} digits={1} />
+      </>,
     ],
     ["Time to cut-off", cutoffWords(f)],
     [
@@ -81,7 +85,7 @@ export function FiguresList({ f }: { f: Figures }) {
             ))}
           </ul>
           <p className="muted text-xs">
-            <Link href={methodsHref(METHODS_ANCHORS.readings)}>What the warnings mean</Link>
+            <a href={methodsHref(METHODS_ANCHORS.readings)}>What the warnings mean</a>
           </p>
         </div>
       ) : null}

@@ -8,9 +8,9 @@ import { enforceRateLimit, limits } from "@/server/rate-limit";
 import { withPermission } from "@/server/route";
 import { loadChartData } from "@/server/open-data/load-chart-data";
 import { svgToPng } from "@/server/open-data/chart-png";
+import { chartSvgMarkup } from "@/components/charts/image/render";
 import { parseChartImageSize } from "@/lib/open-data/chart-size";
 import { decodeChartState } from "@/lib/open-data/chart-state";
-import { renderChartSvg } from "@/lib/open-data/chart-svg";
 import { DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 const params = z.object({ state: z.string().min(1).max(4000), file: z.enum(["chart.svg", "chart.png"]) });
@@ -26,7 +26,7 @@ export const GET = withPermission<{ params: Promise<{ state: string; file: strin
   if (!sized.ok)
     throw new AppError("bad_request", Object.values(sized.fieldErrors).flat().join(" "), sized.fieldErrors);
   const { width, height, scale } = sized.size;
-  const svg = renderChartSvg(await loadChartData(state), { width, height });
+  const svg = chartSvgMarkup(await loadChartData(state), { width, height });
   const slug =
     state.title
       .toLowerCase()

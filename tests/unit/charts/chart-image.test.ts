@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { chartSvgMarkup as renderChartSvg } from "@/components/charts/image/render";
 import type { ChartData } from "@/lib/open-data/chart-data";
-import { escapeXml, niceTicks, renderChartSvg, wrapText } from "@/lib/open-data/chart-svg";
+import { escapeXml, wrapText } from "@/lib/open-data/chart-svg-kit";
 
 const base = (kind: ChartData["state"]["kind"]): ChartData => ({
   rating: "estimate",
@@ -10,11 +11,11 @@ const base = (kind: ChartData["state"]["kind"]): ChartData => ({
   leftOut: ["1 pack without a sag-limited C left out."],
 });
 
-describe("chart SVG", () => {
+describe("chart image", () => {
   it("carries the licence and 'Source: Sagline' inside the drawing (product rule)", () => {
     const svg = renderChartSvg({
       ...base("label-check"),
-      labelCheck: [{ label: "P", labelledC: 50, measuredC: 30, n: 2 }],
+      labelCheck: [{ id: "p", label: "P", labelledC: 50, ratingC: 30, n: 2 }],
     });
     expect(svg).toContain("Source: Sagline");
     expect(svg).toContain("CC BY 4.0");
@@ -22,13 +23,14 @@ describe("chart SVG", () => {
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
   });
   it("names the rating it draws: the estimate as an estimate, the measured rating as measured", () => {
-    const point = [{ label: "P", labelledC: 50, measuredC: 30, n: 2 }];
+    const point = [{ id: "p", label: "P", labelledC: 50, ratingC: 30, n: 2 }];
     const estimate = renderChartSvg({ ...base("label-check"), labelCheck: point });
-    expect(estimate).toContain("Sag-limited C, an estimate (C)");
+    expect(estimate).toContain("Sag-limited C, an estimate from resistance (C)");
     expect(estimate).not.toMatch(/Measured C/);
     const measured = renderChartSvg({ ...base("label-check"), rating: "measured", labelCheck: point });
-    expect(measured).toContain("Sustained C, measured (C)");
-    expect(measured).toContain("Pack (its sustained C, measured)");
+    expect(measured).toContain("Sustained C, measured from the run (C)");
+    expect(measured).toContain("held its label or more");
+    expect(measured).not.toContain("an estimate");
     const ranking = renderChartSvg({
       ...base("maker-ranking"),
       rating: "measured",
@@ -43,6 +45,7 @@ describe("chart SVG", () => {
     expect(escapeXml(`"'`)).toBe("&quot;&apos;");
   });
   it("draws each kind", () => {
+    // One line in compact relative steps (tenths of a percent across, pixels down): falling voltage goes right and down.
     expect(
       renderChartSvg({
         ...base("curves"),
@@ -56,7 +59,7 @@ describe("chart SVG", () => {
           },
         ],
       }),
-    ).toContain('<path d="M');
+    ).toMatch(/<path d="M\d+,\d+l\d+,\d+"/);
     expect(
       renderChartSvg({
         ...base("maker-ranking"),
@@ -66,11 +69,6 @@ describe("chart SVG", () => {
     expect(renderChartSvg({ ...base("label-check"), counts: { packs: 0, results: 0 } })).toContain(
       "No approved results match this chart yet.",
     );
-  });
-  it("chooses ticks whose last one covers the maximum (common practice)", () => {
-    expect(niceTicks(0, 107)).toEqual([0, 25, 50, 75, 100, 125]);
-    expect(niceTicks(0, 100)).toEqual([0, 20, 40, 60, 80, 100]);
-    expect(niceTicks(3.4, 4.2).at(-1)).toBeGreaterThanOrEqual(4.2);
   });
   it("wraps long titles and marks cut text with an ellipsis", () => {
     const lines = wrapText("word ".repeat(100), 400, 20, 2);

@@ -1,10 +1,10 @@
-// Legibility of the chart at every size: each text is measured with the real shipped font (resvg lays it
-// out alone on the chart's canvas), so estimates in the renderer cannot hide an overflow or a collision.
+// Legibility of the chart image at every size: each text is measured with the real shipped font (resvg lays it
+// out alone, in its place in the picture), so estimates in the layout cannot hide an overflow or a collision.
 import { Resvg } from "@resvg/resvg-js";
 import { describe, expect, it } from "vitest";
 import type { ChartData } from "@/lib/open-data/chart-data";
 import type { ChartSize } from "@/lib/open-data/chart-size";
-import { renderChartSvg } from "@/lib/open-data/chart-svg";
+import { chartSvgMarkup as renderChartSvg } from "@/components/charts/image/render";
 import { chartFontFiles } from "@/server/open-data/font";
 
 const labels = [
@@ -33,11 +33,11 @@ const base = (kind: ChartData["state"]["kind"]): ChartData => ({
 const charts: Record<string, ChartData> = {
   "label-check": {
     ...base("label-check"),
-    labelCheck: labels.map((label, i) => ({ label, labelledC: 30 + i * 15, measuredC: 20 + i * 6, n: 3 })),
+    labelCheck: labels.map((label, i) => ({ id: `p${i}`, label, labelledC: 30 + i * 15, ratingC: 20 + i * 6, n: 3 })),
   },
   curves: {
     ...base("curves"),
-    curves: labels.map((label, i) => ({
+    curves: labels.slice(0, 7).map((label, i) => ({
       label,
       points: Array.from({ length: 30 }, (_, j) => ({
         capacityPercent: j * 3.4,
@@ -67,16 +67,29 @@ const sizes: ChartSize[] = [
 
 type Measured = { text: string; fontSize: number; x0: number; y0: number; x1: number; y1: number };
 
+const TEXT = /<text ([^>]*)>([^<]*)<\/text>/g;
+/** The picture's own units: its viewBox, and how many pixels one of them is. */
+function frame(svg: string) {
+  const [, , w, h] = (/viewBox="([^"]+)"/.exec(svg)?.[1] ?? "").split(" ").map(Number);
+  const width = Number(/ width="(\d+)"/.exec(svg)?.[1]);
+  return { w: w ?? 0, h: h ?? 0, k: width / (w ?? 1) };
+}
+
+/** Each text alone in its place: the other texts and every shape removed, the nesting kept. */
 function measureTexts(svg: string): Measured[] {
-  const open = /^<svg [^>]*>/.exec(svg)?.[0] ?? "";
-  return [...svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)]
-    .map((m) => {
-      const one = `${open}${m[0]}</svg>`;
-      const box = new Resvg(one, {
+  const shapes = /<(path|circle|rect|line|use)\b[^>]*>(<\/\1>)?/g;
+  const texts = [...svg.matchAll(TEXT)];
+  return texts
+    .map((m, i) => {
+      let k = -1;
+      const alone = svg.replace(TEXT, (t) => (++k === i ? t : "")).replace(shapes, "");
+      const box = new Resvg(alone, {
         font: { fontFiles: chartFontFiles(), loadSystemFonts: false, defaultFontFamily: "Inter" },
       }).getBBox();
       if (!box) throw new Error(`nothing drawn for ${m[0]}`);
-      const fontSize = Number(/font-size="([\d.]+)"/.exec(m[1] ?? "")?.[1]);
+      const f = frame(svg);
+      // getBBox answers in the picture's own units (its viewBox); the font size is turned into pixels.
+      const fontSize = Number(/font-size="([\d.]+)"/.exec(m[1] ?? "")?.[1]) * f.k;
       return { text: m[2] ?? "", fontSize, x0: box.x, y0: box.y, x1: box.x + box.width, y1: box.y + box.height };
     })
     .filter((t) => t.text.trim() !== "");
@@ -86,9 +99,11 @@ const overlap = (a: Measured, b: Measured) =>
   Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0) > 0.5 && Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0) > 0.5;
 
 describe("chart SVG at the asked size", () => {
-  it("has the asked width, height and viewBox", () => {
+  it("has the asked width and height, and a viewBox of the same shape", () => {
     const svg = renderChartSvg(charts.curves as ChartData, { width: 480, height: 400 });
-    expect(svg).toMatch(/^<svg [^>]*viewBox="0 0 480 400" width="480" height="400"/);
+    expect(svg).toMatch(/^<svg [^>]*width="480" height="400"/);
+    const f = frame(svg);
+    expect(f.w / f.h).toBeCloseTo(480 / 400, 2);
     expect(renderChartSvg(charts.curves as ChartData)).toMatch(
       /^<svg [^>]*viewBox="0 0 800 500" width="800" height="500"/,
     );
@@ -99,13 +114,14 @@ describe("chart SVG at the asked size", () => {
       it(`${kind} at ${size.width} × ${size.height}: text at least 10 px, inside the picture, no two texts on top of each other`, () => {
         const svg = renderChartSvg(data, size);
         const texts = measureTexts(svg);
+        const f = frame(svg);
         expect(texts.length).toBeGreaterThan(3);
         for (const t of texts) {
           expect(t.fontSize, t.text).toBeGreaterThanOrEqual(10);
           expect(t.x0, `${t.text} starts inside`).toBeGreaterThanOrEqual(0);
-          expect(t.x1, `${t.text} ends inside`).toBeLessThanOrEqual(size.width);
+          expect(t.x1, `${t.text} ends inside`).toBeLessThanOrEqual(f.w);
           expect(t.y0, `${t.text} below the top`).toBeGreaterThanOrEqual(0);
-          expect(t.y1, `${t.text} above the bottom`).toBeLessThanOrEqual(size.height);
+          expect(t.y1, `${t.text} above the bottom`).toBeLessThanOrEqual(f.h);
         }
         for (let i = 0; i < texts.length; i++) {
           for (let j = i + 1; j < texts.length; j++) {
@@ -122,13 +138,17 @@ describe("chart SVG at the asked size", () => {
   }
 
   it("scales markers and type with the width (common practice: keep marks readable on small screens)", () => {
-    const radius = (svg: string) =>
-      Number(/<circle cx="[^"]+" cy="[^"]+" r="([\d.]+)" fill="#146d63" fill-opacity/.exec(svg)?.[1]);
-    const title = (svg: string) => Number(/font-size="([\d.]+)" font-weight="700"/.exec(svg)?.[1]);
-    const narrow = renderChartSvg(charts["label-check"] as ChartData, { width: 320, height: 400 });
-    const wide = renderChartSvg(charts["label-check"] as ChartData, { width: 1600, height: 1000 });
-    expect(radius(narrow)).toBeGreaterThanOrEqual(3.5);
-    expect(radius(wide)).toBeGreaterThan(radius(narrow));
+    // The layout is drawn at a design size and scaled by the viewBox: one factor for type, markers and strokes.
+    const marker = (svg: string) => Number(/<circle r="([\d.]+)" id="img-c"/.exec(svg)?.[1]) * frame(svg).k;
+    const title = (svg: string) => Number(/font-size="([\d.]+)" font-weight="700"/.exec(svg)?.[1]) * frame(svg).k;
+    const withMeets = {
+      ...(charts["label-check"] as ChartData),
+      labelCheck: [{ id: "m", label: "Meets", labelledC: 30, ratingC: 40, n: 2 }],
+    };
+    const narrow = renderChartSvg(withMeets, { width: 320, height: 400 });
+    const wide = renderChartSvg(withMeets, { width: 1600, height: 1000 });
+    expect(marker(narrow)).toBeGreaterThanOrEqual(4);
+    expect(marker(wide)).toBeGreaterThan(marker(narrow));
     expect(title(wide)).toBeGreaterThan(title(narrow));
     expect(title(narrow)).toBeGreaterThanOrEqual(16);
   });

@@ -1,0 +1,258 @@
+// The pieces every drawing shares. A drawing's x positions are percentages of its own width and its y
+// positions pixels, so one drawing fits a 320-pixel phone column and an 800-pixel image alike with its text at
+// its true size: on a page the <svg> is 100% wide; in an image it is nested at a known width. Lines and areas
+// live in a stretched inner <svg> (viewBox 0..1000 wide, preserveAspectRatio none) with non-scaling strokes;
+// markers are <use> of shapes defined once per drawing, placed with percentage x. Hook-free: see markup.ts.
+import { DEFAULT_UNITS, symbol, type Quantity } from "@/lib/units";
+import type { MarkerShape } from "../palette";
+
+/** A percentage as an attribute value, rounded to 0.01 %. */
+export const pct = (v: number) => `${Math.round(v * 100) / 100}%`;
+/** Pixels rounded to 0.1. */
+export const px = (v: number) => Math.round(v * 10) / 10;
+
+const MARKER_SIZE = 9;
+/** Pixels left of a drawing for its y values and titles: a page gives the <svg> a margin of this much (the
+ * .chart-svg class), an image nests it this far in; the drawing writes there with overflow visible. */
+export const GUTTER = 44;
+const TICK_FONT = 11;
+const TITLE_FONT = 12;
+
+/** Numbers as the site writes them: en-GB grouping, a fixed number of decimals. */
+export function fmtNum(v: number, digits: number): string {
+  return v.toLocaleString("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+}
+
+/** How many y ticks a plot of this height has room for (about one per 30 px, 2 to 5). */
+export const yTickCount = (plotPx: number) => Math.max(2, Math.min(5, Math.floor(plotPx / 30)));
+
+/**
+ * Path data for a line on the stretched canvas: points as (x in percent, y in pixels), written as one absolute
+ * move and then whole-unit relative steps (x in 0.1 % of the width, y in pixels) — the shortest text for a
+ * line that is exact to a pixel. Each step is taken between rounded absolute points, so no error piles up.
+ */
+export function linePath(points: { xPct: number; y: number }[]): string {
+  let out = "";
+  let px0 = 0;
+  let py0 = 0;
+  points.forEach((p, k) => {
+    const x = Math.round(p.xPct * 10);
+    const y = Math.round(p.y);
+    if (k === 0) out += `M${x},${y}`;
+    else {
+      const dx = x - px0;
+      const dy = y - py0;
+      out += `l${dx}${dy < 0 ? "" : ","}${dy}`;
+    }
+    px0 = x;
+    py0 = y;
+  });
+  return out;
+}
+
+/** The fewest decimals (up to `max`) that write every tick exactly: 0.05 steps need 2, 0.2 steps 1. */
+export function tickDigits(ticks: number[], max = 3): number {
+  for (let d = 0; d < max; d++)
+    if (ticks.every((t) => Math.abs(t * 10 ** d - Math.round(t * 10 ** d)) < 1e-6)) return d;
+  return max;
+}
+
+/** A shape centred on (0, 0), `size` roughly its diameter. */
+function shapePath(shape: MarkerShape, size = MARKER_SIZE): string {
+  const r = size / 2;
+  const f = (v: number) => px(v);
+  switch (shape) {
+    case "square":
+      return `M${f(-r * 0.85)},${f(-r * 0.85)}h${f(r * 1.7)}v${f(r * 1.7)}h${f(-r * 1.7)}Z`;
+    case "triangle":
+      return `M0,${f(-r * 1.1)}L${f(r)},${f(r * 0.75)}L${f(-r)},${f(r * 0.75)}Z`;
+    case "triangle-down":
+      return `M0,${f(r * 1.1)}L${f(r)},${f(-r * 0.75)}L${f(-r)},${f(-r * 0.75)}Z`;
+    case "diamond":
+      return `M0,${f(-r * 1.15)}L${f(r)},0L0,${f(r * 1.15)}L${f(-r)},0Z`;
+    case "cross":
+      return `M${f(-r)},${f(-r)}L${f(r)},${f(r)}M${f(r)},${f(-r)}L${f(-r)},${f(r)}`;
+    default:
+      return "";
+  }
+}
+
+/** The shape as an element centred on (0, 0): a <circle> for circles, a <path> otherwise. */
+export function Shape({ shape, ...rest }: { shape: MarkerShape } & React.SVGProps<SVGPathElement & SVGCircleElement>) {
+  return shape === "circle" ? <circle r={MARKER_SIZE / 2} {...rest} /> : <path d={shapePath(shape)} {...rest} />;
+}
+
+/** Short codes of the shapes, for the ids markers refer to (markup is sent for every point). */
+const SHAPE_CODE: Record<MarkerShape, string> = {
+  circle: "c",
+  square: "s",
+  triangle: "t",
+  "triangle-down": "v",
+  diamond: "d",
+  cross: "x",
+};
+
+/** One shape element per shape a drawing uses, for its <use> markers. */
+export function MarkerDefs({ prefix, shapes }: { prefix: string; shapes: MarkerShape[] }) {
+  return (
+    <defs>
+      {[...new Set(shapes)].map((s) => (
+        <Shape key={s} shape={s} id={`${prefix}-${SHAPE_CODE[s]}`} strokeWidth={s === "cross" ? 2 : 1.5} />
+      ))}
+    </defs>
+  );
+}
+
+/** A marker at (x %, y px); open shapes are outlined, crosses are always strokes. */
+export function MarkerUse({
+  prefix,
+  shape,
+  xPct,
+  y,
+  color,
+  filled = true,
+}: {
+  prefix: string;
+  shape: MarkerShape;
+  xPct: number;
+  y: number;
+  color: string;
+  filled?: boolean;
+}) {
+  const fill = filled && shape !== "cross" ? color : "none";
+  return <use href={`#${prefix}-${SHAPE_CODE[shape]}`} x={pct(xPct)} y={px(y)} fill={fill} stroke={color} />;
+}
+
+/** A small stand-alone marker (legends, tooltips), drawn in its own box. */
+export function MarkerSwatch({
+  shape,
+  color,
+  filled = true,
+  dash,
+  line = false,
+}: {
+  shape?: MarkerShape;
+  color: string;
+  filled?: boolean;
+  dash?: string;
+  line?: boolean;
+}) {
+  const w = line ? 30 : 14;
+  return (
+    <svg width={w} height={14} viewBox={`0 0 ${w} 14`} aria-hidden="true" className="chart-swatch">
+      {line ? <line x1={0} y1={7} x2={w} y2={7} stroke={color} strokeWidth={2} strokeDasharray={dash} /> : null}
+      {shape ? (
+        <Shape
+          shape={shape}
+          transform={`translate(${w / 2} 7)`}
+          fill={filled && shape !== "cross" ? color : "none"}
+          stroke={color}
+          strokeWidth={shape === "cross" ? 2 : 1.5}
+        />
+      ) : null}
+    </svg>
+  );
+}
+
+/** Horizontal gridlines across the plot, their values in the gutter at the left. */
+export function YGrid({
+  ticks,
+  y,
+  format,
+  unit,
+  cells,
+}: {
+  ticks: number[];
+  y: (v: number) => number;
+  format: (v: number) => string;
+  /** Marks the tick labels for the reader's units (data-u, converted in the browser). */
+  unit?: Quantity;
+  /** Cells in series, for per-cell ↔ per-pack conversion. */
+  cells?: number;
+}) {
+  return (
+    <g className="chart-grid">
+      {ticks.map((t) => (
+        <g key={t}>
+          <line x1="0%" x2="100%" y1={px(y(t))} y2={px(y(t))} stroke="currentColor" strokeOpacity={0.14} />
+          <text
+            x={-6}
+            y={px(y(t) + 4)}
+            textAnchor="end"
+            fontSize={TICK_FONT}
+            fill="currentColor"
+            fillOpacity={0.8}
+            data-u={unit}
+            data-v={unit ? t : undefined}
+            data-s={unit ? cells : undefined}
+          >
+            {format(t)}
+          </text>
+        </g>
+      ))}
+    </g>
+  );
+}
+
+/** The x axis: a base line, ticks and their values under the plot, and the axis title centred below. */
+export function XAxis({
+  ticks,
+  x,
+  y,
+  format,
+  title,
+}: {
+  ticks: number[];
+  x: (v: number) => number;
+  y: number;
+  format: (v: number) => string;
+  title?: string;
+}) {
+  return (
+    <g className="chart-axis">
+      <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.5} />
+      {ticks.map((t) => {
+        const at = x(t);
+        const anchor = at < 4 ? "start" : at > 96 ? "end" : "middle";
+        return (
+          <g key={t}>
+            <line x1={pct(at)} x2={pct(at)} y1={px(y)} y2={px(y + 4)} stroke="currentColor" strokeOpacity={0.5} />
+            <text
+              x={pct(at)}
+              y={px(y + 16)}
+              fontSize={TICK_FONT}
+              textAnchor={anchor}
+              fill="currentColor"
+              fillOpacity={0.8}
+            >
+              {format(t)}
+            </text>
+          </g>
+        );
+      })}
+      {title ? (
+        <text x="50%" y={px(y + 34)} fontSize={TITLE_FONT} textAnchor="middle" fill="currentColor">
+          {title}
+        </text>
+      ) : null}
+    </g>
+  );
+}
+
+/** A unit symbol inside an SVG text, marked for the reader's units (components/units/apply-units.ts). */
+export function UnitTspan({ q, cells }: { q: Quantity; cells?: number }) {
+  return (
+    <tspan data-usym={q} data-s={cells}>
+      {symbol(q, DEFAULT_UNITS, cells)}
+    </tspan>
+  );
+}
+
+/** A y-axis title written across the top left of a plot or panel (phones have no room for a turned title). */
+export function YTitle({ y, children }: { y: number; children: React.ReactNode }) {
+  return (
+    <text x={-GUTTER} y={px(y)} fontSize={TITLE_FONT} fontWeight={600} fill="currentColor">
+      {children}
+    </text>
+  );
+}
