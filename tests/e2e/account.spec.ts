@@ -12,7 +12,9 @@ test("sign in through the caught mail, create and edit a bench profile, sign out
   await page.getByLabel("E-mail address").fill("not an address");
   await page.getByRole("button", { name: "E-mail me a sign-in link" }).click();
   await expect(page.getByText("Enter an e-mail address like name@example.com.")).toBeVisible();
-  await requestLink(page, email, "/sign-in?callbackUrl=%2Faccount%2Fbench-profiles");
+  const since = await requestLink(page, email, "/sign-in?callbackUrl=%2Faccount%2Fbench-profiles");
+  // The mail worker sends the link a moment after the answer: wait until the catcher holds it.
+  await linkFromCatcher(email, since);
 
   // Open the message on the caught-mail page and click its link.
   await page.getByRole("link", { name: "the caught mail" }).click();
