@@ -5,6 +5,9 @@ import { expect, test } from "@playwright/test";
 test("the builder offers only what has data and will not publish an empty chart", async ({ page, request }) => {
   await page.goto("/charts/new");
   const group = page.getByRole("combobox", { name: "Like-for-like group" });
+  // Wait for the builder to show its groups (and sizes) before reading every option at once.
+  await expect(group.locator("option").first()).toBeAttached();
+  await expect(page.getByRole("combobox", { name: "Cells (S)" }).locator("option").nth(1)).toBeAttached();
   const options = await group.locator("option").allTextContents();
   expect(options.length).toBeGreaterThan(0);
   // In words ("DC step · 15–25 °C · …"), never a raw key ("dc-step_a15-25_…").
