@@ -18,7 +18,10 @@ export async function linkFromCatcher(email: string, since: number): Promise<str
   let link = "";
   await expect
     .poll(() => {
-      const m = caughtFor(email).find((x) => Date.parse(x.receivedAt) >= since);
+      // Only a sign-in message: other mail to the same address (a decision's e-mail) may arrive in the same moment.
+      const m = caughtFor(email).find(
+        (x) => Date.parse(x.receivedAt) >= since && x.subject === "Your Sagline sign-in link",
+      );
       link = m ? firstLink(m.text) : "";
       return link;
     })
