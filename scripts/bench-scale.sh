@@ -12,7 +12,8 @@ ensure_env_file
 services_start >/dev/null
 BENCH_DB="sagline_scale_$$"
 # The two instances share one cache in Redis, as several instances are meant to run (REDIS_URL; a throwaway Redis
-# on BENCH_REDIS_PORT unless REDIS_URL is already set). SCALE_SHARED_CACHE=0 measures them without it.
+# on BENCH_REDIS_PORT unless REDIS_URL is already set). SCALE_SHARED_CACHE=0 measures them without it — then
+# pages prerendered by the build (the home page) come from the build's copy, not from the grown data.
 REDIS_PID=""
 if [ "${SCALE_SHARED_CACHE:-1}" = 1 ] && [ -z "${REDIS_URL:-}" ]; then
   command -v redis-server >/dev/null || apt_install redis-server
