@@ -17,6 +17,8 @@ import { describeResultGroup } from "@/lib/pack-summary";
 import { openCaseReasonWords, reviewReasonLabel, reviewStatusLabels } from "@/lib/labels";
 import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
+import { resolveAccuracy } from "@/lib/analysis/uncertainty";
+import { AccuracyCard } from "./_components/accuracy-card";
 import { FiguresList } from "./_components/figures-list";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.
@@ -43,6 +45,7 @@ export default async function ResultPage(props: Props) {
   const r = await cachedResult(parsed.data.id);
   if (!r) notFound();
   const group = describeResultGroup(r);
+  const accuracy = resolveAccuracy(r.statedAccuracy);
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
   const logFile = logDownloadName(r.id, r.logFilename);
   const command = recomputeCommand(logFile, {
@@ -100,6 +103,8 @@ export default async function ResultPage(props: Props) {
           </p>
         </section>
       </div>
+
+      <AccuracyCard resolved={accuracy} benchProfileId={r.benchProfileId} />
 
       <section aria-labelledby="discharges-h" className="card space-y-3">
         <h2 id="discharges-h">Discharges</h2>
