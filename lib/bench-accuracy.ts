@@ -33,6 +33,22 @@ export const NO_BENCH_ACCURACY: BenchAccuracyColumns = {
   samplingIntervalS: null,
 };
 
+/** Just the accuracy columns of a wider row (a query that selected them beside others). */
+export function pickBenchAccuracy(r: BenchAccuracyColumns): BenchAccuracyColumns {
+  return {
+    voltageAccuracyPct: r.voltageAccuracyPct,
+    voltageOffsetV: r.voltageOffsetV,
+    voltageResolutionV: r.voltageResolutionV,
+    currentAccuracyPct: r.currentAccuracyPct,
+    currentOffsetA: r.currentOffsetA,
+    currentResolutionA: r.currentResolutionA,
+    temperatureAccuracyPct: r.temperatureAccuracyPct,
+    temperatureOffsetC: r.temperatureOffsetC,
+    temperatureResolutionC: r.temperatureResolutionC,
+    samplingIntervalS: r.samplingIntervalS,
+  };
+}
+
 /** The statement; `resistanceMethod` is the result's method card (or the bench's), always stated. */
 export function statedAccuracyOf(
   c: BenchAccuracyColumns | null,

@@ -18,6 +18,7 @@ import { openCaseReasonWords, reviewReasonLabel, reviewStatusLabels } from "@/li
 import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
 import { resolveAccuracy } from "@/lib/analysis/uncertainty";
+import { figureU95 } from "@/lib/figure-u95";
 import { AccuracyCard } from "./_components/accuracy-card";
 import { FiguresList } from "./_components/figures-list";
 
@@ -46,6 +47,11 @@ export default async function ResultPage(props: Props) {
   if (!r) notFound();
   const group = describeResultGroup(r);
   const accuracy = resolveAccuracy(r.statedAccuracy);
+  const u95 = figureU95(r.figures, accuracy.accuracy, {
+    cells: r.pack.cellsInSeries,
+    ratedMah: r.ratedCapacityMah,
+    labelledC: r.pack.labelledContinuousC,
+  });
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
   const logFile = logDownloadName(r.id, r.logFilename);
   const command = recomputeCommand(logFile, {
@@ -96,7 +102,7 @@ export default async function ResultPage(props: Props) {
         </section>
         <section aria-labelledby="figures" className="card space-y-2">
           <h2 id="figures">Figures</h2>
-          <FiguresList f={r.figures} />
+          <FiguresList f={r.figures} u95={u95} />
           <p className="muted text-xs">
             Computed by Sagline from the uploaded log.{" "}
             <a href={methodsHref(METHODS_ANCHORS.figures)}>How each figure is defined</a>.
