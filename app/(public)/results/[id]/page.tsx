@@ -19,7 +19,7 @@ import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
 import { resolveAccuracy } from "@/lib/analysis/uncertainty";
 import { figureU95 } from "@/lib/figure-u95";
-import { AccuracyCard } from "./_components/accuracy-card";
+import { AccuracyCard } from "@/components/analysis/accuracy-card";
 import { FiguresList } from "./_components/figures-list";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.
@@ -110,7 +110,7 @@ export default async function ResultPage(props: Props) {
         </section>
       </div>
 
-      <AccuracyCard resolved={accuracy} benchProfileId={r.benchProfileId} />
+      <AccuracyCard resolved={accuracy} benchProfileId={r.benchProfileId} linkBench />
 
       <section aria-labelledby="discharges-h" className="card space-y-3">
         <h2 id="discharges-h">Discharges</h2>

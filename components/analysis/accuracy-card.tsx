@@ -6,13 +6,22 @@ import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 export function AccuracyCard({
   resolved,
   benchProfileId,
+  linkBench = false,
 }: {
   resolved: ResolvedAccuracy;
   benchProfileId: number | null;
+  /** On a result page: link the bench's public page (its agreement with other benches). */
+  linkBench?: boolean;
 }) {
   return (
     <section aria-labelledby="accuracy-h" className="card space-y-2" data-testid="accuracy">
       <h2 id="accuracy-h">Instrument accuracy</h2>
+      {linkBench && benchProfileId !== null ? (
+        <p className="text-sm">
+          Tested on <a href={`/benches/${benchProfileId}`}>bench #{benchProfileId}</a>: how its figures agree with other
+          benches on the same packs.
+        </p>
+      ) : null}
       <ul className="num space-y-1 text-sm">
         {resolved.summary.map((line) => (
           <li key={line}>{line}</li>
