@@ -51,6 +51,20 @@ export default async function BenchPage(props: Props) {
         <h2 id="agreement-h">How it agrees with other benches</h2>
         <p data-testid="bench-agreement-words">{agreement.summary.words}</p>
         <BenchAgreementTable summary={agreement.summary} />
+        {agreement.summary.suggestions.length > 0 ? (
+          <div className="text-sm" data-testid="bench-suggestions">
+            <p className="font-medium">Suggestions</p>
+            <ul className="list-disc space-y-1 pl-5">
+              {agreement.summary.suggestions.map((s) => (
+                <li key={`${s.figure}-${s.tendency}`}>{s.words}</li>
+              ))}
+            </ul>
+            <p className="muted text-xs">
+              Suggestions only: follow the instruments&apos; makers&apos; instructions when checking or calibrating
+              them.
+            </p>
+          </div>
+        ) : null}
         <p className="muted text-xs">
           Where a pack was tested by several benches in one like-for-like group, the benches&apos; values are combined
           into a robust consensus (ISO 13528:2015 Algorithm A) and each bench gets a z-score: how many robust standard
