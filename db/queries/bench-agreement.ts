@@ -3,7 +3,7 @@
 // public facts. A bench is public only through its published results: one with none is "not found".
 import "server-only";
 import { and, count, eq, isNotNull } from "drizzle-orm";
-import { db } from "@/db";
+import { db, type Executor } from "@/db";
 import { benchProfiles, makers, packs, results, users } from "@/db/schema";
 import type { Figures } from "@/lib/analysis";
 import { resolveAccuracy } from "@/lib/analysis/uncertainty";
@@ -81,15 +81,24 @@ function withBench(r: RawRow): (RawRow & { benchId: number }) | null {
   return r.benchId === null ? null : { ...r, benchId: r.benchId };
 }
 
-/** Every published result tested on a bench profile (the input of the comparison). */
-export async function listAgreementRows(): Promise<AgreementRow[]> {
-  const rows = await db
+/** Every published result tested on a bench profile (the input of the comparison), or those of one pack and group. */
+export async function listAgreementRows(
+  only?: { packId: number; groupKey: string },
+  exec: Executor = db,
+): Promise<AgreementRow[]> {
+  const rows = await exec
     .select(rowColumns)
     .from(results)
     .innerJoin(packs, packOfResult)
     .innerJoin(makers, makerOfPack)
     .innerJoin(benchProfiles, eq(benchProfiles.id, results.benchProfileId))
-    .where(and(isPublished, isNotNull(results.benchProfileId)));
+    .where(
+      and(
+        isPublished,
+        isNotNull(results.benchProfileId),
+        ...(only ? [eq(results.packId, only.packId), eq(results.groupKey, only.groupKey)] : []),
+      ),
+    );
   return rows.flatMap((r) => {
     const b = withBench(r);
     return b ? [toAgreementRow(b)] : [];
@@ -97,8 +106,8 @@ export async function listAgreementRows(): Promise<AgreementRow[]> {
 }
 
 /** One result (any status) as the comparison sees it; null when it has no bench profile or does not exist. */
-export async function getAgreementRow(resultId: number): Promise<AgreementRow | null> {
-  const [row] = await db
+export async function getAgreementRow(resultId: number, exec: Executor = db): Promise<AgreementRow | null> {
+  const [row] = await exec
     .select(rowColumns)
     .from(results)
     .innerJoin(packs, packOfResult)

@@ -7,6 +7,7 @@ import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { benchProfiles, results } from "@/db/schema";
 import { getAgreementRow, getPublicBench, listAgreementRows } from "@/db/queries/bench-agreement";
+import { computeAndStoreFlags } from "@/db/mutations/review";
 import { benchAgreements, scoreNewResult } from "@/lib/bench-agreement";
 import { makePack, makeResult } from "../helpers/review-fixtures";
 import { createUser } from "../helpers/users";
@@ -15,6 +16,7 @@ const benchIds: number[] = [];
 let high = 0;
 let pendingHigh = 0;
 let privateBench = 0;
+let pendingFine = 0;
 let packIds: number[] = [];
 const group = `agree-${Date.now()}`;
 
@@ -82,7 +84,7 @@ beforeAll(async () => {
     await result(packId, user.id, high, 1250 * 1.04);
   }
   pendingHigh = await result(packIds[0] ?? 0, user.id, high, 1250 * 1.045, "pending");
-  await result(packIds[0] ?? 0, user.id, privateBench, 1250, "pending");
+  pendingFine = await result(packIds[0] ?? 0, user.id, privateBench, 1250, "pending");
 });
 
 describe("bench agreement from the database", () => {
@@ -125,4 +127,27 @@ describe("bench agreement from the database", () => {
     expect(JSON.stringify(pub)).not.toContain("@test.sagline.localhost");
     expect(JSON.stringify(pub)).not.toContain("Reads high"); // the profile's private name stays private
   });
+
+  it("stores the flag with the result's plausibility flags (the queue's chips), and only where it is far", async () => {
+    const flags = await computeAndStoreFlags(pendingHigh);
+    const far = flags.filter((f) => f.code === "far-from-other-benches");
+    expect(far).toHaveLength(1);
+    expect(far[0]?.message).toMatch(/^Capacity is \d+\.\d standard deviations above what other benches measured/);
+    expect((await computeAndStoreFlags(pendingFine)).map((f) => f.code)).not.toContain("far-from-other-benches");
+    // Running it again keeps one flag, not two; and a stale one goes once the result no longer lies far.
+    expect((await computeAndStoreFlags(pendingHigh)).filter((f) => f.code === "far-from-other-benches")).toHaveLength(
+      1,
+    );
+    await db
+      .update(results)
+      .set({ figures: { ...(await figuresOf(pendingHigh)), capacityMah: 1250 } })
+      .where(eq(results.id, pendingHigh));
+    expect((await computeAndStoreFlags(pendingHigh)).map((f) => f.code)).not.toContain("far-from-other-benches");
+  });
 });
+
+async function figuresOf(id: number) {
+  const [row] = await db.select({ figures: results.figures }).from(results).where(eq(results.id, id));
+  if (!row) throw new Error("no result");
+  return row.figures;
+}
