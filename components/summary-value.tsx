@@ -1,3 +1,4 @@
+import type { MedianInterval } from "@/lib/analysis/uncertainty";
 import { fmt } from "@/lib/format";
 import type { Quantity } from "@/lib/units";
 import { Qty } from "./quantity";
@@ -14,8 +15,11 @@ export function SummaryValue({
   q,
   cells,
   divide = 1,
+  interval,
 }: {
   s: Summary;
+  /** The median's 95 % interval (order statistics): shown instead of the spread when it reaches 95 %. */
+  interval?: MedianInterval | null;
   digits?: number;
   unit?: string;
   q?: Quantity;
@@ -33,7 +37,21 @@ export function SummaryValue({
       {q ? <Qty q={q} v={s.median / divide} digits={digits} cells={cells} /> : fmt(s.median, digits, unit)}
       <small>n={s.n}</small>
       {/* The spread on a line of its own keeps wide tables narrow enough for a desktop screen. */}
-      {s.n > 1 ? (
+      {interval?.meets ? (
+        <small title={interval.words} data-testid="median-interval">
+          95 %:{" "}
+          {q ? (
+            <>
+              <Qty q={q} v={interval.lower / divide} digits={digits} cells={cells} bare />–
+              <Qty q={q} v={interval.upper / divide} digits={digits} cells={cells} bare />
+            </>
+          ) : (
+            <>
+              {fmt(interval.lower, digits)}–{fmt(interval.upper, digits)}
+            </>
+          )}
+        </small>
+      ) : s.n > 1 ? (
         <small>
           {q ? (
             <>

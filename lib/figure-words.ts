@@ -55,6 +55,7 @@ export const METHODS_ANCHORS = {
   statistics: "statistics",
   uncertainty: "uncertainty",
   uncertaintyIntervals: "uncertainty-intervals",
+  uncertaintyAgreement: "uncertainty-agreement",
   likeForLike: "like-for-like",
   safety: "safety",
   deliveredCapacity: "delivered-capacity",

@@ -2,6 +2,7 @@
 // contributor and as moderators read them), reasons on review events, reject reasons, reader-flag reasons
 // and outcomes, method-card codes, the computed resistance method, catalogue states and roles. Pages and
 // e-mails never print a raw code; they look it up here. Pure, so client components use it too.
+import type { Tendency } from "@/lib/analysis/agreement/bench-summary";
 import type { FlagReason, LoadMode, RejectReason, ResistanceMethod, ReviewStatus, UserRole } from "@/lib/enums";
 
 type StatusWords = {
@@ -122,4 +123,11 @@ export const roleLabels: Record<UserRole, string> = {
   contributor: "Contributor",
   moderator: "Moderator",
   admin: "Admin",
+};
+
+/** How a bench's figure runs against other benches (lib/analysis/agreement/bench-summary.ts). */
+export const tendencyLabels: Record<Tendency, string> = {
+  "runs-high": "reads high",
+  "runs-low": "reads low",
+  scatters: "scatters both ways",
 };

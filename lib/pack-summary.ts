@@ -80,6 +80,8 @@ export type GroupFigures = {
   /** Of those, results a reader asked moderators to check (still counted until they decide). */
   openCases: number;
   figures: Record<SummaryFigure, Summary | null>;
+  /** Each median's 95 % distribution-free interval (order statistics); null below the count it needs. */
+  intervals: Record<SummaryFigure, MedianInterval | null>;
   /** The pack's sustained C in this group: the highest measured value among its approved results. */
   sustainedC: number | null;
 };
@@ -149,6 +151,7 @@ export function figuresByGroup(rows: PublicResultRow[]): GroupFigures[] {
       n: list.length,
       openCases: list.filter((r) => r.openCase).length,
       figures: summariseFigures(list),
+      intervals: medianIntervals(list),
       sustainedC: sustainedC(list)?.rateC ?? null,
     });
   }

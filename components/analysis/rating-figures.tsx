@@ -11,7 +11,8 @@ import {
   sustainedReasonWords,
   sustainedRuleWords,
 } from "@/lib/figure-words";
-import { fmt } from "@/lib/format";
+import type { FigureU95 } from "@/lib/figure-u95";
+import { PlusMinus } from "./plus-minus";
 
 // Figures stored before issue 12 lack everything but the first two fields.
 type RatingFiguresInput = Pick<Figures, "sagLimitedC" | "labelRatio"> &
@@ -44,7 +45,10 @@ function Info({ label, children }: { label: string; children: React.ReactNode })
 
 const link = "text-inherit underline decoration-dotted underline-offset-2 hover:text-cell-600 dark:hover:text-cell-400";
 
-export function RatingFigures({ f }: { f: RatingFiguresInput }) {
+/** The ± of each rating and ratio, where known (lib/figure-u95.ts). */
+type RatingU95 = Partial<Pick<FigureU95, "sagLimitedC" | "labelRatio" | "sustainedCMeasured" | "sustainedLabelRatio">>;
+
+export function RatingFigures({ f, u95 = {} }: { f: RatingFiguresInput; u95?: RatingU95 }) {
   const estimate = f.sagLimitedCEstimate ?? f.sagLimitedC;
   // Results analysed before issue 12 have no rule stored: the measured rating is then simply absent.
   const rule = f.sustainedCRule;
@@ -58,7 +62,9 @@ export function RatingFigures({ f }: { f: RatingFiguresInput }) {
           </a>
         </dt>
         <dd className="num flex flex-wrap items-baseline gap-2" data-testid="rating-estimate">
-          <span>{fmt(estimate, 1, "C")}</span>
+          <span>
+            <PlusMinus value={estimate} u95={u95.sagLimitedC} digits={1} unit="C" />
+          </span>
           {estimate !== null ? (
             <Info label="Assumptions of the sag-limited C estimate">
               An estimate from a resistance, not a tested rate: {estimateAssumptions(f)}.
@@ -66,7 +72,10 @@ export function RatingFigures({ f }: { f: RatingFiguresInput }) {
           ) : null}
         </dd>
         <dd className="muted text-xs">
-          {LABEL_RATIO_LABELS.estimate}: <span className="num">{fmt(f.labelRatio, 2)}</span>
+          {LABEL_RATIO_LABELS.estimate}:{" "}
+          <span className="num">
+            <PlusMinus value={f.labelRatio} u95={u95.labelRatio} digits={2} />
+          </span>
         </dd>
       </div>
       <div className="border-b border-ink/10 pb-1 dark:border-night-line">
@@ -76,13 +85,18 @@ export function RatingFigures({ f }: { f: RatingFiguresInput }) {
           </a>
         </dt>
         <dd className="num flex flex-wrap items-baseline gap-2" data-testid="rating-measured">
-          <span>{fmt(f.sustainedCMeasured ?? null, 1, "C")}</span>
+          <span>
+            <PlusMinus value={f.sustainedCMeasured ?? null} u95={u95.sustainedCMeasured} digits={1} unit="C" />
+          </span>
           {rule ? <Info label="Rule of the measured sustained C">Measured: {sustainedRuleWords(rule)}.</Info> : null}
         </dd>
         {reason ? <dd className="muted text-xs">{reason}</dd> : null}
         {!rule ? <dd className="muted text-xs">Analysed before the measured rating was computed.</dd> : null}
         <dd className="muted text-xs">
-          {LABEL_RATIO_LABELS.measured}: <span className="num">{fmt(f.sustainedLabelRatio ?? null, 2)}</span>
+          {LABEL_RATIO_LABELS.measured}:{" "}
+          <span className="num">
+            <PlusMinus value={f.sustainedLabelRatio ?? null} u95={u95.sustainedLabelRatio} digits={2} />
+          </span>
         </dd>
       </div>
     </dl>

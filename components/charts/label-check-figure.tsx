@@ -25,7 +25,9 @@ function labelCheckTable(points: LabelCheckPoint[], rating: RatingSeries, groupL
       cells: [
         { text: p.label, href: `/packs/${p.id}` },
         fmtLabelledC(p.labelledC),
-        fmtC(p.ratingC),
+        p.lowC !== undefined && p.highC !== undefined
+          ? `${fmtC(p.ratingC)} (95 %: ${fmtC(p.lowC)}–${fmtC(p.highC)})`
+          : fmtC(p.ratingC),
         (p.ratingC / p.labelledC).toFixed(2),
         String(p.n),
       ],
@@ -49,6 +51,7 @@ export function LabelCheckFigure({
   headingLevel?: 2 | 3;
 }) {
   const short = points.filter(fallsShort).length;
+  const bars = points.some((p) => p.lowC !== undefined);
   return (
     <ChartFigure
       id={id}
@@ -68,6 +71,9 @@ export function LabelCheckFigure({
             ? "its sustained C, the highest measured among its approved results in this like-for-like group"
             : "the median sag-limited C estimate of its published results in this like-for-like group"}
           . {short} of {points.length} packs {LABEL_CHECK_WORDS[rating].belowCount}. Select a point to open the pack.
+          {bars
+            ? " A vertical bar spans the 95 % interval of a pack's median, where it has enough results (6) for one."
+            : ""}
         </p>
       }
     >

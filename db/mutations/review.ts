@@ -6,10 +6,13 @@
 import "server-only";
 import { and, eq, ne } from "drizzle-orm";
 import { db, type Executor, type Transaction } from "@/db";
+import { getAgreementRow, listAgreementRows } from "@/db/queries/bench-agreement";
 import { getPlausibilityInput } from "@/db/queries/review";
 import { makers, packEmails, packs, readerFlags, results, reviewEvents, users, type ReviewStatus } from "@/db/schema";
 import type { PlausibilityFlag } from "@/db/schema/results";
 import { plausibilityFlags } from "@/lib/analysis/plausibility";
+import { AGREEMENT_FLAG_CODE } from "@/lib/analysis/agreement/scores";
+import { scoreNewResult } from "@/lib/bench-agreement";
 import { storeCurveFingerprint } from "./curve-fingerprints";
 import { AppError } from "@/lib/errors";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
@@ -39,16 +42,26 @@ export async function computeAndStoreFlags(resultId: number, exec: Executor = db
   await storeCurveFingerprint(resultId, exec);
   const input = await getPlausibilityInput(resultId, exec);
   if (!input) throw new AppError("not_found", "That result does not exist.");
-  const mine = plausibilityFlags(input);
+  const mine: PlausibilityFlag[] = [...plausibilityFlags(input), ...(await agreementFlags(resultId, exec))];
   // The submission's own checks against the method card (and its duplicate check) stay; a code raised here
   // replaces the same code already stored, so running this again is safe. The card check
   // "cutoff-not-reached" says the same as our cutoff-mismatch.
   const [row] = await exec.select({ flags: results.flags }).from(results).where(eq(results.id, resultId));
-  const ours = new Set<string>(mine.map((f) => f.code));
+  // The agreement flag is always ours: a re-run that no longer finds the result far removes it.
+  const ours = new Set<string>([...mine.map((f) => f.code), AGREEMENT_FLAG_CODE]);
   if (mine.some((f) => f.code === "cutoff-mismatch")) ours.add("cutoff-not-reached");
   const flags = [...(row?.flags ?? []).filter((f) => !ours.has(f.code)), ...mine];
   await exec.update(results).set({ flags }).where(eq(results.id, resultId));
   return flags;
+}
+
+/** One flag when the result lies |z| > 3 from the other benches on its pack and group (lib/bench-agreement.ts). */
+async function agreementFlags(resultId: number, exec: Executor): Promise<PlausibilityFlag[]> {
+  const candidate = await getAgreementRow(resultId, exec);
+  if (!candidate) return [];
+  const rows = await listAgreementRows({ packId: candidate.packId, groupKey: candidate.groupKey }, exec);
+  const far = scoreNewResult(rows, candidate).flatMap((s) => (s.flag ? [s.flag.label] : []));
+  return far.length === 0 ? [] : [{ code: AGREEMENT_FLAG_CODE, message: far.join(" ") }];
 }
 
 /** Locks a result and returns what the decision and its after-effects need. */

@@ -23,3 +23,17 @@ export async function getBenchProfileForUser(userId: string, id: number): Promis
     .limit(1);
   return rows[0] ?? null;
 }
+
+/** A bench profile's stated accuracy columns, for reads that left-join the result's bench (lib/bench-accuracy.ts). */
+export const benchAccuracyColumns = {
+  voltageAccuracyPct: benchProfiles.voltageAccuracyPct,
+  voltageOffsetV: benchProfiles.voltageOffsetV,
+  voltageResolutionV: benchProfiles.voltageResolutionV,
+  currentAccuracyPct: benchProfiles.currentAccuracyPct,
+  currentOffsetA: benchProfiles.currentOffsetA,
+  currentResolutionA: benchProfiles.currentResolutionA,
+  temperatureAccuracyPct: benchProfiles.temperatureAccuracyPct,
+  temperatureOffsetC: benchProfiles.temperatureOffsetC,
+  temperatureResolutionC: benchProfiles.temperatureResolutionC,
+  samplingIntervalS: benchProfiles.samplingIntervalS,
+};

@@ -6,6 +6,7 @@ import "server-only";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
+import { medianInterval } from "@/lib/analysis/uncertainty";
 import { describeStoredGroup, type DescribedGroup } from "@/lib/like-for-like";
 import { isPublished, makerOfPack, packOfResult } from "./published";
 
@@ -72,7 +73,15 @@ export type PackInGroup = {
    * Sag-limited C ESTIMATE: median over the pack's published results (the field keeps its old name, which the
    * packs API also uses; pages call it "sag-limited C (estimate)").
    */
-  measuredC: { median: number; n: number; min: number; max: number } | null;
+  measuredC: {
+    median: number;
+    n: number;
+    min: number;
+    max: number;
+    /** The median's 95 % interval (order statistics), from 6 results on; null below. */
+    low: number | null;
+    high: number | null;
+  } | null;
   /** Sag-limited C estimate ÷ labelled C, median. */
   labelRatio: number | null;
   /** The pack's sustained C (MEASURED) in the group: the highest among its published results, with their count. */
@@ -97,6 +106,9 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
       measuredMedian: sql<number | null>`percentile_cont(0.5) within group (order by ${results.sagLimitedC})`,
       measuredMin: sql<number | null>`min(${results.sagLimitedC})`,
       measuredMax: sql<number | null>`max(${results.sagLimitedC})`,
+      measuredValues: sql<
+        number[] | null
+      >`array_agg(${results.sagLimitedC}::float8) filter (where ${results.sagLimitedC} is not null)`,
       labelRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.labelRatio})`,
       sustainedMax: sql<number | null>`max(${results.sustainedCMeasured})`,
       sustainedN: sql<number>`count(${results.sustainedCMeasured})::int`,
@@ -110,14 +122,26 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
     .where(and(eq(results.groupKey, groupKey), isPublished))
     .groupBy(packs.id, makers.id)
     .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
-  return rows.map(({ measuredN, measuredMedian, measuredMin, measuredMax, sustainedMax, sustainedN, ...r }) => ({
-    ...r,
-    sustainedC: sustainedMax === null || sustainedN === 0 ? null : { value: Number(sustainedMax), n: sustainedN },
-    measuredC:
-      measuredMedian === null || measuredN === 0
-        ? null
-        : { median: measuredMedian, n: measuredN, min: Number(measuredMin), max: Number(measuredMax) },
-  }));
+  return rows.map(
+    ({ measuredN, measuredMedian, measuredMin, measuredMax, measuredValues, sustainedMax, sustainedN, ...r }) => {
+      const interval = medianInterval((measuredValues ?? []).map(Number));
+      return {
+        ...r,
+        sustainedC: sustainedMax === null || sustainedN === 0 ? null : { value: Number(sustainedMax), n: sustainedN },
+        measuredC:
+          measuredMedian === null || measuredN === 0
+            ? null
+            : {
+                median: measuredMedian,
+                n: measuredN,
+                min: Number(measuredMin),
+                max: Number(measuredMax),
+                low: interval?.meets ? interval.lower : null,
+                high: interval?.meets ? interval.upper : null,
+              },
+      };
+    },
+  );
 }
 
 export type MakerRank = {

@@ -4,11 +4,14 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
+import { benchProfiles, makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
 import { methodCardColumns } from "./method-card-columns";
 import type { ColumnMapping, CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
 import type { FlagReason } from "@/lib/enums";
+import { statedAccuracyOf } from "@/lib/bench-accuracy";
+import type { StatedAccuracy } from "@/lib/analysis/uncertainty";
+import { benchAccuracyColumns } from "./bench-profiles";
 import type { PublicResultRow } from "@/lib/pack-summary";
 import { isPublished, makerOfPack, packOfResult } from "./published";
 import { nameOnResults } from "@/lib/user-name";
@@ -131,6 +134,10 @@ export type ResultDetail = PublicResultRow & {
     connector: string;
   };
   contributor: string;
+  /** The bench profile the result was tested on (null: none chosen, or since deleted). */
+  benchProfileId: number | null;
+  /** The bench's stated instrument accuracy as it stands now (blank parts are assumed: resolveAccuracy). */
+  statedAccuracy: StatedAccuracy;
   /** Reasons of the open reader flags (each once, in the order they were filed); empty when none is open. */
   openCaseReasons: FlagReason[];
   /** The uploaded log's file name (its extension names the download; the name itself is never shown). */
@@ -178,11 +185,15 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
       labelledBurstC: packs.labelledBurstC,
       weightG: packs.weightG,
       connector: packs.connector,
+      benchProfileId: benchProfiles.id,
+      // Flat, not nested: drizzle turns a left-joined nested object into null when its first column is null.
+      ...benchAccuracyColumns,
     })
     .from(results)
     .innerJoin(packs, eq(packs.id, results.packId))
     .innerJoin(makers, eq(makers.id, packs.makerId))
     .innerJoin(users, eq(users.id, results.contributorId))
+    .leftJoin(benchProfiles, eq(benchProfiles.id, results.benchProfileId))
     .where(and(eq(results.id, id), isPublished))
     .limit(1);
   if (!row) return null;
@@ -224,8 +235,31 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     figures,
     curve,
     photoCount,
+    benchProfileId,
+    voltageAccuracyPct,
+    voltageOffsetV,
+    voltageResolutionV,
+    currentAccuracyPct,
+    currentOffsetA,
+    currentResolutionA,
+    temperatureAccuracyPct,
+    temperatureOffsetC,
+    temperatureResolutionC,
+    samplingIntervalS,
     ...rest
   } = row;
+  const accuracy = {
+    voltageAccuracyPct,
+    voltageOffsetV,
+    voltageResolutionV,
+    currentAccuracyPct,
+    currentOffsetA,
+    currentResolutionA,
+    temperatureAccuracyPct,
+    temperatureOffsetC,
+    temperatureResolutionC,
+    samplingIntervalS,
+  };
   return {
     ...toRow(rest),
     pack: {
@@ -241,6 +275,8 @@ export async function getPublicResult(id: number): Promise<ResultDetail | null> 
     },
     contributor: nameOnResults({ displayName: contributorName, anonymous: contributorAnonymous }),
     openCaseReasons: [...new Set(open.map((o) => o.reason))],
+    benchProfileId,
+    statedAccuracy: statedAccuracyOf(accuracy, rest.resistanceMethod),
     notes,
     logFilename,
     logMapping,

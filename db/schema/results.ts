@@ -56,6 +56,19 @@ export const benchProfiles = pgTable(
     defaultSampleRateHz: real("default_sample_rate_hz"),
     /** The column mapping this bench's logs need (header-less or oddly named columns); null: detect the columns. */
     logMapping: jsonb("log_mapping").$type<ColumnMapping>(),
+    // Instrument accuracy as the tester reads it off a specification sheet: "± (% of reading + offset)" and the
+    // read-out's resolution per channel, and the sampling interval. Null: not stated; the figures' ± then use
+    // a stated default (lib/analysis/uncertainty/accuracy-classes.ts), named as an assumption on result pages.
+    voltageAccuracyPct: real("voltage_accuracy_pct"),
+    voltageOffsetV: real("voltage_offset_v"),
+    voltageResolutionV: real("voltage_resolution_v"),
+    currentAccuracyPct: real("current_accuracy_pct"),
+    currentOffsetA: real("current_offset_a"),
+    currentResolutionA: real("current_resolution_a"),
+    temperatureAccuracyPct: real("temperature_accuracy_pct"),
+    temperatureOffsetC: real("temperature_offset_c"),
+    temperatureResolutionC: real("temperature_resolution_c"),
+    samplingIntervalS: real("sampling_interval_s"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },

@@ -11,6 +11,9 @@ export type LabelCheckPoint = {
   labelledC: number;
   ratingC: number;
   n: number;
+  /** The 95 % interval of the pack's median rating (order statistics), drawn as an error bar; absent below 6 results. */
+  lowC?: number;
+  highC?: number;
 };
 export type CurveLine = { label: string; points: { capacityPercent: number; voltagePerCellV: number }[] };
 export type RankingBar = { label: string; labelRatio: number; packCount: number; resultCount: number };

@@ -12,9 +12,9 @@ export const ATTRIBUTION_TEXT = `Data: ${ATTRIBUTION}, Sagline open data, licens
  * changes. 2.0.0: strict CSV without comment lines, figures rounded to their digits, maker result counts,
  * maker slug and name on packs, `resultCount` for the published-result counts, one list shape. 2.1.0: results gain
  * the measured rating (sustainedCMeasured, sustainedLabelRatio); sagLimitedC and labelRatio are described as the
- * estimate they are.
+ * estimate they are. 2.2.0: every headline figure gains `<figure>U95`, its expanded uncertainty (k = 2).
  */
-export const DATA_SCHEMA_VERSION = "2.1.0";
+export const DATA_SCHEMA_VERSION = "2.2.0";
 
 /** meta.licence of every API answer and JSON download. */
 export const licenceInfo = {

@@ -3,6 +3,7 @@
 // card and figures — never files or contributor identities.
 import type { Figures } from "@/lib/analysis";
 import type { PackSummary } from "@/lib/catalogue";
+import type { FigureU95 } from "@/lib/figure-u95";
 import type { LoadMode, ResistanceMethod } from "@/lib/enums";
 import { fieldValue, type Field, type FieldValue } from "./field-kit";
 
@@ -36,6 +37,8 @@ export type ResultFlatRow = {
   notes: string | null;
   methodCard: MethodCard;
   figures: Figures;
+  /** Each figure's expanded uncertainty (lib/figure-u95.ts), computed on read. */
+  u95: FigureU95;
 };
 
 export type FlatRecord = Record<string, FieldValue>;

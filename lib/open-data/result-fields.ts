@@ -2,6 +2,7 @@
 // Data Package list them flat in this order. Digits follow what the measurement supports and match what the open
 // CLI (npm run analyse) prints, so a recomputed figure reads the same.
 import type { Figures } from "@/lib/analysis";
+import { U95_FIGURES, type U95Figure } from "@/lib/figure-u95";
 import { num, type Constraints, type Field, type FieldType } from "./field-kit";
 import type { ResultFlatRow } from "./records";
 
@@ -38,7 +39,7 @@ const cardNumber = (name: CardName, description: string, digits: number, constra
   section: "methodCard" as const,
 });
 
-export const resultFields: Field<ResultFlatRow>[] = [
+const baseFields: Field<ResultFlatRow>[] = [
   {
     name: "id",
     type: "integer",
@@ -167,6 +168,27 @@ export const resultFields: Field<ResultFlatRow>[] = [
   figure("specificPowerWKg", "number", "Specific power, in W/kg.", 0),
   { name: "notes", type: "string", description: "Tester's notes (free text).", freeText: true, value: (r) => r.notes },
 ];
+
+const isU95Figure = (name: string): name is U95Figure => (U95_FIGURES as readonly string[]).includes(name);
+
+/**
+ * `<figure>U95` right after each figure that has one: the expanded uncertainty (k = 2, about 95 %) by the GUM
+ * (JCGM 100:2008) from the bench's stated or assumed instrument accuracy (lib/figure-u95.ts), one digit finer.
+ */
+function u95Field(f: Field<ResultFlatRow>, name: U95Figure): Field<ResultFlatRow> {
+  return {
+    name: `${name}U95`,
+    type: "number",
+    description: `Expanded uncertainty of ${name} (k = 2, about 95 %), same unit, from the bench's stated instrument accuracy or Sagline's stated default where none is stated (JCGM 100:2008; /methods#uncertainty). An estimate of how sure the figure is, not a measurement.`,
+    digits: (f.digits ?? 2) + 1,
+    section: "figures",
+    value: (r) => r.u95[name],
+  };
+}
+
+export const resultFields: Field<ResultFlatRow>[] = baseFields.flatMap((f) =>
+  f.section === "figures" && isU95Figure(f.name) ? [f, u95Field(f, f.name)] : [f],
+);
 
 /** The digits of a figure as published (for medians and other numbers derived from it). */
 export function figureDigits(name: FigureName): number | undefined {

@@ -21,6 +21,39 @@ const logMappingField = z
     return z.NEVER;
   });
 
+/** "± p % of reading": 0…10 % (the same bounds as lib/analysis/uncertainty/accuracy.ts). */
+/** Absent (an older form, a script) counts as blank, so an update never keeps a value the sender did not send. */
+const blankable = (label: string, check: (n: z.ZodNumber) => z.ZodNumber) =>
+  z
+    .string()
+    .optional()
+    .transform((v) => v ?? "")
+    .pipe(optionalNumber(label, check));
+const pct = (label: string) =>
+  blankable(label, (n) =>
+    n.min(0, `${label} cannot be negative.`).max(10, `${label} must be at most 10 % of reading.`),
+  );
+const upTo = (label: string, unit: string, max: number) =>
+  blankable(label, (n) =>
+    n.min(0, `${label} cannot be negative.`).max(max, `${label} must be at most ${max} ${unit}.`),
+  );
+
+/** Instrument accuracy, each part optional: what is left blank is assumed from a stated default (and named so). */
+const accuracyFields = {
+  voltageAccuracyPct: pct("Voltage accuracy"),
+  voltageOffsetV: upTo("Voltage offset", "V", 1),
+  voltageResolutionV: upTo("Voltage resolution", "V", 1),
+  currentAccuracyPct: pct("Current accuracy"),
+  currentOffsetA: upTo("Current offset", "A", 10),
+  currentResolutionA: upTo("Current resolution", "A", 10),
+  temperatureAccuracyPct: pct("Temperature accuracy"),
+  temperatureOffsetC: upTo("Temperature offset", "°C", 20),
+  temperatureResolutionC: upTo("Temperature resolution", "°C", 10),
+  samplingIntervalS: blankable("Sampling interval", (n) =>
+    n.gt(0, "Sampling interval must be above 0 s.").max(600, "Sampling interval must be at most 600 s."),
+  ),
+};
+
 export const benchProfileSchema = z
   .object({
     name: requiredText("Profile name", 80),
@@ -46,6 +79,7 @@ export const benchProfileSchema = z
       n.gt(0, "Sample rate must be above 0 Hz.").max(10_000, "Sample rate must be at most 10 000 Hz."),
     ),
     logMapping: logMappingField,
+    ...accuracyFields,
   })
   .superRefine((v, ctx) => {
     if (
@@ -80,6 +114,16 @@ export const emptyBenchProfile: BenchProfileFormValues = {
   defaultStopTemperatureC: "",
   defaultSampleRateHz: "",
   logMapping: "",
+  voltageAccuracyPct: "",
+  voltageOffsetV: "",
+  voltageResolutionV: "",
+  currentAccuracyPct: "",
+  currentOffsetA: "",
+  currentResolutionA: "",
+  temperatureAccuracyPct: "",
+  temperatureOffsetC: "",
+  temperatureResolutionC: "",
+  samplingIntervalS: "",
 };
 
 export const benchProfileId = recordIdSchema("Not a bench profile id.");

@@ -9,11 +9,12 @@ import { analyseText } from "@/lib/analysis";
 import { generateLog, toCsv, type CsvDialect } from "@/lib/synthetic/equivalent-circuit";
 import { logKey, putObject } from "@/server/storage";
 import { createRandom } from "./random";
-import { figureColumns, outcomeFor, seedHistory } from "./result-rows";
+import { agreementCampaigns, demoBenchId } from "./benches";
+import { figureColumns, outcomeFor, seedHistory, type Outcome } from "./result-rows";
 import type { DemoPack } from "./scenario";
 
 type ResistanceMethod = (typeof schema.resistanceMethods)[number];
-type Campaign = {
+export type Campaign = {
   contributor: string;
   method: ResistanceMethod;
   ambientC: [number, number];
@@ -24,6 +25,12 @@ type Campaign = {
   owns: (i: number) => boolean;
   equipment: string;
   dialect: CsvDialect;
+  /** Spread of capacity and resistance from one test to the next (default ±2 % and ±7 %). */
+  spread?: number;
+  /** The bench's current reading ÷ the true current (1.04: its sensor reads 4 % high). */
+  currentGain?: number;
+  /** A fixed outcome (the agreement demo) instead of a random one. */
+  outcome?: (packIndex: number, cycles: number) => Outcome;
 };
 
 const campaigns: Campaign[] = [
@@ -93,6 +100,7 @@ const campaigns: Campaign[] = [
     equipment: "Electronic load, summer workshop, no air conditioning",
     dialect: { headerStyle: "brackets" },
   },
+  ...agreementCampaigns,
 ];
 
 export async function seedResults(
@@ -120,8 +128,9 @@ export async function seedResults(
     const contributorId = userId.get(campaign.contributor);
     if (!contributorId || !moderatorId) throw new Error("demo users missing");
     // Each tester owns a subset of the catalogue; together they cover every pack at least once.
-    const share = packs.filter((_, i) => campaign.owns(i));
-    for (const pack of share) {
+    const benchProfileId = await demoBenchId(db, campaign.contributor, contributorId);
+    const share = packs.flatMap((p, i) => (campaign.owns(i) ? [{ pack: p, index: i }] : []));
+    for (const { pack, index } of share) {
       for (const cycles of campaign.cycles) {
         n++;
         const idempotencyKey = `seed-${n}`;
@@ -131,8 +140,14 @@ export async function seedResults(
         const loadCurrentA = Math.round(campaign.cRate * (pack.ratedCapacityMah / 1000) * 10) / 10;
         // Ageing (from memory, typical hobby LiPo): ~0.07 % capacity lost and ~0.3 % resistance gained per cycle.
         const capacityMah =
-          pack.ratedCapacityMah * pack.truth.capacityFactor * (1 - 0.0007 * cycles) * rnd.between(0.98, 1.02);
-        const r0 = pack.truth.r0PerCellMohm * (1 + 0.003 * cycles) * rnd.between(0.93, 1.07);
+          pack.ratedCapacityMah *
+          pack.truth.capacityFactor *
+          (1 - 0.0007 * cycles) *
+          rnd.between(1 - (campaign.spread ?? 0.02), 1 + (campaign.spread ?? 0.02));
+        const r0 =
+          pack.truth.r0PerCellMohm *
+          (1 + 0.003 * cycles) *
+          rnd.between(1 - (campaign.spread ?? 0.07), 1 + (campaign.spread ?? 0.07));
         const { rows } = generateLog({
           seed: 1000 + n,
           cells: pack.cellsInSeries,
@@ -154,7 +169,11 @@ export async function seedResults(
               ? { voltageV: 0.0005 * pack.cellsInSeries, currentA: 0.005, temperatureC: 0.05 }
               : { voltageV: 0.002 * pack.cellsInSeries, currentA: 0.006, temperatureC: 0.1 },
         });
-        const csv = toCsv(rows, campaign.dialect);
+        const gain = campaign.currentGain ?? 1;
+        const csv = toCsv(
+          gain === 1 ? rows : rows.map((row) => ({ ...row, currentA: row.currentA * gain })),
+          campaign.dialect,
+        );
         const analysis = await analyseText(csv, {
           cells: pack.cellsInSeries,
           ratedMah: pack.ratedCapacityMah,
@@ -168,13 +187,14 @@ export async function seedResults(
         const key = logKey(sha);
         await putObject(key, csv, "text/csv");
         const submittedAt = new Date(start + n * 3.7 * 3600 * 1000);
-        const outcome = outcomeFor(rnd);
+        const outcome = campaign.outcome ? campaign.outcome(index, cycles) : outcomeFor(rnd);
         const published = outcome === "approved" || outcome === "flagged";
         const inserted = await db
           .insert(schema.results)
           .values({
             packId: id,
             contributorId,
+            benchProfileId,
             status: outcome === "flagged" ? "approved" : outcome,
             ambientTemperatureC: ambientC,
             packStartTemperatureC: f.startTemperatureC,

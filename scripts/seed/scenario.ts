@@ -35,6 +35,12 @@ export const demoUsers: DemoUser[] = [
   { email: "slipway@sagline.localhost", displayName: "Slipway Hobby Bench", role: "contributor" },
   { email: "anon@sagline.localhost", displayName: "Tester 9", role: "contributor", anonymous: true },
   { email: "tidemill@sagline.localhost", displayName: "Tidemill Cycling Rig", role: "contributor" },
+  // The bench agreement demo (scripts/seed/benches.ts): four benches that agree and one whose sensor reads high.
+  { email: "heronsgate@sagline.localhost", displayName: "Heronsgate Test Bench", role: "contributor" },
+  { email: "wherry@sagline.localhost", displayName: "Wherry Lane Workshop", role: "contributor" },
+  { email: "millrace@sagline.localhost", displayName: "Millrace Flyers", role: "contributor" },
+  { email: "saltings@sagline.localhost", displayName: "Saltings Bench", role: "contributor" },
+  { email: "copperleat@sagline.localhost", displayName: "Copperleat Garage", role: "contributor" },
 ];
 
 // honesty: measured C ÷ labelled C that this maker's packs tend to reach (their cells are what they are;

@@ -185,4 +185,66 @@ describe("bench profiles", () => {
     });
     expect((await stored())?.logMapping).toBeNull();
   });
+
+  it("stores the instrument accuracy as stated, leaves blank parts null, and a later save without them clears them", async () => {
+    const me = await signedIn("contributor");
+    requestState.token = me.token;
+    const accuracy = {
+      voltageAccuracyPct: "0,1",
+      voltageOffsetV: "0.01",
+      voltageResolutionV: "0.001",
+      currentAccuracyPct: "0.5",
+      currentOffsetA: "0.02",
+      currentResolutionA: "",
+      temperatureAccuracyPct: "",
+      temperatureOffsetC: "1.5",
+      temperatureResolutionC: "0.1",
+      samplingIntervalS: "0.5",
+    };
+    const created = await saveBenchProfile(null, form({ ...valid, ...accuracy }));
+    if (!created.ok) throw new Error(created.error);
+    const id = created.data.id;
+    const stored = async () => (await db.select().from(benchProfiles).where(eq(benchProfiles.id, id)))[0];
+    expect(await stored()).toMatchObject({
+      voltageAccuracyPct: expect.closeTo(0.1, 6),
+      voltageOffsetV: expect.closeTo(0.01, 6),
+      voltageResolutionV: expect.closeTo(0.001, 6),
+      currentAccuracyPct: 0.5,
+      currentOffsetA: expect.closeTo(0.02, 6),
+      currentResolutionA: null,
+      temperatureAccuracyPct: null,
+      temperatureOffsetC: 1.5,
+      temperatureResolutionC: expect.closeTo(0.1, 6),
+      samplingIntervalS: 0.5,
+    });
+    // A save that does not send the accuracy (an older form) states nothing: the values do not linger.
+    expect(await saveBenchProfile(null, form({ ...valid, id: String(id) }))).toMatchObject({ ok: true });
+    expect(await stored()).toMatchObject({
+      voltageAccuracyPct: null,
+      samplingIntervalS: null,
+      temperatureOffsetC: null,
+    });
+  });
+
+  it("refuses accuracy outside the bounds with one clear message per field and stores nothing", async () => {
+    const me = await signedIn("contributor");
+    requestState.token = me.token;
+    const res = await saveBenchProfile(
+      null,
+      form({
+        ...valid,
+        voltageAccuracyPct: "12",
+        currentOffsetA: "-0.1",
+        temperatureOffsetC: "abc",
+        samplingIntervalS: "0",
+      }),
+    );
+    expect(res).toMatchObject({ ok: false, code: "validation" });
+    if (res.ok) return;
+    expect(res.fieldErrors?.voltageAccuracyPct?.[0]).toBe("Voltage accuracy must be at most 10 % of reading.");
+    expect(res.fieldErrors?.currentOffsetA?.[0]).toBe("Current offset cannot be negative.");
+    expect(res.fieldErrors?.temperatureOffsetC?.[0]).toBe("Temperature offset must be a number.");
+    expect(res.fieldErrors?.samplingIntervalS?.[0]).toBe("Sampling interval must be above 0 s.");
+    expect(await db.select().from(benchProfiles).where(eq(benchProfiles.userId, me.id))).toHaveLength(0);
+  });
 });

@@ -98,4 +98,17 @@ describe("like-for-like group queries", () => {
     expect(inG.find((r) => r.id === ids.a1)).toMatchObject({ measuredC: 30, groupN: 4 });
     expect(inG.find((r) => r.id === ids.c1)).toMatchObject({ measuredC: null, groupN: 0 });
   });
+
+  // Last, as it adds a result: a pack's 95 % median interval for the label check's error bar. By the binomial
+  // order-statistic formula 5 results reach at most 1 − 2/2⁵ = 93.75 % (no interval); 6 reach 1 − 2/2⁶ = 96.9 %
+  // with the smallest and largest value as bounds.
+  it("gives a pack's 95 % median interval from 6 published results on, none below", async () => {
+    const before = await listPacksInGroup(G);
+    expect(before.find((r) => r.packId === ids.b1)?.measuredC).toMatchObject({ n: 5, low: null, high: null });
+    const tester = await makeUser();
+    await makeResult({ id: ids.b1, ratedCapacityMah: 1500, labelledContinuousC: 100 }, tester.id, { sagLimitedC: 34 });
+    const after = await listPacksInGroup(G);
+    expect(after.find((r) => r.packId === ids.b1)?.measuredC).toMatchObject({ n: 6, low: 30, high: 34 });
+    expect(after.find((r) => r.packId === ids.a1)?.measuredC).toMatchObject({ low: null, high: null });
+  });
 });

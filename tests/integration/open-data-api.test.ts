@@ -149,6 +149,17 @@ describe("GET /api/v1/results", () => {
       figures: { capacityMah: 1250, energyWh: 18.2, meanVoltagePerCellV: 3.652 },
     });
     expect(JSON.stringify(body)).not.toContain("logKey");
+    // capacityMahU95 beside capacityMah (issue 16). No bench states its accuracy here, so the default class
+    // applies (2 % of reading + 0.05 A, 0.01 A steps: Sagline's assumption from memory). Closed form by JCGM
+    // 100:2008 4.3.7 (a/√3), F.2.2.1 (δ/√12) and 5.1.2 with the fixture's 1250.4321 mAh, 26 A over 580 s, 1 s samples.
+    const uGain = (1250.4321 * 0.02) / Math.sqrt(3);
+    const uOffset = (580 * 0.05) / Math.sqrt(3) / 3.6;
+    const uResolution = (580 * (0.01 / Math.sqrt(12))) / 3.6 / Math.sqrt(580);
+    const uEdges = (26 * 1) / 3.6 / Math.sqrt(6);
+    const expectedU95 = 2 * Math.hypot(uGain, uOffset, uResolution, uEdges);
+    const first = body.data[0] as { figures: { capacityMahU95: number; energyWhU95: number | null } };
+    expect(first.figures.capacityMahU95).toBeCloseTo(expectedU95, 1);
+    expect(first.figures.energyWhU95).toBeGreaterThan(0);
     const hidden = fx.results.find((r) => r.status === "pending");
     if (!hidden) throw new Error("fixture");
     expect(

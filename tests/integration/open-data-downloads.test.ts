@@ -49,7 +49,7 @@ describe("CSV downloads", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8; header=present");
     expect(res.headers.get("content-disposition")).toMatch(
-      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.1\.0\.csv"/,
+      /attachment; filename="sagline-packs-\d{4}-\d{2}-\d{2}-v2\.2\.0\.csv"/,
     );
     const text = await res.text();
     const lines = text.split("\r\n");
@@ -68,6 +68,10 @@ describe("CSV downloads", () => {
     expect(results.data.every((r) => r.capacityMah === "1250" && r.energyWh === "18.2")).toBe(true);
     expect(results.data.every((r) => r.meanVoltagePerCellV === "3.652" && r.cutoffVPerCell === "3.3")).toBe(true);
     expect(results.data.every((r) => /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}Z$/.test(r.publishedAt ?? ""))).toBe(true);
+    // Each figure's expanded uncertainty follows it (issue 16): a column beside it, a number or empty.
+    const header = Object.keys(results.data[0] ?? {});
+    expect(header.indexOf("capacityMahU95")).toBe(header.indexOf("capacityMah") + 1);
+    expect(results.data.every((r) => /^(\d+(\.\d+)?)?$/.test(r.capacityMahU95 ?? "x"))).toBe(true);
     const notes = results.data
       .map((r) => r.notes)
       .filter(Boolean)
@@ -169,6 +173,8 @@ describe("README beside the files", () => {
       "Sagline contributors",
       "/api/v1/results/{id}/log",
       "npm run analyse",
+      "capacityMahU95",
+      "JCGM 100:2008",
     ])
       expect(text).toContain(part);
   });
@@ -212,7 +218,7 @@ describe("Data Package", () => {
   it("declares v2, a semantic version, the SPDX licence, the counting rule and a dialect without comments", async () => {
     const desc = await getDescriptor();
     expect(desc.$schema).toBe("https://datapackage.org/profiles/2.0/datapackage.json");
-    expect(desc.version).toBe("2.1.0");
+    expect(desc.version).toBe("2.2.0");
     expect(desc.licenses[0]?.name).toBe("CC-BY-4.0");
     expect(desc.description).toContain(PUBLISHED_RULE);
     for (const r of desc.resources) {

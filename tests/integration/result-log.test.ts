@@ -1,6 +1,9 @@
 // Raw logs of published results (issue 13 item 7): a log submitted and approved through the real flow is served
 // by GET /api/v1/results/{id}/log byte for byte (ETag = its SHA-256, 304, attachment name), nothing else is; and
 // the command the result's page shows, run with the open CLI on the downloaded file, gives the published figures.
+import type { Figures } from "@/lib/analysis";
+import { resolveAccuracy } from "@/lib/analysis/uncertainty";
+import { figureU95, U95_FIGURES } from "@/lib/figure-u95";
 import { spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
@@ -150,7 +153,8 @@ describe("recomputing the figures with the open CLI", () => {
         params: Promise.resolve({ id: String(published) }),
       })
     ).json()) as { data: { figures: Record<string, number | string | null> } };
-    const figures = resultFields.filter((f) => f.section === "figures");
+    // The figures themselves; each `<figure>U95` rests on the bench's accuracy, which the CLI is not told (below).
+    const figures = resultFields.filter((f) => f.section === "figures" && !f.name.endsWith("U95"));
     expect(figures.length).toBeGreaterThan(10);
     for (const f of figures) {
       const mine = cli[f.name] ?? null;
@@ -158,5 +162,20 @@ describe("recomputing the figures with the open CLI", () => {
       expect(api.data.figures[f.name], f.name).toBe(expected);
     }
     expect(api.data.figures.capacityMah).toBeGreaterThan(1000);
+    // The ± follows from the recomputed figures too: no bench profile here, so the stated default accuracy applies
+    // (lib/figure-u95.ts on the CLI's figures gives the published U95, to its digits).
+    const u95 = figureU95(JSON.parse(run.stdout) as Figures, resolveAccuracy(null).accuracy, {
+      cells: 4,
+      ratedMah: 1300,
+      labelledC: 75,
+    });
+    for (const f of resultFields.filter((x) => x.name.endsWith("U95"))) {
+      const name = f.name.replace(/U95$/, "");
+      const mine = U95_FIGURES.find((n) => n === name);
+      if (!mine) throw new Error(`no U95 figure ${name}`);
+      const v = u95[mine];
+      expect(api.data.figures[f.name], f.name).toBe(v === null ? null : Number(v.toFixed(f.digits ?? 3)));
+    }
+    expect(api.data.figures.capacityMahU95).toBeGreaterThan(0);
   });
 });

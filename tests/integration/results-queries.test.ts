@@ -1,7 +1,8 @@
 // Queries behind /results/[id] and the home page's newest results.
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { reviewEvents } from "@/db/schema";
+import { eq } from "drizzle-orm";
+import { benchProfiles, results, reviewEvents } from "@/db/schema";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 
@@ -62,6 +63,32 @@ describe("published results", () => {
     expect(await getPublicResult(ids.pending)).toBeNull();
     expect(await getPublicResult(ids.proposedPack)).toBeNull();
     expect(await getPublicResult(999_999)).toBeNull();
+  });
+
+  it("carries the bench's stated accuracy (blank parts left to be assumed) and none without a bench profile", async () => {
+    const r0 = await getPublicResult(ids.approved);
+    if (!r0) throw new Error("no result");
+    expect(r0.benchProfileId).toBeNull();
+    expect(r0.statedAccuracy.current?.percentOfReading).toBeUndefined();
+    expect(r0.statedAccuracy.resistanceMethod).toBe(r0.resistanceMethod);
+    const [bench] = await db
+      .insert(benchProfiles)
+      .values({
+        userId: (await makeUser({ displayName: "Bench Owner" })).id,
+        name: "Shunt bench",
+        loadEquipment: "Invented load",
+        resistanceMethod: "dc-step",
+        currentAccuracyPct: 0.2,
+        samplingIntervalS: 0.5,
+      })
+      .returning({ id: benchProfiles.id });
+    if (!bench) throw new Error("no bench");
+    await db.update(results).set({ benchProfileId: bench.id }).where(eq(results.id, ids.anon));
+    const r = await getPublicResult(ids.anon);
+    expect(r?.benchProfileId).toBe(bench.id);
+    expect(r?.statedAccuracy.current?.percentOfReading).toBeCloseTo(0.2, 6);
+    expect(r?.statedAccuracy.current?.offsetA).toBeUndefined();
+    expect(r?.statedAccuracy.samplingIntervalS).toBe(0.5);
   });
 
   it("lists the newest published results first (an open case counts; pending and proposed packs do not)", async () => {

@@ -67,8 +67,8 @@ function points(packs: PackRow[], rating: RatingKind): LabelCheckPoint[] {
   return packs.flatMap((p) => {
     const v =
       rating === "measured"
-        ? p.sustainedC && { value: p.sustainedC.value, n: p.sustainedC.n }
-        : p.measuredC && { value: p.measuredC.median, n: p.measuredC.n };
+        ? p.sustainedC && { value: p.sustainedC.value, n: p.sustainedC.n, low: null, high: null }
+        : p.measuredC && { value: p.measuredC.median, n: p.measuredC.n, low: p.measuredC.low, high: p.measuredC.high };
     return v
       ? [
           {
@@ -77,6 +77,7 @@ function points(packs: PackRow[], rating: RatingKind): LabelCheckPoint[] {
             labelledC: p.labelledC,
             ratingC: Math.round(v.value * 10) / 10,
             n: v.n,
+            ...(v.low !== null && v.high !== null ? { lowC: v.low, highC: v.high } : {}),
           },
         ]
       : [];

@@ -3,7 +3,11 @@
 import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results } from "@/db/schema";
+import { benchProfiles, makers, packs, results } from "@/db/schema";
+import { resolveAccuracy } from "@/lib/analysis/uncertainty";
+import { pickBenchAccuracy, statedAccuracyOf } from "@/lib/bench-accuracy";
+import { figureU95 } from "@/lib/figure-u95";
+import { benchAccuracyColumns } from "../bench-profiles";
 import type { CurvePoint } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
 import type { ResultFlatRow } from "@/lib/open-data/records";
@@ -35,10 +39,20 @@ const columns = {
   equipment: results.equipment,
   sampleRateHz: results.sampleRateHz,
   cyclesBeforeTest: results.cyclesBeforeTest,
+  cellsInSeries: packs.cellsInSeries,
+  ratedCapacityMah: packs.ratedCapacityMah,
+  labelledContinuousC: packs.labelledContinuousC,
+  // Flat, not nested: drizzle turns a left-joined nested object into null when its first column is null.
+  ...benchAccuracyColumns,
 };
 
 function baseQuery() {
-  return db.select(columns).from(results).innerJoin(packs, packOfResult).innerJoin(makers, makerOfPack);
+  return db
+    .select(columns)
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .leftJoin(benchProfiles, eq(benchProfiles.id, results.benchProfileId));
 }
 type Raw = Awaited<ReturnType<typeof baseQuery>>[number];
 
@@ -67,6 +81,11 @@ function toRow(r: Raw): ResultFlatRow {
       cyclesBeforeTest: r.cyclesBeforeTest,
     },
     figures: r.figures,
+    u95: figureU95(r.figures, resolveAccuracy(statedAccuracyOf(pickBenchAccuracy(r), r.resistanceMethod)).accuracy, {
+      cells: r.cellsInSeries,
+      ratedMah: r.ratedCapacityMah,
+      labelledC: r.labelledContinuousC,
+    }),
   };
 }
 

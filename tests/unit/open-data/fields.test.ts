@@ -1,5 +1,6 @@
 // The one field list (lib/open-data/fields.ts, result-fields.ts) drives the API records, the CSV columns, the Data
 // Package's Table Schemas and the OpenAPI schemas; every number leaves rounded to its field's digits.
+import { U95_FIGURES, type FigureU95 } from "@/lib/figure-u95";
 import { describe, expect, it } from "vitest";
 import { makerRecord, packRecord, resultRecord } from "@/lib/api-contract/records";
 import { dataPackageDescriptor } from "@/lib/open-data/datapackage";
@@ -56,10 +57,20 @@ describe("rounding to a field's digits", () => {
         cyclesBeforeTest: 2,
       },
       figures: { capacityMah: 1250.4321, sagLimitedC: 41.26, labelRatio: 0.41263 } as never,
+      u95: {
+        ...Object.fromEntries(U95_FIGURES.map((n) => [n, null])),
+        capacityMah: 29.87,
+        labelRatio: 0.04399,
+      } as FigureU95,
     };
     const rec = nestedRecord(resultFields, row);
     expect(rec.methodCard).toMatchObject({ ambientTemperatureC: 22, loadCurrentA: 13, cutoffVPerCell: 3.3 });
     expect(rec.figures).toMatchObject({ capacityMah: 1250, sagLimitedC: 41.3, labelRatio: 0.413, energyWh: null });
+    // Each figure's U95 sits beside it, one digit finer than the figure; a missing one is null.
+    expect(rec.figures).toMatchObject({ capacityMahU95: 29.9, labelRatioU95: 0.044, energyWhU95: null });
+    const names = resultFields.map((f) => f.name);
+    expect(names.indexOf("capacityMahU95")).toBe(names.indexOf("capacityMah") + 1);
+    expect(U95_FIGURES.every((n) => names.includes(`${n}U95`))).toBe(true);
     expect(resultRecord.safeParse(rec).success).toBe(true);
   });
 });

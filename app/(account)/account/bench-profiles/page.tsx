@@ -5,7 +5,9 @@ import { listBenchProfilesForUser, type BenchProfile } from "@/db/queries/bench-
 import { fmt } from "@/lib/format";
 import { loadModeLabels, resistanceMethodLabels } from "@/lib/labels";
 import { requirePageUser } from "@/server/page-auth";
+import { agreementOfBench } from "@/server/bench-agreement";
 import { DeleteBenchProfileButton } from "./_components/delete-bench-profile-client";
+import { OwnAgreement } from "./_components/own-agreement";
 
 export const metadata: Metadata = { title: "Bench profiles" };
 export const dynamic = "force-dynamic";
@@ -24,6 +26,7 @@ function defaults(p: BenchProfile): string {
 export default async function BenchProfilesPage() {
   const user = await requirePageUser("bench-profile.manage", "/account/bench-profiles");
   const profiles = await listBenchProfilesForUser(user.id);
+  const agreements = await Promise.all(profiles.map((p) => agreementOfBench(p.id)));
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -44,7 +47,7 @@ export default async function BenchProfilesPage() {
         </div>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" data-testid="bench-profile-list">
-          {profiles.map((p) => (
+          {profiles.map((p, i) => (
             <li key={p.id} className="card flex flex-col gap-3">
               <div className="space-y-1">
                 <h2 className="text-lg">{p.name}</h2>
@@ -63,6 +66,7 @@ export default async function BenchProfilesPage() {
                 </dl>
                 <p className="muted num text-sm">{defaults(p)}</p>
               </div>
+              {agreements[i] ? <OwnAgreement benchId={p.id} agreement={agreements[i]} /> : null}
               <div className="mt-auto flex gap-2">
                 <Link href={`/account/bench-profiles/${p.id}/edit`} className={buttonClass("secondary")}>
                   Edit

@@ -17,6 +17,9 @@ import { describeResultGroup } from "@/lib/pack-summary";
 import { openCaseReasonWords, reviewReasonLabel, reviewStatusLabels } from "@/lib/labels";
 import type { ReviewStatus } from "@/lib/enums";
 import { cachedResult } from "@/server/public-data";
+import { resolveAccuracy } from "@/lib/analysis/uncertainty";
+import { figureU95 } from "@/lib/figure-u95";
+import { AccuracyCard } from "@/components/analysis/accuracy-card";
 import { FiguresList } from "./_components/figures-list";
 
 // Generated on first request; moderation revalidates `result:<id>`. Non-public results are 404.
@@ -43,6 +46,12 @@ export default async function ResultPage(props: Props) {
   const r = await cachedResult(parsed.data.id);
   if (!r) notFound();
   const group = describeResultGroup(r);
+  const accuracy = resolveAccuracy(r.statedAccuracy);
+  const u95 = figureU95(r.figures, accuracy.accuracy, {
+    cells: r.pack.cellsInSeries,
+    ratedMah: r.ratedCapacityMah,
+    labelledC: r.pack.labelledContinuousC,
+  });
   const time = prepareTimeCurve(r.curve, r.pack.cellsInSeries, 300);
   const logFile = logDownloadName(r.id, r.logFilename);
   const command = recomputeCommand(logFile, {
@@ -93,13 +102,15 @@ export default async function ResultPage(props: Props) {
         </section>
         <section aria-labelledby="figures" className="card space-y-2">
           <h2 id="figures">Figures</h2>
-          <FiguresList f={r.figures} />
+          <FiguresList f={r.figures} u95={u95} />
           <p className="muted text-xs">
             Computed by Sagline from the uploaded log.{" "}
             <a href={methodsHref(METHODS_ANCHORS.figures)}>How each figure is defined</a>.
           </p>
         </section>
       </div>
+
+      <AccuracyCard resolved={accuracy} benchProfileId={r.benchProfileId} linkBench />
 
       <section aria-labelledby="discharges-h" className="card space-y-3">
         <h2 id="discharges-h">Discharges</h2>

@@ -11,6 +11,7 @@ import { catalogueStatusLabels, reviewStatusLabels } from "@/lib/labels";
 import { recordId } from "@/lib/validations/ids";
 import { requirePageUser } from "@/server/page-auth";
 import { FlagChips } from "../_components/flag-chips";
+import { BenchAgreementSection } from "./_components/bench-agreement-section";
 import { DecisionPanel } from "./_components/decision-panel-client";
 import { Evidence } from "./_components/evidence";
 import { ContributorHistory, GroupComparison, MethodAndFigures, ReaderFlags } from "./_components/result-sections";
@@ -87,6 +88,8 @@ export default async function ReviewResultPage(props: { params: Promise<{ id: st
               </ul>
             )}
           </section>
+
+          <BenchAgreementSection resultId={r.id} />
 
           <GroupComparison d={d} />
 

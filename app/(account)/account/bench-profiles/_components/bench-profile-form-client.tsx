@@ -16,6 +16,7 @@ import {
   type BenchProfileInput,
 } from "@/lib/validations/bench-profile";
 import { saveBenchProfile } from "../actions/save-bench-profile";
+import { AccuracyFieldset } from "./accuracy-fieldset-client";
 import { MappingField } from "./mapping-field-client";
 
 type Name = keyof BenchProfileFormValues;
@@ -223,6 +224,8 @@ export function BenchProfileForm({ id, initial }: { id: number | null; initial: 
           on charge unattended, test on a fire-safe surface, and retire swollen or damaged packs as local rules require.
         </p>
       </fieldset>
+
+      <AccuracyFieldset register={register} errors={errors} />
 
       <fieldset className="card grid gap-4 md:grid-cols-2">
         <legend className="px-1 text-base font-semibold">Log columns (optional)</legend>

@@ -3,6 +3,8 @@ import { revalidatePath } from "next/cache";
 import { createBenchProfile, updateBenchProfile } from "@/db/mutations/bench-profiles";
 import { authedAction } from "@/server/authed-action";
 import { saveBenchProfileSchema } from "@/lib/validations/bench-profile";
+import { cacheTags } from "@/server/cache-tags";
+import { revalidateTags } from "@/server/revalidate";
 
 /** Create a bench profile, or update one of the user's own when an id is given. */
 export const saveBenchProfile = authedAction(
@@ -13,6 +15,8 @@ export const saveBenchProfile = authedAction(
       id === null ? await createBenchProfile(user.id, profile) : await updateBenchProfile(user.id, id, profile);
     revalidatePath("/account");
     revalidatePath("/account/bench-profiles");
+    // The ± on its published results and its public bench page follow the bench's stated accuracy.
+    if (id !== null) revalidateTags([cacheTags.results]);
     return saved;
   },
 );

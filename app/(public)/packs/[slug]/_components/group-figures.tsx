@@ -25,7 +25,8 @@ export function GroupFiguresTable({
     <div className="space-y-2">
       <p className="muted text-xs">
         Label: {fmtLabelledC(labelledC)} continuous, {fmt(ratedMah)} mAh. Each row is one like-for-like group; values
-        are medians of its published results (n, and min–max underneath).
+        are medians of its published results (n, and min–max underneath; from 6 results on, the median&apos;s 95 %
+        interval instead, by order statistics: <a href="/methods#uncertainty-intervals">how</a>).
       </p>
       <div
         className="-mx-4 overflow-x-auto px-4"
@@ -71,32 +72,61 @@ export function GroupFiguresTable({
                   </small>
                 </th>
                 <td>
-                  <SummaryValue s={g.figures.sagLimitedC} digits={1} unit="C" />
+                  <SummaryValue s={g.figures.sagLimitedC} interval={g.intervals.sagLimitedC} digits={1} unit="C" />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.labelRatio} digits={2} />
+                  <SummaryValue s={g.figures.labelRatio} interval={g.intervals.labelRatio} digits={2} />
                 </td>
                 <td className="num">{g.sustainedC === null ? <span className="muted">—</span> : fmtC(g.sustainedC)}</td>
                 <td>
-                  <SummaryValue s={g.figures.sustainedLabelRatio} digits={2} />
+                  <SummaryValue
+                    s={g.figures.sustainedLabelRatio}
+                    interval={g.intervals.sustainedLabelRatio}
+                    digits={2}
+                  />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.capacityMah} digits={0} unit="mAh" />
+                  <SummaryValue s={g.figures.capacityMah} interval={g.intervals.capacityMah} digits={0} unit="mAh" />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.capacityRatio} digits={2} />
+                  <SummaryValue s={g.figures.capacityRatio} interval={g.intervals.capacityRatio} digits={2} />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.holdVoltagePerCellV} digits={3} q="v" cells={cells} />
+                  <SummaryValue
+                    s={g.figures.holdVoltagePerCellV}
+                    interval={g.intervals.holdVoltagePerCellV}
+                    digits={3}
+                    q="v"
+                    cells={cells}
+                  />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.dcResistanceMohm} digits={2} q="r" cells={cells} divide={cells} />
+                  <SummaryValue
+                    s={g.figures.dcResistanceMohm}
+                    interval={g.intervals.dcResistanceMohm}
+                    digits={2}
+                    q="r"
+                    cells={cells}
+                    divide={cells}
+                  />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.resistanceAt25CMohm} digits={2} q="r" cells={cells} divide={cells} />
+                  <SummaryValue
+                    s={g.figures.resistanceAt25CMohm}
+                    interval={g.intervals.resistanceAt25CMohm}
+                    digits={2}
+                    q="r"
+                    cells={cells}
+                    divide={cells}
+                  />
                 </td>
                 <td>
-                  <SummaryValue s={g.figures.temperatureRiseC} digits={1} q="dtemp" />
+                  <SummaryValue
+                    s={g.figures.temperatureRiseC}
+                    interval={g.intervals.temperatureRiseC}
+                    digits={1}
+                    q="dtemp"
+                  />
                 </td>
               </tr>
             ))}

@@ -3,6 +3,8 @@ import { RatingFigures } from "@/components/analysis/rating-figures";
 import type { Figures } from "@/lib/analysis";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt, RESISTANCE_25C_SOURCE } from "@/lib/format";
+import { PlusMinus } from "@/components/analysis/plus-minus";
+import type { FigureU95 } from "@/lib/figure-u95";
 
 /** Time to cut-off in words: the time, "not reached", or "—" for results stored before reaching was recorded. */
 function cutoffWords(f: Figures): string {
@@ -11,17 +13,33 @@ function cutoffWords(f: Figures): string {
 }
 
 /** Every figure computed from the log (the headline discharge), with its unit; missing ones show "—". */
-export function FiguresList({ f }: { f: Figures }) {
+export function FiguresList({ f, u95 }: { f: Figures; u95: FigureU95 }) {
   const rows: [string, React.ReactNode, React.ReactNode?][] = [
-    ["Delivered capacity", fmt(f.capacityMah, 0, "mAh")],
-    ["Capacity ratio", fmt(f.capacityRatio, 2), "delivered ÷ rated"],
-    ["Delivered energy", fmt(f.energyWh, 2, "Wh")],
-    ["Mean voltage under load", `${fmt(f.meanVoltageV, 2, "V")} (${fmt(f.meanVoltagePerCellV, 3, "V/cell")})`],
+    ["Delivered capacity", <PlusMinus key="c" value={f.capacityMah} u95={u95.capacityMah} digits={0} unit="mAh" />],
+    [
+      "Capacity ratio",
+      <PlusMinus key="cr" value={f.capacityRatio} u95={u95.capacityRatio} digits={2} />,
+      "delivered ÷ rated",
+    ],
+    ["Delivered energy", <PlusMinus key="e" value={f.energyWh} u95={u95.energyWh} digits={2} unit="Wh" />],
+    [
+      "Mean voltage under load",
+      <>
+        <PlusMinus value={f.meanVoltagePerCellV} u95={u95.meanVoltagePerCellV} digits={3} unit="V/cell" /> (
+        {fmt(f.meanVoltageV, 2, "V")})
+      </>,
+    ],
     ["Minimum voltage", `${fmt(f.minVoltageV, 2, "V")} (${fmt(f.minVoltagePerCellV, 3, "V/cell")})`],
-    ["Hold voltage", fmt(f.holdVoltagePerCellV, 3, "V/cell")],
+    [
+      "Hold voltage",
+      <PlusMinus key="h" value={f.holdVoltagePerCellV} u95={u95.holdVoltagePerCellV} digits={3} unit="V/cell" />,
+    ],
     [
       "DC resistance",
-      `${fmt(f.dcResistanceMohm, 1, "mΩ")} (${fmt(f.dcResistancePerCellMohm, 2, "mΩ/cell")})`,
+      <>
+        <PlusMinus value={f.dcResistanceMohm} u95={u95.dcResistanceMohm} digits={1} unit="mΩ" /> (
+        {fmt(f.dcResistancePerCellMohm, 2, "mΩ/cell")})
+      </>,
       [
         f.dcResistanceMethod === "iec-61960-two-level"
           ? "IEC 61960-3 two-level"
@@ -35,7 +53,7 @@ export function FiguresList({ f }: { f: Figures }) {
     ],
     [
       "DC resistance at 25 °C",
-      fmt(f.resistanceAt25CMohm, 1, "mΩ"),
+      <PlusMinus key="r25" value={f.resistanceAt25CMohm} u95={u95.resistanceAt25CMohm} digits={1} unit="mΩ" />,
       <>
         estimate from <Qty q="temp" v={f.resistanceTemperatureC} digits={1} />: {RESISTANCE_25C_SOURCE}
       </>,
@@ -75,7 +93,11 @@ export function FiguresList({ f }: { f: Figures }) {
           </div>
         ))}
       </dl>
-      <RatingFigures f={f} />
+      <RatingFigures f={f} u95={u95} />
+      <p className="muted text-xs" data-testid="plus-minus-note">
+        ± is the expanded uncertainty (k = 2, about 95 %) from the instrument accuracy below: how sure each figure is,
+        not a spread between packs. <a href={methodsHref(METHODS_ANCHORS.uncertainty)}>What the ± means</a>.
+      </p>
       {f.warnings.length > 0 ? (
         <div className="text-sm" data-testid="result-warnings">
           <p className="font-medium">Warnings from the analysis</p>

@@ -28,6 +28,16 @@ function toFormValues(p: BenchProfile): BenchProfileFormValues {
     defaultStopTemperatureC: str(p.defaultStopTemperatureC),
     defaultSampleRateHz: str(p.defaultSampleRateHz),
     logMapping: p.logMapping ? JSON.stringify(p.logMapping) : "",
+    voltageAccuracyPct: str(p.voltageAccuracyPct),
+    voltageOffsetV: str(p.voltageOffsetV),
+    voltageResolutionV: str(p.voltageResolutionV),
+    currentAccuracyPct: str(p.currentAccuracyPct),
+    currentOffsetA: str(p.currentOffsetA),
+    currentResolutionA: str(p.currentResolutionA),
+    temperatureAccuracyPct: str(p.temperatureAccuracyPct),
+    temperatureOffsetC: str(p.temperatureOffsetC),
+    temperatureResolutionC: str(p.temperatureResolutionC),
+    samplingIntervalS: str(p.samplingIntervalS),
   };
 }
 
