@@ -5,7 +5,7 @@ import { findPackPage } from "@/server/pack-search";
 import { cachedGroups, cachedPackRows, knownGroup } from "@/server/public-data";
 import { StaticIsland } from "@/components/static-island";
 import { PacksClient } from "./_components/packs-client";
-import { PackTable } from "./_components/pack-table";
+import { ServerPackTable } from "./_components/pack-table-model";
 import type { ApiPackPage, FilterOptions } from "./_components/types";
 
 export const metadata: Metadata = {
@@ -71,7 +71,7 @@ export default async function PacksPage({ searchParams }: { searchParams: Promis
         initialError={error}
         first={
           <StaticIsland id="packs-first">
-            <PackTable page={initial} params={params} />
+            <ServerPackTable page={initial} params={params} />
           </StaticIsland>
         }
       />
