@@ -32,6 +32,7 @@ export const makers = pgTable(
   (t) => [
     uniqueIndex("makers_name_lower_idx").on(sql`lower(${t.name})`),
     index("makers_status_idx").on(t.status),
+    index("makers_proposed_by_idx").on(t.proposedById),
     // Pack search (db/queries/pack-search.ts): trigram matches and substrings of the lower-cased name (pg_trgm).
     index("makers_name_trgm_idx").using("gin", sql`lower(${t.name}) gin_trgm_ops`),
   ],
@@ -61,6 +62,7 @@ export const packs = pgTable(
   (t) => [
     index("packs_maker_idx").on(t.makerId),
     index("packs_status_idx").on(t.status),
+    index("packs_proposed_by_idx").on(t.proposedById),
     // Pack search: the model's half of "maker + model" (a generated column cannot read the maker's table, so
     // each table indexes its own lower-cased text and the search takes a word's matches from both).
     index("packs_model_trgm_idx").using("gin", sql`lower(${t.model}) gin_trgm_ops`),

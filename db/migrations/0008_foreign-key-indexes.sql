@@ -1,0 +1,12 @@
+CREATE INDEX "accounts_user_idx" ON "accounts" USING btree ("user_id");--> statement-breakpoint
+CREATE INDEX "makers_proposed_by_idx" ON "makers" USING btree ("proposed_by_id");--> statement-breakpoint
+CREATE INDEX "packs_proposed_by_idx" ON "packs" USING btree ("proposed_by_id");--> statement-breakpoint
+CREATE INDEX "results_status_id_idx" ON "results" USING btree ("status","id");--> statement-breakpoint
+CREATE INDEX "results_bench_profile_idx" ON "results" USING btree ("bench_profile_id");--> statement-breakpoint
+CREATE INDEX "review_events_actor_idx" ON "review_events" USING btree ("actor_id");--> statement-breakpoint
+CREATE INDEX "reader_flags_reporter_idx" ON "reader_flags" USING btree ("reporter_id");--> statement-breakpoint
+CREATE INDEX "reader_flags_resolved_by_idx" ON "reader_flags" USING btree ("resolved_by_id");--> statement-breakpoint
+CREATE INDEX "saved_charts_created_by_idx" ON "saved_charts" USING btree ("created_by_id");--> statement-breakpoint
+CREATE INDEX "saved_charts_featured_by_idx" ON "saved_charts" USING btree ("featured_by_id");--> statement-breakpoint
+CREATE INDEX "audit_events_actor_idx" ON "audit_events" USING btree ("actor_id");--> statement-breakpoint
+CREATE INDEX "site_settings_updated_by_idx" ON "site_settings" USING btree ("updated_by_id");
