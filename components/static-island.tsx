@@ -24,7 +24,10 @@ function keepIsland(html: string): string {
   const s = store();
   s.delete(k);
   s.set(k, html);
-  while (s.size > MAX_ENTRIES) s.delete(s.keys().next().value as string);
+  for (const oldest of s.keys()) {
+    if (s.size <= MAX_ENTRIES) break;
+    s.delete(oldest);
+  }
   return k;
 }
 

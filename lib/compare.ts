@@ -15,8 +15,9 @@ import {
   type SummaryFigure,
 } from "@/lib/pack-summary";
 
-export const MIN_COMPARE = 2;
-export const MAX_COMPARE = 6;
+import { MAX_COMPARE, MIN_COMPARE } from "@/lib/compare-limits";
+
+export { MAX_COMPARE, MIN_COMPARE } from "@/lib/compare-limits";
 
 export type CompareGroupOption = { key: string; label: string; packsCovered: number; results: number };
 

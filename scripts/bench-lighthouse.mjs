@@ -74,6 +74,9 @@ const pages = [
     path: `/compare?packs=${slugs.slice(0, 4).join(",")}${group ? `&group=${encodeURIComponent(group.key)}` : ""}`,
   },
   { name: "embed", path: new URL(embed, base).pathname },
+  // The framework's floor: a page with no client code of Sagline's own beyond the header's small islands. What
+  // it loads is what Next.js and React themselves need on every App Router page.
+  { name: "floor (/methods)", path: "/methods" },
 ];
 
 // Warm every page once (ISR pages render on first request).
@@ -100,6 +103,7 @@ const chrome = await chromeLauncher.launch({
   ],
 });
 const rows = [];
+const failedA11y = new Map();
 try {
   for (const p of pages) {
     const samples = [];
@@ -117,6 +121,12 @@ try {
       const scriptKb =
         items.filter((r) => r.resourceType === "Script").reduce((sum, r) => sum + (r.transferSize ?? 0), 0) / 1024;
       const scriptFiles = items.filter((r) => r.resourceType === "Script").length;
+      // Name what costs accessibility points, so a score below 100 says where to look.
+      for (const id of lhr.categories.accessibility.auditRefs.map((a) => a.id)) {
+        const audit = lhr.audits[id];
+        if (audit && audit.score !== null && audit.score < 1 && !failedA11y.has(`${p.name}: ${id}`))
+          failedA11y.set(`${p.name}: ${id}`, audit.title);
+      }
       samples.push({
         performance: Math.round((lhr.categories.performance.score ?? 0) * 100),
         accessibility: Math.round((lhr.categories.accessibility.score ?? 0) * 100),
@@ -158,6 +168,7 @@ console.log(
     .join(" ")})`,
 );
 console.table(rows.map(({ path: _p, ...r }) => r));
+for (const [where, title] of failedA11y) console.log(`accessibility audit failed — ${where}: ${title}`);
 console.log(
   "targets: performance ≥ 95, TBT ≤ 200 ms, LCP ≤ 2.0 s, CLS ≤ 0.05, accessibility 100; JS ≤ 120 KB gzip on /packs, ≤ 20 KB on an embed; HTML ≤ 60 KB on / and a pack page",
 );

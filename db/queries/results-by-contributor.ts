@@ -2,6 +2,7 @@ import "server-only";
 import { asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results, reviewEvents, type ReviewStatus } from "@/db/schema";
+import { methodCardColumns } from "./method-card-columns";
 
 type ContributorResultEvent = {
   fromStatus: ReviewStatus | null;
@@ -88,18 +89,7 @@ export async function getOwnResult(resultId: number) {
       labelledBurstC: packs.labelledBurstC,
       weightG: packs.weightG,
       connector: packs.connector,
-      ambientTemperatureC: results.ambientTemperatureC,
-      packStartTemperatureC: results.packStartTemperatureC,
-      loadMode: results.loadMode,
-      loadCurrentA: results.loadCurrentA,
-      loadRateC: results.loadRateC,
-      cutoffVPerCell: results.cutoffVPerCell,
-      stopTemperatureC: results.stopTemperatureC,
-      resistanceMethod: results.resistanceMethod,
-      equipment: results.equipment,
-      sampleRateHz: results.sampleRateHz,
-      cyclesBeforeTest: results.cyclesBeforeTest,
-      testedOn: results.testedOn,
+      ...methodCardColumns,
       logFilename: results.logFilename,
       photoCount: sql<number>`jsonb_array_length(${results.photoKeys})::int`,
       capacityMah: results.capacityMah,

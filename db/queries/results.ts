@@ -5,6 +5,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
+import { methodCardColumns } from "./method-card-columns";
 import type { ColumnMapping, CurvePoint, Discharge, Figures, RetentionSeries } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
 import type { FlagReason } from "@/lib/enums";
@@ -29,18 +30,7 @@ const publicResultColumns = {
   openCase: hasOpenCase,
   groupKey: results.groupKey,
   ratedCapacityMah: packs.ratedCapacityMah,
-  ambientTemperatureC: results.ambientTemperatureC,
-  packStartTemperatureC: results.packStartTemperatureC,
-  loadMode: results.loadMode,
-  loadCurrentA: results.loadCurrentA,
-  loadRateC: results.loadRateC,
-  cutoffVPerCell: results.cutoffVPerCell,
-  stopTemperatureC: results.stopTemperatureC,
-  resistanceMethod: results.resistanceMethod,
-  equipment: results.equipment,
-  sampleRateHz: results.sampleRateHz,
-  cyclesBeforeTest: results.cyclesBeforeTest,
-  testedOn: results.testedOn,
+  ...methodCardColumns,
   publishedAt: results.publishedAt,
   capacityMah: results.capacityMah,
   energyWh: results.energyWh,

@@ -6,6 +6,9 @@
 import { ownStatusLabels } from "@/lib/labels";
 import { htmlMail } from "./html";
 
+/** The sign-in e-mail's subject (the browser tests pick the sign-in link out of the catcher by it). */
+export const SIGN_IN_SUBJECT = "Your Sagline sign-in link";
+
 export type MailContent = { subject: string; text: string; html: string | null };
 
 const SIGN_OFF = "— Sagline";
@@ -26,7 +29,7 @@ export function signInLinkMail(p: { url: string; expires: Date }): MailContent {
     SIGN_OFF,
   ];
   return {
-    subject: "Your Sagline sign-in link",
+    subject: SIGN_IN_SUBJECT,
     text: lines.join("\n"),
     html: htmlMail("Sign in to Sagline", [
       { kind: "p", text: "Use the button below to sign in. No password is needed." },

@@ -3,28 +3,16 @@
 // with the headline figures of one of them (never their sum). The log is invented (lib/synthetic: four cycles of
 // an equivalent-circuit pack, no header row).
 import { expect, test } from "@playwright/test";
-import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
+import { sampleLog } from "../helpers/logs";
 import { choosePublicName, signIn } from "./sign-in-helpers";
 
 function fourCycles(): Buffer {
-  const { rows } = generateLog({
-    seed: 4343,
-    cells: 4,
-    capacityMah: 1300,
-    r0PerCellMohm: 3,
-    r1PerCellMohm: 1,
-    loadCurrentA: 13,
-    cutoffVPerCell: 3.3,
-    ambientC: 22,
-    sampleIntervalS: 1,
-    initialRestS: 5,
-    finalRestS: 5,
-    cycles: 4,
-    chargeCurrentA: 2.6,
-    chargeRestS: 30,
-    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-  });
-  return Buffer.from(toCsv(rows, { header: false, columns: ["time", "current", "voltage", "temperature"] }));
+  return Buffer.from(
+    sampleLog(
+      { seed: 4343, cycles: 4, chargeCurrentA: 2.6, chargeRestS: 30 },
+      { header: false, columns: ["time", "current", "voltage", "temperature"] },
+    ).csv,
+  );
 }
 
 test("a tester maps the columns of a header-less log on /submit and sees its four discharges and one headline", async ({

@@ -7,27 +7,13 @@ import { readFile } from "node:fs/promises";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import sharp from "sharp";
 import { demoUsers } from "../../scripts/seed/scenario";
-import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
+import { sampleLog } from "../helpers/logs";
 import { caughtFor, firstLink } from "../helpers/mail";
 import { seriousViolations } from "./axe-helpers";
 import { choosePublicName, linkFromCatcher, requestLink, signIn } from "./sign-in-helpers";
 
 function log4s(): Buffer {
-  const { rows } = generateLog({
-    seed: 1414,
-    cells: 4,
-    capacityMah: 1300,
-    r0PerCellMohm: 3,
-    r1PerCellMohm: 1,
-    loadCurrentA: 13,
-    cutoffVPerCell: 3.3,
-    ambientC: 22,
-    sampleIntervalS: 1,
-    initialRestS: 5,
-    finalRestS: 5,
-    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-  });
-  return Buffer.from(toCsv(rows));
+  return Buffer.from(sampleLog({ seed: 1414 }).csv);
 }
 
 /** A label photo as a phone would send it: a JPEG carrying EXIF (a name and a GPS position). */

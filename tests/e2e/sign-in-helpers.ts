@@ -1,6 +1,7 @@
 // Sign in as a person would: ask for a link on /sign-in, then open the link the local mail catcher caught
 // (read from MAIL_CATCHER_DIR, relative to the repo root).
 import { expect, type Page } from "@playwright/test";
+import { SIGN_IN_SUBJECT } from "../../server/mail/templates";
 import { caughtFor, firstLink } from "../helpers/mail";
 
 export async function requestLink(page: Page, email: string, from = "/sign-in"): Promise<number> {
@@ -19,9 +20,7 @@ export async function linkFromCatcher(email: string, since: number): Promise<str
   await expect
     .poll(() => {
       // Only a sign-in message: other mail to the same address (a decision's e-mail) may arrive in the same moment.
-      const m = caughtFor(email).find(
-        (x) => Date.parse(x.receivedAt) >= since && x.subject === "Your Sagline sign-in link",
-      );
+      const m = caughtFor(email).find((x) => Date.parse(x.receivedAt) >= since && x.subject === SIGN_IN_SUBJECT);
       link = m ? firstLink(m.text) : "";
       return link;
     })

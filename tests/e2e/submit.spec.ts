@@ -1,25 +1,11 @@
 // A contributor's journey: sign in through the mailed link (read from the local mail catcher), choose a public
 // name, keep a bench profile, submit a result with a log upload, and follow it by its number.
 import { expect, test, type Page } from "@playwright/test";
-import { generateLog, toCsv } from "../../lib/synthetic/equivalent-circuit";
+import { sampleLog } from "../helpers/logs";
 import { choosePublicName, linkFromCatcher, requestLink } from "./sign-in-helpers";
 
 function log4s(): Buffer {
-  const { rows } = generateLog({
-    seed: 4242,
-    cells: 4,
-    capacityMah: 1300,
-    r0PerCellMohm: 3,
-    r1PerCellMohm: 1,
-    loadCurrentA: 13,
-    cutoffVPerCell: 3.3,
-    ambientC: 22,
-    sampleIntervalS: 1,
-    initialRestS: 5,
-    finalRestS: 5,
-    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-  });
-  return Buffer.from(toCsv(rows));
+  return Buffer.from(sampleLog({ seed: 4242 }).csv);
 }
 
 // The sign-in mail leaves through the outbox after the response (issue 14), so the caught mail is polled for

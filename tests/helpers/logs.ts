@@ -9,26 +9,29 @@ export const SEMICOLON_DIALECT: CsvDialect = {
   timeUnit: "ms",
 };
 
-/** A 4S 1300 mAh pack discharged at 10C to 3.3 V per cell (sampled at 1 Hz), about 100 kB of CSV. */
+/** The equivalent-circuit settings of the tests' usual pack: a 4S 1300 mAh pack discharged at 10C to 3.3 V per
+ * cell, sampled at 1 Hz, with a logger's small noise. Tests spread it and change what they study. */
+export const SAMPLE_PACK: EcmOptions = {
+  seed: 42,
+  cells: 4,
+  capacityMah: 1300,
+  r0PerCellMohm: 3,
+  r1PerCellMohm: 1,
+  loadCurrentA: 13,
+  cutoffVPerCell: 3.3,
+  ambientC: 22,
+  sampleIntervalS: 1,
+  initialRestS: 5,
+  finalRestS: 5,
+  noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
+};
+
+/** SAMPLE_PACK's log as CSV (about 100 kB) and its truth. */
 export function sampleLog(
   options: EcmOptions = {},
   dialect: CsvDialect = {},
 ): { csv: string; truth: ReturnType<typeof generateLog>["truth"] } {
-  const { rows, truth } = generateLog({
-    seed: 42,
-    cells: 4,
-    capacityMah: 1300,
-    r0PerCellMohm: 3,
-    r1PerCellMohm: 1,
-    loadCurrentA: 13,
-    cutoffVPerCell: 3.3,
-    ambientC: 22,
-    sampleIntervalS: 1,
-    initialRestS: 5,
-    finalRestS: 5,
-    noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-    ...options,
-  });
+  const { rows, truth } = generateLog({ ...SAMPLE_PACK, ...options });
   return { csv: toCsv(rows, dialect), truth };
 }
 

@@ -8,7 +8,8 @@ import { beforeAll, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { results } from "@/db/schema";
 import { backfillCurveFingerprints } from "@/db/mutations/curve-fingerprints";
-import { generateLog, toCsv, type EcmOptions } from "@/lib/synthetic/equivalent-circuit";
+import { generateLog, toCsv } from "@/lib/synthetic/equivalent-circuit";
+import { SAMPLE_PACK } from "../helpers/logs";
 import { requestState } from "../helpers/next-mocks";
 import { makePack, submission, uploadLog } from "../helpers/submission";
 import { signedIn } from "../helpers/users";
@@ -19,20 +20,7 @@ vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCa
 const { submitResult } = await import("@/app/(contributor)/submit/actions/submit-result");
 
 /** The helper's 4S 1300 mAh pack at 13 A (10C), 1 Hz, 4 mV of voltage noise. */
-const PACK: EcmOptions = {
-  seed: 42,
-  cells: 4,
-  capacityMah: 1300,
-  r0PerCellMohm: 3,
-  r1PerCellMohm: 1,
-  loadCurrentA: 13,
-  cutoffVPerCell: 3.3,
-  ambientC: 22,
-  sampleIntervalS: 1,
-  initialRestS: 5,
-  finalRestS: 5,
-  noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-};
+const PACK = SAMPLE_PACK;
 const original = generateLog(PACK).rows;
 
 let packId = 0;

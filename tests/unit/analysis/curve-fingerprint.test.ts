@@ -16,23 +16,11 @@ import {
   type CurveFingerprint,
 } from "@/lib/analysis/curve-fingerprint";
 import { plausibilityFlags, type PlausibilityInput } from "@/lib/analysis/plausibility";
-import { generateLog, toCsv, type CsvDialect, type EcmOptions, type EcmRow } from "@/lib/synthetic/equivalent-circuit";
+import { generateLog, toCsv, type CsvDialect, type EcmRow } from "@/lib/synthetic/equivalent-circuit";
+import { SAMPLE_PACK } from "../../helpers/logs";
 
 /** A 4S 1300 mAh pack at 10C, 1 Hz, with 4 mV of voltage noise (a typical hobby logger). */
-const PACK: EcmOptions = {
-  seed: 42,
-  cells: 4,
-  capacityMah: 1300,
-  r0PerCellMohm: 3,
-  r1PerCellMohm: 1,
-  loadCurrentA: 13,
-  cutoffVPerCell: 3.3,
-  ambientC: 22,
-  sampleIntervalS: 1,
-  initialRestS: 5,
-  finalRestS: 5,
-  noise: { voltageV: 0.004, currentA: 0.004, temperatureC: 0.05 },
-};
+const PACK = SAMPLE_PACK;
 
 async function curveOf(rows: EcmRow[], dialect: CsvDialect = {}): Promise<CurvePoint[]> {
   return (await analyseText(toCsv(rows, dialect), { cells: 4 })).curve;

@@ -3,7 +3,7 @@
 // loads the page whole: its table and charts are static islands (components/static-island.tsx), sent once in the
 // HTML rather than again in a client navigation's payload.
 import { useId, useState } from "react";
-import { MAX_COMPARE } from "@/lib/compare";
+import { MAX_COMPARE } from "@/lib/compare-limits";
 
 type Option = { slug: string; title: string };
 
@@ -62,7 +62,7 @@ export function ComparePicker({
               onClick={() => move(i, -1)}
               disabled={i === 0}
               aria-label={`Move ${s.title} left`}
-              className="px-1 disabled:opacity-30"
+              className="inline-flex min-h-7 min-w-7 items-center justify-center disabled:opacity-30"
             >
               ←
             </button>
@@ -71,7 +71,7 @@ export function ComparePicker({
               onClick={() => move(i, 1)}
               disabled={i === selected.length - 1}
               aria-label={`Move ${s.title} right`}
-              className="px-1 disabled:opacity-30"
+              className="inline-flex min-h-7 min-w-7 items-center justify-center disabled:opacity-30"
             >
               →
             </button>
@@ -79,7 +79,7 @@ export function ComparePicker({
               type="button"
               onClick={() => go(slugs.filter((x) => x !== s.slug))}
               aria-label={`Remove ${s.title}`}
-              className="px-1 text-warn dark:text-[#ffb4ab]"
+              className="inline-flex min-h-7 min-w-7 items-center justify-center text-warn dark:text-[#ffb4ab]"
             >
               ×
             </button>
