@@ -1,8 +1,6 @@
 #!/usr/bin/env bash
 # npm run bench:pages — figures for the shoppers' pages, printed, not asserted:
-#   1. first-load JS of /packs, gzip, from the production build (builds when there is none, or with --build): /packs
-#      renders per request (its first HTML is the page its URL asks for), so its HTML is fetched from the build served
-#      on PORT for a moment;
+#   1. first-load JS of /packs, gzip, from the production build output (builds when there is none, or with --build);
 #   2. the chart payload /compare sends for six packs (demo database);
 #   3. p95 of the maker-ranking query over 100,000 results (a throwaway database, dropped afterwards).
 # Targets: ≤ 180 KB, ≤ 100 KB, ≤ 50 ms.
@@ -12,17 +10,11 @@ ensure_env_file
 services_start >/dev/null
 $TSX scripts/migrate.ts >/dev/null
 $TSX scripts/seed/index.ts --if-empty >/dev/null
-if [ "${1:-}" = "--build" ] || [ ! -f "$DIST_DIR/BUILD_ID" ]; then
+if [ "${1:-}" = "--build" ] || [ ! -f "$DIST_DIR/BUILD_ID" ] || [ ! -f "$DIST_DIR/server/app/packs.html" ]; then
   say "building (next build) for the first-load figure — log in .run/build-bench.log"
   node_modules/.bin/next build >"$RUN_DIR/build-bench.log" 2>&1 || { tail -n 30 "$RUN_DIR/build-bench.log" >&2; fail "next build failed"; }
 fi
-port_in_use "$PORT" && fail "port $PORT is in use (is the app running? stop it with npm run stop) — the bench serves the build there"
-node scripts/serve.mjs -H 127.0.0.1 -p "$PORT" >"$RUN_DIR/serve-bench.log" 2>&1 &
-SERVE_PID=$!
-wait_for_port "$PORT" 60 || { kill "$SERVE_PID" 2>/dev/null; fail "the build did not start (see $RUN_DIR/serve-bench.log)"; }
-curl -sf "http://localhost:$PORT/packs" -o "$RUN_DIR/packs-bench.html" || { kill "$SERVE_PID" 2>/dev/null; fail "GET /packs failed"; }
-kill "$SERVE_PID" 2>/dev/null; wait "$SERVE_PID" 2>/dev/null || true
-node scripts/bench/first-load.mjs /packs "$RUN_DIR/packs-bench.html"
+node scripts/bench/first-load.mjs /packs
 $TSX scripts/bench/compare-payload.ts
 BENCH_DB="sagline_bench_$$"
 pg_drop_db "$BENCH_DB"; pg_create_db "$BENCH_DB"

@@ -62,6 +62,13 @@ test.describe("first HTML, scripts off", () => {
     await expect(page.getByRole("searchbox", { name: "Search maker and model" })).toHaveValue("spark 1300");
   });
 
+  test("/packs alone stays a static page; with a table parameter it renders per request", async ({ request }) => {
+    expect((await request.get("/packs")).headers()["cache-control"]).toContain("s-maxage=3600");
+    const filtered = await request.get("/packs?cells=2");
+    expect(filtered.headers()["cache-control"]).toContain("no-store");
+    expect(await filtered.text()).toMatch(/data-testid="pack-count"[^>]*>\d+ packs?</);
+  });
+
   test("a page past the last says so in the first HTML", async ({ page }) => {
     await page.goto("/packs?cells=2&page=40");
     await expect(page.getByRole("alert")).toContainText("There is no page 40 of these packs");

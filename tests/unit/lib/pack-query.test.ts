@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { PackRow } from "@/lib/catalogue";
 import { queryPacks, sortPacks } from "@/lib/pack-query";
-import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams } from "@/lib/pack-query-params";
+import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { packListQuery } from "@/lib/api-contract/queries";
 import { searchParamsObject } from "@/lib/api-contract/params";
 
@@ -97,5 +97,33 @@ describe("pack table query", () => {
     expect(byModel.rows.map((r) => r.model)).toEqual(["Gust 1300 4S 75C", "Gust 1300 4S 60C"]);
     expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust", minC: 70 }, found).total).toBe(1);
     expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust" }, new Set()).total).toBe(0);
+  });
+});
+
+describe("the /packs rewrite", () => {
+  it("sends /packs with any parameter the table writes to its per-request render (next.config.mjs)", async () => {
+    // @ts-expect-error -- next.config.mjs is plain JavaScript (the project type-checks no JavaScript files)
+    const config: unknown = await import("@/next.config.mjs");
+    const list =
+      typeof config === "object" && config !== null && "PACK_TABLE_PARAMS" in config ? config.PACK_TABLE_PARAMS : null;
+    const PACK_TABLE_PARAMS = Array.isArray(list) ? list.map(String) : [];
+    const everything: PackParams = {
+      q: "ridge",
+      cells: 4,
+      minMah: 1,
+      maxMah: 2,
+      minC: 3,
+      maxC: 4,
+      minG: 5,
+      maxG: 6,
+      connector: "XT60",
+      maker: "m",
+      group: "g",
+      sort: "weight",
+      dir: "desc",
+      page: 2,
+      size: 50,
+    };
+    expect([...writePackParams(everything).keys()].sort()).toEqual([...PACK_TABLE_PARAMS].sort());
   });
 });
