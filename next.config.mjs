@@ -1,3 +1,5 @@
+import { fileURLToPath } from "node:url";
+
 // The packs table's URL parameters (lib/pack-query-params.ts writes them; a unit test holds the two lists equal).
 export const PACK_TABLE_PARAMS = [
   "q",
@@ -60,8 +62,19 @@ const distDir = process.env.NEXT_DIST_DIR || ".next";
 if (!/^\.next[a-z0-9-]*$/.test(distDir))
   throw new Error(`NEXT_DIST_DIR must look like .next or .next-test, got ${distDir}`);
 
+// With REDIS_URL set, every instance shares one page and data cache in Redis (server/cache/redis-cache-handler.mjs)
+// and keeps none in its own memory, so a decision on one instance is fresh on all of them. Without it, Next's own
+// file-system cache serves a single instance.
+const sharedCache = process.env.REDIS_URL
+  ? {
+      cacheHandler: fileURLToPath(new URL("./server/cache/redis-cache-handler.mjs", import.meta.url)),
+      cacheMaxMemorySize: 0,
+    }
+  : {};
+
 const nextConfig = {
   distDir,
+  ...sharedCache,
   reactStrictMode: true,
   poweredByHeader: false,
   typedRoutes: false,

@@ -11,7 +11,24 @@ ensure_env_file
 [ -f "$DIST_DIR/BUILD_ID" ] || fail "no production build in $NEXT_DIST_DIR/; run npm start first"
 services_start >/dev/null
 BENCH_DB="sagline_scale_$$"
+# The two instances share one cache in Redis, as several instances are meant to run (REDIS_URL; a throwaway Redis
+# on BENCH_REDIS_PORT unless REDIS_URL is already set). SCALE_SHARED_CACHE=0 measures them without it — then
+# pages prerendered by the build (the home page) come from the build's copy, not from the grown data.
+REDIS_PID=""
+if [ "${SCALE_SHARED_CACHE:-1}" = 1 ] && [ -z "${REDIS_URL:-}" ]; then
+  command -v redis-server >/dev/null || apt_install redis-server
+  rport="${BENCH_REDIS_PORT:-6391}"
+  port_in_use "$rport" && fail "port $rport (the bench's Redis) is taken; set BENCH_REDIS_PORT"
+  redis-server --bind 127.0.0.1 --port "$rport" --save "" --appendonly no --maxmemory 512mb \
+    --maxmemory-policy volatile-lru >"$RUN_DIR/redis-bench.log" 2>&1 &
+  REDIS_PID=$!
+  wait_for_port "$rport" 20 || fail "the bench's Redis did not start (see .run/redis-bench.log)"
+  export REDIS_URL="redis://127.0.0.1:$rport"
+elif [ "${SCALE_SHARED_CACHE:-1}" = 0 ]; then
+  unset REDIS_URL
+fi
 cleanup() {
+  if [ -n "$REDIS_PID" ]; then kill "$REDIS_PID" 2>/dev/null || true; fi
   pg_drop_db "$BENCH_DB"
   rm -rf "$ROOT/.next-scale-a" "$ROOT/.next-scale-b"
 }

@@ -35,6 +35,8 @@ const TEST_KEYS = [
   "E2E_BASE_URL",
   "AUTH_SECRET",
   "SAGLINE_TEST_WORLD",
+  "REDIS_URL",
+  "E2E_PORT_B",
 ];
 const appEnv = Object.fromEntries(Object.entries(process.env).filter(([k]) => !TEST_KEYS.includes(k)));
 const inAppWorld = (script, extra = {}) =>

@@ -20,10 +20,12 @@ ensure_env_file
 node_modules/.bin/tsx scripts/check-env.ts
 
 APP_PID=""
+APP_B_PID=""
 BESIDE_PID=""
 cleanup() {
   if [ -n "$BESIDE_PID" ]; then kill "$BESIDE_PID" 2>/dev/null || true; wait "$BESIDE_PID" 2>/dev/null || true; fi
   if [ -n "$APP_PID" ]; then kill "$APP_PID" 2>/dev/null || true; fi
+  if [ -n "$APP_B_PID" ]; then kill "$APP_B_PID" 2>/dev/null || true; fi
   services_stop >/dev/null 2>&1 || true
 }
 trap cleanup EXIT
@@ -73,7 +75,14 @@ if [ "$ONLY" = all ] || [ "$ONLY" = e2e ]; then
     SIGN_IN_PER_ADDRESS=500 node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" >"$RUN_DIR/app-e2e.log" 2>&1 &
     APP_PID=$!
     wait_for_port "$E2E_PORT" 60 || fail "the app did not start for browser tests (see $RUN_DIR/app-e2e.log)"
-    E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${EXTRA[@]}"
+    # A second instance of the same build on the same database and Redis: the browser tests check that a decision
+    # taken on one instance is fresh on the other (tests/e2e/two-instances.spec.ts).
+    port_in_use "$E2E_PORT_B" && fail "port $E2E_PORT_B (second browser-test instance) is taken; set TEST_PORT_BASE"
+    SIGN_IN_PER_ADDRESS=500 APP_URL="http://localhost:$E2E_PORT_B" node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT_B" \
+      >"$RUN_DIR/app-e2e-b.log" 2>&1 &
+    APP_B_PID=$!
+    wait_for_port "$E2E_PORT_B" 60 || fail "the second app instance did not start (see $RUN_DIR/app-e2e-b.log)"
+    E2E_BASE_URL_B="http://localhost:$E2E_PORT_B" E2E_BASE_URL="http://localhost:$E2E_PORT" run_suite "browser tests" node_modules/.bin/playwright test "${EXTRA[@]}"
   fi
 fi
 

@@ -27,6 +27,14 @@ const envObject = z.object({
     .optional(),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   SMTP_URL: url("SMTP_URL").optional(),
+  // Set: every app instance shares its page and data cache in this Redis (next.config.mjs); unset: one instance.
+  REDIS_URL: url("REDIS_URL")
+    .refine((v) => /^rediss?:\/\//.test(v), "REDIS_URL must start with redis:// or rediss://")
+    .optional(),
+  REDIS_CACHE_PREFIX: z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{1,40}$/, "REDIS_CACHE_PREFIX may hold letters, digits, _ and - (at most 40)")
+    .default("sagline"),
   MAIL_FROM: z.string().min(3).default("Sagline <no-reply@sagline.localhost>"),
   MAIL_CATCHER_DIR: z.string().min(1).default(".mail"),
   S3_ENDPOINT: url("S3_ENDPOINT").optional(),

@@ -223,7 +223,8 @@ async function main() {
     const rss = rssMb(a.pid);
     console.log(
       `bench:scale — ${new Date().toISOString()}, ${PACKS} packs / ${RESULTS} approved results, database ${size}, ` +
-        `grown in ${grownS.toFixed(0)} s; load ${os
+        `grown in ${grownS.toFixed(0)} s; ` +
+        `cache ${process.env.REDIS_URL ? "shared (Redis)" : "per instance"}; load ${os
           .loadavg()
           .map((l) => l.toFixed(1))
           .join(" ")}; single client`,
