@@ -1,5 +1,24 @@
 import { fileURLToPath } from "node:url";
 
+// The packs table's URL parameters (lib/pack-query-params.ts writes them; a unit test holds the two lists equal).
+export const PACK_TABLE_PARAMS = [
+  "q",
+  "cells",
+  "minMah",
+  "maxMah",
+  "minC",
+  "maxC",
+  "minG",
+  "maxG",
+  "connector",
+  "maker",
+  "group",
+  "sort",
+  "dir",
+  "page",
+  "size",
+];
+
 /** @type {import('next').NextConfig} */
 const dev = process.env.NODE_ENV !== "production";
 
@@ -63,6 +82,17 @@ const nextConfig = {
   // authInterrupts: forbidden() renders app/forbidden.tsx with a real 403 status.
   // Server actions take form fields and small JSON only (uploads stream through /api/v1/uploads/*): 1 MB.
   experimental: { serverActions: { bodySizeLimit: "1mb" }, authInterrupts: true },
+  // /packs with any table parameter renders per request at /packs-query (its first HTML is the page the URL asks
+  // for); /packs itself stays a static page. The address bar keeps /packs?…; the query string passes through.
+  async rewrites() {
+    return {
+      beforeFiles: PACK_TABLE_PARAMS.map((key) => ({
+        source: "/packs",
+        has: [{ type: "query", key }],
+        destination: "/packs-query",
+      })),
+    };
+  },
   async headers() {
     return [
       // Embeds are the only routes other sites may frame.

@@ -104,7 +104,3 @@ export function writePackParams(p: PackParams): URLSearchParams {
   if (p.size !== DEFAULT_PAGE_SIZE) sp.set("size", String(p.size));
   return sp;
 }
-
-export function isDefaultPackParams(p: PackParams): boolean {
-  return writePackParams(p).toString() === "";
-}

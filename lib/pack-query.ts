@@ -1,10 +1,11 @@
-// The one pack filter: the packs table's filters, fuzzy search (Fuse.js over maker and model), sorting and
-// paging of the pack catalogue. Runs on the server over the cached catalogue — thousands of rows at most — for
+// The one pack filter: the packs table's filters, the search's ranking (Fuse.js over maker and model, of the packs
+// PostgreSQL found), sorting and paging of the pack catalogue. Runs on the server over the cached catalogue for
 // /packs, GET /api/v1/packs and the packs download; the results and group lists and their downloads take the ids
-// of the packs it matches (server/open-data/pack-filter.ts), so a filter or `q` means the same everywhere.
+// of the packs it matches (server/open-data/catalogue.ts), so a filter or `q` means the same everywhere.
 import Fuse from "fuse.js";
 import type { PackRow } from "@/lib/catalogue";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
+import { searchWords } from "@/lib/pack-search";
 
 export type PackPage = { rows: PackRow[]; total: number; page: number; pageCount: number; size: number };
 
@@ -40,23 +41,22 @@ function filterPacks<R extends PackRow>(rows: R[], p: PackParams): R[] {
 }
 
 /**
- * Fuzzy match on maker and model ("brakwater torent" finds Brackwater Torrent), best match first. Every
- * word must match somewhere in "maker model" (Fuse's extended search: a space means AND); Fuse's operator
- * characters are dropped from the reader's text so they search as plain words.
+ * The packs the search found (PostgreSQL decides which match: db/queries/pack-search.ts), best match first:
+ * Fuse.js scores each against the reader's words over "maker model" (extended search, a space means AND;
+ * threshold 1, so it only orders and never drops one). Ties keep the catalogue's order (maker, model).
  */
-function searchPacks<R extends PackRow>(rows: R[], q: string): R[] {
-  const query = q
-    .replace(/[\^!'=$|"]/g, " ")
-    .replace(/\s+/g, " ")
-    .trim();
-  if (!query) return rows;
-  const fuse = new Fuse(rows, {
+function rankFound<R extends PackRow>(rows: R[], q: string, found: ReadonlySet<number>): R[] {
+  const candidates = rows.filter((r) => found.has(r.id));
+  const words = searchWords(q).map((w) => w.text);
+  const fuse = new Fuse(candidates, {
     keys: [{ name: "title", getFn: (r) => `${r.makerName} ${r.model}` }],
-    threshold: 0.4,
+    threshold: 1,
     ignoreLocation: true,
     useExtendedSearch: true,
   });
-  return fuse.search(query).map((m) => m.item);
+  const ranked = fuse.search(words.join(" ")).map((m) => m.item);
+  const seen = new Set(ranked);
+  return [...ranked, ...candidates.filter((r) => !seen.has(r))];
 }
 
 export function sortPacks<R extends PackRow>(rows: R[], key: PackSortKey, dir: "asc" | "desc"): R[] {
@@ -74,13 +74,17 @@ export function sortPacks<R extends PackRow>(rows: R[], key: PackSortKey, dir: "
   });
 }
 
-/** Every pack matching the filters and the search, in the table's order (relevance first for a search on the
- * default sort). */
-export function matchPacks<R extends PackRow>(rows: R[], p: PackParams): R[] {
+/**
+ * Every pack matching the filters and the search, in the table's order (relevance first for a search on the
+ * default sort). `found` is the search's answer for `p.q` (the ids of the packs matching every word), null when
+ * `p.q` holds no word.
+ */
+export function matchPacks<R extends PackRow>(rows: R[], p: PackParams, found: ReadonlySet<number> | null): R[] {
   const filtered = filterPacks(rows, p);
+  if (found === null) return sortPacks(filtered, p.sort, p.dir);
   // A text search orders by relevance unless the reader picked a column to sort by.
-  const searched = searchPacks(filtered, p.q);
-  return p.q.trim() && p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
+  const searched = rankFound(filtered, p.q, found);
+  return p.sort === "maker" && p.dir === "asc" ? searched : sortPacks(searched, p.sort, p.dir);
 }
 
 export function pageCountOf(total: number, size: number): number {
@@ -88,8 +92,8 @@ export function pageCountOf(total: number, size: number): number {
 }
 
 /** One page of the matching packs. A page past the last is empty (the API answers 422 for it). */
-export function queryPacks(rows: PackRow[], p: PackParams): PackPage {
-  const sorted = matchPacks(rows, p);
+export function queryPacks(rows: PackRow[], p: PackParams, found: ReadonlySet<number> | null): PackPage {
+  const sorted = matchPacks(rows, p, found);
   return {
     rows: sorted.slice((p.page - 1) * p.size, p.page * p.size),
     total: sorted.length,

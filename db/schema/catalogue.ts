@@ -29,7 +29,13 @@ export const makers = pgTable(
     proposedById: text("proposed_by_id").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex("makers_name_lower_idx").on(sql`lower(${t.name})`), index("makers_status_idx").on(t.status)],
+  (t) => [
+    uniqueIndex("makers_name_lower_idx").on(sql`lower(${t.name})`),
+    index("makers_status_idx").on(t.status),
+    index("makers_proposed_by_idx").on(t.proposedById),
+    // Pack search (db/queries/pack-search.ts): trigram matches and substrings of the lower-cased name (pg_trgm).
+    index("makers_name_trgm_idx").using("gin", sql`lower(${t.name}) gin_trgm_ops`),
+  ],
 );
 
 export const packs = pgTable(
@@ -56,6 +62,10 @@ export const packs = pgTable(
   (t) => [
     index("packs_maker_idx").on(t.makerId),
     index("packs_status_idx").on(t.status),
+    index("packs_proposed_by_idx").on(t.proposedById),
+    // Pack search: the model's half of "maker + model" (a generated column cannot read the maker's table, so
+    // each table indexes its own lower-cased text and the search takes a word's matches from both).
+    index("packs_model_trgm_idx").using("gin", sql`lower(${t.model}) gin_trgm_ops`),
     check("packs_cells_range", sql`${t.cellsInSeries} between 1 and 14`),
     check("packs_rated_positive", sql`${t.ratedCapacityMah} > 0`),
     check("packs_labelled_c_positive", sql`${t.labelledContinuousC} > 0`),

@@ -32,6 +32,8 @@ export const readerFlags = pgTable(
   (t) => [
     index("reader_flags_result_idx").on(t.resultId),
     index("reader_flags_status_idx").on(t.status),
+    index("reader_flags_reporter_idx").on(t.reporterId),
+    index("reader_flags_resolved_by_idx").on(t.resolvedById),
     // One open case per reader and result: a second flag from the same account waits for the first.
     uniqueIndex("reader_flags_open_reporter_idx")
       .on(t.resultId, t.reporterId)
@@ -76,6 +78,8 @@ export const savedCharts = pgTable(
   },
   (t) => [
     index("saved_charts_created_idx").on(t.createdAt),
+    index("saved_charts_created_by_idx").on(t.createdById),
+    index("saved_charts_featured_by_idx").on(t.featuredById),
     index("saved_charts_featured_idx")
       .on(t.featuredAt)
       .where(sql`${t.featuredAt} is not null`),

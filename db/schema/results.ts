@@ -140,6 +140,9 @@ export const results = pgTable(
   },
   (t) => [
     index("results_status_idx").on(t.status, t.submittedAt),
+    // Keyset pages of one status in id order (issue 18).
+    index("results_status_id_idx").on(t.status, t.id),
+    index("results_bench_profile_idx").on(t.benchProfileId),
     index("results_pack_idx").on(t.packId, t.status),
     index("results_group_idx").on(t.groupKey, t.status),
     // Covers the maker ranking (db/queries/groups.ts): an index-only scan of one group's published label
@@ -178,5 +181,8 @@ export const reviewEvents = pgTable(
     note: text("note"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("review_events_result_idx").on(t.resultId, t.createdAt)],
+  (t) => [
+    index("review_events_result_idx").on(t.resultId, t.createdAt),
+    index("review_events_actor_idx").on(t.actorId),
+  ],
 );

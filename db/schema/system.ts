@@ -15,7 +15,7 @@ export const auditEvents = pgTable(
     data: jsonb("data").$type<Record<string, unknown>>().notNull().default({}),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId)],
+  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId), index("audit_events_actor_idx").on(t.actorId)],
 );
 
 export const mailOutbox = pgTable(
@@ -59,5 +59,5 @@ export const siteSettings = pgTable(
     updatedById: text("updated_by_id").references(() => users.id, { onDelete: "set null" }),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [check("site_settings_one_row", sql`${t.id} = 1`)],
+  (t) => [check("site_settings_one_row", sql`${t.id} = 1`), index("site_settings_updated_by_idx").on(t.updatedById)],
 );

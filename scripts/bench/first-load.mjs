@@ -1,13 +1,14 @@
-// First-load JS of a statically generated page, from the production build: the <script src> chunks its
-// prerendered HTML loads (noModule polyfills excluded), each gzipped (level 9) and summed. Run after `next build`.
+// First-load JS of a page, from the production build: the <script src> chunks its HTML loads (noModule polyfills
+// excluded), each gzipped (level 9) and summed. Run after `next build`. The HTML is the prerendered file of a
+// static page, or, for a page rendered per request, a file of its HTML given as the second argument.
 import fs from "node:fs";
 import path from "node:path";
 import zlib from "node:zlib";
 
 const route = process.argv[2] ?? "/packs";
-const next = path.resolve(".next");
+const next = path.resolve(process.env.NEXT_DIST_DIR ?? ".next");
 const html = fs.readFileSync(
-  path.join(next, "server", "app", `${route === "/" ? "index" : route.slice(1)}.html`),
+  process.argv[3] ?? path.join(next, "server", "app", `${route === "/" ? "index" : route.slice(1)}.html`),
   "utf8",
 );
 // Scripts marked noModule (the legacy polyfills) are never fetched by the browsers that run modules.

@@ -1,13 +1,13 @@
 // The catalogue as the open data publishes it, from the cached reads: makers with their pack and published-result
 // counts (summed from the same pack rows the packs table shows, so the two can never disagree), and the one pack
-// filter (lib/pack-query.ts) turned into the pack ids the results and group reads filter by.
+// filter (server/pack-search.ts) turned into the pack ids the results and group reads filter by.
 import "server-only";
 import type { PackWhere } from "@/db/queries/open-data/where";
 import type { PackFilters } from "@/lib/api-contract/queries";
 import { AppError } from "@/lib/errors";
 import type { MakerRow } from "@/lib/open-data/records";
-import { matchPacks } from "@/lib/pack-query";
 import { toPackParams } from "@/lib/pack-query-params";
+import { findPacks } from "@/server/pack-search";
 import { cachedActiveMakers, cachedPackRows, knownGroup } from "@/server/public-data";
 
 /** Active makers, by name, with their active packs and published results. */
@@ -44,7 +44,7 @@ export async function packWhere(filters: PackFilters): Promise<PackWhere> {
   // Only the pack filters: a list's group or pack narrows its results, not the catalogue.
   const { q, maker, cells, connector, minMah, maxMah, minC, maxC, minG, maxG } = filters;
   const only = { q, maker, cells, connector, minMah, maxMah, minC, maxC, minG, maxG };
-  return { packIds: matchPacks(rows, toPackParams(only)).map((p) => p.id) };
+  return { packIds: (await findPacks(rows, toPackParams(only))).map((p) => p.id) };
 }
 
 /** An unknown like-for-like group (no published results in it) is a 404, on every list and download alike. */

@@ -11,10 +11,10 @@ import { makerFields, packFields } from "@/lib/open-data/fields";
 import { DATA_LICENCE_URL, DATA_SCHEMA_VERSION, licenceInfo } from "@/lib/open-data/licence";
 import { flatRecord, nestedRecord } from "@/lib/open-data/records";
 import { resultFields } from "@/lib/open-data/result-fields";
-import { matchPacks } from "@/lib/pack-query";
 import { convertColumns, DEFAULT_UNITS, type UnitPrefs } from "@/lib/units";
 import { toPackParams } from "@/lib/pack-query-params";
 import { makerRows, packWhere, requireKnownGroup } from "@/server/open-data/catalogue";
+import { findPacks } from "@/server/pack-search";
 import { cachedPackRows } from "@/server/public-data";
 import type { z } from "zod";
 
@@ -30,7 +30,7 @@ async function rowsOf(dataset: Dataset, filters: ResultFilters) {
   if (dataset === "makers") return { kind: dataset, rows: await makerRows() } as const;
   if (dataset === "packs") {
     const rows = await cachedPackRows(filters.group ?? null);
-    const list = matchPacks(rows, toPackParams(filters)).filter((p) => !filters.pack || p.slug === filters.pack);
+    const list = (await findPacks(rows, toPackParams(filters))).filter((p) => !filters.pack || p.slug === filters.pack);
     return { kind: dataset, rows: list } as const;
   }
   const where = await packWhere(filters);

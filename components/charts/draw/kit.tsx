@@ -154,8 +154,75 @@ export function MarkerSwatch({
   );
 }
 
-/** Horizontal gridlines across the plot, their values in the gutter at the left. */
-export function YGrid({
+/** One gridline across the plot at `y` pixels, its value in the gutter at the left. */
+export function YGridRow({
+  y,
+  value,
+  label,
+  unit,
+  cells,
+}: {
+  y: number;
+  value: number;
+  label: string;
+  /** Marks the tick label for the reader's units (data-u, converted in the browser). */
+  unit?: Quantity;
+  /** Cells in series, for per-cell ↔ per-pack conversion. */
+  cells?: number;
+}) {
+  return (
+    <g>
+      <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.14} />
+      <text
+        x={-6}
+        y={px(y + 4)}
+        textAnchor="end"
+        fontSize={TICK_FONT}
+        fill="currentColor"
+        fillOpacity={0.8}
+        data-u={unit}
+        data-v={unit ? value : undefined}
+        data-s={unit ? cells : undefined}
+      >
+        {label}
+      </text>
+    </g>
+  );
+}
+
+/** One x tick at `at` percent of the width on the base line at `y` pixels: its mark and its value below. */
+export function XTick({ at, y, label }: { at: number; y: number; label: string }) {
+  const anchor = at < 4 ? "start" : at > 96 ? "end" : "middle";
+  return (
+    <g>
+      <line x1={pct(at)} x2={pct(at)} y1={px(y)} y2={px(y + 4)} stroke="currentColor" strokeOpacity={0.5} />
+      <text x={pct(at)} y={px(y + 16)} fontSize={TICK_FONT} textAnchor={anchor} fill="currentColor" fillOpacity={0.8}>
+        {label}
+      </text>
+    </g>
+  );
+}
+
+/** The x axis' base line across the plot at `y` pixels. */
+export function XBaseLine({ y }: { y: number }) {
+  return <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.5} />;
+}
+
+/** The x axis' title, centred below its values. */
+export function XTitle({ y, title }: { y: number; title?: string }) {
+  return title ? (
+    <text x="50%" y={px(y + 34)} fontSize={TITLE_FONT} textAnchor="middle" fill="currentColor">
+      {title}
+    </text>
+  ) : null;
+}
+
+/**
+ * Gridlines placed directly, for the drawing that also runs in the browser (the log panels, drawn on /analyse
+ * after an analysis): the server-only drawings place the same rows with @visx/grid (axes.tsx), which would add
+ * its code to that page's script.
+ */
+export function PlainYGrid({
   ticks,
   y,
   format,
@@ -165,37 +232,20 @@ export function YGrid({
   ticks: number[];
   y: (v: number) => number;
   format: (v: number) => string;
-  /** Marks the tick labels for the reader's units (data-u, converted in the browser). */
   unit?: Quantity;
-  /** Cells in series, for per-cell ↔ per-pack conversion. */
   cells?: number;
 }) {
   return (
     <g className="chart-grid">
       {ticks.map((t) => (
-        <g key={t}>
-          <line x1="0%" x2="100%" y1={px(y(t))} y2={px(y(t))} stroke="currentColor" strokeOpacity={0.14} />
-          <text
-            x={-6}
-            y={px(y(t) + 4)}
-            textAnchor="end"
-            fontSize={TICK_FONT}
-            fill="currentColor"
-            fillOpacity={0.8}
-            data-u={unit}
-            data-v={unit ? t : undefined}
-            data-s={unit ? cells : undefined}
-          >
-            {format(t)}
-          </text>
-        </g>
+        <YGridRow key={t} y={y(t)} value={t} label={format(t)} unit={unit} cells={cells} />
       ))}
     </g>
   );
 }
 
-/** The x axis: a base line, ticks and their values under the plot, and the axis title centred below. */
-export function XAxis({
+/** The x axis placed directly, for the log panels (see PlainYGrid); the others use @visx/axis (axes.tsx). */
+export function PlainXAxis({
   ticks,
   x,
   y,
@@ -210,31 +260,11 @@ export function XAxis({
 }) {
   return (
     <g className="chart-axis">
-      <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.5} />
-      {ticks.map((t) => {
-        const at = x(t);
-        const anchor = at < 4 ? "start" : at > 96 ? "end" : "middle";
-        return (
-          <g key={t}>
-            <line x1={pct(at)} x2={pct(at)} y1={px(y)} y2={px(y + 4)} stroke="currentColor" strokeOpacity={0.5} />
-            <text
-              x={pct(at)}
-              y={px(y + 16)}
-              fontSize={TICK_FONT}
-              textAnchor={anchor}
-              fill="currentColor"
-              fillOpacity={0.8}
-            >
-              {format(t)}
-            </text>
-          </g>
-        );
-      })}
-      {title ? (
-        <text x="50%" y={px(y + 34)} fontSize={TITLE_FONT} textAnchor="middle" fill="currentColor">
-          {title}
-        </text>
-      ) : null}
+      <XBaseLine y={y} />
+      {ticks.map((t) => (
+        <XTick key={t} at={x(t)} y={y} label={format(t)} />
+      ))}
+      <XTitle y={y} title={title} />
     </g>
   );
 }

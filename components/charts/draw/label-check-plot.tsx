@@ -8,7 +8,8 @@ import { Fragment } from "react";
 import type { LabelCheckPoint } from "@/lib/open-data/chart-data";
 import { LABEL_CHECK_WORDS, RATING_LABELS, type RatingKind } from "@/lib/figure-words";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
-import { MarkerDefs, MarkerUse, XAxis, YGrid, YTitle, fmtNum, pct, px, yTickCount } from "./kit";
+import { XAxis, YGrid } from "./axes";
+import { MarkerDefs, MarkerUse, YTitle, fmtNum, pct, px, yTickCount } from "./kit";
 
 /** Which rating the points carry up the y axis: the sag-limited C estimate or the sustained C measured. */
 export type RatingSeries = RatingKind;

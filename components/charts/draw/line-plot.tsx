@@ -4,19 +4,8 @@
 import { scaleLinear } from "@visx/scale";
 import { seriesStyle } from "../palette";
 import type { Quantity } from "@/lib/units";
-import {
-  MarkerDefs,
-  MarkerUse,
-  UnitTspan,
-  XAxis,
-  YGrid,
-  YTitle,
-  linePath,
-  fmtNum,
-  px,
-  tickDigits,
-  yTickCount,
-} from "./kit";
+import { XAxis, YGrid } from "./axes";
+import { MarkerDefs, MarkerUse, UnitTspan, YTitle, linePath, fmtNum, px, tickDigits, yTickCount } from "./kit";
 
 export type XY = { x: number; y: number };
 export type LineSeries = {

@@ -5,7 +5,7 @@
 import { scaleLinear } from "@visx/scale";
 import { seriesStyle } from "../palette";
 import type { Quantity } from "@/lib/units";
-import { GUTTER, UnitTspan, XAxis, YGrid, fmtNum, linePath, px, tickDigits } from "./kit";
+import { GUTTER, PlainXAxis, PlainYGrid, UnitTspan, fmtNum, linePath, px, tickDigits } from "./kit";
 
 /** One reading of a log: time (s), voltage (V, per cell or per pack as the drawing's title says), current (A)
  * and pack temperature (°C); a panel is drawn for current and temperature only when the log has them. */
@@ -120,7 +120,7 @@ export function LogPanels({
                 </>
               ) : null}
             </text>
-            <YGrid
+            <PlainYGrid
               ticks={ticks}
               y={y}
               format={(v) => fmtNum(v, Math.min(panel.digits, tickDigits(ticks)))}
@@ -158,7 +158,7 @@ export function LogPanels({
           </g>
         );
       })}
-      <XAxis ticks={x.ticks(tickCount)} x={x} y={bottom} format={(v) => fmtNum(v, 0)} title={time.title} />
+      <PlainXAxis ticks={x.ticks(tickCount)} x={x} y={bottom} format={(v) => fmtNum(v, 0)} title={time.title} />
       {interactive ? (
         <line
           data-chart-cursor=""

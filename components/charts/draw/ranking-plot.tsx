@@ -1,10 +1,14 @@
 // Maker ranking: each maker's median label ratio as a bar, the maker's name above it, with the "label met"
-// line at 1.0. Bars that fall short are vermillion, the others blue (palette.ts, as the label check).
+// line at 1.0. Bars that fall short are vermillion, the others blue (palette.ts, as the label check). Axis, rows
+// and bars are @visx components that need no hooks (draw/markup.ts walks them like React DOM would).
+import { Group } from "@visx/group";
 import { scaleLinear } from "@visx/scale";
+import { Bar } from "@visx/shape";
 import { CHART_RATING_WORDS, type RankingBar } from "@/lib/open-data/chart-data";
 import type { ChartRating } from "@/lib/open-data/chart-state";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
-import { GUTTER, XAxis, fmtNum, pct, px } from "./kit";
+import { XAxis } from "./axes";
+import { GUTTER, fmtNum, pct, px } from "./kit";
 
 const TOP = 22;
 const BOTTOM = 44;
@@ -67,22 +71,16 @@ export function RankingPlot({
         const color = b.labelRatio < 1 ? SHORT_STYLE.color : MEETS_STYLE.color;
         const value = compact ? fmtNum(b.labelRatio, 2) : `${fmtNum(b.labelRatio, 2)} · ${b.packCount} packs`;
         return (
-          <g key={b.label}>
-            <text x={-GUTTER} y={px(y0 + 12)} fontSize={12} fill="currentColor">
+          // One row per maker, moved down into place (@visx/group); the bar is a @visx/shape Bar.
+          <Group key={b.label} top={px(y0)}>
+            <text x={-GUTTER} y={12} fontSize={12} fill="currentColor">
               {b.label}
             </text>
-            <rect x="0%" y={px(y0 + 16)} width={pct(x(b.labelRatio))} height={barH} fill={color} />
-            <text
-              x={pct(x(b.labelRatio))}
-              dx={6}
-              y={px(y0 + 16 + barH)}
-              fontSize={11}
-              fill="currentColor"
-              fillOpacity={0.8}
-            >
+            <Bar x="0%" y={16} width={pct(x(b.labelRatio))} height={barH} fill={color} />
+            <text x={pct(x(b.labelRatio))} dx={6} y={px(16 + barH)} fontSize={11} fill="currentColor" fillOpacity={0.8}>
               {value}
             </text>
-          </g>
+          </Group>
         );
       })}
       <XAxis

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { PackRow } from "@/lib/catalogue";
 import { queryPacks, sortPacks } from "@/lib/pack-query";
-import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams } from "@/lib/pack-query-params";
+import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { packListQuery } from "@/lib/api-contract/queries";
 import { searchParamsObject } from "@/lib/api-contract/params";
 
@@ -72,20 +72,58 @@ describe("pack table query", () => {
 
   it("pages; a page past the last is empty, never silently the last (the API answers 422)", () => {
     const rows = Array.from({ length: 30 }, () => row({}));
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 3 }).rows).toHaveLength(10);
-    const past = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 9 });
+    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 3 }, null).rows).toHaveLength(10);
+    const past = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 9 }, null);
     expect(past).toMatchObject({ total: 30, page: 9, pageCount: 3 });
     expect(past.rows).toHaveLength(0);
   });
 
-  it("searches fuzzily across maker and model, every word must match", () => {
+  it("keeps only the packs the search found, best match first (Fuse.js ranks; the database decides what matches)", () => {
     const rows = [
-      row({ makerName: "Kitebrook", model: "Gust 1300 4S 75C" }),
-      row({ makerName: "Kitebrook", model: "Updraft 2200 3S 50C" }),
-      row({ makerName: "Glimwatt", model: "Spark 1300 4S 75C" }),
+      row({ id: 1, makerName: "Kitebrook", model: "Gust 1300 4S 75C", labelledContinuousC: 75 }),
+      row({ id: 2, makerName: "Kitebrook", model: "Updraft 2200 3S 50C" }),
+      row({ id: 3, makerName: "Kiteborok", model: "Gust 1300 4S 60C", labelledContinuousC: 60 }),
+      row({ id: 4, makerName: "Glimwatt", model: "Spark 1300 4S 75C" }),
     ];
-    const page = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "kitbrook gust" });
-    expect(page.rows.map((r) => r.model)).toEqual(["Gust 1300 4S 75C"]);
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "glimwat" }).total).toBe(1);
+    // In the catalogue's order the look-alike maker comes second; ranking puts the closer spelling first.
+    const found = new Set([3, 1]);
+    const page = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "kitebrook gust" }, found);
+    expect(page.rows.map((r) => r.id)).toEqual([1, 3]);
+    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "kiteborok gust" }, found).rows.map((r) => r.id)).toEqual([
+      3, 1,
+    ]);
+    // A column the reader sorts by wins over relevance; the filters still apply to what the search found.
+    const byModel = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust", sort: "model", dir: "desc" }, found);
+    expect(byModel.rows.map((r) => r.model)).toEqual(["Gust 1300 4S 75C", "Gust 1300 4S 60C"]);
+    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust", minC: 70 }, found).total).toBe(1);
+    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust" }, new Set()).total).toBe(0);
+  });
+});
+
+describe("the /packs rewrite", () => {
+  it("sends /packs with any parameter the table writes to its per-request render (next.config.mjs)", async () => {
+    // @ts-expect-error -- next.config.mjs is plain JavaScript (the project type-checks no JavaScript files)
+    const config: unknown = await import("@/next.config.mjs");
+    const list =
+      typeof config === "object" && config !== null && "PACK_TABLE_PARAMS" in config ? config.PACK_TABLE_PARAMS : null;
+    const PACK_TABLE_PARAMS = Array.isArray(list) ? list.map(String) : [];
+    const everything: PackParams = {
+      q: "ridge",
+      cells: 4,
+      minMah: 1,
+      maxMah: 2,
+      minC: 3,
+      maxC: 4,
+      minG: 5,
+      maxG: 6,
+      connector: "XT60",
+      maker: "m",
+      group: "g",
+      sort: "weight",
+      dir: "desc",
+      page: 2,
+      size: 50,
+    };
+    expect([...writePackParams(everything).keys()].sort()).toEqual([...PACK_TABLE_PARAMS].sort());
   });
 });

@@ -1,5 +1,6 @@
-// The packs table as plain markup: the server renders the first page into a static island, the client renders
-// filtered pages with the same component. Sorting, paging and "clear filters" are buttons carrying data-*
+// The packs table as plain markup: the server renders the first page into a static island (its header row and
+// body laid out from a @tanstack/react-table row model, pack-table-model.tsx), the client renders later pages with
+// the same cells. Sorting, paging and "clear filters" are buttons carrying data-*
 // attributes that packs-client.tsx handles for the whole table (so the markup needs no script of its own).
 // The pack's name stays in a sticky first column while the figures scroll beside it on a phone.
 import { Qty, UnitSymbol } from "@/components/quantity";
@@ -7,7 +8,7 @@ import { fmt, fmtC, fmtLabelledC, fmtRatio } from "@/lib/format";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 import type { ApiPackPage, ApiPackRow } from "./types";
 
-type Column = {
+export type Column = {
   id: string;
   header: React.ReactNode;
   /** Words for the "Columns" menu. */
@@ -126,14 +127,60 @@ function SortButton({
 const ariaSort = (params: PackParams, sort: PackSortKey) =>
   params.sort === sort ? (params.dir === "asc" ? "ascending" : "descending") : "none";
 
+/** The sortable "Pack" column's header. */
+export function PackNameHead({ params }: { params: PackParams }) {
+  return (
+    <th scope="col" className="pack" aria-sort={ariaSort(params, "maker")}>
+      <SortButton params={params} sort="maker">
+        Pack
+      </SortButton>
+    </th>
+  );
+}
+
+/** A figure column's header. */
+export function PackColumnHead({ params, column: c }: { params: PackParams; column: Column }) {
+  return (
+    <th scope="col" className={`c-${c.id}${c.numeric ? " n" : ""}`} aria-sort={ariaSort(params, c.sort)}>
+      <SortButton params={params} sort={c.sort} numeric={c.numeric}>
+        {c.header}
+      </SortButton>
+    </th>
+  );
+}
+
+/** A row's first cell: maker and model, linked to the pack's page. */
+export function PackNameCell({ row: r }: { row: ApiPackRow }) {
+  return (
+    <th scope="row" className="pack">
+      <span className="muted block text-xs">{r.makerName}</span>
+      <a href={`/packs/${r.slug}`} className="font-medium">
+        {r.model}
+      </a>
+    </th>
+  );
+}
+
+/** A row's figure in one column. */
+export function PackValueCell({ row, column: c }: { row: ApiPackRow; column: Column }) {
+  return <td className={`c-${c.id}${c.numeric ? " n" : ""}`}>{c.cell(row)}</td>;
+}
+
+/**
+ * The table, its count and its pages. `rows` are the header row and body the server builds from its row model
+ * (pack-table-model.tsx, @tanstack/react-table, never sent to the browser); without them (in the browser) the
+ * same cells are laid out here from the page's rows directly.
+ */
 export function PackTable({
   page,
   params,
   loading = false,
+  rows,
 }: {
   page: ApiPackPage;
   params: PackParams;
   loading?: boolean;
+  rows?: { head: React.ReactNode; body: React.ReactNode };
 }) {
   const hasGroup = params.group !== null;
   return (
@@ -155,41 +202,29 @@ export function PackTable({
           </caption>
           <thead>
             <tr>
-              <th scope="col" className="pack" aria-sort={ariaSort(params, "maker")}>
-                <SortButton params={params} sort="maker">
-                  Pack
-                </SortButton>
-              </th>
-              {PACK_COLUMNS.map((c) => (
-                <th
-                  key={c.id}
-                  scope="col"
-                  className={`c-${c.id}${c.numeric ? " n" : ""}`}
-                  aria-sort={ariaSort(params, c.sort)}
-                >
-                  <SortButton params={params} sort={c.sort} numeric={c.numeric}>
-                    {c.header}
-                  </SortButton>
-                </th>
-              ))}
+              {rows ? (
+                rows.head
+              ) : (
+                <>
+                  <PackNameHead params={params} />
+                  {PACK_COLUMNS.map((c) => (
+                    <PackColumnHead key={c.id} params={params} column={c} />
+                  ))}
+                </>
+              )}
             </tr>
           </thead>
           <tbody>
-            {page.data.map((r) => (
-              <tr key={r.slug}>
-                <th scope="row" className="pack">
-                  <span className="muted block text-xs">{r.makerName}</span>
-                  <a href={`/packs/${r.slug}`} className="font-medium">
-                    {r.model}
-                  </a>
-                </th>
-                {PACK_COLUMNS.map((c) => (
-                  <td key={c.id} className={`c-${c.id}${c.numeric ? " n" : ""}`}>
-                    {c.cell(r)}
-                  </td>
+            {rows
+              ? rows.body
+              : page.data.map((r) => (
+                  <tr key={r.slug}>
+                    <PackNameCell row={r} />
+                    {PACK_COLUMNS.map((c) => (
+                      <PackValueCell key={c.id} row={r} column={c} />
+                    ))}
+                  </tr>
                 ))}
-              </tr>
-            ))}
           </tbody>
         </table>
         {!loading && page.data.length === 0 ? (

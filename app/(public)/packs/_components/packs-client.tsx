@@ -1,17 +1,11 @@
 "use client";
 // /packs: the URL is the one source of truth for the filters. Every change reads the URL as it is at that
 // moment, merges its patch in and writes it back (history.pushState, or replaceState while a search is refined),
-// so changes made in quick succession build on each other and never on an older render. The unfiltered first
-// page is the server's static island; any other page comes from the public API and is drawn by the same markup.
+// so changes made in quick succession build on each other and never on an older render. The page the URL asked
+// for when it was opened is the server's static island (rendered from the search params); any other page comes
+// from the public API and is drawn by the same markup.
 import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from "react";
-import {
-  PACK_SORT_KEYS,
-  PAGE_SIZES,
-  isDefaultPackParams,
-  readPackParams,
-  writePackParams,
-  type PackParams,
-} from "@/lib/pack-query-params";
+import { PACK_SORT_KEYS, PAGE_SIZES, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { PackFilters } from "./pack-filters";
 import { PACK_COLUMNS, PackTable } from "./pack-table";
 import type { ApiPackList, ApiPackPage, FilterOptions } from "./types";
@@ -25,12 +19,12 @@ const subscribe = (fn: () => void) => {
     window.removeEventListener(URL_EVENT, fn);
   };
 };
-/** The filters in the address bar, written canonically ("" on the server: the unfiltered first page). */
-const useCanonicalQuery = () =>
+/** The filters in the address bar, written canonically (on the server: the query the page was rendered for). */
+const useCanonicalQuery = (initialQuery: string) =>
   useSyncExternalStore(
     subscribe,
     () => writePackParams(readPackParams(new URLSearchParams(window.location.search))).toString(),
-    () => "",
+    () => initialQuery,
   );
 
 /** Merges a patch into the URL as it is now; refining a search word by word replaces the entry. */
@@ -81,16 +75,27 @@ function onTableClick(e: React.MouseEvent<HTMLElement>) {
     });
 }
 
-export function PacksClient({ first, options }: { first: ReactNode; options: FilterOptions }) {
-  const canonical = useCanonicalQuery();
+export function PacksClient({
+  first,
+  options,
+  initialQuery,
+  initialError,
+}: {
+  first: ReactNode;
+  options: FilterOptions;
+  /** The canonical query (writePackParams) the server rendered `first` for. */
+  initialQuery: string;
+  /** The server's message for that query (unknown group, page past the last), if any. */
+  initialError: string | null;
+}) {
+  const canonical = useCanonicalQuery(initialQuery);
   const params = readPackParams(new URLSearchParams(canonical));
-  const isDefault = isDefaultPackParams(params);
-  const [fetched, setFetched] = useState<Fetched>({ key: "", page: null, error: null });
+  const [fetched, setFetched] = useState<Fetched>({ key: initialQuery, page: null, error: initialError });
   const [hidden, setHidden] = useState<string[]>(["capacityRatio"]);
-  // The server's first page shows until the reader filters; back on the defaults, the API answers like for any page.
+  // The server's page shows until the reader changes a filter; back on that query, the API answers like for any page.
   const [filtered, setFiltered] = useState(false);
-  if (!isDefault && !filtered) setFiltered(true);
-  const island = isDefault && !filtered;
+  if (canonical !== initialQuery && !filtered) setFiltered(true);
+  const island = canonical === initialQuery && !filtered;
 
   useEffect(() => {
     if (island) return;

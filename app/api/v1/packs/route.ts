@@ -4,10 +4,10 @@ import { packList } from "@/lib/api-contract/responses";
 import { packFields } from "@/lib/open-data/fields";
 import { packListRecord } from "@/lib/open-data/pack-list";
 import { flatRecord } from "@/lib/open-data/records";
-import { queryPacks } from "@/lib/pack-query";
 import { toPackParams } from "@/lib/pack-query-params";
 import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
 import { requireKnownGroup } from "@/server/open-data/catalogue";
+import { findPackPage } from "@/server/pack-search";
 import { cachedPackRows } from "@/server/public-data";
 
 export const GET = apiGet(async (req) => {
@@ -15,7 +15,7 @@ export const GET = apiGet(async (req) => {
   const { sort, dir, page: _page, size: _size, ...filters } = query;
   const params = toPackParams(query);
   await requireKnownGroup(filters.group);
-  const result = queryPacks(await cachedPackRows(params.group), params);
+  const result = await findPackPage(await cachedPackRows(params.group), params);
   const page = pageOf(req, params, result.total);
   return apiJson(
     req,
