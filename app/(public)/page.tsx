@@ -32,7 +32,7 @@ export default async function HomePage() {
             id="home-q"
             name="q"
             type="search"
-            placeholder="Search packs, e.g. ridge 1300"
+            placeholder="Search packs, e.g. ridge 1800"
             autoComplete="off"
             className="flex-1 rounded-md border border-ink/20 bg-paper-raised px-3 py-2 dark:border-night-line dark:bg-night-sunk"
           />

@@ -156,7 +156,7 @@ export function PackFilters({
           type="search"
           name="q"
           value={params.q}
-          placeholder="e.g. ridge 1300"
+          placeholder="e.g. ridge 1800"
           ms={250}
           commit={(v) => onChange?.({ q: v, page: 1 }, "replace")}
           autoComplete="off"
