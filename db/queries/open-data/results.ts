@@ -11,6 +11,7 @@ import { benchAccuracyColumns } from "../bench-profiles";
 import type { CurvePoint } from "@/lib/analysis";
 import { headlineCurve } from "@/lib/curves";
 import type { ResultFlatRow } from "@/lib/open-data/records";
+import { methodCardColumns } from "../method-card-columns";
 import { headlineColumns } from "../results";
 import { isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
 import { resultConditions, type ResultWhere } from "./where";
@@ -24,21 +25,10 @@ const columns = {
   packSlug: packs.slug,
   makerSlug: makers.slug,
   groupKey: results.groupKey,
-  testedOn: results.testedOn,
   publishedAt: results.publishedAt,
   notes: results.notes,
   figures: results.figures,
-  ambientTemperatureC: results.ambientTemperatureC,
-  packStartTemperatureC: results.packStartTemperatureC,
-  loadMode: results.loadMode,
-  loadCurrentA: results.loadCurrentA,
-  loadRateC: results.loadRateC,
-  cutoffVPerCell: results.cutoffVPerCell,
-  stopTemperatureC: results.stopTemperatureC,
-  resistanceMethod: results.resistanceMethod,
-  equipment: results.equipment,
-  sampleRateHz: results.sampleRateHz,
-  cyclesBeforeTest: results.cyclesBeforeTest,
+  ...methodCardColumns,
   cellsInSeries: packs.cellsInSeries,
   ratedCapacityMah: packs.ratedCapacityMah,
   labelledContinuousC: packs.labelledContinuousC,
