@@ -41,11 +41,42 @@ export const packListShape = {
 };
 export const packListQuery = withRanges(z.object(packListShape));
 
-/** GET /api/v1/results. */
+/**
+ * GET /api/v1/results reads numbered pages only this far (OFFSET grows with the page number); later results are
+ * read by key, `after=<id>`, which links.next always uses.
+ */
+export const RESULT_PAGE_CAP = 20;
+
+/** GET /api/v1/results: numbered pages up to RESULT_PAGE_CAP, or pages by key (`after`); not both. */
 export const resultListQuery = withRanges(
-  z.object({ ...packFilterShape, pack: packFilter, group: groupFilter, ...pageShape }),
-);
-export type ResultFilters = Omit<z.infer<typeof resultListQuery>, "page" | "size">;
+  z.object({
+    ...packFilterShape,
+    pack: packFilter,
+    group: groupFilter,
+    page: z.coerce
+      .number()
+      .int("page must be a whole number.")
+      .min(1, "page starts at 1.")
+      .max(
+        RESULT_PAGE_CAP,
+        `page goes up to ${RESULT_PAGE_CAP}; for later results use after=<id of the last result you have> (links.next gives it).`,
+      )
+      .optional()
+      .describe(
+        `Page number, 1–${RESULT_PAGE_CAP} (default 1), with an exact total. A page past the last answers 422; for later results use after.`,
+      ),
+    size: pageShape.size,
+    after: rowId
+      .optional()
+      .describe(
+        "Results with an id above this one, in id order (paging by key; links.next gives it). The total is then PostgreSQL's planner estimate (meta.totalIsEstimate).",
+      ),
+  }),
+).refine((v) => v.page === undefined || v.after === undefined, {
+  path: ["after"],
+  message: "Use page or after, not both.",
+});
+export type ResultFilters = Omit<z.infer<typeof resultListQuery>, "page" | "size" | "after">;
 
 /** GET /api/v1/makers. */
 export const pageQuery = z.object(pageShape);

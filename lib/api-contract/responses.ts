@@ -6,7 +6,7 @@ import { z } from "zod";
 import { AGGREGATE_FIGURES } from "@/lib/open-data/aggregate";
 import { CHART_KINDS } from "@/lib/open-data/chart-state";
 import { DATA_LICENCE_LABEL, DATA_LICENCE_SPDX } from "@/lib/open-data/licence";
-import { PACK_SORT_KEYS } from "./queries";
+import { PACK_SORT_KEYS, RESULT_PAGE_CAP } from "./queries";
 import { makerRecord, packRecord, resultRecord } from "./records";
 
 export const licenceSchema = z
@@ -110,7 +110,35 @@ export const makerList = listOf(makerRecord);
 export const makerItem = itemOf(makerRecord);
 export const packList = listOf(packListItem);
 export const packItem = itemOf(packRecord);
-export const resultList = listOf(resultRecord);
+/**
+ * GET /api/v1/results pages by number (exact total) or by key (`after`: the total is PostgreSQL's planner estimate,
+ * and there is no page number, page count, last or previous page). links.next always reads by key.
+ */
+export const resultList = z.object({
+  data: z.array(resultRecord),
+  meta: listMeta.extend({
+    page: listMeta.shape.page.optional().describe("Page number (absent when paging by key)."),
+    pageCount: listMeta.shape.pageCount.optional().describe("Pages of this size (absent when paging by key)."),
+    total: z
+      .number()
+      .int()
+      .min(0)
+      .describe(
+        "Results in the whole list: exact with page (also in X-Total-Count), PostgreSQL's planner estimate with after.",
+      ),
+    totalIsEstimate: z
+      .boolean()
+      .describe("true when total is the planner's estimate (paging by key), false when it is an exact count."),
+    after: z.number().int().min(1).optional().describe("The id this page starts after (paging by key)."),
+  }),
+  links: listLinks.extend({
+    last: z
+      .string()
+      .nullable()
+      .describe(`The last numbered page; null when paging by key or when it lies past page ${RESULT_PAGE_CAP}.`),
+    next: z.string().nullable().describe("The next page, by key (after=<last id of this page>); null at the end."),
+  }),
+});
 export const resultItem = itemOf(resultRecord);
 export const groupList = listOf(groupSummary);
 export const groupItem = itemOf(groupDetail);

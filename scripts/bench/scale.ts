@@ -102,7 +102,11 @@ async function routes(): Promise<Route[]> {
         (i) => `/api/v1/packs?group=${encodeURIComponent(groups[i % groups.length]?.g ?? "")}&sort=measuredC`,
       ),
     },
-    { name: "/api/v1/results?page=21+", urls: range.map((i) => `/api/v1/results?page=${21 + i * 37}`) },
+    // Far pages read by key (numbered pages stop at 20): after a random published id.
+    {
+      name: "/api/v1/results?after=<id>",
+      urls: range.map((i) => `/api/v1/results?after=${ids[(i + SAMPLES) % ids.length]?.id ?? 1}`),
+    },
     { name: "/api/v1/packs/<slug>", urls: range.map((i) => `/api/v1/packs/${s(i)}`) },
     { name: "/packs/<slug>", urls: range.map((i) => `/packs/${s(i + SAMPLES)}`) },
     { name: "/results/<id>", urls: range.map((i) => `/results/${ids[i % ids.length]?.id ?? 1}`) },

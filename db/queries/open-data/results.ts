@@ -1,7 +1,8 @@
 // Published results for the public API, downloads and charts: method card and figures, never files or
 // contributor identities.
 import "server-only";
-import { and, asc, count, eq } from "drizzle-orm";
+import { and, asc, count, eq, gt, sql } from "drizzle-orm";
+import { z } from "zod";
 import { db } from "@/db";
 import { benchProfiles, makers, packs, results } from "@/db/schema";
 import { resolveAccuracy } from "@/lib/analysis/uncertainty";
@@ -90,6 +91,40 @@ export async function listResultsPage(w: ResultWhere, { page, size }: Page): Pro
     db.select({ n: count() }).from(results).innerJoin(packs, packOfResult).innerJoin(makers, makerOfPack).where(where),
   ]);
   return { rows: rows.map(toRow), total: total?.n ?? 0 };
+}
+
+/**
+ * A page by key: published results with an id above `after`, in id order, read through the results (status, id)
+ * index; one row more than asked tells whether another page follows.
+ */
+export async function listResultsAfter(
+  w: ResultWhere,
+  { after, size }: { after: number; size: number },
+): Promise<{ rows: ResultFlatRow[]; hasMore: boolean }> {
+  const rows = await baseQuery()
+    .where(and(isPublished, gt(results.id, after), ...resultConditions(w)))
+    .orderBy(asc(results.id))
+    .limit(size + 1);
+  return { rows: rows.slice(0, size).map(toRow), hasMore: rows.length > size };
+}
+
+const explainJson = z.array(z.object({ Plan: z.object({ "Plan Rows": z.number().min(0) }) })).min(1);
+
+/**
+ * How many published results match, as PostgreSQL's planner estimates it ("Plan Rows" of EXPLAIN (FORMAT JSON)
+ * on the list's query; the count-estimate technique of the PostgreSQL wiki, "Count estimate"): no rows are read,
+ * so it costs the same at any size, and it is only as good as the table statistics (ANALYZE / autovacuum).
+ */
+export async function estimatePublishedResults(w: ResultWhere): Promise<number> {
+  const list = db
+    .select({ id: results.id })
+    .from(results)
+    .innerJoin(packs, packOfResult)
+    .innerJoin(makers, makerOfPack)
+    .where(and(isPublished, ...resultConditions(w)));
+  const out = await db.execute(sql`explain (format json) ${list.getSQL()}`);
+  const plan = explainJson.parse(out.rows[0]?.["QUERY PLAN"]);
+  return Math.round(plan[0]?.Plan["Plan Rows"] ?? 0);
 }
 
 export async function getPublishedResult(id: number): Promise<ResultFlatRow | null> {

@@ -1,24 +1,23 @@
-// GET /api/v1/results — published results with method cards and figures, paged, filtered by pack, group and the
-// packs table's filters.
+// GET /api/v1/results — published results with method cards and figures, filtered by pack, group and the packs
+// table's filters; numbered pages up to a cap, or pages by key (after=<id>) with an estimated total.
 import { resultListQuery } from "@/lib/api-contract/queries";
 import { resultList } from "@/lib/api-contract/responses";
 import { nestedRecord } from "@/lib/open-data/records";
 import { resultFields } from "@/lib/open-data/result-fields";
-import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
+import { apiGet, apiJson, apiOptions, parseQuery } from "@/server/api";
 import { packWhere, requireKnownGroup } from "@/server/open-data/catalogue";
-import { cachedApiResultsPage } from "@/server/public-data";
+import { resultsPage } from "@/server/result-pages";
 
 export const GET = apiGet(async (req) => {
-  const { page, size, ...filters } = parseQuery(req, resultListQuery);
+  const { page, size, after, ...filters } = parseQuery(req, resultListQuery);
   await requireKnownGroup(filters.group);
   const where = { ...(await packWhere(filters)), pack: filters.pack, group: filters.group };
-  const { rows, total } = await cachedApiResultsPage(filters, where, { page, size });
-  const env = pageOf(req, { page, size }, total);
+  const out = await resultsPage(req, { page, size, after }, filters, where);
   return apiJson(
     req,
     resultList,
-    { data: rows.map((r) => nestedRecord(resultFields, r)), meta: { ...env.meta, filters }, links: env.links },
-    env.headers,
+    { data: out.rows.map((r) => nestedRecord(resultFields, r)), meta: { ...out.meta, filters }, links: out.links },
+    out.headers,
   );
 });
 export const OPTIONS = apiOptions;
