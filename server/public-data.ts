@@ -10,6 +10,7 @@ import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/grou
 import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
 import type { PackWhere, ResultWhere } from "@/db/queries/open-data/where";
 import { getPackDetail } from "@/db/queries/pack-detail";
+import { activeMakerWithPacksExists, activePackExists, getPackRowBySlug } from "@/db/queries/pack-by-slug";
 import { listActiveMakers, listActivePacks, listPackRows } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { getSiteSettings } from "@/db/queries/site-settings";
@@ -106,10 +107,18 @@ async function boundedFilters(
 ): Promise<boolean> {
   if (Object.keys(f).some((k) => f[k] !== undefined && !CACHEABLE_FILTERS.has(k))) return false;
   if (f.group !== undefined && !(await knownGroup(f.group))) return false;
-  const catalogue = f.pack !== undefined || f.maker !== undefined ? await cachedPacks() : [];
-  if (f.pack !== undefined && !catalogue.some((p) => p.slug === f.pack)) return false;
-  if (f.maker !== undefined && !catalogue.some((p) => p.makerSlug === f.maker)) return false;
+  // One indexed row each (db/queries/pack-by-slug.ts), not a search of the whole catalogue.
+  if (f.pack !== undefined && !(await activePackExists(f.pack))) return false;
+  if (f.maker !== undefined && !(await activeMakerWithPacksExists(f.maker))) return false;
   return true;
+}
+
+/**
+ * One pack as GET /api/v1/packs/{slug} shows it, read by its slug through indexes (its own HTTP cache headers
+ * and ETag do the caching; a data-cache entry per asked slug would let made-up slugs fill the cache).
+ */
+export function packRowBySlug(slug: string) {
+  return getPackRowBySlug(slug);
 }
 
 /** A page of published results; `filters` (as asked) make the cache key, `where` (resolved) the query. */
