@@ -1,4 +1,5 @@
-// Bench agreement for pages: the published rows are cached under the `results` tag (any decision refreshes them);
+// Bench agreement for pages: the published rows are cached under the `benches` tag (a decision on a result measured
+// with a bench profile, or a bench profile's edit, refreshes them), a bench's own page under bench:<id>;
 // the comparison itself (lib/bench-agreement.ts) is pure arithmetic done per request.
 import "server-only";
 import { unstable_cache } from "next/cache";
@@ -7,7 +8,7 @@ import { benchAgreements, scoreNewResult, type BenchAgreement, type NewResultAgr
 import { benchAgreementSummary } from "@/lib/analysis/agreement/bench-summary";
 import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/server/cache-tags";
 
-const cachedRows = unstable_cache(listAgreementRows, ["bench-agreement-rows"], { tags: [t.results], revalidate });
+const cachedRows = unstable_cache(listAgreementRows, ["bench-agreement-rows"], { tags: [t.benches], revalidate });
 
 const EMPTY: BenchAgreement = { summary: benchAgreementSummary([]), scores: [] };
 
@@ -18,7 +19,10 @@ export async function agreementOfBench(benchId: number, rows?: Awaited<ReturnTyp
 
 /** Public bench page: its facts and agreement; null when it has no published result. */
 export function cachedPublicBench(id: number) {
-  return unstable_cache(() => getPublicBench(id), ["public-bench", String(id)], { tags: [t.results], revalidate })();
+  return unstable_cache(() => getPublicBench(id), ["public-bench", String(id)], {
+    tags: [t.bench(id)],
+    revalidate,
+  })();
 }
 
 /** For moderators and contributors (never cached: the result may be waiting for review). */

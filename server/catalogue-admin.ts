@@ -1,21 +1,25 @@
 // Admin catalogue services: a pack's label edit and merges of duplicate makers or packs. The write and its
-// audit event share one transaction (db/mutations/catalogue-admin.ts); after the commit every page that
-// shows a touched pack, maker or group, and every list of packs and results, is revalidated.
+// audit event share one transaction (db/mutations/catalogue-admin.ts); after the commit the pages of the touched
+// packs and makers, of every published result on them (its page shows the pack's label and name), their groups
+// and benches, and the lists that name packs, are revalidated — no other pack's or result's page.
 import "server-only";
 import { mergeMakerRows, mergePackRows, writePackLabel, type Touched } from "@/db/mutations/catalogue-admin";
-import { listGroupKeysOfPacks } from "@/db/queries/catalogue-admin";
+import { listPublishedResultPlaces } from "@/db/queries/result-tag-sources";
 import type { PackLabelInput } from "@/lib/validations/catalogue-admin";
-import { cacheTags } from "@/server/cache-tags";
+import { cacheTags, tagsForResult } from "@/server/cache-tags";
 import { revalidateTags } from "@/server/revalidate";
 
 async function revalidateTouched(t: Touched): Promise<void> {
-  const groups = await listGroupKeysOfPacks(t.packIds);
+  const places = await listPublishedResultPlaces({ packIds: t.packIds });
   revalidateTags([
     ...t.packSlugs.map(cacheTags.pack),
     ...t.makerSlugs.map(cacheTags.maker),
-    cacheTags.packs,
-    cacheTags.results,
-    ...groups.map(cacheTags.group),
+    ...places.flatMap(tagsForResult),
+    // Lists that name packs or count them per group.
+    cacheTags.catalogue,
+    cacheTags.groups,
+    cacheTags.newest,
+    cacheTags.resultLists,
   ]);
 }
 

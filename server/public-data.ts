@@ -1,5 +1,5 @@
-// Cached reads behind the public pages and the public API. Each carries the tags of server/cache-tags.ts, so
-// moderation's revalidateTag() refreshes exactly the pages that show the changed data. Pages call these,
+// Cached reads behind the public pages and the public API. Each carries only the tags of what it shows
+// (server/cache-tags.ts), so a change's revalidateTag() refreshes exactly the pages that show the changed data. Pages call these,
 // never db/queries directly; integration tests call db/queries (unstable_cache needs a Next.js server).
 import "server-only";
 import { unstable_cache } from "next/cache";
@@ -17,64 +17,70 @@ import { getSiteSettings } from "@/db/queries/site-settings";
 import type { PackFilters, ResultFilters } from "@/lib/api-contract/queries";
 import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/server/cache-tags";
 
-export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.results, t.packs], revalidate });
+export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.groups], revalidate });
 
-export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.packs], revalidate });
+export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.catalogue], revalidate });
 
 export function cachedPackRows(groupKey: string | null) {
-  const tags = groupKey ? [t.packs, t.results, t.group(groupKey)] : [t.packs, t.results];
+  const tags = groupKey ? [t.catalogue, t.group(groupKey)] : [t.catalogue];
   return unstable_cache(() => listPackRows(groupKey), ["pack-rows", groupKey ?? "-"], { tags, revalidate })();
 }
 
 export function cachedPacksInGroup(groupKey: string) {
   return unstable_cache(() => listPacksInGroup(groupKey), ["packs-in-group", groupKey], {
-    tags: [t.group(groupKey), t.results, t.packs],
+    tags: [t.group(groupKey)],
     revalidate,
   })();
 }
 
 export function cachedMakerRanking(groupKey: string, rating: RankingRating = "estimate") {
   return unstable_cache(() => rankMakersInGroup(groupKey, rating), ["maker-ranking", groupKey, rating], {
-    tags: [t.group(groupKey), t.results, t.packs],
+    tags: [t.group(groupKey)],
     revalidate,
   })();
 }
 
 export function cachedNewestResults(limit: number) {
   return unstable_cache(() => listNewestApprovedResults(limit), ["newest-results", String(limit)], {
-    tags: [t.results],
+    tags: [t.newest],
     revalidate,
   })();
 }
 
 export function cachedPackDetail(slug: string) {
+  // The page shows this pack's results only: every change to one of them revalidates pack:<slug>.
   return unstable_cache(() => getPackDetail(slug), ["pack-detail", slug], {
-    tags: [t.pack(slug), t.packs],
+    tags: [t.pack(slug)],
     revalidate,
   })();
 }
 
 export function cachedResult(id: number) {
+  // Its pack's label and its bench's accuracy show here too: catalogue edits and bench edits name result:<id>.
   return unstable_cache(() => getPublicResult(id), ["result", String(id)], {
-    tags: [t.result(id), t.results],
+    tags: [t.result(id)],
     revalidate,
   })();
 }
 
 export function cachedComparison(slugs: string[], group: string | null) {
-  const tags = [t.results, t.packs, ...slugs.map((s) => t.pack(s)), ...(group ? [t.group(group)] : [])];
+  // Only these packs' results are compared, so their pack tags are enough (the group names which of them).
+  const tags = slugs.map((s) => t.pack(s));
   return unstable_cache(() => getComparison(slugs, group), ["comparison", slugs.join(","), group ?? "-"], {
     tags,
     revalidate,
   })();
 }
 
-/** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `packs`. */
-export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], { tags: [t.packs], revalidate });
+/** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `catalogue`. */
+export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], {
+  tags: [t.catalogue],
+  revalidate,
+});
 
 /** Per group, maker and pack size, how many published results (the chart builder offers only what has data). */
 export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-coverage"], {
-  tags: [t.results, t.packs],
+  tags: [t.groups],
   revalidate,
 });
 
@@ -124,12 +130,13 @@ export function packRowBySlug(slug: string) {
 /** A page of published results; `filters` (as asked) make the cache key, `where` (resolved) the query. */
 export async function cachedApiResultsPage(filters: ResultFilters, where: ResultWhere, page: Page) {
   if (page.page > CACHED_PAGES || !(await boundedFilters(filters))) return listResultsPage(where, page);
-  const tags = [
-    t.results,
-    t.packs,
+  // Narrowed to a pack, maker or group: that one's tag; otherwise the tag of the unnarrowed results lists.
+  const narrowed = [
     ...(filters.group ? [t.group(filters.group)] : []),
     ...(filters.pack ? [t.pack(filters.pack)] : []),
+    ...(filters.maker ? [t.maker(filters.maker)] : []),
   ];
+  const tags = narrowed.length > 0 ? narrowed : [t.resultLists];
   return unstable_cache(() => listResultsPage(where, page), ["api-results", keyOf(filters), keyOf(page)], {
     tags,
     revalidate,
@@ -140,7 +147,7 @@ export async function cachedGroupSamples(groupKey: string, filters: PackFilters,
   if (!(await knownGroup(groupKey))) return [];
   if (!(await boundedFilters(filters))) return listGroupSamples(groupKey, where);
   return unstable_cache(() => listGroupSamples(groupKey, where), ["group-samples", groupKey, keyOf(filters)], {
-    tags: [t.results, t.packs, t.group(groupKey)],
+    tags: [t.group(groupKey)],
     revalidate,
   })();
 }
@@ -149,7 +156,7 @@ export async function cachedGroupCurves(groupKey: string, filters: PackFilters, 
   if (!(await knownGroup(groupKey))) return [];
   if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, where);
   return unstable_cache(() => listGroupCurves(groupKey, where), ["group-curves", groupKey, keyOf(filters)], {
-    tags: [t.results, t.packs, t.group(groupKey)],
+    tags: [t.group(groupKey)],
     revalidate,
   })();
 }

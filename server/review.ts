@@ -16,13 +16,14 @@ import type { NewOutboxMessage } from "@/db/mutations/mail-outbox";
 import type { ResolvedFlag } from "@/lib/flag-resolution-message";
 import { rejectReasonLabels } from "@/lib/labels";
 import type { FlagResolution, ReaderFlagInput } from "@/lib/validations/review";
-import { cacheTags, tagsForResult } from "@/server/cache-tags";
+import { cacheTags, tagsForPublicationChange } from "@/server/cache-tags";
 import { appUrl, ownResultUrl } from "@/server/links";
 import { newResultOnPackMail, outboxMessage, reviewDecisionMail } from "@/server/mail";
 import { revalidateTags } from "@/server/revalidate";
 
-function revalidateResult(c: ResultContext): void {
-  revalidateTags(tagsForResult(c));
+/** A result left publication: its own tags and every list that counted it (never another pack's page). */
+function revalidatePublicationChange(c: ResultContext): void {
+  revalidateTags(tagsForPublicationChange(c));
 }
 
 function decisionMails(m: DecisionMailInput, said: string | null): NewOutboxMessage[] {
@@ -50,8 +51,8 @@ function decisionMails(m: DecisionMailInput, said: string | null): NewOutboxMess
 
 /**
  * Approve, reject or send back a pending result. Its e-mails are queued in the decision's transaction; after
- * the commit an approval revalidates the result's pages, its pack (live at once if it was proposed), the
- * catalogue and the group.
+ * the commit an approval revalidates the result's page, its pack (live at once if it was proposed), maker, group
+ * and bench, and the lists that count it (newest, groups, catalogue counts) — no other pack's or result's page.
  */
 export async function decideResult(
   actorId: string,
@@ -63,7 +64,7 @@ export async function decideResult(
   const { ctx, status, oldSlugs, queued } = await writeDecision(actorId, resultId, decision, (m) =>
     decisionMails(m, said),
   );
-  if (status === "approved") revalidateTags([...tagsForResult(ctx), ...oldSlugs.map(cacheTags.pack)]);
+  if (status === "approved") revalidateTags([...tagsForPublicationChange(ctx), ...oldSlugs.map(cacheTags.pack)]);
   return { resultId, status, packSlug: ctx.packSlug, queuedMail: queued };
 }
 
@@ -79,7 +80,7 @@ export async function resolveReaderFlag(
   note: string | null,
 ): Promise<ResolvedFlag> {
   const { ctx, resolved } = await writeFlagResolution(actorId, flagId, resolution, note);
-  if (resolved.status === "withdrawn") revalidateResult(ctx);
+  if (resolved.status === "withdrawn") revalidatePublicationChange(ctx);
   else revalidateOpenCase(ctx);
   return resolved;
 }

@@ -28,6 +28,8 @@ export type ResultContext = {
   packSlug: string;
   makerSlug: string;
   groupKey: string;
+  /** The bench profile the result was measured with (its public bench page and agreement show it). */
+  benchProfileId: number | null;
   packTitle: string;
   contributorId: string;
   contributorEmail: string | null;
@@ -71,6 +73,7 @@ export async function lockResult(tx: Transaction, resultId: number): Promise<Res
       status: results.status,
       packId: results.packId,
       groupKey: results.groupKey,
+      benchProfileId: results.benchProfileId,
       contributorId: results.contributorId,
       packSlug: packs.slug,
       model: packs.model,

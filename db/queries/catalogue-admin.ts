@@ -38,13 +38,3 @@ export async function listCataloguePacks() {
     .orderBy(asc(makers.name), asc(packs.model));
 }
 export type CataloguePack = Awaited<ReturnType<typeof listCataloguePacks>>[number];
-
-/** The like-for-like groups the results of these packs are in. */
-export async function listGroupKeysOfPacks(packIds: number[]): Promise<string[]> {
-  if (packIds.length === 0) return [];
-  const rows = await db
-    .selectDistinct({ groupKey: results.groupKey })
-    .from(results)
-    .where(inArray(results.packId, packIds));
-  return rows.map((r) => r.groupKey);
-}

@@ -79,7 +79,7 @@ describe("tagged caching of the public API", () => {
     expect(packAfter).not.toBe(packBefore);
   });
 
-  it("keeps a cached list until its tag is revalidated: a maker written behind the cache's back shows only after `packs`", async () => {
+  it("keeps a cached list until its tag is revalidated: a maker written behind the cache's back shows only after `catalogue`", async () => {
     const names = async () =>
       (
         (await (await getMakers(req("/api/v1/makers?size=200"), noParams)).json()) as { data: { slug: string }[] }
@@ -88,7 +88,7 @@ describe("tagged caching of the public API", () => {
     await db.insert(makers).values({ slug: `${P}-latecomer`, name: `${P} Latecomer` });
     // No revalidation yet: the cached page still answers.
     expect(await names()).toEqual(first);
-    taggedCache.revalidateTag("packs");
+    taggedCache.revalidateTag("catalogue");
     expect(await names()).toContain(`${P}-latecomer`);
   });
 

@@ -209,7 +209,9 @@ describe("reader flags open cases and never change a result by themselves", () =
       note: "Simulated log.",
     });
     // Counts changed: every list that counted it is refreshed.
-    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(expect.arrayContaining(["results", "packs"]));
+    expect(revalidate.revalidateTags.mock.calls[0]?.[0]).toEqual(
+      expect.arrayContaining(["newest", "groups", "catalogue"]),
+    );
     expect(await getPublicResult(r.id)).toBeNull();
   });
 

@@ -71,8 +71,17 @@ describe("review decisions", () => {
     expect(revalidate.revalidateTags).toHaveBeenCalledTimes(1);
     const tags = revalidate.revalidateTags.mock.calls[0]?.[0] as string[];
     expect(tags).toEqual(
-      expect.arrayContaining([`pack:${pack.slug}`, `maker:${maker.slug}`, `group:${r.groupKey}`, "packs", "results"]),
+      expect.arrayContaining([
+        `pack:${pack.slug}`,
+        `maker:${maker.slug}`,
+        `group:${r.groupKey}`,
+        "catalogue",
+        "newest",
+      ]),
     );
+    // Scoped: no tag that every pack page, result page and ranking carried (scoped-revalidation.test.ts has the rest).
+    expect(tags).not.toContain("packs");
+    expect(tags).not.toContain("results");
 
     await deliverQueuedMail();
     const decision = await newestMailFor(contributor.email);

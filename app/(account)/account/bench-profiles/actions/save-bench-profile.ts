@@ -3,8 +3,7 @@ import { revalidatePath } from "next/cache";
 import { createBenchProfile, updateBenchProfile } from "@/db/mutations/bench-profiles";
 import { authedAction } from "@/server/authed-action";
 import { saveBenchProfileSchema } from "@/lib/validations/bench-profile";
-import { cacheTags } from "@/server/cache-tags";
-import { revalidateTags } from "@/server/revalidate";
+import { revalidateBenchProfile } from "@/server/bench-profile-tags";
 
 /** Create a bench profile, or update one of the user's own when an id is given. */
 export const saveBenchProfile = authedAction(
@@ -16,7 +15,7 @@ export const saveBenchProfile = authedAction(
     revalidatePath("/account");
     revalidatePath("/account/bench-profiles");
     // The ± on its published results and its public bench page follow the bench's stated accuracy.
-    if (id !== null) revalidateTags([cacheTags.results]);
+    if (id !== null) await revalidateBenchProfile(id);
     return saved;
   },
 );
