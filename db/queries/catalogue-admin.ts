@@ -1,6 +1,6 @@
 // Reads for /admin/catalogue: every maker and pack that is not merged away, with how many results they hold.
 import "server-only";
-import { asc, count, eq, inArray, ne } from "drizzle-orm";
+import { asc, count, eq, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 
