@@ -33,6 +33,14 @@ export function cachedPacksInGroup(groupKey: string) {
   })();
 }
 
+/** At most `limit` packs of a group with their medians: the most published results first, ties by slug (in SQL). */
+export function cachedTopPacksInGroup(groupKey: string, limit: number) {
+  return unstable_cache(() => listPacksInGroup(groupKey, limit), ["top-packs-in-group", groupKey, String(limit)], {
+    tags: [t.group(groupKey)],
+    revalidate,
+  })();
+}
+
 export function cachedMakerRanking(groupKey: string, rating: RankingRating = "estimate") {
   return unstable_cache(() => rankMakersInGroup(groupKey, rating), ["maker-ranking", groupKey, rating], {
     tags: [t.group(groupKey)],

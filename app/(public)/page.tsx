@@ -5,7 +5,8 @@ import { GroupSwitcher } from "./_components/group-switcher-client";
 import { HomeLabelCheck } from "./_components/home-label-check";
 import { StaticIsland } from "@/components/static-island";
 
-// Static; revalidated by the `results`, `packs` and `group:<key>` tags when moderation changes a result.
+// Static; revalidated by the `groups`, `newest` and `group:<key>` tags when moderation changes a result. Its size
+// does not grow with the data: the label check draws at most HOME_LABEL_CHECK_MAX_PACKS packs (lib/bounded-lists.ts).
 export const revalidate = 3600;
 /** Groups offered by the switcher: those with at least this many packs, most populated first. */
 const MIN_PACKS_FOR_CHART = 3;

@@ -91,9 +91,12 @@ export type PackInGroup = {
   dcResistanceMohm: number | null;
 };
 
-/** Per-pack medians of one group (the label check, and the measured columns of the packs table). */
-export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]> {
-  const rows = await db
+/**
+ * Per-pack medians of one group (the label check, and the measured columns of the packs table). With `limit`, only
+ * that many packs: those with the most published results in the group, ties by slug (the home label check's rule).
+ */
+export async function listPacksInGroup(groupKey: string, limit?: number): Promise<PackInGroup[]> {
+  const query = db
     .select({
       packId: packs.id,
       packSlug: packs.slug,
@@ -121,7 +124,10 @@ export async function listPacksInGroup(groupKey: string): Promise<PackInGroup[]>
     .innerJoin(makers, makerOfPack)
     .where(and(eq(results.groupKey, groupKey), isPublished))
     .groupBy(packs.id, makers.id)
-    .orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug);
+    .$dynamic();
+  const rows = await (limit === undefined
+    ? query.orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug)
+    : query.orderBy(desc(sql`count(*)`), packs.slug).limit(limit));
   return rows.map(
     ({ measuredN, measuredMedian, measuredMin, measuredMax, measuredValues, sustainedMax, sustainedN, ...r }) => {
       const interval = medianInterval((measuredValues ?? []).map(Number));

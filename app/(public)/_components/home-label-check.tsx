@@ -8,14 +8,33 @@ import type { LabelCheckPoint } from "@/components/charts/draw/label-check-plot"
 import { toMarkup } from "@/components/charts/draw/markup";
 import { MEETS_STYLE, SHORT_STYLE } from "@/components/charts/palette";
 import { LABEL_CHECK_WORDS, LABEL_RATIO_LABELS, type RatingKind } from "@/lib/figure-words";
+import {
+  groupTableHref,
+  HOME_LABEL_CHECK_MAX_PACKS,
+  HOME_RANKING_MAX_MAKERS,
+  shownOf,
+  TOP_PACKS_RULE,
+} from "@/lib/bounded-lists";
 import { rankingVerdict } from "@/lib/maker-ranking";
-import { cachedMakerRanking, cachedPacksInGroup } from "@/server/public-data";
+import { cachedMakerRanking, cachedTopPacksInGroup } from "@/server/public-data";
 
 type RankRow = Awaited<ReturnType<typeof cachedMakerRanking>>[number];
-type PackRow = Awaited<ReturnType<typeof cachedPacksInGroup>>[number];
+type PackRow = Awaited<ReturnType<typeof cachedTopPacksInGroup>>[number];
 
-function MakerRanking({ rows, rating }: { rows: RankRow[]; rating: RatingKind }) {
+/** "Showing N of M …" and the link to the full table, where a list or chart was cut. */
+function CutNote({ words, href, testId }: { words: string | null; href: string; testId: string }) {
+  if (words === null) return null;
+  return (
+    <p className="muted text-xs" data-testid={testId}>
+      {words} — <a href={href}>full table →</a>
+    </p>
+  );
+}
+
+function MakerRanking({ rows, rating, groupKey }: { rows: RankRow[]; rating: RatingKind; groupKey: string }) {
+  // The verdict weighs every maker of the group; the list shows the highest medians only.
   const verdict = rankingVerdict(rows);
+  const shown = rows.slice(0, HOME_RANKING_MAX_MAKERS);
   return (
     <section aria-labelledby="ranking-h" className="card space-y-2">
       <h3 id="ranking-h">Makers by median label ratio</h3>
@@ -28,7 +47,7 @@ function MakerRanking({ rows, rating }: { rows: RankRow[]; rating: RatingKind })
       </p>
       {rows.length === 0 ? <p className="muted text-sm">No label ratios in this group yet.</p> : null}
       <ul className="rank" data-testid="maker-ranking">
-        {rows.map((m, i) => {
+        {shown.map((m, i) => {
           const interval = verdict.intervals[i];
           return (
             <li key={m.makerSlug}>
@@ -58,6 +77,14 @@ function MakerRanking({ rows, rating }: { rows: RankRow[]; rating: RatingKind })
           );
         })}
       </ul>
+      <CutNote
+        words={(() => {
+          const cut = shownOf(shown.length, rows.length, "maker");
+          return cut && `${cut}: the highest medians`;
+        })()}
+        href={groupTableHref(groupKey, "labelRatio")}
+        testId="ranking-cut"
+      />
     </section>
   );
 }
@@ -89,25 +116,36 @@ export async function HomeLabelCheck({
   group,
   rating = "estimate",
 }: {
-  group: { key: string; label: string };
+  group: { key: string; label: string; packCount: number };
   rating?: RatingKind;
 }) {
-  const [packs, ranking] = await Promise.all([cachedPacksInGroup(group.key), cachedMakerRanking(group.key, rating)]);
+  // At most HOME_LABEL_CHECK_MAX_PACKS packs, picked in SQL by TOP_PACKS_RULE; packCount is the group's whole.
+  const [packs, ranking] = await Promise.all([
+    cachedTopPacksInGroup(group.key, HOME_LABEL_CHECK_MAX_PACKS),
+    cachedMakerRanking(group.key, rating),
+  ]);
+  const cut = shownOf(packs.length, group.packCount, "pack");
   return (
     <div className="grid gap-4 lg:grid-cols-[2fr_1fr]">
-      <LabelCheckFigure
-        id="lc"
-        title={LABEL_CHECK_WORDS[rating].title}
-        points={points(packs, rating)}
-        groupLabel={group.label}
-        rating={rating}
-      />
-      <MakerRanking rows={ranking} rating={rating} />
+      <div className="space-y-1">
+        <LabelCheckFigure
+          id="lc"
+          title={LABEL_CHECK_WORDS[rating].title}
+          points={points(packs, rating)}
+          groupLabel={group.label}
+          rating={rating}
+        />
+        <CutNote words={cut && `${cut}: ${TOP_PACKS_RULE}`} href={groupTableHref(group.key)} testId="label-check-cut" />
+      </div>
+      <MakerRanking rows={ranking} rating={rating} groupKey={group.key} />
     </div>
   );
 }
 
 /** The markup for one group and rating, for /fragments/label-check/{group}[/{rating}]. */
-export async function homeLabelCheckMarkup(group: { key: string; label: string }, rating: RatingKind): Promise<string> {
+export async function homeLabelCheckMarkup(
+  group: { key: string; label: string; packCount: number },
+  rating: RatingKind,
+): Promise<string> {
   return toMarkup(await HomeLabelCheck({ group, rating }));
 }

@@ -1,0 +1,21 @@
+// How many rows a page's chart or list shows, whatever the size of the data, and the rule that picks them: a page
+// keeps its size as the catalogue grows, and says where it was cut, with a link to the full table.
+
+/** Packs drawn in the home page's label check (one group at a time). */
+export const HOME_LABEL_CHECK_MAX_PACKS = 60;
+/** Makers listed beside it. */
+export const HOME_RANKING_MAX_MAKERS = 12;
+
+/** The rule the label check and the curves chart use to pick their packs, in the words pages show. */
+export const TOP_PACKS_RULE = "the packs with the most published results in this group (ties by the pack's URL name)";
+
+/** "Showing 60 of 245 packs" when cut; null when everything is shown. */
+export function shownOf(shown: number, total: number, noun: string, nouns = `${noun}s`): string | null {
+  if (total <= shown) return null;
+  return `Showing ${shown} of ${total} ${total === 1 ? noun : nouns}`;
+}
+
+/** The packs table of one group, most published results first: the full table behind a cut chart or list. */
+export function groupTableHref(groupKey: string, sort: "results" | "labelRatio" = "results"): string {
+  return `/packs?group=${encodeURIComponent(groupKey)}&sort=${sort}&dir=desc`;
+}
