@@ -6,6 +6,9 @@ export const HOME_LABEL_CHECK_MAX_PACKS = 60;
 /** Makers listed beside it. */
 export const HOME_RANKING_MAX_MAKERS = 12;
 
+/** Points of a saved chart's label check (the chart builder, its views, embeds and images). */
+export const CHART_MAX_PACKS = 200;
+
 /** The rule the label check and the curves chart use to pick their packs, in the words pages show. */
 export const TOP_PACKS_RULE = "the packs with the most published results in this group (ties by the pack's URL name)";
 
@@ -18,4 +21,9 @@ export function shownOf(shown: number, total: number, noun: string, nouns = `${n
 /** The packs table of one group, most published results first: the full table behind a cut chart or list. */
 export function groupTableHref(groupKey: string, sort: "results" | "labelRatio" = "results"): string {
   return `/packs?group=${encodeURIComponent(groupKey)}&sort=${sort}&dir=desc`;
+}
+
+/** Orders packs by TOP_PACKS_RULE (most results first, ties by slug; slugs are ASCII, so code-unit order is byte order). */
+export function byTopPacksRule<T extends { resultCount: number; packSlug: string }>(a: T, b: T): number {
+  return b.resultCount - a.resultCount || (a.packSlug < b.packSlug ? -1 : a.packSlug > b.packSlug ? 1 : 0);
 }

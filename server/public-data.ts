@@ -160,10 +160,12 @@ export async function cachedGroupSamples(groupKey: string, filters: PackFilters,
   })();
 }
 
-export async function cachedGroupCurves(groupKey: string, filters: PackFilters, where: PackWhere) {
-  if (!(await knownGroup(groupKey))) return [];
-  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, where);
-  return unstable_cache(() => listGroupCurves(groupKey, where), ["group-curves", groupKey, keyOf(filters)], {
+/** At most `limit` curves of a group (db/queries/open-data/results.ts listGroupCurves picks them in SQL). */
+export async function cachedGroupCurves(groupKey: string, filters: PackFilters, where: PackWhere, limit: number) {
+  if (!(await knownGroup(groupKey))) return { series: [], packTotal: 0 };
+  if (!(await boundedFilters(filters))) return listGroupCurves(groupKey, where, limit);
+  const key = ["group-curves", groupKey, keyOf(filters), String(limit)];
+  return unstable_cache(() => listGroupCurves(groupKey, where, limit), key, {
     tags: [t.group(groupKey)],
     revalidate,
   })();

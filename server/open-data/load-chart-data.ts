@@ -3,6 +3,7 @@
 import "server-only";
 import { aggregateByMaker, aggregateByPack, groupLabel } from "@/lib/open-data/aggregate";
 import { CHART_RATING_WORDS, MAX_CURVES, type ChartData, type CurveLine } from "@/lib/open-data/chart-data";
+import { byTopPacksRule, CHART_MAX_PACKS, TOP_PACKS_RULE } from "@/lib/bounded-lists";
 import { rankingVerdict } from "@/lib/maker-ranking";
 import { plural } from "@/lib/open-data/chart-svg-kit";
 import type { ChartState } from "@/lib/open-data/chart-state";
@@ -32,7 +33,8 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     );
   if (state.kind === "label-check") {
     // Measured: the pack's sustained C, the highest among its approved results; estimate: the median.
-    const points = packs.flatMap((p) => {
+    // At most CHART_MAX_PACKS points, by TOP_PACKS_RULE.
+    const all = [...packs].sort(byTopPacksRule).flatMap((p) => {
       const m = rating === "measured" ? p.figures.sustainedCMeasured : p.figures.sagLimitedC;
       const y = m ? (rating === "measured" ? m.max : m.median) : null;
       return m && y !== null
@@ -47,8 +49,13 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
           ]
         : [];
     });
-    if (points.length < packs.length)
-      base.leftOut.push(`${plural(packs.length - points.length, "pack")} without a ${words.point} left out.`);
+    if (all.length < packs.length)
+      base.leftOut.push(`${plural(packs.length - all.length, "pack")} without a ${words.point} left out.`);
+    const points = all.slice(0, CHART_MAX_PACKS);
+    if (points.length < all.length)
+      base.leftOut.push(
+        `${plural(all.length - points.length, "more pack")} not drawn: at most ${CHART_MAX_PACKS} points, for ${TOP_PACKS_RULE}.`,
+      );
     if (rating === "measured")
       base.leftOut.push(
         "A run holds only the rate it was tested at, and a group is one band of rates: a pack below the line has not shown its label, which is not failing it.",
@@ -66,29 +73,24 @@ export async function loadChartData(state: ChartState): Promise<ChartData> {
     base.leftOut.push(rankingVerdict(makers).words);
     return { ...base, ranking };
   }
-  const series = await cachedGroupCurves(state.group, filters, where);
-  const seen = new Set<string>();
-  const curves: CurveLine[] = [];
-  for (const s of series) {
-    if (seen.has(s.packSlug)) continue;
-    seen.add(s.packSlug);
-    if (curves.length < MAX_CURVES) {
-      // Only samples under the main load: rest and recovery at the ends would draw spikes.
-      const peakA = Math.max(0, ...s.curve.map((p) => p.currentA));
-      curves.push({
-        label: `${s.makerName} ${s.model}`,
-        points: s.curve
-          .filter((p) => p.currentA >= peakA * 0.5)
-          .map((p) => ({
-            capacityPercent: (p.capacityMah / s.ratedCapacityMah) * 100,
-            voltagePerCellV: p.voltageV / s.cellsInSeries,
-          })),
-      });
-    }
-  }
-  if (seen.size > MAX_CURVES)
+  // At most MAX_CURVES curves, picked in SQL (TOP_PACKS_RULE), one per pack: its first published result here.
+  const { series, packTotal } = await cachedGroupCurves(state.group, filters, where, MAX_CURVES);
+  const curves: CurveLine[] = series.map((s) => {
+    // Only samples under the main load: rest and recovery at the ends would draw spikes.
+    const peakA = Math.max(0, ...s.curve.map((p) => p.currentA));
+    return {
+      label: `${s.makerName} ${s.model}`,
+      points: s.curve
+        .filter((p) => p.currentA >= peakA * 0.5)
+        .map((p) => ({
+          capacityPercent: (p.capacityMah / s.ratedCapacityMah) * 100,
+          voltagePerCellV: p.voltageV / s.cellsInSeries,
+        })),
+    };
+  });
+  if (packTotal > curves.length)
     base.leftOut.push(
-      `${plural(seen.size - MAX_CURVES, "more pack")} not drawn (at most ${MAX_CURVES} curves, first result of each pack).`,
+      `${plural(packTotal - curves.length, "more pack")} not drawn: at most ${MAX_CURVES} curves, for ${TOP_PACKS_RULE}; one curve per pack, its first approved result in the group.`,
     );
   else base.leftOut.push("One curve per pack: its first approved result in the group.");
   // Per pack only where every curve is one pack size; across sizes the pack voltages would not compare.

@@ -1,7 +1,7 @@
 // Published results for the public API, downloads and charts: method card and figures, never files or
 // contributor identities.
 import "server-only";
-import { and, asc, count, eq, gt, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, gt, sql } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db";
 import { benchProfiles, makers, packs, results } from "@/db/schema";
@@ -152,9 +152,31 @@ export type CurveSeries = {
   curve: CurvePoint[];
 };
 
-/** Discharge curves of published results in one like-for-like group (for the curves chart): each its headline discharge. */
-export async function listGroupCurves(groupKey: string, w: ResultWhere): Promise<CurveSeries[]> {
+/**
+ * Discharge curves for a group's curves chart, at most `limit` of them, picked in SQL: one per pack (its first
+ * published result in the group, by id), for the packs with the most published results there, ties by slug.
+ * `packTotal` is how many packs had a curve to offer, so the chart can say how many it left out.
+ */
+export async function listGroupCurves(
+  groupKey: string,
+  w: ResultWhere,
+  limit: number,
+): Promise<{ series: CurveSeries[]; packTotal: number }> {
+  const perPack = db.$with("per_pack").as(
+    db
+      .select({
+        packId: results.packId,
+        firstId: sql<number>`min(${results.id})`.as("first_id"),
+        n: sql<number>`count(*)`.as("n"),
+      })
+      .from(results)
+      .innerJoin(packs, packOfResult)
+      .innerJoin(makers, makerOfPack)
+      .where(and(isPublished, ...resultConditions({ ...w, group: groupKey })))
+      .groupBy(results.packId),
+  );
   const rows = await db
+    .with(perPack)
     .select({
       resultId: results.id,
       packSlug: packs.slug,
@@ -165,14 +187,20 @@ export async function listGroupCurves(groupKey: string, w: ResultWhere): Promise
       loadRateC: results.loadRateC,
       curve: results.curve,
       ...headlineColumns,
+      // Counted before LIMIT (window functions run first): every pack of the group that has a curve to offer.
+      packTotal: sql<number>`count(*) over ()`.mapWith(Number),
     })
-    .from(results)
+    .from(perPack)
+    .innerJoin(results, eq(results.id, perPack.firstId))
     .innerJoin(packs, packOfResult)
     .innerJoin(makers, makerOfPack)
-    .where(and(isPublished, ...resultConditions({ ...w, group: groupKey })))
-    .orderBy(asc(makers.name), asc(packs.model), asc(results.id));
-  return rows.map(({ discharges, headlineDischarge, curve, ...r }) => ({
-    ...r,
-    curve: headlineCurve(curve, { discharges, headlineDischarge }),
-  }));
+    .orderBy(desc(perPack.n), asc(packs.slug))
+    .limit(limit);
+  return {
+    packTotal: rows[0]?.packTotal ?? 0,
+    series: rows.map(({ discharges, headlineDischarge, curve, packTotal: _total, ...r }) => ({
+      ...r,
+      curve: headlineCurve(curve, { discharges, headlineDischarge }),
+    })),
+  };
 }

@@ -1,10 +1,14 @@
-// The home page's label check and maker list keep their size as a group grows: at most
-// HOME_LABEL_CHECK_MAX_PACKS packs drawn (picked in SQL: most published results, ties by slug) and
-// HOME_RANKING_MAX_MAKERS makers listed, each cut saying "Showing N of M" with a link to the full table.
+// Pages keep their size as a group grows. The home page's label check draws at most HOME_LABEL_CHECK_MAX_PACKS
+// packs (picked in SQL: most published results, ties by slug) and lists HOME_RANKING_MAX_MAKERS makers, each cut
+// saying "Showing N of M" with a link to the full table; a curves chart draws at most MAX_CURVES curves, picked in
+// SQL by the same rule, and says how many packs it left out.
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as fragment } from "@/app/(public)/fragments/label-check/[group]/route";
 import { listPacksInGroup } from "@/db/queries/groups";
+import { listGroupCurves } from "@/db/queries/open-data/results";
 import { HOME_LABEL_CHECK_MAX_PACKS, HOME_RANKING_MAX_MAKERS } from "@/lib/bounded-lists";
+import { MAX_CURVES } from "@/lib/open-data/chart-data";
+import { loadChartData } from "@/server/open-data/load-chart-data";
 import { makeMaker, makePack, makeResult, makeUser } from "../helpers/fixtures";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
@@ -78,5 +82,22 @@ describe("bounded home label check", () => {
     const page = await html(smallGroup);
     expect(page).not.toContain("label-check-cut");
     expect(page).not.toContain("ranking-cut");
+  });
+});
+
+describe("bounded curves chart", () => {
+  it("reads at most MAX_CURVES curves in SQL, one per pack, for the busiest packs, and counts the rest", async () => {
+    const { series, packTotal } = await listGroupCurves(bigGroup, { packIds: null }, MAX_CURVES);
+    expect(packTotal).toBe(PACKS);
+    expect(series.map((s) => s.packSlug)).toEqual(slugs.slice(0, MAX_CURVES).map((s) => s.slug));
+    expect(new Set(series.map((s) => s.resultId)).size).toBe(MAX_CURVES);
+  });
+
+  it("draws at most MAX_CURVES and says how many packs were left out and by which rule", async () => {
+    const data = await loadChartData({ v: 1, kind: "curves", group: bigGroup, title: "Curves" });
+    expect(data.curves).toHaveLength(MAX_CURVES);
+    expect(data.leftOut.join(" ")).toContain(
+      `${PACKS - MAX_CURVES} more packs not drawn: at most ${MAX_CURVES} curves, for the packs with the most published results`,
+    );
   });
 });
