@@ -94,7 +94,7 @@ export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-cov
 
 // ── The public API's reads (app/api/v1) and chart data. Filters are validated by zod before they reach here.
 // The cache keeps one entry per key on disk, and anyone can make up queries, so only bounded key spaces are
-// cached: catalogue entities that exist (checked against the cached catalogue first), the unfiltered or
+// cached: catalogue entities that exist (checked first with one indexed row each), the unfiltered or
 // group/pack/maker/cells-filtered lists, and the first pages. Free-text and range filters, far pages and
 // unknown slugs or groups go straight to the database (an unknown one answers empty without a query).
 /** Pages beyond this are read from the database each time. */

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { firstLink, newestMailFor } from "../helpers/mail";
+import { rows, settled } from "./packs-table-helpers";
 
 // A moderator signs in with an e-mail link, approves one flagged result and rejects another, and the
 // approved result appears on the public pack page and in /data's counts (revalidated by tag, no rebuild).
@@ -17,6 +18,19 @@ async function approvedInApi(page: Page): Promise<number> {
   const res = await page.request.get("/api/v1/results?size=10");
   expect(res.status()).toBe(200);
   return Number(res.headers()["x-total-count"]);
+}
+
+/** The pack's published results as the /packs table shows them ("3 in 2 groups"; 0 for a dash). */
+async function resultsOnPacksTable(page: Page, packHref: string): Promise<number> {
+  const slug = packHref.replace(/^\/packs\//, "");
+  const api = await page.request.get(`/api/v1/packs/${slug}`);
+  const makerSlug = ((await api.json()) as { data: { makerSlug: string } }).data.makerSlug;
+  await page.goto(`/packs?maker=${makerSlug}&size=100`);
+  await settled(page);
+  const cell = rows(page)
+    .filter({ has: page.locator(`a[href="${packHref}"]`) })
+    .locator("td.c-results");
+  return Number(/^(\d+) in /.exec(await cell.innerText())?.[1] ?? 0);
 }
 
 async function signIn(page: Page, email: string) {
@@ -64,6 +78,10 @@ test("a moderator approves one flagged result, rejects another, and the approved
   expect(packHref).toMatch(/^\/packs\//);
   await page.goto(packHref ?? "/");
   await expect(page.getByRole("link", { name: `Result #${approveId}`, exact: true })).toHaveCount(0);
+  // The home page's newest list and the /packs table, cached before the decision too.
+  await page.goto("/");
+  await expect(page.getByTestId("newest-results").getByRole("link", { name: `Result #${approveId}` })).toHaveCount(0);
+  const onTableBefore = await resultsOnPacksTable(page, packHref ?? "");
   await page.goto(`/review/${approveId}`);
   await page.getByLabel("Note (optional, sent to the contributor)").fill("Checked against the log.");
   await page.getByRole("button", { name: "Approve and publish" }).click();
@@ -91,11 +109,17 @@ test("a moderator approves one flagged result, rejects another, and the approved
   // Not accepting publishes nothing: /data still counts one more than before, not two.
   expect(await approvedOnDataPage(page)).toBe(approvedBefore + 1);
 
-  // The approved result is on the public pack page.
+  // The approved result is on the public pack page, the home page's newest list and the /packs table's count:
+  // the decision's scoped tags (its pack, newest, catalogue) reached every page that shows it.
   await page.goto(packHref ?? "/");
   await expect(
     page.getByTestId("pack-results").getByRole("link", { name: `Result #${approveId}`, exact: true }),
   ).toBeVisible();
+  await page.goto("/");
+  await expect(
+    page.getByTestId("newest-results").getByRole("link", { name: `Result #${approveId}`, exact: true }),
+  ).toBeVisible();
+  expect(await resultsOnPacksTable(page, packHref ?? "")).toBe(onTableBefore + 1);
 });
 
 test("a contributor opening the review queue gets the 403 page", async ({ page }) => {
