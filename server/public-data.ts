@@ -10,8 +10,10 @@ import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/grou
 import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
 import type { PackWhere, ResultWhere } from "@/db/queries/open-data/where";
 import { getPackDetail } from "@/db/queries/pack-detail";
-import { activeMakerWithPacksExists, activePackExists, getPackRowBySlug } from "@/db/queries/pack-by-slug";
-import { listActiveMakers, listActivePacks, listPackRows } from "@/db/queries/packs";
+import { activeMakerWithPacksExists, activePackExists } from "@/db/queries/pack-by-slug";
+import { listMakerCounts, listPackFilterOptions, queryPackPage } from "@/db/queries/pack-catalogue";
+import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
+import { listActivePacks } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { getSiteSettings } from "@/db/queries/site-settings";
 import type { PackFilters, ResultFilters } from "@/lib/api-contract/queries";
@@ -21,10 +23,26 @@ export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags:
 
 export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.catalogue], revalidate });
 
-export function cachedPackRows(groupKey: string | null) {
-  const tags = groupKey ? [t.catalogue, t.group(groupKey)] : [t.catalogue];
-  return unstable_cache(() => listPackRows(groupKey), ["pack-rows", groupKey ?? "-"], { tags, revalidate })();
-}
+/** What the packs table's filters offer (makers with active packs, connectors, cell counts): catalogue edits. */
+export const cachedPackFilterOptions = unstable_cache(listPackFilterOptions, ["pack-filter-options"], {
+  tags: [t.catalogue],
+  revalidate,
+});
+
+/**
+ * The first page of the packs table as /packs opens (no filter, default order): the static page's data, so it
+ * carries the tags that refresh it. Every other page of the table is one SQL query per request (uncached).
+ */
+export const cachedFirstPackPage = unstable_cache(() => queryPackPage(DEFAULT_PACK_PARAMS), ["pack-page-first"], {
+  tags: [t.catalogue],
+  revalidate,
+});
+
+/** Active makers with their pack and published-result counts (the makers list and download). */
+export const cachedMakerCounts = unstable_cache(listMakerCounts, ["maker-counts"], {
+  tags: [t.catalogue],
+  revalidate,
+});
 
 export function cachedPacksInGroup(groupKey: string) {
   return unstable_cache(() => listPacksInGroup(groupKey), ["packs-in-group", groupKey], {
@@ -80,12 +98,6 @@ export function cachedComparison(slugs: string[], group: string | null) {
   })();
 }
 
-/** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `catalogue`. */
-export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], {
-  tags: [t.catalogue],
-  revalidate,
-});
-
 /** Per group, maker and pack size, how many published results (the chart builder offers only what has data). */
 export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-coverage"], {
   tags: [t.groups],
@@ -125,14 +137,6 @@ async function boundedFilters(
   if (f.pack !== undefined && !(await activePackExists(f.pack))) return false;
   if (f.maker !== undefined && !(await activeMakerWithPacksExists(f.maker))) return false;
   return true;
-}
-
-/**
- * One pack as GET /api/v1/packs/{slug} shows it, read by its slug through indexes (its own HTTP cache headers
- * and ETag do the caching; a data-cache entry per asked slug would let made-up slugs fill the cache).
- */
-export function packRowBySlug(slug: string) {
-  return getPackRowBySlug(slug);
 }
 
 /** A page of published results; `filters` (as asked) make the cache key, `where` (resolved) the query. */

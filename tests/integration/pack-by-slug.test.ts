@@ -1,12 +1,9 @@
-// Single-pack reads by slug (db/queries/pack-by-slug.ts) against the whole-catalogue read they replace: the same
-// row, counts included, for every pack; nothing for slugs that are not active catalogue entries.
-import { eq } from "drizzle-orm";
+// Existence checks by slug (db/queries/pack-by-slug.ts), the API cache guards' replacement for a search of the
+// whole cached catalogue: true only for active catalogue entries.
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { makers, packs, users } from "@/db/schema";
-import { activeMakerWithPacksExists, activePackExists, getPackRowBySlug } from "@/db/queries/pack-by-slug";
-import { listPackRows } from "@/db/queries/packs";
-import { makeResult } from "../helpers/fixtures";
+import { makers, packs } from "@/db/schema";
+import { activeMakerWithPacksExists, activePackExists } from "@/db/queries/pack-by-slug";
 import { seedOpenData } from "../helpers/open-data-fixtures";
 
 const P = "byslug";
@@ -32,33 +29,9 @@ beforeAll(async () => {
   });
 });
 
-describe("packs by slug", () => {
-  it("gives every active pack the same row as the whole-catalogue read, counts included", async () => {
-    const all = await listPackRows(null);
-    const mine = all.filter((p) => p.slug.startsWith(`${P}-`));
-    expect(mine.map((p) => p.resultCount).sort()).toEqual([1, 1, 2]); // approved only (fixture: 2 + 1 + 1)
-    for (const row of all) expect(await getPackRowBySlug(row.slug), row.slug).toEqual(row);
-  });
-
-  it("counts groups and only published results", async () => {
-    const before = await getPackRowBySlug(fx.packs[0]!.slug);
-    const [user] = await db
-      .select({ id: users.id })
-      .from(users)
-      .where(eq(users.email, `${P}@example.test`));
-    if (!user) throw new Error("no user");
-    const userId = user.id;
-    // Another like-for-like group (another ambient band) and a pending result that must not count.
-    await makeResult(fx.packs[0]!, userId, { ambientC: 35 });
-    await makeResult(fx.packs[0]!, userId, { ambientC: 35, status: "pending" });
-    const after = await getPackRowBySlug(fx.packs[0]!.slug);
-    expect(after?.resultCount).toBe((before?.resultCount ?? 0) + 1);
-    expect(after?.groupCount).toBe((before?.groupCount ?? 0) + 1);
-  });
-
-  it("answers null / false for unknown, proposed and pack-less slugs", async () => {
-    expect(await getPackRowBySlug(`${P}-no-such-pack`)).toBeNull();
-    expect(await getPackRowBySlug(`${P}-lonely-850-2s`)).toBeNull();
+describe("pack and maker existence by slug", () => {
+  it("answers true for active packs and makers with one, false for unknown, proposed and pack-less slugs", async () => {
+    expect(await activePackExists(`${P}-no-such-pack`)).toBe(false);
     expect(await activePackExists(fx.packs[1]!.slug)).toBe(true);
     expect(await activePackExists(`${P}-lonely-850-2s`)).toBe(false);
     expect(await activeMakerWithPacksExists(`${P}-voltwren`)).toBe(true);
