@@ -9,7 +9,7 @@ import { eq, inArray, sql } from "drizzle-orm";
 import { Client } from "pg";
 import { db } from "@/db";
 import { readerFlags, results, reviewEvents } from "@/db/schema";
-import { rankMakersInGroup } from "@/db/queries/groups";
+import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
 import { writeDecision, writeFlagResolution } from "@/db/mutations/review";
 import { resubmitOwnResult, withdrawOwnResult } from "@/db/mutations/results";
 import { insertReaderFlag } from "@/db/mutations/reader-flags";
@@ -249,5 +249,26 @@ describe("summaries under transactions", () => {
     }
     expect((await summaryOf(p3.id)).resultCount).toBe(before + 2);
     expect(await staleSummaries()).toEqual([]);
+  });
+});
+
+describe("the group reads", () => {
+  it("come from the summary tables, not from the results (a result the summaries miss is not listed)", async () => {
+    const maker = await makeMaker("Cedar Sum Packs");
+    const pack = await makePack(maker.id, { labelledContinuousC: 40 });
+    const cycled = groupKey({ ...warm, cyclesBeforeTest: 150 }).key;
+    await db.execute(sql`alter table results disable trigger results_summaries_insert`);
+    try {
+      await makeResult(pack, tester.id, { sagLimitedC: 20, cycles: 150 });
+    } finally {
+      await db.execute(sql`alter table results enable trigger results_summaries_insert`);
+    }
+    expect((await listPublicGroups()).map((g) => g.key)).not.toContain(cycled);
+    expect(await staleSummaries()).toHaveLength(2); // the missing pack row and pack-group row
+    // The refresh function the triggers call mends it, as a manual repair would.
+    await db.execute(sql`select sagline_refresh_summaries(array[${pack.id}]::int[])`);
+    expect(await staleSummaries()).toEqual([]);
+    expect(await listPublicGroups()).toContainEqual(expect.objectContaining({ key: cycled, packCount: 1 }));
+    expect(await listPacksInGroup(cycled)).toMatchObject([{ packId: pack.id, n: 1, labelRatio: 0.5 }]);
   });
 });
