@@ -3,7 +3,8 @@
 // send back and resubmit, the tester's own withdrawal, a reader flag kept and one resolved by withdrawal, a
 // label edit (ratios rescaled), a pack merge (results move), a maker merge, a deleted result, a bulk insert. Also:
 // a rolled-back transaction leaves them as they were, and two approvals on one pack committed from two
-// connections at once are both counted (the per-pack advisory lock in migration 0009).
+// connections at once (and two sent through writeDecision at once) are both counted (the per-pack advisory lock
+// in migration 0009).
 import { beforeAll, describe, expect, it } from "vitest";
 import { eq, inArray, sql } from "drizzle-orm";
 import { Client } from "pg";
@@ -247,6 +248,16 @@ describe("summaries under transactions", () => {
       await a.end();
       await b.end();
     }
+    expect((await summaryOf(p3.id)).resultCount).toBe(before + 2);
+    expect(await staleSummaries()).toEqual([]);
+  });
+
+  it("count both of two moderators' approvals on one pack sent at once through writeDecision", async () => {
+    const other = await createUser("moderator", "summaries second moderator");
+    const r1 = await makeResult(p3, tester.id, { sagLimitedC: 43, status: "pending" });
+    const r2 = await makeResult(p3, tester.id, { sagLimitedC: 44, status: "pending" });
+    const before = (await summaryOf(p3.id)).resultCount ?? 0;
+    await Promise.all([writeDecision(mod.id, r1.id, approve, noMail), writeDecision(other.id, r2.id, approve, noMail)]);
     expect((await summaryOf(p3.id)).resultCount).toBe(before + 2);
     expect(await staleSummaries()).toEqual([]);
   });
