@@ -10,7 +10,9 @@ import { listGroupCoverage, listGroupSamples } from "@/db/queries/open-data/grou
 import { listGroupCurves, listResultsPage, type Page } from "@/db/queries/open-data/results";
 import type { PackWhere, ResultWhere } from "@/db/queries/open-data/where";
 import { getPackDetail } from "@/db/queries/pack-detail";
-import { listActiveMakers, listActivePacks, listPackRows } from "@/db/queries/packs";
+import { listMakerCounts, listPackFilterOptions, queryPackPage } from "@/db/queries/pack-catalogue";
+import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
+import { listActivePacks } from "@/db/queries/packs";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { getSiteSettings } from "@/db/queries/site-settings";
 import type { PackFilters, ResultFilters } from "@/lib/api-contract/queries";
@@ -20,10 +22,26 @@ export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags:
 
 export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.packs], revalidate });
 
-export function cachedPackRows(groupKey: string | null) {
-  const tags = groupKey ? [t.packs, t.results, t.group(groupKey)] : [t.packs, t.results];
-  return unstable_cache(() => listPackRows(groupKey), ["pack-rows", groupKey ?? "-"], { tags, revalidate })();
-}
+/** What the packs table's filters offer (makers with active packs, connectors, cell counts): catalogue edits. */
+export const cachedPackFilterOptions = unstable_cache(listPackFilterOptions, ["pack-filter-options"], {
+  tags: [t.packs],
+  revalidate,
+});
+
+/**
+ * The first page of the packs table as /packs opens (no filter, default order): the static page's data, so it
+ * carries the tags that refresh it. Every other page of the table is one SQL query per request (uncached).
+ */
+export const cachedFirstPackPage = unstable_cache(() => queryPackPage(DEFAULT_PACK_PARAMS), ["pack-page-first"], {
+  tags: [t.packs, t.results],
+  revalidate,
+});
+
+/** Active makers with their pack and published-result counts (the makers list and download). */
+export const cachedMakerCounts = unstable_cache(listMakerCounts, ["maker-counts"], {
+  tags: [t.packs, t.results],
+  revalidate,
+});
 
 export function cachedPacksInGroup(groupKey: string) {
   return unstable_cache(() => listPacksInGroup(groupKey), ["packs-in-group", groupKey], {
@@ -67,9 +85,6 @@ export function cachedComparison(slugs: string[], group: string | null) {
     revalidate,
   })();
 }
-
-/** Active makers (their counts come from the cached pack rows): catalogue edits and merges revalidate `packs`. */
-export const cachedActiveMakers = unstable_cache(listActiveMakers, ["active-makers"], { tags: [t.packs], revalidate });
 
 /** Per group, maker and pack size, how many published results (the chart builder offers only what has data). */
 export const cachedGroupCoverage = unstable_cache(listGroupCoverage, ["group-coverage"], {

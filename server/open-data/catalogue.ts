@@ -7,18 +7,12 @@ import type { PackFilters } from "@/lib/api-contract/queries";
 import { AppError } from "@/lib/errors";
 import type { MakerRow } from "@/lib/open-data/records";
 import { toPackParams } from "@/lib/pack-query-params";
-import { findPacks } from "@/server/pack-search";
-import { cachedActiveMakers, cachedPackRows, knownGroup } from "@/server/public-data";
+import { findPackIds } from "@/server/pack-search";
+import { cachedMakerCounts, knownGroup } from "@/server/public-data";
 
 /** Active makers, by name, with their active packs and published results. */
 export async function makerRows(): Promise<MakerRow[]> {
-  const [list, packs] = await Promise.all([cachedActiveMakers(), cachedPackRows(null)]);
-  const counts = new Map<number, { packCount: number; resultCount: number }>();
-  for (const p of packs) {
-    const c = counts.get(p.makerId) ?? { packCount: 0, resultCount: 0 };
-    counts.set(p.makerId, { packCount: c.packCount + 1, resultCount: c.resultCount + p.resultCount });
-  }
-  return list.map((m) => ({ ...m, ...(counts.get(m.id) ?? { packCount: 0, resultCount: 0 }) }));
+  return cachedMakerCounts();
 }
 
 const PACK_FILTER_KEYS = [
@@ -40,11 +34,10 @@ const PACK_FILTER_KEYS = [
  */
 export async function packWhere(filters: PackFilters): Promise<PackWhere> {
   if (PACK_FILTER_KEYS.every((k) => filters[k] === undefined)) return { packIds: null };
-  const rows = await cachedPackRows(null);
   // Only the pack filters: a list's group or pack narrows its results, not the catalogue.
   const { q, maker, cells, connector, minMah, maxMah, minC, maxC, minG, maxG } = filters;
   const only = { q, maker, cells, connector, minMah, maxMah, minC, maxC, minG, maxG };
-  return { packIds: (await findPacks(rows, toPackParams(only))).map((p) => p.id) };
+  return { packIds: await findPackIds(toPackParams(only)) };
 }
 
 /** An unknown like-for-like group (no published results in it) is a 404, on every list and download alike. */

@@ -15,7 +15,6 @@ import { convertColumns, DEFAULT_UNITS, type UnitPrefs } from "@/lib/units";
 import { toPackParams } from "@/lib/pack-query-params";
 import { makerRows, packWhere, requireKnownGroup } from "@/server/open-data/catalogue";
 import { findPacks } from "@/server/pack-search";
-import { cachedPackRows } from "@/server/public-data";
 import type { z } from "zod";
 
 /** A file to send; JSON files also carry their value and response schema, for the contract check. */
@@ -29,8 +28,7 @@ export type DownloadFile = {
 async function rowsOf(dataset: Dataset, filters: ResultFilters) {
   if (dataset === "makers") return { kind: dataset, rows: await makerRows() } as const;
   if (dataset === "packs") {
-    const rows = await cachedPackRows(filters.group ?? null);
-    const list = (await findPacks(rows, toPackParams(filters))).filter((p) => !filters.pack || p.slug === filters.pack);
+    const list = (await findPacks(toPackParams(filters))).filter((p) => !filters.pack || p.slug === filters.pack);
     return { kind: dataset, rows: list } as const;
   }
   const where = await packWhere(filters);

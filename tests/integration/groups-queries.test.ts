@@ -1,7 +1,7 @@
 // Queries behind the home page and the packs table: groups, per-pack medians in a group, maker ranking.
 import { beforeAll, describe, expect, it } from "vitest";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
-import { listPackRows } from "@/db/queries/packs";
+import { listPackRows } from "@/db/queries/pack-catalogue";
 import { groupKey, summarise } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult, makeUser, openReaderCase } from "../helpers/fixtures";
 

@@ -8,7 +8,6 @@ import { db } from "@/db";
 import { searchPackIds } from "@/db/queries/pack-search";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
 import { findPackPage } from "@/server/pack-search";
-import { listPackRows } from "@/db/queries/packs";
 import { emptyCatalogue, makeMaker, makePack } from "../helpers/fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
@@ -30,7 +29,7 @@ async function api(q: string): Promise<string[]> {
 
 /** The same for the /packs page's query (the page renders these rows into its first HTML). */
 async function page(q: string): Promise<string[]> {
-  const found = await findPackPage(await listPackRows(null), { ...DEFAULT_PACK_PARAMS, q, size: 100 });
+  const found = await findPackPage({ ...DEFAULT_PACK_PARAMS, q, size: 100 });
   return found.rows.map((p) => `${p.makerName} ${p.model}`);
 }
 

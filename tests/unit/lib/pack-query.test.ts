@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { PackRow } from "@/lib/catalogue";
-import { queryPacks, sortPacks } from "@/lib/pack-query";
+import { pageCountOf, rankBySearch } from "@/lib/pack-query";
 import { DEFAULT_PACK_PARAMS, readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { packListQuery } from "@/lib/api-contract/queries";
 import { searchParamsObject } from "@/lib/api-contract/params";
@@ -63,40 +63,21 @@ describe("pack table state in the URL", () => {
   });
 });
 
-describe("pack table query", () => {
-  it("sorts missing measured values last in both directions", () => {
-    const rows = [row({ measuredC: 20 }), row({ measuredC: null }), row({ measuredC: 40 })];
-    expect(sortPacks(rows, "measuredC", "desc").map((r) => r.measuredC)).toEqual([40, 20, null]);
-    expect(sortPacks(rows, "measuredC", "asc").map((r) => r.measuredC)).toEqual([20, 40, null]);
-  });
-
-  it("pages; a page past the last is empty, never silently the last (the API answers 422)", () => {
-    const rows = Array.from({ length: 30 }, () => row({}));
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 3 }, null).rows).toHaveLength(10);
-    const past = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, size: 10, page: 9 }, null);
-    expect(past).toMatchObject({ total: 30, page: 9, pageCount: 3 });
-    expect(past.rows).toHaveLength(0);
-  });
-
-  it("keeps only the packs the search found, best match first (Fuse.js ranks; the database decides what matches)", () => {
-    const rows = [
-      row({ id: 1, makerName: "Kitebrook", model: "Gust 1300 4S 75C", labelledContinuousC: 75 }),
-      row({ id: 2, makerName: "Kitebrook", model: "Updraft 2200 3S 50C" }),
-      row({ id: 3, makerName: "Kiteborok", model: "Gust 1300 4S 60C", labelledContinuousC: 60 }),
-      row({ id: 4, makerName: "Glimwatt", model: "Spark 1300 4S 75C" }),
+describe("the search's ranking", () => {
+  it("puts the closest spelling first among the packs PostgreSQL found (Fuse.js orders, never drops)", () => {
+    const found = [
+      row({ id: 3, makerName: "Kiteborok", model: "Gust 1300 4S 60C" }),
+      row({ id: 1, makerName: "Kitebrook", model: "Gust 1300 4S 75C" }),
     ];
-    // In the catalogue's order the look-alike maker comes second; ranking puts the closer spelling first.
-    const found = new Set([3, 1]);
-    const page = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "kitebrook gust" }, found);
-    expect(page.rows.map((r) => r.id)).toEqual([1, 3]);
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "kiteborok gust" }, found).rows.map((r) => r.id)).toEqual([
-      3, 1,
-    ]);
-    // A column the reader sorts by wins over relevance; the filters still apply to what the search found.
-    const byModel = queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust", sort: "model", dir: "desc" }, found);
-    expect(byModel.rows.map((r) => r.model)).toEqual(["Gust 1300 4S 75C", "Gust 1300 4S 60C"]);
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust", minC: 70 }, found).total).toBe(1);
-    expect(queryPacks(rows, { ...DEFAULT_PACK_PARAMS, q: "gust" }, new Set()).total).toBe(0);
+    // In the catalogue's order the look-alike maker comes first; ranking puts the spelling asked for first.
+    expect(rankBySearch(found, "kitebrook gust").map((r) => r.id)).toEqual([1, 3]);
+    expect(rankBySearch(found, "kiteborok gust").map((r) => r.id)).toEqual([3, 1]);
+    // No word: the order given stays.
+    expect(rankBySearch(found, "  ").map((r) => r.id)).toEqual([3, 1]);
+  });
+
+  it("counts pages, at least one", () => {
+    expect([pageCountOf(0, 50), pageCountOf(50, 50), pageCountOf(51, 50)]).toEqual([1, 1, 2]);
   });
 });
 

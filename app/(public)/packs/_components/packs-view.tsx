@@ -2,9 +2,9 @@
 // a rewrite of /packs with any table parameter (next.config.mjs), the per-request render in app/(public)/packs-query.
 import "server-only";
 import { packListRecord } from "@/lib/open-data/pack-list";
-import { readPackParams, writePackParams } from "@/lib/pack-query-params";
+import { readPackParams, writePackParams, type PackParams } from "@/lib/pack-query-params";
 import { findPackPage } from "@/server/pack-search";
-import { cachedGroups, cachedPackRows, knownGroup } from "@/server/public-data";
+import { cachedFirstPackPage, cachedGroups, cachedPackFilterOptions, knownGroup } from "@/server/public-data";
 import { StaticIsland } from "@/components/static-island";
 import { PacksClient } from "./packs-client";
 import { ServerPackTable } from "./pack-table-model";
@@ -22,6 +22,11 @@ export function urlParams(sp: SearchParams): URLSearchParams {
   return out;
 }
 
+/** The table's page for `p`: the cached first page when /packs opens as is, else one SQL query. */
+function firstPageOf(p: PackParams) {
+  return writePackParams(p).toString() === "" ? cachedFirstPackPage() : findPackPage(p);
+}
+
 /**
  * /packs for the filters, search, sort and page in `sp`: the first HTML is already that page, rendered with the
  * same pack filter as GET /api/v1/packs; later changes come from that API.
@@ -29,12 +34,11 @@ export function urlParams(sp: SearchParams): URLSearchParams {
 export async function PacksView({ sp }: { sp: URLSearchParams }) {
   const params = readPackParams(sp);
   const group = params.group !== null && (await knownGroup(params.group)) ? params.group : null;
-  const [all, rows, groups] = await Promise.all([
-    cachedPackRows(null),
-    group === null ? null : cachedPackRows(group),
+  const [found, offered, groups] = await Promise.all([
+    firstPageOf({ ...params, group }),
+    cachedPackFilterOptions(),
     cachedGroups(),
   ]);
-  const found = await findPackPage(rows ?? all, { ...params, group });
   // The messages the client shows for the API's 404 (unknown group) and 422 (page past the last).
   const error =
     params.group !== null && group === null
@@ -49,11 +53,8 @@ export async function PacksView({ sp }: { sp: URLSearchParams }) {
     pageCount: error ? 1 : found.pageCount,
     total: error ? 0 : found.total,
   };
-  const makers = new Map(all.map((r) => [r.makerSlug, r.makerName]));
   const options: FilterOptions = {
-    makers: [...makers.entries()].map(([slug, name]) => ({ slug, name })).sort((a, b) => a.name.localeCompare(b.name)),
-    connectors: [...new Set(all.map((r) => r.connector))].sort(),
-    cells: [...new Set(all.map((r) => r.cellsInSeries))].sort((a, b) => a - b),
+    ...offered,
     groups: groups.map((g) => ({ key: g.key, label: g.label, packCount: g.packCount })),
   };
   return (

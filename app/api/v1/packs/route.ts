@@ -8,14 +8,13 @@ import { toPackParams } from "@/lib/pack-query-params";
 import { apiGet, apiJson, apiOptions, pageOf, parseQuery } from "@/server/api";
 import { requireKnownGroup } from "@/server/open-data/catalogue";
 import { findPackPage } from "@/server/pack-search";
-import { cachedPackRows } from "@/server/public-data";
 
 export const GET = apiGet(async (req) => {
   const query = parseQuery(req, packListQuery);
   const { sort, dir, page: _page, size: _size, ...filters } = query;
   const params = toPackParams(query);
   await requireKnownGroup(filters.group);
-  const result = await findPackPage(await cachedPackRows(params.group), params);
+  const result = await findPackPage(params);
   const page = pageOf(req, params, result.total);
   return apiJson(
     req,

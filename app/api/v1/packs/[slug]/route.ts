@@ -5,11 +5,11 @@ import { AppError } from "@/lib/errors";
 import { packFields } from "@/lib/open-data/fields";
 import { flatRecord } from "@/lib/open-data/records";
 import { apiGet, apiJson, apiOptions, parsePath } from "@/server/api";
-import { cachedPackRows } from "@/server/public-data";
+import { getPackRow } from "@/db/queries/pack-catalogue";
 
 export const GET = apiGet<{ slug: string }>(async (req, params) => {
   const { slug } = parsePath(params, slugPath, "No such pack.");
-  const pack = (await cachedPackRows(null)).find((p) => p.slug === slug);
+  const pack = await getPackRow(slug);
   if (!pack) throw new AppError("not_found", "No such pack.");
   return apiJson(req, packItem, {
     data: flatRecord(packFields, pack),
