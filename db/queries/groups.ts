@@ -1,14 +1,27 @@
-// Like-for-like groups: which exist, and the per-pack and per-maker figures inside one group. Medians are
-// computed in PostgreSQL with percentile_cont (linear interpolation between order statistics, the same
-// "type 7" quantile as summarise() in lib/analysis — tests/integration/groups-queries.test.ts checks
-// they agree), so a ranking over 100,000 results never ships the rows to Node.
+// Like-for-like groups: which exist, and the per-pack and per-maker figures inside one group. Every read here
+// comes from the summary tables (db/schema/summaries.ts), which PostgreSQL's triggers on `results` keep equal to
+// the from-scratch aggregate of approved results, so no request aggregates results. Their medians are
+// percentile_cont (linear interpolation between order statistics, the same "type 7" quantile as summarise() in
+// lib/analysis — tests/integration/summaries.test.ts and groups-queries.test.ts check they agree). The summaries
+// count approved results whatever the pack's or maker's status, so each read joins packs and makers and keeps the
+// counting rule's catalogue half (isCatalogueActive).
 import "server-only";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results } from "@/db/schema";
+import { makers, packGroupSummaries, packs, results } from "@/db/schema";
 import { medianInterval } from "@/lib/analysis/uncertainty";
+import type { AnyPgColumn } from "drizzle-orm/pg-core";
 import { describeStoredGroup, type DescribedGroup } from "@/lib/like-for-like";
-import { isPublished, makerOfPack, packOfResult } from "./published";
+import { isCatalogueActive, makerOfPack, packOfResult } from "./published";
+
+const s = packGroupSummaries;
+const packOfSummary = eq(packs.id, s.packId);
+
+/**
+ * A stored maximum or minimum back in the results column's own type: the summaries hold float8, the results
+ * columns are real, and a real read back as real prints as entered (2.3, not 2.299999952316284) as before.
+ */
+const asReal = (column: AnyPgColumn) => sql<number | null>`${column}::real`;
 
 export type GroupSummary = DescribedGroup & { resultCount: number; packCount: number };
 
@@ -16,16 +29,16 @@ export type GroupSummary = DescribedGroup & { resultCount: number; packCount: nu
 export async function listPublicGroups(): Promise<GroupSummary[]> {
   const counts = db
     .select({
-      key: sql<string>`${results.groupKey}`.as("count_key"),
-      resultCount: sql<number>`count(*)::int`.as("result_count"),
-      packCount: sql<number>`count(distinct ${results.packId})::int`.as("pack_count"),
-      firstId: sql<number>`min(${results.id})`.as("first_id"),
+      key: sql<string>`${s.groupKey}`.as("count_key"),
+      resultCount: sql<number>`sum(${s.resultCount})::int`.as("result_count"),
+      packCount: sql<number>`count(*)::int`.as("pack_count"),
+      firstId: sql<number>`min(${s.firstResultId})`.as("first_id"),
     })
-    .from(results)
-    .innerJoin(packs, packOfResult)
+    .from(s)
+    .innerJoin(packs, packOfSummary)
     .innerJoin(makers, makerOfPack)
-    .where(isPublished)
-    .groupBy(results.groupKey)
+    .where(isCatalogueActive)
+    .groupBy(s.groupKey)
     .as("counts");
   // The representative card is the group's oldest published result (its key is computed from its card).
   const rows = await db
@@ -104,33 +117,31 @@ export async function listPacksInGroup(groupKey: string, limit?: number): Promis
       makerName: makers.name,
       makerSlug: makers.slug,
       labelledC: packs.labelledContinuousC,
-      n: sql<number>`count(*)::int`,
-      measuredN: sql<number>`count(${results.sagLimitedC})::int`,
-      measuredMedian: sql<number | null>`percentile_cont(0.5) within group (order by ${results.sagLimitedC})`,
-      measuredMin: sql<number | null>`min(${results.sagLimitedC})`,
-      measuredMax: sql<number | null>`max(${results.sagLimitedC})`,
-      measuredValues: sql<
-        number[] | null
-      >`array_agg(${results.sagLimitedC}::float8) filter (where ${results.sagLimitedC} is not null)`,
-      labelRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.labelRatio})`,
-      sustainedMax: sql<number | null>`max(${results.sustainedCMeasured})`,
-      sustainedN: sql<number>`count(${results.sustainedCMeasured})::int`,
-      capacityRatio: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityRatio})`,
-      capacityMah: sql<number | null>`percentile_cont(0.5) within group (order by ${results.capacityMah})`,
-      dcResistanceMohm: sql<number | null>`percentile_cont(0.5) within group (order by ${results.dcResistanceMohm})`,
+      n: s.resultCount,
+      measuredN: s.sagLimitedN,
+      measuredMedian: s.sagLimitedMedian,
+      measuredMin: asReal(s.sagLimitedMin),
+      measuredMax: asReal(s.sagLimitedMax),
+      measuredValues: s.sagLimitedValues,
+      labelRatio: s.labelRatioMedian,
+      sustainedMax: asReal(s.sustainedMax),
+      sustainedN: s.sustainedN,
+      capacityRatio: s.capacityRatioMedian,
+      capacityMah: s.capacityMahMedian,
+      dcResistanceMohm: s.dcResistanceMedian,
     })
-    .from(results)
-    .innerJoin(packs, packOfResult)
+    .from(s)
+    .innerJoin(packs, packOfSummary)
     .innerJoin(makers, makerOfPack)
-    .where(and(eq(results.groupKey, groupKey), isPublished))
-    .groupBy(packs.id, makers.id)
+    .where(and(eq(s.groupKey, groupKey), isCatalogueActive))
     .$dynamic();
   const rows = await (limit === undefined
-    ? query.orderBy(desc(sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`), packs.slug)
-    : query.orderBy(desc(sql`count(*)`), packs.slug).limit(limit));
+    ? // Descending puts packs without a label ratio first (PostgreSQL's default for DESC), as before.
+      query.orderBy(desc(s.labelRatioMedian), packs.slug)
+    : query.orderBy(desc(s.resultCount), packs.slug).limit(limit));
   return rows.map(
     ({ measuredN, measuredMedian, measuredMin, measuredMax, measuredValues, sustainedMax, sustainedN, ...r }) => {
-      const interval = medianInterval((measuredValues ?? []).map(Number));
+      const interval = medianInterval(measuredValues.map(Number));
       return {
         ...r,
         sustainedC: sustainedMax === null || sustainedN === 0 ? null : { value: Number(sustainedMax), n: sustainedN },
@@ -173,12 +184,11 @@ export type RankingRating = "estimate" | "measured";
  * pages mark a maker ahead only where the median intervals say so (lib/analysis/uncertainty distinguishedBest).
  */
 export async function rankMakersInGroup(groupKey: string, rating: RankingRating = "estimate"): Promise<MakerRank[]> {
-  // One value per pack in the catalogue, by the one counting rule (db/queries/published.ts).
-  const m =
+  // One value per pack in the catalogue (the counting rule's catalogue half) with its count of non-null ratios.
+  const [m, n] =
     rating === "estimate"
-      ? sql`percentile_cont(0.5) within group (order by ${results.labelRatio})`
-      : sql`max(${results.sustainedLabelRatio})`;
-  const ratio = rating === "estimate" ? results.labelRatio : results.sustainedLabelRatio;
+      ? [sql`${s.labelRatioMedian}`, s.labelRatioN]
+      : [sql`${asReal(s.sustainedLabelRatioMax)}`, s.sustainedLabelRatioN];
   const rows = await db.execute<{
     maker_slug: string;
     maker_name: string;
@@ -190,17 +200,15 @@ export async function rankMakersInGroup(groupKey: string, rating: RankingRating 
     pack_values: number[];
   }>(sql`
     with per_pack as (
-      select ${results.packId} as pack_id, ${makers.id} as maker_id,
-             ${m} as m, count(*) as n
-      from ${results}
-      join ${packs} on ${packOfResult}
+      select ${s.packId} as pack_id, ${makers.id} as maker_id, ${m} as m, ${n} as n
+      from ${s}
+      join ${packs} on ${packOfSummary}
       join ${makers} on ${makerOfPack}
-      where ${results.groupKey} = ${groupKey} and ${isPublished} and ${ratio} is not null
-      group by ${results.packId}, ${makers.id}
+      where ${s.groupKey} = ${groupKey} and ${isCatalogueActive} and ${n} > 0
     )
     select mk.slug as maker_slug, mk.name as maker_name, percentile_cont(0.5) within group (order by pp.m) as median,
            count(*)::int as packs, sum(pp.n)::int as results, min(pp.m) as min, max(pp.m) as max,
-           array_agg(pp.m::float8) as pack_values
+           array_agg(pp.m::float8 order by pp.pack_id) as pack_values
     from per_pack pp
     join ${makers} mk on mk.id = pp.maker_id
     group by mk.id

@@ -57,24 +57,27 @@ function conditions(p: PackFilterParams): SQL | undefined {
     ...range(packs.weightG, p.minG, p.maxG),
     ...(p.connector === null ? [] : [sql`lower(${packs.connector}) = lower(${p.connector})`]),
     ...(p.maker === null ? [] : [eq(makers.slug, p.maker)]),
-    // With a group chosen, only packs that have published results in it.
-    ...(p.group === null ? [] : [sql`${packGroupSummaries.packId} is not null`]),
     ...(search === null ? [] : [search]),
   );
 }
 
-/** The catalogue joined to its summaries; the group's medians join only for `group` (none for null). */
-function joined<T extends PgSelect>(qb: T, group: string | null) {
-  return qb
+/**
+ * The catalogue joined to its summaries, with the group's medians for `group` (none for null). `only`: just the
+ * packs with published results in the group (an inner join, which reads the group's rows by its index).
+ */
+function joined<T extends PgSelect>(qb: T, group: string | null, only: "in-group" | "all") {
+  const inGroup = and(eq(packGroupSummaries.packId, packs.id), sql`${packGroupSummaries.groupKey} = ${group}`);
+  const base = qb
     .innerJoin(makers, eq(makers.id, packs.makerId))
-    .leftJoin(packSummaries, eq(packSummaries.packId, packs.id))
-    .leftJoin(
-      packGroupSummaries,
-      and(eq(packGroupSummaries.packId, packs.id), sql`${packGroupSummaries.groupKey} = ${group}`),
-    );
+    .leftJoin(packSummaries, eq(packSummaries.packId, packs.id));
+  return group !== null && only === "in-group"
+    ? base.innerJoin(packGroupSummaries, inGroup)
+    : base.leftJoin(packGroupSummaries, inGroup);
 }
 
-const rowsFrom = (ex: Executor, group: string | null) => joined(ex.select(rowColumns).from(packs).$dynamic(), group);
+/** With a group chosen, the table lists only packs that have published results in it. */
+const rowsFrom = (ex: Executor, group: string | null, only: "in-group" | "all" = "in-group") =>
+  joined(ex.select(rowColumns).from(packs).$dynamic(), group, only);
 
 /** The table's order: missing values last whichever the direction ("—" is not a small number), then slug. */
 function orderOf(sort: PackSortKey, dir: "asc" | "desc"): SQL[] {
@@ -100,7 +103,9 @@ export async function listMatchingPacks(p: PackParams): Promise<PackRow[]> {
 /** The ids of the packs matching the filters and the search (any order). */
 export async function listMatchingPackIds(p: PackFilterParams): Promise<number[]> {
   return searchTx(p.q, async (tx) => {
-    const rows = await joined(tx.select({ id: packs.id }).from(packs).$dynamic(), p.group).where(conditions(p));
+    const rows = await joined(tx.select({ id: packs.id }).from(packs).$dynamic(), p.group, "in-group").where(
+      conditions(p),
+    );
     return rows.map((r) => r.id);
   });
 }
@@ -109,37 +114,43 @@ export async function listMatchingPackIds(p: PackFilterParams): Promise<number[]
 export async function queryPackPage(p: PackParams): Promise<PackPage> {
   return searchTx(p.q, async (tx) => {
     const where = conditions(p);
+    const from = (p.page - 1) * p.size;
+    const done = (rows: PackRow[], total: number): PackPage => ({
+      rows,
+      total,
+      page: p.page,
+      pageCount: pageCountOf(total, p.size),
+      size: p.size,
+    });
+    if (ranksBySearch(p)) {
+      // Relevance is Fuse.js's score over the matches (lib/pack-query.ts): rank them all, then take the page.
+      const found = await rowsFrom(tx, p.group)
+        .where(where)
+        .orderBy(...catalogueOrder);
+      return done(rankBySearch(found, p.q).slice(from, from + p.size), found.length);
+    }
     const [counted] = await joined(
       tx
         .select({ n: sql<number>`count(*)`.mapWith(Number) })
         .from(packs)
         .$dynamic(),
       p.group,
+      "in-group",
     ).where(where);
     const total = counted?.n ?? 0;
-    const from = (p.page - 1) * p.size;
-    let rows: PackRow[];
-    if (from >= total) rows = [];
-    else if (ranksBySearch(p)) {
-      // Relevance is Fuse.js's score over the matches (lib/pack-query.ts): rank them all, then take the page.
-      const found = await rowsFrom(tx, p.group)
-        .where(where)
-        .orderBy(...catalogueOrder);
-      rows = rankBySearch(found, p.q).slice(from, from + p.size);
-    } else {
-      rows = await rowsFrom(tx, p.group)
-        .where(where)
-        .orderBy(...orderOf(p.sort, p.dir))
-        .limit(p.size)
-        .offset(from);
-    }
-    return { rows, total, page: p.page, pageCount: pageCountOf(total, p.size), size: p.size };
+    if (from >= total) return done([], total);
+    const rows = await rowsFrom(tx, p.group)
+      .where(where)
+      .orderBy(...orderOf(p.sort, p.dir))
+      .limit(p.size)
+      .offset(from);
+    return done(rows, total);
   });
 }
 
 /** Every active pack with its published-result counts and, with a group, its medians there (null where none). */
 export async function listPackRows(group: string | null): Promise<PackRow[]> {
-  return rowsFrom(db, group)
+  return rowsFrom(db, group, "all")
     .where(and(eq(packs.status, "active"), eq(makers.status, "active")))
     .orderBy(...catalogueOrder);
 }

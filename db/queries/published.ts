@@ -8,7 +8,11 @@ import "server-only";
 import { and, eq } from "drizzle-orm";
 import { makers, packs, results } from "@/db/schema";
 
-export const isPublished = and(eq(results.status, "approved"), eq(packs.status, "active"), eq(makers.status, "active"));
+/** The rule's catalogue half: the pack and its maker are active. Readers of the summary tables (which count
+ * approved results whatever the pack's or maker's status) join packs and makers and filter with it. */
+export const isCatalogueActive = and(eq(packs.status, "active"), eq(makers.status, "active"));
+
+export const isPublished = and(eq(results.status, "approved"), isCatalogueActive);
 
 export const packOfResult = eq(packs.id, results.packId);
 export const makerOfPack = eq(makers.id, packs.makerId);

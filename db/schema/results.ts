@@ -145,8 +145,8 @@ export const results = pgTable(
     index("results_bench_profile_idx").on(t.benchProfileId),
     index("results_pack_idx").on(t.packId, t.status),
     index("results_group_idx").on(t.groupKey, t.status),
-    // Covers the maker ranking (db/queries/groups.ts): an index-only scan of one group's published label
-    // ratios, already in pack order (scripts/bench-pages.sh measures it over 100,000 results).
+    // One group's published label ratios in pack order, for an index-only scan. The maker ranking read it until
+    // it moved to pack_group_summaries (issue 18); no query in db/queries/groups.ts uses it now.
     index("results_group_public_idx")
       .on(t.groupKey, t.packId, t.labelRatio)
       .where(sql`${t.status} = 'approved'`),

@@ -51,5 +51,15 @@ export const packGroupSummaries = pgTable(
     primaryKey({ columns: [t.packId, t.groupKey] }),
     // A group's packs, best label ratio first (the label check, the packs table's measured columns).
     index("pack_group_summaries_group_idx").on(t.groupKey, t.labelRatioMedian),
+    // The packs table with a group chosen (db/queries/pack-catalogue.ts): an index-only read of the group's packs
+    // with every column it sorts and counts by, instead of scanning the wide rows (the value arrays).
+    index("pack_group_summaries_table_idx").on(
+      t.groupKey,
+      t.packId,
+      t.resultCount,
+      t.sagLimitedMedian,
+      t.labelRatioMedian,
+      t.capacityRatioMedian,
+    ),
   ],
 );

@@ -46,17 +46,16 @@ export default async function ComparePage(props: {
     group: typeof raw.group === "string" ? raw.group : undefined,
   });
   const { packs: slugs, group: wanted } = parsed.success ? parsed.data : { packs: [], group: undefined };
-  const [all, cmp] = await Promise.all([cachedPacks(), cachedComparison(slugs, wanted ?? null)]);
-  const options = all.map((p) => ({ slug: p.slug, title: packTitle(p) }));
+  const cmp = await cachedComparison(slugs, wanted ?? null);
   const selected = cmp.packs.map((p) => ({ slug: p.slug, title: packTitle(p) }));
   const charts = cmp.group ? compareChartData(cmp) : null;
-  const suggestions = cmp.packs.length < MIN_COMPARE ? await exampleComparisons(all) : [];
+  const suggestions = cmp.packs.length < MIN_COMPARE ? await exampleComparisons() : [];
   const qsFor = (group: string) => `/compare?packs=${cmp.packs.map((p) => p.slug).join(",")}&group=${group}`;
 
   return (
     <div className="space-y-6">
       <h1>Compare packs</h1>
-      <ComparePicker selected={selected} options={options} group={cmp.group?.key ?? null} />
+      <ComparePicker selected={selected} group={cmp.group?.key ?? null} />
       {cmp.unknownSlugs.length ? (
         <p className="muted text-sm">Not in the catalogue (left out): {cmp.unknownSlugs.join(", ")}.</p>
       ) : null}
@@ -178,7 +177,8 @@ export default async function ComparePage(props: {
 }
 
 /** Suggestions for an empty comparison, from the five most populated groups (cached reads only). */
-async function exampleComparisons(all: Awaited<ReturnType<typeof cachedPacks>>) {
+async function exampleComparisons() {
+  const all = await cachedPacks();
   const groups = (await cachedGroups()).slice(0, 5);
   const withPacks = await Promise.all(
     groups.map(async (g) => ({

@@ -3,8 +3,8 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packs, results } from "@/db/schema";
-import { isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
+import { makers, packGroupSummaries, packs, results } from "@/db/schema";
+import { isCatalogueActive, isPublished, makerOfPack, packOfResult } from "@/db/queries/published";
 import { resultConditions, type PackWhere } from "./where";
 
 export type GroupSample = {
@@ -81,20 +81,22 @@ export type GroupCoverageRow = {
   measured: number;
 };
 
+/** From the summary tables (one row per pack and group; db/schema/summaries.ts), not from the results. */
 export async function listGroupCoverage(): Promise<GroupCoverageRow[]> {
+  const s = packGroupSummaries;
   return db
     .select({
-      group: results.groupKey,
+      group: s.groupKey,
       maker: makers.slug,
       cells: packs.cellsInSeries,
-      results: sql<number>`count(*)::int`,
-      rated: sql<number>`count(${results.labelRatio})::int`,
-      measured: sql<number>`count(${results.sustainedLabelRatio})::int`,
+      results: sql<number>`sum(${s.resultCount})::int`,
+      rated: sql<number>`sum(${s.labelRatioN})::int`,
+      measured: sql<number>`sum(${s.sustainedLabelRatioN})::int`,
     })
-    .from(results)
-    .innerJoin(packs, packOfResult)
+    .from(s)
+    .innerJoin(packs, eq(packs.id, s.packId))
     .innerJoin(makers, makerOfPack)
-    .where(isPublished)
-    .groupBy(results.groupKey, makers.slug, packs.cellsInSeries)
-    .orderBy(results.groupKey, makers.slug, packs.cellsInSeries);
+    .where(isCatalogueActive)
+    .groupBy(s.groupKey, makers.slug, packs.cellsInSeries)
+    .orderBy(s.groupKey, makers.slug, packs.cellsInSeries);
 }

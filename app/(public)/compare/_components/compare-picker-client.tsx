@@ -1,24 +1,52 @@
 "use client";
 // Add, remove and reorder the compared packs; the list lives in the URL (?packs=a,b,c&group=…). Each change
 // loads the page whole: its table and charts are static islands (components/static-island.tsx), sent once in the
-// HTML rather than again in a client navigation's payload.
-import { useId, useState } from "react";
+// HTML rather than again in a client navigation's payload. The packs to add are searched as the reader types
+// (GET /api/v1/packs?q=…, the one pack search), so the page never carries the whole catalogue.
+import { useEffect, useId, useState } from "react";
 import { MAX_COMPARE } from "@/lib/compare-limits";
 
 type Option = { slug: string; title: string };
 
-export function ComparePicker({
-  selected,
-  options,
-  group,
-}: {
-  selected: Option[];
-  options: Option[];
-  group: string | null;
-}) {
+/** How many matches the list under the box offers. */
+const SUGGESTED = 12;
+
+/** The packs matching `text`, best first, from the public API (an empty list when it cannot answer). */
+async function searchPacks(text: string, signal?: AbortSignal): Promise<Option[]> {
+  const qs = new URLSearchParams({ q: text, size: String(SUGGESTED) });
+  const res = await fetch(`/api/v1/packs?${qs.toString()}`, { signal }).catch(() => null);
+  if (!res?.ok) return [];
+  const body: unknown = await res.json().catch(() => null);
+  const data = typeof body === "object" && body !== null && "data" in body && Array.isArray(body.data) ? body.data : [];
+  return data.flatMap((d: unknown) =>
+    typeof d === "object" &&
+    d !== null &&
+    "slug" in d &&
+    "makerName" in d &&
+    "model" in d &&
+    typeof d.slug === "string" &&
+    typeof d.makerName === "string" &&
+    typeof d.model === "string"
+      ? [{ slug: d.slug, title: `${d.makerName} ${d.model}` }]
+      : [],
+  );
+}
+
+export function ComparePicker({ selected, group }: { selected: Option[]; group: string | null }) {
   const listId = useId();
   const [text, setText] = useState("");
+  const [options, setOptions] = useState<Option[]>([]);
   const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    const q = text.trim();
+    if (q.length < 2) return;
+    const ctl = new AbortController();
+    const t = setTimeout(() => void searchPacks(q, ctl.signal).then(setOptions), 200);
+    return () => {
+      clearTimeout(t);
+      ctl.abort();
+    };
+  }, [text]);
   const go = (slugs: string[]) => {
     const qs = new URLSearchParams();
     if (slugs.length) qs.set("packs", slugs.join(","));
@@ -36,13 +64,17 @@ export function ComparePicker({
     next[i + by] = a;
     go(next);
   };
-  const add = () => {
+  const add = async () => {
     const q = text.trim().toLowerCase();
+    if (q.length < 2) return setError("Type two or more letters of a maker or model, then pick a pack.");
+    // Searched again on sending, so a list from earlier typing never decides.
+    const found = await searchPacks(q);
     const hit =
-      options.find((o) => o.title.toLowerCase() === q) ??
-      options.find((o) => o.slug === q) ??
-      options.find((o) => o.title.toLowerCase().includes(q));
-    if (!q || !hit) return setError("Pick a pack from the list.");
+      found.find((o) => o.title.toLowerCase() === q) ??
+      found.find((o) => o.slug === q) ??
+      found.find((o) => o.title.toLowerCase().includes(q)) ??
+      (found.length === 1 ? found[0] : undefined);
+    if (!hit) return setError("Pick a pack from the list.");
     if (slugs.includes(hit.slug)) return setError("That pack is already compared.");
     setError(null);
     setText("");
@@ -91,7 +123,7 @@ export function ComparePicker({
           className="flex flex-wrap items-end gap-2"
           onSubmit={(e) => {
             e.preventDefault();
-            add();
+            void add();
           }}
         >
           <label className="flex-1 space-y-1">

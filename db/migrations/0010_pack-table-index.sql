@@ -1,0 +1,1 @@
+CREATE INDEX "pack_group_summaries_table_idx" ON "pack_group_summaries" USING btree ("group_key","pack_id","result_count","sag_limited_median","label_ratio_median","capacity_ratio_median");
