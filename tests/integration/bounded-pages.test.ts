@@ -35,6 +35,7 @@ const html = async (group: string) => {
 beforeAll(async () => {
   smallGroup = (await seedOpenData("bndh")).group;
   const user = await makeUser();
+  // A method card no other test file uses (cold room, unusual rate, cut-off and cycles): a group of its own.
   const makers = [];
   for (let i = 0; i < MAKERS; i++) makers.push(await makeMaker(`Bounded Maker ${String(i).padStart(2, "0")}`));
   for (let i = 0; i < PACKS; i++) {
@@ -43,7 +44,13 @@ beforeAll(async () => {
     const busy = i >= PACKS - BUSY;
     const n = busy ? 3 : 1;
     for (let k = 0; k < n; k++) {
-      const r = await makeResult(pack, user.id, { ambientC: 33, sagLimitedC: 30 + (i % 7) });
+      const r = await makeResult(pack, user.id, {
+        ambientC: 4,
+        rateC: 27,
+        cutoffVPerCell: 3.05,
+        cycles: 150,
+        sagLimitedC: 30 + (i % 7),
+      });
       bigGroup = r.groupKey;
     }
     slugs.push({ slug: pack.slug, results: n });
