@@ -11,6 +11,7 @@ import type { PackRow } from "@/lib/catalogue";
 import { pageCountOf, rankBySearch, type PackPage } from "@/lib/pack-query";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 import { packColumns } from "./packs";
+import { isCatalogueActive } from "./published";
 import { searchCondition, searchTx } from "./pack-search";
 
 /** What filters the catalogue (the table's state without its order and page). */
@@ -49,8 +50,7 @@ function range(column: AnyColumn, min: number | null, max: number | null): SQL[]
 function conditions(p: PackFilterParams): SQL | undefined {
   const search = searchCondition(p.q, sql`${packs.id}`);
   return and(
-    eq(packs.status, "active"),
-    eq(makers.status, "active"),
+    isCatalogueActive,
     ...(p.cells === null ? [] : [eq(packs.cellsInSeries, p.cells)]),
     ...range(packs.ratedCapacityMah, p.minMah, p.maxMah),
     ...range(packs.labelledContinuousC, p.minC, p.maxC),
@@ -151,7 +151,7 @@ export async function queryPackPage(p: PackParams): Promise<PackPage> {
 /** Every active pack with its published-result counts and, with a group, its medians there (null where none). */
 export async function listPackRows(group: string | null): Promise<PackRow[]> {
   return rowsFrom(db, group, "all")
-    .where(and(eq(packs.status, "active"), eq(makers.status, "active")))
+    .where(isCatalogueActive)
     .orderBy(...catalogueOrder);
 }
 
@@ -181,7 +181,7 @@ export async function listPackFilterOptions(): Promise<{
   connectors: string[];
   cells: number[];
 }> {
-  const active = and(eq(packs.status, "active"), eq(makers.status, "active"));
+  const active = isCatalogueActive;
 
   const [makerRows, connectorRows, cellRows] = await Promise.all([
     db
@@ -211,7 +211,7 @@ export async function listPackFilterOptions(): Promise<{
 /** One active pack of an active maker as the packs table lists it (by the slug's unique index), or null. */
 export async function getPackRow(slug: string): Promise<PackRow | null> {
   const [row] = await rowsFrom(db, null)
-    .where(and(eq(packs.status, "active"), eq(makers.status, "active"), eq(packs.slug, slug)))
+    .where(and(isCatalogueActive, eq(packs.slug, slug)))
     .limit(1);
   return row ?? null;
 }

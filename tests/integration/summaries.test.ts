@@ -195,6 +195,17 @@ describe("summaries equal the from-scratch aggregate after every kind of change"
     expect((await summaryOf(p1.id)).resultCount).toBe(before + 4 * p1Rows);
     expect(approvedP1).toBe(before);
   });
+
+  it("after a refresh of more than 1,000 packs at once (a bulk load: one exclusive lock, not one per pack)", async () => {
+    // Stale the tables by hand, then refresh every pack and 1,500 ids that never exist (negative) in one call.
+    await db.execute(sql`delete from pack_summaries`);
+    await db.execute(sql`update pack_group_summaries set result_count = result_count + 100`);
+    expect((await staleSummaries()).length).toBeGreaterThan(0);
+    await db.execute(
+      sql`select sagline_refresh_summaries(array(select id from packs union all select generate_series(-1500, -1)))`,
+    );
+    expect(await staleSummaries()).toEqual([]);
+  });
 });
 
 describe("summaries under transactions", () => {
