@@ -1,6 +1,7 @@
 // Cached reads behind the public pages and the public API. Each carries only the tags of what it shows
-// (server/cache-tags.ts), so a change's revalidateTag() refreshes exactly the pages that show the changed data. Pages call these,
-// never db/queries directly; integration tests call db/queries (unstable_cache needs a Next.js server).
+// (server/cache-tags.ts), so a change's revalidateTag() refreshes exactly the pages that show the changed data.
+// Pages call these, never db/queries directly; integration tests call db/queries (unstable_cache needs a Next.js
+// server).
 import "server-only";
 import { unstable_cache } from "next/cache";
 import { getComparison } from "@/db/queries/compare";
