@@ -6,7 +6,7 @@
 // count approved results whatever the pack's or maker's status, so each read joins packs and makers and keeps the
 // counting rule's catalogue half (isCatalogueActive).
 import "server-only";
-import { and, desc, eq, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { makers, packGroupSummaries, packs, results } from "@/db/schema";
 import { medianInterval } from "@/lib/analysis/uncertainty";
@@ -104,6 +104,18 @@ export type PackInGroup = {
   dcResistanceMohm: number | null;
 };
 
+/** The `limit` packs of a group with the most published results, ties by slug (a subquery). */
+function topPackIds(groupKey: string, limit: number) {
+  return db
+    .select({ id: s.packId })
+    .from(s)
+    .innerJoin(packs, packOfSummary)
+    .innerJoin(makers, makerOfPack)
+    .where(and(eq(s.groupKey, groupKey), isCatalogueActive))
+    .orderBy(desc(s.resultCount), packs.slug)
+    .limit(limit);
+}
+
 /**
  * Per-pack medians of one group (the label check, and the measured columns of the packs table). With `limit`, only
  * that many packs: those with the most published results in the group, ties by slug (the home label check's rule).
@@ -138,7 +150,10 @@ export async function listPacksInGroup(groupKey: string, limit?: number): Promis
   const rows = await (limit === undefined
     ? // Descending puts packs without a label ratio first (PostgreSQL's default for DESC), as before.
       query.orderBy(desc(s.labelRatioMedian), packs.slug)
-    : query.orderBy(desc(s.resultCount), packs.slug).limit(limit));
+    : query
+        // The chosen packs first, from the narrow index (pack_group_summaries_table_idx) without the wide rows.
+        .where(and(eq(s.groupKey, groupKey), isCatalogueActive, inArray(s.packId, topPackIds(groupKey, limit))))
+        .orderBy(desc(s.resultCount), packs.slug));
   return rows.map(
     ({ measuredN, measuredMedian, measuredMin, measuredMax, measuredValues, sustainedMax, sustainedN, ...r }) => {
       const interval = medianInterval(measuredValues.map(Number));

@@ -2,7 +2,7 @@
 // open reader flag) stays published and counted, marked with its open case. Dates leave as ISO strings so the cached reads
 // (server/public-data.ts) survive JSON round trips.
 import "server-only";
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { benchProfiles, makers, packs, readerFlags, results, reviewEvents, users } from "@/db/schema";
 import { methodCardColumns } from "./method-card-columns";
@@ -116,7 +116,8 @@ export async function listNewestApprovedResults(limit: number): Promise<NewestRe
     .innerJoin(packs, packOfResult)
     .innerJoin(makers, makerOfPack)
     .where(isPublished)
-    .orderBy(desc(results.publishedAt), desc(results.id))
+    // In the order of results_published_newest_idx (an approved result always has its publishedAt).
+    .orderBy(sql`${results.publishedAt} desc nulls last`, sql`${results.id} desc nulls last`)
     .limit(limit);
   return rows.map((r) => ({ ...r, publishedAt: iso(r.publishedAt) }));
 }

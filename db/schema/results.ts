@@ -154,6 +154,10 @@ export const results = pgTable(
     index("results_group_sustained_idx")
       .on(t.groupKey, t.packId, t.sustainedLabelRatio)
       .where(sql`${t.status} = 'approved'`),
+    // The newest published results (home page, sitemap): read in order from the index, not sorted per request.
+    index("results_published_newest_idx")
+      .on(t.publishedAt.desc(), t.id.desc())
+      .where(sql`${t.status} = 'approved'`),
     index("results_contributor_idx").on(t.contributorId),
     index("results_log_sha_idx").on(t.logSha256),
     index("results_curve_key_idx").on(t.curveKey),

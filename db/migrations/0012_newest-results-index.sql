@@ -1,0 +1,1 @@
+CREATE INDEX "results_published_newest_idx" ON "results" USING btree ("published_at" DESC NULLS LAST,"id" DESC NULLS LAST) WHERE "results"."status" = 'approved';
