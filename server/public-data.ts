@@ -14,7 +14,8 @@ import { getPackDetail } from "@/db/queries/pack-detail";
 import { activeMakerWithPacksExists, activePackExists } from "@/db/queries/pack-by-slug";
 import { listMakerCounts, listPackFilterOptions, queryPackPage } from "@/db/queries/pack-catalogue";
 import { DEFAULT_PACK_PARAMS } from "@/lib/pack-query-params";
-import { listActivePacks } from "@/db/queries/packs";
+import { getPacksBySlugs, listActivePacks } from "@/db/queries/packs";
+import { suggestComparisons } from "@/lib/compare";
 import { getPublicResult, listNewestApprovedResults } from "@/db/queries/results";
 import { getSiteSettings } from "@/db/queries/site-settings";
 import type { PackFilters, ResultFilters } from "@/lib/api-contract/queries";
@@ -23,6 +24,29 @@ import { cacheTags as t, PUBLIC_REVALIDATE_S as revalidate } from "@/server/cach
 export const cachedGroups = unstable_cache(listPublicGroups, ["groups"], { tags: [t.groups], revalidate });
 
 export const cachedPacks = unstable_cache(listActivePacks, ["active-packs"], { tags: [t.catalogue], revalidate });
+
+/** Packs the empty /compare suggests are read among this many per group (the most tested first). */
+const COMPARE_EXAMPLE_POOL = 200;
+
+/**
+ * Example comparisons for an empty /compare: from the five groups with the most packs, packs of one size class
+ * among each group's most tested (lib/compare.ts suggestComparisons). Reads a bounded number of packs.
+ */
+export const cachedCompareExamples = unstable_cache(
+  async () => {
+    const groups = (await listPublicGroups()).slice(0, 5);
+    const withPacks = await Promise.all(
+      groups.map(async (g) => ({
+        key: g.key,
+        label: g.label,
+        packSlugs: (await listPacksInGroup(g.key, COMPARE_EXAMPLE_POOL)).map((p) => p.packSlug),
+      })),
+    );
+    return suggestComparisons(withPacks, await getPacksBySlugs([...new Set(withPacks.flatMap((g) => g.packSlugs))]));
+  },
+  ["compare-examples"],
+  { tags: [t.groups, t.catalogue], revalidate },
+);
 
 /** What the packs table's filters offer (makers with active packs, connectors, cell counts): catalogue edits. */
 export const cachedPackFilterOptions = unstable_cache(listPackFilterOptions, ["pack-filter-options"], {

@@ -2,10 +2,10 @@ import type { Metadata } from "next";
 import { z } from "zod";
 import { LineFigure } from "@/components/charts/line-figure";
 import { StaticIsland } from "@/components/static-island";
-import { MAX_COMPARE, MIN_COMPARE, suggestComparisons } from "@/lib/compare";
+import { MAX_COMPARE, MIN_COMPARE } from "@/lib/compare";
 import { compareChartData } from "@/lib/compare-charts";
 import { packTitle } from "@/lib/format";
-import { cachedComparison, cachedGroups, cachedPacks, cachedPacksInGroup } from "@/server/public-data";
+import { cachedCompareExamples, cachedComparison } from "@/server/public-data";
 import { ComparePicker } from "./_components/compare-picker-client";
 import { CompareTable } from "./_components/compare-table";
 
@@ -49,7 +49,7 @@ export default async function ComparePage(props: {
   const cmp = await cachedComparison(slugs, wanted ?? null);
   const selected = cmp.packs.map((p) => ({ slug: p.slug, title: packTitle(p) }));
   const charts = cmp.group ? compareChartData(cmp) : null;
-  const suggestions = cmp.packs.length < MIN_COMPARE ? await exampleComparisons() : [];
+  const suggestions = cmp.packs.length < MIN_COMPARE ? await cachedCompareExamples() : [];
   const qsFor = (group: string) => `/compare?packs=${cmp.packs.map((p) => p.slug).join(",")}&group=${group}`;
 
   return (
@@ -174,18 +174,4 @@ export default async function ComparePage(props: {
       )}
     </div>
   );
-}
-
-/** Suggestions for an empty comparison, from the five most populated groups (cached reads only). */
-async function exampleComparisons() {
-  const all = await cachedPacks();
-  const groups = (await cachedGroups()).slice(0, 5);
-  const withPacks = await Promise.all(
-    groups.map(async (g) => ({
-      key: g.key,
-      label: g.label,
-      packSlugs: (await cachedPacksInGroup(g.key)).map((p) => p.packSlug),
-    })),
-  );
-  return suggestComparisons(withPacks, all);
 }
