@@ -133,7 +133,7 @@ export default async function PackPage(props: Props) {
       <section aria-labelledby="results" className="space-y-3">
         <h2 id="results">Results ({results.length})</h2>
         <StaticIsland id="pack-results-island">
-          <ResultsList results={results} cells={pack.cellsInSeries} />
+          <ResultsList results={results} cells={pack.cellsInSeries} packSlug={pack.slug} />
         </StaticIsland>
       </section>
     </article>

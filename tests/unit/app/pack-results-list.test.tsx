@@ -1,0 +1,63 @@
+// A pack page lists at most PACK_PAGE_MAX_RESULTS results, the newest first, and says where it cut the list with
+// links to the download and the API that hold them all; a pack with few results lists them all and says nothing.
+import { renderToStaticMarkup } from "react-dom/server";
+import { describe, expect, it } from "vitest";
+import { ResultsList } from "@/app/(public)/packs/[slug]/_components/results-list";
+import { PACK_PAGE_MAX_RESULTS } from "@/lib/bounded-lists";
+import type { PublicResultRow } from "@/lib/pack-summary";
+
+const row = (id: number): PublicResultRow & { groupLabel: string } => ({
+  id,
+  packId: 1,
+  openCase: false,
+  groupKey: "k",
+  ratedCapacityMah: 1500,
+  ambientTemperatureC: 22,
+  packStartTemperatureC: null,
+  loadMode: "constant-current",
+  loadCurrentA: 12,
+  loadRateC: 8,
+  cutoffVPerCell: 3.3,
+  stopTemperatureC: 60,
+  resistanceMethod: "dc-step",
+  equipment: "load",
+  sampleRateHz: 1,
+  cyclesBeforeTest: 0,
+  testedOn: null,
+  // One result a day: a higher id is newer.
+  publishedAt: new Date(Date.UTC(2026, 0, 1) + id * 86_400_000).toISOString(),
+  capacityMah: 1400,
+  energyWh: 20,
+  dcResistanceMohm: 12,
+  resistanceAt25CMohm: 12,
+  holdVoltagePerCellV: 3.7,
+  temperatureRiseC: 9,
+  sagLimitedC: 40,
+  labelRatio: 0.8,
+  sustainedCMeasured: null,
+  sustainedLabelRatio: null,
+  capacityRatio: 0.93,
+  retention: null,
+  reachedCutoff: true,
+  passedStopTemperature: false,
+  groupLabel: "DC step · 15–25 °C",
+});
+
+const ids = (html: string) => [...html.matchAll(/Result #(\d+)/g)].map((m) => Number(m[1]));
+
+describe("a pack page's results list", () => {
+  it("keeps the newest PACK_PAGE_MAX_RESULTS and links to all of them", () => {
+    const rows = Array.from({ length: 50 }, (_, i) => row(i + 1));
+    const html = renderToStaticMarkup(<ResultsList results={rows} cells={4} packSlug="ridge-1800" />);
+    expect(ids(html)).toEqual(Array.from({ length: PACK_PAGE_MAX_RESULTS }, (_, i) => 50 - i));
+    expect(html).toContain(`Showing ${PACK_PAGE_MAX_RESULTS} of 50 results`);
+    expect(html).toContain('href="/data/download/results.csv?pack=ridge-1800"');
+    expect(html).toContain('href="/api/v1/results?pack=ridge-1800"');
+  });
+
+  it("lists a few results whole, without a note", () => {
+    const html = renderToStaticMarkup(<ResultsList results={[row(2), row(7), row(4)]} cells={4} packSlug="p" />);
+    expect(ids(html)).toEqual([7, 4, 2]);
+    expect(html).not.toContain("Showing");
+  });
+});
