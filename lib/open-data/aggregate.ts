@@ -64,7 +64,12 @@ function summary(values: (number | null)[]): Summary {
 
 export function aggregateByPack(samples: Sample[]): PackAggregate[] {
   const byPack = new Map<number, Sample[]>();
-  for (const s of samples) byPack.set(s.packId, [...(byPack.get(s.packId) ?? []), s]);
+  // Appended in place: copying a pack's list for every sample was quadratic in its results.
+  for (const s of samples) {
+    const list = byPack.get(s.packId);
+    if (list) list.push(s);
+    else byPack.set(s.packId, [s]);
+  }
   return [...byPack.values()].map((list) => {
     const first = list[0] as Sample;
     const figures = Object.fromEntries(AGGREGATE_FIGURES.map((f) => [f, summary(list.map((s) => s[f]))])) as Record<
