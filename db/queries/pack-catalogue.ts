@@ -11,7 +11,7 @@ import type { PackRow } from "@/lib/catalogue";
 import { pageCountOf, rankBySearch, type PackPage } from "@/lib/pack-query";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 import { packColumns } from "./packs";
-import { isCatalogueActive } from "./published";
+import { isCatalogueActive, makerOfPack } from "./published";
 import { searchCondition, searchTx } from "./pack-search";
 
 /** What filters the catalogue (the table's state without its order and page). */
@@ -67,9 +67,7 @@ function conditions(p: PackFilterParams): SQL | undefined {
  */
 function joined<T extends PgSelect>(qb: T, group: string | null, only: "in-group" | "all") {
   const inGroup = and(eq(packGroupSummaries.packId, packs.id), sql`${packGroupSummaries.groupKey} = ${group}`);
-  const base = qb
-    .innerJoin(makers, eq(makers.id, packs.makerId))
-    .leftJoin(packSummaries, eq(packSummaries.packId, packs.id));
+  const base = qb.innerJoin(makers, makerOfPack).leftJoin(packSummaries, eq(packSummaries.packId, packs.id));
   return group !== null && only === "in-group"
     ? base.innerJoin(packGroupSummaries, inGroup)
     : base.leftJoin(packGroupSummaries, inGroup);
@@ -181,26 +179,23 @@ export async function listPackFilterOptions(): Promise<{
   connectors: string[];
   cells: number[];
 }> {
-  const active = isCatalogueActive;
-
   const [makerRows, connectorRows, cellRows] = await Promise.all([
     db
       .selectDistinct({ slug: makers.slug, name: makers.name })
       .from(packs)
-      .innerJoin(makers, eq(makers.id, packs.makerId))
-      .where(active),
+      .innerJoin(makers, makerOfPack)
+      .where(isCatalogueActive),
     db
       .selectDistinct({ connector: packs.connector })
       .from(packs)
-      .innerJoin(makers, eq(makers.id, packs.makerId))
-      .where(active),
+      .innerJoin(makers, makerOfPack)
+      .where(isCatalogueActive),
     db
       .selectDistinct({ cells: packs.cellsInSeries })
       .from(packs)
-      .innerJoin(makers, eq(makers.id, packs.makerId))
-      .where(active),
+      .innerJoin(makers, makerOfPack)
+      .where(isCatalogueActive),
   ]);
-
   return {
     makers: makerRows.sort((a, b) => a.name.localeCompare(b.name)),
     connectors: connectorRows.map((r) => r.connector).sort(),
