@@ -62,6 +62,16 @@ function figures(over: Partial<Figures> = {}): Figures {
   };
 }
 
+/** A moderator named after the test file's prefix (the user the decisions in these files are made by). */
+export async function makeModerator(prefix: string): Promise<string> {
+  const [mod] = await db
+    .insert(users)
+    .values({ email: `${prefix}-mod@example.test`, displayName: `${prefix} moderator`, role: "moderator" })
+    .returning();
+  if (!mod) throw new Error("no moderator");
+  return mod.id;
+}
+
 export async function seedOpenData(prefix: string) {
   const [user] = await db
     .insert(users)

@@ -8,10 +8,10 @@ import { GET as getResults } from "@/app/api/v1/results/route";
 import { GET as getGroup } from "@/app/api/v1/groups/[key]/route";
 import { db } from "@/db";
 import { decideResult } from "@/server/review";
-import { makers, users } from "@/db/schema";
+import { makers } from "@/db/schema";
 import { taggedCache } from "../helpers/next-mocks";
 import { makeResult } from "../helpers/fixtures";
-import { seedOpenData } from "../helpers/open-data-fixtures";
+import { makeModerator, seedOpenData } from "../helpers/open-data-fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).taggedCache);
 
@@ -26,14 +26,9 @@ type Json = { data: unknown; meta: { total?: number } };
 
 beforeAll(async () => {
   fx = await seedOpenData(P);
-  const [mod] = await db
-    .insert(users)
-    .values({ email: `${P}-mod@example.test`, displayName: `${P} moderator`, role: "moderator" })
-    .returning();
-  if (!mod) throw new Error("no moderator");
-  moderatorId = mod.id;
+  moderatorId = await makeModerator(P);
   // Enough published results (in a group of their own) for a page beyond the cached first twenty.
-  for (let i = 0; i < 21; i++) await makeResult(fx.packs[2]!, mod.id, { ambientC: 30 });
+  for (let i = 0; i < 21; i++) await makeResult(fx.packs[2]!, moderatorId, { ambientC: 30 });
 });
 
 async function total(path: string): Promise<number> {

@@ -8,7 +8,7 @@ import { users } from "@/db/schema";
 import { RESULT_PAGE_CAP } from "@/lib/api-contract/queries";
 import { decideResult } from "@/server/review";
 import { makeResult } from "../helpers/fixtures";
-import { seedOpenData } from "../helpers/open-data-fixtures";
+import { makeModerator, seedOpenData } from "../helpers/open-data-fixtures";
 
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
 
@@ -41,12 +41,7 @@ async function approve(resultId: number): Promise<void> {
 
 beforeAll(async () => {
   fx = await seedOpenData(P);
-  const [mod] = await db
-    .insert(users)
-    .values({ email: `${P}-mod@example.test`, displayName: `${P} moderator`, role: "moderator" })
-    .returning();
-  if (!mod) throw new Error("no moderator");
-  moderatorId = mod.id;
+  moderatorId = await makeModerator(P);
   const [contributor] = await db
     .insert(users)
     .values({ email: `${P}-bench@example.test`, displayName: `${P} contributor` })

@@ -4,14 +4,14 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
-import { results, users } from "@/db/schema";
+import { results } from "@/db/schema";
 import { decideResult, resolveReaderFlag, fileReaderFlag } from "@/server/review";
 import { makeResult } from "../helpers/fixtures";
 import { requestState } from "../helpers/next-mocks";
-import { seedOpenData } from "../helpers/open-data-fixtures";
+import { makeModerator, seedOpenData } from "../helpers/open-data-fixtures";
 import { signedIn } from "../helpers/users";
 
-const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn() }));
+const revalidate = vi.hoisted(() => ({ revalidateTags: vi.fn<(tags: readonly string[]) => void>() }));
 vi.mock("@/server/revalidate", () => revalidate);
 vi.mock("next/headers", async () => (await import("../helpers/next-mocks")).nextHeaders);
 vi.mock("next/cache", async () => (await import("../helpers/next-mocks")).nextCache);
@@ -24,7 +24,7 @@ const RETIRED_SITE_WIDE = ["packs", "results"];
 let fx: Awaited<ReturnType<typeof seedOpenData>>;
 let moderatorId = "";
 
-const lastTags = () => new Set(revalidate.revalidateTags.mock.calls.at(-1)?.[0] as string[]);
+const lastTags = () => new Set(revalidate.revalidateTags.mock.calls.at(-1)?.[0]);
 
 const benchForm = (values: Record<string, string>) => {
   const fd = new FormData();
@@ -49,12 +49,7 @@ const benchForm = (values: Record<string, string>) => {
 
 beforeAll(async () => {
   fx = await seedOpenData(P);
-  const [mod] = await db
-    .insert(users)
-    .values({ email: `${P}-mod@example.test`, displayName: `${P} moderator`, role: "moderator" })
-    .returning();
-  if (!mod) throw new Error("no moderator");
-  moderatorId = mod.id;
+  moderatorId = await makeModerator(P);
 });
 
 beforeEach(() => {

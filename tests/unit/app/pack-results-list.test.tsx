@@ -5,41 +5,12 @@ import { describe, expect, it } from "vitest";
 import { ResultsList } from "@/app/(public)/packs/[slug]/_components/results-list";
 import { PACK_PAGE_MAX_RESULTS } from "@/lib/bounded-lists";
 import type { PublicResultRow } from "@/lib/pack-summary";
+import { publicResultRow } from "../../helpers/public-result-row";
 
 const row = (id: number): PublicResultRow & { groupLabel: string } => ({
-  id,
-  packId: 1,
-  openCase: false,
-  groupKey: "k",
-  ratedCapacityMah: 1500,
-  ambientTemperatureC: 22,
-  packStartTemperatureC: null,
-  loadMode: "constant-current",
-  loadCurrentA: 12,
-  loadRateC: 8,
-  cutoffVPerCell: 3.3,
-  stopTemperatureC: 60,
-  resistanceMethod: "dc-step",
-  equipment: "load",
-  sampleRateHz: 1,
-  cyclesBeforeTest: 0,
-  testedOn: null,
+  ...publicResultRow({ id }),
   // One result a day: a higher id is newer.
   publishedAt: new Date(Date.UTC(2026, 0, 1) + id * 86_400_000).toISOString(),
-  capacityMah: 1400,
-  energyWh: 20,
-  dcResistanceMohm: 12,
-  resistanceAt25CMohm: 12,
-  holdVoltagePerCellV: 3.7,
-  temperatureRiseC: 9,
-  sagLimitedC: 40,
-  labelRatio: 0.8,
-  sustainedCMeasured: null,
-  sustainedLabelRatio: null,
-  capacityRatio: 0.93,
-  retention: null,
-  reachedCutoff: true,
-  passedStopTemperature: false,
   groupLabel: "DC step · 15–25 °C",
 });
 

@@ -2,44 +2,8 @@ import { describe, expect, it } from "vitest";
 import { medianInterval } from "@/lib/analysis/uncertainty";
 import { markDistinguished, suggestComparisons } from "@/lib/compare";
 import { retentionSeries } from "@/lib/analysis";
-import { cycleSeries, onePackSeries, sustainedC, type PublicResultRow } from "@/lib/pack-summary";
-
-let id = 0;
-const r = (o: Partial<PublicResultRow>): PublicResultRow => ({
-  id: ++id,
-  packId: 1,
-  openCase: false,
-  groupKey: "k",
-  ratedCapacityMah: 2000,
-  ambientTemperatureC: 22,
-  packStartTemperatureC: 22,
-  loadMode: "constant-current",
-  loadCurrentA: 16,
-  loadRateC: 8,
-  cutoffVPerCell: 3.3,
-  stopTemperatureC: 60,
-  resistanceMethod: "dc-step",
-  equipment: "load",
-  sampleRateHz: 1,
-  cyclesBeforeTest: 0,
-  testedOn: null,
-  publishedAt: null,
-  capacityMah: 1900,
-  energyWh: 28,
-  dcResistanceMohm: 10,
-  resistanceAt25CMohm: 10,
-  holdVoltagePerCellV: 3.8,
-  temperatureRiseC: 10,
-  sagLimitedC: 40,
-  labelRatio: 0.8,
-  sustainedCMeasured: 8,
-  sustainedLabelRatio: 0.16,
-  capacityRatio: 0.95,
-  retention: null,
-  reachedCutoff: true,
-  passedStopTemperature: false,
-  ...o,
-});
+import { cycleSeries, onePackSeries, sustainedC } from "@/lib/pack-summary";
+import { publicResultRow as r } from "../../helpers/public-result-row";
 
 describe("best on /compare only where packs really differ (95 % median intervals, order statistics)", () => {
   const six = (base: number) => [0, 1, 2, 3, 4, 5].map((k) => base + k * 0.1);

@@ -1,0 +1,40 @@
+// A published result as the pack page and /compare read it (lib/pack-summary.ts PublicResultRow): plausible figures
+// for a 2,000 mAh pack tested at 8C, each field overridable; ids count up from 1 within a test file.
+import type { PublicResultRow } from "@/lib/pack-summary";
+
+let id = 0;
+export const publicResultRow = (o: Partial<PublicResultRow> = {}): PublicResultRow => ({
+  id: ++id,
+  packId: 1,
+  openCase: false,
+  groupKey: "k",
+  ratedCapacityMah: 2000,
+  ambientTemperatureC: 22,
+  packStartTemperatureC: 22,
+  loadMode: "constant-current",
+  loadCurrentA: 16,
+  loadRateC: 8,
+  cutoffVPerCell: 3.3,
+  stopTemperatureC: 60,
+  resistanceMethod: "dc-step",
+  equipment: "load",
+  sampleRateHz: 1,
+  cyclesBeforeTest: 0,
+  testedOn: null,
+  publishedAt: null,
+  capacityMah: 1900,
+  energyWh: 28,
+  dcResistanceMohm: 10,
+  resistanceAt25CMohm: 10,
+  holdVoltagePerCellV: 3.8,
+  temperatureRiseC: 10,
+  sagLimitedC: 40,
+  labelRatio: 0.8,
+  sustainedCMeasured: 8,
+  sustainedLabelRatio: 0.16,
+  capacityRatio: 0.95,
+  retention: null,
+  reachedCutoff: true,
+  passedStopTemperature: false,
+  ...o,
+});
