@@ -20,7 +20,7 @@ export function MyResults({ results }: { results: ContributorResult[] }) {
     <ul className="space-y-2" data-testid="my-results">
       {results.map((r) => (
         <li key={r.id} className="card space-y-2" data-testid={`my-result-${r.id}`}>
-          <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <div className="item-head">
             <Link href={`/account/results/${r.id}`} className="font-medium">
               Result #{r.id} · {r.makerName} {r.model}
             </Link>

@@ -36,7 +36,7 @@ export function ResultsList({
       <ol className="space-y-3" data-testid="pack-results">
         {list.map((r) => (
           <li key={r.id} className="card space-y-2">
-            <div className="flex flex-wrap items-baseline justify-between gap-2">
+            <div className="item-head">
               <a href={`/results/${r.id}`} className="font-medium">
                 Result #{r.id}
               </a>
