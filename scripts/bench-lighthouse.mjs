@@ -108,15 +108,22 @@ try {
   for (const p of pages) {
     const samples = [];
     for (let i = 0; i < runs; i++) {
-      const result = await lighthouse(base + p.path, {
-        port: chrome.port,
-        output: "json",
-        logLevel: "error",
-        onlyCategories: ["performance", "accessibility"],
-      });
-      const lhr = result?.lhr;
-      if (!lhr) fail(`no Lighthouse result for ${p.path}`);
-      if (lhr.runtimeError) fail(`${p.path}: ${lhr.runtimeError.message}`);
+      // Lighthouse now and then loses a trace on a loaded machine (NO_NAVSTART): such a run is repeated, at most
+      // twice, and said; a page that keeps failing stops the bench.
+      let lhr;
+      for (let attempt = 1; attempt <= 3; attempt++) {
+        const result = await lighthouse(base + p.path, {
+          port: chrome.port,
+          output: "json",
+          logLevel: "error",
+          onlyCategories: ["performance", "accessibility"],
+        });
+        lhr = result?.lhr;
+        if (!lhr) fail(`no Lighthouse result for ${p.path}`);
+        if (!lhr.runtimeError) break;
+        if (attempt === 3) fail(`${p.path}: ${lhr.runtimeError.message}`);
+        console.error(`bench:lighthouse: ${p.path}: ${lhr.runtimeError.code}, run repeated`);
+      }
       const items = lhr.audits["network-requests"]?.details?.items ?? [];
       const scriptKb =
         items.filter((r) => r.resourceType === "Script").reduce((sum, r) => sum + (r.transferSize ?? 0), 0) / 1024;

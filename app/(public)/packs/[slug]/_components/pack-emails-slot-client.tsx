@@ -37,7 +37,8 @@ export function PackEmailsSlot({
       href={`/sign-in?${new URLSearchParams({ callbackUrl: `/packs/${packSlug}` })}`}
       data-slot="pack-emails"
       className="btn-line"
-      aria-label={`E-mail me new results for ${packTitle}: sign in first`}
+      // The name starts with the visible words (WCAG 2.5.3, label in name), then says which pack and what comes first.
+      aria-label={`E-mail me new results for this pack, ${packTitle}: sign in first`}
     >
       E-mail me new results for this pack
     </a>
