@@ -233,13 +233,14 @@ worker_start() {
   (cd "$ROOT" && exec setsid $TSX scripts/mail-worker.ts) >"$RUN_DIR/$name.log" 2>&1 </dev/null &
   echo $! >"$RUN_DIR/$name.pid"
   local i
-  for ((i = 0; i < 300; i++)); do
+  # Up to 90 s: tsx compiles the worker at start, which takes far longer on a loaded machine than on a quiet one.
+  for ((i = 0; i < 900; i++)); do
     grep -q "mail worker listening" "$RUN_DIR/$name.log" 2>/dev/null && break
     svc_running "$name" || fail "the mail worker stopped at start; see .run/$name.log: $(tail -n 1 "$RUN_DIR/$name.log" 2>/dev/null)"
     sleep 0.1
   done
   grep -q "mail worker listening" "$RUN_DIR/$name.log" 2>/dev/null \
-    || fail "the mail worker did not start within 30 s; see .run/$name.log"
+    || fail "the mail worker did not start within 90 s; see .run/$name.log"
   echo started >"$RUN_DIR/$name.started-by-us"
   say "$name started (sends queued mail through 127.0.0.1:$SMTP_PORT)"
 }
