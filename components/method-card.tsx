@@ -1,3 +1,4 @@
+import { Fragment } from "react";
 import { RESISTANCE_METHODS, type ResistanceMethod } from "@/lib/analysis";
 import { Qty } from "@/components/quantity";
 import { fmt } from "@/lib/format";
@@ -38,14 +39,13 @@ export function MethodCard({ m, compact = false }: { m: MethodCardData; compact?
       ["Tested on", m.testedOn ?? "—"],
     );
   return (
-    <dl
-      className={`grid gap-x-4 gap-y-1 text-sm ${compact ? "grid-cols-[auto_1fr] sm:grid-cols-[auto_1fr_auto_1fr]" : "grid-cols-[auto_1fr]"}`}
-    >
+    // Terms muted, values in figures' type: set by .method-dl (globals.css), not on each of them.
+    <dl className={compact ? "method-dl method-dl-2" : "method-dl"}>
       {rows.map(([k, v]) => (
-        <div key={k} className="contents">
-          <dt className="muted">{k}</dt>
-          <dd className="num">{v}</dd>
-        </div>
+        <Fragment key={k}>
+          <dt>{k}</dt>
+          <dd>{v}</dd>
+        </Fragment>
       ))}
     </dl>
   );

@@ -3,6 +3,10 @@
 import { fmt } from "@/lib/format";
 import { DEFAULT_UNITS, symbol, type Quantity } from "@/lib/units";
 
+/** The value the browser converts from: six significant digits, far more than any figure shows (≤ 4), without
+ * the float noise of a computed median ("2.1146943499999997"), which is sent for every figure of a page. */
+export const unitValue = (v: number) => Number(v.toPrecision(6));
+
 /** A value with its unit symbol ("23.4 °C"); the em dash when missing. `cells` for per-cell figures. */
 export function Qty({
   q,
@@ -21,7 +25,7 @@ export function Qty({
   if (v === null || v === undefined || !Number.isFinite(v)) return <>{fmt(null)}</>;
   const text = fmt(v, digits);
   return (
-    <span data-u={q} data-v={v} data-s={cells} data-sym={bare ? undefined : ""}>
+    <span data-u={q} data-v={unitValue(v)} data-s={cells} data-sym={bare ? undefined : ""}>
       {bare ? text : `${text} ${symbol(q, DEFAULT_UNITS, cells)}`}
     </span>
   );

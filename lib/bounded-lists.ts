@@ -6,8 +6,9 @@ export const HOME_LABEL_CHECK_MAX_PACKS = 60;
 /** Makers listed beside it. */
 export const HOME_RANKING_MAX_MAKERS = 12;
 
-/** Results listed on a pack page, newest first (every result stays in its figures, the API and the downloads). */
-export const PACK_PAGE_MAX_RESULTS = 20;
+/** Results listed on a pack page, newest first (every result stays in its figures, the API and the downloads).
+ * Ten keeps a much-tested pack's page within its size (≈ 1.2 KB of HTML per listed result with its method card). */
+export const PACK_PAGE_MAX_RESULTS = 10;
 
 /** Points of a saved chart's label check (the chart builder, its views, embeds and images). */
 export const CHART_MAX_PACKS = 200;

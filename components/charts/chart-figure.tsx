@@ -4,7 +4,7 @@
 // tooltips and keyboard readings read the rows (chart-behaviour-client.tsx), so no figure travels twice.
 import type { ReactNode } from "react";
 import type { Quantity } from "@/lib/units";
-import { UnitSymbol } from "../quantity";
+import { UnitSymbol, unitValue } from "../quantity";
 import type { MarkerShape } from "./palette";
 import { MarkerSwatch } from "./draw/kit";
 
@@ -33,7 +33,7 @@ export type LegendItem = {
 function Cell({ cell, first }: { cell: TableCell; first: boolean }) {
   const c = typeof cell === "string" ? { text: cell } : cell;
   const body = c.href ? <a href={c.href}>{c.text}</a> : c.text;
-  const unit = c.u ? { "data-u": c.u, "data-v": c.v, "data-s": c.s } : {};
+  const unit = c.u ? { "data-u": c.u, "data-v": c.v === undefined ? undefined : unitValue(c.v), "data-s": c.s } : {};
   return first ? (
     <th scope="row" {...unit}>
       {body}

@@ -13,6 +13,19 @@ const HEIGHT = 300;
 const yColumn = (o: { yLabel: string; yUnit?: Quantity; cells?: number }) =>
   o.yUnit ? { label: o.yLabel, u: o.yUnit, s: o.cells } : o.yLabel;
 
+/**
+ * How many steps the table reads across [d0, d1]: READING_STEPS, or fewer where the x values are written with
+ * fewer distinct values than that — a cycle axis from 0 to 1 is read at 0 and 1, not at 16 points all written
+ * "0" or "1" with values read between them.
+ */
+export function readingSteps(d0: number, d1: number, xDigits: number): number {
+  const smallest = 10 ** -xDigits;
+  return Math.max(1, Math.min(READING_STEPS, Math.floor((d1 - d0) / smallest + 1e-9)));
+}
+
+/** Read where the table's x is written: at the value its x column shows, not between two written values. */
+const roundTo = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
+
 function lineTable(
   series: LineSeries[],
   opts: LineOptions & { xLabel: string; yLabel: string; caption: string; yUnit?: Quantity; cells?: number },
@@ -29,16 +42,19 @@ function lineTable(
       ),
     };
   const [d0, d1] = x.domain() as [number, number];
+  const steps = readingSteps(d0, d1, opts.xDigits ?? 0);
   return {
-    caption: `${opts.caption} (read at ${READING_STEPS + 1} evenly spaced points; — where a series has no data)`,
+    caption: `${opts.caption} (read at ${steps + 1} evenly spaced points; — where a series has no data)`,
     columns: [
       opts.xLabel,
       ...series.map((s) => (opts.yUnit ? { label: s.label, u: opts.yUnit, s: opts.cells } : s.label)),
     ],
-    rows: Array.from({ length: READING_STEPS + 1 }, (_, i) => d0 + ((d1 - d0) * i) / READING_STEPS).map((xv) => ({
-      xPct: Math.round(x(xv) * 100) / 100,
-      cells: [fx(xv), ...series.map((s) => fy(valueAt(s.points, xv, s.mode ?? "line")))],
-    })),
+    rows: Array.from({ length: steps + 1 }, (_, i) => roundTo(d0 + ((d1 - d0) * i) / steps, opts.xDigits ?? 0)).map(
+      (xv) => ({
+        xPct: Math.round(x(xv) * 100) / 100,
+        cells: [fx(xv), ...series.map((s) => fy(valueAt(s.points, xv, s.mode ?? "line")))],
+      }),
+    ),
   };
 }
 

@@ -15,6 +15,9 @@ const SERIES_STYLES: SeriesStyle[] = [
   { color: "#F0E442", dash: "1 4", shape: "circle", name: "yellow, sparse dots, circles" },
 ];
 
+/** The palette's colours in order (marker ids name a colour by its place here). */
+export const PALETTE_COLOURS: readonly string[] = SERIES_STYLES.map((s) => s.color);
+
 export function seriesStyle(index: number): SeriesStyle {
   return SERIES_STYLES[index % SERIES_STYLES.length] as SeriesStyle;
 }

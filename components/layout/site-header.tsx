@@ -1,4 +1,4 @@
-import { UnitsControl } from "@/components/units/units-control-client";
+import { UnitsControl, UnitsControlAfterLoad } from "@/components/units/units-control-client";
 import { Logo } from "./logo";
 
 const nav = [
@@ -48,7 +48,7 @@ export function SiteHeader({ accountSlot }: { accountSlot?: React.ReactNode }) {
                   ))}
                 </ul>
               </nav>
-              <UnitsControl />
+              <UnitsControlAfterLoad />
             </div>
           </details>
         </div>

@@ -1,7 +1,7 @@
 "use client";
 // The reader's units: one control (°C/°F, g/oz, per cell/per pack), kept in the URL and remembered in this
 // browser. Mounted in the header; it also converts the page (and whatever arrives later) as it changes.
-import { useEffect, useId } from "react";
+import { useEffect, useId, useSyncExternalStore } from "react";
 import { type UnitPrefs } from "@/lib/units";
 import { applyUnits } from "./apply-units";
 import { rememberUrlUnits, setUnits, useUnits } from "./units-store";
@@ -92,4 +92,21 @@ export function UnitsControl({ convert = false }: { convert?: boolean }) {
 function ConvertPage({ prefs }: { prefs: UnitPrefs }) {
   useConvertPage(prefs);
   return null;
+}
+
+/**
+ * The same control for the phone menu, drawn only once the page's script runs: the header already carries one
+ * for wide screens, and units convert only with the script, so the HTML does not carry a second copy
+ * (≈ 2 KB on every page). It sits in the closed menu, so appearing later shifts nothing.
+ */
+const noSubscription = () => () => {};
+
+export function UnitsControlAfterLoad() {
+  // False on the server and while hydrating, true from then on (nothing to subscribe to).
+  const ready = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
+  return ready ? <UnitsControl /> : null;
 }

@@ -21,6 +21,9 @@ test("home page shows seeded packs that link to their pages", async ({ page }) =
 test("an unknown pack is a 404 page, not an error", async ({ page }) => {
   const response = await page.goto("/packs/no-such-pack");
   expect(response?.status()).toBe(404);
+  // Sagline's own 404 view, with a way on: not the framework's bare default.
+  await expect(page.getByTestId("not-found")).toContainText("Nothing is published at this address");
+  await expect(page.getByRole("link", { name: "Search the packs" })).toHaveAttribute("href", "/packs");
 });
 
 test("robots.txt and sitemap.xml let search engines find the packs and keep them out of signed-in areas", async ({

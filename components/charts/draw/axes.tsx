@@ -7,7 +7,7 @@ import { Axis } from "@visx/axis";
 import { GridRows } from "@visx/grid";
 import type { scaleLinear } from "@visx/scale";
 import type { Quantity } from "@/lib/units";
-import { XBaseLine, XTick, XTitle, YGridRow } from "./kit";
+import { AXIS_LOOK, GRID_LOOK, XBaseLine, XTick, XTitle, YGridRow } from "./kit";
 
 /** A linear scale as the drawings make them (@visx/scale): x in percent of the width, y in pixels. */
 type LinearScale = ReturnType<typeof scaleLinear<number>>;
@@ -30,12 +30,14 @@ export function YGrid({
 }) {
   return (
     <GridRows scale={y} tickValues={ticks} width={0} className="chart-grid">
-      {({ lines }) =>
-        lines.map(({ from, index }) => {
-          const t = ticks[index] ?? 0;
-          return <YGridRow key={t} y={from.y ?? 0} value={t} label={format(t)} unit={unit} cells={cells} />;
-        })
-      }
+      {({ lines }) => (
+        <g {...GRID_LOOK}>
+          {lines.map(({ from, index }) => {
+            const t = ticks[index] ?? 0;
+            return <YGridRow key={t} y={from.y ?? 0} value={t} label={format(t)} unit={unit} cells={cells} />;
+          })}
+        </g>
+      )}
     </GridRows>
   );
 }
@@ -57,13 +59,13 @@ export function XAxis({
   return (
     <Axis scale={x} tickValues={ticks} tickFormat={(v) => format(Number(v))} axisClassName="chart-axis">
       {({ ticks: placed }) => (
-        <>
+        <g {...AXIS_LOOK}>
           <XBaseLine y={y} />
           {placed.map(({ from, formattedValue, index }) => (
             <XTick key={ticks[index] ?? index} at={from.x} y={y} label={formattedValue ?? ""} />
           ))}
           <XTitle y={y} title={title} />
-        </>
+        </g>
       )}
     </Axis>
   );

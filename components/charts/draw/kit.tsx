@@ -4,7 +4,7 @@
 // live in a stretched inner <svg> (viewBox 0..1000 wide, preserveAspectRatio none) with non-scaling strokes;
 // markers are <use> of shapes defined once per drawing, placed with percentage x. Hook-free: see markup.ts.
 import { DEFAULT_UNITS, symbol, type Quantity } from "@/lib/units";
-import type { MarkerShape } from "../palette";
+import { PALETTE_COLOURS, type MarkerShape } from "../palette";
 
 /** A percentage as an attribute value, rounded to 0.01 %. */
 export const pct = (v: number) => `${Math.round(v * 100) / 100}%`;
@@ -92,35 +92,43 @@ const SHAPE_CODE: Record<MarkerShape, string> = {
   cross: "x",
 };
 
-/** One shape element per shape a drawing uses, for its <use> markers. */
-export function MarkerDefs({ prefix, shapes }: { prefix: string; shapes: MarkerShape[] }) {
+/** A marker's look: its shape, colour and whether it is filled (open shapes are outlined, crosses always strokes). */
+export type MarkStyle = { shape: MarkerShape; color: string; filled?: boolean };
+
+/** The id of a marker style's shape in a drawing's <defs>: shape code, colour (its place in the palette, or its
+ * hex digits) and "o" when open. */
+export function markerId(prefix: string, m: MarkStyle): string {
+  const k = PALETTE_COLOURS.indexOf(m.color);
+  return `${prefix}-${SHAPE_CODE[m.shape]}${k >= 0 ? k : m.color.replace("#", "")}${m.filled === false ? "o" : ""}`;
+}
+
+/**
+ * One shape element per marker style a drawing uses, coloured in its definition, so each marker is a bare
+ * <use> with its position only (markup is sent for every point: a chart of 60 packs or 7 curves × 8 markers
+ * would otherwise repeat its fill and stroke on each).
+ */
+export function MarkerDefs({ prefix, marks }: { prefix: string; marks: MarkStyle[] }) {
+  const seen = new Map<string, MarkStyle>();
+  for (const m of marks) seen.set(markerId(prefix, m), m);
   return (
     <defs>
-      {[...new Set(shapes)].map((s) => (
-        <Shape key={s} shape={s} id={`${prefix}-${SHAPE_CODE[s]}`} strokeWidth={s === "cross" ? 2 : 1.5} />
+      {[...seen].map(([id, m]) => (
+        <Shape
+          key={id}
+          shape={m.shape}
+          id={id}
+          fill={m.filled !== false && m.shape !== "cross" ? m.color : "none"}
+          stroke={m.color}
+          strokeWidth={m.shape === "cross" ? 2 : 1.5}
+        />
       ))}
     </defs>
   );
 }
 
-/** A marker at (x %, y px); open shapes are outlined, crosses are always strokes. */
-export function MarkerUse({
-  prefix,
-  shape,
-  xPct,
-  y,
-  color,
-  filled = true,
-}: {
-  prefix: string;
-  shape: MarkerShape;
-  xPct: number;
-  y: number;
-  color: string;
-  filled?: boolean;
-}) {
-  const fill = filled && shape !== "cross" ? color : "none";
-  return <use href={`#${prefix}-${SHAPE_CODE[shape]}`} x={pct(xPct)} y={px(y)} fill={fill} stroke={color} />;
+/** A marker at (x %, y px), of a style listed in the drawing's MarkerDefs. */
+export function MarkerUse({ prefix, mark, xPct, y }: { prefix: string; mark: MarkStyle; xPct: number; y: number }) {
+  return <use href={`#${markerId(prefix, mark)}`} x={pct(xPct)} y={px(y)} />;
 }
 
 /** A small stand-alone marker (legends, tooltips), drawn in its own box. */
@@ -154,7 +162,7 @@ export function MarkerSwatch({
   );
 }
 
-/** One gridline across the plot at `y` pixels, its value in the gutter at the left. */
+/** One gridline across the plot at `y` pixels, its value in the gutter at the left (inside a group with GRID_LOOK). */
 export function YGridRow({
   y,
   value,
@@ -171,47 +179,56 @@ export function YGridRow({
   cells?: number;
 }) {
   return (
-    <g>
-      <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.14} />
-      <text
-        x={-6}
-        y={px(y + 4)}
-        textAnchor="end"
-        fontSize={TICK_FONT}
-        fill="currentColor"
-        fillOpacity={0.8}
-        data-u={unit}
-        data-v={unit ? value : undefined}
-        data-s={unit ? cells : undefined}
-      >
+    <>
+      <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" />
+      <text x={-6} y={px(y + 4)} data-u={unit} data-v={unit ? value : undefined} data-s={unit ? cells : undefined}>
         {label}
       </text>
-    </g>
+    </>
   );
 }
 
+/** What every gridline and y value shares, set once on the grid's group (SVG presentation attributes are
+ * inherited): the rows carry only their positions. */
+export const GRID_LOOK = {
+  strokeOpacity: 0.14,
+  fill: "currentColor",
+  fillOpacity: 0.8,
+  fontSize: TICK_FONT,
+  textAnchor: "end",
+} as const;
+
+/** What the x axis' marks and values share, set once on the axis' group (see GRID_LOOK). */
+export const AXIS_LOOK = {
+  strokeOpacity: 0.5,
+  fill: "currentColor",
+  fillOpacity: 0.8,
+  fontSize: TICK_FONT,
+  textAnchor: "middle",
+} as const;
+
 /** One x tick at `at` percent of the width on the base line at `y` pixels: its mark and its value below. */
 export function XTick({ at, y, label }: { at: number; y: number; label: string }) {
-  const anchor = at < 4 ? "start" : at > 96 ? "end" : "middle";
+  const anchor = at < 4 ? "start" : at > 96 ? "end" : undefined;
   return (
-    <g>
-      <line x1={pct(at)} x2={pct(at)} y1={px(y)} y2={px(y + 4)} stroke="currentColor" strokeOpacity={0.5} />
-      <text x={pct(at)} y={px(y + 16)} fontSize={TICK_FONT} textAnchor={anchor} fill="currentColor" fillOpacity={0.8}>
+    <>
+      <line x1={pct(at)} x2={pct(at)} y1={px(y)} y2={px(y + 4)} stroke="currentColor" />
+      <text x={pct(at)} y={px(y + 16)} textAnchor={anchor}>
         {label}
       </text>
-    </g>
+    </>
   );
 }
 
 /** The x axis' base line across the plot at `y` pixels. */
 export function XBaseLine({ y }: { y: number }) {
-  return <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" strokeOpacity={0.5} />;
+  return <line x1="0%" x2="100%" y1={px(y)} y2={px(y)} stroke="currentColor" />;
 }
 
-/** The x axis' title, centred below its values. */
+/** The x axis' title, centred below its values (full opacity, the title size). */
 export function XTitle({ y, title }: { y: number; title?: string }) {
   return title ? (
-    <text x="50%" y={px(y + 34)} fontSize={TITLE_FONT} textAnchor="middle" fill="currentColor">
+    <text x="50%" y={px(y + 34)} fontSize={TITLE_FONT} fillOpacity={1}>
       {title}
     </text>
   ) : null;
@@ -237,9 +254,11 @@ export function PlainYGrid({
 }) {
   return (
     <g className="chart-grid">
-      {ticks.map((t) => (
-        <YGridRow key={t} y={y(t)} value={t} label={format(t)} unit={unit} cells={cells} />
-      ))}
+      <g {...GRID_LOOK}>
+        {ticks.map((t) => (
+          <YGridRow key={t} y={y(t)} value={t} label={format(t)} unit={unit} cells={cells} />
+        ))}
+      </g>
     </g>
   );
 }
@@ -260,11 +279,13 @@ export function PlainXAxis({
 }) {
   return (
     <g className="chart-axis">
-      <XBaseLine y={y} />
-      {ticks.map((t) => (
-        <XTick key={t} at={x(t)} y={y} label={format(t)} />
-      ))}
-      <XTitle y={y} title={title} />
+      <g {...AXIS_LOOK}>
+        <XBaseLine y={y} />
+        {ticks.map((t) => (
+          <XTick key={t} at={x(t)} y={y} label={format(t)} />
+        ))}
+        <XTitle y={y} title={title} />
+      </g>
     </g>
   );
 }

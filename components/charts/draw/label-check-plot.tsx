@@ -9,7 +9,7 @@ import type { LabelCheckPoint } from "@/lib/open-data/chart-data";
 import { LABEL_CHECK_WORDS, RATING_LABELS, type RatingKind } from "@/lib/figure-words";
 import { MEETS_STYLE, SHORT_STYLE } from "../palette";
 import { XAxis, YGrid } from "./axes";
-import { MarkerDefs, MarkerUse, YTitle, fmtNum, pct, px, yTickCount } from "./kit";
+import { MarkerDefs, MarkerUse, YTitle, fmtNum, markerId, pct, px, yTickCount } from "./kit";
 
 /** Which rating the points carry up the y axis: the sag-limited C estimate or the sustained C measured. */
 export type RatingSeries = RatingKind;
@@ -22,8 +22,9 @@ export const SAG_LIMITED_RATING: RatingSeries = "estimate";
 export const ratingTitle = (r: RatingSeries) => RATING_LABELS[r];
 /** Below the line: the rating falls short of the labelled C. */
 export const fallsShort = (p: LabelCheckPoint) => p.ratingC < p.labelledC;
-const pointStyle = (p: LabelCheckPoint) =>
-  fallsShort(p) ? { ...SHORT_STYLE, filled: false } : { ...MEETS_STYLE, filled: true };
+const MEETS_MARK = { ...MEETS_STYLE, filled: true };
+const SHORT_MARK = { ...SHORT_STYLE, filled: false };
+const pointStyle = (p: LabelCheckPoint) => (fallsShort(p) ? SHORT_MARK : MEETS_MARK);
 
 const TOP = 26;
 const BOTTOM = 44;
@@ -71,7 +72,7 @@ export function LabelCheckPlot({
       role={interactive ? "group" : "img"}
       aria-label={`${ratingTitle(rating)} against labelled C, ${points.length} packs`}
     >
-      <MarkerDefs prefix={prefix} shapes={[MEETS_STYLE.shape, SHORT_STYLE.shape]} />
+      <MarkerDefs prefix={prefix} marks={[MEETS_MARK, SHORT_MARK]} />
       <YTitle y={12}>{LABEL_CHECK_WORDS[rating].axis}</YTitle>
       <YGrid ticks={ys.ticks(yTickCount(bottom - TOP))} y={ys} format={f0} />
       <XAxis ticks={xs.ticks(tickCount)} x={xs} y={bottom} format={f0} title="Labelled continuous C" />
@@ -84,41 +85,29 @@ export function LabelCheckPlot({
         strokeOpacity={0.7}
         strokeDasharray="5 4"
       />
+      {/* The 95 % interval of a pack's median (from 6 results on): a thin bar behind its marker, in its colour —
+          drawn first, in one group per colour, so each bar carries only its position. */}
+      {[MEETS_MARK, SHORT_MARK].map((mark) => (
+        <g key={markerId(prefix, mark)} stroke={mark.color} strokeWidth={1.5}>
+          {points.map((p) =>
+            pointStyle(p) === mark && p.lowC !== undefined && p.highC !== undefined ? (
+              <line
+                key={p.id}
+                x1={pct(xs(p.labelledC))}
+                x2={pct(xs(p.labelledC))}
+                y1={px(ys(p.lowC))}
+                y2={px(ys(p.highC))}
+                data-error-bar=""
+              />
+            ) : null,
+          )}
+        </g>
+      ))}
       {points.map((p, i) => {
-        const s = pointStyle(p);
-        // The 95 % interval of the pack's median (from 6 results on): a thin bar behind the marker.
-        const bar =
-          p.lowC !== undefined && p.highC !== undefined ? (
-            <line
-              x1={pct(xs(p.labelledC))}
-              x2={pct(xs(p.labelledC))}
-              y1={px(ys(p.lowC))}
-              y2={px(ys(p.highC))}
-              stroke={s.color}
-              strokeWidth={1.5}
-              data-error-bar=""
-            />
-          ) : null;
-        const mark = (
-          <MarkerUse
-            prefix={prefix}
-            shape={s.shape}
-            xPct={xs(p.labelledC)}
-            y={ys(p.ratingC)}
-            color={s.color}
-            filled={s.filled}
-          />
-        );
-        if (!interactive)
-          return (
-            <Fragment key={p.id}>
-              {bar}
-              {mark}
-            </Fragment>
-          );
+        const mark = <MarkerUse prefix={prefix} mark={pointStyle(p)} xPct={xs(p.labelledC)} y={ys(p.ratingC)} />;
+        if (!interactive) return <Fragment key={p.id}>{mark}</Fragment>;
         return (
           <a key={p.id} href={`/packs/${p.id}`} aria-label={p.label} aria-describedby={`${prefix}-r${i}`}>
-            {bar}
             {mark}
           </a>
         );

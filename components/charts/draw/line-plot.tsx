@@ -121,7 +121,7 @@ export function LinePlot({
     : { role: "img", "aria-label": `${yLabel} against ${xLabel}, ${series.length} series.` };
   return (
     <svg width={width} height={height} x={left} y={top} className="chart-svg" overflow="visible" {...a11y}>
-      <MarkerDefs prefix={prefix} shapes={styles.map((s) => s.shape)} />
+      <MarkerDefs prefix={prefix} marks={styles} />
       <YTitle y={12}>
         {yLabel}
         {yUnit ? (
@@ -140,17 +140,23 @@ export function LinePlot({
         </g>
       ))}
       <XAxis ticks={xTicks} x={x} y={bottom} format={(v) => fmtNum(v, xDigits)} title={xLabel} />
-      <svg width="100%" height={height} viewBox={`0 0 1000 ${height}`} preserveAspectRatio="none" overflow="visible">
+      <svg
+        width="100%"
+        height={height}
+        viewBox={`0 0 1000 ${height}`}
+        preserveAspectRatio="none"
+        overflow="visible"
+        fill="none"
+        strokeWidth={2}
+        strokeLinejoin="round"
+      >
         {series.map((s, i) =>
           s.mode === "points" || s.points.length === 0 ? null : (
             <path
               key={s.id}
               d={linePath(s.points.map((p) => ({ xPct: x(p.x), y: y(p.y) })))}
-              fill="none"
               stroke={styles[i]?.color}
-              strokeWidth={2}
               strokeDasharray={styles[i]?.dash}
-              strokeLinejoin="round"
               vectorEffect="non-scaling-stroke"
             />
           ),
@@ -163,9 +169,7 @@ export function LinePlot({
         return (
           <g key={s.id}>
             {s.points.map((p, k) =>
-              k % every === 0 ? (
-                <MarkerUse key={k} prefix={prefix} shape={st.shape} xPct={x(p.x)} y={y(p.y)} color={st.color} />
-              ) : null,
+              k % every === 0 ? <MarkerUse key={k} prefix={prefix} mark={st} xPct={x(p.x)} y={y(p.y)} /> : null,
             )}
           </g>
         );

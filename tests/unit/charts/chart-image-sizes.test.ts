@@ -75,10 +75,30 @@ function frame(svg: string) {
   return { w: w ?? 0, h: h ?? 0, k: width / (w ?? 1) };
 }
 
+/** The font size each text is drawn at, by the text's offset in the markup: its own font-size or the nearest
+ * enclosing element's (SVG inherits font-size, and a drawing sets it once on a group of tick values). */
+function fontSizes(svg: string): Map<number, number> {
+  const stack: (number | undefined)[] = [];
+  const sizes = new Map<number, number>();
+  for (const m of svg.matchAll(/<(\/?)([a-zA-Z]+)([^>]*?)(\/?)>/g)) {
+    const [, closing, name, attrs = "", selfClosing] = m;
+    if (closing) {
+      stack.pop();
+      continue;
+    }
+    const own = /font-size="([\d.]+)"/.exec(attrs)?.[1];
+    const size = own !== undefined ? Number(own) : stack[stack.length - 1];
+    if (name === "text") sizes.set(m.index, size ?? Number.NaN);
+    if (!selfClosing) stack.push(size);
+  }
+  return sizes;
+}
+
 /** Each text alone in its place: the other texts and every shape removed, the nesting kept. */
 function measureTexts(svg: string): Measured[] {
   const shapes = /<(path|circle|rect|line|use)\b[^>]*>(<\/\1>)?/g;
   const texts = [...svg.matchAll(TEXT)];
+  const sizes = fontSizes(svg);
   return texts
     .map((m, i) => {
       let k = -1;
@@ -89,7 +109,7 @@ function measureTexts(svg: string): Measured[] {
       if (!box) throw new Error(`nothing drawn for ${m[0]}`);
       const f = frame(svg);
       // getBBox answers in the picture's own units (its viewBox); the font size is turned into pixels.
-      const fontSize = Number(/font-size="([\d.]+)"/.exec(m[1] ?? "")?.[1]) * f.k;
+      const fontSize = (sizes.get(m.index) ?? Number.NaN) * f.k;
       return { text: m[2] ?? "", fontSize, x0: box.x, y0: box.y, x1: box.x + box.width, y1: box.y + box.height };
     })
     .filter((t) => t.text.trim() !== "");
@@ -139,7 +159,7 @@ describe("chart SVG at the asked size", () => {
 
   it("scales markers and type with the width (common practice: keep marks readable on small screens)", () => {
     // The layout is drawn at a design size and scaled by the viewBox: one factor for type, markers and strokes.
-    const marker = (svg: string) => Number(/<circle r="([\d.]+)" id="img-c"/.exec(svg)?.[1]) * frame(svg).k;
+    const marker = (svg: string) => Number(/<circle r="([\d.]+)" id="img-c\d"/.exec(svg)?.[1]) * frame(svg).k;
     const title = (svg: string) => Number(/font-size="([\d.]+)" font-weight="700"/.exec(svg)?.[1]) * frame(svg).k;
     const withMeets = {
       ...(charts["label-check"] as ChartData),

@@ -15,11 +15,16 @@ const points: LabelCheckPoint[] = [
   { id: "c-850", label: "Cedar 850", labelledC: 45, ratingC: 45, n: 2 },
 ];
 
+/** Every error bar, with the stroke of the group that draws it (bars are grouped by colour). */
 function bars(html: string) {
-  return [...html.matchAll(/<line[^>]*data-error-bar[^>]*>/g)].map((m) => {
-    const attr = (name: string) => new RegExp(`${name}="([^"]*)"`).exec(m[0])?.[1] ?? "";
-    return { y1: parseFloat(attr("y1")), y2: parseFloat(attr("y2")), stroke: attr("stroke"), x: attr("x1") };
-  });
+  return [
+    ...html.matchAll(/<g stroke="([^"]+)" stroke-width="1.5">((?:<line[^>]*data-error-bar[^>]*><\/line>)*)<\/g>/g),
+  ].flatMap((g) =>
+    [...(g[2] ?? "").matchAll(/<line[^>]*>/g)].map((m) => {
+      const attr = (name: string) => new RegExp(`${name}="([^"]*)"`).exec(m[0])?.[1] ?? "";
+      return { y1: parseFloat(attr("y1")), y2: parseFloat(attr("y2")), stroke: g[1] ?? "", x: attr("x1") };
+    }),
+  );
 }
 
 describe("label check error bars", () => {
@@ -27,6 +32,7 @@ describe("label check error bars", () => {
     const html = renderToStaticMarkup(<LabelCheckPlot prefix="t" points={points} rating="estimate" />);
     const found = bars(html);
     expect(found).toHaveLength(2);
+    expect(html.match(/data-error-bar/g)).toHaveLength(2);
     for (const b of found) expect(b.y1).toBeGreaterThan(b.y2); // SVG y grows downwards: the low end is lower
     expect(found[0]?.stroke).toBe(MEETS_STYLE.color);
     expect(found[1]?.stroke).toBe(SHORT_STYLE.color);

@@ -42,18 +42,21 @@ const SHAPES: Record<string, string> = {
   d: "diamond",
   x: "cross",
 };
-/** Every marker in drawing order: the shape it uses, its fill and its stroke. */
-const markers = (markup: string) =>
-  [...markup.matchAll(/<use href="#[a-z-]+-([cstvdx])"[^>]*?fill="([^"]+)" stroke="([^"]+)"/g)].map(
-    (m) => `${SHAPES[m[1] ?? ""]} ${m[2]} ${m[3]}`,
+/** Every marker in drawing order: the shape it uses, its fill and its stroke (a marker is a <use> of a shape
+ * defined, coloured, once per style in the drawing's <defs>). */
+const markers = (markup: string) => {
+  const defs = new Map(
+    [...markup.matchAll(/ id="([^"]+)" fill="([^"]+)" stroke="([^"]+)"/g)].map((m) => [m[1], `${m[2]} ${m[3]}`]),
   );
-/** Every line: its stroke and dash pattern. */
+  return [...markup.matchAll(/<use href="#([^"]+-([cstvdx])(?:\d|[0-9A-F]{6})o?)"/g)].map(
+    (m) => `${SHAPES[m[2] ?? ""]} ${defs.get(m[1] ?? "") ?? "undefined style"}`,
+  );
+};
+/** Every line: its stroke and dash pattern (fill, width and join are set once on the lines' canvas). */
 const lines = (markup: string) =>
-  [
-    ...markup.matchAll(
-      /<path d="M[^"]*" fill="none" stroke="([^"]+)"(?: stroke-width="2")?(?: stroke-dasharray="([^"]+)")?/g,
-    ),
-  ].map((m) => `${m[1]} ${m[2] ?? "solid"}`);
+  [...markup.matchAll(/<path d="M[^"]*" stroke="([^"]+)"(?: stroke-dasharray="([^"]+)")? vector-effect/g)].map(
+    (m) => `${m[1]} ${m[2] ?? "solid"}`,
+  );
 
 describe("one chart drawing: the page and the image encode the data alike", () => {
   it("label check: each pack has the same marker, fill and colour on the page and in the image", () => {

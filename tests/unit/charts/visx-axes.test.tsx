@@ -29,7 +29,9 @@ describe("visx axes draw what the plain placement draws", () => {
     expect(inside(visx).body).toBe(inside(plain).body);
     expect(inside(visx).classes).toContain("chart-axis");
     // The first tick sits at 1 % (anchored at its start), the last at 99 % (anchored at its end).
-    expect(inside(visx).body).toMatch(/<text x="1%" y="272" font-size="11" text-anchor="start"[^>]*>0<\/text>/);
+    expect(inside(visx).body).toMatch(/<text x="1%" y="272" text-anchor="start">0<\/text>/);
+    // The values' size, colour and the middle anchor are set once on the axis' inner group and inherited.
+    expect(inside(visx).body).toMatch(/^<g [^>]*font-size="11" text-anchor="middle">/);
     expect(inside(visx).body).toMatch(/<text x="99%"[^>]*text-anchor="end"[^>]*>2,000<\/text>/);
   });
 
