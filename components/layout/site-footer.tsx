@@ -1,3 +1,5 @@
+"use client";
+// A client component although it has no state, for the reason given in site-header.tsx.
 import { ATTRIBUTION, DATA_LICENCE_LABEL, DATA_LICENCE_URL } from "@/lib/open-data/licence";
 
 export function SiteFooter() {

@@ -210,6 +210,7 @@ async function main() {
     const rows: Record<string, string | number>[] = [];
     let worst = { p95: 0, name: "" };
     let homeKb = NaN;
+    let packPageKb = 0;
     for (const r of await routes()) {
       const cold: number[] = [];
       const warm: number[] = [];
@@ -218,6 +219,7 @@ async function main() {
         if (x.status >= 400) log(`bench:scale: ${u} answered ${x.status}`);
         cold.push(x.ms);
         if (r.name === "/") homeKb = x.bytes / 1024;
+        if (r.name === "/packs/<slug>") packPageKb = Math.max(packPageKb, x.bytes / 1024);
       }
       for (const u of r.urls) warm.push((await timed(`http://127.0.0.1:${PORT_A}${u}`)).ms);
       const p95 = pct(cold, 95);
@@ -245,7 +247,8 @@ async function main() {
     console.table(rows);
     if (fresh.note) console.log(`cross-instance: ${fresh.note}`);
     console.log(
-      "targets: every public route p95 ≤ 100 ms (/api/v1/packs?q ≤ 50 ms), home HTML ≤ 60 KB, RSS ≤ 400 MB, " +
+      `largest pack page measured: ${packPageKb.toFixed(1)} KB of HTML (issue 15: ≤ 60 KB)\n` +
+        "targets: every public route p95 ≤ 100 ms (/api/v1/packs?q ≤ 50 ms), home HTML ≤ 60 KB, RSS ≤ 400 MB, " +
         `cross-instance fresh ≤ 2 s, whole bench ≤ 12 min (this run: ${((Date.now() - started) / 60_000).toFixed(1)} min)`,
     );
     console.log(

@@ -28,6 +28,8 @@ const TOP = 26;
 const BOTTOM = 44;
 /** Readings across the chart for its table and the keyboard: this many intervals. */
 export const READING_STEPS = 15;
+/** About this many markers along each line (with its colour and dash, the marker tells series apart). */
+const MARKERS_PER_LINE = 6;
 
 /** The scales of a line chart: x in percent of the plot width, y in pixels. Shared with its table. */
 export function lineScales(series: LineSeries[], height: number, opts: LineOptions = {}) {
@@ -165,7 +167,7 @@ export function LinePlot({
       {series.map((s, i) => {
         const st = styles[i];
         if (!st) return null;
-        const every = s.mode === "points" ? 1 : Math.max(1, Math.ceil(s.points.length / 8));
+        const every = s.mode === "points" ? 1 : Math.max(1, Math.ceil(s.points.length / MARKERS_PER_LINE));
         return (
           <g key={s.id}>
             {s.points.map((p, k) =>

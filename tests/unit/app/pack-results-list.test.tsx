@@ -31,4 +31,15 @@ describe("a pack page's results list", () => {
     expect(ids(html)).toEqual([7, 4, 2]);
     expect(html).not.toContain("Showing");
   });
+
+  it("gives each result its method in one line, temperatures marked for the reader's units", () => {
+    const r = { ...row(3), ambientTemperatureC: 21.4, packStartTemperatureC: 22, stopTemperatureC: 60 };
+    const html = renderToStaticMarkup(<ResultsList results={[r]} cells={4} packSlug="p" />);
+    const line = /<p[^>]*data-testid="method-line"[^>]*>(.*?)<\/p>/.exec(html)?.[1] ?? "";
+    const text = line.replace(/<[^>]+>/g, "").replace(/&#x27;/g, "'");
+    expect(text).toContain("Method: 21.4 °C ambient, pack at 22.0 °C;");
+    expect(text).toContain(`to ${r.cutoffVPerCell.toFixed(2)} V per cell, stop at 60 °C;`);
+    expect(text).toMatch(/resistance: [^;]+; \d+ cycles? before the test\./);
+    expect(line.match(/data-u="temp"/g)).toHaveLength(3);
+  });
 });

@@ -52,10 +52,7 @@ export default async function PackPage(props: Props) {
         </div>
         <div className="flex gap-2">
           <PackEmailsSlot packId={pack.id} packSlug={pack.slug} packTitle={title} />
-          <a
-            href={`/compare?packs=${pack.slug}`}
-            className="rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
-          >
+          <a href={`/compare?packs=${pack.slug}`} className="btn-line">
             Compare…
           </a>
         </div>

@@ -1,6 +1,7 @@
 import { LineFigure } from "@/components/charts/line-figure";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
+import { Qty, UnitSymbol } from "@/components/quantity";
 import type { CycleSeries, OnePackSeries, PackAgeing } from "@/lib/pack-summary";
 
 const pct = (x: number) => Math.round(x * 1000) / 10;
@@ -82,6 +83,52 @@ function OnePack({ s }: { s: OnePackSeries }) {
   );
 }
 
+/** Fewer distinct cycle counts than this, and the results are listed instead of drawn: a chart of two cycle counts
+ * only joins two points, and its fitted line is that join. */
+const MIN_CYCLE_COUNTS_FOR_CHART = 3;
+
+/** The results of the series as a table, for a series of too few cycle counts to draw. */
+function AcrossResultsTable({ c, cells }: { c: CycleSeries; cells: number }) {
+  const rows = [...c.points].sort((a, b) => a.cycles - b.cycles || a.resultId - b.resultId);
+  return (
+    <div className="-mx-4 overflow-x-auto px-4">
+      <table className="figs" data-testid="ageing-across-table">
+        <caption className="sr-only">Results at different cycle counts</caption>
+        <thead>
+          <tr>
+            <th scope="col">Result</th>
+            <th scope="col">Cycles before the test (stated)</th>
+            <th scope="col">Delivered ÷ rated capacity, %</th>
+            <th scope="col">
+              DC resistance, <UnitSymbol q="r" cells={cells} />
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((p) => (
+            <tr key={p.resultId}>
+              <th scope="row">
+                <a href={`/results/${p.resultId}`}>#{p.resultId}</a>
+              </th>
+              <td className="num">{p.cycles}</td>
+              <td className="num">{p.capacityMah === null ? "—" : fmt(pct(p.capacityMah / c.ratedCapacityMah), 1)}</td>
+              <td className="num">
+                <Qty
+                  q="r"
+                  v={p.dcResistanceMohm === null ? null : p.dcResistanceMohm / cells}
+                  digits={2}
+                  cells={cells}
+                  bare
+                />
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
 /** Results at different cycle counts: separate tests, possibly of different packs — said plainly. */
 function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
   const retained = c.points.flatMap((p) =>
@@ -92,58 +139,66 @@ function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
     p.dcResistanceMohm === null ? [] : [{ x: p.cycles, y: Math.round((p.dcResistanceMohm / cells) * 1000) / 1000 }],
   );
   const t = c.trend;
+  const drawn = new Set(xs).size >= MIN_CYCLE_COUNTS_FOR_CHART;
   return (
     <div className="space-y-3" data-testid="ageing-across-results">
       <h3 className="text-base">Results at different cycle counts</h3>
       <p className="text-sm">
-        Series: {c.label} (results alike except for pack age). <strong>Each point is a separate test</strong>, possibly
-        of a different physical pack of this model, at the cycle count its tester stated — not one pack&apos;s ageing.
-        The line through them is a hint, not a measurement
+        Series: {c.label} (results alike except for pack age).{" "}
+        <strong>Each {drawn ? "point" : "row"} is a separate test</strong>, possibly of a different physical pack of
+        this model, at the cycle count its tester stated — not one pack&apos;s ageing.{" "}
+        {drawn
+          ? "The line through them is a hint, not a measurement"
+          : "A straight line through them is a hint at most"}
         {t
           ? ` (straight-line fit, ${fmt(t.slopePerCycle * 100, 3)} % per cycle${t.r2 !== null ? `, r² ${fmt(t.r2, 2)}` : ""})`
           : ""}
-        .{" "}
+        .{drawn ? " " : ` Only ${new Set(xs).size} cycle counts so far, so they are listed rather than drawn. `}
         <span className="muted">
           {projectionWords(c.projection.cyclesTo80, c.projection.extrapolated, c.projection.projectionNote)}
         </span>
       </p>
-      <div className="grid gap-4 lg:grid-cols-2">
-        <LineFigure
-          id="pack-kept"
-          title="Capacity of results at different cycle counts"
-          xLabel="Cycles before the test (stated)"
-          yLabel="Delivered ÷ rated capacity, %"
-          xDigits={0}
-          yDigits={1}
-          tableCaption="Capacity of results at different cycle counts"
-          refLines={[{ y: 80, label: "80 %" }]}
-          series={[
-            { id: "retained", label: "one result", points: retained, mode: "points" },
-            ...(t
-              ? [
-                  {
-                    id: "trend",
-                    label: "fitted line",
-                    points: trendLine(t, Math.min(...xs), Math.max(...xs), c.projection.cyclesTo80),
-                    styleIndex: 1,
-                  },
-                ]
-              : []),
-          ]}
-        />
-        <LineFigure
-          id="pack-dcr"
-          title="DC resistance of results at different cycle counts"
-          xLabel="Cycles before the test (stated)"
-          yLabel="DC resistance"
-          yUnit="r"
-          cells={cells}
-          xDigits={0}
-          yDigits={2}
-          tableCaption="DC resistance of results at different cycle counts"
-          series={[{ id: "r", label: "one result", points: resistance, mode: "points", styleIndex: 2 }]}
-        />
-      </div>
+      {drawn ? (
+        <div className="grid gap-4 lg:grid-cols-2">
+          <LineFigure
+            id="pack-kept"
+            title="Capacity of results at different cycle counts"
+            xLabel="Cycles before the test (stated)"
+            yLabel="Delivered ÷ rated capacity, %"
+            xDigits={0}
+            yDigits={1}
+            tableCaption="Capacity of results at different cycle counts"
+            refLines={[{ y: 80, label: "80 %" }]}
+            series={[
+              { id: "retained", label: "one result", points: retained, mode: "points" },
+              ...(t
+                ? [
+                    {
+                      id: "trend",
+                      label: "fitted line",
+                      points: trendLine(t, Math.min(...xs), Math.max(...xs), c.projection.cyclesTo80),
+                      styleIndex: 1,
+                    },
+                  ]
+                : []),
+            ]}
+          />
+          <LineFigure
+            id="pack-dcr"
+            title="DC resistance of results at different cycle counts"
+            xLabel="Cycles before the test (stated)"
+            yLabel="DC resistance"
+            yUnit="r"
+            cells={cells}
+            xDigits={0}
+            yDigits={2}
+            tableCaption="DC resistance of results at different cycle counts"
+            series={[{ id: "r", label: "one result", points: resistance, mode: "points", styleIndex: 2 }]}
+          />
+        </div>
+      ) : (
+        <AcrossResultsTable c={c} cells={cells} />
+      )}
     </div>
   );
 }

@@ -36,7 +36,7 @@ export function PackEmailsSlot({
     <a
       href={`/sign-in?${new URLSearchParams({ callbackUrl: `/packs/${packSlug}` })}`}
       data-slot="pack-emails"
-      className="inline-flex items-center gap-1 rounded-md border border-ink/20 px-3 py-1.5 text-sm no-underline hover:bg-paper-sunk hover:no-underline dark:border-night-line dark:hover:bg-night-sunk"
+      className="btn-line"
       aria-label={`E-mail me new results for ${packTitle}: sign in first`}
     >
       E-mail me new results for this pack

@@ -1,11 +1,11 @@
-import { MethodCard } from "@/components/method-card";
+import { MethodLine } from "@/components/method-card";
 import { Qty } from "@/components/quantity";
 import { PACK_PAGE_MAX_RESULTS, shownOf } from "@/lib/bounded-lists";
 import { fmt, fmtC, fmtDate, fmtRatio } from "@/lib/format";
 import type { PublicResultRow } from "@/lib/pack-summary";
 
 /**
- * The pack's published results, newest first, each with its method card: at most PACK_PAGE_MAX_RESULTS, so the page
+ * The pack's published results, newest first, each with its method in one line (the full card is on its page): at most PACK_PAGE_MAX_RESULTS, so the page
  * keeps its size however often a pack is tested; the rest are a link away (the API and the download list them all).
  */
 export function ResultsList({
@@ -54,12 +54,7 @@ export function ResultsList({
               <Qty q="r" v={r.dcResistanceMohm === null ? null : r.dcResistanceMohm / cells} digits={2} cells={cells} />
               {r.retention ? ` · ${r.retention.points.length} cycles in one log` : ""}
             </p>
-            <details>
-              <summary className="cursor-pointer text-sm">Method card</summary>
-              <div className="pt-2">
-                <MethodCard m={r} compact />
-              </div>
-            </details>
+            <MethodLine m={r} />
           </li>
         ))}
       </ol>
