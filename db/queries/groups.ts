@@ -2,13 +2,14 @@
 // comes from the summary tables (db/schema/summaries.ts), which PostgreSQL's triggers on `results` keep equal to
 // the from-scratch aggregate of approved results, so no request aggregates results. Their medians are
 // percentile_cont (linear interpolation between order statistics, the same "type 7" quantile as summarise() in
-// lib/analysis — tests/integration/summaries.test.ts and groups-queries.test.ts check they agree). The summaries
-// count approved results whatever the pack's or maker's status, so each read joins packs and makers and keeps the
-// counting rule's catalogue half (isCatalogueActive).
+// lib/analysis — tests/integration/summaries.test.ts and groups-queries.test.ts check they agree). The per-pack
+// summaries count approved results whatever the pack's or maker's status, so each read of them joins packs and
+// makers and keeps the counting rule's catalogue half (isCatalogueActive); group_summaries counts only active packs
+// of active makers (its triggers follow status changes), so the group list reads it as it is.
 import "server-only";
 import { and, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { makers, packGroupSummaries, packs, results } from "@/db/schema";
+import { groupSummaries, makers, packGroupSummaries, packs, results } from "@/db/schema";
 import { medianInterval } from "@/lib/analysis/uncertainty";
 import type { AnyPgColumn } from "drizzle-orm/pg-core";
 import { describeStoredGroup, type DescribedGroup } from "@/lib/like-for-like";
@@ -25,27 +26,18 @@ const asReal = (column: AnyPgColumn) => sql<number | null>`${column}::real`;
 
 export type GroupSummary = DescribedGroup & { resultCount: number; packCount: number };
 
-/** Groups that hold published results, the most packs first. Labels come from a representative method card. */
+/**
+ * Groups that hold published results, the most packs first: one row per group from group_summaries (kept by the
+ * triggers, counting active packs of active makers only). Labels come from a representative method card, the
+ * group's oldest published result.
+ */
 export async function listPublicGroups(): Promise<GroupSummary[]> {
-  const counts = db
-    .select({
-      key: sql<string>`${s.groupKey}`.as("count_key"),
-      resultCount: sql<number>`sum(${s.resultCount})::int`.as("result_count"),
-      packCount: sql<number>`count(*)::int`.as("pack_count"),
-      firstId: sql<number>`min(${s.firstResultId})`.as("first_id"),
-    })
-    .from(s)
-    .innerJoin(packs, packOfSummary)
-    .innerJoin(makers, makerOfPack)
-    .where(isCatalogueActive)
-    .groupBy(s.groupKey)
-    .as("counts");
-  // The representative card is the group's oldest published result (its key is computed from its card).
+  const g = groupSummaries;
   const rows = await db
     .select({
-      key: counts.key,
-      resultCount: counts.resultCount,
-      packCount: counts.packCount,
+      key: g.groupKey,
+      resultCount: g.resultCount,
+      packCount: g.packCount,
       resistanceMethod: results.resistanceMethod,
       ambientTemperatureC: results.ambientTemperatureC,
       cutoffVPerCell: results.cutoffVPerCell,
@@ -53,8 +45,8 @@ export async function listPublicGroups(): Promise<GroupSummary[]> {
       cyclesBeforeTest: results.cyclesBeforeTest,
       ratedCapacityMah: packs.ratedCapacityMah,
     })
-    .from(counts)
-    .innerJoin(results, eq(results.id, counts.firstId))
+    .from(g)
+    .innerJoin(results, eq(results.id, g.firstResultId))
     .innerJoin(packs, packOfResult);
   return rows
     .map((r) => ({

@@ -6,13 +6,14 @@ import "server-only";
 import { and, asc, desc, eq, gte, lte, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { db, type Executor } from "@/db";
 import type { PgSelect } from "drizzle-orm/pg-core";
-import { makers, packGroupSummaries, packs, packSummaries } from "@/db/schema";
+import { groupSummaries, makers, packGroupSummaries, packs, packSummaries } from "@/db/schema";
 import type { PackRow } from "@/lib/catalogue";
 import { pageCountOf, rankBySearch, type PackPage } from "@/lib/pack-query";
 import type { PackParams, PackSortKey } from "@/lib/pack-query-params";
 import { packColumns } from "./packs";
 import { isCatalogueActive, makerOfPack } from "./published";
 import { searchCondition, searchTx } from "./pack-search";
+import { searchWords } from "@/lib/pack-search";
 
 /** What filters the catalogue (the table's state without its order and page). */
 export type PackFilterParams = Omit<PackParams, "sort" | "dir" | "page" | "size">;
@@ -108,6 +109,33 @@ export async function listMatchingPackIds(p: PackFilterParams): Promise<number[]
   });
 }
 
+/** The filters besides the group; with none of them set, a group's packs are group_summaries' count. */
+const OTHER_FILTERS = ["cells", "minMah", "maxMah", "minC", "maxC", "minG", "maxG", "connector", "maker"] as const;
+
+/**
+ * How many packs match: a group's own pack count (one row of group_summaries, which counts the packs of active
+ * makers with published results in the group, as the in-group join does) when the group is the only filter,
+ * else counted over the catalogue.
+ */
+async function countMatching(ex: Executor, p: PackFilterParams, where: SQL | undefined): Promise<number> {
+  if (p.group !== null && searchWords(p.q).length === 0 && OTHER_FILTERS.every((k) => p[k] === null)) {
+    const [row] = await ex
+      .select({ n: groupSummaries.packCount })
+      .from(groupSummaries)
+      .where(eq(groupSummaries.groupKey, p.group));
+    return row?.n ?? 0;
+  }
+  const [counted] = await joined(
+    ex
+      .select({ n: sql<number>`count(*)`.mapWith(Number) })
+      .from(packs)
+      .$dynamic(),
+    p.group,
+    "in-group",
+  ).where(where);
+  return counted?.n ?? 0;
+}
+
 /** One page of the matching packs and how many match. A page past the last is empty (the API answers 422). */
 export async function queryPackPage(p: PackParams): Promise<PackPage> {
   return searchTx(p.q, async (tx) => {
@@ -127,15 +155,7 @@ export async function queryPackPage(p: PackParams): Promise<PackPage> {
         .orderBy(...catalogueOrder);
       return done(rankBySearch(found, p.q).slice(from, from + p.size), found.length);
     }
-    const [counted] = await joined(
-      tx
-        .select({ n: sql<number>`count(*)`.mapWith(Number) })
-        .from(packs)
-        .$dynamic(),
-      p.group,
-      "in-group",
-    ).where(where);
-    const total = counted?.n ?? 0;
+    const total = await countMatching(tx, p, where);
     if (from >= total) return done([], total);
     const rows = await rowsFrom(tx, p.group)
       .where(where)

@@ -2,6 +2,7 @@
 // state, plus bench profiles (a contributor's equipment) and the review audit log.
 import { sql } from "drizzle-orm";
 import {
+  boolean,
   check,
   date,
   index,
@@ -14,7 +15,7 @@ import {
   timestamp,
   uniqueIndex,
 } from "drizzle-orm/pg-core";
-import type { ColumnMapping, CurvePoint, Figures } from "@/lib/analysis";
+import type { ColumnMapping, CurvePoint, Figures, RetentionSeries } from "@/lib/analysis";
 import type { CurveFingerprint } from "@/lib/analysis/curve-fingerprint";
 import { users } from "./auth";
 import { packs } from "./catalogue";
@@ -111,6 +112,21 @@ export const results = pgTable(
     // Computed by lib/analysis; the headline figures are also columns so queries can rank and filter.
     figures: jsonb("figures").$type<Figures>().notNull(),
     curve: jsonb("curve").$type<CurvePoint[]>().notNull(),
+    // The few parts of `figures` every result list reads, kept by PostgreSQL as stored generated columns (issue
+    // 18): read as expressions on `figures`, each one unpacked the whole jsonb from TOAST again, four times per row
+    // (at 1,000,000 results ~80 % of a pack page's result query). Results analysed before issue 12 have no
+    // reachedCutoff: a time to cut-off then stood for it.
+    retention: jsonb("retention")
+      .$type<RetentionSeries>()
+      .generatedAlwaysAs(sql`"figures" -> 'retention'`),
+    reachedCutoff: boolean("reached_cutoff")
+      .notNull()
+      .generatedAlwaysAs(
+        sql`coalesce(("figures" ->> 'reachedCutoff')::boolean, ("figures" ->> 'timeToCutoffS') is not null)`,
+      ),
+    passedStopTemperature: boolean("passed_stop_temperature")
+      .notNull()
+      .generatedAlwaysAs(sql`("figures" ->> 'timeToStopTemperatureS') is not null`),
     // The curve's normalised shape (lib/analysis/curve-fingerprint.ts) and its one-number key, to find
     // another result whose log is the same samples scaled or shifted. Null until computed.
     curveFingerprint: jsonb("curve_fingerprint").$type<CurveFingerprint>(),

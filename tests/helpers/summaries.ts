@@ -1,10 +1,11 @@
 // The summary tables (db/schema/summaries.ts) against their definition: the views pack_group_summaries_fresh and
-// pack_summaries_fresh aggregate the approved results from scratch (migration 0009). A row in one and not the
-// other, either way round, is a stale summary.
+// pack_summaries_fresh aggregate the approved results from scratch (migration 0009), group_summaries_fresh those of
+// active packs of active makers per group (migration 0013). A row in one and not the other, either way round, is a
+// stale summary.
 import { sql } from "drizzle-orm";
 import { db, type Executor } from "@/db";
 
-export type StaleRow = { side: string; pack_id: number; group_key: string | null; result_count: number };
+export type StaleRow = { side: string; pack_id: number | null; group_key: string | null; result_count: number };
 
 /** Every row on which a summary table and its from-scratch view disagree (empty when they are equal). */
 export async function staleSummaries(exec: Executor = db): Promise<StaleRow[]> {
@@ -20,6 +21,12 @@ export async function staleSummaries(exec: Executor = db): Promise<StaleRow[]> {
     union all
     select 'pack_summaries_fresh only', pack_id, null, result_count
       from (select * from pack_summaries_fresh except select * from pack_summaries) d
+    union all
+    select 'group_summaries only', null, group_key, result_count
+      from (select * from group_summaries except select * from group_summaries_fresh) e
+    union all
+    select 'group_summaries_fresh only', null, group_key, result_count
+      from (select * from group_summaries_fresh except select * from group_summaries) f
     order by 2, 3, 1`);
   return r.rows;
 }
@@ -28,7 +35,8 @@ export async function staleSummaries(exec: Executor = db): Promise<StaleRow[]> {
 export async function summarySnapshot(exec: Executor = db) {
   const groups = await exec.execute(sql`select * from pack_group_summaries order by pack_id, group_key`);
   const packs = await exec.execute(sql`select * from pack_summaries order by pack_id`);
-  return { groups: groups.rows, packs: packs.rows };
+  const perGroup = await exec.execute(sql`select * from group_summaries order by group_key`);
+  return { groups: groups.rows, packs: packs.rows, perGroup: perGroup.rows };
 }
 
 export type PackGroupRow = {

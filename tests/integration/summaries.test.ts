@@ -4,7 +4,8 @@
 // label edit (ratios rescaled), a pack merge (results move), a maker merge, a deleted result, a bulk insert. Also:
 // a rolled-back transaction leaves them as they were, and two approvals on one pack committed from two
 // connections at once (and two sent through writeDecision at once) are both counted (the per-pack advisory lock
-// in migration 0009).
+// in migration 0009). Every check covers group_summaries too (tests/helpers/summaries.ts; its own status-change
+// cases are in group-summaries.test.ts).
 import { beforeAll, describe, expect, it } from "vitest";
 import { eq, inArray, sql } from "drizzle-orm";
 import { Client } from "pg";
@@ -286,7 +287,8 @@ describe("the group reads", () => {
       await db.execute(sql`alter table results enable trigger results_summaries_insert`);
     }
     expect((await listPublicGroups()).map((g) => g.key)).not.toContain(cycled);
-    expect(await staleSummaries()).toHaveLength(2); // the missing pack row and pack-group row
+    // The missing pack row, pack-group row and group row (the group is new).
+    expect(await staleSummaries()).toHaveLength(3);
     // The refresh function the triggers call mends it, as a manual repair would.
     await db.execute(sql`select sagline_refresh_summaries(array[${pack.id}]::int[])`);
     expect(await staleSummaries()).toEqual([]);
