@@ -10,6 +10,9 @@ export const HOME_RANKING_MAX_MAKERS = 12;
  * Ten keeps a much-tested pack's page within its size (≈ 1.2 KB of HTML per listed result with its method card). */
 export const PACK_PAGE_MAX_RESULTS = 10;
 
+/** Like-for-like groups in a pack page's figures table, most results first; all of them at /packs/<slug>/groups. */
+export const PACK_PAGE_MAX_GROUPS = 6;
+
 /** Points of a saved chart's label check (the chart builder, its views, embeds and images). */
 export const CHART_MAX_PACKS = 200;
 

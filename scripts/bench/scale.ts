@@ -72,6 +72,24 @@ async function timed(url: string): Promise<{ ms: number; status: number; bytes: 
   const body = await res.arrayBuffer();
   return { ms: performance.now() - t, status: res.status, bytes: body.byteLength };
 }
+/** A page's HTML cut at each <section> (and its scripts), with the KB of each part. */
+async function sectionSizes(url: string): Promise<{ name: string; kb: number }[]> {
+  const html = await (await fetch(url)).text();
+  const scripts = [...html.matchAll(/<script[^>]*>[\s\S]*?<\/script>/g)].reduce((n, m) => n + m[0].length, 0);
+  const body = html.replace(/<script[^>]*>[\s\S]*?<\/script>/g, "");
+  const parts = body.split(/(?=<section)/);
+  return [
+    ...parts.map((part, i) => ({
+      name:
+        i === 0
+          ? "head and header"
+          : (/<h2[^>]*>([\s\S]*?)<\/h2>/.exec(part)?.[1] ?? "section").replace(/<[^>]+>/g, ""),
+      kb: part.length / 1024,
+    })),
+    { name: "scripts", kb: scripts / 1024 },
+  ];
+}
+
 const pct = (xs: number[], p: number) => {
   const s = xs.slice().sort((a, b) => a - b);
   return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)] ?? NaN;
@@ -211,6 +229,7 @@ async function main() {
     let worst = { p95: 0, name: "" };
     let homeKb = NaN;
     let packPageKb = 0;
+    let packPageUrl = "";
     for (const r of await routes()) {
       const cold: number[] = [];
       const warm: number[] = [];
@@ -219,7 +238,10 @@ async function main() {
         if (x.status >= 400) log(`bench:scale: ${u} answered ${x.status}`);
         cold.push(x.ms);
         if (r.name === "/") homeKb = x.bytes / 1024;
-        if (r.name === "/packs/<slug>") packPageKb = Math.max(packPageKb, x.bytes / 1024);
+        if (r.name === "/packs/<slug>" && x.bytes / 1024 > packPageKb) {
+          packPageKb = x.bytes / 1024;
+          packPageUrl = u;
+        }
       }
       for (const u of r.urls) warm.push((await timed(`http://127.0.0.1:${PORT_A}${u}`)).ms);
       const p95 = pct(cold, 95);
@@ -234,6 +256,8 @@ async function main() {
       });
       log(`bench:scale: ${r.name} measured`);
     }
+    // Where the largest pack page's bytes are: each section's share (headings as written on the page).
+    const sections = packPageUrl ? await sectionSizes(`http://127.0.0.1:${PORT_A}${packPageUrl}`) : [];
     const fresh = await crossInstanceFresh();
     const rss = rssMb(a.pid);
     console.log(
@@ -247,7 +271,8 @@ async function main() {
     console.table(rows);
     if (fresh.note) console.log(`cross-instance: ${fresh.note}`);
     console.log(
-      `largest pack page measured: ${packPageKb.toFixed(1)} KB of HTML (issue 15: ≤ 60 KB)\n` +
+      `largest pack page measured: ${packPageKb.toFixed(1)} KB of HTML (issue 15: ≤ 60 KB), ${packPageUrl}: ` +
+        `${sections.map((x) => `${x.name} ${x.kb.toFixed(1)}`).join(", ")} KB\n` +
         "targets: every public route p95 ≤ 100 ms (/api/v1/packs?q ≤ 50 ms), home HTML ≤ 60 KB, RSS ≤ 400 MB, " +
         `cross-instance fresh ≤ 2 s, whole bench ≤ 12 min (this run: ${((Date.now() - started) / 60_000).toFixed(1)} min)`,
     );

@@ -8,6 +8,7 @@ import { LabelPairNote } from "@/components/label-pair-note";
 import { Qty } from "@/components/quantity";
 import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmtC, labelSpec, packTitle } from "@/lib/format";
+import { PACK_PAGE_MAX_GROUPS } from "@/lib/bounded-lists";
 import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
 import { GroupFiguresTable } from "./_components/group-figures";
@@ -83,6 +84,8 @@ export default async function PackPage(props: Props) {
             labelledC={pack.labelledContinuousC}
             ratedMah={pack.ratedCapacityMah}
             cells={pack.cellsInSeries}
+            limit={PACK_PAGE_MAX_GROUPS}
+            fullHref={`/packs/${pack.slug}/groups`}
           />
         </StaticIsland>
       </section>

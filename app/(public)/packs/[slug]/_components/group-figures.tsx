@@ -2,19 +2,30 @@ import { SummaryValue } from "@/components/summary-value";
 import { LABEL_RATIO_LABELS, METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmt, fmtC, fmtLabelledC, RESISTANCE_25C_SOURCE } from "@/lib/format";
 import type { GroupFigures } from "@/lib/pack-summary";
+import { shownOf } from "@/lib/bounded-lists";
 
-/** Label vs measured, one row per like-for-like group: medians with n and spread. Groups are never pooled. */
+/**
+ * Label vs measured, one row per like-for-like group: medians with n and spread. Groups are never pooled. With
+ * `limit`, the groups with the most results (figuresByGroup's order) up to that many, and a note linking to `fullHref`
+ * where the rest are: a much-tested pack's page keeps its size.
+ */
 export function GroupFiguresTable({
-  groups,
+  groups: all,
   labelledC,
   ratedMah,
   cells,
+  limit,
+  fullHref,
 }: {
   groups: GroupFigures[];
   labelledC: number;
   ratedMah: number;
   cells: number;
+  limit?: number;
+  fullHref?: string;
 }) {
+  const groups = limit === undefined ? all : all.slice(0, limit);
+  const cut = shownOf(groups.length, all.length, "like-for-like group");
   if (groups.length === 0)
     return (
       <p className="muted">
@@ -28,6 +39,11 @@ export function GroupFiguresTable({
         are medians of its published results (n, and min–max underneath; from 6 results on, the median&apos;s 95 %
         interval instead, by order statistics: <a href="/methods#uncertainty-intervals">how</a>).
       </p>
+      {cut ? (
+        <p className="text-sm" data-testid="group-figures-cut">
+          {cut}, those with the most results. {fullHref ? <a href={fullHref}>All {all.length} groups →</a> : null}
+        </p>
+      ) : null}
       <div
         className="-mx-4 overflow-x-auto px-4"
         tabIndex={0}
