@@ -13,6 +13,9 @@ export const PACK_PAGE_MAX_RESULTS = 10;
 /** Like-for-like groups in a pack page's figures table, most results first; all of them at /packs/<slug>/groups. */
 export const PACK_PAGE_MAX_GROUPS = 6;
 
+/** Results drawn in a pack page's "results at different cycle counts" charts, newest first (the fit uses all). */
+export const PACK_PAGE_MAX_CYCLE_POINTS = 24;
+
 /** Points of a saved chart's label check (the chart builder, its views, embeds and images). */
 export const CHART_MAX_PACKS = 200;
 

@@ -1,6 +1,7 @@
 import { LineFigure } from "@/components/charts/line-figure";
 import { METHODS_ANCHORS, methodsHref } from "@/lib/figure-words";
 import { fmt } from "@/lib/format";
+import { PACK_PAGE_MAX_CYCLE_POINTS } from "@/lib/bounded-lists";
 import { Qty, UnitSymbol } from "@/components/quantity";
 import type { CycleSeries, OnePackSeries, PackAgeing } from "@/lib/pack-summary";
 
@@ -88,8 +89,8 @@ function OnePack({ s }: { s: OnePackSeries }) {
 const MIN_CYCLE_COUNTS_FOR_CHART = 3;
 
 /** The results of the series as a table, for a series of too few cycle counts to draw. */
-function AcrossResultsTable({ c, cells }: { c: CycleSeries; cells: number }) {
-  const rows = [...c.points].sort((a, b) => a.cycles - b.cycles || a.resultId - b.resultId);
+function AcrossResultsTable({ c, points, cells }: { c: CycleSeries; points: CycleSeries["points"]; cells: number }) {
+  const rows = [...points].sort((a, b) => a.cycles - b.cycles || a.resultId - b.resultId);
   return (
     <div className="-mx-4 overflow-x-auto px-4">
       <table className="figs" data-testid="ageing-across-table">
@@ -131,11 +132,14 @@ function AcrossResultsTable({ c, cells }: { c: CycleSeries; cells: number }) {
 
 /** Results at different cycle counts: separate tests, possibly of different packs — said plainly. */
 function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
-  const retained = c.points.flatMap((p) =>
+  // A much-tested pack draws its newest results only (the fit and the projection use every one, as said).
+  const drawnPoints = [...c.points].sort((a, b) => b.resultId - a.resultId).slice(0, PACK_PAGE_MAX_CYCLE_POINTS);
+  const cut = drawnPoints.length < c.points.length;
+  const retained = drawnPoints.flatMap((p) =>
     p.capacityMah === null ? [] : [{ x: p.cycles, y: pct(p.capacityMah / c.ratedCapacityMah) }],
   );
   const xs = c.points.map((p) => p.cycles);
-  const resistance = c.points.flatMap((p) =>
+  const resistance = drawnPoints.flatMap((p) =>
     p.dcResistanceMohm === null ? [] : [{ x: p.cycles, y: Math.round((p.dcResistanceMohm / cells) * 1000) / 1000 }],
   );
   const t = c.trend;
@@ -157,6 +161,13 @@ function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
         <span className="muted">
           {projectionWords(c.projection.cyclesTo80, c.projection.extrapolated, c.projection.projectionNote)}
         </span>
+        {cut ? (
+          <span data-testid="ageing-across-cut">
+            {" "}
+            The newest {drawnPoints.length} of {c.points.length} results are {drawn ? "drawn" : "listed"}; the fitted
+            line and the projection use all of them.
+          </span>
+        ) : null}
       </p>
       {drawn ? (
         <div className="grid gap-4 lg:grid-cols-2">
@@ -197,7 +208,7 @@ function AcrossResults({ c, cells }: { c: CycleSeries; cells: number }) {
           />
         </div>
       ) : (
-        <AcrossResultsTable c={c} cells={cells} />
+        <AcrossResultsTable c={c} points={drawnPoints} cells={cells} />
       )}
     </div>
   );
