@@ -3,6 +3,7 @@
 // active packs of active makers per group (migration 0013). A row in one and not the other, either way round, is a
 // stale summary.
 import { sql } from "drizzle-orm";
+import { Client } from "pg";
 import { db, type Executor } from "@/db";
 
 export type StaleRow = { side: string; pack_id: number | null; group_key: string | null; result_count: number };
@@ -57,4 +58,39 @@ export async function summaryOf(packId: number): Promise<{ resultCount: number |
     select group_key, result_count, sag_limited_n, sag_limited_max, label_ratio_median, capacity_ratio_median
     from pack_group_summaries where pack_id = ${packId} order by group_key`);
   return { resultCount: total.rows[0]?.result_count ?? null, groups: groups.rows };
+}
+
+/**
+ * Two approvals committed from two connections at once: A approves `firstId` and holds its transaction open while B
+ * approves `secondId`; once B is seen waiting on an advisory lock (or 5 s have passed), A commits, then B. Answers
+ * whether B waited, so a test shows the summaries' lock, not luck.
+ */
+export async function approveFromTwoConnections(firstId: number, secondId: number): Promise<{ secondWaited: boolean }> {
+  const a = new Client({ connectionString: process.env.DATABASE_URL });
+  const b = new Client({ connectionString: process.env.DATABASE_URL });
+  await a.connect();
+  await b.connect();
+  try {
+    const approveSql = "update results set status = 'approved', published_at = now() where id = $1";
+    await a.query("begin");
+    await a.query(approveSql, [firstId]);
+    await b.query("begin");
+    const bPid = (await b.query<{ pid: number }>("select pg_backend_pid() as pid")).rows[0]?.pid;
+    const bUpdate = b.query(approveSql, [secondId]);
+    let waiting = false;
+    for (let i = 0; i < 50 && !waiting; i++) {
+      const w = await db.execute<{ wait_event: string | null }>(
+        sql`select wait_event from pg_stat_activity where pid = ${bPid}`,
+      );
+      waiting = w.rows[0]?.wait_event === "advisory";
+      if (!waiting) await new Promise((r) => setTimeout(r, 100));
+    }
+    await a.query("commit");
+    await bUpdate;
+    await b.query("commit");
+    return { secondWaited: waiting };
+  } finally {
+    await a.end();
+    await b.end();
+  }
 }

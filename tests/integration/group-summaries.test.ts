@@ -4,14 +4,13 @@
 // group list (listPublicGroups) against counts made here from the results themselves.
 import { beforeAll, describe, expect, it } from "vitest";
 import { and, eq, sql } from "drizzle-orm";
-import { Client } from "pg";
 import { db } from "@/db";
 import { makers, packs, results } from "@/db/schema";
 import { listPublicGroups } from "@/db/queries/groups";
 import { groupKey } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult } from "../helpers/fixtures";
 import { createUser } from "../helpers/users";
-import { staleSummaries } from "../helpers/summaries";
+import { approveFromTwoConnections, staleSummaries } from "../helpers/summaries";
 
 const warm = { resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 12, ratedMah: 1500 };
 const G = groupKey({ ...warm, cyclesBeforeTest: 0 }).key;
@@ -125,34 +124,8 @@ describe("group_summaries follow every change that decides what a group counts",
     const r1 = await makeResult(p1, tester.id, { sagLimitedC: 41, status: "pending" });
     const r3 = await makeResult(p3, tester.id, { sagLimitedC: 42, status: "pending" });
     const before = (await listed())?.resultCount ?? 0;
-    const a = new Client({ connectionString: process.env.DATABASE_URL });
-    const b = new Client({ connectionString: process.env.DATABASE_URL });
-    await a.connect();
-    await b.connect();
-    try {
-      const approveSql = "update results set status = 'approved', published_at = now() where id = $1";
-      await a.query("begin");
-      await a.query(approveSql, [r1.id]);
-      await b.query("begin");
-      const bPid = (await b.query<{ pid: number }>("select pg_backend_pid() as pid")).rows[0]?.pid;
-      const bUpdate = b.query(approveSql, [r3.id]);
-      // Different packs, one group: B waits for A's group lock (checked, so the test shows the lock, not luck).
-      let waiting = false;
-      for (let i = 0; i < 50 && !waiting; i++) {
-        const w = await db.execute<{ wait_event: string | null }>(
-          sql`select wait_event from pg_stat_activity where pid = ${bPid}`,
-        );
-        waiting = w.rows[0]?.wait_event === "advisory";
-        if (!waiting) await new Promise((r) => setTimeout(r, 100));
-      }
-      expect(waiting).toBe(true);
-      await a.query("commit");
-      await bUpdate;
-      await b.query("commit");
-    } finally {
-      await a.end();
-      await b.end();
-    }
+    // Different packs, one group: B waits for A's group lock.
+    expect((await approveFromTwoConnections(r1.id, r3.id)).secondWaited).toBe(true);
     expect((await listed())?.resultCount).toBe(before + 2);
     await expectAgreement();
   });

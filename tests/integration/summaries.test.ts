@@ -8,7 +8,6 @@
 // cases are in group-summaries.test.ts).
 import { beforeAll, describe, expect, it } from "vitest";
 import { eq, inArray, sql } from "drizzle-orm";
-import { Client } from "pg";
 import { db } from "@/db";
 import { readerFlags, results, reviewEvents } from "@/db/schema";
 import { listPacksInGroup, listPublicGroups, rankMakersInGroup } from "@/db/queries/groups";
@@ -19,7 +18,7 @@ import { mergeMakerRows, mergePackRows, writePackLabel } from "@/db/mutations/ca
 import { groupKey } from "@/lib/analysis";
 import { emptyCatalogue, makeMaker, makePack, makeResult } from "../helpers/fixtures";
 import { createUser } from "../helpers/users";
-import { staleSummaries, summaryOf, summarySnapshot } from "../helpers/summaries";
+import { approveFromTwoConnections, staleSummaries, summaryOf, summarySnapshot } from "../helpers/summaries";
 
 const warm = { resistanceMethod: "dc-step", ambientC: 22, cutoffVPerCell: 3.3, loadCurrentA: 12, ratedMah: 1500 };
 const G = groupKey({ ...warm, cyclesBeforeTest: 0 }).key;
@@ -231,35 +230,8 @@ describe("summaries under transactions", () => {
     const r1 = await makeResult(p3, tester.id, { sagLimitedC: 41, status: "pending" });
     const r2 = await makeResult(p3, tester.id, { sagLimitedC: 42, status: "pending" });
     const before = (await summaryOf(p3.id)).resultCount ?? 0;
-    const url = process.env.DATABASE_URL;
-    const a = new Client({ connectionString: url });
-    const b = new Client({ connectionString: url });
-    await a.connect();
-    await b.connect();
-    try {
-      const approveSql = "update results set status = 'approved', published_at = now() where id = $1";
-      await a.query("begin");
-      await a.query(approveSql, [r1.id]);
-      await b.query("begin");
-      const bPid = (await b.query<{ pid: number }>("select pg_backend_pid() as pid")).rows[0]?.pid;
-      const bUpdate = b.query(approveSql, [r2.id]);
-      // B's trigger waits for A's per-pack advisory lock (checked, so the test shows the lock, not luck).
-      let waiting = false;
-      for (let i = 0; i < 50 && !waiting; i++) {
-        const w = await db.execute<{ wait_event: string | null }>(
-          sql`select wait_event from pg_stat_activity where pid = ${bPid}`,
-        );
-        waiting = w.rows[0]?.wait_event === "advisory";
-        if (!waiting) await new Promise((r) => setTimeout(r, 100));
-      }
-      expect(waiting).toBe(true);
-      await a.query("commit");
-      await bUpdate;
-      await b.query("commit");
-    } finally {
-      await a.end();
-      await b.end();
-    }
+    // B's trigger waits for A's per-pack advisory lock.
+    expect((await approveFromTwoConnections(r1.id, r2.id)).secondWaited).toBe(true);
     expect((await summaryOf(p3.id)).resultCount).toBe(before + 2);
     expect(await staleSummaries()).toEqual([]);
   });

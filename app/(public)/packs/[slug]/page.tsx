@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { z } from "zod";
+import { packDetailFor, type PackPageProps } from "./_components/pack-detail-for";
 import { LineFigure } from "@/components/charts/line-figure";
 import { StaticIsland } from "@/components/static-island";
 import { PackEmailsSlot } from "./_components/pack-emails-slot-client";
@@ -9,7 +9,6 @@ import { Qty } from "@/components/quantity";
 import { METHODS_ANCHORS, methodsHref, RATING_LABELS } from "@/lib/figure-words";
 import { fmtC, labelSpec, packTitle } from "@/lib/format";
 import { PACK_PAGE_MAX_GROUPS } from "@/lib/bounded-lists";
-import { cachedPackDetail } from "@/server/public-data";
 import { CyclesSection } from "./_components/cycles-section";
 import { GroupFiguresTable } from "./_components/group-figures";
 import { ResultsList } from "./_components/results-list";
@@ -20,12 +19,8 @@ export async function generateStaticParams() {
   return [];
 }
 
-const params = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
-type Props = { params: Promise<{ slug: string }> };
-
-export async function generateMetadata(props: Props): Promise<Metadata> {
-  const parsed = params.safeParse(await props.params);
-  const detail = parsed.success ? await cachedPackDetail(parsed.data.slug) : null;
+export async function generateMetadata(props: PackPageProps): Promise<Metadata> {
+  const detail = await packDetailFor(props);
   return detail
     ? {
         title: packTitle(detail.pack),
@@ -34,10 +29,8 @@ export async function generateMetadata(props: Props): Promise<Metadata> {
     : {};
 }
 
-export default async function PackPage(props: Props) {
-  const parsed = params.safeParse(await props.params);
-  if (!parsed.success) notFound();
-  const detail = await cachedPackDetail(parsed.data.slug);
+export default async function PackPage(props: PackPageProps) {
+  const detail = await packDetailFor(props);
   if (!detail) notFound();
   const { pack, groups, sustained, ageing, curves, results } = detail;
   const title = packTitle(pack);

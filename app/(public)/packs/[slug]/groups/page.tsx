@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { z } from "zod";
+import { packDetailFor, type PackPageProps } from "../_components/pack-detail-for";
 import { StaticIsland } from "@/components/static-island";
 import { packTitle } from "@/lib/format";
-import { cachedPackDetail } from "@/server/public-data";
 import { GroupFiguresTable } from "../_components/group-figures";
 
 // Every like-for-like group of one pack: the full table behind the pack page's figures, which shows the groups with
@@ -13,19 +12,13 @@ export async function generateStaticParams() {
   return [];
 }
 
-const params = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,120}$/) });
-type Props = { params: Promise<{ slug: string }> };
-
-export async function generateMetadata(props: Props): Promise<Metadata> {
-  const parsed = params.safeParse(await props.params);
-  const detail = parsed.success ? await cachedPackDetail(parsed.data.slug) : null;
+export async function generateMetadata(props: PackPageProps): Promise<Metadata> {
+  const detail = await packDetailFor(props);
   return detail ? { title: `${packTitle(detail.pack)}: every like-for-like group` } : {};
 }
 
-export default async function PackGroupsPage(props: Props) {
-  const parsed = params.safeParse(await props.params);
-  if (!parsed.success) notFound();
-  const detail = await cachedPackDetail(parsed.data.slug);
+export default async function PackGroupsPage(props: PackPageProps) {
+  const detail = await packDetailFor(props);
   if (!detail) notFound();
   const { pack, groups } = detail;
   return (
